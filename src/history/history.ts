@@ -1,0 +1,32 @@
+/**
+ * The in-memory history of one series: run descriptions oldest first, and one value column per
+ * metric aligned with them (NaN where a run lacks the metric). Columnar because the gate reads a
+ * metric's whole past at once, and because the stored document is columnar too (names once).
+ * This module is pure; reading and writing documents lives beside it (document.ts, stores).
+ */
+
+/** Who produced a run. `id` is the CI run id and attempt ("1234-1"), unique within a series. */
+export interface RunInfo {
+  id: string;
+  sha?: string;
+  ref?: string;
+  event?: string;
+  /** ISO-8601 time of the run. */
+  time?: string;
+}
+
+export interface MetricColumn {
+  unit?: string;
+  /** One entry per run in History.runs order; NaN where the run has no value. */
+  values: number[];
+}
+
+export interface History {
+  series: string;
+  runs: RunInfo[];
+  columns: Map<string, MetricColumn>;
+}
+
+export function emptyHistory(series: string): History {
+  return { series, runs: [], columns: new Map() };
+}

@@ -1,0 +1,43 @@
+import normal from '@stdlib/stats-base-dists-normal';
+import studentT from '@stdlib/stats-base-dists-t';
+
+/** Which tail counts: the upper (higher is worse), the lower, or both. */
+export type Side = 'upper' | 'lower' | 'both';
+
+/**
+ * Tail probability of a standard normal z: P(Z > z), P(Z < z) or P(|Z| > |z|).
+ * Uses the complementary CDF directly (no 1 - cdf cancellation in the far tail).
+ * @example normalTail(1.96, 'both') // ≈ 0.04999579
+ */
+export function normalTail(z: number, side: Side): number {
+  if (side === 'upper') return normal.cdf(-z, 0, 1);
+  if (side === 'lower') return normal.cdf(z, 0, 1);
+  return 2 * normal.cdf(-Math.abs(z), 0, 1);
+}
+
+/**
+ * Tail probability of a Student-t statistic with nu degrees of freedom, sides as normalTail.
+ * @example studentTail(2.228, 10, 'both') // ≈ 0.05 (standard t table, nu = 10)
+ */
+export function studentTail(t: number, nu: number, side: Side): number {
+  if (side === 'upper') return studentT.cdf(-t, nu);
+  if (side === 'lower') return studentT.cdf(t, nu);
+  return 2 * studentT.cdf(-Math.abs(t), nu);
+}
+
+/**
+ * How many sigma away the relative density of a Gaussian falls to `cutoff`: sqrt(-2 ln cutoff).
+ * @example cutoffSigma(0.01) // 3.0348542587702925
+ */
+export function cutoffSigma(cutoff: number): number {
+  return Math.sqrt(-2 * Math.log(cutoff));
+}
+
+/**
+ * The two-sided normal tail probability at the cutoff's sigma: the false-alarm level a cutoff
+ * stands for under a Gaussian (0.01 -> 3.03 sigma -> 0.0024). Family control uses it as alpha.
+ * @example cutoffLevel(0.01) // ≈ 0.002407
+ */
+export function cutoffLevel(cutoff: number): number {
+  return normalTail(cutoffSigma(cutoff), 'both');
+}
