@@ -25,6 +25,12 @@ export interface History {
   series: string;
   runs: RunInfo[];
   columns: Map<string, MetricColumn>;
+  /**
+   * Runs deleted on purpose by trimHistory since this history was loaded (in memory only, never
+   * stored). A store's save compares runs + trimmed with the runs it read, so a shrink that no
+   * trim explains is refused instead of losing data.
+   */
+  trimmed?: number;
 }
 
 export function emptyHistory(series: string): History {

@@ -1,0 +1,24 @@
+import type { RunInfo } from './history.js';
+import { parseIsoTime } from './iso-time.js';
+
+// Numeric collation puts run "999-1" before "1000-1", as CI run ids grow.
+const ids = new Intl.Collator('en', { numeric: true });
+
+/**
+ * The order of runs in a history: by time, then by id. A run without a readable time sorts
+ * before every timed run (it is treated as the oldest), so the order is total and the same in
+ * merge, append and import.
+ *
+ * @example [b, a].sort(compareRuns) // oldest first
+ */
+export function compareRuns(a: RunInfo, b: RunInfo): number {
+  const ta = timeKey(a);
+  const tb = timeKey(b);
+  if (ta !== tb) return ta < tb ? -1 : 1;
+  return ids.compare(a.id, b.id);
+}
+
+/** Milliseconds of a run's time, -Infinity when it has none or it cannot be read. */
+export function timeKey(run: RunInfo): number {
+  return run.time === undefined ? -Infinity : parseIsoTime(run.time) ?? -Infinity;
+}
