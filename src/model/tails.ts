@@ -1,5 +1,6 @@
 import normal from '@stdlib/stats-base-dists-normal';
 import studentT from '@stdlib/stats-base-dists-t';
+import { InputError } from './input-error.js';
 
 /** Which tail counts: the upper (higher is worse), the lower, or both. */
 export type Side = 'upper' | 'lower' | 'both';
@@ -10,6 +11,7 @@ export type Side = 'upper' | 'lower' | 'both';
  * @example normalTail(1.96, 'both') // ≈ 0.04999579
  */
 export function normalTail(z: number, side: Side): number {
+  if (Number.isNaN(z)) throw new InputError('a tail probability needs a number, got NaN');
   if (side === 'upper') return normal.cdf(-z, 0, 1);
   if (side === 'lower') return normal.cdf(z, 0, 1);
   return 2 * normal.cdf(-Math.abs(z), 0, 1);
@@ -20,16 +22,29 @@ export function normalTail(z: number, side: Side): number {
  * @example studentTail(2.228, 10, 'both') // ≈ 0.05 (standard t table, nu = 10)
  */
 export function studentTail(t: number, nu: number, side: Side): number {
+  if (Number.isNaN(t)) throw new InputError('a tail probability needs a number, got NaN');
+  if (!(nu > 0)) throw new InputError(`a Student-t needs degrees of freedom above 0, got ${nu}`);
   if (side === 'upper') return studentT.cdf(-t, nu);
   if (side === 'lower') return studentT.cdf(t, nu);
   return 2 * studentT.cdf(-Math.abs(t), nu);
 }
 
+/** A cutoff is a relative density: a number in (0, 1]. */
+function checkCutoff(cutoff: number): void {
+  if (!(cutoff > 0 && cutoff <= 1)) {
+    throw new InputError(`cutoff must be a number above 0 and at most 1, got ${cutoff}`, {
+      fix: 'use a relative density such as 0.01',
+    });
+  }
+}
+
 /**
  * How many sigma away the relative density of a Gaussian falls to `cutoff`: sqrt(-2 ln cutoff).
+ * Throws InputError unless 0 < cutoff <= 1.
  * @example cutoffSigma(0.01) // 3.0348542587702925
  */
 export function cutoffSigma(cutoff: number): number {
+  checkCutoff(cutoff);
   return Math.sqrt(-2 * Math.log(cutoff));
 }
 

@@ -1,0 +1,100 @@
+import { InputError } from './input-error.js';
+import { MAD_TO_SIGMA } from './fit.js';
+import { median, medianAbsoluteDeviation } from './median.js';
+
+/** Options of detectChangePoints. */
+export interface ChangePointOptions {
+  /** Cost of one more change, in units of the noise variance. Default 3 ln(n). */
+  penalty?: number;
+  /** Shortest segment allowed (runs). Default 5. */
+  minSegment?: number;
+}
+
+/**
+ * The noise sigma, estimated from successive differences so level shifts barely bias it:
+ * x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one difference only.
+ * Robust (1.4826 MAD / sqrt 2), falling back to the plain RMS of differences for quantised data.
+ */
+function noiseSigma(centred: Float64Array): number {
+  const diffs = new Float64Array(centred.length - 1);
+  for (let i = 1; i < centred.length; i++) diffs[i - 1] = centred[i]! - centred[i - 1]!;
+  const robust = (MAD_TO_SIGMA * medianAbsoluteDeviation(diffs)) / Math.SQRT2;
+  if (robust > 0) return robust;
+  let squares = 0;
+  for (const d of diffs) squares += d * d;
+  return Math.sqrt(squares / (2 * diffs.length));
+}
+
+/**
+ * Where the level of a series changes, by PELT (Killick, Fearnhead & Eckley 2012, "Optimal
+ * detection of changepoints with a linear computational cost"): the exact minimiser of
+ *   sum over segments of C(segment) + penalty x (number of changes),
+ * with C the Gaussian cost of a change in mean, C = sum (x - segment mean)^2 / sigma^2, sigma the
+ * noise level estimated once from successive differences. Only the mean is modelled: CI timings
+ * change spread briefly and often, and the gate refits the spread anyway; a level shift is what
+ * makes an old baseline wrong. The default penalty 3 ln(n) is 1.5 x the BIC charge of 2 ln(n)
+ * for a change's two parameters (where and the new mean), so pure noise rarely splits.
+ * Returns the indices where new segments start, ascending; empty when none (also for a
+ * constant series or fewer than 2 x minSegment values). Segment sums come from prefix sums of
+ * the median-centred values, so large offsets do not lose precision. Work: O(n) expected with
+ * pruning, O(n^2) worst case. Throws InputError on non-finite values or bad options.
+ *
+ * @example detectChangePoints([...Array(40).fill(100), ...Array(30).fill(110)].map((x, i) => x + (i % 2) * 0.5)) // [40]
+ */
+export function detectChangePoints(values: readonly number[], options: ChangePointOptions = {}): number[] {
+  const n = values.length;
+  const minSegment = options.minSegment ?? 5;
+  if (!Number.isInteger(minSegment) || minSegment < 1) {
+    throw new InputError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
+  }
+  const penalty = options.penalty ?? 3 * Math.log(Math.max(n, 2));
+  if (!(penalty >= 0) || !Number.isFinite(penalty)) {
+    throw new InputError(`penalty must be a finite number, 0 or more, got ${penalty}`);
+  }
+  if (n < 2 * minSegment) {
+    values.forEach((x, i) => {
+      if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${i + 1} is not a finite number`);
+    });
+    return [];
+  }
+  const centre = median(values);
+  const centred = Float64Array.from(values, (x) => x - centre);
+  const sigma = noiseSigma(centred);
+  if (!(sigma > 0)) return [];
+  const sum = new Float64Array(n + 1);
+  const sumSq = new Float64Array(n + 1);
+  for (let i = 0; i < n; i++) {
+    const z = centred[i]! / sigma;
+    sum[i + 1] = sum[i]! + z;
+    sumSq[i + 1] = sumSq[i]! + z * z;
+  }
+  const cost = (from: number, to: number): number => {
+    const s = sum[to]! - sum[from]!;
+    return Math.max(0, sumSq[to]! - sumSq[from]! - (s * s) / (to - from));
+  };
+  const best = new Float64Array(n + 1).fill(Infinity);
+  const previous = new Int32Array(n + 1);
+  best[0] = -penalty;
+  let candidates: number[] = [];
+  for (let end = minSegment; end <= n; end++) {
+    // The start that just became far enough back joins the candidates, if it can end a segment.
+    const fresh = end - minSegment;
+    if (fresh === 0 || fresh >= minSegment) candidates.push(fresh);
+    let bestValue = Infinity;
+    let bestStart = 0;
+    const totals = candidates.map((start) => best[start]! + cost(start, end) + penalty);
+    totals.forEach((total, k) => {
+      if (total < bestValue) {
+        bestValue = total;
+        bestStart = candidates[k]!;
+      }
+    });
+    best[end] = bestValue;
+    previous[end] = bestStart;
+    // PELT pruning: a start already worse by the penalty can never become optimal again.
+    candidates = candidates.filter((_, k) => totals[k]! - penalty <= bestValue);
+  }
+  const starts: number[] = [];
+  for (let at = previous[n]!; at > 0; at = previous[at]!) starts.push(at);
+  return starts.reverse();
+}
