@@ -1,0 +1,48 @@
+/**
+ * The GitHub REST calls the action makes, as one small interface: the artifact store's listing and
+ * download, and the issue comments of a pull request. The real implementation is octokit-api.ts;
+ * tests point it at a loopback server.
+ */
+import type { ArtifactApi } from '../history/artifact-store.js';
+
+export interface IssueComment {
+  id: number;
+  body: string;
+  /** Login of the author, e.g. github-actions[bot]. */
+  author?: string;
+}
+
+export interface GitHubApi extends ArtifactApi {
+  /** Every comment of the issue or pull request, oldest first (paginated, bounded). */
+  listIssueComments(issue: number): Promise<IssueComment[]>;
+  createIssueComment(issue: number, body: string): Promise<IssueComment>;
+  updateIssueComment(id: number, body: string): Promise<void>;
+}
+
+/** Knobs of the retries; tests use tiny intervals. Times in milliseconds. */
+export interface RetryTuning {
+  retries: number;
+  /** Multiplies plugin-retry's backoff steps (1, 4, 9 ... units) and Retry-After seconds. */
+  unitMs: number;
+}
+
+export const DEFAULT_RETRY: RetryTuning = { retries: 3, unitMs: 1000 };
+
+export interface ApiTarget {
+  token: string;
+  baseUrl: string;
+  owner: string;
+  repo: string;
+  retry?: RetryTuning;
+  /** Most pages read by any list call (100 items a page). */
+  maxPages?: number;
+  log?: (message: string) => void;
+}
+
+export type GitHubApiFactory = (target: ApiTarget) => GitHubApi;
+
+/** The HTTP status of an octokit RequestError (or similar), if any. */
+export function statusOf(error: unknown): number | undefined {
+  const s = (error as { status?: unknown } | null)?.status;
+  return typeof s === 'number' ? s : undefined;
+}

@@ -1,0 +1,140 @@
+/**
+ * The action's inputs: names that mirror action.yml, and one reader that validates them all up front
+ * so a typo fails the step at once with a message naming the input, before any file or API is touched.
+ */
+import { InputError } from '../model/input-error.js';
+
+/** Input names exactly as action.yml declares them. */
+export const INPUT = {
+  metrics: 'metrics',
+  config: 'config',
+  series: 'series',
+  store: 'store',
+  history: 'history',
+  baselineBranch: 'baseline-branch',
+  record: 'record',
+  block: 'block',
+  comment: 'comment',
+  acceptLabel: 'accept-label',
+  token: 'token',
+  retentionDays: 'retention-days',
+  inputFormat: 'input-format',
+  historyFailure: 'history-failure',
+  htmlReport: 'html-report',
+} as const;
+
+/** Output names exactly as action.yml declares them. */
+export const OUTPUT = { verdict: 'verdict', regressed: 'regressed', report: 'report' } as const;
+
+export const DEFAULT_CONFIG_PATH = '.github/bellgate.yml';
+export const DEFAULT_HISTORY = 'bellgate-history';
+export const DEFAULT_ACCEPT_LABEL = 'bellgate:accept';
+
+export type StoreKind = 'artifact' | 'branch' | 'file';
+export type Mode = 'auto' | 'always' | 'never';
+
+export interface ActionInputs {
+  metrics: string[];
+  /** Undefined when the default path is meant (a missing default file means default settings). */
+  config?: string;
+  series?: string;
+  store: StoreKind;
+  history: string;
+  baselineBranch?: string;
+  record: Mode;
+  block: boolean;
+  comment: Mode;
+  acceptLabel: string;
+  token: string;
+  retentionDays: number;
+  inputFormat?: string;
+  /** What an unreachable history does: `warn` goes on as learning, `fail` fails the step. */
+  historyFailure: 'warn' | 'fail';
+  htmlReport: boolean;
+}
+
+/**
+ * The runner passes input `retention-days` as INPUT_RETENTION-DAYS: upper-cased, spaces to
+ * underscores, hyphens kept (the same rule @actions/core's getInput applies).
+ */
+export function inputVariable(name: string): string {
+  return `INPUT_${name.replace(/ /g, '_').toUpperCase()}`;
+}
+
+function choice<T extends string>(name: string, raw: string, allowed: readonly T[], fallback: T): T {
+  if (raw === '') return fallback;
+  const v = raw.toLowerCase() as T;
+  if (allowed.includes(v)) return v;
+  throw new InputError(`input \`${name}\` is "${raw}", expected one of ${allowed.join(', ')}`, {
+    where: `input ${name}`,
+    fix: `set \`${name}: ${fallback}\` (or another of ${allowed.join(' | ')}) in the workflow step's \`with:\``,
+  });
+}
+
+function flag(name: string, raw: string, fallback: boolean): boolean {
+  if (raw === '') return fallback;
+  // YAML 1.2 core schema booleans, as @actions/core's getBooleanInput accepts them.
+  if (['true', 'True', 'TRUE'].includes(raw)) return true;
+  if (['false', 'False', 'FALSE'].includes(raw)) return false;
+  throw new InputError(`input \`${name}\` is "${raw}", expected true or false`, {
+    where: `input ${name}`,
+    fix: `write \`${name}: true\` or \`${name}: false\``,
+  });
+}
+
+/**
+ * Reads and validates every input from the environment the runner prepared.
+ * @throws InputError naming the input and how to fix it.
+ * @example readActionInputs({ 'INPUT_METRICS': 'out/bench.json' }).store // 'artifact'
+ */
+export function readActionInputs(env: Record<string, string | undefined>): ActionInputs {
+  const get = (name: string): string => (env[inputVariable(name)] ?? '').trim();
+  const metrics = get(INPUT.metrics)
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter((l) => l !== '' && !l.startsWith('#'));
+  if (metrics.length === 0) {
+    throw new InputError('input `metrics` is empty: there are no metric files to check', {
+      where: `input ${INPUT.metrics}`,
+      fix: 'list the metric files or globs, one a line, e.g. `metrics: out/bench/*.json`',
+    });
+  }
+  const days = get(INPUT.retentionDays);
+  const retentionDays = days === '' ? 90 : Number(days);
+  if (!Number.isInteger(retentionDays) || retentionDays < 1 || retentionDays > 400) {
+    throw new InputError(`input \`retention-days\` is "${days}", expected a whole number of days from 1 to 400`, {
+      where: `input ${INPUT.retentionDays}`,
+      fix: 'write e.g. `retention-days: 90` (the repository setting may lower it further)',
+    });
+  }
+  const history = get(INPUT.history) || DEFAULT_HISTORY;
+  const store = choice(INPUT.store, get(INPUT.store), ['artifact', 'branch', 'file'] as const, 'artifact');
+  // The artifact service refuses these characters in names (@actions/artifact's name validation).
+  if (store === 'artifact' && /["\\/:<>|*?\r\n]/.test(history)) {
+    throw new InputError(`input \`history\` is "${history}", which cannot be an artifact name`, {
+      where: `input ${INPUT.history}`,
+      fix: 'use letters, digits, dots, dashes and underscores only, e.g. `history: bellgate-history`',
+    });
+  }
+  const config = get(INPUT.config);
+  const series = get(INPUT.series);
+  const baselineBranch = get(INPUT.baselineBranch);
+  const inputFormat = get(INPUT.inputFormat);
+  return {
+    metrics,
+    config: config === '' || config === DEFAULT_CONFIG_PATH ? undefined : config,
+    series: series === '' ? undefined : series,
+    store,
+    history,
+    baselineBranch: baselineBranch === '' ? undefined : baselineBranch.replace(/^refs\/heads\//, ''),
+    record: choice(INPUT.record, get(INPUT.record), ['auto', 'always', 'never'] as const, 'auto'),
+    block: flag(INPUT.block, get(INPUT.block), true),
+    comment: choice(INPUT.comment, get(INPUT.comment), ['auto', 'always', 'never'] as const, 'auto'),
+    acceptLabel: get(INPUT.acceptLabel) || DEFAULT_ACCEPT_LABEL,
+    token: get(INPUT.token),
+    retentionDays,
+    inputFormat: inputFormat === '' ? undefined : inputFormat,
+    historyFailure: choice(INPUT.historyFailure, get(INPUT.historyFailure), ['warn', 'fail'] as const, 'warn'),
+    htmlReport: flag(INPUT.htmlReport, get(INPUT.htmlReport), false),
+  };
+}

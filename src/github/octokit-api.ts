@@ -1,0 +1,106 @@
+/**
+ * The real GitHubApi over octokit (@actions/github's client, which honours the runner's proxy),
+ * with @octokit/plugin-retry (5xx, 429 and network errors, growing backoff) and
+ * @octokit/plugin-throttling (rate-limit answers, honouring Retry-After). Intervals are tunable so
+ * tests can run the same code with millisecond waits.
+ */
+import { getOctokit } from '@actions/github';
+import { retry } from '@octokit/plugin-retry';
+import { throttling } from '@octokit/plugin-throttling';
+import type { ArtifactEntry } from '../history/artifact-store.js';
+import { DEFAULT_RETRY, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
+import { fetchCapped, readCapped } from './fetch-capped.js';
+
+const PER_PAGE = 100;
+
+type Json = Record<string, unknown>;
+const obj = (v: unknown): Json => (typeof v === 'object' && v !== null ? (v as Json) : {});
+const num = (v: unknown): number | undefined => (typeof v === 'number' ? v : undefined);
+
+function toArtifact(raw: unknown): ArtifactEntry {
+  const a = obj(raw);
+  const run = obj(a.workflow_run);
+  return {
+    id: Number(a.id),
+    name: String(a.name ?? ''),
+    expired: a.expired === true,
+    createdAt: String(a.created_at ?? ''),
+    sizeInBytes: num(a.size_in_bytes) ?? 0,
+    headBranch: typeof run.head_branch === 'string' ? run.head_branch : undefined,
+    headRepositoryId: num(run.head_repository_id),
+    repositoryId: num(run.repository_id),
+  };
+}
+
+function toComment(raw: unknown): IssueComment {
+  const c = obj(raw);
+  const login = obj(c.user).login;
+  return { id: Number(c.id), body: String(c.body ?? ''), author: typeof login === 'string' ? login : undefined };
+}
+
+/**
+ * Creates the API client for one repository.
+ * @example createOctokitApi({ token, baseUrl: 'https://api.github.com', owner: 'acme', repo: 'router' })
+ */
+export function createOctokitApi(target: ApiTarget): GitHubApi {
+  const tuning = target.retry ?? DEFAULT_RETRY;
+  const maxPages = target.maxPages ?? 10;
+  const log = target.log ?? (() => undefined);
+  const retryLimit = (after: number, options: { method?: string; url?: string }, _o: unknown, count: number): boolean => {
+    log(`GitHub API asked to wait ${after} s before ${options.method ?? ''} ${options.url ?? ''} (retry ${count + 1} of ${tuning.retries})`);
+    return count < tuning.retries;
+  };
+  const octokit = getOctokit(
+    target.token,
+    {
+      baseUrl: target.baseUrl.replace(/\/+$/, ''),
+      retry: { retries: tuning.retries, retryAfterBaseValue: tuning.unitMs },
+      throttle: { onRateLimit: retryLimit, onSecondaryRateLimit: retryLimit, retryAfterBaseValue: tuning.unitMs },
+      log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
+    },
+    retry,
+    throttling,
+  );
+  const repo = { owner: target.owner, repo: target.repo };
+
+  async function pages<T>(route: string, params: Json, pick: (data: unknown) => unknown[], map: (raw: unknown) => T): Promise<T[]> {
+    const out: T[] = [];
+    for (let page = 1; page <= maxPages; page++) {
+      const res = await octokit.request(route, { ...repo, ...params, per_page: PER_PAGE, page });
+      const items = pick(res.data);
+      out.push(...items.map(map));
+      if (items.length < PER_PAGE) break;
+    }
+    return out;
+  }
+
+  return {
+    listArtifacts: (name) =>
+      pages('GET /repos/{owner}/{repo}/actions/artifacts', { name }, (d) => (Array.isArray(obj(d).artifacts) ? (obj(d).artifacts as unknown[]) : []), toArtifact),
+    async downloadArtifact(id, maxBytes) {
+      // The API answers 302 with a short-lived storage URL; following it by hand keeps the token
+      // off the storage request and lets the download stop at the size cap.
+      const res = await octokit.request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
+        ...repo,
+        artifact_id: id,
+        archive_format: 'zip',
+        request: { redirect: 'manual', parseSuccessResponseBody: false },
+      });
+      const location = (res.headers as Record<string, string | undefined>).location;
+      if (res.status >= 300 && res.status < 400 && location) return fetchCapped(location, maxBytes, tuning);
+      if ((res.status as number) === 200 && res.data && typeof (res.data as ReadableStream).getReader === 'function') {
+        return readCapped(res.data as ReadableStream<Uint8Array>, maxBytes);
+      }
+      throw new Error(`download of artifact #${id} answered ${res.status} without a location`);
+    },
+    listIssueComments: (issue) =>
+      pages('GET /repos/{owner}/{repo}/issues/{issue_number}/comments', { issue_number: issue }, (d) => (Array.isArray(d) ? d : []), toComment),
+    async createIssueComment(issue, body) {
+      const res = await octokit.request('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', { ...repo, issue_number: issue, body });
+      return toComment(res.data);
+    },
+    async updateIssueComment(id, body) {
+      await octokit.request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
+    },
+  };
+}

@@ -1,0 +1,32 @@
+/**
+ * The real collaborators of runAction: the runner's environment, @actions/core as the sink, the
+ * file system, the clock, octokit, and the lazily loaded artifact uploader.
+ */
+import * as core from '@actions/core';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import { dirname } from 'node:path';
+import { createArtifactUploader } from '../history/artifact-upload.js';
+import { createOctokitApi } from './octokit-api.js';
+import type { ActionDeps } from './run-action.js';
+import { createCoreSink } from './sink.js';
+
+/**
+ * @example await runAction(createRealDeps(process.env))
+ */
+export function createRealDeps(env: Record<string, string | undefined> = process.env): ActionDeps {
+  return {
+    env,
+    cwd: env.GITHUB_WORKSPACE || process.cwd(),
+    sink: createCoreSink(core),
+    readText: (path) => readFile(path, 'utf8'),
+    writeText: async (path, text) => {
+      await mkdir(dirname(path), { recursive: true });
+      await writeFile(path, text, 'utf8');
+    },
+    now: () => new Date(),
+    createApi: createOctokitApi,
+    upload: createArtifactUploader(env.RUNNER_TEMP || process.cwd()),
+    // BELLGATE_RETRY_UNIT_MS shortens API backoff for the end-to-end tests; the runner never sets it.
+    ...(env.BELLGATE_RETRY_UNIT_MS ? { retry: { retries: 3, unitMs: Math.max(1, Number(env.BELLGATE_RETRY_UNIT_MS) || 1000) } } : {}),
+  };
+}
