@@ -1,0 +1,44 @@
+import type { Status, Verdict } from '../gate/report.js';
+
+/**
+ * Order in which statuses are shown: what needs attention first. Also the default sort of every
+ * table, so a reviewer sees regressions without scrolling.
+ */
+export const STATUS_ORDER: readonly Status[] = ['regressed', 'improved', 'missing', 'ok', 'learning', 'new', 'ignored'];
+
+/** Rank of a status in STATUS_ORDER (unknown statuses last). */
+export function statusRank(s: Status): number {
+  const i = STATUS_ORDER.indexOf(s);
+  return i < 0 ? STATUS_ORDER.length : i;
+}
+
+/**
+ * A shape per status, so colour is never the only carrier (WCAG 1.4.1): triangles point the way the
+ * metric moved against its baseline, a hollow circle for still learning.
+ */
+export const STATUS_GLYPH: Readonly<Record<Status, string>> = {
+  regressed: '▲',
+  improved: '▼',
+  missing: '✕',
+  ok: '●',
+  learning: '◌',
+  new: '✚',
+  ignored: '–',
+};
+
+/** One line per verdict, the headline of every report. */
+export const VERDICT_HEADLINE: Readonly<Record<Verdict, string>> = {
+  pass: 'pass — no metric regressed',
+  regressed: 'regressed — at least one metric fell in the improbable tail on its worse side',
+  learning: 'learning — no metric has enough baseline runs yet',
+  accepted: 'accepted — regressions found, accepted by label',
+};
+
+/** Count of metrics per status, in STATUS_ORDER, omitting zeros. @example "2 regressed, 40 ok" */
+export function statusCounts(statuses: Iterable<Status>): string {
+  const counts = new Map<Status, number>();
+  for (const s of statuses) counts.set(s, (counts.get(s) ?? 0) + 1);
+  return STATUS_ORDER.filter((s) => counts.has(s))
+    .map((s) => `${counts.get(s)} ${s}`)
+    .join(', ');
+}
