@@ -1,0 +1,71 @@
+import { runGate } from '../gate/gate.js';
+import type { Report } from '../gate/report.js';
+import { renderJson } from '../report/json.js';
+import { renderMarkdown } from '../report/markdown.js';
+import { renderText } from '../report/text.js';
+import { InputError } from '../model/input-error.js';
+import type { CommandContext } from './context.js';
+import { EXIT } from './exit-codes.js';
+import { loadConfig } from './load-config.js';
+import { loadRun, type MetricFileOptions } from './load-run.js';
+import { openHistory } from './open-history.js';
+import { resolvePath } from './paths.js';
+import { recordRun } from './record-run.js';
+import { runInfoFrom, type RunInfoOptions } from './run-info.js';
+import { writeReports } from './write-reports.js';
+
+export type ReportFormat = 'text' | 'markdown' | 'json';
+export const REPORT_FORMATS: readonly ReportFormat[] = ['text', 'markdown', 'json'];
+
+/** Everything `bellgate check` (and the demo) can be asked to do. */
+export interface CheckOptions extends MetricFileOptions, RunInfoOptions {
+  history?: string;
+  config?: string;
+  series: string;
+  format: ReportFormat;
+  out?: string;
+  record?: boolean;
+}
+
+/**
+ * read -> load -> (gate: select, fit, score, decide) -> render -> record. Prints the report in the
+ * chosen format on stdout (JSON: nothing else on stdout; notes go to stderr), writes `--out` files,
+ * records the run when asked, and returns the report. The caller turns the verdict into the exit code.
+ * @throws InputError (bad files, flags), StoreError (history unreadable or unwritable).
+ */
+export async function performCheck(ctx: CommandContext, options: CheckOptions): Promise<Report> {
+  if (options.record && options.history === undefined) {
+    throw new InputError('--record needs --history FILE', { where: '--record', fix: 'name the history file to append this run to' });
+  }
+  const config = await loadConfig(ctx, options.config);
+  const run = await loadRun(ctx, config, options);
+  const { history, store } = await openHistory(ctx, options.history, options.series);
+  const report = runGate({ config, history, run, series: options.series });
+
+  ctx.io.stdout(ensureNewline(render(ctx, report, options.format)));
+  if (options.out !== undefined) {
+    const written = await writeReports(resolvePath(ctx, options.out), report);
+    ctx.io.stderr(`bellgate: wrote ${written.join(', ')}\n`);
+  }
+  if (options.record && store) {
+    const info = runInfoFrom(ctx, options);
+    const saved = await recordRun(store, history, info, run, config.keep);
+    ctx.io.stderr(`bellgate: recorded run ${info.id} in ${store.describe()} (${saved.runs.length} runs)\n`);
+  }
+  return report;
+}
+
+/** The exit code a verdict stands for: only `regressed` fails (accepted, learning and pass do not). */
+export function verdictExitCode(report: Report): number {
+  return report.verdict === 'regressed' ? EXIT.regressed : EXIT.ok;
+}
+
+function render(ctx: CommandContext, report: Report, format: ReportFormat): string {
+  if (format === 'json') return renderJson(report);
+  if (format === 'markdown') return renderMarkdown(report, {});
+  return renderText(report, { color: ctx.color });
+}
+
+function ensureNewline(s: string): string {
+  return s.endsWith('\n') ? s : `${s}\n`;
+}
