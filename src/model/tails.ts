@@ -45,7 +45,7 @@ function checkCutoff(cutoff: number): void {
  */
 export function cutoffSigma(cutoff: number): number {
   checkCutoff(cutoff);
-  return Math.sqrt(-2 * Math.log(cutoff));
+  return Math.sqrt(Math.max(0, -2 * Math.log(cutoff)));
 }
 
 /**
