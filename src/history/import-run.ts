@@ -1,0 +1,61 @@
+import type { RunInfo } from './history.js';
+import { normalizeIsoTime } from './iso-time.js';
+
+/** One past run to import: who produced it and its metric values (finite numbers only). */
+export interface ImportedRun {
+  info: RunInfo;
+  metrics: Map<string, number>;
+  units: Map<string, string>;
+}
+
+/** A line, row or value left out of an import, and why. `where` is "file:line". */
+export interface SkippedEntry {
+  where: string;
+  reason: string;
+}
+
+export interface ImportParse {
+  runs: ImportedRun[];
+  skipped: SkippedEntry[];
+}
+
+/**
+ * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
+ * an id is required (a string, or a whole number such as a CI run id); a time is required and
+ * must be ISO-8601 (stored normalised to UTC, since import order is time order); sha, ref and
+ * event are optional strings. Returns the reason as a string when the run must be skipped.
+ *
+ * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
+ */
+export function runInfoFrom(fields: { id?: unknown; time?: unknown; sha?: unknown; ref?: unknown; event?: unknown }): RunInfo | string {
+  const { id, time } = fields;
+  let runId: string;
+  if (typeof id === 'string' && id.trim() !== '') runId = id.trim();
+  else if (typeof id === 'number' && Number.isSafeInteger(id)) runId = String(id);
+  else return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
+  if (time === undefined || time === null || time === '') return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
+  const iso = typeof time === 'string' ? normalizeIsoTime(time) : undefined;
+  if (iso === undefined) return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
+  const info: RunInfo = { id: runId, time: iso };
+  for (const field of ['sha', 'ref', 'event'] as const) {
+    const text = fields[field];
+    if (text === undefined || text === null || text === '') continue;
+    if (typeof text !== 'string') return `run ${JSON.stringify(runId)}: ${field} must be a string`;
+    info[field] = text;
+  }
+  return info;
+}
+
+/**
+ * Reads one metric value: a finite JSON number, or (from CSV) decimal text. Returns the reason
+ * when it is not one — "NaN", "Infinity", 1e999, hex and empty text are all refused.
+ *
+ * @example valueFrom('1.5e3') // 1500
+ */
+export function valueFrom(raw: unknown): number | string {
+  let v: number;
+  if (typeof raw === 'number') v = raw;
+  else if (typeof raw === 'string' && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim())) v = Number(raw.trim());
+  else return `value ${JSON.stringify(raw) ?? String(raw)} is not a number`;
+  return Number.isFinite(v) ? v : `value ${String(raw)} is not a finite number`;
+}
