@@ -67,6 +67,12 @@ export interface GroupResult {
   /** The common move of all members (mean of standardised values), judged against its own history. */
   common: { z: number; tail: number; status: 'ok' | 'regressed' | 'improved' };
   shrinkage: number;
+  /** Tail of the Mahalanobis distance alone (Hotelling's T^2), one part of `tail`. */
+  distanceTail?: number;
+  /** Bonferroni tail of the largest own move alone, the other part of `tail`. */
+  ownTail?: number;
+  /** `tail` after family control, when `family` is not none. */
+  adjusted?: number;
   reason: string;
 }
 

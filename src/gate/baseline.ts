@@ -1,0 +1,89 @@
+import type { MetricSettings } from '../config/types.js';
+import type { History } from '../history/history.js';
+import { detectChangePoints } from '../model/change-points.js';
+import { InputError } from '../model/input-error.js';
+import { toFitScale } from '../model/transform.js';
+
+/** The baseline of one metric: the values the fit will see, oldest first, and the runs behind them. */
+export interface SelectedBaseline {
+  /** Values on the fit scale (after relative-to and the transform). */
+  values: number[];
+  /** Id of the run behind each value, aligned with `values`. */
+  runIds: string[];
+  /** Set when change-point detection shortened the baseline: the first run used. */
+  since?: string;
+  /** Set when the values are ratios to this metric of the same run. */
+  relativeTo?: string;
+  /** Runs of the history that hold this metric at all (before pairing and windowing). */
+  available: number;
+}
+
+/**
+ * Selects a metric's baseline from the history (DESIGN.md "Statistics"):
+ * 1. the runs that hold the metric (with `relative-to`: that also hold a non-zero reference, and
+ *    the value becomes metric / reference of the same run, cancelling a runner's common speed);
+ * 2. the newest `window` of them, moved to the fit scale (`transform`);
+ * 3. with `change-points` on, PELT-style segmentation of that window (detectChangePoints); when the
+ *    last segment already spans `min-runs` runs, only it is kept, so a merged level change stops
+ *    counting as a regression once the new level has enough history.
+ * O(runs) plus the change-point search. Throws InputError when a value cannot take the transform.
+ * @example selectBaseline(history, 'build/time', settings).values // [412.5, 409.9, ...]
+ */
+export function selectBaseline(history: History, name: string, settings: MetricSettings): SelectedBaseline {
+  const column = history.columns.get(name);
+  const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
+  const values: number[] = [];
+  const runIds: string[] = [];
+  let available = 0;
+  if (column !== undefined) {
+    const count = Math.min(column.values.length, history.runs.length);
+    for (let i = 0; i < count; i++) {
+      let x = column.values[i]!;
+      if (!Number.isFinite(x)) continue;
+      available++;
+      if (settings.relativeTo !== undefined) {
+        const r = reference?.values[i];
+        if (r === undefined || !Number.isFinite(r) || r === 0) continue;
+        x /= r;
+      }
+      const id = history.runs[i]!.id;
+      values.push(toHistoryFitScale(x, settings, name, id));
+      runIds.push(id);
+    }
+  }
+  const start = Math.max(0, values.length - settings.window);
+  const selected: SelectedBaseline = {
+    values: values.slice(start),
+    runIds: runIds.slice(start),
+    available,
+  };
+  if (settings.relativeTo !== undefined) selected.relativeTo = settings.relativeTo;
+  return settings.changePoints ? sinceLastChange(selected, settings.minRuns) : selected;
+}
+
+/** Keeps only the runs after the last level change, once they are at least `minRuns`. */
+function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedBaseline {
+  if (baseline.values.length < 2 * Math.max(minRuns, 1)) return baseline;
+  const starts = detectChangePoints(baseline.values, { minSegment: Math.max(minRuns, 2) });
+  const last = starts.filter((s) => s > 0 && s < baseline.values.length).at(-1);
+  if (last === undefined || baseline.values.length - last < minRuns) return baseline;
+  return {
+    ...baseline,
+    values: baseline.values.slice(last),
+    runIds: baseline.runIds.slice(last),
+    since: baseline.runIds[last]!,
+  };
+}
+
+function toHistoryFitScale(x: number, settings: MetricSettings, name: string, runId: string): number {
+  try {
+    return toFitScale(x, settings.transform, name);
+  } catch (error) {
+    if (!(error instanceof InputError)) throw error;
+    throw new InputError(`history run ${runId} has value ${x} for ${name}, which cannot be log-transformed`, {
+      where: name,
+      fix: 'use `transform: none` for this metric, or remove the bad run from the history',
+      cause: error,
+    });
+  }
+}
