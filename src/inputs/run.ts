@@ -31,4 +31,6 @@ export interface Measurement {
 export interface Run {
   metrics: Map<string, Measurement>;
   meta: Map<string, string>;
+  /** Names recorded but never fitted (skipped or failed tests), name -> reason; from collectRun. */
+  notFitted?: Map<string, string>;
 }

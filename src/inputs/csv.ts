@@ -1,0 +1,92 @@
+import { parse } from 'csv-parse/sync';
+import type { InputLimits } from '../config/types.js';
+import { InputError } from '../model/input-error.js';
+import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { parseDecimal } from './numbers.js';
+import { ReadingSink } from './reading-sink.js';
+import type { ReadResult } from './run.js';
+
+type Row = { record: string[]; info: { lines: number } };
+
+/**
+ * Reads CSV (RFC 4180 quoting, comma-separated, first row a header) in one of two layouts:
+ * - long form: the header is `name,value` or `name,value,unit` (any order, case-insensitive);
+ *   each row is one sample; a name on several rows is several samples;
+ * - wide form: any other header; each column is one metric and each row one sample of every
+ *   metric. A unit may follow a column name in square brackets: `build time [s]` is metric
+ *   "build time" in unit "s". An empty cell is a sample not taken.
+ * Whitespace around unquoted cells is ignored; quoted cells are kept as written.
+ * @throws InputError naming file:line and the column for malformed CSV, non-numbers, empty names.
+ * @example readCsvMetrics('name,value,unit\na,1,ms\n', 'm.csv').readings[0] // { name: 'a', value: 1, unit: 'ms', where: 'm.csv:2' }
+ */
+export function readCsvMetrics(text: string, file: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
+  checkLineLengths(text, file, limits);
+  const rows = parseRows(text, file);
+  const header = rows[0];
+  if (!header) throw new InputError('the CSV file has no header row', { where: file, fix: 'start the file with a header such as name,value,unit' });
+  const sink = new ReadingSink(file, limits);
+  const columns = header.record.map((cell) => cell.toLowerCase());
+  const isLong =
+    columns.includes('name') && columns.includes('value') && columns.every((c) => c === 'name' || c === 'value' || c === 'unit');
+  if (isLong) readLong(rows, columns, file, sink);
+  else readWide(rows, file, sink);
+  return sink.result;
+}
+
+function readLong(rows: Row[], columns: string[], file: string, sink: ReadingSink): void {
+  if (new Set(columns).size !== columns.length) {
+    throw new InputError(`the CSV header repeats a column: ${columns.join(',')}`, { where: `${file}:1`, fix: 'name each column once' });
+  }
+  const nameAt = columns.indexOf('name');
+  const valueAt = columns.indexOf('value');
+  const unitAt = columns.indexOf('unit');
+  for (const { record, info } of rows.slice(1)) {
+    const where = `${file}:${info.lines}`;
+    const name = record[nameAt] ?? '';
+    const value = parseDecimal(record[valueAt] ?? '', where, `value of ${JSON.stringify(name)}`);
+    sink.add(name, value, unitAt < 0 ? undefined : record[unitAt], where);
+  }
+}
+
+const BRACKET_UNIT = /^(.*?)\s*\[([^[\]]*)\]$/s;
+
+function readWide(rows: Row[], file: string, sink: ReadingSink): void {
+  const headerWhere = `${file}:1`;
+  const metrics = rows[0]!.record.map((cell) => {
+    const m = BRACKET_UNIT.exec(cell);
+    return m ? { name: m[1]!, unit: m[2]!.trim() } : { name: cell, unit: undefined };
+  });
+  const seen = new Set<string>();
+  for (const [i, { name }] of metrics.entries()) {
+    if (seen.has(name)) {
+      throw new InputError(`the CSV header names metric ${JSON.stringify(name)} twice (column ${i + 1})`, {
+        where: headerWhere,
+        fix: 'give each metric one column; put repeated measurements in more rows',
+      });
+    }
+    seen.add(name);
+  }
+  for (const { record, info } of rows.slice(1)) {
+    const where = `${file}:${info.lines}`;
+    record.forEach((cell, i) => {
+      if (cell === '') return;
+      const { name, unit } = metrics[i]!;
+      sink.add(name, parseDecimal(cell, `${where}:${i + 1}`, `value of ${JSON.stringify(name)} (column ${i + 1})`), unit, where);
+    });
+  }
+  // A header with no data rows still names metrics; check them so a bad name is not accepted silently.
+  if (rows.length === 1) metrics.forEach(({ name }) => sink.skip(name, 'no samples in the CSV file', headerWhere));
+}
+
+function parseRows(text: string, file: string): Row[] {
+  try {
+    return parse(text, { trim: true, skip_empty_lines: true, info: true, bom: true }) as unknown as Row[];
+  } catch (error) {
+    const e = error as { message?: string; lines?: number; code?: string };
+    throw new InputError(`malformed CSV: ${e.message ?? String(error)}`, {
+      where: typeof e.lines === 'number' ? `${file}:${e.lines}` : file,
+      fix: 'give every row as many cells as the header and close every quoted cell',
+      cause: error,
+    });
+  }
+}

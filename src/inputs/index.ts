@@ -1,0 +1,18 @@
+export type { Reading, ReadResult, Measurement, Run } from './run.js';
+export { parseMetricText } from './parse.js';
+export { readMetricFiles, type ReadFilesOptions } from './read-files.js';
+export { collectRun } from './collect.js';
+export { aggregateSamples } from './aggregate.js';
+export { detectFormat } from './detect.js';
+export { METRIC_FORMATS, metricFormat, type MetricFormat } from './formats.js';
+export { checkMetricName, MAX_NAME_LENGTH } from './names.js';
+export { DEFAULT_LIMITS, LIMIT_KEYS } from './limits.js';
+export { convertUnit, unitScale } from './units.js';
+export { splitPattern } from './pattern.js';
+export { foldLabels } from './openmetrics-labels.js';
+export { readJsonMetrics } from './json.js';
+export { readJsonLines } from './jsonl.js';
+export { readCsvMetrics } from './csv.js';
+export { readOpenMetrics } from './openmetrics.js';
+export { readGoBench } from './gobench.js';
+export { readJunit } from './junit.js';

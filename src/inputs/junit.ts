@@ -1,0 +1,116 @@
+import { XMLParser, XMLValidator } from 'fast-xml-parser';
+import type { InputLimits } from '../config/types.js';
+import { InputError } from '../model/input-error.js';
+import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { parseDecimal } from './numbers.js';
+import { ReadingSink } from './reading-sink.js';
+import type { ReadResult } from './run.js';
+
+type Element = Record<string, unknown>;
+
+const parser = new XMLParser({
+  ignoreAttributes: false,
+  attributeNamePrefix: '@_',
+  parseAttributeValue: false,
+  parseTagValue: false,
+  isArray: (tag) => tag === 'testsuite' || tag === 'testcase' || tag === 'testsuites',
+});
+
+/**
+ * Reads JUnit XML test reports (the `testsuites`/`testsuite`/`testcase` layout written by most
+ * test runners). Every time is in seconds (unit "s").
+ * - Each test suite with a `time` gives metric `<suite>` (nested suites: `<outer>/<inner>`).
+ * - Each passed test case gives metric `<suite>/<classname>/<name>`; an empty part is left out,
+ *   and so is a classname equal to the suite's name (many runners repeat it).
+ * - Skipped, failed and erroring cases, and cases without a `time`, go to `notFitted` with the
+ *   reason instead: their times say nothing about speed.
+ * - A name that repeats (retries, several files) gives several samples of one metric.
+ * @throws InputError with file:line:col for malformed XML, and with the element path
+ *   (`file:/testsuites/testsuite[2]/testcase[5]`) for a missing name or a time that is not a number.
+ * @example readJunit('<testsuite name="s" time="2"><testcase name="t" time="1"/></testsuite>', 'j.xml').readings.map((r) => r.name) // ['s', 's/t']
+ */
+export function readJunit(text: string, file: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
+  checkLineLengths(text, file, limits);
+  const checked = XMLValidator.validate(text);
+  if (checked !== true) {
+    const { msg, line, col } = checked.err;
+    throw new InputError(`malformed XML: ${msg}`, { where: `${file}:${line}:${col}`, fix: 'check that the file is complete, well-formed XML' });
+  }
+  let doc: Element;
+  try {
+    doc = parser.parse(text) as Element;
+  } catch (error) {
+    throw new InputError(`malformed XML: ${error instanceof Error ? error.message : String(error)}`, { where: file, cause: error });
+  }
+  const sink = new ReadingSink(file, limits);
+  const roots = asElements(doc.testsuites);
+  if (roots.length > 0) {
+    roots.forEach((root, i) => readSuites(root, `${file}:/testsuites${index(roots, i)}`, [], sink));
+  } else if (doc.testsuite !== undefined) {
+    readSuites(doc, `${file}:`, [], sink);
+  } else {
+    throw new InputError('no <testsuites> or <testsuite> element at the root', {
+      where: file,
+      fix: 'pass a JUnit XML report, or choose the format with --input-format',
+    });
+  }
+  return sink.result;
+}
+
+function readSuites(parent: Element, path: string, suitePath: string[], sink: ReadingSink): void {
+  const suites = asElements(parent.testsuite);
+  suites.forEach((suite, i) => {
+    const where = `${path}/testsuite${index(suites, i)}`;
+    const name = attribute(suite, 'name');
+    const names = name === '' ? suitePath : [...suitePath, name];
+    const time = attribute(suite, 'time');
+    if (time !== '' && names.length > 0) sink.add(names.join('/'), seconds(time, where), 's', where);
+    const cases = asElements(suite.testcase);
+    cases.forEach((testCase, j) => readCase(testCase, `${where}/testcase${index(cases, j)}`, names, name, sink));
+    readSuites(suite, where, names, sink);
+  });
+}
+
+function readCase(testCase: Element, where: string, suitePath: string[], suiteName: string, sink: ReadingSink): void {
+  const caseName = attribute(testCase, 'name');
+  if (caseName === '') {
+    throw new InputError('test case has no name attribute', { where, fix: 'give every <testcase> a name' });
+  }
+  const className = attribute(testCase, 'classname');
+  const parts = [...suitePath, className === suiteName ? '' : className, caseName].filter((p) => p !== '');
+  const name = parts.join('/');
+  const outcome = (['skipped', 'failure', 'error'] as const).find((tag) => testCase[tag] !== undefined);
+  if (outcome !== undefined) {
+    const detail = attribute(asElements(testCase[outcome])[0] ?? {}, 'message');
+    const reason = { skipped: 'skipped', failure: 'failed', error: 'error' }[outcome];
+    sink.skip(name, detail === '' ? reason : `${reason}: ${detail}`, where);
+    return;
+  }
+  const time = attribute(testCase, 'time');
+  if (time === '') sink.skip(name, 'no time recorded', where);
+  else sink.add(name, seconds(time, where), 's', where);
+}
+
+function seconds(text: string, where: string): number {
+  const value = parseDecimal(text, `${where}@time`, 'time');
+  if (value < 0) {
+    throw new InputError(`time ${text} is negative`, { where: `${where}@time`, fix: 'write the duration in seconds, 0 or more' });
+  }
+  return value;
+}
+
+/** Child elements as objects; `<skipped/>` parses to '' and is treated as an element without attributes. */
+function asElements(value: unknown): Element[] {
+  if (value === undefined) return [];
+  const list = Array.isArray(value) ? value : [value];
+  return list.map((v) => (typeof v === 'object' && v !== null ? (v as Element) : {}));
+}
+
+function attribute(element: Element, name: string): string {
+  const value = element[`@_${name}`];
+  return typeof value === 'string' ? value.trim() : '';
+}
+
+function index(list: unknown[], i: number): string {
+  return list.length > 1 ? `[${i + 1}]` : '';
+}

@@ -1,0 +1,38 @@
+import { InputError } from '../model/input-error.js';
+import { checkMetricName } from './names.js';
+
+/** A metric file pattern and the name prefix its metrics get. */
+export interface FilePattern {
+  pattern: string;
+  prefix?: string;
+}
+
+const ARROW = /^(.*?\S)\s*=>\s*(.*)$/s;
+
+/**
+ * Splits `path-or-glob => prefix`: every metric read from the files the pattern matches is named
+ * `<prefix>/<name>` (`bench/*.txt => server` turns `BenchmarkRoute/ns/op` into
+ * `server/BenchmarkRoute/ns/op`). Slashes around the prefix are dropped; without `=>` there is
+ * no prefix. The prefix follows the metric name rule (names.ts).
+ * @throws InputError for an empty pattern or prefix.
+ * @example splitPattern('out/*.json => api') // { pattern: 'out/*.json', prefix: 'api' }
+ */
+export function splitPattern(text: string): FilePattern {
+  const m = ARROW.exec(text.trim());
+  const pattern = (m ? m[1]! : text).trim();
+  if (pattern === '') {
+    throw new InputError(`empty metric file pattern in ${JSON.stringify(text)}`, { fix: 'write a path or glob, optionally followed by "=> prefix"' });
+  }
+  if (!m) return { pattern };
+  const prefix = m[2]!.trim().replace(/^\/+|\/+$/g, '');
+  if (prefix === '') {
+    throw new InputError(`empty prefix after "=>" in ${JSON.stringify(text)}`, { fix: 'write "path => prefix", or leave out "=>"' });
+  }
+  checkMetricName(prefix, text);
+  return { pattern, prefix };
+}
+
+/** `<prefix>/<name>`, or the name itself without a prefix; the result is checked again (length). */
+export function prefixed(prefix: string | undefined, name: string, where?: string): string {
+  return prefix === undefined ? name : checkMetricName(`${prefix}/${name}`, where);
+}

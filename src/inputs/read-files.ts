@@ -1,0 +1,101 @@
+import { readFile, stat } from 'node:fs/promises';
+import path from 'node:path';
+import { glob } from 'tinyglobby';
+import type { Aggregate, InputLimits } from '../config/types.js';
+import { InputError } from '../model/input-error.js';
+import { collectRun } from './collect.js';
+import { DEFAULT_LIMITS, limitError } from './limits.js';
+import { parseMetricText } from './parse.js';
+import { prefixed, splitPattern } from './pattern.js';
+import type { ReadResult, Run } from './run.js';
+
+export interface ReadFilesOptions {
+  /** Force one format for every file (`--input-format`); detected per file when absent. */
+  format?: string;
+  limits: InputLimits;
+  aggregateFor: (name: string) => Aggregate;
+  /** Name prefix per pattern (as written, without "=> prefix"); `pattern => prefix` also works. */
+  prefixes?: Map<string, string>;
+  cwd?: string;
+}
+
+/**
+ * Reads every metric file the patterns name and folds them into one Run (collectRun).
+ * - A pattern is a path or a glob (tinyglobby: `**`, `*`, `{a,b}`), optionally `pattern => prefix`
+ *   (pattern.ts). An existing file path is taken literally even if it holds glob characters.
+ *   A pattern that matches no file is an error: a silent empty run would pass every gate.
+ * - Each file's size is checked against `limits.maxFileBytes` before it is read; line length and
+ *   the number of metrics are checked while parsing, and the total number of metrics after.
+ * - A file matched by two patterns with the same prefix is read once.
+ * @throws InputError for no match, a limit passed (naming `limits.max-file-bytes` etc.), a file
+ *   that is not UTF-8 text, or any problem in a file.
+ * @example await readMetricFiles(['bench/*.txt'], { limits: DEFAULT_LIMITS, aggregateFor: () => 'median' })
+ */
+export async function readMetricFiles(patterns: string[], options: ReadFilesOptions): Promise<Run> {
+  const limits = { ...DEFAULT_LIMITS, ...options.limits };
+  const cwd = path.resolve(options.cwd ?? process.cwd());
+  if (patterns.length === 0) {
+    throw new InputError('no metric files given', { fix: 'name at least one metric file or glob' });
+  }
+  const done = new Set<string>();
+  const results: ReadResult[] = [];
+  for (const text of patterns) {
+    const { pattern, prefix: arrowPrefix } = splitPattern(text);
+    const prefix = arrowPrefix ?? options.prefixes?.get(pattern) ?? options.prefixes?.get(text);
+    for (const file of await expand(pattern, cwd)) {
+      const key = `${prefix ?? ''}\u0000${file}`;
+      if (done.has(key)) continue;
+      done.add(key);
+      const shown = path.relative(cwd, file).startsWith('..') ? file : path.relative(cwd, file);
+      const result = await readOne(file, shown, options.format, limits);
+      results.push(prefix === undefined ? result : withPrefix(result, prefix));
+    }
+  }
+  const run = collectRun(results, options.aggregateFor);
+  if (run.metrics.size > limits.maxMetrics) {
+    throw limitError('maxMetrics', limits.maxMetrics, patterns.join(', '), `the metric files hold ${run.metrics.size} metrics`);
+  }
+  return run;
+}
+
+async function expand(pattern: string, cwd: string): Promise<string[]> {
+  const literal = path.resolve(cwd, pattern);
+  const info = await stat(literal).catch(() => undefined);
+  if (info?.isFile()) return [literal];
+  if (info?.isDirectory()) {
+    throw new InputError(`${pattern} is a directory`, { fix: `name files in it, such as ${path.join(pattern, '*.json')}` });
+  }
+  const files = await glob([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
+  if (files.length === 0) {
+    throw new InputError(`no metric file matches ${JSON.stringify(pattern)}`, {
+      where: cwd,
+      fix: 'check the path (relative to the working directory) and that the step writing the metrics ran',
+    });
+  }
+  return files.sort();
+}
+
+async function readOne(file: string, shown: string, format: string | undefined, limits: InputLimits): Promise<ReadResult> {
+  const info = await stat(file);
+  if (info.size > limits.maxFileBytes) {
+    throw limitError('maxFileBytes', limits.maxFileBytes, shown, `the file is ${info.size} bytes`);
+  }
+  let text: string;
+  try {
+    text = new TextDecoder('utf-8', { fatal: true }).decode(await readFile(file));
+  } catch (error) {
+    if (error instanceof TypeError) {
+      throw new InputError('the file is not UTF-8 text', { where: shown, fix: 'write metric files as UTF-8', cause: error });
+    }
+    throw new InputError(`cannot read the file: ${(error as Error).message}`, { where: shown, cause: error });
+  }
+  return parseMetricText(text, shown, format, limits);
+}
+
+function withPrefix(result: ReadResult, prefix: string): ReadResult {
+  return {
+    readings: result.readings.map((r) => ({ ...r, name: prefixed(prefix, r.name, r.where) })),
+    notFitted: new Map([...result.notFitted].map(([name, reason]) => [prefixed(prefix, name), reason])),
+    meta: result.meta,
+  };
+}
