@@ -32,6 +32,25 @@ function toArtifact(raw: unknown): ArtifactEntry {
   };
 }
 
+/**
+ * A stand-in for plugin-throttling's Bottleneck group that spaces content-creating requests
+ * `minTime` apart (GitHub asks for about a second between them; the plugin's own group does the
+ * same with a fixed 1 s), scaled with the retry unit so tests wait milliseconds.
+ */
+function spacedGroup(minTime: number) {
+  let next = 0;
+  const limiter = {
+    schedule: async <T>(_options: unknown, job: (...args: unknown[]) => Promise<T> | T, ...args: unknown[]): Promise<T> => {
+      const now = Date.now();
+      const at = Math.max(now, next);
+      next = at + minTime;
+      if (at > now) await new Promise((r) => setTimeout(r, at - now));
+      return job(...args);
+    },
+  };
+  return { key: () => limiter };
+}
+
 function toComment(raw: unknown): IssueComment {
   const c = obj(raw);
   const login = obj(c.user).login;
@@ -55,7 +74,7 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     {
       baseUrl: target.baseUrl.replace(/\/+$/, ''),
       retry: { retries: tuning.retries, retryAfterBaseValue: tuning.unitMs },
-      throttle: { onRateLimit: retryLimit, onSecondaryRateLimit: retryLimit, retryAfterBaseValue: tuning.unitMs },
+      throttle: { onRateLimit: retryLimit, write: spacedGroup(tuning.unitMs) as never, notifications: spacedGroup(3 * tuning.unitMs) as never, onSecondaryRateLimit: retryLimit, retryAfterBaseValue: tuning.unitMs },
       log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
     },
     retry,
