@@ -1,0 +1,46 @@
+import type { Config, InputLimits, MetricSettings } from './types.js';
+
+/**
+ * Settings of a metric that no rule touches (DESIGN.md, "Config file"). A 1% tolerance keeps a
+ * metric with a tiny spread from failing on a change nobody would act on.
+ */
+export const DEFAULT_SETTINGS: Readonly<MetricSettings> = Object.freeze({
+  cutoff: 0.01,
+  worse: 'higher',
+  tolerance: Object.freeze({ kind: 'percent', amount: 0.01 }),
+  resolution: 0,
+  window: 60,
+  minRuns: 8,
+  transform: 'none',
+  fit: 'mle',
+  uncertainty: 'predictive',
+  ignore: false,
+  aggregate: 'median',
+  changePoints: true,
+} satisfies MetricSettings);
+
+/** Limits that fit ordinary CI output: 64 MiB files, 1 MiB lines, 100,000 metrics a run. */
+export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({
+  maxFileBytes: 64 * 1024 * 1024,
+  maxLineLength: 1024 * 1024,
+  maxMetrics: 100_000,
+});
+
+/** Newest runs kept in a history document. */
+export const DEFAULT_KEEP = 500;
+
+/**
+ * The configuration used when there is no file (or it is empty): a fresh, mutable copy each call.
+ * @example defaultConfig().defaults.cutoff // 0.01
+ */
+export function defaultConfig(): Config {
+  return {
+    defaults: { ...DEFAULT_SETTINGS, tolerance: { ...DEFAULT_SETTINGS.tolerance } },
+    rules: [],
+    groups: [],
+    family: 'none',
+    keep: DEFAULT_KEEP,
+    limits: { ...DEFAULT_LIMITS },
+    source: '<defaults>',
+  };
+}
