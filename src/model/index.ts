@@ -18,4 +18,4 @@ export { shrunkCovariance, type ShrunkCovariance } from './ledoit-wolf.js';
 export { mahalanobisSquared, mahalanobisContributions } from './mahalanobis.js';
 export { chiSquareTail, hotellingTail } from './hotelling.js';
 export { detectChangePoints, type ChangePointOptions } from './change-points.js';
-export { skewness, andersonDarling, type AndersonDarling } from './normality.js';
+export { skewness, andersonDarling, andersonDarlingPValue, type AndersonDarling } from './normality.js';

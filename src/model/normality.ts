@@ -37,8 +37,11 @@ export interface AndersonDarling {
 /**
  * p-value of A*^2 for the composite normal case (mean and variance estimated), the piecewise
  * formulas of D'Agostino & Stephens (1986), "Goodness-of-Fit Techniques", Table 4.9.
+ * Throws InputError on a negative or NaN A*^2.
+ * @example andersonDarlingPValue(0.752) // ≈ 0.05
  */
-function adjustedPValue(a: number): number {
+export function andersonDarlingPValue(a: number): number {
+  if (!(a >= 0)) throw new InputError(`an Anderson-Darling statistic must be 0 or more, got ${a}`);
   let p: number;
   if (a >= 0.6) p = Math.exp(1.2937 - 5.709 * a + 0.0186 * a * a);
   else if (a >= 0.34) p = Math.exp(0.9177 - 4.279 * a - 1.38 * a * a);
@@ -73,5 +76,5 @@ export function andersonDarling(values: ArrayLike<number>): AndersonDarling {
   }
   const statistic = -n - sum / n;
   const adjusted = statistic * (1 + 0.75 / n + 2.25 / (n * n));
-  return { statistic, adjusted, pValue: adjustedPValue(adjusted) };
+  return { statistic, adjusted, pValue: andersonDarlingPValue(adjusted) };
 }
