@@ -77,7 +77,8 @@ export function createFileStore(path: string, series: string): HistoryStore {
 
 async function writeAtomically(path: string, text: string, where: string): Promise<void> {
   const folder = dirname(path);
-  const temp = join(folder, `.${basename(path)}.${process.pid}.${randomBytes(6).toString('hex')}.tmp`);
+  // Short enough that a file name near the 255-byte limit still has room for its temp file.
+  const temp = join(folder, `.${basename(path).slice(0, 32)}.${randomBytes(6).toString('hex')}.tmp`);
   try {
     await mkdir(folder, { recursive: true });
     const mode = await stat(path).then((s) => s.mode & 0o777, () => 0o644);

@@ -1,0 +1,138 @@
+import { chmod, mkdir, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Run } from '../../src/inputs/run.js';
+import { serializeHistory } from '../../src/history/document.js';
+import { createFileStore } from '../../src/history/file-store.js';
+import { appendRun, mergeHistories, trimHistory } from '../../src/history/merge.js';
+import { StoreError } from '../../src/history/store.js';
+
+const run = (value: number): Run => ({ metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]), meta: new Map() });
+const info = (n: number) => ({ id: `${8100 + n}-1`, time: new Date(Date.UTC(2026, 2, n, 10)).toISOString(), ref: 'refs/heads/main', event: 'push' });
+
+let root: string;
+beforeAll(async () => {
+  root = await mkdtemp(join(tmpdir(), 'bellgate-file-store-'));
+});
+afterAll(async () => {
+  await rm(root, { recursive: true, force: true });
+});
+
+async function rejection(promise: Promise<unknown>): Promise<StoreError> {
+  const error = await promise.then(() => undefined, (e: unknown) => e);
+  expect(error).toBeInstanceOf(StoreError);
+  return error as StoreError;
+}
+
+describe('createFileStore', () => {
+  it('reads a missing file as an empty history, creates the folder on save, leaves no temp file', async () => {
+    const path = join(root, 'a', 'deep', 'history.json');
+    const store = createFileStore(path, 'linux-x64');
+    expect(store.describe()).toBe(`file ${path}`);
+    const empty = await store.load();
+    expect(empty.runs).toEqual([]);
+    await store.save(appendRun(empty, info(1), run(41.25)), 0);
+    expect(await readdir(join(root, 'a', 'deep'))).toEqual(['history.json']);
+    const back = await store.load();
+    expect(back.runs.map((r) => r.id)).toEqual(['8101-1']);
+    expect(back.columns.get('build/compile')).toEqual({ unit: 's', values: [41.25] });
+    expect(JSON.parse(await readFile(path, 'utf8')).schema).toBe('bellgate.history/2');
+  });
+
+  it('replaces the file in place over many saves, never leaving temp files', async () => {
+    const path = join(root, 'many', 'history.json');
+    const store = createFileStore(path, 'linux-x64');
+    for (let n = 1; n <= 5; n++) {
+      const h = await store.load();
+      await store.save(appendRun(h, info(n), run(40 + n)), h.runs.length);
+    }
+    expect(await readdir(join(root, 'many'))).toEqual(['history.json']);
+    expect((await store.load()).columns.get('build/compile')?.values).toEqual([41, 42, 43, 44, 45]);
+  });
+
+  it('a corrupt file is a StoreError on load and on save, and its bytes are kept', async () => {
+    const path = join(root, 'corrupt.json');
+    const bad = serializeHistory(appendRun(await createFileStore(join(root, 'x.json'), 'linux-x64').load(), info(1), run(1))).slice(0, 120);
+    await writeFile(path, bad);
+    const store = createFileStore(path, 'linux-x64');
+    const onLoad = await rejection(store.load());
+    expect(onLoad.message).toMatch(/not a readable history document.*left as it is/);
+    expect(onLoad.where).toBe(`file ${path}`);
+    expect(onLoad.fix).toMatch(/bellgate verify/);
+    const fresh = appendRun({ series: 'linux-x64', runs: [], columns: new Map() }, info(2), run(2));
+    await rejection(store.save(fresh, 0));
+    expect(await readFile(path, 'utf8')).toBe(bad);
+    expect(await readdir(root)).not.toContainEqual(expect.stringMatching(/\.tmp$/));
+  });
+
+  it('a file of a newer version is a StoreError that says to upgrade, and is not overwritten', async () => {
+    const path = join(root, 'newer.json');
+    const text = '{"schema":"bellgate.history/7","series":"linux-x64"}';
+    await writeFile(path, text);
+    const error = await rejection(createFileStore(path, 'linux-x64').load());
+    expect(error.describe()).toMatch(/upgrade Bellgate/);
+    await rejection(createFileStore(path, 'linux-x64').save({ series: 'linux-x64', runs: [], columns: new Map() }, 0));
+    expect(await readFile(path, 'utf8')).toBe(text);
+  });
+
+  it('refuses another series, and a shrink that no trim explains', async () => {
+    const path = join(root, 'guard.json');
+    const store = createFileStore(path, 'linux-x64');
+    let h = await store.load();
+    for (let n = 1; n <= 3; n++) h = appendRun(h, info(n), run(n));
+    await store.save(h, 0);
+    await rejection(createFileStore(path, 'windows').load());
+    await rejection(store.save({ ...h, series: 'windows' }, 3));
+    const loaded = await store.load();
+    const lost = await rejection(store.save({ ...loaded, runs: loaded.runs.slice(1), columns: new Map([['build/compile', { values: [2, 3] }]]) }, 3));
+    expect(lost.message).toMatch(/1 runs would be lost/);
+    await store.save(trimHistory(loaded, 2), 3); // trimming explains the shrink
+    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8102-1', '8103-1']);
+  });
+
+  // root ignores folder permissions, so there is nothing to observe when the suite runs as root
+  it.skipIf(process.getuid?.() === 0)('a folder it cannot write to is a StoreError, and no temp file is left', async () => {
+    const folder = join(root, 'locked');
+    await mkdir(folder);
+    await chmod(folder, 0o500);
+    try {
+      const store = createFileStore(join(folder, 'history.json'), 's');
+      const error = await rejection(store.save(appendRun(await store.load(), info(1), run(1)), 0));
+      expect(error.message).toMatch(/cannot write/);
+      expect(await readdir(folder)).toEqual([]);
+    } finally {
+      await chmod(folder, 0o700);
+    }
+  });
+
+  it('a file name near the 255-byte limit still saves (the temp name stays short)', async () => {
+    const path = join(root, `${'h'.repeat(250)}.json`);
+    const store = createFileStore(path, 's');
+    await store.save(appendRun(await store.load(), info(1), run(1)), 0);
+    expect((await store.load()).runs).toHaveLength(1);
+  });
+
+  it('a path that is a folder, or under a file, is a StoreError, not a crash', async () => {
+    await writeFile(join(root, 'plain'), 'x');
+    expect((await rejection(createFileStore(join(root, 'plain', 'h.json'), 's').load())).message).toMatch(/cannot read/);
+    const error = await rejection(createFileStore(root, 's').load());
+    expect(error.message).toMatch(/cannot read/);
+  });
+
+  it('two writers from the same start: the later save wins the file, a merge of both heals it', async () => {
+    const path = join(root, 'concurrent.json');
+    const store = createFileStore(path, 'linux-x64');
+    await store.save(appendRun(await store.load(), info(1), run(1)), 0);
+    const startA = await store.load();
+    const startB = await store.load();
+    const a = appendRun(startA, info(2), run(2));
+    const b = appendRun(startB, info(3), run(3));
+    await store.save(a, 1);
+    await store.save(b, 1);
+    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8101-1', '8103-1']);
+    const healed = mergeHistories(await store.load(), a);
+    await store.save(healed, 2);
+    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1']);
+  });
+});
