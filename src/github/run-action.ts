@@ -14,9 +14,7 @@
  * - NOTICE only: an event that is checked but never recorded (e.g. `release`).
  * Nothing prints a stack trace or the token (it is masked first).
  */
-import { access } from 'node:fs/promises';
-import { isAbsolute, join, resolve } from 'node:path';
-import { defaultConfig } from '../config/load.js';
+import { join } from 'node:path';
 import { readConfigFile } from '../config/read.js';
 import { settingsFor } from '../config/rules.js';
 import type { Config } from '../config/types.js';
@@ -28,6 +26,7 @@ import { appendRun, trimHistory } from '../history/merge.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
 import type { Run } from '../inputs/run.js';
+import { renderHtmlReport } from '../report/html.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { commentMarker, markerLine } from '../report/marker.js';
@@ -36,7 +35,7 @@ import { statusOf, type GitHubApi, type GitHubApiFactory, type RetryTuning } fro
 import { upsertComment } from './comment.js';
 import { readRunContext, type RunContext } from './context.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
-import { DEFAULT_CONFIG_PATH, OUTPUT, readActionInputs, type ActionInputs } from './inputs.js';
+import { OUTPUT, readActionInputs, type ActionInputs } from './inputs.js';
 import type { ActionSink } from './sink.js';
 import { createHistoryStore, type StoreSpec } from './store-factory.js';
 
@@ -82,7 +81,8 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const inputs = readActionInputs(deps.env);
   if (inputs.token !== '') sink.setSecret(inputs.token);
   const context = await readRunContext(deps.env, deps.readText);
-  const config = await loadConfig(deps.cwd, inputs.config);
+  // A missing file at the default path means default settings; a missing named file is an error.
+  const config = await readConfigFile(inputs.config, { cwd: deps.cwd });
   const run = await readMetricFiles(inputs.metrics, {
     ...(inputs.inputFormat ?? config.inputFormat ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
     limits: config.limits,
@@ -140,6 +140,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     sink.warning(`bellgate: could not write the job summary: ${describeError(error)}`);
   }
   annotate(report, sink, series);
+  if (inputs.htmlReport) await uploadHtml(deps, context, series, report, history, inputs.retentionDays);
 
   let comment: string | undefined;
   if (PULL_REQUEST_EVENTS.includes(context.eventName) && context.pullRequest) {
@@ -167,13 +168,6 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   }
   if (report.verdict === 'accepted') sink.notice(`bellgate: regressions accepted by the label "${inputs.acceptLabel}"`);
   return { failed, report, recorded, ...(comment ? { comment } : {}) };
-}
-
-async function loadConfig(cwd: string, path: string | undefined): Promise<Config> {
-  if (path !== undefined) return readConfigFile(isAbsolute(path) ? path : resolve(cwd, path));
-  const fallback = resolve(cwd, DEFAULT_CONFIG_PATH);
-  const exists = await access(fallback).then(() => true, () => false);
-  return exists ? readConfigFile(fallback) : defaultConfig();
 }
 
 async function loadHistory(store: HistoryStore, series: string, inputs: ActionInputs, sink: ActionSink): Promise<{ history: History; readable: boolean }> {
@@ -220,6 +214,20 @@ async function postComment(api: () => GitHubApi, context: RunContext, inputs: Ac
       : `the comment on pull request #${pr.number} failed: ${describeError(error)}`;
     sink.warning(`bellgate: ${why}; the report is in the job summary`);
     return 'failed';
+  }
+}
+
+/** The HTML report is extra: written beside the JSON report and uploaded; a failure only warns. */
+async function uploadHtml(deps: ActionDeps, context: RunContext, series: string, report: Report, history: History, retentionDays: number): Promise<void> {
+  // One artifact per series and attempt: artifact names must be unique within a workflow run.
+  const name = `${artifactName('bellgate-report', series)}-${context.attempt}`;
+  try {
+    const html = renderHtmlReport({ report, history, generatedAt: deps.now().toISOString() });
+    await deps.writeText(join(context.runnerTemp, 'bellgate', `${name}.html`), html);
+    await deps.upload(name, 'report.html', html, retentionDays);
+    deps.sink.info(`bellgate: uploaded the HTML report as artifact ${name}`);
+  } catch (error) {
+    deps.sink.warning(`bellgate: could not upload the HTML report: ${describeError(error)}`);
   }
 }
 
