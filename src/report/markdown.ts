@@ -73,7 +73,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   if (options.marker !== undefined) out.push(markerLine(options.marker));
   const counts = statusCounts(report.metrics.map((m) => m.status)) || 'no metrics';
   out.push(`### Bellgate: **${report.verdict}** — ${counts}`);
-  out.push(`${VERDICT_HEADLINE[report.verdict]} (series ${escapeMarkdown(report.series)}).`);
+  out.push(`Verdict ${report.verdict}: ${VERDICT_HEADLINE[report.verdict]} (series ${escapeMarkdown(report.series)}).`);
   let room = BUDGET - out.join('\n').length;
 
   const sorted = [...report.metrics].sort((a, b) => statusRank(a.status) - statusRank(b.status));

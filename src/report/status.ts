@@ -26,12 +26,12 @@ export const STATUS_GLYPH: Readonly<Record<Status, string>> = {
   ignored: '–',
 };
 
-/** One line per verdict, the headline of every report. */
+/** What each verdict means, in a sentence that follows the verdict word in every headline. */
 export const VERDICT_HEADLINE: Readonly<Record<Verdict, string>> = {
-  pass: 'pass — no metric regressed',
-  regressed: 'regressed — at least one metric fell in the improbable tail on its worse side',
-  learning: 'learning — no metric has enough baseline runs yet',
-  accepted: 'accepted — regressions found, accepted by label',
+  pass: 'no metric regressed',
+  regressed: 'at least one metric fell in the improbable tail on its worse side',
+  learning: 'no metric has enough baseline runs yet',
+  accepted: 'regressions found, accepted by the pull request label',
 };
 
 /** Count of metrics per status, in STATUS_ORDER, omitting zeros. @example "2 regressed, 40 ok" */

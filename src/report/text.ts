@@ -45,7 +45,7 @@ export function renderText(report: Report, options: { color: boolean }): string 
   const lines: string[] = [];
   const verdictWord = report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
   lines.push(`Bellgate — series "${cleanText(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
-  lines.push(`${VERDICT_HEADLINE[report.verdict]}. ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`);
+  lines.push(`${VERDICT_HEADLINE[report.verdict]}; ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`);
 
   const judged = report.metrics
     .filter((m) => JUDGED.has(m.status))

@@ -1,0 +1,60 @@
+import { scaleLinear } from 'd3-scale';
+import { area, line } from 'd3-shape';
+import type { MetricResult } from '../gate/report.js';
+import type { MetricColumn, RunInfo } from '../history/history.js';
+import { bottomAxis, leftAxis, px, valueScale } from './html-axis.js';
+import { baselinePoints, columnPoints, cutoffBand, type ChartPoint } from './html-data.js';
+import { statusSymbol } from './html-symbol.js';
+import { escapeHtml } from './escape.js';
+import { formatValue } from './format.js';
+
+const W = 560;
+const H = 220;
+const M = { top: 14, right: 18, bottom: 42, left: 72 };
+
+/**
+ * An SVG of a metric's history over runs (values from the history's column), with the fitted mean
+ * as a dashed line, the band where the relative density stays above the cutoff shaded over the
+ * baseline runs, and this run marked by its status shape after the last run. On the log scale the
+ * y axis is logarithmic, so the band reads symmetric as it was fitted. Every point has a <title>
+ * tooltip (run id, time, value). Returns '' when there is nothing to draw.
+ */
+export function historyChart(m: MetricResult, column: MetricColumn | undefined, runs: readonly RunInfo[], cutoff: number): string {
+  const pts = columnPoints(column, runs);
+  const now = m.value !== undefined && Number.isFinite(m.value) ? m.value : undefined;
+  if (pts.length === 0 && now === undefined) return '';
+  const band = cutoffBand(m, cutoff);
+  const base = baselinePoints(pts, m);
+  const all = [...pts.map((p) => p.value), ...(now === undefined ? [] : [now]), ...(band ? [band.low, band.high] : [])];
+  const log = m.baseline?.scale === 'log' && all.every((v) => v > 0);
+  const y = valueScale(log, Math.min(...all), Math.max(...all), [H - M.bottom, M.top]);
+  const x = scaleLinear().domain([0, Math.max(1, runs.length)]).range([M.left, W - M.right]);
+  const unit = m.unit === undefined ? '' : escapeHtml(m.unit, 40);
+  const parts: string[] = [];
+  if (band && base.length > 0) {
+    const first = base[0]?.index ?? 0;
+    const shade = area<number>()
+      .x((i) => x(i))
+      .y0(() => y(band.low))
+      .y1(() => y(band.high));
+    parts.push(`<path class="band" d="${shade([first, runs.length]) ?? ''}"><title>density above the cutoff: ${escapeHtml(formatValue(band.low))} to ${escapeHtml(formatValue(band.high))} ${unit}</title></path>`);
+    const centre = line<number>()
+      .x((i) => x(i))
+      .y(() => y(band.mean));
+    parts.push(`<path class="mean" d="${centre([first, runs.length]) ?? ''}"><title>fitted mean ${escapeHtml(formatValue(band.mean))} ${unit}</title></path>`);
+  }
+  const trace = line<ChartPoint>()
+    .x((p) => x(p.index))
+    .y((p) => y(p.value));
+  if (pts.length > 1) parts.push(`<path class="trace" d="${trace(pts) ?? ''}"/>`);
+  for (const p of pts) {
+    const tip = `run ${p.run.id}${p.run.time ? ` · ${p.run.time}` : ''}${p.run.sha ? ` · ${p.run.sha.slice(0, 12)}` : ''}: ${formatValue(p.value)} ${m.unit ?? ''}`;
+    parts.push(`<circle class="point" cx="${px(x(p.index))}" cy="${px(y(p.value))}" r="2.6"><title>${escapeHtml(tip, 300)}</title></circle>`);
+  }
+  if (now !== undefined) {
+    parts.push(statusSymbol(m.status, px(x(runs.length)), px(y(now)), `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`));
+  }
+  const axes = bottomAxis(x, H - M.bottom, 'run, oldest to newest (last: this run)') + leftAxis(y, M.left, unit || 'value');
+  const title = `history of ${escapeHtml(m.name, 200)}`;
+  return `<svg class="chart" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${title}"><title>${title}</title>${axes}${parts.join('')}</svg>`;
+}

@@ -1,0 +1,92 @@
+import type { MetricResult, Report } from '../gate/report.js';
+import type { History } from '../history/history.js';
+import { metricCells } from './cells.js';
+import { escapeHtml } from './escape.js';
+import { formatSigma } from './format.js';
+import { baselinePoints, columnPoints } from './html-data.js';
+import { baselineHistogram } from './html-histogram.js';
+import { historyChart } from './html-history-chart.js';
+import { HTML_SCRIPT } from './html-script.js';
+import { HTML_STYLE } from './html-style.js';
+import { STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
+
+export interface HtmlReportInput {
+  report: Report;
+  history: History;
+  title?: string;
+  /** Shown in the footer; passed in because renderers never read the clock. */
+  generatedAt?: string;
+}
+
+// No network at all: the page may only use its own inline style and script, and data: images.
+const CSP = "default-src 'none'; style-src 'unsafe-inline'; script-src 'unsafe-inline'; img-src data:";
+const COLUMNS = ['status', 'metric', 'this run', 'baseline (mean ± sd)', 'change', 'sigma', 'rel. density vs cutoff'];
+const NUMERIC = new Set([2, 4, 5, 6]);
+
+const sortAttr = (x: number | undefined): string => (x !== undefined && Number.isFinite(x) ? ` data-sort="${x}"` : '');
+
+function summaryRow(m: MetricResult, i: number): string {
+  const c = metricCells(m, m.unit === undefined ? undefined : escapeHtml(m.unit, 40));
+  return (
+    `<tr class="s-${m.status}"><td data-sort="${statusRank(m.status)}">${STATUS_GLYPH[m.status]} ${m.status}</td>` +
+    `<td class="name"><a href="#m${i}">${escapeHtml(m.name, 300)}</a></td>` +
+    `<td class="num"${sortAttr(m.value)}>${c.value}</td><td class="num">${c.baseline}</td>` +
+    `<td class="num"${sortAttr(m.change)}>${c.change}</td><td class="num"${sortAttr(m.z)}>${c.sigma}</td>` +
+    `<td class="num"${sortAttr(m.relativeDensity)}>${escapeHtml(c.density)}</td></tr>`
+  );
+}
+
+function metricSection(m: MetricResult, i: number, history: History): string {
+  const column = history.columns.get(m.name);
+  const baseValues = baselinePoints(columnPoints(column, history.runs), m).map((p) => p.value);
+  const charts = [historyChart(m, column, history.runs, m.cutoff), baselineHistogram(m, baseValues, m.cutoff)].filter((s) => s !== '');
+  const unit = m.unit === undefined ? '' : ` <span class="meta">(${escapeHtml(m.unit, 40)})</span>`;
+  const reason = escapeHtml(m.reason, 1000).replace(/([^.!?])$/, '$1.');
+  const scale = m.baseline?.scale === 'log' ? ' Fitted on the log scale.' : '';
+  const ratio = m.baseline?.relativeTo !== undefined ? ` Fitted as ratios to ${escapeHtml(m.baseline.relativeTo, 300)}; the band is not drawn over raw values.` : '';
+  return (
+    `<section class="metric" id="m${i}"><h2><span class="s-${m.status}">${STATUS_GLYPH[m.status]} ${m.status}</span> ${escapeHtml(m.name, 300)}${unit}</h2>` +
+    `<p class="reason">${reason}${scale}${ratio}</p>` +
+    (charts.length > 0 ? `<div class="charts">${charts.join('')}</div>` : '<p class="note-text">No values to draw yet.</p>') +
+    '</section>'
+  );
+}
+
+/**
+ * One self-contained HTML page for a report and its history: a summary table of all metrics by
+ * status (sortable by its headers when JavaScript runs; readable without), then per metric an SVG
+ * of its history with the fitted mean, the band where the relative density stays above the cutoff
+ * (mean ± sqrt(-2 ln cutoff) sd; on the log scale when the fit was) and this run, and an SVG
+ * histogram of the baseline with the fitted density and the cutoff. Inline CSS, SVG and script
+ * only, under a Content-Security-Policy that forbids any network access. Everything from metric
+ * files is escaped.
+ * @example renderHtmlReport({ report, history }).startsWith('<!doctype html>') // true
+ */
+export function renderHtmlReport(input: HtmlReportInput): string {
+  const { report, history } = input;
+  const title = escapeHtml(input.title ?? `Bellgate report: ${report.series}`, 300);
+  const order = report.metrics.map((m, i) => ({ m, i })).sort((a, b) => statusRank(a.m.status) - statusRank(b.m.status) || a.i - b.i);
+  const head = COLUMNS.map((c, k) => `<th scope="col"${NUMERIC.has(k) ? ' class="num"' : ''}><button type="button">${c}</button></th>`).join('');
+  const groups = report.groups.map(
+    (g) =>
+      `<li><span class="s-${g.status}">${g.status}</span> group <strong>${escapeHtml(g.name, 300)}</strong>: common move ${formatSigma(g.common.z)} (${g.common.status}); ` +
+      `main contributors: ${[...g.members].sort((a, b) => b.share - a.share).slice(0, 3).map((mm) => `${escapeHtml(mm.name, 300)} ${Math.round(mm.share * 100)}%`).join(', ')}. ${escapeHtml(g.reason, 1000)}</li>`,
+  );
+  return [
+    '<!doctype html>',
+    '<html lang="en"><head><meta charset="utf-8">',
+    `<meta http-equiv="Content-Security-Policy" content="${CSP}">`,
+    '<meta name="viewport" content="width=device-width, initial-scale=1">',
+    `<title>${title}</title><style>${HTML_STYLE}</style></head><body>`,
+    `<header><h1>${title}</h1><p class="meta">series ${escapeHtml(report.series, 300)} · ${history.runs.length} runs in the history · family control: ${report.family}</p>`,
+    `<p class="verdict"><strong class="s-${report.verdict === 'regressed' ? 'regressed' : 'ok'}">${report.verdict}</strong> — ${escapeHtml(VERDICT_HEADLINE[report.verdict])}. ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.</p></header>`,
+    '<main><table id="summary"><caption class="meta">All metrics, regressions first. Click a header to sort.</caption>',
+    `<thead><tr>${head}</tr></thead><tbody>${order.map(({ m, i }) => summaryRow(m, i)).join('')}</tbody></table>`,
+    groups.length > 0 ? `<h2>Groups</h2><ul>${groups.join('')}</ul>` : '',
+    '<p class="legend">Charts: dots are baseline-branch runs; the shaded band is where the fitted density stays above the cutoff; the dashed line is the fitted mean; this run is the large mark (▲ regressed, ▼ improved, ● ok). Histograms show the baseline runs, the fitted density and the cutoff (dashed).</p>',
+    order.map(({ m, i }) => metricSection(m, i, history)).join(''),
+    `</main><footer>Generated by Bellgate${input.generatedAt ? ` at ${escapeHtml(input.generatedAt, 100)}` : ''}. Schema ${escapeHtml(report.schema)}.</footer>`,
+    `<script>${HTML_SCRIPT}</script></body></html>`,
+    '',
+  ].join('\n');
+}

@@ -1,0 +1,104 @@
+import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { pathToFileURL } from 'node:url';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { chromium, type Browser, type Page } from 'playwright-core';
+import { renderHtmlReport } from '../../src/report/html.js';
+import { HOSTILE, makeFixture } from './fixture.js';
+
+const CHROMIUM = '/usr/bin/chromium';
+const present = existsSync(CHROMIUM);
+if (!present) console.warn(`skipping the HTML browser checks: ${CHROMIUM} is absent (apt-get install -y chromium)`);
+
+describe.skipIf(!present)('HTML report in headless Chromium', () => {
+  let browser: Browser;
+  let page: Page;
+  const consoleErrors: string[] = [];
+  const requests: string[] = [];
+  const dialogs: string[] = [];
+  let url = '';
+
+  beforeAll(async () => {
+    const hostile = Object.values(HOSTILE).map((name, k) => ({ name, unit: '<b>u</b>', centre: 10 + k, spread: 0.5, now: 10 + k, status: 'ok' as const }));
+    const { report, history } = makeFixture(hostile);
+    const html = renderHtmlReport({ report, history, generatedAt: '2026-12-01T12:00:00Z' });
+    const dir = join(tmpdir(), `bellgate-report-${process.pid}`);
+    mkdirSync(dir, { recursive: true });
+    const file = join(dir, 'report.html');
+    writeFileSync(file, html);
+    url = pathToFileURL(file).href;
+    browser = await chromium.launch({
+      executablePath: CHROMIUM,
+      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run', '--disable-sync'],
+    });
+    page = await browser.newPage({ viewport: { width: 1100, height: 900 } });
+    page.on('console', (msg) => {
+      if (msg.type() === 'error') consoleErrors.push(msg.text());
+    });
+    page.on('pageerror', (err) => consoleErrors.push(String(err)));
+    page.on('request', (req) => {
+      if (req.url() !== url) requests.push(req.url());
+    });
+    page.on('dialog', async (d) => {
+      dialogs.push(d.message());
+      await d.dismiss();
+    });
+    await page.goto(url, { waitUntil: 'load' });
+  });
+
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('loads with no console errors, no network requests and no script from metric names', async () => {
+    // An alert would mean `<img onerror=...>` from a metric name ran.
+    await page.waitForTimeout(200);
+    expect(consoleErrors).toEqual([]);
+    expect(requests).toEqual([]);
+    expect(dialogs).toEqual([]);
+    expect(await page.locator('img').count()).toBe(0);
+  });
+
+  it('draws every SVG with sized shapes', async () => {
+    const sizes = await page.$$eval('svg.chart', (svgs) =>
+      svgs.map((svg) => {
+        const shapes = Array.from(svg.querySelectorAll('path, circle, rect')).map((el) => (el as unknown as { getBBox(): { width: number; height: number } }).getBBox());
+        const box = svg.getBoundingClientRect();
+        return { w: box.width, h: box.height, shapes: shapes.filter((b) => b.width > 0 || b.height > 0).length };
+      }),
+    );
+    expect(sizes.length).toBeGreaterThan(8);
+    for (const s of sizes) {
+      expect(s.w).toBeGreaterThan(100);
+      expect(s.h).toBeGreaterThan(100);
+      expect(s.shapes).toBeGreaterThan(0);
+    }
+  });
+
+  it('re-sorts the summary table when a header is clicked', async () => {
+    const names = (): Promise<string[]> => page.$$eval('#summary tbody tr td:nth-child(2)', (tds) => tds.map((td) => td.textContent ?? ''));
+    const before = await names();
+    // Markup order: by status, regressions first.
+    expect(before[0]).toBe('build/time');
+    await page.click('#summary thead th:nth-child(2) button');
+    const asc = await names();
+    expect(asc).not.toEqual(before);
+    // Sorted ascending by the browser's own collation (localeCompare), the same the page uses.
+    const expected = await page.evaluate((xs) => [...xs].sort((a, b) => a.toLowerCase().localeCompare(b.toLowerCase())), before);
+    expect(asc).toEqual(expected);
+    await page.click('#summary thead th:nth-child(2) button');
+    expect(await names()).toEqual([...expected].reverse());
+    expect(await page.getAttribute('#summary thead th:nth-child(2)', 'aria-sort')).toBe('descending');
+    // Back to status order for the screenshot.
+    await page.click('#summary thead th:nth-child(1) button');
+    expect((await names())[0]).toBe('build/time');
+  });
+
+  it('saves a screenshot for people to look at', async () => {
+    const dir = new URL('../artifacts/', import.meta.url).pathname;
+    mkdirSync(dir, { recursive: true });
+    await page.screenshot({ path: join(dir, 'report.png'), fullPage: true });
+    expect(existsSync(join(dir, 'report.png'))).toBe(true);
+  });
+});
