@@ -74,7 +74,7 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
     }
     const target = run;
     const add = (name: string, raw: string, unit: string | undefined): void => {
-      const value = valueFrom(raw);
+      const value = valueFrom(raw, true);
       if (typeof value === 'string') return skip(`metric ${JSON.stringify(name)}: ${value}`);
       target.metrics.set(name, value);
       if (unit) target.units.set(name, unit);

@@ -47,15 +47,17 @@ export function runInfoFrom(fields: { id?: unknown; time?: unknown; sha?: unknow
 }
 
 /**
- * Reads one metric value: a finite JSON number, or (from CSV) decimal text. Returns the reason
- * when it is not one — "NaN", "Infinity", 1e999, hex and empty text are all refused.
+ * Reads one metric value: a finite JSON number, or decimal text when `text` is allowed (CSV
+ * cells). Returns the reason when it is not one — "NaN", "Infinity", 1e999, hex and empty text
+ * are all refused; in JSON a quoted number is refused too, since the writer meant something else.
  *
- * @example valueFrom('1.5e3') // 1500
+ * @example valueFrom('1.5e3', true) // 1500
  */
-export function valueFrom(raw: unknown): number | string {
+export function valueFrom(raw: unknown, text = false): number | string {
   let v: number;
   if (typeof raw === 'number') v = raw;
-  else if (typeof raw === 'string' && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim())) v = Number(raw.trim());
+  else if (typeof raw === 'string' && text && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim())) v = Number(raw.trim());
+  else if (typeof raw === 'string' && !text) return `value ${JSON.stringify(raw)} is text, not a number`;
   else return `value ${JSON.stringify(raw) ?? String(raw)} is not a number`;
   return Number.isFinite(v) ? v : `value ${String(raw)} is not a finite number`;
 }
