@@ -4,9 +4,13 @@ import { InputError } from './input-error.js';
 /**
  * The scale a metric is fitted on. `log` suits right-skewed timings and sizes: a multiplicative
  * noise becomes additive, and the fit's sd reads as a relative spread. Values must be > 0 on log.
+ * Throws InputError (where: the metric) on a non-finite value, or a value <= 0 on log.
  * @example toFitScale(Math.E, 'log', 'build/time') // 1
  */
 export function toFitScale(value: number, transform: Transform, metric: string): number {
+  if (!Number.isFinite(value)) {
+    throw new InputError(`value ${value} is not a finite number`, { where: metric, fix: 'check the metric file' });
+  }
   if (transform === 'none') return value;
   if (!(value > 0)) {
     throw new InputError(`value ${value} cannot be log-transformed (must be > 0)`, {
