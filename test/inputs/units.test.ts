@@ -2,8 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { aggregateSamples } from '../../src/inputs/aggregate.js';
 import { convertUnit, unitScale } from '../../src/inputs/units.js';
 import { expectClose } from '../helpers/close.js';
-import jStat from 'jstat';
+import { createRequire } from 'node:module';
 import fc from 'fast-check';
+
+// jStat, a reference statistics library from the npm registry (dev dependency; ships no types).
+const jStat = createRequire(import.meta.url)('jstat') as Record<'median' | 'mean' | 'min' | 'max', (values: number[]) => number>;
 
 describe('convertUnit', () => {
   it('converts time units by the SI definitions (SI Brochure, 9th ed., tables 7 and 8)', () => {
