@@ -70,6 +70,14 @@ function wrongValue(error: ErrorObject, tree: YamlTree): ConfigProblem {
     const guess = didYouMean(error.data, node.enum.map(String));
     if (guess) fix = `did you mean "${guess}"?`;
   }
+  const data = error.data;
+  const wantsNumber = node.type === 'number' || node.type === 'integer' || Array.isArray(node.anyOf);
+  if (!fix && typeof data === 'string' && wantsNumber && data.trim() !== '' && Number.isFinite(Number(data))) {
+    fix = `write the number without quotes: ${data.trim()}`;
+  }
+  if (!fix && typeof data === 'string' && node.type === 'boolean' && /^(yes|no|on|off|y|n)$/i.test(data)) {
+    fix = `write true or false (YAML 1.2 reads ${data} as text)`;
+  }
   if (!fix && Array.isArray(node.examples)) fix = `for example: ${JSON.stringify(node.examples[0])}`;
   return { ...position(tree, error.instancePath), message, fix };
 }

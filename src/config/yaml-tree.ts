@@ -6,6 +6,7 @@ import {
   MAX_CONFIG_DEPTH,
   MAX_CONFIG_VALUES,
   checkTokenLimits,
+  prescanNesting,
 } from './yaml-limits.js';
 
 export interface Position {
@@ -51,6 +52,8 @@ export function readYamlTree(text: string): { tree?: YamlTree; problems: ConfigP
       }],
     };
   }
+  const deep = prescanNesting(text);
+  if (deep) return { problems: [deep] };
   const counter = new LineCounter();
   const tokens = [...new Parser(counter.addNewLine).parse(text)];
   const tooBig = checkTokenLimits(tokens, counter);
@@ -62,7 +65,8 @@ export function readYamlTree(text: string): { tree?: YamlTree; problems: ConfigP
   const at = (offset: number): Position => counter.linePos(offset);
   for (const doc of docs) {
     for (const issue of [...doc.errors, ...doc.warnings]) {
-      problems.push({ ...at(issue.pos[0]), message: firstLine(issue.message), fix: 'write valid YAML (see https://yaml.org/spec/1.2.2/)' });
+      const fix = issue.code === 'DUPLICATE_KEY' ? 'keep one of the two entries' : 'write valid YAML (see https://yaml.org/spec/1.2.2/)';
+      problems.push({ ...at(issue.pos[0]), message: firstLine(issue.message), fix });
     }
   }
   if (docs.length > 1) {
