@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { cleanText } from '../../src/report/clean.js';
 import { renderHtmlReport } from '../../src/report/html.js';
 import { HOSTILE, makeFixture } from './fixture.js';
 
@@ -58,6 +59,12 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
     expect(requests).toEqual([]);
     expect(dialogs).toEqual([]);
     expect(await page.locator('img').count()).toBe(0);
+  });
+
+  it('shows hostile names as the same text once the browser has parsed them (the parser as referee)', async () => {
+    const shown = await page.$$eval('#summary td.name', (tds) => tds.map((td) => td.textContent ?? ''));
+    for (const name of Object.values(HOSTILE)) expect(shown).toContain(cleanText(name, 300));
+    expect(await page.locator('script').count()).toBe(1);
   });
 
   it('draws every SVG with sized shapes', async () => {

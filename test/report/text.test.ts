@@ -1,0 +1,47 @@
+import { describe, expect, it } from 'vitest';
+import { renderText } from '../../src/report/text.js';
+import { HOSTILE, makeFixture } from './fixture.js';
+
+// ECMA-48 (ANSI X3.64) control sequences start with ESC (0x1B); a terminal report without colour
+// must contain none, and metric names must never be able to inject one.
+const ESC = '\u001b';
+
+describe('renderText', () => {
+  const { report } = makeFixture();
+
+  it('prints the verdict, the counts and every status word without colour', () => {
+    const out = renderText(report, { color: false });
+    expect(out).not.toContain(ESC);
+    expect(out.split('\n')[0]).toContain('REGRESSED');
+    expect(out).toContain('1 regressed, 1 improved, 1 missing, 2 ok, 1 learning, 1 new, 1 ignored');
+    for (const word of ['▲ regressed', '▼ improved', '● ok', '✕ missing (1): search/index-size', '◌ learning (1): parse/front-matter', '✚ new (1): image/resize', '– ignored (1): legacy/old-bench']) {
+      expect(out).toContain(word);
+    }
+    expect(out).toContain('group timings: regressed');
+  });
+
+  it('lists regressed and improved before ok in the table', () => {
+    const out = renderText(report, { color: false });
+    const at = (name: string): number => out.indexOf(`  ${name} `);
+    expect(at('build/time')).toBeGreaterThan(0);
+    expect(at('build/time')).toBeLessThan(at('render/page-md'));
+    expect(at('render/page-md')).toBeLessThan(at('bundle/app.js.gz'));
+  });
+
+  it('colours only when asked, and keeps the words when it does', () => {
+    const out = renderText(report, { color: true });
+    expect(out).toContain(ESC);
+    const plain = out.replace(/\u001b\[[0-9;]*m/g, '');
+    expect(plain).toBe(renderText(report, { color: false }));
+  });
+
+  it('keeps escape sequences, bidi overrides and line breaks of metric names out of the terminal', () => {
+    const hostile = Object.values(HOSTILE).map((name) => ({ name: `${name}\nsecond line`, unit: 'u\u001b[2J', centre: 5, spread: 1, now: 5, status: 'ok' as const }));
+    const out = renderText(makeFixture(hostile).report, { color: false });
+    expect(out).not.toContain(ESC);
+    expect(out).not.toMatch(/[\u0000-\u0009\u000B-\u001F\u202A-\u202E\u2066-\u2069]/);
+    expect(out).not.toMatch(/^second line/m);
+    // Names are capped, so a 10 KB name cannot flood the log.
+    expect(out).not.toContain('L'.repeat(100));
+  });
+});
