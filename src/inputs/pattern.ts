@@ -7,7 +7,7 @@ export interface FilePattern {
   prefix?: string;
 }
 
-const ARROW = /^(.*?\S)\s*=>\s*(.*)$/s;
+const ARROW = /^(.*?)\s*=>\s*(.*)$/s;
 
 /**
  * Splits `path-or-glob => prefix`: every metric read from the files the pattern matches is named
