@@ -38,13 +38,13 @@ export function importCommand(ctx: CommandContext): Command {
     const text = await readUserText(runsPath, '--runs');
     const parsed = parseImportRuns(text, options.runs);
     const { history, store } = await openHistory(ctx, options.history, options.series);
-    const result = importRuns(history, parsed.runs);
-    const skipped = [...parsed.skipped, ...result.skipped];
+    const result = importRuns(history, parsed);
+    const skipped = result.skipped;
     for (const skip of skipped.slice(0, SHOWN_SKIPS)) ctx.io.stderr(`bellgate: skipped ${skip.where}: ${skip.reason}\n`);
     if (skipped.length > SHOWN_SKIPS) ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
     if (store) await store.save(result.history, history.runs.length);
     ctx.io.stdout(
-      `imported ${options.runs}: ${result.added} runs added, ${result.updated} updated, ${skipped.length} skipped; ` +
+      `imported ${options.runs}: ${result.added} runs added, ${result.updated} updated, ${result.unchanged} unchanged, ${skipped.length} skipped; ` +
         `${result.history.runs.length} runs in ${store?.describe() ?? options.history}\n`,
     );
   });

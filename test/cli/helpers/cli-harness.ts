@@ -1,0 +1,61 @@
+import { mkdtempSync, rmSync, writeFileSync, mkdirSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { dirname, join } from 'node:path';
+import { runCli } from '../../../src/cli/main.js';
+
+/** What one in-process `bellgate` invocation produced. */
+export interface CliResult {
+  code: number;
+  stdout: string;
+  stderr: string;
+}
+
+/** Runs the CLI in-process in `cwd` with a captured terminal; no process exit, no real env. */
+export async function bellgate(
+  cwd: string,
+  argv: string[],
+  options: { env?: Record<string, string | undefined>; isTTY?: boolean } = {},
+): Promise<CliResult> {
+  let stdout = '';
+  let stderr = '';
+  const code = await runCli(argv, {
+    stdout: (s) => (stdout += s),
+    stderr: (s) => (stderr += s),
+    cwd,
+    env: options.env ?? {},
+    isTTY: options.isTTY ?? false,
+  });
+  return { code, stdout, stderr };
+}
+
+/** A scratch folder with helpers to write files into it; `remove()` in afterAll. */
+export function scratch(prefix = 'bellgate-cli-'): { dir: string; write: (path: string, text: string) => string; remove: () => void } {
+  const dir = mkdtempSync(join(tmpdir(), prefix));
+  return {
+    dir,
+    write(path, text) {
+      const full = join(dir, path);
+      mkdirSync(dirname(full), { recursive: true });
+      writeFileSync(full, text);
+      return full;
+    },
+    remove: () => rmSync(dir, { recursive: true, force: true }),
+  };
+}
+
+/**
+ * A version-1 history document written by hand (the simple per-run form every version of
+ * Bellgate reads): one run per value, ids r1.., a day apart.
+ */
+export function handHistoryV1(series: string, values: Record<string, number[]>, unit?: string): string {
+  const names = Object.keys(values);
+  const length = Math.max(...names.map((n) => values[n]?.length ?? 0));
+  const runs = Array.from({ length }, (_, i) => ({
+    id: `r${i + 1}`,
+    time: new Date(Date.UTC(2026, 0, 1 + i)).toISOString(),
+    ref: 'refs/heads/main',
+    values: Object.fromEntries(names.map((n) => [n, values[n]?.[i] ?? null])),
+    ...(unit === undefined ? {} : { units: Object.fromEntries(names.map((n) => [n, unit])) }),
+  }));
+  return JSON.stringify({ schema: 'bellgate.history/1', series, runs });
+}
