@@ -66,14 +66,13 @@ function readValues(
   }
   for (const name of Object.keys(values)) {
     const v = values[name];
-    const vPath = key(`${path}.values`, name);
     let column = columns.get(name);
     if (!column) {
       column = { values: new Array<number>(runCount).fill(NaN) };
       columns.set(name, column);
     }
     if (typeof v === 'number' && Number.isFinite(v)) column.values[r] = v;
-    else if (v !== null) report(vPath, `a value must be a finite number or null, found ${typeName(v)}`);
+    else if (v !== null) report(key(`${path}.values`, name), `a value must be a finite number or null, found ${typeName(v)}`);
     const unit = isObject(units) && Object.hasOwn(units, name) ? units[name] : undefined;
     if (typeof unit === 'string') column.unit = unit;
     else if (unit !== undefined && unit !== null) report(key(`${path}.units`, name), `a unit must be a string, found ${typeName(unit)}`);

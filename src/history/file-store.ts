@@ -4,14 +4,17 @@ import { basename, dirname, join } from 'node:path';
 import { InputError } from '../model/input-error.js';
 import { parseHistory, serializeHistory } from './document.js';
 import { emptyHistory, type History } from './history.js';
+import { healConcurrent } from './merge.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 
 /**
  * A history kept in one local file (any version readable, version 2 written).
  * - load: a missing file is an empty history; a file that cannot be read, is not a history
  *   document, or holds another series is a StoreError — and it is never overwritten.
- * - save: refuses a shrink no trim explains (guardAgainstLoss), re-checks that the file on disk is
- *   still a readable history of this series, then writes atomically: a temp file in the same
+ * - save: refuses a shrink no trim explains (guardAgainstLoss), re-reads the file (it must still
+ *   be a readable history of this series) and keeps the runs another writer added since the load
+ *   (healConcurrent; the window between re-read and rename is left to the caller to keep single-
+ *   writer, e.g. one CI job per series), then writes atomically: a temp file in the same
  *   folder (so rename stays on one file system), fsync, rename over the old file, fsync the folder.
  *   A crash leaves either the old or the new document, never half of one. Creates the folder.
  *
@@ -63,10 +66,10 @@ export function createFileStore(path: string, series: string): HistoryStore {
         throw new StoreError(`refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`, { where });
       }
       guardAgainstLoss(where, h, readCount);
-      await readExisting();
+      const stored = await readExisting();
       let text: string;
       try {
-        text = serializeHistory(h);
+        text = serializeHistory(stored ? healConcurrent(h, stored) : h);
       } catch (cause) {
         throw new StoreError(`the history cannot be written: ${messageOf(cause)}`, { where, cause });
       }

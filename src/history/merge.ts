@@ -1,7 +1,7 @@
 import { InputError } from '../model/input-error.js';
 import type { Run } from '../inputs/run.js';
 import type { History, MetricColumn, RunInfo } from './history.js';
-import { compareRuns } from './run-order.js';
+import { compareRuns, timeKey } from './run-order.js';
 
 /**
  * The union of two histories of the same series, by run id: a run id held by both sides takes
@@ -85,4 +85,31 @@ export function trimHistory(h: History, keep: number): History {
   const total = (h.trimmed ?? 0) + drop;
   if (total > 0) trimmed.trimmed = total;
   return trimmed;
+}
+
+/**
+ * What a store writes when the stored document changed after it was loaded: `h`, plus the runs of
+ * `stored` that another writer added meanwhile — ids `h` lacks that are not older than h's oldest
+ * run (older ones are what h trimmed on purpose, and stay deleted). `h` wins every shared id.
+ * A run without a time counts as the oldest. Pure.
+ *
+ * @example healConcurrent(mine, onDisk).runs // my runs and the other writer's new ones
+ */
+export function healConcurrent(h: History, stored: History): History {
+  const mine = new Set(h.runs.map((r) => r.id));
+  const oldest = h.runs.reduce((min, r) => Math.min(min, timeKey(r)), Infinity);
+  const keep: number[] = [];
+  stored.runs.forEach((r, i) => {
+    if (!mine.has(r.id) && timeKey(r) >= oldest) keep.push(i);
+  });
+  if (keep.length === 0) return h;
+  const columns = new Map<string, MetricColumn>();
+  for (const [name, column] of stored.columns) {
+    const values = keep.map((i) => column.values[i] ?? NaN);
+    columns.set(name, column.unit === undefined ? { values } : { unit: column.unit, values });
+  }
+  const added: History = { series: h.series, runs: keep.map((i) => ({ ...stored.runs[i] }) as RunInfo), columns };
+  const healed = mergeHistories(added, h);
+  if (h.trimmed !== undefined) healed.trimmed = h.trimmed;
+  return healed;
 }

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
 import { serializeHistory } from '../../src/history/document.js';
 import { createFileStore } from '../../src/history/file-store.js';
-import { appendRun, mergeHistories, trimHistory } from '../../src/history/merge.js';
+import { appendRun, trimHistory } from '../../src/history/merge.js';
 import { StoreError } from '../../src/history/store.js';
 
 const run = (value: number): Run => ({ metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]), meta: new Map() });
@@ -120,7 +120,7 @@ describe('createFileStore', () => {
     expect(error.message).toMatch(/cannot read/);
   });
 
-  it('two writers from the same start: the later save wins the file, a merge of both heals it', async () => {
+  it('two writers from the same start: the later save keeps the run the first one added', async () => {
     const path = join(root, 'concurrent.json');
     const store = createFileStore(path, 'linux-x64');
     await store.save(appendRun(await store.load(), info(1), run(1)), 0);
@@ -130,9 +130,19 @@ describe('createFileStore', () => {
     const b = appendRun(startB, info(3), run(3));
     await store.save(a, 1);
     await store.save(b, 1);
-    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8101-1', '8103-1']);
-    const healed = mergeHistories(await store.load(), a);
-    await store.save(healed, 2);
-    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1']);
+    const healed = await store.load();
+    expect(healed.runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1']);
+    expect(healed.columns.get('build/compile')?.values).toEqual([1, 2, 3]);
+  });
+
+  it('runs trimmed on purpose stay deleted even though the file still held them', async () => {
+    const path = join(root, 'trim-heal.json');
+    const store = createFileStore(path, 'linux-x64');
+    let h = await store.load();
+    for (let n = 1; n <= 4; n++) h = appendRun(h, info(n), run(n));
+    await store.save(h, 0);
+    const loaded = await store.load();
+    await store.save(trimHistory(appendRun(loaded, info(5), run(5)), 2), 4);
+    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8104-1', '8105-1']);
   });
 });
