@@ -48,14 +48,9 @@ function readLong(rows: Row[], columns: string[], file: string, sink: ReadingSin
   }
 }
 
-const BRACKET_UNIT = /^(.*?)\s*\[([^[\]]*)\]$/s;
-
 function readWide(rows: Row[], file: string, sink: ReadingSink): void {
   const headerWhere = `${file}:1`;
-  const metrics = rows[0]!.record.map((cell) => {
-    const m = BRACKET_UNIT.exec(cell);
-    return m ? { name: m[1]!, unit: m[2]!.trim() } : { name: cell, unit: undefined };
-  });
+  const metrics = rows[0]!.record.map(splitUnit);
   const seen = new Set<string>();
   for (const [i, { name }] of metrics.entries()) {
     if (seen.has(name)) {
@@ -89,4 +84,14 @@ function parseRows(text: string, file: string): Row[] {
       cause: error,
     });
   }
+}
+
+/** `build time [s]` -> name "build time", unit "s"; a cell without a final `[...]` is all name. */
+function splitUnit(cell: string): { name: string; unit: string | undefined } {
+  // Index arithmetic, not a regular expression: a header cell may be a megabyte long.
+  const open = cell.lastIndexOf('[');
+  if (!cell.endsWith(']') || open < 0) return { name: cell, unit: undefined };
+  const unit = cell.slice(open + 1, -1);
+  if (unit.includes(']')) return { name: cell, unit: undefined };
+  return { name: cell.slice(0, open).trimEnd(), unit: unit.trim() };
 }

@@ -4,7 +4,8 @@ import { METRIC_FORMATS, type MetricFormat } from './formats.js';
 const HEAD_LINES = 64;
 const GO_RESULT = /^Benchmark(?:$|[^\p{Ll}\s])\S*\s+\d+\s+\S+\s+\S+/u;
 const OM_COMMENT = /^#\s+(?:TYPE|HELP|UNIT)\s+\S|^#\s*EOF\s*$/;
-const OM_SAMPLE = /^[a-zA-Z_:][a-zA-Z0-9_:]*(?:\{.*\})?[ \t]+[+-]?(?:\.?\d\S*|inf|nan)(?:[ \t]+\S+)?(?:[ \t]+#.*)?$/i;
+// Label sets are matched quote-aware and without backtracking between alternatives.
+const OM_SAMPLE = /^[a-zA-Z_:][a-zA-Z0-9_:]*(?:\{(?:[^"}]|"(?:[^"\\]|\\.)*")*\})?[ \t]+[+-]?(?:\.?\d\S*|inf|nan)(?:[ \t]+\S+)?(?:[ \t]+#.*)?$/i;
 const EXTENSIONS = new Map<string, MetricFormat>([
   ['json', 'json'], ['jsonl', 'jsonl'], ['ndjson', 'jsonl'], ['csv', 'csv'],
   ['prom', 'openmetrics'], ['om', 'openmetrics'], ['metrics', 'openmetrics'], ['xml', 'junit'],

@@ -6,7 +6,7 @@ import type { ReadResult } from './run.js';
 
 // Go proposal 14313 ("Go benchmark data format"): a configuration line is `key: value` where key
 // begins with a lower-case letter and holds no space and no upper-case letter.
-const CONFIG_LINE = /^(\p{Ll}[^\s\p{Lu}]*?):(?:[ \t]+(.*?))?[ \t\r]*$/u;
+const CONFIG_LINE = /^(\p{Ll}[^\s\p{Lu}:]*):(?:[ \t]+(.*))?$/su;
 // A result line's first field is "Benchmark" followed by the end of the field or a character
 // that is not lower case (BenchmarkDecode, Benchmark/sub, but not Benchmarking).
 const BENCH_NAME = /^Benchmark(?:$|[^\p{Ll}])/u;
@@ -45,7 +45,7 @@ export function readGoBench(text: string, file: string, limits: InputLimits = DE
     const setting = CONFIG_LINE.exec(line);
     if (setting) {
       const values = config.get(setting[1]!) ?? [];
-      const value = setting[2] ?? '';
+      const value = (setting[2] ?? '').trim();
       if (!values.includes(value)) values.push(value);
       config.set(setting[1]!, values);
       return;

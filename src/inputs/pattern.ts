@@ -7,8 +7,6 @@ export interface FilePattern {
   prefix?: string;
 }
 
-const ARROW = /^(.*?)\s*=>\s*(.*)$/s;
-
 /**
  * Splits `path-or-glob => prefix`: every metric read from the files the pattern matches is named
  * `<prefix>/<name>` (`bench/*.txt => server` turns `BenchmarkRoute/ns/op` into
@@ -18,13 +16,13 @@ const ARROW = /^(.*?)\s*=>\s*(.*)$/s;
  * @example splitPattern('out/*.json => api') // { pattern: 'out/*.json', prefix: 'api' }
  */
 export function splitPattern(text: string): FilePattern {
-  const m = ARROW.exec(text.trim());
-  const pattern = (m ? m[1]! : text).trim();
+  const arrow = text.indexOf('=>');
+  const pattern = (arrow < 0 ? text : text.slice(0, arrow)).trim();
   if (pattern === '') {
     throw new InputError(`empty metric file pattern in ${JSON.stringify(text)}`, { fix: 'write a path or glob, optionally followed by "=> prefix"' });
   }
-  if (!m) return { pattern };
-  const prefix = m[2]!.trim().replace(/^\/+|\/+$/g, '');
+  if (arrow < 0) return { pattern };
+  const prefix = trimSlashes(text.slice(arrow + 2).trim());
   if (prefix === '') {
     throw new InputError(`empty prefix after "=>" in ${JSON.stringify(text)}`, { fix: 'write "path => prefix", or leave out "=>"' });
   }
@@ -35,4 +33,12 @@ export function splitPattern(text: string): FilePattern {
 /** `<prefix>/<name>`, or the name itself without a prefix; the result is checked again (length). */
 export function prefixed(prefix: string | undefined, name: string, where?: string): string {
   return prefix === undefined ? name : checkMetricName(`${prefix}/${name}`, where);
+}
+
+function trimSlashes(text: string): string {
+  let start = 0;
+  let end = text.length;
+  while (start < end && text[start] === '/') start++;
+  while (end > start && text[end - 1] === '/') end--;
+  return text.slice(start, end);
 }
