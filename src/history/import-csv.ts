@@ -76,6 +76,7 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
     const add = (name: string, raw: string, unit: string | undefined): void => {
       const value = valueFrom(raw, true);
       if (typeof value === 'string') return skip(`metric ${JSON.stringify(name)}: ${value}`);
+      if (target.metrics.has(name)) skip(`metric ${JSON.stringify(name)} of run ${JSON.stringify(target.info.id)} was given before; this row's value is kept`);
       target.metrics.set(name, value);
       if (unit) target.units.set(name, unit);
     };

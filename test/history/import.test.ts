@@ -90,6 +90,12 @@ describe('parseImportRuns: CSV', () => {
     expect(outcome).toMatchObject({ added: 1, updated: 0, unchanged: 1 });
   });
 
+  it('notes a metric given twice for one run (long form); the later row counts', () => {
+    const parsed = parseImportRuns('id,time,name,value\n1,2026-03-01,a,1\n1,2026-03-01,a,2\n', 'd.csv');
+    expect(parsed.runs[0]?.metrics.get('a')).toBe(2);
+    expect(parsed.skipped).toEqual([{ where: 'd.csv:3', reason: expect.stringMatching(/"a" of run "1" was given before/) }]);
+  });
+
   it('reads the wide form (one row per run), units from "name [unit]" headers, empty cells as missing', () => {
     const csv = ['ID,Time,SHA,Ref,build/compile [s],route/match-static [ns],tiles', '8101-1,2026-03-01T10:00:00Z,aaa,,41.25,,3', '8102-1,2026-03-02 10:00,bbb,main,40.5,412.5,', '8103-1,2026-03-03,ccc,main,abc,1,2'].join('\n');
     const parsed = parseImportRuns(csv, 'wide.csv');
