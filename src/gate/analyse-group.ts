@@ -27,7 +27,11 @@ export interface GroupAnalysis {
   shrinkage: number;
   /** Each member's share of the distance (mahalanobisContributions / distance). */
   shares: number[];
-  /** The group's one joint tail: min(1, 2 min(distanceTail, ownTail)) (Bonferroni over both checks). */
+  /**
+   * The group's one joint tail: min(1, 2 min(distanceTail, ownTail)) (Bonferroni over both
+   * checks); only ownTail while runs do not exceed members, where the chi-square stand-in for
+   * Hotelling's law is far too optimistic about a covariance estimated from so few runs.
+   */
   tail: number;
 }
 
@@ -35,7 +39,7 @@ export interface GroupAnalysis {
  * Analyses a group of metrics judged together (issue 6):
  * - joint: squared Mahalanobis distance of this run from the baseline mean, covariance shrunk
  *   toward its diagonal (Ledoit & Wolf 2004), tail by Hotelling's T^2 for a new observation
- *   (chi-square when runs do not exceed members, where Hotelling's law is undefined);
+ *   (chi-square, reported only, when runs do not exceed members: Hotelling's law is undefined);
  * - common move c = mean of the signed standardised values, judged against the common move of
  *   each baseline run (predictive Student-t, n - 1 dof), so a slow runner within what runners
  *   have shown passes while a slowdown of everything beyond it does not;
@@ -70,15 +74,19 @@ export function analyseGroup(frame: GroupFrame): GroupAnalysis {
     distanceTail,
     shrinkage: shrunk.shrinkage,
     shares: contributions.map((c) => (distance > 0 ? c / distance : 0)),
-    tail: Math.min(1, 2 * Math.min(distanceTail, ownTail)),
+    tail: n > p ? Math.min(1, 2 * Math.min(distanceTail, ownTail)) : ownTail,
   };
 }
+
+const MIN_MOVE_SD = 1e-6;
 
 /** A new value against the history of the same quantity: z and the predictive t tail. */
 function judgeMove(history: readonly number[], value: number): Move {
   const { n, mean, squares } = meanAndSquares(history);
-  const sd = Math.sqrt(squares / (n - 1));
-  if (!(sd > 0)) return { z: 0, tail: 1 };
+  // Values are in member sd units; a history with no spread at all (members moving in perfect
+  // lockstep) gets a floor of 1e-6 of a member's sd, far below any real noise, so a move off it
+  // is extreme instead of undefined.
+  const sd = Math.max(Math.sqrt(squares / (n - 1)), MIN_MOVE_SD);
   const z = (value - mean) / sd;
   return { z, tail: studentTail(z / Math.sqrt(1 + 1 / n), n - 1, 'both') };
 }

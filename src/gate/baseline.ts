@@ -16,6 +16,11 @@ export interface SelectedBaseline {
   relativeTo?: string;
   /** Runs of the history that hold this metric at all (before pairing and windowing). */
   available: number;
+  /**
+   * The whole window when change points shortened it. Groups align on it: one member's level
+   * change must not cut every member's history (it only widens that member's own moves).
+   */
+  window?: { values: number[]; runIds: string[] };
 }
 
 /**
@@ -63,8 +68,10 @@ export function selectBaseline(history: History, name: string, settings: MetricS
 
 /** Keeps only the runs after the last level change, once they are at least `minRuns`. */
 function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedBaseline {
-  if (baseline.values.length < 2 * Math.max(minRuns, 1)) return baseline;
-  const starts = detectChangePoints(baseline.values, { minSegment: Math.max(minRuns, 2) });
+  if (baseline.values.length <= minRuns) return baseline;
+  // The detector's own shortest segment (5 runs), not min-runs: forcing longer segments would
+  // place a fresh change too early and mix the old level into the new baseline.
+  const starts = detectChangePoints(baseline.values);
   const last = starts.filter((s) => s > 0 && s < baseline.values.length).at(-1);
   if (last === undefined || baseline.values.length - last < minRuns) return baseline;
   return {
@@ -72,6 +79,7 @@ function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedB
     values: baseline.values.slice(last),
     runIds: baseline.runIds.slice(last),
     since: baseline.runIds[last]!,
+    window: { values: baseline.values, runIds: baseline.runIds },
   };
 }
 

@@ -33,7 +33,7 @@ export function decideGroup(
     const own = analysis.own[j]!;
     const share = analysis.shares[j]!;
     const main =
-      (own.tail * 2 * analysis.p < level) || (analysis.distanceTail * 2 < level && share >= MAIN_SHARE * maxShare);
+      (own.tail * 2 * analysis.p < level) || (analysis.n > analysis.p && analysis.distanceTail * 2 < level && share >= MAIN_SHARE * maxShare);
     const describe = `in group ${name}: own move ${signed(own.z)} sd, ${formatPercent(share)} of the joint distance`;
     const single = input.score;
     if (test.significant && main) {

@@ -24,7 +24,7 @@ export interface GroupFrame {
 }
 
 /**
- * Aligns the members' baselines on the runs they share and standardises each column by its mean
+ * Aligns the members' windows (before any change-point shortening) on the runs they share and standardises each column by its mean
  * and n-1 sd over those runs (sd floored at the member's resolution). A member whose column has
  * no spread cannot be standardised and is left out (`dropped`), to be judged alone.
  * O(runs x members).
@@ -38,7 +38,8 @@ export function frameGroup(inputs: readonly GroupMemberInput[]): GroupFrame & { 
   const current: number[] = [];
   for (const input of inputs) {
     const byRun = new Map<string, number>();
-    input.baseline.runIds.forEach((id, i) => byRun.set(id, input.baseline.values[i]!));
+    const whole = input.baseline.window ?? input.baseline;
+    whole.runIds.forEach((id, i) => byRun.set(id, whole.values[i]!));
     const column = shared.map((id) => byRun.get(id)!);
     const { settings } = input.score;
     const stats = column.length >= 2 ? meanAndSquares(column) : { n: column.length, mean: 0, squares: 0 };
@@ -57,10 +58,11 @@ export function frameGroup(inputs: readonly GroupMemberInput[]): GroupFrame & { 
   return { members, rows, current, dropped };
 }
 
-/** Run ids present in every member's baseline, in the first member's (history) order. */
+/** Run ids present in every member's whole window, in the first member's (history) order. */
 function sharedRunIds(inputs: readonly GroupMemberInput[]): string[] {
   const [first, ...others] = inputs;
   if (first === undefined) return [];
-  const sets = others.map((input) => new Set(input.baseline.runIds));
-  return first.baseline.runIds.filter((id) => sets.every((set) => set.has(id)));
+  const ids = (input: GroupMemberInput): string[] => (input.baseline.window ?? input.baseline).runIds;
+  const sets = others.map((input) => new Set(ids(input)));
+  return ids(first).filter((id) => sets.every((set) => set.has(id)));
 }
