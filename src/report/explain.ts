@@ -44,7 +44,7 @@ export function renderExplain(input: ExplainInput): string {
   const unit = m.unit === undefined ? undefined : cleanText(m.unit, 20);
   const out: string[] = [`${name} — ${STATUS_GLYPH[m.status]} ${m.status}`];
   const b = m.baseline;
-  if (!b || !(b.sd > 0) || !Number.isFinite(b.mean)) {
+  if (!b || !(b.sd > 0 && Number.isFinite(b.sd)) || !Number.isFinite(b.mean)) {
     out.push(`no fitted baseline: ${cleanText(m.reason, 400)}`);
     if (m.value !== undefined) out.push(`this run: ${formatValue(m.value, unit)}`);
     return out.join('\n') + '\n';

@@ -34,9 +34,10 @@ export function formatValue(x: number | undefined, unit?: string): string {
  */
 export function formatChange(change: number | undefined): string {
   if (change === undefined || !Number.isFinite(change)) return NOT_AVAILABLE;
-  const pct = change * 100;
+  // A change near the largest double would overflow to Infinity when turned into percent.
+  const pct = Math.max(-Number.MAX_VALUE, Math.min(Number.MAX_VALUE, change * 100));
   const abs = Math.abs(pct);
-  const body = abs === 0 ? '0' : abs >= 10 ? abs.toFixed(1) : abs >= 1 ? abs.toFixed(2) : String(Number(abs.toPrecision(2)));
+  const body = abs === 0 ? '0' : abs >= 1e6 ? formatNumber(abs, 3) : abs >= 10 ? abs.toFixed(1) : abs >= 1 ? abs.toFixed(2) : formatNumber(abs, 2);
   return `${pct > 0 ? '+' : pct < 0 ? '-' : '±'}${body}%`;
 }
 
@@ -56,7 +57,7 @@ export function formatSigma(z: number | undefined): string {
 export function formatDensity(r: number | undefined): string {
   if (r === undefined || !Number.isFinite(r)) return NOT_AVAILABLE;
   if (r === 0) return '0';
-  if (r >= 1e-3) return String(Number(r.toPrecision(2)));
+  if (r >= 1e-3) return formatNumber(r, 2);
   return r.toExponential(1).replace('e+', 'e');
 }
 

@@ -48,11 +48,17 @@ export function leftAxis(scale: AxisScale, x: number, label: string, count = 5):
  * would flatten a 3% spread into a line).
  */
 export function valueScale(log: boolean, lo: number, hi: number, range: [number, number]): AxisScale {
-  if (lo === hi) {
-    const d = lo === 0 ? 1 : Math.abs(lo) * 0.05;
+  // Near the ends of the doubles a log axis has no usable ticks; draw those values linearly.
+  log = log && lo > 1e-200 && hi < 1e200;
+  // A (near-)empty span has no ticks to speak of (d3 would try to make billions): widen it by 5%,
+  // or by 1 around zero and denormal values.
+  if (!(hi - lo > Math.max(Math.abs(lo), Math.abs(hi)) * 1e-12 && hi - lo > 1e-200)) {
+    const d = Math.abs(lo) > 1e-200 ? Math.abs(lo) * 0.05 : 1;
     [lo, hi] = log ? [lo / 1.05, hi * 1.05] : [lo - d, hi + d];
   }
-  if (!log) return scaleLinear().domain([lo, hi]).range(range).nice();
   const pad = (hi / lo) ** 0.04;
-  return scaleLog().domain([lo / pad, hi * pad]).range(range);
+  const [a, b] = [lo / pad, hi * pad];
+  // Values so extreme that the padded log domain leaves the doubles are drawn on a linear axis.
+  if (!log || !(a > 0) || !Number.isFinite(b)) return scaleLinear().domain([lo, hi]).range(range).nice();
+  return scaleLog().domain([a, b]).range(range);
 }

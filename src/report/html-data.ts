@@ -1,4 +1,4 @@
-import type { MetricColumn, RunInfo } from '../history/history.js';
+import type { History, MetricColumn, RunInfo } from '../history/history.js';
 import type { MetricResult } from '../gate/report.js';
 import { cutoffSigma } from '../model/tails.js';
 
@@ -42,14 +42,27 @@ export interface Band {
 
 /**
  * The band in the metric's own unit: on the log scale the edges are exp(mean ± k sd), so the
- * band is asymmetric around the geometric mean. Undefined without a usable fit, or when the fit
- * is of ratios to another metric (relative-to), whose scale differs from the history's values.
+ * band is asymmetric around the geometric mean. Undefined without a usable fit. (With relative-to
+ * the band is of ratios; chartColumn gives the matching values.)
  * @example cutoffBand({ ...m, baseline: { n: 9, mean: 10, sd: 1 } }, 0.01) // { mean: 10, low: 6.965, high: 13.035 }
  */
 export function cutoffBand(m: MetricResult, cutoff: number): Band | undefined {
   const b = m.baseline;
-  if (!b || b.relativeTo !== undefined || !Number.isFinite(b.mean) || !(b.sd >= 0) || !(cutoff > 0 && cutoff < 1)) return undefined;
+  if (!b || !Number.isFinite(b.mean) || !(b.sd >= 0 && Number.isFinite(b.sd)) || !(cutoff > 0 && cutoff < 1)) return undefined;
   const k = cutoffSigma(cutoff);
   const back = (t: number): number => (b.scale === 'log' ? Math.exp(t) : t);
   return { mean: back(b.mean), low: back(b.mean - k * b.sd), high: back(b.mean + k * b.sd) };
+}
+
+/**
+ * The values a metric's charts show: its history column, or with relative-to the run-by-run ratio
+ * to the reference metric, the quantity the gate fitted and judged (NaN where either is missing
+ * or the reference is 0).
+ */
+export function chartColumn(history: History, m: MetricResult): MetricColumn | undefined {
+  const own = history.columns.get(m.name);
+  const refName = m.baseline?.relativeTo;
+  if (!own || refName === undefined) return own;
+  const ref = history.columns.get(refName);
+  return { values: own.values.map((v, i) => { const r = ref?.values[i]; return r === undefined || r === 0 ? NaN : v / r; }) };
 }

@@ -27,7 +27,7 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
   const band = cutoffBand(m, cutoff);
   const log = b?.scale === 'log';
   const vals = values.filter((v) => Number.isFinite(v) && (!log || v > 0));
-  if (!b || !band || !(b.sd > 0) || vals.length === 0) return '';
+  if (!b || !band || !(b.sd > 0 && Number.isFinite(b.sd)) || vals.length === 0) return '';
   const toFit = (v: number): number => (log ? Math.log(v) : v);
   const given = m.value !== undefined && Number.isFinite(m.value) && (!log || m.value > 0) ? m.value : undefined;
   // A run far out (a 40-sd jump) would squash the baseline into one bar; it is drawn at the edge instead.

@@ -3,7 +3,7 @@ import type { History } from '../history/history.js';
 import { metricCells } from './cells.js';
 import { escapeHtml } from './escape.js';
 import { formatSigma } from './format.js';
-import { baselinePoints, columnPoints } from './html-data.js';
+import { baselinePoints, chartColumn, columnPoints } from './html-data.js';
 import { baselineHistogram } from './html-histogram.js';
 import { historyChart } from './html-history-chart.js';
 import { HTML_SCRIPT } from './html-script.js';
@@ -37,13 +37,16 @@ function summaryRow(m: MetricResult, i: number): string {
 }
 
 function metricSection(m: MetricResult, i: number, history: History): string {
-  const column = history.columns.get(m.name);
+  const column = chartColumn(history, m);
   const baseValues = baselinePoints(columnPoints(column, history.runs), m).map((p) => p.value);
-  const charts = [historyChart(m, column, history.runs, m.cutoff), baselineHistogram(m, baseValues, m.cutoff)].filter((s) => s !== '');
+  // A chart whose coordinates overflowed (values near the largest double) is left out, not drawn wrong.
+  const charts = [historyChart(m, column, history.runs, m.cutoff), baselineHistogram(m, baseValues, m.cutoff)]
+    .filter((s) => s !== '')
+    .map((s) => (/\bNaN\b|Infinity/.test(s) ? '<p class="note-text">This chart cannot be drawn for these values.</p>' : s));
   const unit = m.unit === undefined ? '' : ` <span class="meta">(${escapeHtml(m.unit, 40)})</span>`;
   const reason = escapeHtml(m.reason, 1000).replace(/([^.!?])$/, '$1.');
   const scale = m.baseline?.scale === 'log' ? ' Fitted on the log scale.' : '';
-  const ratio = m.baseline?.relativeTo !== undefined ? ` Fitted as ratios to ${escapeHtml(m.baseline.relativeTo, 300)}; the band is not drawn over raw values.` : '';
+  const ratio = m.baseline?.relativeTo !== undefined ? ` Fitted and drawn as ratios to ${escapeHtml(m.baseline.relativeTo, 300)} in the same run.` : '';
   return (
     `<section class="metric" id="m${i}"><h2><span class="s-${m.status}">${STATUS_GLYPH[m.status]} ${m.status}</span> ${escapeHtml(m.name, 300)}${unit}</h2>` +
     `<p class="reason">${reason}${scale}${ratio}</p>` +

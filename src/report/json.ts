@@ -62,6 +62,11 @@ function group(g: GroupResult): Json {
     level: num(g.level),
     common: { z: num(g.common.z), tail: num(g.common.tail), status: g.common.status },
     shrinkage: num(g.shrinkage),
+    ...extras([
+      ['distanceTail', g.distanceTail === undefined ? undefined : num(g.distanceTail)],
+      ['ownTail', g.ownTail === undefined ? undefined : num(g.ownTail)],
+      ['adjusted', g.adjusted === undefined ? undefined : num(g.adjusted)],
+    ]),
     reason: g.reason,
   };
 }

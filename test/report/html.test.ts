@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { MetricResult } from '../../src/gate/report.js';
-import { cutoffBand } from '../../src/report/html-data.js';
+import { chartColumn, cutoffBand } from '../../src/report/html-data.js';
 import { renderHtmlReport } from '../../src/report/html.js';
 import { jStat } from '../model/jstat.js';
 import { expectClose } from '../helpers/close.js';
@@ -31,9 +31,18 @@ describe('cutoffBand', () => {
     expectClose(jStat.normal.pdf(Math.log(band.high), Math.log(100), 0.1) / peak, 0.01, 1e-9);
   });
 
-  it('draws no band for ratio fits or without a baseline', () => {
-    expect(cutoffBand({ ...base, baseline: { n: 30, mean: 1, sd: 0.1, relativeTo: 'calib' } }, 0.01)).toBeUndefined();
+  it('draws no band without a baseline or with a cutoff outside (0, 1)', () => {
     expect(cutoffBand({ ...base, baseline: undefined }, 0.01)).toBeUndefined();
+    expect(cutoffBand(base, 1)).toBeUndefined();
+    expect(cutoffBand(base, 0)).toBeUndefined();
+  });
+
+  it('charts ratios to the reference metric for relative-to fits', () => {
+    const history = { series: 's', runs: [{ id: 'a' }, { id: 'b' }, { id: 'c' }], columns: new Map([['m', { values: [10, 12, NaN] }], ['calib', { values: [2, 0, 4] }]]) };
+    const col = chartColumn(history, { ...base, baseline: { n: 3, mean: 5, sd: 1, relativeTo: 'calib' } });
+    expect(col?.values[0]).toBe(5);
+    expect(col?.values.slice(1).every((v) => Number.isNaN(v))).toBe(true);
+    expect(chartColumn(history, base)?.values).toEqual([10, 12, NaN]);
   });
 });
 
