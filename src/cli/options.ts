@@ -1,4 +1,5 @@
-import { Option, type Command } from 'commander';
+import type { Command } from 'commander';
+import { METRIC_FORMATS } from '../inputs/formats.js';
 
 /** The series used when --series is not given. */
 export const DEFAULT_SERIES = 'default';
@@ -27,16 +28,8 @@ export function seriesOption(cmd: Command): Command {
 
 export function inputOptions(cmd: Command): Command {
   return cmd
-    .addOption(
-      new Option('--input-format <format>', 'read metric files as this format instead of detecting it').choices([
-        'json',
-        'jsonl',
-        'csv',
-        'openmetrics',
-        'gobench',
-        'junit',
-      ]),
-    )
+    // Checked by the readers (metricFormat), which also take spellings like "prometheus".
+    .option('--input-format <format>', `read metric files as this format instead of detecting it: ${METRIC_FORMATS.join(', ')}`)
     .option('--prefix <pattern=prefix...>', 'put "prefix/" before the names of metrics read from files the pattern matches');
 }
 

@@ -36,6 +36,13 @@ describe('usage', () => {
     }
   });
 
+  it('--version prints the version of package.json', async () => {
+    const pkg = JSON.parse(readFileSync(join(import.meta.dirname, '..', '..', 'package.json'), 'utf8')) as { version: string };
+    const r = await bellgate(work.dir, ['--version']);
+    expect(r.code).toBe(0);
+    expect(r.stdout.trim()).toBe(pkg.version);
+  });
+
   it('no command: usage on stderr, exit 2', async () => {
     const r = await bellgate(work.dir, []);
     expect(r.code).toBe(2);
@@ -173,6 +180,33 @@ describe('check', () => {
     const doc = readFileSync(h, 'utf8');
     expect(doc).toContain('pr-9');
     expect(doc).toContain('bellgate.history/2'); // rewritten in the current version
+  });
+});
+
+describe('metric file flags', () => {
+  it('--prefix puts a prefix before the names read from the files a pattern matches', async () => {
+    const f = work.write('pre/a.json', JSON.stringify({ latency: 5 }));
+    const r = await bellgate(work.dir, ['check', '--metrics', 'pre/*.json', '--prefix', 'pre/*.json=api', '--format', 'json']);
+    expect(r.code, r.stderr).toBe(0);
+    const names = (JSON.parse(r.stdout) as { metrics: Array<{ name: string }> }).metrics.map((m) => m.name);
+    expect(names).toEqual(['api/latency']);
+    expect(f).toContain('pre');
+  });
+
+  it('a --prefix without "=": exit 2 showing the form', async () => {
+    const r = await bellgate(work.dir, ['check', '--metrics', calm, '--prefix', 'api']);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('PATTERN=PREFIX');
+  });
+
+  it('--input-format forces a reader; an unknown one: exit 2 listing the formats', async () => {
+    const gob = work.write('bench.out', 'BenchmarkParse-8   1000   1523 ns/op   64 B/op\n');
+    const ok = await bellgate(work.dir, ['check', '--metrics', gob, '--input-format', 'gobench', '--format', 'json']);
+    expect(ok.code, ok.stderr).toBe(0);
+    expect(ok.stdout).toContain('ns/op');
+    const bad = await bellgate(work.dir, ['check', '--metrics', gob, '--input-format', 'yaml']);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toContain('gobench');
   });
 });
 
