@@ -11,17 +11,22 @@ export interface TimingSeries {
   names: string[];
   /** values[k][j]: run k, metric j. */
   values: number[][];
+  /** The shared runner-speed log factor of each run, and each metric's noise-free value. */
+  runner: number[];
+  bases: number[];
 }
 
 export function timingSeries(seed: number, metrics: number, runs: number, runnerSd: number, ownSd: number): TimingSeries {
   const normal = seededNormal(seed);
   const names = Array.from({ length: metrics }, (_, j) => `time/bench-${String(j).padStart(2, '0')}`);
   const bases = names.map((_, j) => 20 + 7 * j);
+  const runner: number[] = [];
   const values = Array.from({ length: runs }, () => {
-    const runner = runnerSd * normal();
-    return bases.map((b) => b * Math.exp(runner + ownSd * normal()));
+    const speed = runnerSd * normal();
+    runner.push(speed);
+    return bases.map((b) => b * Math.exp(speed + ownSd * normal()));
   });
-  return { names, values };
+  return { names, values, runner, bases };
 }
 
 /** The history of runs [from, to) of a series, ids "run-<k>". */
