@@ -2,7 +2,7 @@ import type { InputLimits } from '../config/types.js';
 import { InputError } from '../model/input-error.js';
 import { isRecord, readEntry, readNumbers, describeJson } from './json-entry.js';
 import { parseJsonText, whereInJson } from './json-text.js';
-import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { DEFAULT_LIMITS } from './limits.js';
 import { ReadingSink } from './reading-sink.js';
 import type { ReadResult } from './run.js';
 
@@ -17,7 +17,6 @@ import type { ReadResult } from './run.js';
  * @example readJsonMetrics('{"a": 1}', 'm.json').readings // [{ name: 'a', value: 1, where: 'm.json (a)' }]
  */
 export function readJsonMetrics(text: string, file: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
-  checkLineLengths(text, file, limits);
   const doc = parseJsonText(text, file);
   if (!isRecord(doc)) {
     throw new InputError(`the metric file must hold a JSON object, found ${describeJson(doc)}`, {

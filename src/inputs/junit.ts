@@ -1,7 +1,7 @@
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../model/input-error.js';
-import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { DEFAULT_LIMITS } from './limits.js';
 import { parseDecimal } from './numbers.js';
 import { ReadingSink } from './reading-sink.js';
 import type { ReadResult } from './run.js';
@@ -30,7 +30,6 @@ const parser = new XMLParser({
  * @example readJunit('<testsuite name="s" time="2"><testcase name="t" time="1"/></testsuite>', 'j.xml').readings.map((r) => r.name) // ['s', 's/t']
  */
 export function readJunit(text: string, file: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
-  checkLineLengths(text, file, limits);
   const checked = XMLValidator.validate(text);
   if (checked !== true) {
     const { msg, line, col } = checked.err;

@@ -28,6 +28,9 @@ export function limitError(limit: keyof InputLimits, value: number, where: strin
 
 /**
  * Refuses text with a line longer than `limits.maxLineLength` characters. O(n), no copies.
+ * Applied by the line-oriented readers (JSON Lines, CSV, OpenMetrics, Go benchmark format), whose
+ * work is per line; whole-document formats (own JSON, JUnit XML) are often written on one line and
+ * are bounded by `limits.max-file-bytes` instead.
  * @throws InputError naming the line and `limits.max-line-length`.
  */
 export function checkLineLengths(text: string, file: string, limits: InputLimits): void {

@@ -55,3 +55,22 @@ function countCodePoints(text: string): number {
   }
   return count;
 }
+
+/** Longest unit accepted, in UTF-16 units. */
+export const MAX_UNIT_LENGTH = 64;
+
+/**
+ * Checks a unit string with the same character rule as names (no control or bidirectional
+ * formatting characters) and a length of at most 64: units are printed beside every value.
+ * @throws InputError naming the place.
+ * @example checkUnit('ns/op', 'b.txt:3') // 'ns/op'
+ */
+export function checkUnit(unit: string, where?: string): string {
+  if (unit.length > MAX_UNIT_LENGTH || CONTROL.test(unit) || BIDI.test(unit)) {
+    throw new InputError(`unit ${JSON.stringify(unit.slice(0, 80))} is longer than ${MAX_UNIT_LENGTH} characters or contains control or bidirectional formatting characters`, {
+      where,
+      fix: 'write the unit as short plain text such as ms, B or ns/op',
+    });
+  }
+  return unit;
+}

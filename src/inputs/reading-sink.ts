@@ -1,7 +1,7 @@
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../model/input-error.js';
 import { limitError } from './limits.js';
-import { checkMetricName } from './names.js';
+import { checkMetricName, checkUnit } from './names.js';
 import type { ReadResult } from './run.js';
 
 /**
@@ -18,7 +18,7 @@ export class ReadingSink {
     private readonly limits: InputLimits,
   ) {}
 
-  /** Adds one sample. @throws InputError for a bad name, a non-finite value or too many metrics. */
+  /** Adds one sample. @throws InputError for a bad name or unit, a non-finite value or too many metrics. */
   add(name: string, value: number, unit: string | undefined, where: string): void {
     checkMetricName(name, where);
     if (!Number.isFinite(value)) {
@@ -27,6 +27,7 @@ export class ReadingSink {
         fix: 'leave out metrics that were not measured instead of writing NaN or Infinity',
       });
     }
+    if (unit !== undefined) checkUnit(unit, where);
     this.count(name, where);
     const reading = unit === undefined || unit === '' ? { name, value, where } : { name, value, unit, where };
     this.result.readings.push(reading);

@@ -59,6 +59,14 @@ describe('parseMetricText', () => {
     expect(error.fix).toMatch(/raise limits\.max-line-length/);
   });
 
+  it('applies the line limit to line-oriented formats only (one-line JSON is bounded by file size)', () => {
+    const limits = { ...DEFAULT_LIMITS, maxLineLength: 20 };
+    const oneLine = JSON.stringify({ metrics: [{ name: 'a', value: 1 }, { name: 'b', value: 2 }] });
+    expect(parseMetricText(oneLine, 'm.json', undefined, limits).readings).toHaveLength(2);
+    expect(inputErrorOf(() => parseMetricText('{"name": "a", "value": 1}', 'm.jsonl', 'jsonl', limits)).message).toMatch(/limits\.max-line-length/);
+    expect(inputErrorOf(() => parseMetricText('name,value\nabcdefghijklmnopqrstuvwxyz,1', 'm.csv', 'csv', limits)).where).toBe('m.csv:2');
+  });
+
   it('refuses more than limits.max-metrics distinct metrics while parsing', () => {
     const limits = { ...DEFAULT_LIMITS, maxMetrics: 2 };
     expect(parseMetricText('a 1\nb 2\na 3\n', 'm.prom', undefined, limits).readings).toHaveLength(3);

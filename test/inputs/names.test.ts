@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkMetricName, MAX_NAME_LENGTH } from '../../src/inputs/names.js';
+import { checkMetricName, checkUnit, MAX_NAME_LENGTH } from '../../src/inputs/names.js';
 import { inputErrorOf } from './helpers.js';
 
 describe('checkMetricName', () => {
@@ -39,5 +39,14 @@ describe('checkMetricName', () => {
     }
     // U+200E (left-to-right mark) is not an override and stays allowed.
     expect(checkMetricName('a\u200eb')).toBe('a\u200eb');
+  });
+});
+
+describe('checkUnit', () => {
+  it('accepts plain units and refuses control characters, overrides and long text', () => {
+    expect(checkUnit('µs/op')).toBe('µs/op');
+    expect(inputErrorOf(() => checkUnit('ms\n', 'f:2')).where).toBe('f:2');
+    expect(inputErrorOf(() => checkUnit('m\u202es')).message).toMatch(/bidirectional/);
+    expect(inputErrorOf(() => checkUnit('x'.repeat(65))).message).toMatch(/longer than 64/);
   });
 });
