@@ -22,12 +22,21 @@ export function splitPattern(text: string): FilePattern {
     throw new InputError(`empty metric file pattern in ${JSON.stringify(text)}`, { fix: 'write a path or glob, optionally followed by "=> prefix"' });
   }
   if (arrow < 0) return { pattern };
-  const prefix = trimSlashes(text.slice(arrow + 2).trim());
+  return { pattern, prefix: normalizePrefix(text.slice(arrow + 2), text) };
+}
+
+/**
+ * A prefix as metric names will carry it: trimmed, without slashes at either end, following the
+ * metric name rule. Shared by `pattern => prefix` and the `prefixes` option of readMetricFiles.
+ * @throws InputError for an empty prefix or one the name rule refuses.
+ * @example normalizePrefix(' /api/ ', 'x') // 'api'
+ */
+export function normalizePrefix(text: string, where: string): string {
+  const prefix = trimSlashes(text.trim());
   if (prefix === '') {
-    throw new InputError(`empty prefix after "=>" in ${JSON.stringify(text)}`, { fix: 'write "path => prefix", or leave out "=>"' });
+    throw new InputError(`empty prefix in ${JSON.stringify(where)}`, { fix: 'write "path => prefix", or leave out the prefix' });
   }
-  checkMetricName(prefix, text);
-  return { pattern, prefix };
+  return checkMetricName(prefix, where);
 }
 
 /** `<prefix>/<name>`, or the name itself without a prefix; the result is checked again (length). */

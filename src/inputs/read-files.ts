@@ -6,7 +6,7 @@ import { InputError } from '../model/input-error.js';
 import { collectRun } from './collect.js';
 import { DEFAULT_LIMITS, limitError } from './limits.js';
 import { parseMetricText } from './parse.js';
-import { prefixed, splitPattern } from './pattern.js';
+import { normalizePrefix, prefixed, splitPattern } from './pattern.js';
 import type { ReadResult, Run } from './run.js';
 
 export interface ReadFilesOptions {
@@ -41,7 +41,8 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
   const results: ReadResult[] = [];
   for (const text of patterns) {
     const { pattern, prefix: arrowPrefix } = splitPattern(text);
-    const prefix = arrowPrefix ?? options.prefixes?.get(pattern) ?? options.prefixes?.get(text);
+    const given = options.prefixes?.get(pattern) ?? options.prefixes?.get(text);
+    const prefix = arrowPrefix ?? (given === undefined ? undefined : normalizePrefix(given, `prefix for ${pattern}`));
     for (const file of await expand(pattern, cwd)) {
       const key = `${prefix ?? ''}\u0000${file}`;
       if (done.has(key)) continue;

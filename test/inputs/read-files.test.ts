@@ -30,7 +30,7 @@ describe('splitPattern', () => {
   it('splits "path => prefix" and trims slashes around the prefix', () => {
     expect(splitPattern('out/*.json => /api/')).toEqual({ pattern: 'out/*.json', prefix: 'api' });
     expect(splitPattern(' out/*.json ')).toEqual({ pattern: 'out/*.json' });
-    expect(inputErrorOf(() => splitPattern('out.json =>')).message).toMatch(/empty prefix/);
+    expect(inputErrorOf(() => splitPattern('out.json => /')).message).toMatch(/empty prefix/);
     expect(inputErrorOf(() => splitPattern(' => p')).message).toMatch(/empty metric file pattern/);
   });
 });
@@ -49,7 +49,7 @@ describe('readMetricFiles', () => {
   });
 
   it('prefixes names with "=> prefix" or the prefixes option, joined with /', async () => {
-    const run = await readMetricFiles(['bench/b.txt => server', 'size.json'], options({ prefixes: new Map([['size.json', 'web']]) }));
+    const run = await readMetricFiles(['bench/b.txt => server', 'size.json'], options({ prefixes: new Map([['size.json', 'web/']]) }));
     expect([...run.metrics.keys()].sort()).toEqual(['server/BenchmarkRoute/ns/op', 'web/bundle']);
   });
 
