@@ -21,6 +21,7 @@ const LINE_BREAKS = /[\t\n\r\u2028\u2029\u0085]+/g;
  */
 export function cleanText(s: string, max: number = MAX_SHOWN_LENGTH): string {
   const flat = String(s).replace(LINE_BREAKS, ' ').replace(UNSAFE, '');
+  if (flat.length <= max) return flat; // UTF-16 length bounds the code-point count
   const points = Array.from(flat);
   if (points.length <= max) return flat;
   return points.slice(0, Math.max(0, max - 1)).join('') + '…';

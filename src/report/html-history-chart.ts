@@ -11,28 +11,36 @@ import { formatValue } from './format.js';
 const W = 560;
 const H = 220;
 const M = { top: 14, right: 18, bottom: 42, left: 72 };
+const MIN_RUNS = 120;
+const MAX_RUNS = 400;
 
 /**
  * An SVG of a metric's history over runs (values from the history's column), with the fitted mean
  * as a dashed line, the band where the relative density stays above the cutoff shaded over the
- * baseline runs, and this run marked by its status shape after the last run. On the log scale the
+ * baseline runs, and this run marked by its status shape after the last run (the newest 120-400
+ * runs, as many as the baseline needs). On the log scale the
  * y axis is logarithmic, so the band reads symmetric as it was fitted. Every point has a <title>
  * tooltip (run id, time, value). Returns '' when there is nothing to draw.
  */
 export function historyChart(m: MetricResult, column: MetricColumn | undefined, runs: readonly RunInfo[], cutoff: number): string {
-  const pts = columnPoints(column, runs);
+  const every = columnPoints(column, runs);
+  const base = baselinePoints(every, m);
+  // The newest runs only: enough to show the baseline and some before it, and a page of 500
+  // metrics x 1000 runs stays a few MB.
+  const shown = Math.min(runs.length, Math.min(MAX_RUNS, Math.max(MIN_RUNS, (m.baseline?.n ?? 0) + 20)));
+  const start = runs.length - shown;
+  const pts = every.filter((p) => p.index >= start);
   const now = m.value !== undefined && Number.isFinite(m.value) ? m.value : undefined;
   if (pts.length === 0 && now === undefined) return '';
   const band = cutoffBand(m, cutoff);
-  const base = baselinePoints(pts, m);
   const all = [...pts.map((p) => p.value), ...(now === undefined ? [] : [now]), ...(band ? [band.low, band.high] : [])];
   const log = m.baseline?.scale === 'log' && all.every((v) => v > 0);
   const y = valueScale(log, Math.min(...all), Math.max(...all), [H - M.bottom, M.top]);
-  const x = scaleLinear().domain([0, Math.max(1, runs.length)]).range([M.left, W - M.right]);
+  const x = scaleLinear().domain([start, Math.max(start + 1, runs.length)]).range([M.left, W - M.right]);
   const unit = m.unit === undefined ? '' : escapeHtml(m.unit, 40);
   const parts: string[] = [];
   if (band && base.length > 0) {
-    const first = base[0]?.index ?? 0;
+    const first = Math.max(start, base[0]?.index ?? 0);
     const shade = area<number>()
       .x((i) => x(i))
       .y0(() => y(band.low))
@@ -54,7 +62,7 @@ export function historyChart(m: MetricResult, column: MetricColumn | undefined, 
   if (now !== undefined) {
     parts.push(statusSymbol(m.status, px(x(runs.length)), px(y(now)), `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`));
   }
-  const axes = bottomAxis(x, H - M.bottom, 'run, oldest to newest (last: this run)') + leftAxis(y, M.left, unit || 'value');
+  const axes = bottomAxis(x, H - M.bottom, start > 0 ? `run, newest ${shown} of ${runs.length} (last: this run)` : 'run, oldest to newest (last: this run)') + leftAxis(y, M.left, unit || 'value');
   const title = `history of ${escapeHtml(m.name, 200)}`;
   return `<svg class="chart" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${title}"><title>${title}</title>${axes}${parts.join('')}</svg>`;
 }
