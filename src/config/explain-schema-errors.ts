@@ -7,6 +7,8 @@ import { pointerSegment, type Position, type YamlTree } from './yaml-tree.js';
 
 type SchemaNode = Record<string, unknown>;
 
+const MAX_EXPLAINED = 200;
+
 const SETTING_KEYS = Object.keys(
   ((configSchema.properties as SchemaNode).defaults as SchemaNode).properties as SchemaNode,
 );
@@ -91,7 +93,8 @@ function wrongValue(error: ErrorObject, tree: YamlTree): ConfigProblem {
 export function explainSchemaErrors(errors: readonly ErrorObject[], tree: YamlTree): ConfigProblem[] {
   const problems: ConfigProblem[] = [];
   const branches = errors.filter((e) => e.schemaPath.includes('/anyOf/'));
-  for (const error of errors) {
+  // A message lists 20 problems; explaining thousands (a file of unknown keys) only costs time.
+  for (const error of errors.slice(0, MAX_EXPLAINED)) {
     if (error.schemaPath.includes('/anyOf/')) continue;
     if (error.keyword === 'additionalProperties') {
       problems.push(unknownKey(error, tree));

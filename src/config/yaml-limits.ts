@@ -11,6 +11,12 @@ export const MAX_SCALAR_CHARS = 16 * 1024;
 export const MAX_ALIAS_COUNT = 100;
 /** Most values after aliases are expanded. */
 export const MAX_CONFIG_VALUES = 10_000;
+/**
+ * Most entries (keys, list items, flow commas and brackets) in the text, counted before parsing
+ * so that an oversized document costs a linear scan, not a parse; a large real config has a few
+ * hundred.
+ */
+export const MAX_CONFIG_ENTRIES = 5_000;
 
 const DEEP: Omit<ConfigProblem, 'line' | 'col'> = {
   message: `nesting is deeper than ${MAX_CONFIG_DEPTH} levels`,
@@ -64,15 +70,17 @@ export function checkTokenLimits(tokens: readonly CST.Token[], counter: LineCoun
 }
 
 /**
- * A linear scan of the raw text for the two nesting shapes that make the YAML parser slow down
- * faster than linearly (about 0.6 s for 10,000 "[" and 4 s for 300,000 "- " on one line):
- * flow brackets outside quotes and comments, and compact block indicators ("- - - x") at the
- * start of a line. Runs before the parser; checkTokenLimits still checks the real tree after.
- * Returns a problem at the first bracket or indicator past the limit, or undefined.
- * @example prescanNesting('[[[]]]') // undefined
+ * A linear scan of the raw text, before the parser, for the shapes that make the YAML library
+ * slow down faster than linearly: flow brackets nested past the limit (10,000 "[" take 0.6 s to
+ * parse), compact block indicators at the start of a line ("- - - x"; 300,000 take 4 s), and
+ * more than MAX_CONFIG_ENTRIES keys or items. Quotes and
+ * comments are skipped; checkTokenLimits still checks the real tree after parsing.
+ * Returns a problem at the first bracket, indicator or entry past a limit, or undefined.
+ * @example prescanShape('[[[]]]') // undefined
  */
-export function prescanNesting(text: string): ConfigProblem | undefined {
+export function prescanShape(text: string): ConfigProblem | undefined {
   let depth = 0;
+  let entries = 0;
   let line = 1;
   let lineStart = 0;
   for (let i = 0; i < text.length; i++) {
@@ -106,7 +114,23 @@ export function prescanNesting(text: string): ConfigProblem | undefined {
           lineStart = i + 1;
         }
       }
-    } else if (c === '[' || c === '{') {
+    } else if (
+      (c === ':' && (' \t\r\n'.includes(text[i + 1] ?? ' ') || (depth > 0 && ',]}'.includes(text[i + 1]!)))) ||
+      (c === '-' && tokenStart && ' \t\r\n'.includes(text[i + 1] ?? ' ')) ||
+      (c === ',' && depth > 0) ||
+      c === '[' ||
+      c === '{'
+    ) {
+      if (++entries > MAX_CONFIG_ENTRIES) {
+        return {
+          line,
+          col: i - lineStart + 1,
+          message: `the config has more than ${MAX_CONFIG_ENTRIES} entries`,
+          fix: 'a Bellgate config needs a few hundred keys and list items; use globs to cover many metrics with one rule',
+        };
+      }
+    }
+    if (c === '[' || c === '{') {
       if (++depth > MAX_CONFIG_DEPTH) return { line, col: i - lineStart + 1, ...DEEP };
     } else if ((c === ']' || c === '}') && depth > 0) {
       depth--;

@@ -6,7 +6,7 @@ import {
   MAX_CONFIG_DEPTH,
   MAX_CONFIG_VALUES,
   checkTokenLimits,
-  prescanNesting,
+  prescanShape,
 } from './yaml-limits.js';
 
 export interface Position {
@@ -52,21 +52,24 @@ export function readYamlTree(text: string): { tree?: YamlTree; problems: ConfigP
       }],
     };
   }
-  const deep = prescanNesting(text);
+  const deep = prescanShape(text);
   if (deep) return { problems: [deep] };
   const counter = new LineCounter();
-  const tokens = [...new Parser(counter.addNewLine).parse(text)];
-  const tooBig = checkTokenLimits(tokens, counter);
-  if (tooBig) return { problems: [tooBig] };
-
-  const composer = new Composer({ uniqueKeys: true, merge: false, strict: true });
-  const docs = [...composer.compose(tokens, true, text.length)];
+  let docs: Document.Parsed[];
+  try {
+    const tokens = [...new Parser(counter.addNewLine).parse(text)];
+    const tooBig = checkTokenLimits(tokens, counter);
+    if (tooBig) return { problems: [tooBig] };
+    docs = [...new Composer({ uniqueKeys: false, merge: false, strict: true }).compose(tokens, true, text.length)];
+  } catch (err) {
+    // The YAML library reports problems in doc.errors; a throw would be its own bug, still shown as bad input.
+    return { problems: [{ line: 1, col: 1, message: `the YAML could not be read (${(err as Error).message})`, fix: 'simplify the file' }] };
+  }
   const problems: ConfigProblem[] = [];
   const at = (offset: number): Position => counter.linePos(offset);
   for (const doc of docs) {
     for (const issue of [...doc.errors, ...doc.warnings]) {
-      const fix = issue.code === 'DUPLICATE_KEY' ? 'keep one of the two entries' : 'write valid YAML (see https://yaml.org/spec/1.2.2/)';
-      problems.push({ ...at(issue.pos[0]), message: firstLine(issue.message), fix });
+      problems.push({ ...at(issue.pos[0]), message: firstLine(issue.message), fix: 'write valid YAML (see https://yaml.org/spec/1.2.2/)' });
     }
   }
   if (docs.length > 1) {
@@ -77,24 +80,28 @@ export function readYamlTree(text: string): { tree?: YamlTree; problems: ConfigP
       fix: 'remove the "---" separator and merge the documents',
     });
   }
-  if (problems.length > 0) return { problems };
-  const doc = docs[0];
+  const doc = docs.length === 1 ? docs[0] : undefined;
   const tree: YamlTree = { value: undefined, valueAt: new Map(), keyAt: new Map() };
-  if (doc === undefined || doc.contents === null) return { tree, problems };
-  try {
-    tree.value = buildValue(doc, doc.contents, tree, at);
-  } catch (err) {
-    if (err instanceof Stop) return { problems: [err.problem] };
-    throw err;
+  // Built even when the parser complained, so duplicate keys are reported with syntax errors.
+  if (doc !== undefined && doc.contents !== null) {
+    try {
+      tree.value = buildValue(doc, doc.contents, tree, at, problems);
+    } catch (err) {
+      if (!(err instanceof Stop)) throw err;
+      problems.push(err.problem);
+    }
+    problems.push(...collectNonFinite(tree));
   }
-  return { tree, problems: collectNonFinite(tree) };
+  return problems.length > 0 ? { problems } : { tree, problems };
 }
 
 function firstLine(message: string): string {
   return message.split('\n')[0]!.trim();
 }
 
-function buildValue(doc: Document, root: Node, tree: YamlTree, at: (offset: number) => Position): unknown {
+// Duplicate keys are found here with a Set: the YAML library's own check (uniqueKeys) compares
+// every pair of keys, which takes seconds on a few thousand keys.
+function buildValue(doc: Document, root: Node, tree: YamlTree, at: (offset: number) => Position, problems: ConfigProblem[]): unknown {
   let values = 0;
   let aliases = 0;
   const build = (node: Node, pointer: string, depth: number): unknown => {
@@ -122,6 +129,10 @@ function buildValue(doc: Document, root: Node, tree: YamlTree, at: (offset: numb
         const key = isScalar(keyNode) ? keyNode.value : undefined;
         if (typeof key !== 'string' && typeof key !== 'number') {
           throw new Stop({ ...keyPos, message: 'a key must be a plain name', fix: 'write keys like "cutoff:"; lists and mappings cannot be keys' });
+        }
+        if (Object.hasOwn(out, String(key))) {
+          problems.push({ ...keyPos, message: `the key ${JSON.stringify(String(key))} appears twice in one mapping`, fix: 'keep one of the two entries' });
+          continue;
         }
         const child = `${pointer}/${pointerSegment(key)}`;
         tree.keyAt.set(child, keyPos);

@@ -69,6 +69,13 @@ describe('parseConfig: hard limits', () => {
     expect(problems[0]).toMatchObject({ line: 2, col: 12 });
   });
 
+  it('refuses more than 5,000 entries before parsing, at the entry past the limit', () => {
+    const text = Array.from({ length: 6000 }, (_, i) => `k${i}: 1`).join('\n');
+    const { error, problems } = reportedProblems(() => parseConfig(text, 'wide.yml'), 'wide.yml');
+    expect(error.message).toBe('the config has more than 5000 entries');
+    expect(problems[0]).toMatchObject({ line: 5001, col: 6 }); // the ":" of "k5000: 1"
+  });
+
   it('accepts exactly the documented nesting a config needs', () => {
     expect(parseConfig('metrics:\n  - match:\n      - "a/*"\n      - "!a/b"\n', 'ok.yml').rules[0]!.match).toEqual(['a/*', '!a/b']);
   });

@@ -68,7 +68,7 @@ describe('parseConfig: refused input, with line:column', () => {
   it('reports YAML syntax errors and duplicate keys where they are', () => {
     const { error, problems } = reportedProblems(fixture('yaml-syntax.yml'), 'yaml-syntax.yml');
     expect(problems[0]).toMatchObject({ line: 3, col: 3 }); // the second "cutoff:"
-    expect(error.message).toMatch(/unique/);
+    expect(problems[0]!.message).toBe('the key "cutoff" appears twice in one mapping');
     expect(error.fix).toBe('keep one of the two entries');
     // The unclosed "[" of line 5 is found at the end of the text (line 6, column 1).
     expect(problems[1]).toMatchObject({ line: 6, col: 1 });
@@ -123,6 +123,14 @@ describe('parseConfig: refused input, with line:column', () => {
     ]);
     r = reportedProblems(() => parseConfig('metrics:\n  - {match: a, [x]: 1}\n', 'c.yml'), 'c.yml');
     expect(r.problems[0]).toMatchObject({ line: 2, col: 16 });
+  });
+
+  it('reports every duplicate key, in mappings at any level', () => {
+    const { problems } = reportedProblems(() => parseConfig('keep: 5\nmetrics:\n  - {match: a, worse: lower, worse: both}\nkeep: 6\n', 'd.yml'), 'd.yml');
+    expect(problems.map((p) => [p.line, p.col])).toEqual([
+      [3, 30], // the second "worse"
+      [4, 1], // the second "keep"
+    ]);
   });
 
   it('keeps at most 20 problems in one message', () => {
