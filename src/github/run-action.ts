@@ -15,6 +15,7 @@
  * Nothing prints a stack trace or the token (it is masked first).
  */
 import { join } from 'node:path';
+import { InputError } from '../model/input-error.js';
 import { readConfigFile } from '../config/read.js';
 import { settingsFor } from '../config/rules.js';
 import type { Config } from '../config/types.js';
@@ -97,6 +98,12 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
 
   let api: GitHubApi | undefined;
   const apiOnce = (): GitHubApi => {
+    if (inputs.token === '') {
+      throw new InputError('input `token` is empty, but the GitHub API is needed (history artifacts, PR comment)', {
+        where: 'input token',
+        fix: 'leave `token` at its default (${{ github.token }}) or pass a token that may read actions and write pull requests',
+      });
+    }
     api ??= deps.createApi({
       token: inputs.token,
       baseUrl: context.apiUrl,

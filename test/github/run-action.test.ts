@@ -186,6 +186,37 @@ describe('runAction', () => {
     expect(uploads).toEqual([]);
   });
 
+  it('an improvement gets a notice, a comment (flagged) and passes', async () => {
+    seedHistory();
+    await ws.metrics({ 'route/match-static': 360, 'bundle/app.js.gz': 40212 });
+    const { sink, got } = collectingSink();
+    await runAction(deps(ws, await env('pull_request', pr()), sink, []));
+    expect(got.outputs.get('verdict')).toBe('pass');
+    expect(got.failed).toEqual([]);
+    const notices = got.lines.filter((l) => l.kind === 'notice');
+    expect(notices).toHaveLength(1);
+    expect(notices[0]?.props?.title).toMatch(/route\/match-static improved/);
+    expect(rest.state.comments.get(7)).toHaveLength(1);
+  });
+
+  it('a clean pull request without an earlier comment posts none (comment: auto)', async () => {
+    seedHistory();
+    await ws.metrics({ 'route/match-static': 412, 'bundle/app.js.gz': 40212 });
+    const { sink, got } = collectingSink();
+    const result = await runAction(deps(ws, await env('pull_request', pr()), sink, []));
+    expect(got.outputs.get('verdict')).toBe('pass');
+    expect(result.comment).toBe('skipped');
+    expect(rest.state.comments.get(7)).toBeUndefined();
+  });
+
+  it('an empty token with the artifact store fails naming the token input', async () => {
+    await ws.metrics({ 'route/match-static': 412 });
+    const { sink, got } = collectingSink();
+    await runAction(deps(ws, await env('push', { repository }, { 'INPUT_TOKEN': '' }), sink, []));
+    expect(got.failed).toHaveLength(1);
+    expect(got.failed[0]).toMatch(/^input token: input `token` is empty/);
+  });
+
   it('series defaults to workflow/job', async () => {
     await ws.metrics({ 'route/match-static': 412 });
     const { sink, got } = collectingSink();
