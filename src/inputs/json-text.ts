@@ -15,9 +15,10 @@ export function parseJsonText(text: string, file: string, line?: number): unknow
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
     const at = /at position (\d+)/.exec(message);
+    const offset = at ? Number(at[1]) : locateJsonError(text);
     let where = file;
-    if (at) {
-      where = whereAt(file, text, Number(at[1]));
+    if (offset !== undefined) {
+      where = whereAt(file, text, offset);
       if (line !== undefined) where = shiftLine(where, line - 1);
     } else if (line !== undefined) {
       where = `${file}:${line}`;
@@ -45,6 +46,35 @@ export function whereInJson(text: string, file: string, path: (string | number)[
     // The position is a courtesy; the message still names the path.
   }
   return `${file} (${label.replace(/^\./, '')})`;
+}
+
+/**
+ * Offset of the first character that makes `text` invalid JSON, for the engine messages that give
+ * none (Node 20: "Unexpected token 'N', ... is not valid JSON" for a NaN). Bisection on prefixes:
+ * a prefix either could still grow into valid JSON (it fails only at its end) or already holds the
+ * error, and once a prefix holds it every longer one does. O(n log n), on the error path only.
+ */
+export function locateJsonError(text: string): number | undefined {
+  const broken = (length: number): boolean => {
+    try {
+      JSON.parse(text.slice(0, length));
+      return false;
+    } catch (error) {
+      const message = error instanceof Error ? error.message : '';
+      if (/end of JSON input/.test(message)) return false;
+      const at = /at position (\d+)/.exec(message);
+      return !(at && Number(at[1]) >= length);
+    }
+  };
+  if (!broken(text.length)) return undefined;
+  let low = 0; // not broken
+  let high = text.length; // broken
+  while (high - low > 1) {
+    const mid = (low + high) >>> 1;
+    if (broken(mid)) high = mid;
+    else low = mid;
+  }
+  return high - 1;
 }
 
 function shiftLine(where: string, lineOffset: number): string {

@@ -12,6 +12,14 @@ describe('readJsonMetrics', () => {
     expect(error.where).toBe('m.json:3:1');
   });
 
+  it('finds line:col even where the JSON engine gives no position (a NaN written by a JSON encoder)', () => {
+    // "NaN" is not JSON (RFC 8259 §6); the N is line 3 col 8, counted by hand.
+    const error = inputErrorOf(() => readJsonMetrics('{\n  "a": 1,\n  "b": NaN\n}', 'm.json'));
+    expect(error.where).toBe('m.json:3:8');
+    const single = inputErrorOf(() => readJsonMetrics("{'a': 1}", 'm.json'));
+    expect(single.where).toBe('m.json:1:2');
+  });
+
   it('names the line of a value that is a string, not a number', () => {
     const error = inputErrorOf(() => readJsonMetrics('{\n  "a": 1,\n  "b": "12"\n}', 'm.json'));
     expect(error.message).toBe('value of "b" is the string "12", not a number');
