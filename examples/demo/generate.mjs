@@ -121,6 +121,8 @@ export function generateScenario() {
       time: new Date(time).toISOString(),
       sha: hex(state.random, 40),
       ref: 'refs/heads/main',
+      // Merges to main, plus a nightly scheduled run now and then.
+      event: i % 7 === 6 ? 'schedule' : 'push',
       metrics: measure(state, i, runnerFactor(state)),
     });
   }
@@ -142,7 +144,7 @@ export function generateScenario() {
 /** runs.jsonl: one past run a line, in the format `bellgate import` reads. */
 export function renderRunsJsonl(runs) {
   return runs
-    .map((r) => JSON.stringify({ id: r.id, time: r.time, sha: r.sha, ref: r.ref, metrics: r.metrics }))
+    .map((r) => JSON.stringify({ id: r.id, time: r.time, sha: r.sha, ref: r.ref, event: r.event, metrics: r.metrics }))
     .join('\n')
     .concat('\n');
 }
