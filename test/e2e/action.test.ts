@@ -185,4 +185,38 @@ describe('the action bundle, as the runner runs it', () => {
     const ids = (await newestHistory()).runs.map((x) => x.id);
     expect(ids).toEqual(Array.from({ length: 17 }, (_, i) => `${1001 + i}-1`));
   });
+
+  it('a re-run attempt of a recorded run warns that the first attempt kept its numbers, and passes', async () => {
+    const r = await runStepAttempt(1017, 2);
+    expect(r.code, explain(r)).toBe(0);
+    expect(r.annotations.some((a) => a.kind === 'warning' && /earlier attempt of this workflow run already recorded it/.test(a.text))).toBe(true);
+    expect(results.calls.filter((c) => c.method === 'CreateArtifact' && c.status === 409)).toHaveLength(1);
+    expect((await newestHistory()).runs).toHaveLength(17);
+  });
+
+  it('a bad input fails the step with one plain message naming it, no stack trace', async () => {
+    await writeMetrics(412, 40211);
+    const r = await step(3001, 'push', 'main', { repository, ref: 'refs/heads/main' }, { 'retention-days': 'forever' });
+    expect(r.code).toBe(1);
+    const errors = r.annotations.filter((a) => a.kind === 'error');
+    expect(errors).toHaveLength(1);
+    expect(errors[0]?.text).toMatch(/retention-days/);
+    expect(`${r.stdout}${r.stderr}`).not.toMatch(/\n\s+at .+:\d+:\d+/);
+  });
 });
+
+/** Runs push `runId` again as attempt `attempt` (same workflow run, so the same artifact scope). */
+async function runStepAttempt(runId: number, attempt: number): Promise<StepResult> {
+  await writeMetrics(412, 40211);
+  const runtime = results.tokenFor({ workflowRunId: runId, headBranch: 'main', headRepositoryId: 5, repositoryId: 5 });
+  return runStep({
+    dir,
+    tag: `${runId}-${attempt}`,
+    event: { repository, ref: 'refs/heads/main' },
+    inputs: { metrics: 'bench.json', series: SERIES, token: TOKEN },
+    env: {
+      GITHUB_REPOSITORY: 'acme/router', GITHUB_EVENT_NAME: 'push', GITHUB_RUN_ID: String(runId), GITHUB_RUN_ATTEMPT: String(attempt),
+      GITHUB_REF: 'refs/heads/main', GITHUB_API_URL: rest.url, ACTIONS_RESULTS_URL: results.url, ACTIONS_RUNTIME_TOKEN: runtime, BELLGATE_RETRY_UNIT_MS: '2',
+    },
+  });
+}

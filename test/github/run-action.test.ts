@@ -217,6 +217,18 @@ describe('runAction', () => {
     expect(got.failed[0]).toMatch(/^input token: input `token` is empty/);
   });
 
+  it('html-report: true uploads a self-contained HTML report beside the history', async () => {
+    await ws.metrics({ 'route/match-static': 412 });
+    const { sink, got } = collectingSink();
+    const uploads: { name: string; text: string }[] = [];
+    await runAction(deps(ws, await env('push', { repository }, { 'INPUT_HTML-REPORT': 'true' }), sink, uploads));
+    expect(got.failed).toEqual([]);
+    const html = uploads.find((u) => u.name.startsWith('bellgate-report-'));
+    expect(html?.name).toMatch(/^bellgate-report-bench-linux-[0-9a-f]{8}-1$/);
+    expect(html?.text.toLowerCase().startsWith('<!doctype html>')).toBe(true);
+    expect(uploads.filter((u) => u.name === NAME)).toHaveLength(1);
+  });
+
   it('series defaults to workflow/job', async () => {
     await ws.metrics({ 'route/match-static': 412 });
     const { sink, got } = collectingSink();
