@@ -67,3 +67,16 @@ describe('bellgate demo', () => {
     expect(regressed).toEqual(['latency/geocode-p95']);
   });
 });
+
+describe('the explain hint the demo prints', () => {
+  it('is a command that works as printed', async () => {
+    const r = await bellgate(resolve(demo, '..', '..'), ['demo', '--out', join(work.dir, 'hint')]);
+    const hint = r.stdout.split('\n').find((l) => l.trim().startsWith('bellgate explain'));
+    expect(hint).toBeDefined();
+    const argv = (hint ?? '').trim().split(/\s+/).slice(1);
+    const explained = await bellgate(resolve(demo, '..', '..'), argv);
+    expect(explained.code, explained.stderr).toBe(0);
+    expect(explained.stdout).toContain('latency/geocode-p95');
+    expect(explained.stdout).toContain('regressed');
+  });
+});

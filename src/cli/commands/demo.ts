@@ -1,5 +1,5 @@
 import { Command } from 'commander';
-import { join } from 'node:path';
+import { join, relative } from 'node:path';
 import type { CommandContext } from '../context.js';
 import { performCheck, verdictExitCode } from '../check-flow.js';
 import { DEMO_FILES, locateDemo } from '../demo-data.js';
@@ -33,6 +33,14 @@ export function demoCommand(ctx: CommandContext): Command {
     });
     const code = verdictExitCode(report);
     if (code !== EXIT.ok) ctx.io.stdout(`\n(demo: the verdict would exit ${code} in CI; the demo itself exits 0)\n`);
+    const shown = (file: string): string => {
+      const rel = relative(ctx.io.cwd, join(dir, file));
+      return rel.startsWith('..') || rel === '' ? join(dir, file) : rel;
+    };
+    ctx.io.stdout(
+      `\nSee one decision drawn out:\n  bellgate explain latency/geocode-p95 --history ${shown(DEMO_FILES.history)} ` +
+        `--metrics ${shown(DEMO_FILES.run)} --config ${shown(DEMO_FILES.config)} --series ${DEMO_SERIES}\n`,
+    );
     ctx.exitCode = EXIT.ok;
   });
 }
