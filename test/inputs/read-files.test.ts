@@ -58,6 +58,13 @@ describe('readMetricFiles', () => {
     expect(run.metrics.get('bundle')).toEqual({ value: 1.5, unit: 'KiB', count: 2 });
   });
 
+  it('expands absolute globs too, and names files relative to the working directory', async () => {
+    const run = await readMetricFiles([path.join(dir, 'bench', '*.txt')], options({ cwd: path.join(dir, 'bench') }));
+    expect(run.metrics.get('BenchmarkRoute/ns/op')!.count).toBe(3);
+    const error = (await readMetricFiles(['latin1.csv'], options()).catch((e: unknown) => e)) as InputError;
+    expect(error.where).not.toContain(dir);
+  });
+
   it('takes an existing path literally even with glob characters', async () => {
     const run = await readMetricFiles(['[odd].json'], options());
     expect(run.metrics.get('odd')?.value).toBe(1);
