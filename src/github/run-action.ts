@@ -15,28 +15,26 @@
  * Nothing prints a stack trace or the token (it is masked first).
  */
 import { join } from 'node:path';
-import { InputError } from '../model/input-error.js';
 import { readConfigFile } from '../config/read.js';
 import { settingsFor } from '../config/rules.js';
-import type { Config } from '../config/types.js';
 import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import { artifactName, type ArtifactUploader } from '../history/artifact-store.js';
-import { emptyHistory, type History, type RunInfo } from '../history/history.js';
-import { appendRun, trimHistory } from '../history/merge.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
-import type { Run } from '../inputs/run.js';
-import { renderHtmlReport } from '../report/html.js';
+import { InputError } from '../model/input-error.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { commentMarker, markerLine } from '../report/marker.js';
 import { annotate } from './annotations.js';
-import { statusOf, type GitHubApi, type GitHubApiFactory, type RetryTuning } from './api.js';
-import { upsertComment } from './comment.js';
-import { readRunContext, type RunContext } from './context.js';
+import type { GitHubApi, GitHubApiFactory, RetryTuning } from './api.js';
+import { readRunContext } from './context.js';
+import { describeError } from './describe-error.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
-import { OUTPUT, readActionInputs, type ActionInputs } from './inputs.js';
+import { loadHistory, recordRun, runInfo } from './history-step.js';
+import { uploadHtml } from './html-report.js';
+import { OUTPUT, readActionInputs } from './inputs.js';
+import { postComment } from './pr-comment.js';
 import type { ActionSink } from './sink.js';
 import { createHistoryStore, type StoreSpec } from './store-factory.js';
 
@@ -159,7 +157,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (decision.record && !readable) {
     sink.warning('bellgate: not recording this run, because the history could not be read (it is never overwritten)');
   } else if (decision.record) {
-    recorded = await record(store, history, runInfo(context, deps.now()), run, config, inputs, sink);
+    recorded = await recordRun(store, history, runInfo(context, deps.now()), run, config.keep, inputs, sink);
     if (!recorded && inputs.historyFailure === 'fail') failed = true;
   }
   if (!readable && inputs.historyFailure === 'fail') failed = true;
@@ -175,83 +173,4 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   }
   if (report.verdict === 'accepted') sink.notice(`bellgate: regressions accepted by the label "${inputs.acceptLabel}"`);
   return { failed, report, recorded, ...(comment ? { comment } : {}) };
-}
-
-async function loadHistory(store: HistoryStore, series: string, inputs: ActionInputs, sink: ActionSink): Promise<{ history: History; readable: boolean }> {
-  try {
-    const history = await store.load();
-    sink.info(`bellgate: read ${history.runs.length} baseline runs from ${store.describe()}`);
-    return { history, readable: true };
-  } catch (error) {
-    if (!isStoreError(error)) throw error;
-    const message = `bellgate: the history could not be fetched from ${store.describe()}: ${describeError(error)}`;
-    if (inputs.historyFailure === 'fail') sink.error(message);
-    else sink.warning(`${message}\nGoing on without history (every metric is new); set \`history-failure: fail\` to fail instead.`);
-    return { history: emptyHistory(series), readable: false };
-  }
-}
-
-async function record(store: HistoryStore, history: History, info: RunInfo, run: Run, config: Config, inputs: ActionInputs, sink: ActionSink): Promise<boolean> {
-  try {
-    const next = trimHistory(appendRun(history, info, run), config.keep);
-    await store.save(next, history.runs.length);
-    sink.info(`bellgate: recorded run ${info.id} in ${store.describe()} (${next.runs.length} runs)`);
-    return true;
-  } catch (error) {
-    if (!isStoreError(error)) throw error;
-    const message = `bellgate: could not record run ${info.id} in ${store.describe()}: ${describeError(error)}`;
-    if (inputs.historyFailure === 'fail') sink.error(message);
-    else sink.warning(message);
-    return false;
-  }
-}
-
-async function postComment(api: () => GitHubApi, context: RunContext, inputs: ActionInputs, marker: string, markdown: string, flagged: boolean, sink: ActionSink): Promise<string | undefined> {
-  const pr = context.pullRequest;
-  if (!pr) return undefined;
-  try {
-    const outcome = await upsertComment(api(), pr.number, marker, markdown, inputs.comment, flagged);
-    sink.info(`bellgate: PR comment ${outcome}`);
-    return outcome;
-  } catch (error) {
-    const status = statusOf(error);
-    // A fork's pull_request run gets a read-only token: 403 (or 404) on comment writes.
-    const why = status === 403 || status === 404
-      ? `the token may not comment on pull request #${pr.number}${pr.fromFork ? ' (a fork PR gets a read-only token)' : ' (give the job `permissions: pull-requests: write`)'}`
-      : `the comment on pull request #${pr.number} failed: ${describeError(error)}`;
-    sink.warning(`bellgate: ${why}; the report is in the job summary`);
-    return 'failed';
-  }
-}
-
-/** The HTML report is extra: written beside the JSON report and uploaded; a failure only warns. */
-async function uploadHtml(deps: ActionDeps, context: RunContext, series: string, report: Report, history: History, retentionDays: number): Promise<void> {
-  // One artifact per series and attempt: artifact names must be unique within a workflow run.
-  const name = `${artifactName('bellgate-report', series)}-${context.attempt}`;
-  try {
-    const html = renderHtmlReport({ report, history, generatedAt: deps.now().toISOString() });
-    await deps.writeText(join(context.runnerTemp, 'bellgate', `${name}.html`), html);
-    await deps.upload(name, 'report.html', html, retentionDays);
-    deps.sink.info(`bellgate: uploaded the HTML report as artifact ${name}`);
-  } catch (error) {
-    deps.sink.warning(`bellgate: could not upload the HTML report: ${describeError(error)}`);
-  }
-}
-
-function runInfo(context: RunContext, now: Date): RunInfo {
-  const info: RunInfo = { id: context.runId, event: context.eventName, time: now.toISOString() };
-  if (context.sha) info.sha = context.sha;
-  if (context.ref) info.ref = context.ref;
-  return info;
-}
-
-function isStoreError(error: unknown): boolean {
-  return error instanceof Error && error.name === 'StoreError';
-}
-
-/** One plain line (plus a fix), never a stack trace. */
-export function describeError(error: unknown): string {
-  if (error && typeof (error as { describe?: unknown }).describe === 'function') return (error as { describe(): string }).describe();
-  if (error instanceof Error) return error.message;
-  return String(error);
 }

@@ -1,0 +1,26 @@
+import { join } from 'node:path';
+import type { Report } from '../gate/report.js';
+import { artifactName } from '../history/artifact-store.js';
+import type { History } from '../history/history.js';
+import { renderHtmlReport } from '../report/html.js';
+import type { RunContext } from './context.js';
+import { describeError } from './describe-error.js';
+import type { ActionDeps } from './run-action.js';
+
+/**
+ * The HTML report is extra: written beside the JSON report and uploaded as its own artifact;
+ * a failure only warns.
+ * @example await uploadHtml(deps, context, 'ci', report, history, 90)
+ */
+export async function uploadHtml(deps: ActionDeps, context: RunContext, series: string, report: Report, history: History, retentionDays: number): Promise<void> {
+  // One artifact per series and attempt: artifact names must be unique within a workflow run.
+  const name = `${artifactName('bellgate-report', series)}-${context.attempt}`;
+  try {
+    const html = renderHtmlReport({ report, history, generatedAt: deps.now().toISOString() });
+    await deps.writeText(join(context.runnerTemp, 'bellgate', `${name}.html`), html);
+    await deps.upload(name, 'report.html', html, retentionDays);
+    deps.sink.info(`bellgate: uploaded the HTML report as artifact ${name}`);
+  } catch (error) {
+    deps.sink.warning(`bellgate: could not upload the HTML report: ${describeError(error)}`);
+  }
+}

@@ -1,0 +1,33 @@
+/**
+ * The PR comment step with its failure policy: the comment is feedback, not the gate, so any
+ * failure only warns — a 403/404 (a fork's read-only token, or a job without
+ * `pull-requests: write`) says why; the report stays in the job summary.
+ */
+import { statusOf, type GitHubApi } from './api.js';
+import { upsertComment } from './comment.js';
+import type { RunContext } from './context.js';
+import { describeError } from './describe-error.js';
+import type { ActionInputs } from './inputs.js';
+import type { ActionSink } from './sink.js';
+
+/**
+ * @returns the outcome ('created', 'updated', 'unchanged', 'skipped', 'failed'), or undefined without a PR.
+ * @example await postComment(api, context, inputs, marker, markdown, true, sink) // 'created'
+ */
+export async function postComment(api: () => GitHubApi, context: RunContext, inputs: ActionInputs, marker: string, markdown: string, flagged: boolean, sink: ActionSink): Promise<string | undefined> {
+  const pr = context.pullRequest;
+  if (!pr) return undefined;
+  try {
+    const outcome = await upsertComment(api(), pr.number, marker, markdown, inputs.comment, flagged);
+    sink.info(`bellgate: PR comment ${outcome}`);
+    return outcome;
+  } catch (error) {
+    const status = statusOf(error);
+    // A fork's pull_request run gets a read-only token: 403 (or 404) on comment writes.
+    const why = status === 403 || status === 404
+      ? `the token may not comment on pull request #${pr.number}${pr.fromFork ? ' (a fork PR gets a read-only token)' : ' (give the job `permissions: pull-requests: write`)'}`
+      : `the comment on pull request #${pr.number} failed: ${describeError(error)}`;
+    sink.warning(`bellgate: ${why}; the report is in the job summary`);
+    return 'failed';
+  }
+}
