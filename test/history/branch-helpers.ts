@@ -1,0 +1,37 @@
+// Shared by the branch store tests: runs of an invented build-farm scenario (compile time of a
+// router service), a store pointed at the loopback Git Data stand-in, and a direct reader.
+import { expect } from 'vitest';
+import { createBranchStore, type BranchStoreOptions } from '../../src/history/branch-store.js';
+import { createGitDataClient, type GitDataClientOptions } from '../../src/history/branch-rest.js';
+import { seriesFilePath } from '../../src/history/branch-path.js';
+import { parseHistory } from '../../src/history/document.js';
+import type { History } from '../../src/history/history.js';
+import type { Run } from '../../src/inputs/run.js';
+import { StoreError } from '../../src/history/store.js';
+import type { GitDataStandin } from '../e2e/standins/git-data.js';
+
+export const TOKEN = 'ghs_standin-token';
+
+export const runOf = (value: number): Run => ({ metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]), meta: new Map() });
+
+/** Run `n` of the scenario: a minute apart from 2026-03-01 10:00 UTC. */
+export const infoOf = (id: string, n: number) => ({ id, time: new Date(Date.UTC(2026, 2, 1, 10) + n * 60_000).toISOString(), ref: 'refs/heads/main', event: 'push' });
+
+export function branchStore(url: string, series: string, over: Partial<BranchStoreOptions> = {}, client: Partial<GitDataClientOptions> = {}) {
+  const api = createGitDataClient({ token: TOKEN, baseUrl: url, owner: 'acme', repo: 'router', timeoutMs: 2000, retries: 2, unitMs: 1, ...client });
+  return createBranchStore({ api, branch: 'bellgate-data', series, unitMs: 1, ...over });
+}
+
+/** The history on the branch as the stand-in holds it (no API, no faults), or undefined. */
+export function onBranch(git: GitDataStandin, series: string, branch = 'bellgate-data'): History | undefined {
+  const text = git.readFile(branch, seriesFilePath(series));
+  return text === undefined ? undefined : parseHistory(text, 'stand-in');
+}
+
+export const ids = (h: History | undefined): string[] => (h?.runs ?? []).map((r) => r.id);
+
+export async function storeRejection(promise: Promise<unknown>): Promise<StoreError> {
+  const error = await promise.then(() => undefined, (e: unknown) => e);
+  expect(error).toBeInstanceOf(StoreError);
+  return error as StoreError;
+}
