@@ -210,6 +210,34 @@ describe('metric file flags', () => {
   });
 });
 
+describe('failures outside the input', () => {
+  it('--out naming a file, not a folder: exit 2 naming the path', async () => {
+    const file = work.write('occupied', 'x');
+    const r = await bellgate(work.dir, ['check', '--metrics', calm, '--out', file]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain(file);
+    noStack(r.stderr);
+  });
+
+  it('a fault inside the CLI (here: stdout throws): one line asking for a report, exit 2', async () => {
+    let stderr = '';
+    const { runCli } = await import('../../src/cli/main.js');
+    const code = await runCli(['check', '--metrics', calm], {
+      stdout: () => {
+        throw new TypeError('stdout is gone');
+      },
+      stderr: (s) => (stderr += s),
+      cwd: work.dir,
+      env: {},
+      isTTY: false,
+    });
+    expect(code).toBe(2);
+    expect(stderr).toContain('internal error: stdout is gone');
+    expect(stderr).toContain('please report');
+    noStack(stderr);
+  });
+});
+
 describe('colour', () => {
   it('only on a TTY without NO_COLOR', async () => {
     const args = ['check', '--metrics', slow, '--history', history, '--config', config];
