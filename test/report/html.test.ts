@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { MetricResult } from '../../src/gate/report.js';
+import { scaleLog } from 'd3-scale';
+import { leftAxis } from '../../src/report/html-axis.js';
 import { chartColumn, cutoffBand } from '../../src/report/html-data.js';
 import { renderHtmlReport } from '../../src/report/html.js';
 import { jStat } from '../model/jstat.js';
@@ -75,6 +77,14 @@ describe('renderHtmlReport', () => {
     const firstRow = html.split('<tbody>')[1] ?? '';
     expect(firstRow.startsWith('<tr class="s-regressed">')).toBe(true);
     expect(html.indexOf('s-ok"><td')).toBeGreaterThan(html.lastIndexOf('s-regressed"><td'));
+  });
+
+  it('labels every tick of a log axis narrower than a decade, with the tick\'s own value', () => {
+    // d3's log tickFormat alone labels only "36" and "38" of this domain's ticks 36..48.
+    const y = scaleLog().domain([35.4, 48.3]).range([200, 0]);
+    const axis = leftAxis(y, 72, 'ms');
+    const labels = [...axis.matchAll(/text-anchor="end">([^<]+)</g)].map((m) => m[1] ?? '');
+    expect(labels.map(Number)).toEqual(y.ticks(5));
   });
 
   it('draws history and histogram SVGs for fitted metrics, and has print styles', () => {
