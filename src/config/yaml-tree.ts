@@ -29,7 +29,10 @@ class Stop {
   constructor(readonly problem: ConfigProblem) {}
 }
 
-/** JSON pointer segment escaping (RFC 6901), the same as ajv's instancePath. */
+/**
+ * JSON pointer segment escaping (RFC 6901: "~" -> "~0", "/" -> "~1"), the same as ajv's instancePath.
+ * @example pointerSegment('size/app.js') // 'size~1app.js'
+ */
 export function pointerSegment(key: string | number): string {
   return String(key).replace(/~/g, '~0').replace(/\//g, '~1');
 }

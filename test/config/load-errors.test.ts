@@ -125,6 +125,45 @@ describe('parseConfig: refused input, with line:column', () => {
     expect(r.problems[0]).toMatchObject({ line: 2, col: 16 });
   });
 
+  it('refuses a bad value for every key, at the value', () => {
+    // [section template, key, bad value]; the value starts right after "key: " on line 2 (or 1).
+    const defaults: Array<[string, string]> = [
+      ['cutoff', '0'], ['cutoff', '1'], ['worse', 'up'], ['tolerance', '"1 percent"'], ['tolerance', '-1'],
+      ['resolution', '-0.5'], ['window', '1'], ['window', '10.5'], ['min-runs', '1'], ['transform', 'sqrt'],
+      ['fit', 'mean'], ['uncertainty', 'plugin'], ['aggregate', 'mode'], ['change-points', '1'],
+    ];
+    for (const [key, value] of defaults) {
+      const { problems } = reportedProblems(() => parseConfig(`defaults:\n  ${key}: ${value}\n`, 'k.yml'), 'k.yml');
+      expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 2, col: 3 + key.length + 2 });
+      const rule = reportedProblems(() => parseConfig(`metrics:\n  - match: a\n    ${key}: ${value}\n`, 'k.yml'), 'k.yml');
+      expect(rule.problems[0], `rule ${key}: ${value}`).toMatchObject({ line: 3, col: 5 + key.length + 2 });
+    }
+    const rules: Array<[string, string]> = [['ignore', '"yes"'], ['relative-to', '""'], ['relative-to', '5'], ['match', '""'], ['match', '[a, 5]']];
+    for (const [key, value] of rules) {
+      const text = `metrics:\n  - ${key}: ${value}\n${key === 'match' ? '' : '    match: x\n'}`;
+      const { problems } = reportedProblems(() => parseConfig(text, 'k.yml'), 'k.yml');
+      const col = 5 + key.length + 2 + (value === '[a, 5]' ? 4 : 0); // a list points at its bad item
+      expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 2, col });
+    }
+    const groups: Array<[string, string]> = [['name', '""'], ['name', '[a]'], ['match', '[]']];
+    for (const [key, value] of groups) {
+      const other = key === 'name' ? 'match: x' : 'name: g';
+      const { problems } = reportedProblems(() => parseConfig(`groups:\n  - ${key}: ${value}\n    ${other}\n`, 'k.yml'), 'k.yml');
+      expect(problems[0], `group ${key}: ${value}`).toMatchObject({ line: 2, col: 5 + key.length + 2 });
+    }
+    const top: Array<[string, string]> = [['family', 'sidak'], ['keep', '-1'], ['keep', '2.5'], ['input-format', 'xml'], ['defaults', '5'], ['limits', '[1]'], ['groups', 'x']];
+    for (const [key, value] of top) {
+      const { problems } = reportedProblems(() => parseConfig(`${key}: ${value}\n`, 'k.yml'), 'k.yml');
+      expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 1, col: key.length + 3 });
+    }
+    for (const key of ['max-file-bytes', 'max-line-length', 'max-metrics']) {
+      for (const value of ['0', '1.5', '"10"']) {
+        const { problems } = reportedProblems(() => parseConfig(`limits:\n  ${key}: ${value}\n`, 'k.yml'), 'k.yml');
+        expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 2, col: 3 + key.length + 2 });
+      }
+    }
+  });
+
   it('reports every duplicate key, in mappings at any level', () => {
     const { problems } = reportedProblems(() => parseConfig('keep: 5\nmetrics:\n  - {match: a, worse: lower, worse: both}\nkeep: 6\n', 'd.yml'), 'd.yml');
     expect(problems.map((p) => [p.line, p.col])).toEqual([
