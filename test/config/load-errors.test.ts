@@ -98,6 +98,8 @@ describe('parseConfig: refused input, with line:column', () => {
     expect(r.error.fix).toBe('"cutoff" is a metric setting: put it under defaults: or in a metrics rule');
     r = reportedProblems(() => parseConfig('defaults:\n  relative-to: a\n', 'c.yml'), 'c.yml');
     expect(r.error.fix).toBe('"relative-to" belongs in a metrics rule (under metrics:), not in defaults');
+    r = reportedProblems(() => parseConfig('defaults:\n  family: holm\n', 'c.yml'), 'c.yml');
+    expect(r.error.fix).toBe('"family" is a top-level key: write it without indentation');
     r = reportedProblems(() => parseConfig('limits:\n  max_metrics: 5\n', 'c.yml'), 'c.yml');
     expect(r.error.fix).toBe('did you mean "max-metrics"?');
     r = reportedProblems(() => parseConfig('family: Holm\n', 'c.yml'), 'c.yml');
