@@ -4,6 +4,7 @@
  * tests point it at a loopback server.
  */
 import type { ArtifactApi } from '../history/artifact-store.js';
+import type { GitDataApi } from '../history/branch-api.js';
 
 export interface IssueComment {
   id: number;
@@ -17,6 +18,8 @@ export interface GitHubApi extends ArtifactApi {
   listIssueComments(issue: number): Promise<IssueComment[]>;
   createIssueComment(issue: number, body: string): Promise<IssueComment>;
   updateIssueComment(id: number, body: string): Promise<void>;
+  /** The Git Data calls of the `branch` store (same token and API URL); fakes may leave it out. */
+  gitData?: GitDataApi;
 }
 
 /** Knobs of the retries; tests use tiny intervals. Times in milliseconds. */

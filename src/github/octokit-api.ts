@@ -8,6 +8,7 @@ import { getOctokit } from '@actions/github';
 import { retry } from '@octokit/plugin-retry';
 import { throttling } from '@octokit/plugin-throttling';
 import type { ArtifactEntry } from '../history/artifact-store.js';
+import { createGitDataClient } from '../history/branch-rest.js';
 import { DEFAULT_RETRY, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
 import { fetchCapped, readCapped } from './fetch-capped.js';
 
@@ -121,5 +122,7 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     async updateIssueComment(id, body) {
       await octokit.request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
     },
+    // The branch store's client: fetch-based, with its own timeout and the same retry tuning.
+    gitData: createGitDataClient({ ...repo, token: target.token, baseUrl: target.baseUrl, retries: tuning.retries, unitMs: tuning.unitMs }),
   };
 }

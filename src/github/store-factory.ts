@@ -1,14 +1,15 @@
 /**
  * Picks the history store named by the `store` input. This is the seam for further stores: a
- * builder per kind in STORE_BUILDERS. The `branch` store (Git Data API) plugs in here by adding
- * its builder; until then choosing it is a clear input error.
+ * builder per kind in STORE_BUILDERS.
  */
 import { createArtifactStore, type ArtifactUploader } from '../history/artifact-store.js';
 import { createFileStore } from '../history/file-store.js';
+import { createBranchStore } from '../history/branch-store.js';
+import { dataBranchName, DEFAULT_DATA_BRANCH } from '../history/branch-path.js';
 import type { HistoryStore } from '../history/store.js';
 import { InputError } from '../model/input-error.js';
 import type { GitHubApi } from './api.js';
-import type { StoreKind } from './inputs.js';
+import { DEFAULT_HISTORY, type StoreKind } from './inputs.js';
 import { isAbsolute, resolve } from 'node:path';
 
 /** Everything a store might need; each builder takes what it uses. */
@@ -41,13 +42,26 @@ export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
       warn: s.warn,
     }),
   file: (s) => createFileStore(isAbsolute(s.history) ? s.history : resolve(s.workspace || '.', s.history), s.series),
-  branch: () => {
-    throw new InputError('`store: branch` is not available in this version', {
-      where: 'input store',
-      fix: 'use `store: artifact` (the default) or `store: file`',
-    });
-  },
+  branch: buildBranchStore,
 };
+
+/**
+ * `store: branch`: the history input names the data branch (left at its default it means
+ * `bellgate-data`). Writing onto the baseline branch itself is refused: the history would land
+ * among the code it measures.
+ */
+function buildBranchStore(s: StoreSpec): HistoryStore {
+  const branch = dataBranchName(s.history === DEFAULT_HISTORY ? DEFAULT_DATA_BRANCH : s.history);
+  if (branch === s.baselineBranch) {
+    throw new InputError(`input \`history\` names the baseline branch "${branch}" as the data branch`, {
+      where: 'input history',
+      fix: `name a branch of its own, e.g. \`history: ${DEFAULT_DATA_BRANCH}\``,
+    });
+  }
+  const api = s.api().gitData;
+  if (!api) throw new InputError('this GitHub client cannot write a data branch', { where: 'input store', fix: 'use `store: artifact` or `store: file`' });
+  return createBranchStore({ api, branch, series: s.series });
+}
 
 /**
  * Builds the store for the spec's kind.

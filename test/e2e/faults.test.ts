@@ -1,0 +1,174 @@
+// Fault injection: the stores run against loopback stand-ins behind a proxy that makes a fixed,
+// seeded share of API calls fail (500, 502, 429 with Retry-After, connections dropped before or
+// after the server acted, bodies cut short, answers slower than the client's timeout). The rule
+// under test is the store contract (src/history/store.ts): every append ends with its run recorded
+// or with a StoreError, the stored history always parses, and no run that was stored is ever lost.
+import { strToU8, zipSync } from 'fflate';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { artifactName, createArtifactStore, HISTORY_FILE } from '../../src/history/artifact-store.js';
+import { appendRun } from '../../src/history/merge.js';
+import { StoreError } from '../../src/history/store.js';
+import { createOctokitApi } from '../../src/github/octokit-api.js';
+import { branchStore, ids, infoOf, onBranch, runOf } from '../history/branch-helpers.js';
+import { startFaultProxy, type FaultProxy } from './standins/fault-proxy.js';
+import { startGitDataStandin, type GitDataStandin } from './standins/git-data.js';
+import { startRestStandin, type RestStandin } from './standins/rest-api.js';
+import { seededRandom } from './standins/seeded-random.js';
+
+const RATE = 0.15;
+const SLOW_MS = 250;
+const TIMEOUT_MS = 80;
+
+interface Tally {
+  tried: number;
+  recorded: number;
+  failed: number;
+  /** Reported as failed, yet the run is on the store (a write whose answer was lost). */
+  failedButStored: number;
+  lost: number;
+}
+const tally = (): Tally => ({ tried: 0, recorded: 0, failed: 0, failedButStored: 0, lost: 0 });
+const missing = (before: string[], after: string[]) => before.filter((id) => !after.includes(id)).length;
+
+describe('branch store with faults', () => {
+  let git: GitDataStandin;
+  let proxy: FaultProxy;
+  beforeAll(async () => {
+    git = await startGitDataStandin();
+    proxy = await startFaultProxy({ target: git.url, rate: RATE, seed: 20261201, slowMs: SLOW_MS, retryAfter: 1 });
+  });
+  afterAll(async () => {
+    await proxy.close();
+    await git.close();
+  });
+
+  it('3 writers x 30 appends: each append is recorded whole or fails with StoreError; 0 runs lost', async () => {
+    const series = 'bench/faulty';
+    const t = tally();
+    const recorded: string[] = [];
+    async function writer(w: number): Promise<void> {
+      const random = seededRandom(7 + w);
+      for (let i = 0; i < 30; i++) {
+        const id = `${i}-${w}`;
+        const before = ids(onBranch(git, series));
+        const store = branchStore(proxy.url, series, { attempts: 5, random }, { timeoutMs: TIMEOUT_MS, retries: 2, random });
+        t.tried += 1;
+        let ok = false;
+        try {
+          const h = await store.load();
+          await store.save(appendRun(h, infoOf(id, i * 3 + w), runOf(50 + i)), h.runs.length);
+          ok = true;
+        } catch (error) {
+          // A clear failure, never a stack trace from somewhere else.
+          expect(error).toBeInstanceOf(StoreError);
+          expect((error as StoreError).describe()).toMatch(/^branch bellgate-data/);
+        }
+        const after = ids(onBranch(git, series)); // parses: never half a document
+        t.lost += missing(before, after);
+        if (ok) {
+          t.recorded += 1;
+          recorded.push(id);
+          expect(after).toContain(id);
+        } else {
+          t.failed += 1;
+          if (after.includes(id)) t.failedButStored += 1;
+        }
+      }
+    }
+    await Promise.all([0, 1, 2].map((w) => writer(w)));
+    // Let writes delayed past the client's timeout land, then look again.
+    await new Promise((r) => setTimeout(r, SLOW_MS * 2));
+    const final = ids(onBranch(git, series));
+    t.lost += missing(recorded, final);
+    expect(new Set(final).size).toBe(final.length);
+    console.log(`branch faults: ${JSON.stringify(t)}; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected ${JSON.stringify(Object.fromEntries(proxy.injected))}`);
+    expect(t.tried).toBe(90);
+    expect(t.lost).toBe(0);
+    expect(proxy.totalInjected()).toBeGreaterThan(50);
+    for (const kind of ['500', '502', '429', 'drop-before', 'drop-after', 'truncate', 'slow']) expect(proxy.injected.get(kind as never) ?? 0).toBeGreaterThan(0);
+    expect(t.recorded).toBeGreaterThan(t.failed);
+  }, 180_000);
+});
+
+describe('artifact store with faults', () => {
+  let rest: RestStandin;
+  let proxy: FaultProxy;
+  beforeAll(async () => {
+    rest = await startRestStandin();
+    proxy = await startFaultProxy({ target: rest.url, rate: RATE, seed: 4242, slowMs: SLOW_MS, retryAfter: 1 });
+  });
+  afterAll(async () => {
+    await proxy.close();
+    await rest.close();
+  });
+
+  it('a failed upload leaves the older artifact as the newest valid one; 0 runs lost', async () => {
+    const series = 'bench/artifacts';
+    const name = artifactName('bellgate-history', series);
+    const random = seededRandom(99);
+    const warnings: string[] = [];
+    let clock = Date.UTC(2026, 2, 1);
+    let run = 500;
+    // The uploader stands in for @actions/artifact: a fifth of uploads fail, half of those after
+    // leaving a broken artifact behind (a zip cut short), the rest before anything is stored.
+    const upload = async (artifact: string, _file: string, text: string): Promise<void> => {
+      const zip = zipSync({ [HISTORY_FILE]: strToU8(text) });
+      const roll = random();
+      if (roll < 0.2) {
+        if (roll < 0.1) register(artifact, zip.subarray(0, zip.length >> 1));
+        throw new Error('upload failed: stand-in fault');
+      }
+      register(artifact, zip);
+    };
+    function register(artifact: string, zip: Uint8Array): void {
+      clock += 60_000;
+      rest.state.artifacts.push({ id: rest.state.nextId++, name: artifact, createdAt: new Date(clock).toISOString(), expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: run++, sizeInBytes: zip.length, zip });
+    }
+    const storeVia = (url: string) =>
+      createArtifactStore({
+        api: createOctokitApi({ token: 'ghs_standin', baseUrl: url, owner: 'acme', repo: 'router', retry: { retries: 2, unitMs: 1 } }),
+        upload,
+        history: 'bellgate-history',
+        series,
+        baselineBranch: 'main',
+        repositoryId: 5,
+        retentionDays: 5,
+        warn: (m) => warnings.push(m),
+      });
+    const t = tally();
+    let incompleteLoads = 0;
+    const recorded: string[] = [];
+    for (let i = 0; i < 40; i++) {
+      const id = `${i}-1`;
+      const before = ids(await storeVia(rest.url).load()); // no faults: the truth
+      t.tried += 1;
+      let ok = false;
+      try {
+        const store = storeVia(proxy.url);
+        const h = await store.load();
+        if (missing(before, ids(h)) > 0) incompleteLoads += 1;
+        await store.save(appendRun(h, infoOf(id, i), runOf(70 + i)), h.runs.length);
+        ok = true;
+      } catch (error) {
+        expect(error).toBeInstanceOf(StoreError);
+      }
+      const after = ids(await storeVia(rest.url).load());
+      t.lost += missing(before, after);
+      if (ok) {
+        t.recorded += 1;
+        recorded.push(id);
+        expect(after).toContain(id);
+      } else {
+        t.failed += 1;
+        if (after.includes(id)) t.failedButStored += 1;
+      }
+    }
+    const final = ids(await storeVia(rest.url).load());
+    t.lost += missing(recorded, final);
+    const artifacts = rest.state.artifacts.filter((a) => a.name === name).length;
+    console.log(`artifact faults: ${JSON.stringify(t)}; ${artifacts} artifacts, ${incompleteLoads} loads that missed runs, ${warnings.length} warnings; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected ${JSON.stringify(Object.fromEntries(proxy.injected))}`);
+    expect(t.lost).toBe(0);
+    expect(t.failed).toBeGreaterThan(0);
+    expect(proxy.totalInjected()).toBeGreaterThan(0);
+  }, 180_000);
+});
