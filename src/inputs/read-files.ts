@@ -68,8 +68,7 @@ async function expand(pattern: string, cwd: string): Promise<string[]> {
   }
   const files = await glob([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
   if (files.length === 0) {
-    throw new InputError(`no metric file matches ${JSON.stringify(pattern)}`, {
-      where: cwd,
+    throw new InputError(`no metric file matches ${JSON.stringify(pattern)} (looked in ${cwd})`, {
       fix: 'check the path (relative to the working directory) and that the step writing the metrics ran',
     });
   }
