@@ -5,6 +5,16 @@ import { meanAndSquares } from '../model/moments.js';
 import { studentTail } from '../model/tails.js';
 import type { GroupFrame } from './group-frame.js';
 
+/**
+ * Shares of the group's level. A change usually touches one benchmark, which the own moves find
+ * far sooner than the distance (it spreads its power over every member), so they get 0.8; the
+ * common move (everything slower) and the distance (broad patterns) keep 0.1 each. Spending the
+ * level once for the whole group keeps its false alarms at the level, not three times it.
+ */
+export const OWN_WEIGHT = 0.8;
+export const COMMON_WEIGHT = 0.1;
+export const DISTANCE_WEIGHT = 0.1;
+
 /** A move judged against the history of the same quantity: z in its sd, two-sided predictive tail. */
 export interface Move {
   z: number;
@@ -28,9 +38,35 @@ export interface GroupAnalysis {
   /** Each member's share of the distance (mahalanobisContributions / distance). */
   shares: number[];
   /**
-   * The group's one joint tail: min(1, 2 min(distanceTail, ownTail)) (Bonferroni over both
-   * checks); only ownTail while runs do not exceed members, where the chi-square stand-in for
-   * Hotelling's law is far too optimistic about a covariance estimated from so few runs.
+   * The group's one tail: min(1, ownTail / 0.8, commonTail / 0.1, distanceTail / 0.1), a weighted
+   * Bonferroni over the three checks (Holm 1979; weights as in Benjamini & Hochberg 1997), so the
+   * group is one test at its level. The distance is left out while runs do not exceed members,
+   * where the chi-square stand-in for Hotelling's law is far too optimistic about the covariance.
+   */
+  tail: number;
+}
+
+/** Everything the group's decision needs, before any family adjustment. */
+export interface GroupAnalysis {
+  n: number;
+  p: number;
+  /** Mean of the members' signed standardised values in this run, against its baseline history. */
+  common: Move;
+  /** Each member's own move (its value minus the common move), against its own history. */
+  own: Move[];
+  /** min(1, p x smallest own tail): Bonferroni over the members' own moves. */
+  ownTail: number;
+  /** Squared Mahalanobis distance under the Ledoit-Wolf shrunk covariance, and its tail. */
+  distance: number;
+  distanceTail: number;
+  shrinkage: number;
+  /** Each member's share of the distance (mahalanobisContributions / distance). */
+  shares: number[];
+  /**
+   * The group's one joint tail: min(1, ownTail / 0.9, distanceTail / 0.1), a weighted Bonferroni
+   * over both checks (Holm 1979; weights after Benjamini & Hochberg 1997), so the group is one
+   * test at its level. Only ownTail while runs do not exceed members, where the chi-square
+   * stand-in for Hotelling's law is far too optimistic about a covariance from so few runs.
    */
   tail: number;
 }
@@ -47,7 +83,7 @@ export interface GroupAnalysis {
  *   shows here with its own noise only, which is much smaller than the runner's.
  * The Mahalanobis distance spreads its power over p directions, so a lone moved member is found
  * far sooner by the largest own move (a union-intersection check, Bonferroni over members); the
- * group's joint tail is the Bonferroni combination of both checks, one test at the group's level.
+ * group's tail is the weighted Bonferroni combination of the three checks, one test at its level.
  * O(n p^2 + p^3). Needs at least 3 rows and 2 members (the caller checks).
  * @example analyseGroup(frame).tail // 0.73 for an ordinary run
  */
@@ -74,7 +110,7 @@ export function analyseGroup(frame: GroupFrame): GroupAnalysis {
     distanceTail,
     shrinkage: shrunk.shrinkage,
     shares: contributions.map((c) => (distance > 0 ? c / distance : 0)),
-    tail: n > p ? Math.min(1, 2 * Math.min(distanceTail, ownTail)) : ownTail,
+    tail: Math.min(1, ownTail / OWN_WEIGHT, common.tail / COMMON_WEIGHT, n > p ? distanceTail / DISTANCE_WEIGHT : 1),
   };
 }
 

@@ -1,4 +1,5 @@
 import type { Config } from '../config/types.js';
+import { InputError } from '../model/input-error.js';
 import { cutoffLevel } from '../model/tails.js';
 import { analyseGroup, type GroupAnalysis } from './analyse-group.js';
 import type { Test } from './decide-metric.js';
@@ -45,8 +46,17 @@ export function judgeGroups(
       learning.push(learningGroup(spec.name, frame.members.length, frame.rows.length, minRows, level));
       continue;
     }
+    let analysis: GroupAnalysis;
+    try {
+      analysis = analyseGroup(frame);
+    } catch (error) {
+      // A covariance no ridge can rescue (members that are exact copies of each other): say so
+      // and judge the members alone rather than stop the whole gate.
+      if (!(error instanceof InputError)) throw error;
+      learning.push({ ...learningGroup(spec.name, frame.members.length, frame.rows.length, minRows, level), reason: `cannot be judged together: ${error.message}; members are judged alone` });
+      continue;
+    }
     for (const member of frame.members) judged.add(member.score.result.name);
-    const analysis = analyseGroup(frame);
     pending.push({
       analysis,
       level,

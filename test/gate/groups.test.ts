@@ -97,3 +97,44 @@ describe('groups (issue 6): the common move and each member\'s own move', () => 
     expect(report.verdict).toBe('regressed');
   });
 });
+
+describe('groups: calibration and family control', () => {
+  it('on clean runs the group test fires at about its level, never above it (Bonferroni bound)', () => {
+    // 10 members, runner sd 3%, own noise 1.5%; cutoff 0.2 stands for level 0.0728, large enough
+    // to count in 300 runs. The group is one test at that level: its three checks share it.
+    const series = timingSeries(31, 10, 340, 0.03, 0.015);
+    const config = configFrom(`defaults:\n  transform: log\n  window: 40\n  cutoff: 0.2\n  change-points: false\n${GROUP}`);
+    let fired = 0;
+    let level = 0;
+    for (let k = 40; k < 340; k++) {
+      const report = runGate({ config, history: historySlice(series, k - 40, k), run: runAt(series, k), series: 'main' });
+      const group = report.groups[0]!;
+      level = group.level;
+      if (group.tail < group.level) fired++;
+    }
+    console.info(`group calibration: the group test fired in ${fired}/300 clean runs at level ${level.toFixed(4)}`);
+    // Bin(300, 0.0728): mean 21.8; 99.9% quantile about 37. The weighted Bonferroni spends 0.8 +
+    // 0.1 of the level on near-exact checks (the distance part is conservative), so at least
+    // half the level shows: below 6 would mean a dead test (P < 1e-4 under Bin(300, 0.036)).
+    expect(level).toBeCloseTo(0.0728, 3); // two-sided normal tail at sqrt(-2 ln 0.2) = 1.794 sd (A&S 26.1)
+    expect(fired).toBeLessThanOrEqual(37);
+    expect(fired).toBeGreaterThanOrEqual(6);
+  }, 300_000);
+
+  it('with family control the group enters the adjustment as one decision', () => {
+    const series = timingSeries(23, 20, 61, 0.04, 0.01);
+    const extra = { 'size/app': [500, 501, 499, 500, 502, 498, 500, 501, 499, 500] };
+    const config = configFrom(`family: holm\ndefaults:\n  transform: log\n  window: 60\n${GROUP}`);
+    const history = historySlice(series, 0, 60);
+    history.columns.set('size/app', { values: [...Array<number>(50).fill(Number.NaN), ...extra['size/app']] });
+    const run = runAt(series, 60);
+    run.metrics.set('size/app', { value: 500, count: 1 });
+    const report = runGate({ config, history, run, series: 'main' });
+    const group = report.groups[0]!;
+    const size = report.metrics.find((m) => m.name === 'size/app')!;
+    // Holm over 2 decisions: the smaller tail doubles, the other is max(own x 1, that) (Holm 1979)
+    const smaller = Math.min(group.tail, size.tail!);
+    expect(Math.min(group.adjusted!, size.adjusted!)).toBeCloseTo(Math.min(1, 2 * smaller), 12);
+    expect(size.reason).toMatch(/holm-adjusted over 2/);
+  });
+});
