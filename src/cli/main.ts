@@ -8,6 +8,7 @@ import { importCommand } from './commands/import.js';
 import { verifyCommand } from './commands/verify.js';
 import { reportCommand } from './commands/report.js';
 import { demoCommand } from './commands/demo.js';
+import { tuneCommand } from './commands/tune.js';
 
 export type { CliIo } from './context.js';
 
@@ -19,6 +20,7 @@ export const COMMANDS: readonly CommandFactory[] = [
   checkCommand,
   recordCommand,
   explainCommand,
+  tuneCommand,
   reportCommand,
   importCommand,
   verifyCommand,
