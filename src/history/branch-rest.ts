@@ -63,7 +63,10 @@ export function createGitDataClient(options: GitDataClientOptions): GitDataApi {
       raw = await res.text();
     } catch (cause) {
       const timedOut = (cause as Error)?.name === 'TimeoutError';
-      throw new GitDataError(timedOut ? `${method} ${path}: no answer within ${timeoutMs} ms` : `${method} ${path}: ${(cause as Error)?.message ?? cause}`, { transient: true, cause });
+      // undici reports "fetch failed" and keeps the reason (a reset, a cut body) in `cause`.
+      const inner = (cause as { cause?: { message?: string } })?.cause?.message;
+      const why = `${(cause as Error)?.message ?? String(cause)}${inner ? ` (${inner})` : ''}`;
+      throw new GitDataError(timedOut ? `${method} ${path}: no answer within ${timeoutMs} ms` : `${method} ${path}: ${why}`, { transient: true, cause });
     }
     let json: Json = {};
     try {
