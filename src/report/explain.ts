@@ -100,10 +100,13 @@ export function renderExplain(input: ExplainInput): string {
   out.push(`█ fitted density${log ? ' (of log value)' : ''}   • baseline runs   | cutoff band edges   ▲ this run`);
   out.push('');
 
-  const centre = log ? `geometric mean ${formatValue(Math.exp(b.mean), unit)}, sd ${formatNumber(b.sd, 3)} on the log scale (×/÷ ${formatNumber(Math.exp(b.sd), 4)})` : `mean ${formatValue(b.mean, unit)}, sd ${formatValue(b.sd, unit)}`;
+  const centre = log
+    ? `geometric mean ${formatValue(Math.exp(b.mean), unit)}, sd ${formatNumber(b.sd, 3)} on the log scale (×/÷ ${formatNumber(Math.exp(b.sd), 4)})`
+    : `mean ${formatValue(b.mean, unit)}, sd ${formatValue(b.sd, unit)}`;
   out.push(`baseline: ${centre}, n = ${b.n} runs${b.since ? ` since run ${cleanText(b.since, 80)}` : ''}`);
   out.push(`this run: ${formatValue(m.value, unit)} (${formatChange(m.change)}, ${formatSigma(m.z)})`);
-  out.push(`band where the density stays above the cutoff: ${formatValue(fromFit(b.mean - k * b.sd), unit)} to ${formatValue(fromFit(b.mean + k * b.sd), unit)} (mean ± ${formatNumber(k, 3)} sd)`);
+  const [low, high] = [formatValue(fromFit(b.mean - k * b.sd), unit), formatValue(fromFit(b.mean + k * b.sd), unit)];
+  out.push(`band where the density stays above the cutoff: ${low} to ${high} (mean ± ${formatNumber(k, 3)} sd)`);
   out.push(`relative density vs cutoff: ${formatAgainstCutoff(m.relativeDensity, cutoff)}; worse side: ${m.worse === 'both' ? 'either' : m.worse}`);
   out.push(`verdict for this metric: ${paintRun(m.status)} — ${cleanText(m.reason, 400)}`);
   return out.join('\n') + '\n';

@@ -1,6 +1,7 @@
 import { scaleLinear, scaleLog } from 'd3-scale';
 import type { ScaleLinear, ScaleLogarithmic } from 'd3-scale';
 import { escapeHtml } from './escape.js';
+import { px, svgElement, textElement } from './html-svg.js';
 
 /** The scales the charts use; both give ticks and a matching tick format (d3-scale). */
 export type AxisScale = ScaleLinear<number, number> | ScaleLogarithmic<number, number>;
@@ -20,8 +21,6 @@ function tickLabels(scale: AxisScale, ticks: number[], count: number): string[] 
   return own;
 }
 
-/** SVG coordinates with two decimals: enough for a screen, and non-finite values never leak in. */
-export const px = (x: number): number => (Number.isFinite(x) ? Math.round(x * 100) / 100 : 0);
 
 /**
  * A horizontal axis at height `y`: a baseline, d3-scale's ticks with their own format, and an
@@ -33,12 +32,15 @@ export function bottomAxis(scale: AxisScale, y: number, label: string, count = 6
   const labels = tickLabels(scale, values, count);
   const ticks = values
     .map((t, i) => {
-      const x = px(scale(t));
+      const x = scale(t);
       const text = labels[i] ?? '';
-      return `<line x1="${x}" x2="${x}" y1="${px(y)}" y2="${px(y + 5)}"/>` + (text ? `<text x="${x}" y="${px(y + 17)}" text-anchor="middle">${escapeHtml(text)}</text>` : '');
+      const tick = svgElement('line', { x1: x, x2: x, y1: y, y2: y + 5 });
+      return text ? tick + textElement({ x, y: y + 17, 'text-anchor': 'middle' }, escapeHtml(text)) : tick;
     })
     .join('');
-  return `<g class="axis"><line x1="${px(x0)}" x2="${px(x1)}" y1="${px(y)}" y2="${px(y)}"/>${ticks}<text class="axis-label" x="${px((x0 + x1) / 2)}" y="${px(y + 32)}" text-anchor="middle">${label}</text></g>`;
+  const rule = svgElement('line', { x1: x0, x2: x1, y1: y, y2: y });
+  const name = textElement({ class: 'axis-label', x: (x0 + x1) / 2, y: y + 32, 'text-anchor': 'middle' }, label);
+  return `<g class="axis">${rule}${ticks}${name}</g>`;
 }
 
 /** A vertical axis at `x`, ticks to the left, label rotated along it. `label` must be escaped. */
@@ -48,13 +50,16 @@ export function leftAxis(scale: AxisScale, x: number, label: string, count = 5):
   const labels = tickLabels(scale, values, count);
   const ticks = values
     .map((t, i) => {
-      const y = px(scale(t));
+      const y = scale(t);
       const text = labels[i] ?? '';
-      return `<line x1="${px(x - 5)}" x2="${px(x)}" y1="${y}" y2="${y}"/>` + (text ? `<text x="${px(x - 8)}" y="${y}" dy="0.32em" text-anchor="end">${escapeHtml(text)}</text>` : '');
+      const tick = svgElement('line', { x1: x - 5, x2: x, y1: y, y2: y });
+      return text ? tick + textElement({ x: x - 8, y, dy: '0.32em', 'text-anchor': 'end' }, escapeHtml(text)) : tick;
     })
     .join('');
-  const mid = px((y0 + y1) / 2);
-  return `<g class="axis"><line x1="${px(x)}" x2="${px(x)}" y1="${px(y0)}" y2="${px(y1)}"/>${ticks}<text class="axis-label" transform="translate(${px(x - 52)},${mid}) rotate(-90)" text-anchor="middle">${label}</text></g>`;
+  const rule = svgElement('line', { x1: x, x2: x, y1: y0, y2: y1 });
+  const turn = `translate(${px(x - 52)},${px((y0 + y1) / 2)}) rotate(-90)`;
+  const name = textElement({ class: 'axis-label', transform: turn, 'text-anchor': 'middle' }, label);
+  return `<g class="axis">${rule}${ticks}${name}</g>`;
 }
 
 /**

@@ -2,9 +2,10 @@ import { scaleLinear } from 'd3-scale';
 import { line } from 'd3-shape';
 import type { MetricResult } from '../gate/report.js';
 import { gaussianDensity } from '../model/density.js';
-import { bottomAxis, leftAxis, px, valueScale } from './html-axis.js';
+import { bottomAxis, leftAxis, valueScale } from './html-axis.js';
 import { cutoffBand } from './html-data.js';
 import { statusSymbol } from './html-symbol.js';
+import { chartSvg, px, svgElement, textElement } from './html-svg.js';
 import { escapeHtml } from './escape.js';
 import { formatDensity, formatValue } from './format.js';
 
@@ -52,30 +53,36 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
   for (const bin of bins) {
     if (bin.count === 0) continue;
     const tip = `${bin.count} run${bin.count === 1 ? '' : 's'} in ${formatValue(bin.loEdge)} to ${formatValue(bin.hiEdge)}`;
-    parts.push(`<rect class="bin" x="${px(x(bin.loEdge))}" y="${px(y(bin.density))}" width="${px(Math.max(1, x(bin.hiEdge) - x(bin.loEdge) - 1))}" height="${px(y(0) - y(bin.density))}"><title>${escapeHtml(tip)} ${unit}</title></rect>`);
+    const width = Math.max(1, x(bin.hiEdge) - x(bin.loEdge) - 1);
+    const attrs = { class: 'bin', x: x(bin.loEdge), y: y(bin.density), width, height: y(0) - y(bin.density) };
+    parts.push(svgElement('rect', attrs, `${escapeHtml(tip)} ${unit}`));
   }
   const ts = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => toFit(d0) + ((toFit(d1) - toFit(d0)) * i) / CURVE_POINTS);
   const curve = line<number>()
     .x((t) => x(log ? Math.exp(t) : t))
     .y((t) => y(gaussianDensity(t, b.mean, b.sd)));
-  parts.push(`<path class="curve" d="${curve(ts) ?? ''}"><title>fitted Gaussian: mean ${escapeHtml(formatValue(band.mean))} ${unit}${log ? ' (geometric)' : ''}</title></path>`);
+  const curveTip = `fitted Gaussian: mean ${escapeHtml(formatValue(band.mean))} ${unit}${log ? ' (geometric)' : ''}`;
+  parts.push(svgElement('path', { class: 'curve', d: curve(ts) ?? '' }, curveTip));
   const level = y(peak * cutoff);
   for (const edge of [band.low, band.high]) {
-    parts.push(`<line class="cutoff" x1="${px(x(edge))}" x2="${px(x(edge))}" y1="${px(y(0))}" y2="${M.top}"><title>relative density = cutoff ${escapeHtml(formatDensity(cutoff))} at ${escapeHtml(formatValue(edge))} ${unit}</title></line>`);
+    const tip = `relative density = cutoff ${escapeHtml(formatDensity(cutoff))} at ${escapeHtml(formatValue(edge))} ${unit}`;
+    parts.push(svgElement('line', { class: 'cutoff', x1: x(edge), x2: x(edge), y1: y(0), y2: M.top }, tip));
   }
-  parts.push(`<line class="cutoff" x1="${px(x(band.low))}" x2="${px(x(band.high))}" y1="${px(level)}" y2="${px(level)}"/>`);
+  parts.push(svgElement('line', { class: 'cutoff', x1: x(band.low), x2: x(band.high), y1: level, y2: level }));
   if (now !== undefined) {
-    parts.push(`<line class="now" x1="${px(x(now))}" x2="${px(x(now))}" y1="${px(y(0))}" y2="${M.top}"/>`);
+    parts.push(svgElement('line', { class: 'now', x1: x(now), x2: x(now), y1: y(0), y2: M.top }));
     parts.push(statusSymbol(m.status, px(x(now)), px(y(0) - 9), `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`));
   }
   if (offChart && given !== undefined) {
     const right = toFit(given) > b.mean;
     const edgeX = right ? W - M.right - 8 : M.left + 8;
-    const tip = `this run: ${escapeHtml(formatValue(given))} ${unit} (${m.status}), beyond ${OFF_CHART_SD} sd: off the chart ${right ? 'to the right' : 'to the left'}`;
+    const shown = `${escapeHtml(formatValue(given))} ${unit}`;
+    const tip = `this run: ${shown} (${m.status}), beyond ${OFF_CHART_SD} sd: off the chart ${right ? 'to the right' : 'to the left'}`;
     parts.push(statusSymbol(m.status, px(edgeX), px(y(0) - 9), tip));
-    parts.push(`<text class="note" x="${px(edgeX)}" y="${M.top + 10}" text-anchor="${right ? 'end' : 'start'}">this run ${right ? '→' : '←'} ${escapeHtml(formatValue(given))} ${unit}</text>`);
+    const noteAttrs = { class: 'note', x: edgeX, y: M.top + 10, 'text-anchor': right ? 'end' : 'start' };
+    parts.push(textElement(noteAttrs, `this run ${right ? '→' : '←'} ${shown}`));
   }
   const axes = bottomAxis(x, H - M.bottom, unit || 'value') + leftAxis(y, M.left, log ? 'density (per log unit)' : 'density');
   const title = `baseline of ${escapeHtml(m.name, 200)}: histogram and fitted density`;
-  return `<svg class="chart" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${title}"><title>${title}</title>${axes}${parts.join('')}</svg>`;
+  return chartSvg(W, H, title, axes + parts.join(''));
 }

@@ -2,9 +2,10 @@ import { scaleLinear } from 'd3-scale';
 import { area, line } from 'd3-shape';
 import type { MetricResult } from '../gate/report.js';
 import type { MetricColumn, RunInfo } from '../history/history.js';
-import { bottomAxis, leftAxis, px, valueScale } from './html-axis.js';
+import { bottomAxis, leftAxis, valueScale } from './html-axis.js';
 import { baselinePoints, columnPoints, cutoffBand, type ChartPoint } from './html-data.js';
 import { statusSymbol } from './html-symbol.js';
+import { chartSvg, px, svgElement } from './html-svg.js';
 import { escapeHtml } from './escape.js';
 import { formatValue } from './format.js';
 
@@ -45,24 +46,28 @@ export function historyChart(m: MetricResult, column: MetricColumn | undefined, 
       .x((i) => x(i))
       .y0(() => y(band.low))
       .y1(() => y(band.high));
-    parts.push(`<path class="band" d="${shade([first, runs.length]) ?? ''}"><title>density above the cutoff: ${escapeHtml(formatValue(band.low))} to ${escapeHtml(formatValue(band.high))} ${unit}</title></path>`);
+    const bandTip = `density above the cutoff: ${escapeHtml(formatValue(band.low))} to ${escapeHtml(formatValue(band.high))} ${unit}`;
+    parts.push(svgElement('path', { class: 'band', d: shade([first, runs.length]) ?? '' }, bandTip));
     const centre = line<number>()
       .x((i) => x(i))
       .y(() => y(band.mean));
-    parts.push(`<path class="mean" d="${centre([first, runs.length]) ?? ''}"><title>fitted mean ${escapeHtml(formatValue(band.mean))} ${unit}</title></path>`);
+    const meanTip = `fitted mean ${escapeHtml(formatValue(band.mean))} ${unit}`;
+    parts.push(svgElement('path', { class: 'mean', d: centre([first, runs.length]) ?? '' }, meanTip));
   }
   const trace = line<ChartPoint>()
     .x((p) => x(p.index))
     .y((p) => y(p.value));
-  if (pts.length > 1) parts.push(`<path class="trace" d="${trace(pts) ?? ''}"/>`);
+  if (pts.length > 1) parts.push(svgElement('path', { class: 'trace', d: trace(pts) ?? '' }));
   for (const p of pts) {
-    const tip = `run ${p.run.id}${p.run.time ? ` · ${p.run.time}` : ''}${p.run.sha ? ` · ${p.run.sha.slice(0, 12)}` : ''}: ${formatValue(p.value)} ${m.unit ?? ''}`;
-    parts.push(`<circle class="point" cx="${px(x(p.index))}" cy="${px(y(p.value))}" r="2.6"><title>${escapeHtml(tip, 300)}</title></circle>`);
+    const when = `${p.run.time ? ` · ${p.run.time}` : ''}${p.run.sha ? ` · ${p.run.sha.slice(0, 12)}` : ''}`;
+    const tip = escapeHtml(`run ${p.run.id}${when}: ${formatValue(p.value)} ${m.unit ?? ''}`, 300);
+    parts.push(svgElement('circle', { class: 'point', cx: x(p.index), cy: y(p.value), r: 2.6 }, tip));
   }
   if (now !== undefined) {
-    parts.push(statusSymbol(m.status, px(x(runs.length)), px(y(now)), `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`));
+    const tip = `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`;
+    parts.push(statusSymbol(m.status, px(x(runs.length)), px(y(now)), tip));
   }
-  const axes = bottomAxis(x, H - M.bottom, start > 0 ? `run, newest ${shown} of ${runs.length} (last: this run)` : 'run, oldest to newest (last: this run)') + leftAxis(y, M.left, unit || 'value');
-  const title = `history of ${escapeHtml(m.name, 200)}`;
-  return `<svg class="chart" viewBox="0 0 ${W} ${H}" width="${W}" height="${H}" role="img" aria-label="${title}"><title>${title}</title>${axes}${parts.join('')}</svg>`;
+  const xLabel = start > 0 ? `run, newest ${shown} of ${runs.length} (last: this run)` : 'run, oldest to newest (last: this run)';
+  const axes = bottomAxis(x, H - M.bottom, xLabel) + leftAxis(y, M.left, unit || 'value');
+  return chartSvg(W, H, `history of ${escapeHtml(m.name, 200)}`, axes + parts.join(''));
 }
