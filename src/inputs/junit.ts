@@ -44,7 +44,13 @@ export function readJunit(text: string, file: string, limits: InputLimits = DEFA
   const sink = new ReadingSink(file, limits);
   const roots = asElements(doc.testsuites);
   if (roots.length > 0) {
-    roots.forEach((root, i) => readSuites(root, `${file}:/testsuites${index(roots, i)}`, [], sink));
+    roots.forEach((root, i) => {
+      const where = `${file}:/testsuites${index(roots, i)}`;
+      // Some writers put test cases straight under <testsuites>; they have no suite part.
+      const cases = asElements(root.testcase);
+      cases.forEach((testCase, j) => readCase(testCase, `${where}/testcase${index(cases, j)}`, [], '', sink));
+      readSuites(root, where, [], sink);
+    });
   } else if (doc.testsuite !== undefined) {
     readSuites(doc, `${file}:`, [], sink);
   } else {

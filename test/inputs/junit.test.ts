@@ -12,6 +12,11 @@ describe('readJunit', () => {
     ]);
   });
 
+  it('reads test cases placed straight under <testsuites>', () => {
+    const result = readJunit('<testsuites><testcase classname="C" name="t" time="0.25"/></testsuites>', 'j.xml');
+    expect(result.readings).toEqual([{ name: 'C/t', value: 0.25, unit: 's', where: 'j.xml:/testsuites/testcase' }]);
+  });
+
   it('names file:line:col of malformed XML', () => {
     const error = inputErrorOf(() => readJunit('<testsuites>\n  <testsuite name="a">\n</testsuites>', 'j.xml'));
     expect(error.message).toMatch(/malformed XML/);
