@@ -33,21 +33,25 @@ export function canSlide(settings: MetricSettings): boolean {
 export function incrementalReplay(sequence: MetricSequence): MetricReplay {
   const { name, settings, values, own, runIndex } = sequence;
   const replay = emptyReplay(name, 'incremental');
+  // Moments of (value - shift), the shift a recent value: Welford's rounding then scales with the
+  // spread, not with the offset (1e6 + noise keeps its digits).
+  let shift = values[0] ?? 0;
   let moments = new RunningMoments();
   let start = 0;
   let sinceRebuild = 0;
   for (let k = 0; k < values.length; k++) {
     if (k > 0) {
-      moments.add(values[k - 1]!);
-      if (k - start > settings.window) moments.remove(values[start++]!);
+      moments.add(values[k - 1]! - shift);
+      if (k - start > settings.window) moments.remove(values[start++]! - shift);
       if (++sinceRebuild >= settings.window) {
-        moments = RunningMoments.of(values.slice(start, k));
+        shift = values[start]!;
+        moments = RunningMoments.of(values.slice(start, k).map((v) => v - shift));
         sinceRebuild = 0;
       }
     }
     const n = k - start;
     if (n === 0 || n < settings.minRuns) continue;
-    const fit = slidingFit(moments, values, start, k, settings);
+    const fit = slidingFit(moments, shift, values, start, k, settings);
     const x = toFitScale(own[k]!, settings.transform, name);
     const figures = decisionFigures(x, fit, settings);
     const direction = directionOf(x - fit.mean, settings.worse);
@@ -66,10 +70,12 @@ function sideOf(direction: 'worse' | 'better' | 'none', beyond: boolean): Side {
 }
 
 /** fitGaussian's mle/unbiased result from running moments, floored like judgeMetric's fitWithFloor. */
-function slidingFit(moments: RunningMoments, values: number[], start: number, end: number, settings: MetricSettings): GaussianFit {
-  const { n, mean, squares } = moments;
-  // Relative spread below ~1e-7 is within Welford's rounding of a constant window: refit exactly.
-  if (squares <= 1e-14 * n * mean * mean) return floored(values.slice(start, end), settings);
+function slidingFit(moments: RunningMoments, shift: number, values: number[], start: number, end: number, settings: MetricSettings): GaussianFit {
+  const { n, squares } = moments;
+  const mean = shift + moments.mean;
+  // A spread within rounding of the offset is a constant window (or nearly): refit exactly, since
+  // a constant history must give sd 0, not 1e-17.
+  if (squares <= 1e-20 * n * mean * mean) return floored(values.slice(start, end), settings);
   const sampleVariance = n > 1 ? squares / (n - 1) : 0;
   const spread = Math.sqrt(settings.fit === 'mle' ? squares / n : sampleVariance);
   const floor = fitScaleFloor(settings.resolution, settings.transform, mean);

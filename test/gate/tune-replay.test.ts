@@ -1,0 +1,120 @@
+import { describe, expect, it } from 'vitest';
+import type { MetricSettings } from '../../src/config/types.js';
+import { runGate } from '../../src/gate/gate.js';
+import { replayHistory } from '../../src/gate/tune/replay.js';
+import type { MetricReplay } from '../../src/gate/tune/replay-point.js';
+import type { History } from '../../src/history/history.js';
+import { expectClose } from '../helpers/close.js';
+import { jStat } from '../model/jstat.js';
+import { seededNormal, seededUniform } from '../model/random.js';
+import { configFrom, historyOf, runOf, settingsWith } from './helpers/scenario.js';
+import { defaultConfig } from '../../src/config/load.js';
+
+/** Both replays of one history under one `defaults` block. */
+function bothReplays(history: History, defaults: Partial<MetricSettings>): { fast: MetricReplay[]; slow: MetricReplay[] } {
+  const config = { ...defaultConfig(), defaults: settingsWith(defaults) };
+  return { fast: replayHistory(config, history).metrics, slow: replayHistory(config, history, { refit: true }).metrics };
+}
+
+/** log r and tails agree to 1e-9 (relative, or absolute near 0); sides and runs are equal. */
+function expectSameReplay(fast: MetricReplay[], slow: MetricReplay[]): void {
+  expect(fast.map((m) => m.name)).toEqual(slow.map((m) => m.name));
+  fast.forEach((f, j) => {
+    const s = slow[j]!;
+    expect(f.method).toBe('incremental');
+    expect(s.method).toBe('refit');
+    expect(f.run).toEqual(s.run);
+    expect(f.side).toEqual(s.side);
+    f.relativeDensity.forEach((r, p) => {
+      const q = s.relativeDensity[p]!;
+      if (q === 0 || r === 0) expect(r).toBe(q);
+      else expectClose(Math.log(r), Math.log(q), 1e-9, 1e-9);
+      expectClose(f.tail[p]!, s.tail[p]!, 1e-9, 1e-12);
+    });
+  });
+}
+
+describe('replay: incremental sliding window equals the refit of every baseline', () => {
+  const normal = seededNormal(20261201);
+  const uniform = seededUniform(7);
+  const n = 400;
+  // Offsets of 1e6 with unit noise stress the running moments (a naive sum of squares loses ~12 digits there).
+  const history = historyOf({
+    'build/time': Array.from({ length: n }, () => 1e6 + normal()),
+    'latency/p50': Array.from({ length: n }, () => Math.exp(3 + 0.2 * normal())),
+    'size/bundle': Array.from({ length: n }, () => 40000 + Math.round(20 * uniform())),
+    'flat/constant': Array.from({ length: n }, (_, i) => (i % 50 === 49 ? 101 : 100)),
+    'sparse/one': Array.from({ length: n }, (_, i) => (i % 3 === 0 ? NaN : 50 + normal())),
+    calibrate: Array.from({ length: n }, () => 10 + 0.1 * normal()),
+  });
+
+  it.each([
+    ['mle, predictive', { fit: 'mle', changePoints: false }],
+    ['unbiased, plug-in', { fit: 'unbiased', uncertainty: 'plug-in', changePoints: false }],
+    ['log transform, window 25', { transform: 'log', window: 25, changePoints: false }],
+    ['resolution floor 0.5, both sides', { resolution: 0.5, worse: 'both', changePoints: false }],
+    ['relative-to a calibration metric', { relativeTo: 'calibrate', changePoints: false, tolerance: { kind: 'absolute', amount: 0 } }],
+    ['min-runs 2, window 3', { minRuns: 2, window: 3, changePoints: false }],
+  ] as [string, Partial<MetricSettings>][])('%s', (_, defaults) => {
+    const { fast, slow } = bothReplays(history, defaults);
+    expectSameReplay(fast, slow);
+    expect(fast.reduce((a, m) => a + m.run.length, 0)).toBeGreaterThan(1000);
+  });
+
+  it('falls back to refitting for robust fits and change points', () => {
+    const { fast } = bothReplays(history, { fit: 'robust', changePoints: false });
+    expect(fast.every((m) => m.method === 'refit')).toBe(true);
+    const cp = bothReplays(history, { changePoints: true });
+    expect(cp.fast.every((m) => m.method === 'refit')).toBe(true);
+  });
+});
+
+describe('replay decides as the gate does', () => {
+  it('every replayed relative density and tail equals runGate on the runs before it', () => {
+    const normal = seededNormal(99);
+    const history = historyOf({
+      'build/time': Array.from({ length: 40 }, (_, i) => 100 + 2 * normal() + (i === 30 ? 15 : 0)),
+      'throughput/api': Array.from({ length: 40 }, () => 500 + 10 * normal()),
+      calibrate: Array.from({ length: 40 }, () => 10 + 0.1 * normal()),
+    });
+    const config = configFrom(
+      'defaults:\n  window: 20\n  min-runs: 6\nmetrics:\n  - match: "throughput/*"\n    worse: lower\n    relative-to: calibrate\n  - match: "build/*"\n    transform: log\n',
+    );
+    const replay = replayHistory(config, history);
+    let compared = 0;
+    for (const m of replay.metrics) {
+      m.run.forEach((k, p) => {
+        const before: History = {
+          series: 'main',
+          runs: history.runs.slice(0, k),
+          columns: new Map([...history.columns].map(([name, c]) => [name, { values: c.values.slice(0, k) }])),
+        };
+        const run = runOf(Object.fromEntries([...history.columns].map(([name, c]) => [name, c.values[k]!])));
+        const result = runGate({ config, history: before, run, series: 'main' }).metrics.find((r) => r.name === m.name)!;
+        expect(m.relativeDensity[p]).toBe(result.relativeDensity);
+        expect(m.tail[p]).toBe(result.tail);
+        expect(m.side[p] === 1 && m.relativeDensity[p]! < 0.01).toBe(result.status === 'regressed');
+        compared++;
+      });
+    }
+    expect(compared).toBeGreaterThan(80);
+    // The injected +15 (7.5 sd) on build/time at run 31 is replayed as a worse-side alarm at 0.01.
+    const build = replay.metrics.find((m) => m.name === 'build/time')!;
+    const at = build.run.indexOf(30);
+    expect(build.side[at]).toBe(1);
+    expect(build.relativeDensity[at]!).toBeLessThan(0.01);
+  });
+
+  it('a replayed relative density equals the Student-t density ratio of jstat (second opinion)', () => {
+    // Baseline 9, 10, 11, 10, 10, 9, 11, 10 then 13: mean 10, s = sqrt(4/7) (n - 1 divisor),
+    // t = 3 / (s sqrt(1 + 1/8)), r = f_t(t; 7) / f_t(0; 7) (Gelman et al., BDA section 3.2).
+    const history = historyOf({ 'bench/parse': [9, 10, 11, 10, 10, 9, 11, 10, 13] });
+    const config = { ...defaultConfig(), defaults: settingsWith({ changePoints: false }) };
+    const [m] = replayHistory(config, history).metrics;
+    expect(m!.run).toEqual([8]);
+    const t = 3 / (Math.sqrt(4 / 7) * Math.sqrt(1 + 1 / 8));
+    expectClose(m!.relativeDensity[0]!, jStat.studentt.pdf(t, 7) / jStat.studentt.pdf(0, 7), 1e-9);
+    expectClose(m!.tail[0]!, 2 * (1 - jStat.studentt.cdf(t, 7)), 1e-7);
+    expect(m!.side[0]).toBe(1);
+  });
+});
