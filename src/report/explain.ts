@@ -5,6 +5,7 @@ import { cleanText } from './clean.js';
 import { formatAgainstCutoff, formatChange, formatNumber, formatSigma, formatValue } from './format.js';
 import { BLOCKS } from './sparkline.js';
 import { STATUS_GLYPH } from './status.js';
+import { usesPredictive } from './predictive.js';
 
 export interface ExplainInput {
   result: MetricResult;
@@ -106,8 +107,14 @@ export function renderExplain(input: ExplainInput): string {
   out.push(`baseline: ${centre}, n = ${b.n} runs${b.since ? ` since run ${cleanText(b.since, 80)}` : ''}`);
   out.push(`this run: ${formatValue(m.value, unit)} (${formatChange(m.change)}, ${formatSigma(m.z)})`);
   const [low, high] = [formatValue(fromFit(b.mean - k * b.sd), unit), formatValue(fromFit(b.mean + k * b.sd), unit)];
-  out.push(`band where the density stays above the cutoff: ${low} to ${high} (mean ± ${formatNumber(k, 3)} sd)`);
+  out.push(`band where the fitted Gaussian's density stays above the cutoff: ${low} to ${high} (mean ± ${formatNumber(k, 3)} sd)`);
   out.push(`relative density vs cutoff: ${formatAgainstCutoff(m.relativeDensity, cutoff)}; worse side: ${m.worse === 'both' ? 'either' : m.worse}`);
+  if (usesPredictive(m)) {
+    out.push(
+      `  (from the predictive Student-t for a new run, n - 1 = ${b.n - 1} degrees of freedom: heavier tails than the ` +
+        'Gaussian drawn, so a short history needs a larger move to fall below the cutoff)',
+    );
+  }
   out.push(`verdict for this metric: ${paintRun(m.status)} — ${cleanText(m.reason, 400)}`);
   return out.join('\n') + '\n';
 }

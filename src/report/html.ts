@@ -8,6 +8,7 @@ import { baselineHistogram } from './html-histogram.js';
 import { historyChart } from './html-history-chart.js';
 import { HTML_SCRIPT } from './html-script.js';
 import { HTML_STYLE } from './html-style.js';
+import { usesPredictive } from './predictive.js';
 import { STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
 
 export interface HtmlReportInput {
@@ -50,10 +51,13 @@ function metricSection(m: MetricResult, i: number, history: History): string {
   const unit = m.unit === undefined ? '' : ` <span class="meta">(${escapeHtml(m.unit, 40)})</span>`;
   const reason = escapeHtml(m.reason, 1000).replace(/([^.!?])$/, '$1.');
   const scale = m.baseline?.scale === 'log' ? ' Fitted on the log scale.' : '';
+  const judged = usesPredictive(m)
+    ? ` Judged by the predictive Student-t (${(m.baseline?.n ?? 0) - 1} degrees of freedom), whose tails are heavier than the Gaussian band drawn.`
+    : '';
   const ratio = m.baseline?.relativeTo !== undefined ? ` Fitted and drawn as ratios to ${escapeHtml(m.baseline.relativeTo, 300)} in the same run.` : '';
   return (
     `<section class="metric" id="m${i}"><h2><span class="s-${m.status}">${STATUS_GLYPH[m.status]} ${m.status}</span> ${escapeHtml(m.name, 300)}${unit}</h2>` +
-    `<p class="reason">${reason}${scale}${ratio}</p>` +
+    `<p class="reason">${reason}${scale}${ratio}${judged}</p>` +
     (charts.length > 0 ? `<div class="charts">${charts.join('')}</div>` : '<p class="note-text">No values to draw yet.</p>') +
     '</section>'
   );

@@ -46,7 +46,7 @@ describe('renderExplain', () => {
   });
 
   it('states the band whose edges have relative density equal to the cutoff', () => {
-    const m = /band where the density stays above the cutoff: ([\d.]+) s to ([\d.]+) s/.exec(out);
+    const m = /band where the fitted Gaussian's density stays above the cutoff: ([\d.]+) s to ([\d.]+) s/.exec(out);
     expect(m).not.toBeNull();
     const [lo, hi] = [Number(m?.[1]), Number(m?.[2])];
     // Second opinion from jstat: the Gaussian's density at each edge over its density at the mean.
@@ -58,6 +58,22 @@ describe('renderExplain', () => {
     expect(out).toContain('mean ± 3.03 sd');
     expect(out).toContain('relative density vs cutoff: 3.4e-4 < 0.01');
     expect(out).toContain('verdict for this metric: regressed');
+  });
+
+  it('says when the decision used the predictive Student-t (jstat second opinion for its density ratio)', () => {
+    // n = 21 runs, s = 1: a run at t = 3.2 predictive scales has relative density f(t)/f(0) under
+    // Student-t with 20 degrees of freedom, above exp(-z^2/2) for the same run.
+    const n = 21;
+    const scale = Math.sqrt(1 + 1 / n);
+    const sd = Math.sqrt((n - 1) / n); // the 1/m sd of a sample whose n-1 sd is 1
+    const t = 3.2;
+    const z = (t * scale) / sd;
+    const r = jStat.studentt.pdf(t, n - 1) / jStat.studentt.pdf(0, n - 1);
+    expect(r).toBeGreaterThan(Math.exp(-0.5 * z * z));
+    const predictive = { ...result, status: 'ok' as const, z, relativeDensity: r, baseline: { n, mean: 10, sd } };
+    expect(renderExplain({ result: predictive, baselineValues: values, cutoff: 0.01, color: false })).toContain('predictive Student-t');
+    const plugIn = { ...predictive, relativeDensity: Math.exp(-0.5 * z * z) };
+    expect(renderExplain({ result: plugIn, baselineValues: values, cutoff: 0.01, color: false })).not.toContain('predictive Student-t');
   });
 
   it('says so in words when there is no fit', () => {
