@@ -12,6 +12,8 @@ export interface CliIo {
   env: Record<string, string | undefined>;
   /** Whether stdout is a terminal (colour is used only then, and only without NO_COLOR). */
   isTTY: boolean;
+  /** Whether stderr is a terminal (progress lines are drawn only then). */
+  stderrIsTTY?: boolean;
 }
 
 /** Passed to every command factory. A command's action sets `exitCode` (0 unless it says otherwise). */

@@ -23,12 +23,12 @@ describe('usage', () => {
   it('--help lists every command and exits 0', async () => {
     const r = await bellgate(work.dir, ['--help']);
     expect(r.code).toBe(0);
-    for (const c of ['check', 'record', 'explain', 'report', 'import', 'verify', 'demo']) expect(r.stdout).toContain(c);
+    for (const c of ['check', 'record', 'explain', 'tune', 'report', 'import', 'verify', 'demo']) expect(r.stdout).toContain(c);
     expect(r.stdout).toContain('Exit codes');
   });
 
   it('each command has --help with examples', async () => {
-    for (const c of ['check', 'record', 'explain', 'report', 'import', 'verify', 'demo']) {
+    for (const c of ['check', 'record', 'explain', 'tune', 'report', 'import', 'verify', 'demo']) {
       const r = await bellgate(work.dir, [c, '--help']);
       expect(r.code, c).toBe(0);
       expect(r.stdout, c).toContain('Examples:');
