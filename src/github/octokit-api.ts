@@ -1,7 +1,7 @@
 /**
  * The real GitHubApi over octokit (@actions/github's client, which honours the runner's proxy),
- * with @octokit/plugin-retry (5xx, 429 and network errors, growing backoff) and
- * @octokit/plugin-throttling (rate-limit answers, honouring Retry-After). Intervals are tunable so
+ * with @octokit/plugin-retry (5xx and network errors, growing backoff), honourRetryAfter (429,
+ * waiting as Retry-After says) and @octokit/plugin-throttling (GitHub's rate-limit answers). Intervals are tunable so
  * tests can run the same code with millisecond waits.
  */
 import { getOctokit } from '@actions/github';
@@ -11,6 +11,7 @@ import type { ArtifactEntry } from '../history/artifact-store.js';
 import { createGitDataClient } from '../history/branch-rest.js';
 import { DEFAULT_RETRY, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
 import { fetchCapped, readCapped } from './fetch-capped.js';
+import { honourRetryAfter } from './retry-after.js';
 
 const PER_PAGE = 100;
 
@@ -74,10 +75,12 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     target.token,
     {
       baseUrl: target.baseUrl.replace(/\/+$/, ''),
-      retry: { retries: tuning.retries, retryAfterBaseValue: tuning.unitMs },
+      // 429 is retried by honourRetryAfter (which reads Retry-After), not by plugin-retry.
+      retry: { retries: tuning.retries, retryAfterBaseValue: tuning.unitMs, doNotRetry: [400, 401, 403, 404, 410, 422, 429, 451] },
       throttle: { onRateLimit: retryLimit, write: spacedGroup(tuning.unitMs) as never, notifications: spacedGroup(3 * tuning.unitMs) as never, onSecondaryRateLimit: retryLimit, retryAfterBaseValue: tuning.unitMs },
       log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
     },
+    honourRetryAfter(tuning) as never,
     retry,
     throttling,
   );

@@ -96,4 +96,30 @@ describe('createOctokitApi', () => {
     expect(blobCall?.auth).toBeUndefined();
     await expect(client().downloadArtifact(3, 10)).rejects.toThrow(/cap/);
   });
+
+  it('retries a plain 429 after the seconds its Retry-After header gives', async () => {
+    api.state.calls.length = 0;
+    api.state.faults.push({ method: 'GET', path: '/repos/acme/router/issues/13/comments', status: 429, headers: { 'retry-after': '3' }, times: 1 });
+    const started = performance.now();
+    expect(await client(20).listIssueComments(13)).toEqual([]);
+    expect(countCalls(api.state, 'GET', '/repos/acme/router/issues/13/comments')).toBe(2);
+    expect(performance.now() - started).toBeGreaterThanOrEqual(55);
+  });
+
+  it('gives up on a persistent 429 after the configured retries, exactly once per try', async () => {
+    api.state.calls.length = 0;
+    api.state.faults.push({ method: 'GET', path: '/repos/acme/router/issues/14/comments', status: 429, times: 10 });
+    await expect(client().listIssueComments(14)).rejects.toMatchObject({ status: 429 });
+    expect(countCalls(api.state, 'GET', '/repos/acme/router/issues/14/comments')).toBe(4);
+    api.state.faults.length = 0;
+  });
+
+  it('retries a 503 from the storage a download redirects to', async () => {
+    const zip = zipSync({ 'history.json': strToU8('{}') });
+    api.state.artifacts = [{ id: 4, name: 'h', createdAt: '2026-01-01T00:00:00Z', expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 80, sizeInBytes: zip.length, zip }];
+    api.state.calls.length = 0;
+    api.state.faults.push({ method: 'GET', path: '/blob/4', status: 503, times: 1 });
+    expect((await client().downloadArtifact(4, 1 << 20)).length).toBe(zip.length);
+    expect(countCalls(api.state, 'GET', '/blob/4')).toBe(2);
+  });
 });
