@@ -82,6 +82,20 @@ describe('groups (issue 6): the common move and each member\'s own move', () => 
     expect(group.shrinkage).toBeLessThanOrEqual(1);
   });
 
+  it('worse: lower members are signed so that worse is positive: a drop regresses, a rise improves', () => {
+    const series = timingSeries(23, 20, 61, 0.04, 0.01);
+    const implied = (j: number) => series.bases[j]! * Math.exp(series.runner[60]!);
+    const factors = new Map([
+      [series.names[3]!, (0.95 * implied(3)) / series.values[60]![3]!],
+      [series.names[9]!, (1.05 * implied(9)) / series.values[60]![9]!],
+    ]);
+    const report = judge(series, 60, factors, `metrics:\n  - match: "time/*"\n    worse: lower\n${GROUP}`);
+    expect(report.metrics.find((m) => m.name === series.names[3])!.status).toBe('regressed');
+    expect(report.metrics.find((m) => m.name === series.names[9])!.status).toBe('improved');
+    expect(report.groups[0]!.status).toBe('regressed');
+    expect(report.verdict).toBe('regressed');
+  });
+
   it('a group without enough shared history is learning and its members are judged alone', () => {
     const quiet = [99, 101, 100, 99, 101, 100, 99, 101, 100, 100];
     const config = configFrom(GROUP);
