@@ -1,4 +1,4 @@
-import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
+import { existsSync, mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { pathToFileURL } from 'node:url';
@@ -19,12 +19,13 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
   const requests: string[] = [];
   const dialogs: string[] = [];
   let url = '';
+  let dir = '';
 
   beforeAll(async () => {
     const hostile = Object.values(HOSTILE).map((name, k) => ({ name, unit: '<b>u</b>', centre: 10 + k, spread: 0.5, now: 10 + k, status: 'ok' as const }));
     const { report, history } = makeFixture(hostile);
     const html = renderHtmlReport({ report, history, generatedAt: '2026-12-01T12:00:00Z' });
-    const dir = join(tmpdir(), `bellgate-report-${process.pid}`);
+    dir = join(tmpdir(), `bellgate-report-${process.pid}`);
     mkdirSync(dir, { recursive: true });
     const file = join(dir, 'report.html');
     writeFileSync(file, html);
@@ -50,6 +51,7 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
 
   afterAll(async () => {
     await browser?.close();
+    if (dir) rmSync(dir, { recursive: true, force: true });
   });
 
   it('loads with no console errors, no network requests and no script from metric names', async () => {
@@ -103,9 +105,9 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
   });
 
   it('saves a screenshot for people to look at', async () => {
-    const dir = new URL('../artifacts/', import.meta.url).pathname;
-    mkdirSync(dir, { recursive: true });
-    await page.screenshot({ path: join(dir, 'report.png'), fullPage: true });
-    expect(existsSync(join(dir, 'report.png'))).toBe(true);
+    const out = new URL('../artifacts/', import.meta.url).pathname;
+    mkdirSync(out, { recursive: true });
+    await page.screenshot({ path: join(out, 'report.png'), fullPage: true });
+    expect(existsSync(join(out, 'report.png'))).toBe(true);
   });
 });

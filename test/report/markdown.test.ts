@@ -73,6 +73,15 @@ describe('renderMarkdown', () => {
     expect(md).toContain('</details>');
   });
 
+  it('puts everything in <details> when nothing is flagged', () => {
+    const quiet = { ...report, verdict: 'pass' as const, metrics: report.metrics.filter((m) => m.status === 'ok'), groups: [] };
+    const md = renderMarkdown(quiet);
+    const [open, closed = ''] = md.split('<details>');
+    expect(open).toContain('**pass**');
+    expect(tableRows(open ?? '').length).toBe(0);
+    expect(tableRows(closed).length).toBe(quiet.metrics.length);
+  });
+
   it('keeps any series name inside one HTML comment', () => {
     const line = markerLine(commentMarker('x --> <script>\n'));
     expect(line.startsWith('<!-- ')).toBe(true);
