@@ -1,10 +1,9 @@
 /**
  * The real GitHubApi over octokit (@actions/github's client, which honours the runner's proxy),
  * with @octokit/plugin-retry (5xx and network errors, growing backoff), honourRetryAfter (429,
- * waiting as Retry-After says) and @octokit/plugin-throttling (GitHub's rate-limit answers). Intervals are tunable so
- * tests can run the same code with millisecond waits.
+ * waiting as Retry-After says) and @octokit/plugin-throttling (GitHub's rate-limit answers).
+ * Intervals are tunable so tests can run the same code with millisecond waits.
  */
-import { getOctokit } from '@actions/github';
 import { retry } from '@octokit/plugin-retry';
 import { throttling } from '@octokit/plugin-throttling';
 import type { ArtifactEntry } from '../history/artifact-store.js';
@@ -14,6 +13,8 @@ import { fetchCapped, readCapped } from './fetch-capped.js';
 import { honourRetryAfter } from './retry-after.js';
 
 const PER_PAGE = 100;
+
+type Octokit = ReturnType<typeof import('@actions/github').getOctokit>;
 
 type Json = Record<string, unknown>;
 const obj = (v: unknown): Json => (typeof v === 'object' && v !== null ? (v as Json) : {});
@@ -71,7 +72,11 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     log(`GitHub API asked to wait ${after} s before ${options.method ?? ''} ${options.url ?? ''} (retry ${count + 1} of ${tuning.retries})`);
     return count < tuning.retries;
   };
-  const octokit = getOctokit(
+  // @actions/github parses the event payload when it is first imported; importing it on first use
+  // keeps a check-only run with a file store from loading it at all, and any failure there
+  // becomes a plain message instead of a crash at start-up.
+  let client: Promise<Octokit> | undefined;
+  const octokit = (): Promise<Octokit> => (client ??= import('@actions/github').then(({ getOctokit }) => getOctokit(
     target.token,
     {
       baseUrl: target.baseUrl.replace(/\/+$/, ''),
@@ -83,13 +88,13 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     honourRetryAfter(tuning) as never,
     retry,
     throttling,
-  );
+  )));
   const repo = { owner: target.owner, repo: target.repo };
 
   async function pages<T>(route: string, params: Json, pick: (data: unknown) => unknown[], map: (raw: unknown) => T): Promise<T[]> {
     const out: T[] = [];
     for (let page = 1; page <= maxPages; page++) {
-      const res = await octokit.request(route, { ...repo, ...params, per_page: PER_PAGE, page });
+      const res = await (await octokit()).request(route, { ...repo, ...params, per_page: PER_PAGE, page });
       const items = pick(res.data);
       out.push(...items.map(map));
       if (items.length < PER_PAGE) break;
@@ -103,7 +108,7 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     async downloadArtifact(id, maxBytes) {
       // The API answers 302 with a short-lived storage URL; following it by hand keeps the token
       // off the storage request and lets the download stop at the size cap.
-      const res = await octokit.request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
+      const res = await (await octokit()).request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
         ...repo,
         artifact_id: id,
         archive_format: 'zip',
@@ -119,11 +124,11 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     listIssueComments: (issue) =>
       pages('GET /repos/{owner}/{repo}/issues/{issue_number}/comments', { issue_number: issue }, (d) => (Array.isArray(d) ? d : []), toComment),
     async createIssueComment(issue, body) {
-      const res = await octokit.request('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', { ...repo, issue_number: issue, body });
+      const res = await (await octokit()).request('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', { ...repo, issue_number: issue, body });
       return toComment(res.data);
     },
     async updateIssueComment(id, body) {
-      await octokit.request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
+      await (await octokit()).request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
     },
     // The branch store's client: fetch-based, with its own timeout and the same retry tuning.
     gitData: createGitDataClient({ ...repo, token: target.token, baseUrl: target.baseUrl, retries: tuning.retries, unitMs: tuning.unitMs }),
