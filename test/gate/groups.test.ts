@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { runGate } from '../../src/gate/gate.js';
 import type { Report } from '../../src/gate/report.js';
+import { jStat } from '../model/jstat.js';
 import { configFrom, historyOf, runOf } from './helpers/scenario.js';
 import { historySlice, runAt, timingSeries, type TimingSeries } from './helpers/timings.js';
 
@@ -109,6 +110,31 @@ describe('groups (issue 6): the common move and each member\'s own move', () => 
     expect(report.groups[0]!.reason).toMatch(/members are judged alone/);
     expect(report.metrics.find((m) => m.name === 'time/a')!.status).toBe('regressed');
     expect(report.verdict).toBe('regressed');
+  });
+});
+
+describe('groups: the moves checked by hand', () => {
+  it('common and own moves of a two-member group', () => {
+    // a = 1..8 and b = 2 1 4 3 6 5 8 7: both mean 4.5, n-1 sd s = sqrt(42/7) = 2.449.
+    // common c = ((a + b)/2 - 4.5)/s = (-3 -3 -1 -1 1 1 3 3)/s: mean 0, sd sqrt(40/7)/s.
+    // own move of a: (a - b)/(2s) = (-.5 .5 -.5 .5 ...)/s: mean 0, sd (0.5/s) sqrt(8/7).
+    // This run: a = 4.5 + 2, b = 4.5 -> c = 1/s, own move of a = 1/s, of b = -1/s:
+    // common z = 1 / sqrt(40/7) = 0.41833; own z of a = 1 / (0.5 sqrt(8/7)) = 1.87083.
+    const report = runGate({
+      config: configFrom(GROUP),
+      history: historyOf({ 'time/a': [1, 2, 3, 4, 5, 6, 7, 8], 'time/b': [2, 1, 4, 3, 6, 5, 8, 7] }),
+      run: runOf({ 'time/a': 6.5, 'time/b': 4.5 }),
+      series: 'main',
+    });
+    const group = report.groups[0]!;
+    expect(group.n).toBe(8);
+    expect(group.common.z).toBeCloseTo(1 / Math.sqrt(40 / 7), 12);
+    // its tail: predictive Student-t, 7 dof, scale sqrt(1 + 1/8); jstat as the second opinion
+    const t = 1 / Math.sqrt(40 / 7) / Math.sqrt(1 + 1 / 8);
+    expect(group.common.tail).toBeCloseTo(2 * (1 - jStat.studentt.cdf(t, 7)), 8);
+    expect(group.members.find((m) => m.name === 'time/a')!.ownZ).toBeCloseTo(1 / (0.5 * Math.sqrt(8 / 7)), 12);
+    expect(group.members.find((m) => m.name === 'time/b')!.ownZ).toBeCloseTo(-1 / (0.5 * Math.sqrt(8 / 7)), 12);
+    expect(group.status).toBe('ok');
   });
 });
 
