@@ -93,11 +93,16 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
     ref: env.GITHUB_REF || undefined,
     workflow: env.GITHUB_WORKFLOW || 'workflow',
     job: env.GITHUB_JOB || 'job',
-    defaultBranch: typeof repository?.default_branch === 'string' ? repository.default_branch : undefined,
+    defaultBranch: typeof repository?.default_branch === 'string' ? repository.default_branch : scheduledBranch(eventName, env.GITHUB_REF),
     pullRequest,
     apiUrl: env.GITHUB_API_URL || 'https://api.github.com',
     serverUrl: env.GITHUB_SERVER_URL || 'https://github.com',
     runnerTemp,
     workspace: env.GITHUB_WORKSPACE || '',
   };
+}
+
+/** Scheduled runs always run on the default branch, so their ref names it when the payload does not. */
+function scheduledBranch(eventName: string, ref: string | undefined): string | undefined {
+  return eventName === 'schedule' && ref?.startsWith('refs/heads/') ? ref.slice('refs/heads/'.length) : undefined;
 }

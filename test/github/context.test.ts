@@ -39,4 +39,8 @@ describe('readRunContext', () => {
   it('refuses an unreadable payload with an InputError', async () => {
     await expect(readRunContext(env, async () => '{not json')).rejects.toBeInstanceOf(InputError);
   });
+  it('takes the default branch of a schedule run from its ref when the payload lacks it', async () => {
+    const c = await readRunContext({ ...env, GITHUB_EVENT_NAME: 'schedule', GITHUB_REF: 'refs/heads/trunk' }, read({ schedule: '17 3 * * *' }));
+    expect(c.defaultBranch).toBe('trunk');
+  });
 });
