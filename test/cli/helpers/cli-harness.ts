@@ -1,3 +1,4 @@
+import { expect } from 'vitest';
 import { mkdtempSync, rmSync, writeFileSync, mkdirSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { dirname, join } from 'node:path';
@@ -58,4 +59,28 @@ export function handHistoryV1(series: string, values: Record<string, number[]>, 
     ...(unit === undefined ? {} : { units: Object.fromEntries(names.map((n) => [n, unit])) }),
   }));
   return JSON.stringify({ schema: 'bellgate.history/1', series, runs });
+}
+
+/** A stack-trace line ("    at f (file:1:2)"): never allowed in what a user sees. */
+export const STACK = /\n\s+at [^\n]*\(?[^\n]*:\d+:\d+\)?/;
+
+export function noStack(text: string): void {
+  expect(text).not.toMatch(STACK);
+}
+
+/**
+ * A scratch folder with a steady hand-made history of ten runs (api/latency around 100,
+ * api/size around 100000), a calm run, a clearly slower run, and a config without change points.
+ */
+export function steadyFixture() {
+  const work = scratch();
+  const steady = [100, 101, 99, 100, 102, 98, 100, 101, 99, 100];
+  return {
+    work,
+    steady,
+    history: work.write('h/history.json', handHistoryV1('default', { 'api/latency': steady, 'api/size': steady.map((v) => v * 1000) })),
+    calm: work.write('calm.json', JSON.stringify({ 'api/latency': 100.5, 'api/size': 100_200 })),
+    slow: work.write('slow.json', JSON.stringify({ 'api/latency': 130, 'api/size': 100_200 })),
+    config: work.write('bellgate.yml', 'defaults:\n  change-points: false\n'),
+  };
 }
