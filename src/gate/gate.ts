@@ -1,14 +1,14 @@
 import type { Config } from '../config/types.js';
-import { groupFor, settingsFor } from '../config/rules.js';
+import { groupFor } from '../config/rules.js';
 import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
 import { cutoffLevel } from '../model/tails.js';
-import { selectBaseline } from './baseline.js';
-import { decideMetric } from './decide-metric.js';
+import { decideMetric, type Test } from './decide-metric.js';
 import { familyTests, type FamilyItem } from './family-test.js';
-import type { GroupMemberInput as GroupEntry } from './group-frame.js';
+import type { GroupMemberInput } from './group-frame.js';
 import { judgeGroups } from './judge-groups.js';
-import { scoreMetric, type MetricScore } from './judge-metric.js';
+import type { MetricScore } from './judge-metric.js';
+import { judgeName, metricNames } from './judge-name.js';
 import { REPORT_SCHEMA, type GroupResult, type MetricResult, type Report } from './report.js';
 import { decideVerdict, orderMetrics } from './verdict.js';
 
@@ -32,10 +32,9 @@ export interface GateInput {
 export function runGate(input: GateInput): Report {
   const { config, history, run } = input;
   const finished: MetricResult[] = [];
-  const scored: GroupEntry[] = [];
+  const scored: GroupMemberInput[] = [];
   for (const name of metricNames(history, run)) {
     const entry = judgeName(config, history, run, name);
-    if (entry === undefined) continue;
     if ('score' in entry) scored.push(entry);
     else finished.push(entry.result);
   }
@@ -64,48 +63,7 @@ export function runGate(input: GateInput): Report {
   };
 }
 
-function decideLone(score: MetricScore, family: { adjusted: number; test: { significant: boolean; phrase: string } } | undefined): MetricResult {
+function decideLone(score: MetricScore, family: { adjusted: number; test: Test } | undefined): MetricResult {
   if (family === undefined || !score.scored) return score.result;
   return { ...decideMetric(score, family.test), adjusted: family.adjusted };
-}
-
-/** Every metric named by this run or holding a value in the history, in code-unit order. */
-function metricNames(history: History, run: Run): string[] {
-  const names = new Set<string>(run.metrics.keys());
-  for (const [name, column] of history.columns) {
-    if (column.values.some((v) => Number.isFinite(v))) names.add(name);
-  }
-  return [...names].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
-}
-
-/** A finished result (ignored, missing, new, ...) or a scored entry for groups and family control. */
-function judgeName(config: Config, history: History, run: Run, name: string): GroupEntry | { result: MetricResult } | undefined {
-  const settings = settingsFor(config, name);
-  const measurement = run.metrics.get(name);
-  const plain = { name, cutoff: settings.cutoff, worse: settings.worse };
-  const own = measurement === undefined ? {} : { value: measurement.value, count: measurement.count, ...(measurement.unit === undefined ? {} : { unit: measurement.unit }) };
-  if (settings.ignore) return { result: { ...plain, ...own, status: 'ignored', reason: 'matched a rule with ignore: true' } };
-  const baseline = selectBaseline(history, name, settings);
-  if (measurement === undefined) {
-    const reason = `in the history (${baseline.available} run${baseline.available === 1 ? '' : 's'}) but absent from this run`;
-    return { result: { ...plain, status: 'missing', reason } };
-  }
-  let value = measurement.value;
-  if (settings.relativeTo !== undefined) {
-    const reference = run.metrics.get(settings.relativeTo)?.value;
-    if (reference === undefined || !Number.isFinite(reference) || reference === 0) {
-      const lacks = reference === undefined ? 'lacks' : `has ${reference} for`;
-      const reason = `cannot be judged relative to ${settings.relativeTo}: this run ${lacks} that metric`;
-      return { result: { ...plain, ...own, status: baseline.values.length === 0 ? 'new' : 'missing', reason } };
-    }
-    value /= reference;
-  }
-  const extras = {
-    count: measurement.count,
-    ...(measurement.unit === undefined || settings.relativeTo !== undefined ? {} : { unit: measurement.unit }),
-    ...(baseline.since === undefined ? {} : { since: baseline.since }),
-    ...(baseline.relativeTo === undefined ? {} : { relativeTo: baseline.relativeTo }),
-  };
-  const score = scoreMetric(name, settings, baseline.values, value, extras);
-  return score.scored ? { score, baseline } : { result: score.result };
 }

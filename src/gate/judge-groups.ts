@@ -53,7 +53,8 @@ export function judgeGroups(
       // A covariance no ridge can rescue (members that are exact copies of each other): say so
       // and judge the members alone rather than stop the whole gate.
       if (!(error instanceof InputError)) throw error;
-      learning.push({ ...learningGroup(spec.name, frame.members.length, frame.rows.length, minRows, level), reason: `cannot be judged together: ${error.message}; members are judged alone` });
+      const reason = `cannot be judged together: ${error.message}; members are judged alone`;
+      learning.push({ ...learningGroup(spec.name, frame.members.length, frame.rows.length, minRows, level), reason });
       continue;
     }
     for (const member of frame.members) judged.add(member.score.result.name);
