@@ -15,9 +15,20 @@ export class InputError extends Error {
     this.fix = options.fix;
   }
 
-  /** "where: message. fix" — the line a user sees. */
+  /**
+   * "where: message. fix" — the line a user sees. Messages quote untrusted text (metric names), so
+   * control, C1 and bidirectional formatting characters are shown as \u{XXXX}: a refusal must not
+   * send a terminal escape sequence or reorder the line it is printed on (CVE-2021-42574).
+   */
   describe(): string {
     const head = this.where ? `${this.where}: ${this.message}` : this.message;
-    return this.fix ? `${head}\n  fix: ${this.fix}` : head;
+    return visible(this.fix ? `${head}\n  fix: ${this.fix}` : head);
   }
+}
+
+// What can move the cursor, ring, recolour or reorder a terminal line; tabs and line breaks stay.
+const INVISIBLE = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u061C\u200E\u200F\u2028\u2029\u202A-\u202E\u2066-\u2069]/g;
+
+function visible(text: string): string {
+  return text.replace(INVISIBLE, (c) => `\\u{${c.charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}}`);
 }
