@@ -40,6 +40,10 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   const config = await loadConfig(ctx, options.config);
   const run = await loadRun(ctx, config, options);
   const { history, store } = await openHistory(ctx, options.history, options.series);
+  if (options.history !== undefined && history.runs.length === 0) {
+    // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
+    ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
+  }
   const report = runGate({ config, history, run, series: options.series });
 
   ctx.io.stdout(ensureNewline(render(ctx, report, options.format)));

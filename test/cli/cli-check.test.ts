@@ -46,6 +46,13 @@ describe('check', () => {
     expect(parsed.metrics.every((m) => m.status === 'new')).toBe(true);
   });
 
+  it('a --history file that does not exist yet: a note on stderr, every metric new', async () => {
+    const r = await bellgate(work.dir, ['check', '--metrics', calm, '--history', 'not-yet.json', '--format', 'json']);
+    expect(r.code).toBe(0);
+    expect(r.stderr).toContain('not-yet.json holds no runs yet');
+    expect((JSON.parse(r.stdout) as { verdict: string }).verdict).toBe('learning');
+  });
+
   it('--out writes report.md, report.json and report.txt', async () => {
     const r = await bellgate(work.dir, ['check', '--metrics', slow, '--history', history, '--config', config, '--out', 'out/a']);
     expect(r.code).toBe(1);
