@@ -84,3 +84,15 @@ describe('false alarms on a clean Gaussian history match the Student-t tail (jst
     expect(row.alarmsPerRun).toBeCloseTo(row.falseAlarms / (RUNS - 8), 12);
   });
 });
+
+describe('too little history', () => {
+  it('with no run judged, the configured cutoff is kept and nothing is suggested per metric', () => {
+    // 5 runs < min-runs 8: every replayed run is still learning.
+    const history = historyOf({ 'bench/a': [1, 2, 3, 4, 5], 'bench/b': [5, 4, 3, 2, 1] });
+    const result = tuneHistory({ config, history });
+    expect(result.replayedRuns).toBe(0);
+    expect(result.suggestion.cutoff).toBe(config.defaults.cutoff);
+    expect(result.suggestion.reason).toMatch(/no evidence yet/);
+    expect(result.suggestion.rules).toEqual([]);
+  });
+});

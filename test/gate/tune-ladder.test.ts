@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { labelScore, scoreLadder } from '../../src/gate/tune/ladder.js';
 import type { Replay } from '../../src/gate/tune/replay.js';
 import type { MetricReplay, Side } from '../../src/gate/tune/replay-point.js';
-import { bestF1, chooseCutoff, loosestUnder } from '../../src/gate/tune/suggest.js';
+import { bestF1, chooseCutoff, loosestUnder, noisyMetricRules, recommendFamily } from '../../src/gate/tune/suggest.js';
 import { buildTruth } from '../../src/gate/tune/truth.js';
 import { expectClose } from '../helpers/close.js';
 import { historyOf } from './helpers/scenario.js';
@@ -112,5 +112,31 @@ describe('--target: the loosest cutoff under the false-alarm target', () => {
     const choice = chooseCutoff(noisy, 1, false);
     expect(choice.cutoff).toBe(0.01);
     expect(choice.reason).toMatch(/no cutoff keeps false alarms/);
+  });
+});
+
+describe('per-metric rules and the family advice', () => {
+  // 100 runs; metric a alarms in 10 runs at cutoff 0.1 (r 0.05) and none at 0.01; b and c once each.
+  // At 0.1: 12 false alarms over 3 metrics, mean 4; a has 10 >= 2 and > 2 x 4 -> its own rule, at the
+  // loosest stricter cutoff where its alarms drop to the mean: 0.01 (0 alarms). b and c: 1 < 2, none.
+  const base = Array.from({ length: 100 }, () => 0.9);
+  const a = base.map((r, i) => (i < 10 ? 0.05 : r));
+  const once = base.map((r, i) => (i === 50 ? 0.05 : r));
+  const replay: Replay = { runCount: 101, metrics: [metric('a', a), metric('b', once), metric('c', once)] };
+  const rows = scoreLadder(replay, [0.1, 0.01, 0.001], 'none');
+
+  it('gives a much noisier metric its own stricter cutoff', () => {
+    const rules = noisyMetricRules(rows, ['a', 'b', 'c'], 0.1);
+    expect(rules.map((r) => [r.metric, r.cutoff])).toEqual([['a', 0.01]]);
+    expect(rules[0]!.reason).toMatch(/10 false alarms at 0.1/);
+  });
+
+  it('keeps the configured family for few metrics a run, and suggests holm for many', () => {
+    const ladders = new Map([['none', rows], ['holm', scoreLadder(replay, [0.1, 0.01, 0.001], 'holm')]] as const);
+    expect(recommendFamily(3, ladders, 0.1, 'none', 1).family).toBe('none');
+    expect(recommendFamily(3, ladders, 0.1, 'fdr', 1).family).toBe('fdr');
+    const many = recommendFamily(30, ladders, 0.1, 'none', 1);
+    expect(many.family).toBe('holm');
+    expect(many.reason).toMatch(/Holm 1979/);
   });
 });

@@ -76,9 +76,13 @@ export function tuneHistory(input: TuneInput): TuneResult {
   for (const m of replay.metrics) for (const r of m.run) perRun.set(r, (perRun.get(r) ?? 0) + 1);
   const metricsPerRun = perRun.size === 0 ? 0 : median([...perRun.values()]);
   const rows = ladders.get(config.family)!;
-  const choice = chooseCutoff(rows, target, truth !== undefined);
+  // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
+  const choice =
+    perRun.size === 0
+      ? { cutoff: config.defaults.cutoff, reason: 'no run had enough baseline runs to be judged (min-runs), so there is no evidence yet; keeping the configured cutoff' }
+      : chooseCutoff(rows, target, truth !== undefined);
   const names = replay.metrics.map((m) => m.name);
-  const rules = noisyMetricRules(rows, names, choice.cutoff);
+  const rules = perRun.size === 0 ? [] : noisyMetricRules(rows, names, choice.cutoff);
   const indexOf = new Map(history.runs.map((run, i) => [run.id, i] as const));
   const metrics = replay.metrics.map((m): MetricTune => {
     const settings = settingsFor(config, m.name);
