@@ -4,7 +4,7 @@
  *
  * - load: branch head -> the file at that commit (contents API) -> its blob. No branch or no file
  *   is an empty history; a file that is not a readable history of this series is a StoreError and
- *   is never overwritten.
+ *   is never overwritten. Transient API failures are retried like a save's (`attempts`).
  * - save: blob -> tree (base_tree = the head's tree, so other series' files stay) -> commit (parent
  *   = the head) -> ref update with force false. When the branch moved meanwhile the update is
  *   refused (422/409); the store re-reads, keeps the runs the other writer added (union by run id,
@@ -108,13 +108,19 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
   return {
     describe: () => where,
     async load(): Promise<History> {
-      try {
-        loaded = await read();
-      } catch (error) {
-        throw failure(error, 'read');
+      // A read changes nothing, so a transient failure is simply tried again, as often as a save would.
+      let snap: Snapshot | undefined;
+      for (let attempt = 0; snap === undefined; attempt++) {
+        try {
+          snap = await read();
+        } catch (error) {
+          if (!(error instanceof GitDataError && error.transient) || attempt + 1 >= attempts) throw failure(error, 'read');
+          await new Promise((r) => setTimeout(r, backoffMs(attempt, unitMs, random, error.retryAfter)));
+        }
       }
-      loadedIds = new Set(loaded.stored.runs.map((r) => r.id));
-      return loaded.stored;
+      loaded = snap;
+      loadedIds = new Set(snap.stored.runs.map((r) => r.id));
+      return snap.stored;
     },
     async save(h: History, readCount: number): Promise<void> {
       if (h.series !== series) throw new StoreError(`refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`, { where });

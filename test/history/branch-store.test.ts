@@ -143,6 +143,10 @@ describe('createBranchStore', () => {
       // Each try stops at its first call (the branch head), which is tried 1 + 2 times.
       expect(proxy.requests).toBe(3 * 3);
       expect(proxy.injected.get('502')).toBe(9);
+      // A load is retried the same way: 2 tries of 1 + 1 calls.
+      const loadError = await storeRejection(branchStore(proxy.url, 'series-a', { attempts: 2 }, { retries: 1 }).load());
+      expect(loadError.message).toMatch(/cannot read the data branch.*502/);
+      expect(proxy.requests).toBe(9 + 2 * 2);
     } finally {
       await proxy.close();
     }
