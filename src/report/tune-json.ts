@@ -22,6 +22,7 @@ export function renderTuneJson(result: TuneResult, extra: { written?: { file: st
     family: result.family,
     currentCutoff: result.currentCutoff,
     metrics: result.metrics,
+    groups: result.groups,
     ladders,
     target: result.target,
     ...(result.labels === undefined ? {} : { labels: result.labels }),

@@ -20,6 +20,9 @@ export function renderTuneText(result: TuneResult): string {
       `${formatNumber(result.metricsPerRun)} metrics judged in a typical run`,
   );
   out.push(`replay: ${result.metrics.length - refit} metrics slid incrementally, ${refit} refitted per run (change points or robust fit)`);
+  if (result.groups.length > 0) {
+    out.push(`note: groups (${result.groups.map((g) => cleanText(g)).join(', ')}) are replayed member by member, as the gate judges them while a group is learning; their joint check is not in the ladder`);
+  }
   out.push('', ladderTable(result), '');
   out.push(`false alarms: alarms on runs not labelled as regressions; "runs/100" is the share of runs with at least one, by family setting (config: ${result.family}).`);
   out.push('', perMetricTable(result));

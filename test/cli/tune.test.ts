@@ -126,3 +126,29 @@ describe('bellgate tune', () => {
     expect(stderr).toBe('');
   });
 });
+
+describe('bellgate tune with hostile metric names and groups', () => {
+  it('prints names cleaned of terminal escapes and line breaks, and says groups are replayed per member', async () => {
+    const values = (base: number) => Array.from({ length: 30 }, (_, i) => base + ((i * 7) % 5));
+    const history = {
+      schema: 'bellgate.history/1',
+      series: 'x',
+      runs: values(0).map((_, i) => ({
+        id: `r${i + 1}`,
+        values: { 'evil/\u001b[31mred\u001b[0m\nname': values(100)[i], ['__proto__']: values(50)[i], 'timing/a': values(10)[i] },
+      })),
+    };
+    dir.write('hostile.json', JSON.stringify(history));
+    dir.write('groups.yml', 'groups:\n  - name: timing\n    match: "timing/*"\n');
+    const r = await bellgate(dir.dir, ['tune', '--history', 'hostile.json', '--config', 'groups.yml']);
+    expect(r.code).toBe(0);
+    expect(r.stdout).not.toContain('\u001b');
+    expect(r.stdout).toMatch(/^evil\/\[31mred\[0m name\s/m);
+    expect(r.stdout).toMatch(/groups \(timing\) are replayed member by member/);
+    const json = await bellgate(dir.dir, ['tune', '--history', 'hostile.json', '--config', 'groups.yml', '--format', 'json']);
+    const parsed = JSON.parse(json.stdout) as { metrics: { name: string }[]; groups: string[] };
+    expect(parsed.metrics.map((m) => m.name)).toContain('evil/\u001b[31mred\u001b[0m\nname');
+    expect(parsed.metrics.map((m) => m.name)).toContain('__proto__');
+    expect(parsed.groups).toEqual(['timing']);
+  });
+});

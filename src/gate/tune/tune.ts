@@ -48,6 +48,8 @@ export interface TuneResult {
   family: Family;
   currentCutoff: number;
   metrics: MetricTune[];
+  /** Configured groups: the replay judges their members one by one (see replayHistory). */
+  groups: string[];
   ladders: Map<Family, LadderRow[]>;
   target: { per100: number; cutoff?: number };
   labels?: { count: number; best?: { cutoff: number; precision: number; recall: number; f1: number } };
@@ -106,6 +108,7 @@ export function tuneHistory(input: TuneInput): TuneResult {
     family: config.family,
     currentCutoff: config.defaults.cutoff,
     metrics,
+    groups: config.groups.map((g) => g.name),
     ladders,
     target: { per100: target, ...(targetRow ? { cutoff: targetRow.cutoff } : {}) },
     ...(truth === undefined
