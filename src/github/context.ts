@@ -72,7 +72,8 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
   const attempt = Number(attemptText);
   const runNumericId = required(env, 'GITHUB_RUN_ID');
   let pullRequest: RunContext['pullRequest'];
-  if (pr && typeof pr.number === 'number') {
+  // A PR number goes into API paths (issues/N/comments): only a positive safe integer is one.
+  if (pr && typeof pr.number === 'number' && Number.isSafeInteger(pr.number) && pr.number > 0) {
     const labels = Array.isArray(pr.labels)
       ? pr.labels.map((l) => record(l)?.name).filter((n): n is string => typeof n === 'string')
       : [];
