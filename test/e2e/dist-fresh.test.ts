@@ -27,14 +27,19 @@ function files(dir: string): string[] {
 }
 
 describe('dist/ is up to date with src/', () => {
-  it('a fresh build equals the committed dist/ byte for byte', { timeout: 300_000 }, () => {
+  it('a fresh build equals the committed dist/ byte for byte', { timeout: 600_000 }, () => {
     execFileSync(process.execPath, [join(root, 'test', 'build-dist.mjs'), fresh], { cwd: root, stdio: 'pipe' });
     const built = files(fresh);
     const committed = new Set(files(dist));
     expect(built.length, 'the build wrote no files').toBeGreaterThan(0);
-    const stale = built.filter((f) => !committed.has(f) || !readFileSync(join(fresh, f)).equals(readFileSync(join(dist, f))));
+    const missing = built.filter((f) => !committed.has(f));
+    const stale = built.filter((f) => committed.has(f) && !readFileSync(join(fresh, f)).equals(readFileSync(join(dist, f))));
     const extra = [...committed].filter((f) => !built.includes(f));
-    const problems = [...stale.map((f) => `stale or missing: dist/${f}`), ...extra.map((f) => `not built any more: dist/${f}`)];
+    const problems = [
+      ...stale.map((f) => `stale: dist/${f}`),
+      ...missing.map((f) => `missing: dist/${f}`),
+      ...extra.map((f) => `not built any more: dist/${f}`),
+    ];
     if (problems.length > 0) {
       expect.fail(`dist/ does not match the sources; run npm run build and commit dist/\n  ${problems.join('\n  ')}`);
     }
