@@ -12,7 +12,9 @@
  * repository (not a fork's branch of the same name), newest first, and merges the newest few
  * readable ones: two runs that raced each read the same parent and uploaded siblings; merging
  * several newest heals that (union by run id). A corrupt or hostile artifact is skipped with a
- * warning. If artifacts exist but none can be read, load fails: writing then would bury the history.
+ * warning; a download that fails for a passing reason (5xx, network) fails the load instead, since
+ * skipping it would drop its runs from the next upload. If artifacts exist but none can be read,
+ * load fails: writing then would bury the history.
  * Save never uploads fewer runs than load read.
  */
 import { createHash } from 'node:crypto';
@@ -105,7 +107,20 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
 
   async function readOne(entry: ArtifactEntry): Promise<History> {
     if (entry.sizeInBytes > maxDownload) throw new Error(`${entry.sizeInBytes} bytes, over the ${maxDownload} byte cap`);
-    const zip = await options.api.downloadArtifact(entry.id, maxDownload);
+    let zip: Uint8Array;
+    try {
+      zip = await options.api.downloadArtifact(entry.id, maxDownload);
+    } catch (cause) {
+      // Only an artifact too large to take is the artifact's own fault. Anything else (5xx after
+      // the retries, a dropped connection) says nothing about its content: skipping it would make
+      // this load miss runs, and the next upload would leave them out for good.
+      if (/byte cap/.test(messageOf(cause))) throw cause;
+      throw new StoreError(`cannot download history artifact #${entry.id}: ${messageOf(cause)}`, {
+        where,
+        fix: 'this is usually a passing fault of the API; re-run the job. Nothing was recorded, so nothing is lost',
+        cause,
+      });
+    }
     const text = readZipEntry(zip, HISTORY_FILE, zipLimits);
     const history = parseHistory(text, `${where} #${entry.id}/${HISTORY_FILE}`);
     if (history.series !== options.series) throw new Error(`it holds series "${history.series}", not "${options.series}"`);
@@ -127,6 +142,7 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
           merged = mergeHistories(merged, await readOne(entry));
           good += 1;
         } catch (cause) {
+          if (cause instanceof StoreError) throw cause;
           bad += 1;
           options.warn(`skipped history artifact #${entry.id} (${entry.createdAt}): ${messageOf(cause)}`);
         }

@@ -135,6 +135,35 @@ describe('createArtifactStore', () => {
     await expect(store(f).load()).rejects.toBeInstanceOf(StoreError);
   });
 
+  it('fails the load (nothing recorded) when a download fails for a passing reason, instead of skipping its runs', async () => {
+    const f = fake();
+    put(f, zipOf(historyOf(['1-1', '2-1'])));
+    put(f, zipOf(historyOf(['1-1', '2-1', '3-1'])));
+    const s = createArtifactStore({
+      api: {
+        listArtifacts: async (name) => f.entries.filter((e) => e.name === name),
+        // The newest artifact fails to download; the older one would read fine, so skipping the
+        // newest would silently lose run 3-1 from the next upload.
+        downloadArtifact: async (id) => {
+          const newest = Math.max(...f.entries.map((e) => e.id));
+          if (id === newest) throw new Error('storage download failed after 3 tries: storage answered 502');
+          return f.entries.find((e) => e.id === id)!.zip;
+        },
+      },
+      upload: async (name, _file, text, days) => void f.uploads.push({ name, text, days }),
+      history: 'bellgate-history',
+      series: SERIES,
+      baselineBranch: 'main',
+      repositoryId: 5,
+      retentionDays: 30,
+      warn: (m) => f.warnings.push(m),
+    });
+    const failure = await s.load().catch((e: unknown) => e);
+    expect(failure).toBeInstanceOf(StoreError);
+    expect(String((failure as Error).message)).toMatch(/cannot download history artifact #\d+: .*502/);
+    expect(f.uploads).toHaveLength(0);
+  });
+
   it('skips a history of another series', async () => {
     const f = fake();
     put(f, zipOf(historyOf(['1-1'])));
