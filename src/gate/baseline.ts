@@ -42,6 +42,13 @@ export function selectBaseline(history: History, name: string, settings: MetricS
   let available = 0;
   if (column !== undefined) {
     const count = Math.min(column.values.length, history.runs.length);
+    // Only the newest `window` pairs are kept, so count the pairs first and build just those
+    // (a long history otherwise costs an array entry and a run-id lookup per run and metric).
+    const paired = pairs(column.values, reference?.values, count, settings.relativeTo !== undefined);
+    const firstKept = paired - settings.window;
+    // Values before the window are still checked when the scale can refuse them (log, ratios).
+    const checkAll = settings.transform !== 'none' || settings.relativeTo !== undefined;
+    let k = 0;
     for (let i = 0; i < count; i++) {
       let x = column.values[i]!;
       if (!Number.isFinite(x)) continue;
@@ -51,17 +58,16 @@ export function selectBaseline(history: History, name: string, settings: MetricS
         if (r === undefined || !Number.isFinite(r) || r === 0) continue;
         x /= r;
       }
+      if (k++ < firstKept) {
+        if (checkAll) toHistoryFitScale(x, settings, name, history.runs[i]!.id);
+        continue;
+      }
       const id = history.runs[i]!.id;
       values.push(toHistoryFitScale(x, settings, name, id));
       runIds.push(id);
     }
   }
-  const start = Math.max(0, values.length - settings.window);
-  const selected: SelectedBaseline = {
-    values: values.slice(start),
-    runIds: runIds.slice(start),
-    available,
-  };
+  const selected: SelectedBaseline = { values, runIds, available };
   if (settings.relativeTo !== undefined) selected.relativeTo = settings.relativeTo;
   return settings.changePoints ? sinceLastChange(selected, settings.minRuns) : selected;
 }
@@ -81,6 +87,20 @@ function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedB
     since: baseline.runIds[last]!,
     window: { values: baseline.values, runIds: baseline.runIds },
   };
+}
+
+/** How many of the first `count` runs hold the metric (and, for ratios, a usable reference). */
+function pairs(column: readonly number[], reference: readonly number[] | undefined, count: number, ratio: boolean): number {
+  let n = 0;
+  for (let i = 0; i < count; i++) {
+    if (!Number.isFinite(column[i]!)) continue;
+    if (ratio) {
+      const r = reference?.[i];
+      if (r === undefined || !Number.isFinite(r) || r === 0) continue;
+    }
+    n++;
+  }
+  return n;
 }
 
 function toHistoryFitScale(x: number, settings: MetricSettings, name: string, runId: string): number {
