@@ -1,5 +1,5 @@
-import normal from '@stdlib/stats-base-dists-normal';
-import studentT from '@stdlib/stats-base-dists-t';
+import normalLogpdf from '@stdlib/stats-base-dists-normal-logpdf';
+import normalPdf from '@stdlib/stats-base-dists-normal-pdf';
 import { InputError } from './input-error.js';
 
 /** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */
@@ -17,7 +17,7 @@ function checkSpread(sd: number): void {
  */
 export function gaussianDensity(x: number, mean: number, sd: number): number {
   checkSpread(sd);
-  return normal.pdf(x, mean, sd);
+  return normalPdf(x, mean, sd);
 }
 
 /**
@@ -26,7 +26,7 @@ export function gaussianDensity(x: number, mean: number, sd: number): number {
  */
 export function gaussianLogDensity(x: number, mean: number, sd: number): number {
   checkSpread(sd);
-  return normal.logpdf(x, mean, sd);
+  return normalLogpdf(x, mean, sd);
 }
 
 /**

@@ -1,5 +1,5 @@
-import chisquare from '@stdlib/stats-base-dists-chisquare';
-import f from '@stdlib/stats-base-dists-f';
+import chisquareCdf from '@stdlib/stats-base-dists-chisquare-cdf';
+import fCdf from '@stdlib/stats-base-dists-f-cdf';
 import { InputError } from './input-error.js';
 
 function checkDistance(d2: number, p: number): void {
@@ -19,7 +19,7 @@ function checkDistance(d2: number, p: number): void {
 export function chiSquareTail(d2: number, p: number): number {
   checkDistance(d2, p);
   if (d2 === Infinity) return 0;
-  return Math.min(1, Math.max(0, 1 - chisquare.cdf(d2, p)));
+  return Math.min(1, Math.max(0, 1 - chisquareCdf(d2, p)));
 }
 
 /**
@@ -48,5 +48,5 @@ export function hotellingTail(d2: number, p: number, n: number, divisor: 'mle' |
   const t2 = (unbiased * n) / (n + 1);
   const statistic = (t2 * (n - p)) / (p * (n - 1));
   // P(F(p, m) > x) = P(F(m, p) < 1/x).
-  return f.cdf(1 / statistic, n - p, p);
+  return fCdf(1 / statistic, n - p, p);
 }

@@ -1,4 +1,4 @@
-import normal from '@stdlib/stats-base-dists-normal';
+import normalLogcdf from '@stdlib/stats-base-dists-normal-logcdf';
 import { InputError } from './input-error.js';
 import { meanAndSquares } from './moments.js';
 
@@ -72,7 +72,7 @@ export function andersonDarling(values: ArrayLike<number>): AndersonDarling {
   const w = Float64Array.from(values, (x) => (x - mean) / sd).sort();
   let sum = 0;
   for (let i = 0; i < n; i++) {
-    sum += (2 * i + 1) * (normal.logcdf(w[i]!, 0, 1) + normal.logcdf(-w[n - 1 - i]!, 0, 1));
+    sum += (2 * i + 1) * (normalLogcdf(w[i]!, 0, 1) + normalLogcdf(-w[n - 1 - i]!, 0, 1));
   }
   const statistic = -n - sum / n;
   const adjusted = statistic * (1 + 0.75 / n + 2.25 / (n * n));
