@@ -15,7 +15,7 @@ export type { CliIo } from './context.js';
 /** A command factory: builds one subcommand whose action reports its exit code through ctx. */
 export type CommandFactory = (ctx: CommandContext) => Command;
 
-/** Every subcommand, in the order --help lists them. Adding a command is one line here. */
+/** Every subcommand, in the order --help lists them. Adding a command: its import and one line here. */
 export const COMMANDS: readonly CommandFactory[] = [
   checkCommand,
   recordCommand,
