@@ -1,3 +1,5 @@
+import { visibleText } from './visible-text.js';
+
 /**
  * The project's one contract for bad input: a typed error whose message a user can act on.
  * Pure modules throw it; adapters turn it into exit code 2 or a failed step, never a stack trace.
@@ -22,13 +24,6 @@ export class InputError extends Error {
    */
   describe(): string {
     const head = this.where ? `${this.where}: ${this.message}` : this.message;
-    return visible(this.fix ? `${head}\n  fix: ${this.fix}` : head);
+    return visibleText(this.fix ? `${head}\n  fix: ${this.fix}` : head);
   }
-}
-
-// What can move the cursor, ring, recolour or reorder a terminal line; tabs and line breaks stay.
-const INVISIBLE = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F\u061C\u200E\u200F\u2028\u2029\u202A-\u202E\u2066-\u2069]/g;
-
-function visible(text: string): string {
-  return text.replace(INVISIBLE, (c) => `\\u{${c.charCodeAt(0).toString(16).toUpperCase().padStart(4, '0')}}`);
 }

@@ -1,5 +1,6 @@
 import { Command } from 'commander';
 import { verifyHistory } from '../../history/verify.js';
+import { visibleText } from '../../model/visible-text.js';
 import type { CommandContext } from '../context.js';
 import { EXIT } from '../exit-codes.js';
 import { resolvePath } from '../paths.js';
@@ -18,7 +19,8 @@ export function verifyCommand(ctx: CommandContext): Command {
       ctx.io.stdout(`${options.history}: no problems found\n`);
       return;
     }
-    for (const p of problems) ctx.io.stdout(`${options.history}: ${p.where}: ${p.problem}\n`);
+    // Problems quote metric names from the file: no control or bidi character reaches the terminal.
+    for (const p of problems) ctx.io.stdout(visibleText(`${options.history}: ${p.where}: ${p.problem}`) + '\n');
     ctx.io.stderr(`bellgate: ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${options.history}\n`);
     ctx.exitCode = EXIT.input;
   });
