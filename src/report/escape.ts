@@ -12,7 +12,7 @@ const MARKDOWN_SPECIAL = /[\\*_[\]()#|`+!~]/g;
  * (so no HTML tag such as `<img onerror=...>` can open); every markdown punctuation character
  * `\ * _ [ ] ( ) # | \` + ! ~` gets a backslash (so `](javascript:...)` is no link, `|` no
  * new cell); a zero-width space after `@` and after `#`/`GH-` before digits stops mentions and
- * issue references, and one after `:` in `://` stops bare-URL autolinks.
+ * issue references, and one after `:` in `://` and after `www` in `www.` stops bare-URL autolinks.
  * @example escapeMarkdown('a|b') // 'a\\|b'
  * @example escapeMarkdown('@team') // '@\u200Bteam'
  */
@@ -25,6 +25,7 @@ export function escapeMarkdown(s: string, max: number = MAX_SHOWN_LENGTH): strin
     .replace(/#(?=\d)/g, `#${ZWSP}`)
     .replace(/\b(GH)-(?=\d)/gi, `$1${ZWSP}-`)
     .replace(/:\/\//g, `:${ZWSP}//`)
+    .replace(/\b(www)\./gi, `$1${ZWSP}.`)
     .replace(MARKDOWN_SPECIAL, (c) => `\\${c}`);
 }
 
