@@ -48,6 +48,7 @@ export function assertInertMarkdown(md: string): void {
     expect(line, 'a link target').not.toMatch(/(?<!\\)\]\(/);
     expect(line).not.toMatch(/\]\(javascript:/i);
     expect(line, 'a bare-URL autolink').not.toMatch(/[a-z]+:\/\/(?!\u200B)/i);
+    expect(line, 'a www. autolink').not.toMatch(/(^|[\s*_~(])www\./i);
     expect(line, 'a live @mention').not.toMatch(/(^|[^\w])@(?!\u200B)[A-Za-z0-9]/);
     expect(line, 'a live #reference').not.toMatch(/(^|[^\w&\\])#(?!\u200B)\d/);
     expect(line, 'a live GH- reference').not.toMatch(/\bGH-\d/i);

@@ -36,6 +36,7 @@ const SHOWN: readonly string[] = [
   '![x](https://evil.example/p.png)',
   '<https://evil.example>',
   'https://evil.example/a',
+  'see www.evil.example/login',
   '@team please look',
   '@octo-org/perf-team',
   'fixes #123',
