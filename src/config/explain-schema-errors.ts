@@ -83,6 +83,8 @@ function wrongValue(error: ErrorObject, tree: YamlTree): ConfigProblem {
     fix = `write true or false (YAML 1.2 reads ${data} as text)`;
   }
   if (!fix && Array.isArray(node.examples)) fix = `for example: ${JSON.stringify(node.examples[0])}`;
+  if (!fix && node.type === 'array') fix = `write ${name} as a YAML list, one item per line starting with "- "`;
+  if (!fix) fix = `change it to ${allowed}`; // every refusal says what to do, even without an example
   return { ...position(tree, error.instancePath), message, fix };
 }
 
