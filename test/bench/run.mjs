@@ -7,6 +7,7 @@
 //
 // --dist names the folder the bundles were built into (node test/build-dist.mjs DIR).
 // --growth adds the growth table: check and floor at 250/500/1000 runs and metrics.
+// --profile DIR writes a CPU profile of every timed process into DIR (node --cpu-prof).
 // Peak memory is ru_maxrss of each process, written at exit by peak-memory.cjs (preloaded).
 // Each line carries the 1-minute load average at its start, since a busy machine slows everything.
 import { spawnSync } from 'node:child_process';
@@ -26,6 +27,7 @@ const { values: flags } = parseArgs({
     only: { type: 'string', default: 'floor,check,record,action' },
     growth: { type: 'boolean', default: false },
     'keep-files': { type: 'boolean', default: false },
+    profile: { type: 'string' },
   },
 });
 
@@ -75,7 +77,8 @@ function measure(label, args, { env = {}, cwd = work, before = () => {}, okCodes
     before();
     rmSync(peakFile, { force: true });
     const t0 = process.hrtime.bigint();
-    const out = spawnSync(process.execPath, args, {
+    const profile = flags.profile ? ['--cpu-prof', '--cpu-prof-dir', resolve(flags.profile)] : [];
+    const out = spawnSync(process.execPath, [...profile, ...args], {
       cwd,
       env: { PATH: process.env.PATH, HOME: process.env.HOME, ...env, NODE_OPTIONS: `--require ${peakPreload}`, BENCH_PEAK_FILE: peakFile },
       stdio: ['ignore', 'pipe', 'pipe'],
@@ -136,6 +139,7 @@ function actionRun() {
     INPUT_RECORD: 'auto', INPUT_BLOCK: 'false', INPUT_COMMENT: 'never', INPUT_TOKEN: '', 'INPUT_HISTORY-FAILURE': 'fail',
   };
   const bare = measure('bare node (node -e 0)', ['-e', '0']);
+  const version = measure('cli start-up (--version)', [cli, '--version']);
   // The runner creates the output and summary files; @actions/core refuses missing ones.
   const before = () => {
     writeFileSync(env.GITHUB_OUTPUT, '');
@@ -147,7 +151,7 @@ function actionRun() {
     console.error(`bench: the action wrote no verdict output:\n${output}`);
     process.exit(1);
   }
-  return { bare, pr };
+  return { bare, version, pr };
 }
 
 console.log(`bellgate bench: node ${process.version}, ${cpus().length} x ${cpus()[0]?.model ?? '?'}, ${(totalmem() / 2 ** 30).toFixed(1)} GiB, ` +
@@ -167,7 +171,8 @@ if (main.floor && main.record) {
   lines.push(`record/floor peak memory: ${(main.record.mib / main.floor.mib).toFixed(2)}; target <= 2`);
 }
 if (only.has('action')) {
-  const { bare, pr } = actionRun();
+  const { bare, version, pr } = actionRun();
+  lines.push(`cli start-up/bare node: ${ratios(version, bare)}`);
   lines.push(`action PR check/bare node: ${ratios(pr, bare)}; target <= 3`);
 }
 if (flags.growth) {
