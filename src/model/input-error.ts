@@ -24,6 +24,17 @@ export class InputError extends Error {
    */
   describe(): string {
     const head = this.where ? `${this.where}: ${this.message}` : this.message;
-    return visibleText(this.fix ? `${head}\n  fix: ${this.fix}` : head);
+    return visibleText(shortenQuotes(this.fix ? `${head}\n  fix: ${this.fix}` : head));
   }
+}
+
+/** Quoted text past this many characters is cut in messages: a 10 KB metric name is not echoed whole. */
+const MAX_QUOTED = 120;
+// Every quoted string, taken pairwise from the left, so prose between two quotes is never cut.
+const QUOTED = /"((?:[^"\\]|\\.)*)"/g;
+
+function shortenQuotes(text: string): string {
+  if (text.length <= MAX_QUOTED) return text;
+  return text.replace(QUOTED, (whole, inner: string) =>
+    inner.length <= MAX_QUOTED ? whole : `"${Array.from(inner).slice(0, MAX_QUOTED / 2).join('')}…" (${inner.length} characters)`);
 }
