@@ -226,6 +226,25 @@ describe('names that reached a history by hand (not through a reader) are still 
   });
 });
 
+describe('long names quoted in refusals', () => {
+  it('a 10 KB name quoted in a refusal is cut, with its length, in every format that quotes it', async () => {
+    const long = 'y'.repeat(10 * 1024);
+    const files: Array<[string, string]> = [
+      ['long.json', JSON.stringify({ metrics: [{ name: long, value: 'x' }] })],
+      ['long.csv', `name,value\n${long},x\n`],
+      ['long.jsonl', `${JSON.stringify({ name: long, value: 1, unit: 5 })}\n`],
+    ];
+    for (const [file, text] of files) {
+      const path = work.write(`long/${file}`, text);
+      const r = await bellgate(work.dir, ['check', '--metrics', path]);
+      expect(r.code).toBe(2);
+      expect(r.stderr.length, file).toBeLessThan(1000);
+      expect(r.stderr, file).not.toContain(long.slice(0, 200));
+      counter.add('names refused', 'refused');
+    }
+  });
+});
+
 describe('the output checks themselves can fail', () => {
   // Without these, a checker that never looks would pass every case above.
   it('flags raw tags, links, mentions, references, broken rows and script URLs', () => {
@@ -246,5 +265,9 @@ describe('the output checks themselves can fail', () => {
     const { InputError } = await import('../../src/model/input-error.js');
     const text = new InputError('metric name "a\u202Eb\u001b[2J\u009bc" is bad', { where: 'run.json:1:2', fix: 'rename it' }).describe();
     expect(text).toBe('run.json:1:2: metric name "a\\u{202E}b\\u{001B}[2J\\u{009B}c" is bad\n  fix: rename it');
+    // Prose between two short quotes is never taken for a long quote; a long quote is cut.
+    const prose = `"a" ${'word '.repeat(60)}"b"`;
+    expect(new InputError(prose).describe()).toBe(prose);
+    expect(new InputError(`name "${'z'.repeat(500)}" bad`).describe()).toBe(`name "${'z'.repeat(60)}…" (500 characters) bad`);
   });
 });
