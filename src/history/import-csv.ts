@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import { InputError } from '../model/input-error.js';
-import { runInfoFrom, valueFrom, type ImportedRun, type ImportParse } from './import-run.js';
+import { nameProblem, runInfoFrom, valueFrom, type ImportedRun, type ImportParse } from './import-run.js';
 
 const RUN_COLUMNS = ['id', 'time', 'sha', 'ref', 'event'] as const;
 const RUN_SET = new Set<string>(RUN_COLUMNS);
@@ -74,6 +74,8 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
     }
     const target = run;
     const add = (name: string, raw: string, unit: string | undefined): void => {
+      const badName = nameProblem(name);
+      if (badName !== undefined) return skip(badName);
       const value = valueFrom(raw, true);
       if (typeof value === 'string') return skip(`metric ${JSON.stringify(name)}: ${value}`);
       if (target.metrics.has(name)) skip(`metric ${JSON.stringify(name)} of run ${JSON.stringify(target.info.id)} was given before; this row's value is kept`);

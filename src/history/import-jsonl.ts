@@ -1,5 +1,5 @@
 import { isObject, typeName } from './problems.js';
-import { runInfoFrom, valueFrom, type ImportedRun, type ImportParse } from './import-run.js';
+import { nameProblem, runInfoFrom, valueFrom, type ImportedRun, type ImportParse } from './import-run.js';
 
 /**
  * Reads past runs written as JSON Lines, one run a line:
@@ -33,6 +33,8 @@ export function parseJsonLines(text: string, source: string): ImportParse {
     const units = isObject(entry.units) ? entry.units : {};
     const add = (name: unknown, raw: unknown, unit: unknown): void => {
       if (typeof name !== 'string' || name === '') return skip(`a metric needs a non-empty "name"`);
+      const badName = nameProblem(name);
+      if (badName !== undefined) return skip(badName);
       const value = valueFrom(raw);
       if (typeof value === 'string') return skip(`metric ${JSON.stringify(name)}: ${value}`);
       run.metrics.set(name, value);

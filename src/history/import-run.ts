@@ -1,3 +1,5 @@
+import { checkMetricName } from '../inputs/names.js';
+import { InputError } from '../model/input-error.js';
 import type { RunInfo } from './history.js';
 import { normalizeIsoTime } from './iso-time.js';
 
@@ -44,6 +46,22 @@ export function runInfoFrom(fields: { id?: unknown; time?: unknown; sha?: unknow
     info[field] = text;
   }
   return info;
+}
+
+/**
+ * The reason a metric name cannot be imported, or undefined: the same rule as every metric file
+ * reader (checkMetricName: not blank, at most 512 characters, no control or bidi characters), so a
+ * name refused in a metric file cannot enter the history through an import instead.
+ * @example nameProblem('a\u202Eb') // 'metric name "a\u202Eb" contains a bidirectional override character (U+202E)'
+ */
+export function nameProblem(name: string): string | undefined {
+  try {
+    checkMetricName(name);
+    return undefined;
+  } catch (error) {
+    if (error instanceof InputError) return error.message;
+    throw error;
+  }
 }
 
 /**

@@ -1,5 +1,6 @@
 import { Command } from 'commander';
 import { importRuns, parseImportRuns } from '../../history/import.js';
+import { visibleText } from '../../model/visible-text.js';
 import type { CommandContext } from '../context.js';
 import { openHistory } from '../open-history.js';
 import { resolvePath } from '../paths.js';
@@ -40,7 +41,8 @@ export function importCommand(ctx: CommandContext): Command {
     const { history, store } = await openHistory(ctx, options.history, options.series);
     const result = importRuns(history, parsed);
     const skipped = result.skipped;
-    for (const skip of skipped.slice(0, SHOWN_SKIPS)) ctx.io.stderr(`bellgate: skipped ${skip.where}: ${skip.reason}\n`);
+    // Reasons quote names from the file: no control or bidi character reaches the terminal.
+    for (const skip of skipped.slice(0, SHOWN_SKIPS)) ctx.io.stderr(visibleText(`bellgate: skipped ${skip.where}: ${skip.reason}`) + '\n');
     if (skipped.length > SHOWN_SKIPS) ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
     if (store) await store.save(result.history, history.runs.length);
     ctx.io.stdout(
