@@ -216,3 +216,29 @@ describe('hostile histories through the CLI', () => {
     counter.add('cli refused', 'refused');
   });
 });
+
+describe('import with hostile names', () => {
+  it('skips names every reader refuses (with a reason shown inert) and keeps the rest exactly', async () => {
+    const refused = ['a\u202Eb', 'esc\u001b[2J', 'x'.repeat(10 * 1024), ' '];
+    const kept = ['__proto__', 'constructor', '<img src=x onerror=alert(1)>', '@team|#1'];
+    const lines = [0, 1, 2].map((i) =>
+      JSON.stringify({ id: `r${i}`, time: `2026-03-0${i + 1}T00:00:00Z`, metrics: [...refused, ...kept].map((name, k) => ({ name, value: 10 + i + k })) }),
+    );
+    const runs = work.write('import/runs.jsonl', lines.join('\n'));
+    const wide = work.write('import/runs.csv', `id,time,"a\u202Eb",__proto__\nw1,2026-03-05T00:00:00Z,1,2\n`);
+    const history = join(work.dir, 'import/history.json');
+    for (const file of [runs, wide]) {
+      const r = await bellgate(work.dir, ['import', '--history', history, '--runs', file]);
+      expect(r.code, r.stderr).toBe(0);
+      expect(r.stderr).toMatch(/skipped .*control character|skipped .*bidirectional/);
+      assertInertText(r.stderr.replace(/\n/g, ' '));
+      expect(r.stderr).not.toMatch(STACK_LINE);
+    }
+    const h = parseHistory(readFileSync(history, 'utf8'), 'h.json');
+    expect([...h.columns.keys()].sort()).toEqual([...kept].sort());
+    // "__proto__" is the fifth name of each JSON Lines run (10 + run + 4), then the CSV's 2.
+    expect(h.columns.get('__proto__')?.values).toEqual([14, 15, 16, 2]);
+    assertNoPollution();
+    counter.add('cli import', 'ok');
+  });
+});
