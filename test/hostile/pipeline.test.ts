@@ -226,6 +226,34 @@ describe('names that reached a history by hand (not through a reader) are still 
   });
 });
 
+describe('explain and --out with hostile names', () => {
+  it('explain prints a hostile name (from the history or the argument) without escapes; --out files are inert', async () => {
+    const names = ['<img src=x onerror=alert(1)>', 'esc\u001b[2J\u001b[31mred', 'a\u202Ereversed', '__proto__'];
+    const dir = `explain${++caseNo}`;
+    const history = work.write(`${dir}/history.json`, historyWith('default', names));
+    const run = work.write(`${dir}/run.json`, runWith(['<img src=x onerror=alert(1)>', '__proto__']));
+    for (const name of names) {
+      const r = await bellgate(work.dir, ['explain', name, '--history', history]);
+      expect(r.stderr).not.toMatch(STACK_LINE);
+      expect([0, 2], r.stderr).toContain(r.code);
+      assertInertText((r.stdout + r.stderr).replace(/\n/g, ' '));
+      counter.add('explain', r.code === 0 ? 'ok' : 'refused');
+    }
+    const unknown = await bellgate(work.dir, ['explain', 'nope\u001b[2J\u202E', '--history', history]);
+    expect(unknown.code).toBe(2);
+    assertInertText(unknown.stderr.replace(/\n/g, ' '));
+    counter.add('explain', 'refused');
+    const out = join(work.dir, dir, 'out');
+    const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--config', work.write(`${dir}/c.yml`, CONFIG), '--out', out]);
+    expect([0, 1], r.stderr).toContain(r.code);
+    assertInertMarkdown(readFileSync(join(out, 'report.md'), 'utf8'));
+    assertInertText(readFileSync(join(out, 'report.txt'), 'utf8'));
+    expect((JSON.parse(readFileSync(join(out, 'report.json'), 'utf8')) as Outputs['json']).metrics.map((m) => m.name)).toEqual(expect.arrayContaining(names));
+    assertNoPollution();
+    counter.add('check --out', 'ok');
+  });
+});
+
 describe('long names quoted in refusals', () => {
   it('a 10 KB name quoted in a refusal is cut, with its length, in every format that quotes it', async () => {
     const long = 'y'.repeat(10 * 1024);
