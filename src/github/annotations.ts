@@ -3,15 +3,21 @@
  * them on the run page without opening the log. Messages name the metric, the move and the cutoff.
  */
 import type { MetricResult, Report } from '../gate/report.js';
+import { formatBaseline } from '../report/cells.js';
+import { cleanText } from '../report/clean.js';
+import { formatAgainstCutoff, formatChange, formatValue } from '../report/format.js';
 import type { ActionSink } from './sink.js';
 
+// Names and units come from metric files (or a history they filled): shown through cleanText, so
+// control and bidirectional-override characters never reach the run page.
 function line(m: MetricResult): string {
+  const unit = m.unit === undefined ? undefined : cleanText(m.unit);
   const parts: string[] = [];
-  if (m.value !== undefined) parts.push(`value ${m.value}${m.unit ? ` ${m.unit}` : ''}`);
-  if (m.baseline) parts.push(`baseline ${m.baseline.mean} ± ${m.baseline.sd} (n=${m.baseline.n})`);
-  if (m.change !== undefined) parts.push(`change ${(m.change * 100).toFixed(1)}%`);
-  if (m.relativeDensity !== undefined) parts.push(`relative density ${m.relativeDensity.toPrecision(3)} vs cutoff ${m.cutoff}`);
-  return `${m.reason}${parts.length ? ` (${parts.join(', ')})` : ''}`;
+  if (m.value !== undefined) parts.push(`value ${formatValue(m.value, unit)}`);
+  if (m.baseline) parts.push(`baseline ${formatBaseline(m.baseline, unit)}`);
+  if (m.change !== undefined) parts.push(`change ${formatChange(m.change)}`);
+  if (m.relativeDensity !== undefined) parts.push(`relative density ${formatAgainstCutoff(m.relativeDensity, m.cutoff)}`);
+  return `${cleanText(m.reason, 2000)}${parts.length ? ` (${parts.join(', ')})` : ''}`;
 }
 
 /**
@@ -23,10 +29,10 @@ export function annotate(report: Report, sink: Pick<ActionSink, 'error' | 'notic
   let notices = 0;
   for (const m of report.metrics) {
     if (m.status === 'regressed') {
-      sink.error(line(m), { title: `bellgate [${series}]: ${m.name} regressed` });
+      sink.error(line(m), { title: `bellgate [${cleanText(series)}]: ${cleanText(m.name)} regressed` });
       errors += 1;
     } else if (m.status === 'improved') {
-      sink.notice(line(m), { title: `bellgate [${series}]: ${m.name} improved` });
+      sink.notice(line(m), { title: `bellgate [${cleanText(series)}]: ${cleanText(m.name)} improved` });
       notices += 1;
     }
   }
