@@ -1,3 +1,4 @@
+#!/usr/bin/env node
 import { createRequire as __WEBPACK_EXTERNAL_createRequire } from "module";
 /******/ var __webpack_modules__ = ({
 
@@ -96638,8 +96639,17 @@ class input_error_InputError extends Error {
      */
     describe() {
         const head = this.where ? `${this.where}: ${this.message}` : this.message;
-        return visibleText(this.fix ? `${head}\n  fix: ${this.fix}` : head);
+        return visibleText(shortenQuotes(this.fix ? `${head}\n  fix: ${this.fix}` : head));
     }
+}
+/** Quoted text past this many characters is cut in messages: a 10 KB metric name is not echoed whole. */
+const MAX_QUOTED = 120;
+// Every quoted string, taken pairwise from the left, so prose between two quotes is never cut.
+const QUOTED = /"((?:[^"\\]|\\.)*)"/g;
+function shortenQuotes(text) {
+    if (text.length <= MAX_QUOTED)
+        return text;
+    return text.replace(QUOTED, (whole, inner) => inner.length <= MAX_QUOTED ? whole : `"${Array.from(inner).slice(0, MAX_QUOTED / 2).join('')}…" (${inner.length} characters)`);
 }
 
 ;// CONCATENATED MODULE: ./src/history/store.ts
@@ -99487,6 +99497,10 @@ function wrongValue(error, tree) {
     }
     if (!fix && Array.isArray(node.examples))
         fix = `for example: ${JSON.stringify(node.examples[0])}`;
+    if (!fix && node.type === 'array')
+        fix = `write ${name} as a YAML list, one item per line starting with "- "`;
+    if (!fix)
+        fix = `change it to ${allowed}`; // every refusal says what to do, even without an example
     return { ...explain_schema_errors_position(tree, error.instancePath), message, fix };
 }
 /**
@@ -112705,6 +112719,8 @@ function explainCommand(ctx) {
 
 ;// CONCATENATED MODULE: ./src/history/import-run.ts
 
+
+
 /**
  * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
  * an id is required (a string, or a whole number such as a CI run id); a time is required and
@@ -112737,6 +112753,23 @@ function import_run_runInfoFrom(fields) {
         info[field] = text;
     }
     return info;
+}
+/**
+ * The reason a metric name cannot be imported, or undefined: the same rule as every metric file
+ * reader (checkMetricName: not blank, at most 512 characters, no control or bidi characters), so a
+ * name refused in a metric file cannot enter the history through an import instead.
+ * @example nameProblem('a\u202Eb') // 'metric name "a\u202Eb" contains a bidirectional override character (U+202E)'
+ */
+function nameProblem(name) {
+    try {
+        checkMetricName(name);
+        return undefined;
+    }
+    catch (error) {
+        if (error instanceof input_error_InputError)
+            return error.message;
+        throw error;
+    }
 }
 /**
  * Reads one metric value: a finite JSON number, or decimal text when `text` is allowed (CSV
@@ -112837,6 +112870,9 @@ function parseCsvRuns(text, source) {
         }
         const target = run;
         const add = (name, raw, unit) => {
+            const badName = nameProblem(name);
+            if (badName !== undefined)
+                return skip(badName);
             const value = valueFrom(raw, true);
             if (typeof value === 'string')
                 return skip(`metric ${JSON.stringify(name)}: ${value}`);
@@ -112914,6 +112950,9 @@ function parseJsonLines(text, source) {
         const add = (name, raw, unit) => {
             if (typeof name !== 'string' || name === '')
                 return skip(`a metric needs a non-empty "name"`);
+            const badName = nameProblem(name);
+            if (badName !== undefined)
+                return skip(badName);
             const value = valueFrom(raw);
             if (typeof value === 'string')
                 return skip(`metric ${JSON.stringify(name)}: ${value}`);
@@ -113092,6 +113131,7 @@ function reason(error) {
 
 
 
+
 /** How many skipped rows are listed one by one before the rest are counted. */
 const SHOWN_SKIPS = 20;
 /**
@@ -113116,8 +113156,9 @@ function importCommand(ctx) {
         const { history, store } = await openHistory(ctx, options.history, options.series);
         const result = importRuns(history, parsed);
         const skipped = result.skipped;
+        // Reasons quote names from the file: no control or bidi character reaches the terminal.
         for (const skip of skipped.slice(0, SHOWN_SKIPS))
-            ctx.io.stderr(`bellgate: skipped ${skip.where}: ${skip.reason}\n`);
+            ctx.io.stderr(visibleText(`bellgate: skipped ${skip.where}: ${skip.reason}`) + '\n');
         if (skipped.length > SHOWN_SKIPS)
             ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
         if (store)
@@ -122072,6 +122113,12 @@ function buildProgram(ctx) {
 
 ;// CONCATENATED MODULE: ./src/cli.ts
 
+// A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
+process.stdout.on('error', (e) => {
+    if (e.code !== 'EPIPE')
+        throw e;
+    process.exit(process.exitCode ?? 0);
+});
 const io = { stdout: (s) => void process.stdout.write(s), stderr: (s) => void process.stderr.write(s), cwd: process.cwd(), env: process.env, isTTY: process.stdout.isTTY === true, stderrIsTTY: process.stderr.isTTY === true };
 void runCli(process.argv.slice(2), io).then((code) => (process.exitCode = code));
 
