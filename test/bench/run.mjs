@@ -86,6 +86,7 @@ function measure(label, args, { env = {}, cwd = work, before = () => {}, okCodes
     });
     const elapsed = Number(process.hrtime.bigint() - t0) / 1e6;
     if (!okCodes.includes(out.status)) {
+      if (!flags['keep-files']) rmSync(work, { recursive: true, force: true });
       console.error(`bench: ${label} exited with ${out.status ?? out.signal}:\n${out.stdout.toString().slice(-4000)}\n${out.stderr.toString().slice(0, 4000)}`);
       process.exit(1);
     }
@@ -148,6 +149,7 @@ function actionRun() {
   const pr = measure('action PR check 100x50', [action], { cwd: dir, env, before });
   const output = readFileSync(join(dir, 'output.txt'), 'utf8');
   if (!/verdict/.test(output)) {
+    if (!flags['keep-files']) rmSync(work, { recursive: true, force: true });
     console.error(`bench: the action wrote no verdict output:\n${output}`);
     process.exit(1);
   }
