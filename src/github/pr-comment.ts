@@ -17,6 +17,11 @@ import type { ActionSink } from './sink.js';
 export async function postComment(api: () => GitHubApi, context: RunContext, inputs: ActionInputs, marker: string, markdown: string, flagged: boolean, sink: ActionSink): Promise<string | undefined> {
   const pr = context.pullRequest;
   if (!pr) return undefined;
+  // `never` must not touch the API at all: asking for it with an empty token would throw and warn.
+  if (inputs.comment === 'never') {
+    sink.info('bellgate: PR comment skipped');
+    return 'skipped';
+  }
   try {
     const outcome = await upsertComment(api(), pr.number, marker, markdown, inputs.comment, flagged);
     sink.info(`bellgate: PR comment ${outcome}`);
