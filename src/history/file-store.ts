@@ -8,9 +8,18 @@ import { healConcurrent } from './merge.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 
 /**
+ * The largest history file the file store reads or writes: 500 MiB. The file is read into one
+ * string, and V8 (Node 20) cannot make a string longer than 2^29 - 24 UTF-16 units (just under
+ * 512 MiB); a UTF-8 file never has more characters than bytes, so a byte limit below it is safe.
+ * At 5 significant digits that is about 14,000 runs x 5,000 metrics; `keep` bounds it.
+ */
+export const HISTORY_FILE_LIMIT = 500 * 1024 * 1024;
+
+/**
  * A history kept in one local file (any version readable, version 2 written).
- * - load: a missing file is an empty history; a file that cannot be read, is not a history
- *   document, or holds another series is a StoreError — and it is never overwritten.
+ * - load: a missing file is an empty history; a file that cannot be read, is larger than
+ *   HISTORY_FILE_LIMIT, is not a history document, or holds another series is a StoreError — and
+ *   it is never overwritten. save refuses to write a document over the limit the same way.
  * - save: refuses a shrink no trim explains (guardAgainstLoss), re-reads the file (it must still
  *   be a readable history of this series) and keeps the runs another writer added since the load
  *   (healConcurrent; the window between re-read and rename is left to the caller to keep single-
@@ -27,8 +36,12 @@ export function createFileStore(path: string, series: string): HistoryStore {
   async function readExisting(): Promise<History | undefined> {
     let text: string;
     try {
+      // Stat first: past the limit, reading would fail with V8's unexplained "Invalid string length".
+      const size = (await stat(path)).size;
+      if (size > HISTORY_FILE_LIMIT) throw tooLarge(size, where, 'the history file is');
       text = await readFile(path, 'utf8');
     } catch (cause) {
+      if (cause instanceof StoreError) throw cause;
       if ((cause as NodeJS.ErrnoException).code === 'ENOENT') return undefined;
       throw new StoreError(`cannot read the history file: ${messageOf(cause)}`, {
         where,
@@ -71,7 +84,14 @@ export function createFileStore(path: string, series: string): HistoryStore {
       try {
         text = serializeHistory(stored ? healConcurrent(h, stored) : h);
       } catch (cause) {
+        // A document past V8's longest string fails inside serializeHistory with a RangeError.
+        if (cause instanceof RangeError) throw tooLarge(undefined, where, 'the history to write would be');
         throw new StoreError(`the history cannot be written: ${messageOf(cause)}`, { where, cause });
+      }
+      // Characters <= UTF-8 bytes <= 3 x characters: count the bytes only when the bound is unclear.
+      if (text.length * 3 > HISTORY_FILE_LIMIT) {
+        const bytes = Buffer.byteLength(text, 'utf8');
+        if (bytes > HISTORY_FILE_LIMIT) throw tooLarge(bytes, where, 'the history to write would be');
       }
       await writeAtomically(path, text, where);
     },
@@ -112,6 +132,16 @@ async function writeAtomically(path: string, text: string, where: string): Promi
   } catch {
     // best effort
   }
+}
+
+/** The refusal of a history past HISTORY_FILE_LIMIT: the size, the limit and what to do. */
+function tooLarge(size: number | undefined, where: string, what: string): StoreError {
+  const mib = (n: number) => `${(n / 1024 / 1024).toFixed(1)} MiB`;
+  const amount = size === undefined ? 'larger than' : `${mib(size)} (${size} bytes), over`;
+  return new StoreError(`${what} ${amount} the limit of ${mib(HISTORY_FILE_LIMIT)} a history file may hold; it was left as it is`, {
+    where,
+    fix: 'lower `keep` (fewer runs per history), or split the series into several (one per group of metrics)',
+  });
 }
 
 function messageOf(cause: unknown): string {

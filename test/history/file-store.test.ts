@@ -1,10 +1,10 @@
-import { chmod, mkdir, mkdtemp, readdir, readFile, rm, writeFile } from 'node:fs/promises';
+import { chmod, mkdir, mkdtemp, readdir, readFile, rm, stat, truncate, writeFile } from 'node:fs/promises';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
 import { serializeHistory } from '../../src/history/document.js';
-import { createFileStore } from '../../src/history/file-store.js';
+import { createFileStore, HISTORY_FILE_LIMIT } from '../../src/history/file-store.js';
 import { appendRun, trimHistory } from '../../src/history/merge.js';
 import { StoreError } from '../../src/history/store.js';
 
@@ -118,6 +118,27 @@ describe('createFileStore', () => {
     expect((await rejection(createFileStore(join(root, 'plain', 'h.json'), 's').load())).message).toMatch(/cannot read/);
     const error = await rejection(createFileStore(root, 's').load());
     expect(error.message).toMatch(/cannot read/);
+  });
+
+  it('a file over the size limit is refused by size on load and on save, before it is read, and kept', async () => {
+    // A sparse file (truncate past the end) takes no disk space. V8's longest string in Node 20 is
+    // 2^29 - 24 characters (from memory: v8::String::kMaxLength on 64-bit), so a file read into
+    // one string must stay below it: the limit is checked against that, and the file against both.
+    expect(HISTORY_FILE_LIMIT).toBeLessThan(2 ** 29 - 24);
+    const path = join(root, 'huge.json');
+    await writeFile(path, '{"schema":"bellgate.history/2"');
+    const size = 600 * 1024 * 1024;
+    await truncate(path, size);
+    const store = createFileStore(path, 'linux-x64');
+    const onLoad = await rejection(store.load());
+    expect(onLoad.message).toContain('600.0 MiB (629145600 bytes)');
+    expect(onLoad.message).toContain('limit of 500.0 MiB');
+    expect(onLoad.message).not.toMatch(/Invalid string length/);
+    expect(onLoad.fix).toMatch(/lower `keep`.*split the series/);
+    const onSave = await rejection(store.save(appendRun(await createFileStore(join(root, 'none.json'), 'linux-x64').load(), info(1), run(1)), 0));
+    expect(onSave.message).toContain('629145600 bytes');
+    expect((await stat(path)).size).toBe(size);
+    await rm(path);
   });
 
   it('two writers from the same start: the later save keeps the run the first one added', async () => {
