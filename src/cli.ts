@@ -1,5 +1,10 @@
 #!/usr/bin/env node
-import { runCli } from './cli/main.js';
+import module from 'node:module';
+
+// Node >= 22.1 keeps compiled code between runs (the runner's node24 has it; on 20 this is a no-op).
+// It covers only what loads after it, so everything else is imported below, not statically.
+(module as { enableCompileCache?: () => unknown }).enableCompileCache?.();
+const { runCli } = await import('./cli/main.js');
 
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
 process.stdout.on('error', (e: NodeJS.ErrnoException) => {

@@ -14,8 +14,9 @@ import { recordRun } from './record-run.js';
 import { runInfoFrom, type RunInfoOptions } from './run-info.js';
 import { writeReports } from './write-reports.js';
 
-export type ReportFormat = 'text' | 'markdown' | 'json';
-export const REPORT_FORMATS: readonly ReportFormat[] = ['text', 'markdown', 'json'];
+import type { ReportFormat } from './options.js';
+
+export { REPORT_FORMATS, type ReportFormat } from './options.js';
 
 /** Everything `bellgate check` (and the demo) can be asked to do. */
 export interface CheckOptions extends MetricFileOptions, RunInfoOptions {

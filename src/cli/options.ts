@@ -1,6 +1,10 @@
 import type { Command } from 'commander';
 import { METRIC_FORMATS } from '../inputs/formats.js';
 
+/** The formats `check --format` prints (defined here, not in check-flow.ts, so --help loads no renderer). */
+export type ReportFormat = 'text' | 'markdown' | 'json';
+export const REPORT_FORMATS: readonly ReportFormat[] = ['text', 'markdown', 'json'];
+
 /** The series used when --series is not given. */
 export const DEFAULT_SERIES = 'default';
 

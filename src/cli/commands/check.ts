@@ -1,7 +1,7 @@
 import { Command, Option } from 'commander';
 import type { CommandContext } from '../context.js';
-import { performCheck, REPORT_FORMATS, verdictExitCode, type CheckOptions } from '../check-flow.js';
-import { configOption, examples, historyOption, inputOptions, metricsOption, runInfoOptions, seriesOption } from '../options.js';
+import type { CheckOptions } from '../check-flow.js';
+import { configOption, examples, historyOption, inputOptions, metricsOption, REPORT_FORMATS, runInfoOptions, seriesOption } from '../options.js';
 
 /**
  * `bellgate check`: judges this run's metrics against the history and prints the report.
@@ -27,6 +27,8 @@ export function checkCommand(ctx: CommandContext): Command {
   ]);
   cmd.addHelpText('after', '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\n');
   return cmd.action(async (options: CheckOptions) => {
+    // Imported when the command runs, so `--help` and the other commands never load the gate.
+    const { performCheck, verdictExitCode } = await import('../check-flow.js');
     const report = await performCheck(ctx, options);
     ctx.exitCode = verdictExitCode(report);
   });

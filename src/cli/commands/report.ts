@@ -1,23 +1,7 @@
 import { Command } from 'commander';
-import { mkdir, writeFile } from 'node:fs/promises';
-import { dirname } from 'node:path';
-import { runGate } from '../../gate/gate.js';
-import { renderHtmlReport } from '../../report/html.js';
 import type { CommandContext } from '../context.js';
-import { loadConfig } from '../load-config.js';
-import { loadRun, type MetricFileOptions } from '../load-run.js';
-import { openHistory } from '../open-history.js';
-import { resolvePath } from '../paths.js';
-import { splitNewest } from '../split-newest.js';
+import type { ReportOptions } from '../run/report.js';
 import { configOption, examples, historyOption, inputOptions, seriesOption } from '../options.js';
-
-interface ReportOptions extends Partial<MetricFileOptions> {
-  history: string;
-  html: string;
-  config?: string;
-  series: string;
-  title?: string;
-}
 
 /**
  * `bellgate report`: one self-contained HTML file with every metric's history, fitted band and
@@ -36,23 +20,6 @@ export function reportCommand(ctx: CommandContext): Command {
     'bellgate report --history .bellgate/history.json --html bellgate-report.html',
     'bellgate report --history h.json --metrics bench.json --html out/report.html --title "Nightly"',
   ]);
-  return cmd.action(async (options: ReportOptions) => {
-    const config = await loadConfig(ctx, options.config);
-    const opened = await openHistory(ctx, options.history, options.series);
-    const { history, run } =
-      options.metrics === undefined
-        ? splitNewest(opened.history, options.history)
-        : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
-    const report = runGate({ config, history, run, series: options.series });
-    const html = renderHtmlReport({
-      report,
-      history,
-      title: options.title ?? `Bellgate report: ${options.series}`,
-      generatedAt: ctx.now().toISOString(),
-    });
-    const out = resolvePath(ctx, options.html);
-    await mkdir(dirname(out), { recursive: true });
-    await writeFile(out, html);
-    ctx.io.stdout(`wrote ${out} (verdict ${report.verdict}, ${report.metrics.length} metrics)\n`);
-  });
+  // The work (with d3 and the HTML code) is imported when the command runs, so the others never load it.
+  return cmd.action(async (options: ReportOptions) => (await import('../run/report.js')).runReport(ctx, options));
 }

@@ -1,0 +1,55 @@
+import { settingsFor } from '../../config/rules.js';
+import { runGate } from '../../gate/gate.js';
+import { selectBaseline } from '../../gate/baseline.js';
+import { InputError } from '../../model/input-error.js';
+import { fromFitScale } from '../../model/transform.js';
+import { renderExplain } from '../../report/explain.js';
+import type { CommandContext } from '../context.js';
+import { loadConfig } from '../load-config.js';
+import { loadRun, type MetricFileOptions } from '../load-run.js';
+import { openHistory } from '../open-history.js';
+import { splitNewest } from '../split-newest.js';
+import { closeNames } from '../close-names.js';
+
+export interface ExplainOptions extends Partial<MetricFileOptions> {
+  history: string;
+  config?: string;
+  series: string;
+}
+
+/**
+ * The work of `bellgate explain METRIC` (loaded only when that command runs): judges the run and
+ * draws the one metric's decision on stdout.
+ * @throws InputError for an unknown metric (naming the closest names), bad files or flags.
+ * @example await runExplain(ctx, 'latency/geocode-p95', { history: 'h.json', series: 'default' })
+ */
+export async function runExplain(ctx: CommandContext, metric: string, options: ExplainOptions): Promise<void> {
+  const config = await loadConfig(ctx, options.config);
+  const opened = await openHistory(ctx, options.history, options.series);
+  const { history, run } =
+    options.metrics === undefined
+      ? splitNewest(opened.history, options.history)
+      : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
+  const report = runGate({ config, history, run, series: options.series });
+  const result = report.metrics.find((m) => m.name === metric);
+  if (result === undefined) {
+    const known = [...new Set([...history.columns.keys(), ...run.metrics.keys()])];
+    const near = closeNames(metric, known);
+    throw new InputError(`no metric named "${metric}" in the history or this run`, {
+      where: options.history,
+      fix: near.length > 0 ? `did you mean ${near.map((n) => `"${n}"`).join(' or ')}?` : 'run bellgate check to list the metric names',
+    });
+  }
+  const settings = settingsFor(config, metric);
+  const baseline = selectBaseline(history, metric, settings);
+  const width = Number(ctx.io.env.COLUMNS);
+  const text = renderExplain({
+    result,
+    // selectBaseline gives fit-scale values; the picture wants the metric's own unit.
+    baselineValues: baseline.values.map((v) => fromFitScale(v, settings.transform)),
+    cutoff: result.cutoff,
+    color: ctx.color,
+    ...(Number.isInteger(width) && width >= 40 ? { width: Math.min(width, 160) } : {}),
+  });
+  ctx.io.stdout(text.endsWith('\n') ? text : `${text}\n`);
+}
