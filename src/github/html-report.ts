@@ -2,7 +2,6 @@ import { join } from 'node:path';
 import type { Report } from '../gate/report.js';
 import { artifactName } from '../history/artifact-store.js';
 import type { History } from '../history/history.js';
-import { renderHtmlReport } from '../report/html.js';
 import type { RunContext } from './context.js';
 import { describeError } from './describe-error.js';
 import type { ActionDeps } from './run-action.js';
@@ -16,6 +15,8 @@ export async function uploadHtml(deps: ActionDeps, context: RunContext, series: 
   // One artifact per series and attempt: artifact names must be unique within a workflow run.
   const name = `${artifactName('bellgate-report', series)}-${context.attempt}`;
   try {
+    // Imported here, on the html-report path only: d3 and the page code stay out of every other run.
+    const { renderHtmlReport } = await import('../report/html.js');
     const html = renderHtmlReport({ report, history, generatedAt: deps.now().toISOString() });
     await deps.writeText(join(context.runnerTemp, 'bellgate', `${name}.html`), html);
     await deps.upload(name, 'report.html', html, retentionDays);

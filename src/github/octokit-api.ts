@@ -4,8 +4,6 @@
  * waiting as Retry-After says) and @octokit/plugin-throttling (GitHub's rate-limit answers).
  * Intervals are tunable so tests can run the same code with millisecond waits.
  */
-import { retry } from '@octokit/plugin-retry';
-import { throttling } from '@octokit/plugin-throttling';
 import type { ArtifactEntry } from '../history/artifact-store.js';
 import { createGitDataClient } from '../history/branch-rest.js';
 import { DEFAULT_RETRY, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
@@ -72,11 +70,15 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     log(`GitHub API asked to wait ${after} s before ${options.method ?? ''} ${options.url ?? ''} (retry ${count + 1} of ${tuning.retries})`);
     return count < tuning.retries;
   };
-  // @actions/github parses the event payload when it is first imported; importing it on first use
-  // keeps a check-only run with a file store from loading it at all, and any failure there
-  // becomes a plain message instead of a crash at start-up.
+  // @actions/github parses the event payload when it is first imported; importing it (and the
+  // plugins, with Bottleneck) on first use keeps a run that never calls the API from loading any
+  // of it, and any failure there becomes a plain message instead of a crash at start-up.
   let client: Promise<Octokit> | undefined;
-  const octokit = (): Promise<Octokit> => (client ??= import('@actions/github').then(({ getOctokit }) => getOctokit(
+  const octokit = (): Promise<Octokit> => (client ??= Promise.all([
+    import('@actions/github'),
+    import('@octokit/plugin-retry'),
+    import('@octokit/plugin-throttling'),
+  ]).then(([{ getOctokit }, { retry }, { throttling }]) => getOctokit(
     target.token,
     {
       baseUrl: target.baseUrl.replace(/\/+$/, ''),
