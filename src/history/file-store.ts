@@ -1,10 +1,10 @@
-import { randomBytes } from 'node:crypto';
+import { createHash, randomBytes } from 'node:crypto';
 import { mkdir, open, readFile, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../model/input-error.js';
 import { parseHistory, serializeHistory } from './document.js';
-import { emptyHistory, type History } from './history.js';
-import { healConcurrent } from './merge.js';
+import { emptyHistory, type History, type RunInfo } from './history.js';
+import { concurrentRuns, healConcurrent } from './merge.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 
 /**
@@ -22,8 +22,9 @@ export const HISTORY_FILE_LIMIT = 500 * 1024 * 1024;
  *   it is never overwritten. save refuses to write a document over the limit the same way.
  * - save: refuses a shrink no trim explains (guardAgainstLoss), re-reads the file (it must still
  *   be a readable history of this series) and keeps the runs another writer added since the load
- *   (healConcurrent; the window between re-read and rename is left to the caller to keep single-
- *   writer, e.g. one CI job per series), then writes atomically: a temp file in the same
+ *   (healConcurrent; parsed again only when its bytes differ from every loaded document's, or h
+ *   lacks some of their runs; the window between re-read and rename is left to the caller to keep
+ *   single-writer, e.g. one CI job per series), then writes atomically: a temp file in the same
  *   folder (so rename stays on one file system), fsync, rename over the old file, fsync the folder.
  *   A crash leaves either the old or the new document, never half of one. Creates the folder.
  *
@@ -33,13 +34,15 @@ export const HISTORY_FILE_LIMIT = 500 * 1024 * 1024;
 export function createFileStore(path: string, series: string): HistoryStore {
   const where = `file ${path}`;
 
-  async function readExisting(): Promise<History | undefined> {
-    let text: string;
+  /** The file's bytes; undefined when it does not exist. Refuses a file over the limit unread. */
+  async function readBytes(): Promise<Buffer | undefined> {
     try {
       // Stat first: past the limit, reading would fail with V8's unexplained "Invalid string length".
       const size = (await stat(path)).size;
       if (size > HISTORY_FILE_LIMIT) throw tooLarge(size, where, 'the history file is');
-      text = await readFile(path, 'utf8');
+      const bytes = await readFile(path);
+      if (bytes.length > HISTORY_FILE_LIMIT) throw tooLarge(bytes.length, where, 'the history file is');
+      return bytes;
     } catch (cause) {
       if (cause instanceof StoreError) throw cause;
       if ((cause as NodeJS.ErrnoException).code === 'ENOENT') return undefined;
@@ -49,9 +52,12 @@ export function createFileStore(path: string, series: string): HistoryStore {
         cause,
       });
     }
+  }
+
+  function parseBytes(bytes: Buffer): History {
     let history: History;
     try {
-      history = parseHistory(text, path);
+      history = parseHistory(bytes.toString('utf8'), path);
     } catch (cause) {
       if (!(cause instanceof InputError)) throw cause;
       throw new StoreError(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
@@ -69,20 +75,28 @@ export function createFileStore(path: string, series: string): HistoryStore {
     return history;
   }
 
+  // The runs of every document load() parsed, by fingerprint of its bytes: when save() finds the
+  // same bytes on disk it knows their runs without parsing them again (the costliest step at scale).
+  const loaded = new Map<string, RunInfo[]>();
+
   return {
     describe: () => where,
     async load(): Promise<History> {
-      return (await readExisting()) ?? emptyHistory(series);
+      const bytes = await readBytes();
+      if (bytes === undefined) return emptyHistory(series);
+      const history = parseBytes(bytes);
+      loaded.set(fingerprint(bytes), history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })));
+      return history;
     },
     async save(h: History, readCount: number): Promise<void> {
       if (h.series !== series) {
         throw new StoreError(`refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`, { where });
       }
       guardAgainstLoss(where, h, readCount);
-      const stored = await readExisting();
+      const healed = await healFromDisk(h);
       let text: string;
       try {
-        text = serializeHistory(stored ? healConcurrent(h, stored) : h);
+        text = serializeHistory(healed);
       } catch (cause) {
         // A document past V8's longest string fails inside serializeHistory with a RangeError.
         if (cause instanceof RangeError) throw tooLarge(undefined, where, 'the history to write would be');
@@ -96,6 +110,24 @@ export function createFileStore(path: string, series: string): HistoryStore {
       await writeAtomically(path, text, where);
     },
   };
+
+  /**
+   * h plus the runs another writer added since the load (healConcurrent). The file must still be a
+   * readable history of this series. When its bytes are those of a loaded document whose runs add
+   * nothing to h (the usual case: nobody else wrote), healing is known to return h: no parse.
+   */
+  async function healFromDisk(h: History): Promise<History> {
+    const bytes = await readBytes();
+    if (bytes === undefined) return h;
+    const runs = loaded.get(fingerprint(bytes));
+    if (runs !== undefined && concurrentRuns(h, runs).length === 0) return h;
+    return healConcurrent(h, parseBytes(bytes));
+  }
+}
+
+/** Size and SHA-1 of a file's bytes: equal prints mean the same document (SHA-1 as a checksum, not for security). */
+function fingerprint(bytes: Buffer): string {
+  return `${bytes.length}:${createHash('sha1').update(bytes).digest('hex')}`;
 }
 
 async function writeAtomically(path: string, text: string, where: string): Promise<void> {

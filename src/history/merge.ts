@@ -1,5 +1,6 @@
 import { InputError } from '../model/input-error.js';
 import type { Run } from '../inputs/run.js';
+import { appendNewest } from './append-newest.js';
 import type { History, MetricColumn, RunInfo } from './history.js';
 import { compareRuns, timeKey } from './run-order.js';
 
@@ -40,7 +41,8 @@ export function mergeHistories(a: History, b: History): History {
 /**
  * Adds one run (or replaces the run with the same id) at its place in time order. Metrics new
  * to the history get a column that is NaN for older runs; metrics the run lacks are NaN for it.
- * Units the run carries are recorded. Pure: returns a new History.
+ * Units the run carries are recorded. Pure: returns a new History. The usual case (a new run,
+ * newest of all) takes appendNewest's fast path; anything else merges; the result is the same.
  * Throws InputError on an empty id or a non-finite value (never stored as a silent gap).
  *
  * @example appendRun(h, { id: '83-1', time: '2026-03-02T10:00:00Z' }, run).runs.at(-1)?.id // '83-1'
@@ -59,13 +61,15 @@ export function appendRun(h: History, info: RunInfo, run: Run): History {
     }
     columns.set(name, m.unit === undefined ? { values: [m.value] } : { unit: m.unit, values: [m.value] });
   }
-  return mergeHistories(h, { series: h.series, runs: [{ ...info }], columns });
+  return appendNewest(h, info, columns) ?? mergeHistories(h, { series: h.series, runs: [{ ...info }], columns });
 }
 
 /**
  * Keeps the `keep` newest runs (the end of the list) — the only way runs are deleted. Columns that
  * hold no value any more are dropped. Records the number deleted in `trimmed`, which a store's
  * save uses to tell an intended shrink from a lost history. Pure.
+ * When no run is dropped the value arrays are shared with `h`, not copied (a History is never
+ * changed in place; a copy of every column would only cost time and memory at record).
  * Throws InputError unless keep is a whole number of at least 1 (or Infinity: keep all).
  *
  * @example trimHistory(h, 60).runs.length // min(60, h.runs.length)
@@ -77,7 +81,7 @@ export function trimHistory(h: History, keep: number): History {
   const drop = Math.max(0, h.runs.length - keep);
   const columns = new Map<string, MetricColumn>();
   for (const [name, column] of h.columns) {
-    const values = column.values.slice(drop);
+    const values = drop === 0 ? column.values : column.values.slice(drop);
     if (!values.some((v) => !Number.isNaN(v))) continue;
     columns.set(name, column.unit === undefined ? { values } : { unit: column.unit, values });
   }
@@ -96,12 +100,7 @@ export function trimHistory(h: History, keep: number): History {
  * @example healConcurrent(mine, onDisk).runs // my runs and the other writer's new ones
  */
 export function healConcurrent(h: History, stored: History): History {
-  const mine = new Set(h.runs.map((r) => r.id));
-  const oldest = h.runs.reduce((min, r) => Math.min(min, timeKey(r)), Infinity);
-  const keep: number[] = [];
-  stored.runs.forEach((r, i) => {
-    if (!mine.has(r.id) && timeKey(r) >= oldest) keep.push(i);
-  });
+  const keep = concurrentRuns(h, stored.runs);
   if (keep.length === 0) return h;
   const columns = new Map<string, MetricColumn>();
   for (const [name, column] of stored.columns) {
@@ -112,4 +111,21 @@ export function healConcurrent(h: History, stored: History): History {
   const healed = mergeHistories(added, h);
   if (h.trimmed !== undefined) healed.trimmed = h.trimmed;
   return healed;
+}
+
+/**
+ * The indexes of the runs in `storedRuns` that healConcurrent would add to `h`: ids `h` lacks, not
+ * older than h's oldest run. Empty means healing changes nothing, which a store can decide from
+ * the run list alone (no columns needed). Pure.
+ *
+ * @example concurrentRuns(mine, onDisk.runs) // [] when nobody else wrote
+ */
+export function concurrentRuns(h: History, storedRuns: readonly RunInfo[]): number[] {
+  const mine = new Set(h.runs.map((r) => r.id));
+  const oldest = h.runs.reduce((min, r) => Math.min(min, timeKey(r)), Infinity);
+  const keep: number[] = [];
+  storedRuns.forEach((r, i) => {
+    if (!mine.has(r.id) && timeKey(r) >= oldest) keep.push(i);
+  });
+  return keep;
 }

@@ -166,4 +166,60 @@ describe('createFileStore', () => {
     await store.save(trimHistory(appendRun(loaded, info(5), run(5)), 2), 4);
     expect((await store.load()).runs.map((r) => r.id)).toEqual(['8104-1', '8105-1']);
   });
+
+  // save() skips re-parsing a file whose bytes are those load() read; these check that every case
+  // still keeps every run (the healing rule of healConcurrent), unchanged file or not.
+  it('unchanged since the load: the saved file holds the loaded runs plus the new one, values intact', async () => {
+    const path = join(root, 'unchanged.json');
+    const store = createFileStore(path, 'linux-x64');
+    let h = await store.load();
+    for (let n = 1; n <= 3; n++) h = appendRun(h, info(n), run(n + 0.5));
+    await store.save(h, 0);
+    const fresh = createFileStore(path, 'linux-x64');
+    const loaded = await fresh.load();
+    await fresh.save(appendRun(loaded, info(4), run(4.5)), 3);
+    const back = await createFileStore(path, 'linux-x64').load();
+    expect(back.runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1', '8104-1']);
+    expect(back.columns.get('build/compile')?.values).toEqual([1.5, 2.5, 3.5, 4.5]);
+  });
+
+  it('another writer (another process) saved between load and save: both runs are kept', async () => {
+    const path = join(root, 'other-writer.json');
+    await createFileStore(path, 'linux-x64').save(appendRun({ series: 'linux-x64', runs: [], columns: new Map() }, info(1), run(1)), 0);
+    const mine = createFileStore(path, 'linux-x64');
+    const theirs = createFileStore(path, 'linux-x64');
+    const start = await mine.load();
+    const other = await theirs.load();
+    await theirs.save(appendRun(other, info(3), run(3)), 1);
+    await mine.save(appendRun(start, info(2), run(2)), 1);
+    const back = await createFileStore(path, 'linux-x64').load();
+    expect(back.runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1']);
+    expect(back.columns.get('build/compile')?.values).toEqual([1, 2, 3]);
+  });
+
+  it('the same store loaded again after another writer, then saves what it built on the first load: the other run is kept', async () => {
+    const path = join(root, 'reloaded.json');
+    const store = createFileStore(path, 'linux-x64');
+    await store.save(appendRun(await store.load(), info(1), run(1)), 0);
+    const first = await store.load();
+    const other = createFileStore(path, 'linux-x64');
+    await other.save(appendRun(await other.load(), info(3), run(3)), 1);
+    await store.load(); // the bytes on disk are now a loaded document, but `first` lacks its run 8103-1
+    await store.save(appendRun(first, info(2), run(2)), 1);
+    expect((await store.load()).runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1']);
+  });
+
+  it('a file replaced by one of the same size but another series after the load is still refused', async () => {
+    const path = join(root, 'same-size.json');
+    const store = createFileStore(path, 'linux-x64');
+    await store.save(appendRun(await store.load(), info(1), run(1)), 0);
+    const loaded = await store.load();
+    const text = await readFile(path, 'utf8');
+    const swapped = text.replace('"linux-x64"', '"linux-arm"');
+    expect(swapped.length).toBe(text.length);
+    await writeFile(path, swapped);
+    const error = await rejection(store.save(appendRun(loaded, info(2), run(2)), 1));
+    expect(error.message).toMatch(/series "linux-arm"/);
+    expect(await readFile(path, 'utf8')).toBe(swapped);
+  });
 });

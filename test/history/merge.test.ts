@@ -2,9 +2,10 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
 import { InputError } from '../../src/model/input-error.js';
-import type { History } from '../../src/history/history.js';
+import type { History, RunInfo } from '../../src/history/history.js';
+import { emptyHistory } from '../../src/history/history.js';
 import { appendRun, mergeHistories, trimHistory } from '../../src/history/merge.js';
-import { historyArbitrary } from './arbitraries.js';
+import { cell, historyArbitrary, metricName, runInfo } from './arbitraries.js';
 
 /** A Run; `units` maps names to units, or one unit string applies to every metric. */
 const run = (values: Record<string, number>, units?: string | Record<string, string>): Run => ({
@@ -140,5 +141,57 @@ describe('trimHistory', () => {
 
   it('refuses a keep that is not a whole number of at least 1', () => {
     for (const keep of [0, -1, 2.5, NaN]) expect(() => trimHistory(base(), keep)).toThrow(InputError);
+  });
+});
+
+// appendRun has a fast path for a new run that sorts last (append-newest.ts); its definition is
+// the merge with a one-run history, so every case must give exactly what that merge gives.
+describe('appendRun equals the merge with a one-run history', () => {
+  const slow = (h: History, info: RunInfo, r: Run): History => {
+    const columns = new Map([...r.metrics].map(([name, m]) => [name, m.unit === undefined ? { values: [m.value] } : { unit: m.unit, values: [m.value] }]));
+    return mergeHistories(h, { series: h.series, runs: [{ ...info }], columns });
+  };
+  const runArbitrary = fc
+    .uniqueArray(fc.tuple(metricName(), cell().filter((v) => !Number.isNaN(v)), fc.option(fc.constantFrom('ms', 's', 'B'), { nil: undefined })), { selector: ([n]) => n, maxLength: 5 })
+    .map((entries): Run => ({ metrics: new Map(entries.map(([n, value, unit]) => [n, unit === undefined ? { value, count: 1 } : { value, unit, count: 1 }])), meta: new Map() }));
+  // Ordered histories (the merge with an empty one sorts them), sometimes with a trimmed count,
+  // and a run that is sometimes new and newest (fast path), sometimes not (merge).
+  const cases = fc.record({
+    raw: historyArbitrary(),
+    ordered: fc.boolean(),
+    trimmed: fc.option(fc.integer({ min: 1, max: 5 }), { nil: undefined }),
+    reuse: fc.nat(10),
+    fresh: fc.boolean(),
+    info: runInfo('x'),
+    bump: fc.integer({ min: 0, max: 86_400_000 }),
+    run: runArbitrary,
+  });
+
+  it('on ordered and unordered histories, new, newest, older and repeated ids', () => {
+    fc.assert(
+      fc.property(cases, ({ raw, ordered, trimmed, reuse, fresh, info, bump, run: r }) => {
+        const h = ordered ? mergeHistories(raw, emptyHistory(raw.series)) : raw;
+        if (trimmed !== undefined) h.trimmed = trimmed;
+        const newest = h.runs.at(-1)?.time;
+        const id = !fresh && h.runs.length > 0 ? (h.runs[reuse % h.runs.length] as RunInfo).id : `new-${reuse}`;
+        const time = fresh && newest !== undefined ? new Date(Date.parse(newest) + bump).toISOString() : info.time;
+        const next: RunInfo = time === undefined ? { ...info, id } : { ...info, id, time };
+        const expected = slow(h, next, r);
+        const got = appendRun(h, next, r);
+        expect(got).toEqual(expected);
+        expect([...got.columns.keys()]).toEqual([...expected.columns.keys()]);
+        expect(got.trimmed).toBe(expected.trimmed);
+      }),
+      { numRuns: 500, seed: 7 },
+    );
+  });
+
+  it('leaves its input untouched (pure), on the fast path too', () => {
+    const h = appendRun(appendRun(emptyHistory('s'), { id: '1-1', time: '2026-03-01T10:00:00Z' }, run({ a: 1 })), { id: '2-1', time: '2026-03-02T10:00:00Z' }, run({ a: 2 }));
+    const before = structuredClone(h);
+    const next = appendRun(h, { id: '3-1', time: '2026-03-03T10:00:00Z' }, run({ a: 3, b: 4 }, 'ms'));
+    expect(h).toEqual(before);
+    expect(next.columns.get('a')).toEqual({ unit: 'ms', values: [1, 2, 3] });
+    expect(next.columns.get('b')).toEqual({ unit: 'ms', values: [NaN, NaN, 4] });
   });
 });

@@ -1,0 +1,45 @@
+import type { History, MetricColumn, RunInfo } from './history.js';
+import { compareRuns } from './run-order.js';
+
+/**
+ * appendRun's fast path for the usual record: a run with a new id that sorts after every run
+ * (compareRuns: time, then id) of a history already in run order goes at the end. Each column is
+ * copied once (a native slice) and extended, instead of mergeHistories' sort and per-value map.
+ * Returns undefined when that does not hold — an id already present, a run that sorts before the
+ * newest, a history not in run order, duplicate ids, a column not aligned with the runs — and
+ * appendRun then merges. The result equals mergeHistories(h, the one-run history): a stable sort
+ * of an ordered list is the list itself, so the merge would put the run last too.
+ *
+ * @example appendNewest(h, { id: '83-1', time: '2026-03-02T10:00:00Z' }, columns)?.runs.at(-1)?.id // '83-1'
+ */
+export function appendNewest(h: History, info: RunInfo, added: Map<string, MetricColumn>): History | undefined {
+  const n = h.runs.length;
+  const ids = new Set<string>();
+  let previous: RunInfo | undefined;
+  for (const run of h.runs) {
+    if (previous !== undefined && compareRuns(previous, run) > 0) return undefined;
+    ids.add(run.id);
+    previous = run;
+  }
+  if (ids.size !== n || ids.has(info.id)) return undefined;
+  if (previous !== undefined && compareRuns(previous, info) > 0) return undefined;
+  for (const column of h.columns.values()) if (column.values.length !== n) return undefined;
+
+  const columns = new Map<string, MetricColumn>();
+  for (const [name, column] of h.columns) {
+    const values = column.values.slice();
+    const fromRun = added.get(name);
+    values.push(fromRun?.values[0] ?? NaN);
+    const unit = fromRun?.unit ?? column.unit;
+    columns.set(name, unit === undefined ? { values } : { unit, values });
+  }
+  for (const [name, column] of added) {
+    if (columns.has(name)) continue;
+    const values = new Array<number>(n + 1).fill(NaN);
+    values[n] = column.values[0] ?? NaN;
+    columns.set(name, column.unit === undefined ? { values } : { unit: column.unit, values });
+  }
+  const next: History = { series: h.series, runs: [...h.runs.map((r) => ({ ...r })), { ...info }], columns };
+  if ((h.trimmed ?? 0) > 0) next.trimmed = h.trimmed;
+  return next;
+}
