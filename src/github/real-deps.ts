@@ -1,14 +1,13 @@
 /**
- * The real collaborators of runAction: the runner's environment, @actions/core as the sink, the
+ * The real collaborators of runAction: the runner's environment, the workflow-command sink, the
  * file system, the clock, octokit, and the lazily loaded artifact uploader.
  */
-import * as core from '@actions/core';
 import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { createArtifactUploader } from '../history/artifact-upload.js';
 import { createOctokitApi } from './octokit-api.js';
 import type { ActionDeps } from './run-action.js';
-import { createCoreSink } from './sink.js';
+import { createRunnerSink } from './runner-sink.js';
 
 /**
  * @example await runAction(createRealDeps(process.env))
@@ -17,7 +16,7 @@ export function createRealDeps(env: Record<string, string | undefined> = process
   return {
     env,
     cwd: env.GITHUB_WORKSPACE || process.cwd(),
-    sink: createCoreSink(core),
+    sink: createRunnerSink(),
     readText: (path) => readFile(path, 'utf8'),
     writeText: async (path, text) => {
       await mkdir(dirname(path), { recursive: true });
