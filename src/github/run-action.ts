@@ -15,7 +15,6 @@
  * Nothing prints a stack trace or the token (it is masked first).
  */
 import { join } from 'node:path';
-import { readConfigFile } from '../config/read.js';
 import { settingsFor } from '../config/rules.js';
 import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
@@ -30,6 +29,7 @@ import { annotate } from './annotations.js';
 import type { GitHubApi, GitHubApiFactory, RetryTuning } from './api.js';
 import { readRunContext } from './context.js';
 import { describeError } from './describe-error.js';
+import { loadActionConfig } from './load-config.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
 import { loadHistory, recordRun, runInfo } from './history-step.js';
 import { uploadHtml } from './html-report.js';
@@ -81,7 +81,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (inputs.token !== '') sink.setSecret(inputs.token);
   const context = await readRunContext(deps.env, deps.readText);
   // A missing file at the default path means default settings; a missing named file is an error.
-  const config = await readConfigFile(inputs.config, { cwd: deps.cwd });
+  const config = await loadActionConfig(inputs.config, deps.cwd);
   const run = await readMetricFiles(inputs.metrics, {
     ...(inputs.inputFormat ?? config.inputFormat ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
     limits: config.limits,
