@@ -58,7 +58,8 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
     return [];
   }
   const centre = median(values);
-  const centred = Float64Array.from(values, (x) => x - centre);
+  const centred = new Float64Array(n);
+  for (let i = 0; i < n; i++) centred[i] = values[i]! - centre;
   const sigma = noiseSigma(centred);
   if (!(sigma > 0)) return [];
   const sum = new Float64Array(n + 1);
@@ -68,31 +69,40 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
     sum[i + 1] = sum[i]! + z;
     sumSq[i + 1] = sumSq[i]! + z * z;
   }
-  const cost = (from: number, to: number): number => {
-    const s = sum[to]! - sum[from]!;
-    return Math.max(0, sumSq[to]! - sumSq[from]! - (s * s) / (to - from));
-  };
   const best = new Float64Array(n + 1).fill(Infinity);
   const previous = new Int32Array(n + 1);
   best[0] = -penalty;
-  let candidates: number[] = [];
+  // The candidate starts and their totals live in fixed typed arrays, pruned in place: the gate
+  // runs this once per metric, and a fresh array and closure per step was most of its cost.
+  const candidates = new Int32Array(n + 1);
+  const totals = new Float64Array(n + 1);
+  let count = 0;
   for (let end = minSegment; end <= n; end++) {
     // The start that just became far enough back joins the candidates, if it can end a segment.
     const fresh = end - minSegment;
-    if (fresh === 0 || fresh >= minSegment) candidates.push(fresh);
+    if (fresh === 0 || fresh >= minSegment) candidates[count++] = fresh;
     let bestValue = Infinity;
     let bestStart = 0;
-    const totals = candidates.map((start) => best[start]! + cost(start, end) + penalty);
-    totals.forEach((total, k) => {
+    for (let k = 0; k < count; k++) {
+      const start = candidates[k]!;
+      // Segment cost C = sum z^2 - (sum z)^2 / length, never below 0 (rounding).
+      const s = sum[end]! - sum[start]!;
+      const cost = Math.max(0, sumSq[end]! - sumSq[start]! - (s * s) / (end - start));
+      const total = best[start]! + cost + penalty;
+      totals[k] = total;
       if (total < bestValue) {
         bestValue = total;
-        bestStart = candidates[k]!;
+        bestStart = start;
       }
-    });
+    }
     best[end] = bestValue;
     previous[end] = bestStart;
     // PELT pruning: a start already worse by the penalty can never become optimal again.
-    candidates = candidates.filter((_, k) => totals[k]! - penalty <= bestValue);
+    let kept = 0;
+    for (let k = 0; k < count; k++) {
+      if (totals[k]! - penalty <= bestValue) candidates[kept++] = candidates[k]!;
+    }
+    count = kept;
   }
   const starts: number[] = [];
   for (let at = previous[n]!; at > 0; at = previous[at]!) starts.push(at);
