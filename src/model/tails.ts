@@ -3,6 +3,7 @@
 import normalCdf from '@stdlib/stats-base-dists-normal-cdf';
 import studentTCdf from '@stdlib/stats-base-dists-t-cdf';
 import { InputError } from './input-error.js';
+import { seriesTwoSidedTail } from './student-tail-series.js';
 
 /** Which tail counts: the upper (higher is worse), the lower, or both. */
 export type Side = 'upper' | 'lower' | 'both';
@@ -21,11 +22,20 @@ export function normalTail(z: number, side: Side): number {
 
 /**
  * Tail probability of a Student-t statistic with nu degrees of freedom, sides as normalTail.
+ * Whole nu and a tail not too small take the finite series (seriesTwoSidedTail, A&S 26.7.3-4);
+ * the rest stdlib's incomplete-beta CDF, which keeps full precision far out in the tail.
  * @example studentTail(2.228, 10, 'both') // ≈ 0.05 (standard t table, nu = 10)
  */
 export function studentTail(t: number, nu: number, side: Side): number {
   if (Number.isNaN(t)) throw new InputError('a tail probability needs a number, got NaN');
   if (!(nu > 0)) throw new InputError(`a Student-t needs degrees of freedom above 0, got ${nu}`);
+  const both = seriesTwoSidedTail(t, nu);
+  if (both !== undefined) {
+    if (side === 'both') return both;
+    // One side is half the two-sided tail on the far side of 0, and 1 minus that on the near side.
+    const far = side === 'upper' ? t >= 0 : t <= 0;
+    return far ? both / 2 : 1 - both / 2;
+  }
   if (side === 'upper') return studentTCdf(-t, nu);
   if (side === 'lower') return studentTCdf(t, nu);
   return 2 * studentTCdf(-Math.abs(t), nu);
