@@ -54,10 +54,10 @@ export function createFileStore(path: string, series: string): HistoryStore {
     }
   }
 
-  function parseBytes(bytes: Buffer): History {
+  function parseText(text: string): History {
     let history: History;
     try {
-      history = parseHistory(bytes.toString('utf8'), path);
+      history = parseHistory(text, path);
     } catch (cause) {
       if (!(cause instanceof InputError)) throw cause;
       throw new StoreError(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
@@ -82,10 +82,13 @@ export function createFileStore(path: string, series: string): HistoryStore {
   return {
     describe: () => where,
     async load(): Promise<History> {
-      const bytes = await readBytes();
+      let bytes = await readBytes();
       if (bytes === undefined) return emptyHistory(series);
-      const history = parseBytes(bytes);
-      loaded.set(fingerprint(bytes), history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })));
+      const print = fingerprint(bytes);
+      const text = bytes.toString('utf8');
+      bytes = undefined; // the raw bytes (as large as the file) need not live through the parse
+      const history = parseText(text);
+      loaded.set(print, history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })));
       return history;
     },
     async save(h: History, readCount: number): Promise<void> {
@@ -117,11 +120,13 @@ export function createFileStore(path: string, series: string): HistoryStore {
    * nothing to h (the usual case: nobody else wrote), healing is known to return h: no parse.
    */
   async function healFromDisk(h: History): Promise<History> {
-    const bytes = await readBytes();
+    let bytes = await readBytes();
     if (bytes === undefined) return h;
     const runs = loaded.get(fingerprint(bytes));
     if (runs !== undefined && concurrentRuns(h, runs).length === 0) return h;
-    return healConcurrent(h, parseBytes(bytes));
+    const text = bytes.toString('utf8');
+    bytes = undefined;
+    return healConcurrent(h, parseText(text));
   }
 }
 
