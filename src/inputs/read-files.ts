@@ -5,7 +5,7 @@ import type { Aggregate, InputLimits } from '../config/types.js';
 import { InputError } from '../model/input-error.js';
 import { collectRun } from './collect.js';
 import { DEFAULT_LIMITS, limitError } from './limits.js';
-import { parseMetricText } from './parse.js';
+import { parseMetricTextLazily } from './parse-lazy.js';
 import { normalizePrefix, prefixed, splitPattern } from './pattern.js';
 import type { ReadResult, Run } from './run.js';
 
@@ -89,7 +89,7 @@ async function readOne(file: string, shown: string, format: string | undefined, 
     }
     throw new InputError(`cannot read the file: ${(error as Error).message}`, { where: shown, cause: error });
   }
-  return parseMetricText(text, shown, format, limits);
+  return parseMetricTextLazily(text, shown, format, limits);
 }
 
 function withPrefix(result: ReadResult, prefix: string): ReadResult {
