@@ -1,0 +1,339 @@
+export const id = 243;
+export const ids = [243];
+export const modules = {
+
+/***/ 10850:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   Pl: () => (/* binding */ readNumbers),
+/* harmony export */   hB: () => (/* binding */ readEntry),
+/* harmony export */   kw: () => (/* binding */ describeJson),
+/* harmony export */   u4: () => (/* binding */ isRecord)
+/* harmony export */ });
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(71184);
+
+/** A plain object (not an array, not null). */
+function isRecord(value) {
+    return typeof value === 'object' && value !== null && !Array.isArray(value);
+}
+/**
+ * Reads one list-form entry `{"name", "value" | "samples", "unit"?}` into the sink. Shared by the
+ * own JSON form and JSON Lines. Unknown keys are ignored, so newer writers stay readable.
+ * `place` is the cheap location stored with each reading; `where` finds the exact line:col and is
+ * called only when there is an error to report.
+ * @returns the metric name.
+ * @throws InputError for a missing or empty name, a missing value, both value and samples, or
+ *   values that are not finite numbers.
+ */
+function readEntry(entry, sink, place, where) {
+    if (!isRecord(entry)) {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`a metric entry must be an object, found ${describeJson(entry)}`, {
+            where: where(),
+            fix: 'write each metric as {"name": "...", "value": 1.5, "unit": "ms"}',
+        });
+    }
+    const { name, value, samples, unit } = entry;
+    if (typeof name !== 'string') {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric entry has ${name === undefined ? 'no "name"' : `a "name" that is ${describeJson(name)}`}`, {
+            where: where(),
+            fix: 'give every entry a "name" string',
+        });
+    }
+    if (unit !== undefined && typeof unit !== 'string') {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`"unit" of ${JSON.stringify(name)} is ${describeJson(unit)}, not a string`, {
+            where: where(),
+            fix: 'write the unit as a string such as "ms" or "B", or leave it out',
+        });
+    }
+    if (value !== undefined && samples !== undefined) {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric ${JSON.stringify(name)} has both "value" and "samples"`, {
+            where: where(),
+            fix: 'give either one "value" or a "samples" array, not both',
+        });
+    }
+    if (value === undefined && samples === undefined) {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric ${JSON.stringify(name)} has neither "value" nor "samples"`, {
+            where: where(),
+            fix: 'add "value": <number> or "samples": [<number>, ...]',
+        });
+    }
+    const values = value !== undefined ? [value] : samples;
+    if (!Array.isArray(values) || values.length === 0) {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`"samples" of ${JSON.stringify(name)} must be a non-empty array of numbers`, {
+            where: where(),
+            fix: 'write "samples": [<number>, ...] with at least one number',
+        });
+    }
+    readNumbers(name, values, unit, sink, place, where);
+    return name;
+}
+/** Adds each element of `values` as a sample; each must be a JSON number. */
+function readNumbers(name, values, unit, sink, place, where) {
+    for (const v of values) {
+        if (typeof v !== 'number') {
+            throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value of ${JSON.stringify(name)} is ${describeJson(v)}, not a number`, {
+                where: where(),
+                fix: 'write values as JSON numbers (no quotes), such as 412.5',
+            });
+        }
+        if (!Number.isFinite(v)) {
+            // JSON.parse turns 1e999 into Infinity.
+            throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value of ${JSON.stringify(name)} overflows to ${v}`, { where: where(), fix: 'write a finite number' });
+        }
+        sink.add(name, v, unit, place);
+    }
+}
+/** A short description of a JSON value for messages: `the string "12"`, `null`, `an object`. */
+function describeJson(value) {
+    if (value === null)
+        return 'null';
+    if (Array.isArray(value))
+        return 'an array';
+    if (typeof value === 'string')
+        return `the string ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}...` : value)}`;
+    if (typeof value === 'object')
+        return 'an object';
+    return `${typeof value} ${String(value)}`;
+}
+
+
+/***/ }),
+
+/***/ 77138:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+
+// EXPORTS
+__webpack_require__.d(__webpack_exports__, {
+  lk: () => (/* binding */ parseJsonText),
+  LF: () => (/* binding */ whereInJson)
+});
+
+// UNUSED EXPORTS: locateJsonError
+
+// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
+var dist = __webpack_require__(38815);
+// EXTERNAL MODULE: ./src/model/input-error.ts + 1 modules
+var input_error = __webpack_require__(71184);
+;// CONCATENATED MODULE: ./src/inputs/position.ts
+/**
+ * 1-based line and column of a UTF-16 offset in a text, as editors count them (a "\r\n" ends one line).
+ * O(offset).
+ * @example lineColumnAt('{\n  "a": x}', 9) // { line: 2, column: 8 }
+ */
+function lineColumnAt(text, offset) {
+    const end = Math.max(0, Math.min(offset, text.length));
+    let line = 1;
+    let lineStart = 0;
+    for (let i = text.indexOf('\n'); i >= 0 && i < end; i = text.indexOf('\n', i + 1)) {
+        line++;
+        lineStart = i + 1;
+    }
+    return { line, column: end - lineStart + 1 };
+}
+/** "file:line:col" for an offset. */
+function whereAt(file, text, offset) {
+    const { line, column } = lineColumnAt(text, offset);
+    return `${file}:${line}:${column}`;
+}
+
+;// CONCATENATED MODULE: ./src/inputs/json-text.ts
+
+
+
+/**
+ * JSON.parse with errors a user can act on: the message names the file and, where the engine tells
+ * the offset ("... at position 12"), the line and column. `line` is given when the text is one
+ * line of a larger file (JSON Lines).
+ * @throws InputError for malformed JSON.
+ * @example parseJsonText('{"a": 1}', 'm.json') // { a: 1 }
+ */
+function parseJsonText(text, file, line) {
+    try {
+        return JSON.parse(text);
+    }
+    catch (error) {
+        const message = error instanceof Error ? error.message : String(error);
+        const at = /at position (\d+)/.exec(message);
+        const offset = at ? Number(at[1]) : locateJsonError(text);
+        let where = file;
+        if (offset !== undefined) {
+            where = whereAt(file, text, offset);
+            if (line !== undefined)
+                where = shiftLine(where, line - 1);
+        }
+        else if (line !== undefined) {
+            where = `${file}:${line}`;
+        }
+        throw new input_error/* InputError */.d(`malformed JSON: ${message.replace(/ in JSON at position \d+.*$/, '')}`, {
+            where,
+            fix: 'check the file with a JSON validator; the metric file must be one JSON document',
+            cause: error,
+        });
+    }
+}
+/**
+ * "file:line:col" of the value at a path inside JSON text, found only when an error needs it (a
+ * second, position-keeping parse through the YAML parser, of which JSON is a subset). Falls back
+ * to "file (path)" when the position cannot be found.
+ */
+function whereInJson(text, file, path) {
+    const label = path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`)).join('');
+    try {
+        const doc = (0,dist/* parseDocument */.Tp)(text, { uniqueKeys: false, strict: false });
+        const node = doc.getIn(path, true);
+        if (node?.range)
+            return `${whereAt(file, text, node.range[0])} (${label.replace(/^\./, '')})`;
+    }
+    catch {
+        // The position is a courtesy; the message still names the path.
+    }
+    return `${file} (${label.replace(/^\./, '')})`;
+}
+/**
+ * Offset of the first character that makes `text` invalid JSON, for the engine messages that give
+ * none (Node 20: "Unexpected token 'N', ... is not valid JSON" for a NaN). Bisection on prefixes:
+ * a prefix either could still grow into valid JSON (it fails only at its end) or already holds the
+ * error, and once a prefix holds it every longer one does. O(n log n), on the error path only.
+ */
+function locateJsonError(text) {
+    const broken = (length) => {
+        try {
+            JSON.parse(text.slice(0, length));
+            return false;
+        }
+        catch (error) {
+            const message = error instanceof Error ? error.message : '';
+            if (/end of JSON input/.test(message))
+                return false;
+            const at = /at position (\d+)/.exec(message);
+            return !(at && Number(at[1]) >= length);
+        }
+    };
+    if (!broken(text.length))
+        return undefined;
+    let low = 0; // not broken
+    let high = text.length; // broken
+    while (high - low > 1) {
+        const mid = (low + high) >>> 1;
+        if (broken(mid))
+            high = mid;
+        else
+            low = mid;
+    }
+    return high - 1;
+}
+function shiftLine(where, lineOffset) {
+    return where.replace(/:(\d+):(\d+)$/, (_m, line, col) => `:${Number(line) + lineOffset}:${col}`);
+}
+
+
+/***/ }),
+
+/***/ 243:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+__webpack_require__.r(__webpack_exports__);
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   readJsonLines: () => (/* binding */ readJsonLines)
+/* harmony export */ });
+/* harmony import */ var _json_entry_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(10850);
+/* harmony import */ var _json_text_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(77138);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(56497);
+/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(17829);
+
+
+
+
+/**
+ * Reads JSON Lines: one `{"name", "value", "unit"?}` object per line (a `"samples"` array is also
+ * accepted, as in the own JSON form). Blank lines are skipped. A name on several lines is several
+ * samples of one metric.
+ * @throws InputError naming file:line (and column, where the JSON engine gives one) for a line that
+ *   is not JSON or not a valid entry.
+ * @example readJsonLines('{"name":"a","value":1}\n', 'm.jsonl').readings[0] // { name: 'a', value: 1, where: 'm.jsonl:1' }
+ */
+function readJsonLines(text, file, limits = _limits_js__WEBPACK_IMPORTED_MODULE_2__/* .DEFAULT_LIMITS */ .dR) {
+    (0,_limits_js__WEBPACK_IMPORTED_MODULE_2__/* .checkLineLengths */ .Ak)(text, file, limits);
+    const sink = new _reading_sink_js__WEBPACK_IMPORTED_MODULE_3__/* .ReadingSink */ .I(file, limits);
+    const lines = text.split('\n');
+    lines.forEach((line, i) => {
+        if (line.trim() === '')
+            return;
+        const place = `${file}:${i + 1}`;
+        const entry = (0,_json_text_js__WEBPACK_IMPORTED_MODULE_1__/* .parseJsonText */ .lk)(line, file, i + 1);
+        (0,_json_entry_js__WEBPACK_IMPORTED_MODULE_0__/* .readEntry */ .hB)(entry, sink, place, () => place);
+    });
+    return sink.result;
+}
+
+
+/***/ }),
+
+/***/ 17829:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   I: () => (/* binding */ ReadingSink)
+/* harmony export */ });
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(71184);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(56497);
+/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(85585);
+
+
+
+/**
+ * Where every reader puts what it finds, so that the checks every format needs live in one place:
+ * the metric name rule (names.ts), finite values, and the `limits.max-metrics` cap on distinct names,
+ * enforced while parsing so a huge file is refused before it fills memory.
+ */
+class ReadingSink {
+    file;
+    limits;
+    result = { readings: [], notFitted: new Map(), meta: new Map() };
+    names = new Set();
+    constructor(file, limits) {
+        this.file = file;
+        this.limits = limits;
+    }
+    /** Adds one sample. @throws InputError for a bad name or unit, a non-finite value or too many metrics. */
+    add(name, value, unit, where) {
+        (0,_names_js__WEBPACK_IMPORTED_MODULE_2__/* .checkMetricName */ .WO)(name, where);
+        if (!Number.isFinite(value)) {
+            throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value of ${JSON.stringify(name)} is ${value}, not a finite number`, {
+                where,
+                fix: 'leave out metrics that were not measured instead of writing NaN or Infinity',
+            });
+        }
+        if (unit !== undefined)
+            (0,_names_js__WEBPACK_IMPORTED_MODULE_2__/* .checkUnit */ .lg)(unit, where);
+        this.count(name, where);
+        const reading = unit === undefined || unit === '' ? { name, value, where } : { name, value, unit, where };
+        this.result.readings.push(reading);
+    }
+    /** Records a name that is kept but never fitted (a skipped test), with the reason. */
+    skip(name, reason, where) {
+        (0,_names_js__WEBPACK_IMPORTED_MODULE_2__/* .checkMetricName */ .WO)(name, where);
+        this.count(name, where);
+        this.result.notFitted.set(name, reason);
+    }
+    /** Run metadata; the first value of a key wins. */
+    meta(key, value) {
+        if (!this.result.meta.has(key))
+            this.result.meta.set(key, value);
+    }
+    count(name, where) {
+        if (this.names.has(name))
+            return;
+        if (this.names.size >= this.limits.maxMetrics) {
+            throw (0,_limits_js__WEBPACK_IMPORTED_MODULE_1__/* .limitError */ .yT)('maxMetrics', this.limits.maxMetrics, where, `${this.file} has more than ${this.limits.maxMetrics} metrics`);
+        }
+        this.names.add(name);
+    }
+}
+
+
+/***/ })
+
+};

@@ -1,0 +1,427 @@
+export const id = 268;
+export const ids = [268];
+export const modules = {
+
+/***/ 86783:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   Z9: () => (/* binding */ loadConfig)
+/* harmony export */ });
+/* unused harmony exports LOOKED_UP_CONFIGS, anyPresent */
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _config_defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(31954);
+
+
+
+/**
+ * Where a config is looked for without --config: the same list as DEFAULT_CONFIG_PATHS in
+ * src/config/read.ts (test/cli/load-config.test.ts keeps them equal), repeated here because
+ * importing read.ts loads the YAML parser and the schema validator.
+ */
+const LOOKED_UP_CONFIGS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+/**
+ * The config for this invocation: `--config FILE` must exist (InputError naming it otherwise);
+ * without it, `.github/bellgate.yml` (or `.yaml`) in the working folder is used when present, else the defaults.
+ * The config reader (YAML, schema validation: ~40 ms of start-up) is imported only when there is a file to read.
+ * @throws InputError for a missing explicit file or an invalid config (with file:line:col).
+ * @example await loadConfig(ctx, undefined) // the defaults in a folder without .github/bellgate.yml
+ */
+async function loadConfig(ctx, path) {
+    if (path === undefined && !(await anyPresent(ctx.io.cwd, LOOKED_UP_CONFIGS)))
+        return (0,_config_defaults_js__WEBPACK_IMPORTED_MODULE_2__/* .defaultConfig */ .sb)();
+    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(208), __webpack_require__.e(0)]).then(__webpack_require__.bind(__webpack_require__, 62000));
+    // The path goes in as the user wrote it, resolved against our cwd by readConfigFile, so its
+    // "file:line:col" messages point where the user looks.
+    return readConfigFile(path, { cwd: ctx.io.cwd, required: path !== undefined });
+}
+/**
+ * Whether any of the paths might hold a config: true unless every one is plainly absent (ENOENT,
+ * ENOTDIR), so a folder or an unreadable file still reaches readConfigFile and its clear refusal.
+ */
+async function anyPresent(cwd, paths) {
+    for (const p of paths) {
+        try {
+            await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.stat)((0,node_path__WEBPACK_IMPORTED_MODULE_1__.resolve)(cwd, p));
+            return true;
+        }
+        catch (error) {
+            const code = error.code;
+            if (code !== 'ENOENT' && code !== 'ENOTDIR')
+                return true;
+        }
+    }
+    return false;
+}
+
+
+/***/ }),
+
+/***/ 15881:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   v: () => (/* binding */ recordRun)
+/* harmony export */ });
+/* harmony import */ var _history_merge_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(57822);
+
+/**
+ * Appends one run to the history (a run with the same id is replaced), trims to the newest `keep`
+ * runs — the only deletion — and saves through the store, which refuses to lose runs otherwise.
+ * @returns the history as saved.
+ * @throws StoreError when the store cannot write.
+ */
+async function recordRun(store, history, info, run, keep) {
+    const next = (0,_history_merge_js__WEBPACK_IMPORTED_MODULE_0__/* .trimHistory */ .lj)((0,_history_merge_js__WEBPACK_IMPORTED_MODULE_0__/* .appendRun */ .ah)(history, info, run), keep);
+    await store.save(next, history.runs.length);
+    return next;
+}
+
+
+/***/ }),
+
+/***/ 95795:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   g: () => (/* binding */ runInfoFrom)
+/* harmony export */ });
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+
+/** ISO-8601 date-time with a zone, e.g. 2026-05-04T10:20:30Z or 2026-05-04T10:20:30.5+02:00. */
+const ISO_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/;
+/**
+ * Describes the run being recorded. Flags win; in GitHub Actions the standard variables fill the
+ * gaps (id = GITHUB_RUN_ID-GITHUB_RUN_ATTEMPT, so a re-run replaces rather than doubles); else the
+ * id is "local-" plus the time, and the time is now.
+ * @throws InputError when --time is not an ISO-8601 date-time with a zone, or --id is empty.
+ * @example runInfoFrom(ctx, { id: '77-1', time: '2026-05-04T10:20:30Z' }) // { id: '77-1', time: '2026-05-04T10:20:30.000Z', ... }
+ */
+function runInfoFrom(ctx, options) {
+    const env = ctx.io.env;
+    let time;
+    if (options.time !== undefined) {
+        const ms = Date.parse(options.time);
+        if (!ISO_TIME.test(options.time) || !Number.isFinite(ms)) {
+            throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`--time "${options.time}" is not an ISO-8601 date-time`, {
+                where: '--time',
+                fix: 'write it like 2026-05-04T10:20:30Z (a zone, Z or +hh:mm, is required)',
+            });
+        }
+        time = new Date(ms).toISOString();
+    }
+    else {
+        time = ctx.now().toISOString();
+    }
+    const ciId = env.GITHUB_RUN_ID ? `${env.GITHUB_RUN_ID}-${env.GITHUB_RUN_ATTEMPT || '1'}` : undefined;
+    const id = options.id ?? ciId ?? `local-${time}`;
+    if (id.trim() === '') {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('--id is empty', { where: '--id', fix: 'give a run id such as "1234-1", or leave the flag out' });
+    }
+    const info = { id, time };
+    const sha = options.sha ?? (env.GITHUB_SHA || undefined);
+    const ref = options.ref ?? (env.GITHUB_REF || undefined);
+    const event = env.GITHUB_EVENT_NAME || undefined;
+    if (sha !== undefined)
+        info.sha = sha;
+    if (ref !== undefined)
+        info.ref = ref;
+    if (event !== undefined)
+        info.event = event;
+    return info;
+}
+
+
+/***/ }),
+
+/***/ 15779:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+__webpack_require__.r(__webpack_exports__);
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   runRecord: () => (/* binding */ runRecord)
+/* harmony export */ });
+/* harmony import */ var _load_config_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(86783);
+/* harmony import */ var _load_run_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(35946);
+/* harmony import */ var _open_history_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(14695);
+/* harmony import */ var _record_run_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(15881);
+/* harmony import */ var _run_info_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(95795);
+
+
+
+
+
+/**
+ * The work of `bellgate record` (loaded only when that command runs): appends the run to the
+ * history file and says how many runs are kept.
+ * @throws InputError (bad files, flags), StoreError (history unreadable or unwritable).
+ * @example await runRecord(ctx, { metrics: ['bench.json'], history: 'h.json', series: 'default' })
+ */
+async function runRecord(ctx, options) {
+    const config = await (0,_load_config_js__WEBPACK_IMPORTED_MODULE_0__/* .loadConfig */ .Z9)(ctx, options.config);
+    const run = await (0,_load_run_js__WEBPACK_IMPORTED_MODULE_1__/* .loadRun */ .S)(ctx, config, options);
+    const { history, store } = await (0,_open_history_js__WEBPACK_IMPORTED_MODULE_2__/* .openHistory */ .j)(ctx, options.history, options.series);
+    const info = (0,_run_info_js__WEBPACK_IMPORTED_MODULE_4__/* .runInfoFrom */ .g)(ctx, options);
+    // openHistory always returns a store when a path is given; the guard keeps the types honest.
+    if (!store)
+        return;
+    const saved = await (0,_record_run_js__WEBPACK_IMPORTED_MODULE_3__/* .recordRun */ .v)(store, history, info, run, config.keep);
+    const replaced = history.runs.some((r) => r.id === info.id) ? ' (replacing the earlier run with this id)' : '';
+    ctx.io.stdout(`recorded run ${info.id} with ${run.metrics.size} metrics in ${store.describe()}${replaced}; ${saved.runs.length} runs kept\n`);
+}
+
+
+/***/ }),
+
+/***/ 31954:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   sb: () => (/* binding */ defaultConfig)
+/* harmony export */ });
+/* unused harmony exports DEFAULT_SETTINGS, DEFAULT_LIMITS, DEFAULT_KEEP */
+/**
+ * Settings of a metric that no rule touches (DESIGN.md, "Config file"). A 1% tolerance keeps a
+ * metric with a tiny spread from failing on a change nobody would act on.
+ */
+const DEFAULT_SETTINGS = Object.freeze({
+    cutoff: 0.01,
+    worse: 'higher',
+    tolerance: Object.freeze({ kind: 'percent', amount: 0.01 }),
+    resolution: 0,
+    window: 60,
+    minRuns: 8,
+    transform: 'none',
+    fit: 'mle',
+    uncertainty: 'predictive',
+    ignore: false,
+    aggregate: 'median',
+    changePoints: true,
+});
+/** Limits that fit ordinary CI output: 64 MiB files, 1 MiB lines, 100,000 metrics a run. */
+const DEFAULT_LIMITS = Object.freeze({
+    maxFileBytes: 64 * 1024 * 1024,
+    maxLineLength: 1024 * 1024,
+    maxMetrics: 100_000,
+});
+/** Newest runs kept in a history document. */
+const DEFAULT_KEEP = 500;
+/**
+ * The configuration used when there is no file (or it is empty): a fresh, mutable copy each call.
+ * @example defaultConfig().defaults.cutoff // 0.01
+ */
+function defaultConfig() {
+    return {
+        defaults: { ...DEFAULT_SETTINGS, tolerance: { ...DEFAULT_SETTINGS.tolerance } },
+        rules: [],
+        groups: [],
+        family: 'none',
+        keep: DEFAULT_KEEP,
+        limits: { ...DEFAULT_LIMITS },
+        source: '<defaults>',
+    };
+}
+
+
+/***/ }),
+
+/***/ 80517:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   M: () => (/* binding */ isLiteralGlob),
+/* harmony export */   t: () => (/* binding */ compileGlobs)
+/* harmony export */ });
+/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(14006);
+/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(picomatch__WEBPACK_IMPORTED_MODULE_0__);
+
+// Metric names are not paths: a leading '.' is an ordinary character (dot: true), and '\' is
+// never a separator, whatever the operating system (windows: false).
+const OPTIONS = { dot: true, windows: false };
+const cache = new WeakMap();
+/**
+ * Compiles a rule's globs (picomatch syntax) into one matcher: a name matches when it matches at
+ * least one plain glob and no glob starting with '!' (only '!' globs: everything but those).
+ * Metric names contain '/', and `*` stays within one '/' segment while `**` crosses segments:
+ * `throughput/*` matches `throughput/home` but not `throughput/api/v2`; `size/**` matches both
+ * `size/app.js` and `size/assets/logo.svg`. Compiled once per globs array (WeakMap cache).
+ * Throws picomatch's error for a pattern it cannot compile (load.ts reports it with line:column).
+ * @example compileGlobs(['latency/*', '!latency/calibrate'])('latency/render') // true
+ */
+function compileGlobs(globs) {
+    const cached = cache.get(globs);
+    if (cached)
+        return cached;
+    const plain = globs.filter((g) => !g.startsWith('!'));
+    const negated = globs.filter((g) => g.startsWith('!')).map((g) => g.slice(1));
+    const include = plain.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_0___default()(plain, OPTIONS) : () => true;
+    const exclude = negated.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_0___default()(negated, OPTIONS) : () => false;
+    const matcher = (name) => include(name) && !exclude(name);
+    cache.set(globs, matcher);
+    return matcher;
+}
+/**
+ * True when the glob has no wildcard or brace characters, so it names exactly one metric.
+ * @example isLiteralGlob('latency/calibrate') // true
+ */
+function isLiteralGlob(glob) {
+    return !picomatch__WEBPACK_IMPORTED_MODULE_0___default().scan(glob).isGlob && !glob.startsWith('!');
+}
+
+
+/***/ }),
+
+/***/ 85413:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   R: () => (/* binding */ groupFor),
+/* harmony export */   z: () => (/* binding */ settingsFor)
+/* harmony export */ });
+/* harmony import */ var _glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(80517);
+
+/**
+ * The settings that decide one metric: the defaults, then every `metrics:` rule whose globs match
+ * the name, in file order, so a later match overrides an earlier one key by key. Pure.
+ * Globs are picomatch globs over the whole name; `*` does not cross '/', `**` does; a glob starting
+ * with '!' excludes (see compileGlobs). A metric is never relative to itself: when the resolved
+ * `relative-to` names the metric (the calibration benchmark matched by its own rule), it is dropped.
+ * @example settingsFor(config, 'throughput/home').worse // 'lower' with the rule { match: 'throughput/*', worse: lower }
+ */
+function settingsFor(config, metric) {
+    const settings = { ...config.defaults };
+    for (const rule of config.rules) {
+        if ((0,_glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__/* .compileGlobs */ .t)(rule.match)(metric))
+            Object.assign(settings, rule.settings);
+    }
+    if (settings.relativeTo === metric)
+        delete settings.relativeTo;
+    return settings;
+}
+/**
+ * The group a metric belongs to: the first `groups:` entry whose globs match, or undefined.
+ * @example groupFor(config, 'latency/render')?.name // 'latency' with the group { name: latency, match: 'latency/*' }
+ */
+function groupFor(config, metric) {
+    return config.groups.find((group) => (0,_glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__/* .compileGlobs */ .t)(group.match)(metric));
+}
+
+
+/***/ }),
+
+/***/ 90071:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   J: () => (/* binding */ median),
+/* harmony export */   h: () => (/* binding */ medianAbsoluteDeviation)
+/* harmony export */ });
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+
+/** A sorted copy, rejecting what has no median (the input is not reordered). */
+function sortedCopy(values) {
+    const n = values.length;
+    if (n === 0)
+        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('cannot take the median of an empty set of values');
+    for (let i = 0; i < n; i++) {
+        const x = values[i];
+        if (!Number.isFinite(x))
+            throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value ${x} at position ${i + 1} is not a finite number`);
+    }
+    // A Float64Array sorts numerically (a plain array would sort as strings).
+    return Float64Array.from(values).sort();
+}
+/**
+ * Median of the values. O(n log n). Throws InputError on an empty input or a non-finite value.
+ * @example median([3, 1, 2, 10]) // 2.5
+ */
+function median(values) {
+    const sorted = sortedCopy(values);
+    const n = sorted.length;
+    const half = n >> 1;
+    return n % 2 === 1 ? sorted[half] : (sorted[half - 1] + sorted[half]) / 2;
+}
+/**
+ * Median absolute deviation from the median (unscaled). Multiply by 1.4826 for a consistent
+ * estimate of sigma under a Gaussian (Rousseeuw & Croux 1993; 1.4826 = 1 / Phi^-1(3/4)).
+ * Throws InputError on an empty input or a non-finite value.
+ * @example medianAbsoluteDeviation([1, 2, 3, 4, 100]) // 1
+ */
+function medianAbsoluteDeviation(values) {
+    const centre = median(values);
+    // A plain loop: Float64Array.from with a map function takes a slow generic path in V8.
+    const deviations = new Float64Array(values.length);
+    for (let i = 0; i < values.length; i++)
+        deviations[i] = Math.abs(values[i] - centre);
+    return median(deviations);
+}
+
+
+/***/ }),
+
+/***/ 88884:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   R7: () => (/* binding */ meanAndSquares),
+/* harmony export */   i2: () => (/* binding */ mean)
+/* harmony export */ });
+/* unused harmony export variance */
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+
+/**
+ * Mean and sum of squared deviations by the corrected two-pass algorithm (Chan, Golub & LeVeque,
+ * "Algorithms for computing the sample variance", 1983): the second pass subtracts the mean first,
+ * and the small correction term removes the rounding left in the mean. Large offsets (values like
+ * 1e13 + small noise, NIST NumAcc4) keep their precision, which a one-pass sum of squares loses.
+ * O(n) time, O(1) space. Throws InputError on an empty input or a non-finite value.
+ *
+ * @example meanAndSquares([1, 2, 3]) // { n: 3, mean: 2, squares: 2 }
+ */
+function meanAndSquares(values) {
+    const n = values.length;
+    if (n === 0)
+        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('cannot fit an empty set of values');
+    let sum = 0;
+    for (let i = 0; i < n; i++) {
+        const x = values[i];
+        if (!Number.isFinite(x))
+            throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value ${x} at position ${i + 1} is not a finite number`);
+        sum += x;
+    }
+    const first = sum / n;
+    let squares = 0;
+    let drift = 0;
+    for (let i = 0; i < n; i++) {
+        const d = values[i] - first;
+        squares += d * d;
+        drift += d;
+    }
+    squares -= (drift * drift) / n;
+    return { n, mean: first + drift / n, squares: Math.max(0, squares) };
+}
+/** Arithmetic mean (two-pass, see meanAndSquares). @example mean([2, 4]) // 3 */
+function mean(values) {
+    return meanAndSquares(values).mean;
+}
+/**
+ * Variance dividing by n ("mle", the maximum-likelihood estimate) or by n - 1 ("unbiased").
+ * @example variance([1, 2, 3, 4], 'mle') // 1.25
+ */
+function variance(values, divisor) {
+    const { n, squares } = meanAndSquares(values);
+    if (divisor === 'unbiased') {
+        if (n < 2)
+            throw new InputError('the unbiased variance needs at least 2 values');
+        return squares / (n - 1);
+    }
+    return squares / n;
+}
+
+
+/***/ })
+
+};
