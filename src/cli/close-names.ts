@@ -1,3 +1,5 @@
+import { editDistance } from '../config/did-you-mean.js';
+
 /**
  * Names near a mistyped one, for "did you mean" hints: by Levenshtein edit distance (at most a
  * third of the name's length), plus names that contain the typed text. At most `limit`, nearest first.
@@ -17,16 +19,4 @@ export function closeNames(typed: string, names: Iterable<string>, limit = 3): s
   return scored.slice(0, limit).map((s) => s.name);
 }
 
-/** Levenshtein distance with one rolling row. */
-export function editDistance(a: string, b: string): number {
-  let row = Array.from({ length: b.length + 1 }, (_, j) => j);
-  for (let i = 1; i <= a.length; i++) {
-    const next = [i];
-    for (let j = 1; j <= b.length; j++) {
-      const cost = a[i - 1] === b[j - 1] ? 0 : 1;
-      next[j] = Math.min((row[j] ?? 0) + 1, (next[j - 1] ?? 0) + 1, (row[j - 1] ?? 0) + cost);
-    }
-    row = next;
-  }
-  return row[b.length] ?? 0;
-}
+export { editDistance };

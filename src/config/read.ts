@@ -5,8 +5,9 @@ import { defaultConfig } from './defaults.js';
 import { parseConfig } from './load.js';
 import type { Config } from './types.js';
 
-/** Where a config is looked for when none is named, relative to the working folder. */
-export const DEFAULT_CONFIG_PATHS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+import { DEFAULT_CONFIG_PATHS } from './locate.js';
+
+export { DEFAULT_CONFIG_PATHS };
 
 /** Largest config file read, in bytes; a real one is a few kilobytes. */
 export const MAX_CONFIG_FILE_BYTES = 1024 * 1024;
