@@ -802,14 +802,16 @@ function parseConfig(text, source) {
     return built.config;
 }
 
+// EXTERNAL MODULE: ./src/config/locate.ts
+var locate = __webpack_require__(55562);
 ;// CONCATENATED MODULE: ./src/config/read.ts
 
 
 
 
 
-/** Where a config is looked for when none is named, relative to the working folder. */
-const DEFAULT_CONFIG_PATHS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+
+
 /** Largest config file read, in bytes; a real one is a few kilobytes. */
 const MAX_CONFIG_FILE_BYTES = 1024 * 1024;
 /**
@@ -823,7 +825,7 @@ const MAX_CONFIG_FILE_BYTES = 1024 * 1024;
 async function readConfigFile(path, options = {}) {
     const cwd = options.cwd ?? process.cwd();
     const required = options.required ?? path !== undefined;
-    const candidates = path === undefined ? DEFAULT_CONFIG_PATHS : [path];
+    const candidates = path === undefined ? locate/* DEFAULT_CONFIG_PATHS */._X : [path];
     for (const candidate of candidates) {
         const text = await readText(candidate, (0,external_node_path_.resolve)(cwd, candidate));
         if (text !== undefined)

@@ -100,6 +100,60 @@ function isLiteralGlob(glob) {
 
 /***/ }),
 
+/***/ 55562:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   _X: () => (/* binding */ DEFAULT_CONFIG_PATHS),
+/* harmony export */   yH: () => (/* binding */ loadConfigLazily)
+/* harmony export */ });
+/* unused harmony export anyConfigPresent */
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(31954);
+
+
+
+/** Where a config is looked for when none is named, relative to the working folder. */
+const DEFAULT_CONFIG_PATHS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+/**
+ * Whether any of the paths might hold a config: true unless every one is plainly absent (ENOENT,
+ * ENOTDIR), so a folder or an unreadable file still reaches readConfigFile and its clear refusal.
+ */
+async function anyConfigPresent(cwd, paths = DEFAULT_CONFIG_PATHS) {
+    for (const p of paths) {
+        try {
+            await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.stat)((0,node_path__WEBPACK_IMPORTED_MODULE_1__.resolve)(cwd, p));
+            return true;
+        }
+        catch (error) {
+            const code = error.code;
+            if (code !== 'ENOENT' && code !== 'ENOTDIR')
+                return true;
+        }
+    }
+    return false;
+}
+/**
+ * The config for a run: a named file must exist (unless `required` is false); without a name,
+ * `.github/bellgate.yml` (or `.yaml`) is read when present, else the defaults are used. The reader
+ * (YAML and schema validation, ~40 ms of start-up) is imported only when there is a file to read;
+ * this module itself loads neither.
+ * @throws InputError for a missing named file or an invalid config (with file:line:col).
+ * @example await loadConfigLazily(undefined, '/repo') // the defaults in a folder without a config file
+ */
+async function loadConfigLazily(path, cwd, required = path !== undefined) {
+    if (path === undefined && !(await anyConfigPresent(cwd)))
+        return (0,_defaults_js__WEBPACK_IMPORTED_MODULE_2__/* .defaultConfig */ .sb)();
+    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(226)]).then(__webpack_require__.bind(__webpack_require__, 25226));
+    return readConfigFile(path, { cwd, required });
+}
+
+
+/***/ }),
+
 /***/ 84236:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
@@ -3920,45 +3974,20 @@ function describeError(error) {
     return String(error);
 }
 
-// EXTERNAL MODULE: ./src/config/defaults.ts
-var defaults = __webpack_require__(31954);
+// EXTERNAL MODULE: ./src/config/locate.ts
+var locate = __webpack_require__(55562);
 ;// CONCATENATED MODULE: ./src/github/load-config.ts
 
-
-
-/**
- * Where a config is looked for when the `config` input is left at its default: the same list as
- * DEFAULT_CONFIG_PATHS in src/config/read.ts (test/github/load-config.test.ts keeps them equal),
- * repeated here because importing read.ts loads the YAML parser and the schema validator.
- */
-const LOOKED_UP_CONFIGS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+/** Where a config is looked for when the `config` input is left at its default (src/config/locate.ts). */
+const LOOKED_UP_CONFIGS = (/* unused pure expression or super */ null && (DEFAULT_CONFIG_PATHS));
 /**
  * The action's config: a named file must exist; left at the default, `.github/bellgate.yml` (or
- * `.yaml`) is read when present, else the defaults are used without loading the config reader
- * (YAML and schema validation, ~40 ms of a PR check's start-up).
+ * `.yaml`) is read when present, else the defaults are used without loading the config reader.
  * @throws InputError for a missing named file or an invalid config (with file:line:col).
  * @example await loadActionConfig(undefined, '/home/runner/work/repo') // defaults without a config file
  */
 async function loadActionConfig(path, cwd) {
-    if (path === undefined && !(await anyPresent(cwd)))
-        return (0,defaults/* defaultConfig */.sb)();
-    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(226)]).then(__webpack_require__.bind(__webpack_require__, 25226));
-    return readConfigFile(path, { cwd });
-}
-/** True unless every looked-up path is plainly absent (ENOENT, ENOTDIR): anything else goes to readConfigFile's refusal. */
-async function anyPresent(cwd) {
-    for (const p of LOOKED_UP_CONFIGS) {
-        try {
-            await (0,promises_.stat)((0,external_node_path_.resolve)(cwd, p));
-            return true;
-        }
-        catch (error) {
-            const code = error.code;
-            if (code !== 'ENOENT' && code !== 'ENOTDIR')
-                return true;
-        }
-    }
-    return false;
+    return (0,locate/* loadConfigLazily */.yH)(path, cwd, path !== undefined);
 }
 
 ;// CONCATENATED MODULE: ./src/github/event-policy.ts

@@ -8,21 +8,22 @@ export const modules = {
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   readConfigFile: () => (/* binding */ readConfigFile)
 /* harmony export */ });
-/* unused harmony exports DEFAULT_CONFIG_PATHS, MAX_CONFIG_FILE_BYTES */
+/* unused harmony export MAX_CONFIG_FILE_BYTES */
 /* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
 /* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
 /* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(38250);
 /* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(31954);
-/* harmony import */ var _load_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(10208);
+/* harmony import */ var _load_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(95446);
+/* harmony import */ var _locate_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(55562);
 
 
 
 
 
-/** Where a config is looked for when none is named, relative to the working folder. */
-const DEFAULT_CONFIG_PATHS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+
+
 /** Largest config file read, in bytes; a real one is a few kilobytes. */
 const MAX_CONFIG_FILE_BYTES = 1024 * 1024;
 /**
@@ -36,7 +37,7 @@ const MAX_CONFIG_FILE_BYTES = 1024 * 1024;
 async function readConfigFile(path, options = {}) {
     const cwd = options.cwd ?? process.cwd();
     const required = options.required ?? path !== undefined;
-    const candidates = path === undefined ? DEFAULT_CONFIG_PATHS : [path];
+    const candidates = path === undefined ? _locate_js__WEBPACK_IMPORTED_MODULE_5__/* .DEFAULT_CONFIG_PATHS */ ._X : [path];
     for (const candidate of candidates) {
         const text = await readText(candidate, (0,node_path__WEBPACK_IMPORTED_MODULE_1__.resolve)(cwd, candidate));
         if (text !== undefined)

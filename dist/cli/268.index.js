@@ -6,55 +6,23 @@ export const modules = {
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   Z9: () => (/* binding */ loadConfig)
+/* harmony export */   Z: () => (/* binding */ loadConfig)
 /* harmony export */ });
-/* unused harmony exports LOOKED_UP_CONFIGS, anyPresent */
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _config_defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(31954);
+/* unused harmony export LOOKED_UP_CONFIGS */
+/* harmony import */ var _config_locate_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(55562);
 
-
-
-/**
- * Where a config is looked for without --config: the same list as DEFAULT_CONFIG_PATHS in
- * src/config/read.ts (test/cli/load-config.test.ts keeps them equal), repeated here because
- * importing read.ts loads the YAML parser and the schema validator.
- */
-const LOOKED_UP_CONFIGS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+/** Where a config is looked for without --config (src/config/locate.ts). */
+const LOOKED_UP_CONFIGS = (/* unused pure expression or super */ null && (DEFAULT_CONFIG_PATHS));
 /**
  * The config for this invocation: `--config FILE` must exist (InputError naming it otherwise);
- * without it, `.github/bellgate.yml` (or `.yaml`) in the working folder is used when present, else the defaults.
- * The config reader (YAML, schema validation: ~40 ms of start-up) is imported only when there is a file to read.
+ * without it, `.github/bellgate.yml` (or `.yaml`) in the working folder is used when present, else
+ * the defaults. The path goes in as the user wrote it, resolved against our cwd by readConfigFile,
+ * so its "file:line:col" messages point where the user looks.
  * @throws InputError for a missing explicit file or an invalid config (with file:line:col).
  * @example await loadConfig(ctx, undefined) // the defaults in a folder without .github/bellgate.yml
  */
 async function loadConfig(ctx, path) {
-    if (path === undefined && !(await anyPresent(ctx.io.cwd, LOOKED_UP_CONFIGS)))
-        return (0,_config_defaults_js__WEBPACK_IMPORTED_MODULE_2__/* .defaultConfig */ .sb)();
-    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(208), __webpack_require__.e(0)]).then(__webpack_require__.bind(__webpack_require__, 62000));
-    // The path goes in as the user wrote it, resolved against our cwd by readConfigFile, so its
-    // "file:line:col" messages point where the user looks.
-    return readConfigFile(path, { cwd: ctx.io.cwd, required: path !== undefined });
-}
-/**
- * Whether any of the paths might hold a config: true unless every one is plainly absent (ENOENT,
- * ENOTDIR), so a folder or an unreadable file still reaches readConfigFile and its clear refusal.
- */
-async function anyPresent(cwd, paths) {
-    for (const p of paths) {
-        try {
-            await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.stat)((0,node_path__WEBPACK_IMPORTED_MODULE_1__.resolve)(cwd, p));
-            return true;
-        }
-        catch (error) {
-            const code = error.code;
-            if (code !== 'ENOENT' && code !== 'ENOTDIR')
-                return true;
-        }
-    }
-    return false;
+    return (0,_config_locate_js__WEBPACK_IMPORTED_MODULE_0__/* .loadConfigLazily */ .yH)(path, ctx.io.cwd);
 }
 
 
@@ -161,7 +129,7 @@ __webpack_require__.r(__webpack_exports__);
  * @example await runRecord(ctx, { metrics: ['bench.json'], history: 'h.json', series: 'default' })
  */
 async function runRecord(ctx, options) {
-    const config = await (0,_load_config_js__WEBPACK_IMPORTED_MODULE_0__/* .loadConfig */ .Z9)(ctx, options.config);
+    const config = await (0,_load_config_js__WEBPACK_IMPORTED_MODULE_0__/* .loadConfig */ .Z)(ctx, options.config);
     const run = await (0,_load_run_js__WEBPACK_IMPORTED_MODULE_1__/* .loadRun */ .S)(ctx, config, options);
     const { history, store } = await (0,_open_history_js__WEBPACK_IMPORTED_MODULE_2__/* .openHistory */ .j)(ctx, options.history, options.series);
     const info = (0,_run_info_js__WEBPACK_IMPORTED_MODULE_4__/* .runInfoFrom */ .g)(ctx, options);
@@ -269,6 +237,60 @@ function compileGlobs(globs) {
  */
 function isLiteralGlob(glob) {
     return !picomatch__WEBPACK_IMPORTED_MODULE_0___default().scan(glob).isGlob && !glob.startsWith('!');
+}
+
+
+/***/ }),
+
+/***/ 55562:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   _X: () => (/* binding */ DEFAULT_CONFIG_PATHS),
+/* harmony export */   yH: () => (/* binding */ loadConfigLazily)
+/* harmony export */ });
+/* unused harmony export anyConfigPresent */
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(31954);
+
+
+
+/** Where a config is looked for when none is named, relative to the working folder. */
+const DEFAULT_CONFIG_PATHS = ['.github/bellgate.yml', '.github/bellgate.yaml'];
+/**
+ * Whether any of the paths might hold a config: true unless every one is plainly absent (ENOENT,
+ * ENOTDIR), so a folder or an unreadable file still reaches readConfigFile and its clear refusal.
+ */
+async function anyConfigPresent(cwd, paths = DEFAULT_CONFIG_PATHS) {
+    for (const p of paths) {
+        try {
+            await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_0__.stat)((0,node_path__WEBPACK_IMPORTED_MODULE_1__.resolve)(cwd, p));
+            return true;
+        }
+        catch (error) {
+            const code = error.code;
+            if (code !== 'ENOENT' && code !== 'ENOTDIR')
+                return true;
+        }
+    }
+    return false;
+}
+/**
+ * The config for a run: a named file must exist (unless `required` is false); without a name,
+ * `.github/bellgate.yml` (or `.yaml`) is read when present, else the defaults are used. The reader
+ * (YAML and schema validation, ~40 ms of start-up) is imported only when there is a file to read;
+ * this module itself loads neither.
+ * @throws InputError for a missing named file or an invalid config (with file:line:col).
+ * @example await loadConfigLazily(undefined, '/repo') // the defaults in a folder without a config file
+ */
+async function loadConfigLazily(path, cwd, required = path !== undefined) {
+    if (path === undefined && !(await anyConfigPresent(cwd)))
+        return (0,_defaults_js__WEBPACK_IMPORTED_MODULE_2__/* .defaultConfig */ .sb)();
+    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(446), __webpack_require__.e(0)]).then(__webpack_require__.bind(__webpack_require__, 62000));
+    return readConfigFile(path, { cwd, required });
 }
 
 

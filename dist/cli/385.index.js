@@ -902,8 +902,8 @@ function tuneHistory(input) {
 
 // EXTERNAL MODULE: ./src/config/glob-matcher.ts
 var glob_matcher = __webpack_require__(80517);
-// EXTERNAL MODULE: ./src/config/load.ts + 10 modules
-var load = __webpack_require__(10208);
+// EXTERNAL MODULE: ./src/config/load.ts + 9 modules
+var load = __webpack_require__(95446);
 ;// CONCATENATED MODULE: ./src/gate/tune/escape-glob.ts
 
 /**
@@ -1311,7 +1311,7 @@ var read_text = __webpack_require__(94034);
  * @example await runTune(ctx, { history: 'h.json', format: 'text' })
  */
 async function runTune(ctx, options) {
-    const config = await (0,load_config/* loadConfig */.Z9)(ctx, options.config);
+    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
     const historyText = await (0,read_text/* readUserText */.n)((0,paths/* resolvePath */.o)(ctx, options.history), '--history');
     const history = (0,history_document/* parseHistory */.i6)(historyText, options.history);
     if (history.runs.length === 0) {

@@ -237,7 +237,10 @@ var load_run = __webpack_require__(35946);
 var open_history = __webpack_require__(14695);
 // EXTERNAL MODULE: ./src/cli/split-newest.ts
 var split_newest = __webpack_require__(74977);
+// EXTERNAL MODULE: ./src/config/did-you-mean.ts
+var did_you_mean = __webpack_require__(99255);
 ;// CONCATENATED MODULE: ./src/cli/close-names.ts
+
 /**
  * Names near a mistyped one, for "did you mean" hints: by Levenshtein edit distance (at most a
  * third of the name's length), plus names that contain the typed text. At most `limit`, nearest first.
@@ -252,26 +255,14 @@ function closeNames(typed, names, limit = 3) {
     for (const name of names) {
         if (name.length > 200)
             continue;
-        const d = name.includes(typed) ? 0.5 : editDistance(typed, name);
+        const d = name.includes(typed) ? 0.5 : (0,did_you_mean/* editDistance */.Y)(typed, name);
         if (d <= allowed)
             scored.push({ name, d });
     }
     scored.sort((a, b) => a.d - b.d || (a.name < b.name ? -1 : 1));
     return scored.slice(0, limit).map((s) => s.name);
 }
-/** Levenshtein distance with one rolling row. */
-function editDistance(a, b) {
-    let row = Array.from({ length: b.length + 1 }, (_, j) => j);
-    for (let i = 1; i <= a.length; i++) {
-        const next = [i];
-        for (let j = 1; j <= b.length; j++) {
-            const cost = a[i - 1] === b[j - 1] ? 0 : 1;
-            next[j] = Math.min((row[j] ?? 0) + 1, (next[j - 1] ?? 0) + 1, (row[j - 1] ?? 0) + cost);
-        }
-        row = next;
-    }
-    return row[b.length] ?? 0;
-}
+
 
 ;// CONCATENATED MODULE: ./src/cli/run/explain.ts
 
@@ -292,7 +283,7 @@ function editDistance(a, b) {
  * @example await runExplain(ctx, 'latency/geocode-p95', { history: 'h.json', series: 'default' })
  */
 async function runExplain(ctx, metric, options) {
-    const config = await (0,load_config/* loadConfig */.Z9)(ctx, options.config);
+    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
     const opened = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
     const { history, run } = options.metrics === undefined
         ? (0,split_newest/* splitNewest */.L)(opened.history, options.history)
@@ -363,6 +354,62 @@ function splitNewest(history, source) {
         run: { metrics, meta: new Map() },
         id: newest.id,
     };
+}
+
+
+/***/ }),
+
+/***/ 99255:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   Y: () => (/* binding */ editDistance),
+/* harmony export */   a: () => (/* binding */ didYouMean)
+/* harmony export */ });
+/**
+ * Levenshtein edit distance (insertions, deletions, substitutions each cost 1), by the classic
+ * two-row dynamic programme (Wagner & Fischer 1974). O(|a| * |b|) time, O(|b|) memory.
+ * @example editDistance('cuttoff', 'cutoff') // 1
+ */
+function editDistance(a, b) {
+    let previous = Array.from({ length: b.length + 1 }, (_, j) => j);
+    for (let i = 1; i <= a.length; i++) {
+        const current = [i];
+        for (let j = 1; j <= b.length; j++) {
+            const cost = a[i - 1] === b[j - 1] ? 0 : 1;
+            current[j] = Math.min(previous[j] + 1, current[j - 1] + 1, previous[j - 1] + cost);
+        }
+        previous = current;
+    }
+    return previous[b.length];
+}
+/** Case, dashes, underscores and spaces are what people most often get "wrong" in a key. */
+function normalise(word) {
+    return word.toLowerCase().replace(/[-_\s]/g, '');
+}
+/**
+ * The candidate a mistyped word most likely meant, or undefined when none is close: equal after
+ * ignoring case, '-', '_' and spaces (`minRuns`, `min_runs` -> `min-runs`), else within an edit
+ * distance of about a third of the candidate's length (`cuttoff` -> `cutoff`).
+ * @example didYouMean('tolerence', ['cutoff', 'tolerance']) // 'tolerance'
+ */
+function didYouMean(word, candidates) {
+    if (word.length > 64)
+        return undefined;
+    const plain = normalise(word);
+    let best;
+    let bestDistance = Infinity;
+    for (const candidate of candidates) {
+        const target = normalise(candidate);
+        if (target === plain)
+            return candidate;
+        const distance = editDistance(plain, target);
+        if (distance <= Math.max(1, Math.floor(target.length / 3)) && distance < bestDistance) {
+            best = candidate;
+            bestDistance = distance;
+        }
+    }
+    return best;
 }
 
 

@@ -588,7 +588,7 @@ var split_newest = __webpack_require__(74977);
  * @example await runReport(ctx, { history: 'h.json', html: 'report.html', series: 'default' })
  */
 async function runReport(ctx, options) {
-    const config = await (0,load_config/* loadConfig */.Z9)(ctx, options.config);
+    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
     const opened = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
     const { history, run } = options.metrics === undefined
         ? (0,split_newest/* splitNewest */.L)(opened.history, options.history)

@@ -327,7 +327,7 @@ function tuneCommand(ctx) {
         'bellgate tune --history h.json --target 0.5 --write .github/bellgate.yml',
     ]);
     // The work (replay, diff library) is imported when the command runs, so the others never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(194), __webpack_require__.e(205), __webpack_require__.e(628), __webpack_require__.e(208), __webpack_require__.e(385)]).then(__webpack_require__.bind(__webpack_require__, 16385))).runTune(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(194), __webpack_require__.e(205), __webpack_require__.e(628), __webpack_require__.e(446), __webpack_require__.e(385)]).then(__webpack_require__.bind(__webpack_require__, 16385))).runTune(ctx, options));
 }
 function parseTarget(text) {
     const n = Number(text);

@@ -482,7 +482,7 @@ async function performCheck(ctx, options) {
     if (options.record && options.history === undefined) {
         throw new input_error/* InputError */.d('--record needs --history FILE', { where: '--record', fix: 'name the history file to append this run to' });
     }
-    const config = await (0,load_config/* loadConfig */.Z9)(ctx, options.config);
+    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
     const run = await (0,load_run/* loadRun */.S)(ctx, config, options);
     const { history, store } = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
     if (options.history !== undefined && history.runs.length === 0) {

@@ -1,21 +1,14 @@
-export const id = 208;
-export const ids = [208];
+export const id = 446;
+export const ids = [446];
 export const modules = {
 
-/***/ 10208:
+/***/ 99255:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
-
-// EXPORTS
-__webpack_require__.d(__webpack_exports__, {
-  o: () => (/* binding */ parseConfig)
-});
-
-// UNUSED EXPORTS: defaultConfig
-
-// EXTERNAL MODULE: ./src/config/defaults.ts
-var defaults = __webpack_require__(31954);
-;// CONCATENATED MODULE: ./src/config/did-you-mean.ts
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   Y: () => (/* binding */ editDistance),
+/* harmony export */   a: () => (/* binding */ didYouMean)
+/* harmony export */ });
 /**
  * Levenshtein edit distance (insertions, deletions, substitutions each cost 1), by the classic
  * two-row dynamic programme (Wagner & Fischer 1974). O(|a| * |b|) time, O(|b|) memory.
@@ -62,6 +55,24 @@ function didYouMean(word, candidates) {
     return best;
 }
 
+
+/***/ }),
+
+/***/ 95446:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+
+// EXPORTS
+__webpack_require__.d(__webpack_exports__, {
+  o: () => (/* binding */ parseConfig)
+});
+
+// UNUSED EXPORTS: defaultConfig
+
+// EXTERNAL MODULE: ./src/config/defaults.ts
+var defaults = __webpack_require__(31954);
+// EXTERNAL MODULE: ./src/config/did-you-mean.ts
+var did_you_mean = __webpack_require__(99255);
 // EXTERNAL MODULE: ./node_modules/ajv/dist/ajv.js
 var ajv = __webpack_require__(42463);
 ;// CONCATENATED MODULE: ./src/config/bellgate.schema.json
@@ -512,7 +523,7 @@ function unknownKey(error, tree) {
     const pointer = `${error.instancePath}/${pointerSegment(key)}`;
     const allowed = Object.keys(error.parentSchema.properties);
     const where = error.instancePath === '' ? 'at the top level' : `in ${placeName(error.instancePath)}`;
-    const guess = didYouMean(key, allowed);
+    const guess = (0,did_you_mean/* didYouMean */.a)(key, allowed);
     let fix = guess ? `did you mean "${guess}"?` : `allowed here: ${allowed.join(', ')}`;
     if (!guess && error.instancePath === '' && SETTING_KEYS.includes(key))
         fix = `"${key}" is a metric setting: put it under defaults: or in a metrics rule`;
@@ -529,7 +540,7 @@ function wrongValue(error, tree) {
     const message = `${name} must be ${allowed}; got ${describeValue(error.data)}`;
     let fix;
     if (Array.isArray(node.enum) && typeof error.data === 'string') {
-        const guess = didYouMean(error.data, node.enum.map(String));
+        const guess = (0,did_you_mean/* didYouMean */.a)(error.data, node.enum.map(String));
         if (guess)
             fix = `did you mean "${guess}"?`;
     }
