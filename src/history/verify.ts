@@ -3,12 +3,14 @@ import { decodeHistoryDocument, HISTORY_SCHEMA_V1 } from './document.js';
 import { parseJsonText } from './json-text.js';
 import { collectingSink, isObject, type HistoryProblem } from './problems.js';
 import { parseIsoTime } from './iso-time.js';
+import { nameProblem } from './import-run.js';
 
 /**
  * Checks the integrity of a history document without throwing, for `bellgate verify` (exit 0
  * when the list is empty, 2 otherwise). Finds: malformed JSON ("line:col"), a missing, unknown or
  * newer version, wrong types, duplicated run ids, duplicated metric names, non-finite values,
- * ragged columns, unreadable times and runs out of time order — each located by a JSON path in
+ * ragged columns, unreadable times, runs out of time order and metric names every metric reader
+ * would refuse (control or bidirectional-override characters, over 512 characters) — each located by a JSON path in
  * the document's own layout ("metrics.values[3][17]", "runs[4].values[\"build/compile\"]").
  * At most 200 problems are listed, then a count of the rest.
  *
@@ -45,6 +47,12 @@ export function verifyHistory(text: string, source: string): HistoryProblem[] {
         previous = ms;
         previousIndex = i;
       }
+    });
+    // A hand-edited or imported history may hold names no reader lets in; the renderers clean
+    // them, but the document should be mended.
+    [...history.columns.keys()].forEach((name, i) => {
+      const problem = nameProblem(name);
+      if (problem) sink(v1 ? 'runs[].values' : `metrics.names[${i}]`, problem);
     });
   }
   finish();

@@ -95,7 +95,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   }
   if (rest.length > 0) {
     add('');
-    add(`<details><summary>${rest.length} other metrics: ${statusCounts(rest.map((m) => m.status))}</summary>\n`);
+    add(`<details><summary>${rest.length} other metric${rest.length === 1 ? '' : 's'}: ${statusCounts(rest.map((m) => m.status))}</summary>\n`);
     add(`${HEAD}\n${fit(rest.map(row), room, 'metrics').text}\n\n</details>`);
   }
   const links: string[] = [];

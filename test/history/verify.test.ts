@@ -32,6 +32,16 @@ describe('verifyHistory', () => {
     ]);
   });
 
+  it('flags metric names that every metric reader refuses (bidi override, control character, over 512 characters)', () => {
+    // U+202E is RIGHT-TO-LEFT OVERRIDE and U+0007 BELL (Unicode character database); the
+    // 512-character cap is the readers' documented name limit.
+    const names = ['fine/name', 'evil\u202Egnp', 'bell\u0007', 'x'.repeat(513)];
+    const text = doc({ id: ['1'], time: ['2026-03-01T00:00:00Z'] }, { names, values: names.map(() => [1]) });
+    const problems = verifyHistory(text, 'h.json');
+    expect(problems.map((p) => p.where)).toEqual(['metrics.names[1]', 'metrics.names[2]', 'metrics.names[3]']);
+    expect(problems[0]?.problem).toMatch(/bidirectional/);
+  });
+
   it('reports the version problems: missing, unknown, newer', () => {
     expect(verifyHistory('{"series":"s"}', 'h.json')).toEqual([{ where: 'schema', problem: expect.stringMatching(/not a Bellgate history/) }]);
     expect(verifyHistory('{"schema":"bellgate.history/0"}', 'h.json')).toEqual([{ where: 'schema', problem: expect.stringMatching(/unknown/) }]);
