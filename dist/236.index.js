@@ -3822,7 +3822,7 @@ function renderMarkdown(report, options = {}) {
     }
     if (rest.length > 0) {
         add('');
-        add(`<details><summary>${rest.length} other metrics: ${(0,report_status/* statusCounts */.rc)(rest.map((m) => m.status))}</summary>\n`);
+        add(`<details><summary>${rest.length} other metric${rest.length === 1 ? '' : 's'}: ${(0,report_status/* statusCounts */.rc)(rest.map((m) => m.status))}</summary>\n`);
         add(`${HEAD}\n${fit(rest.map(row), room, 'metrics').text}\n\n</details>`);
     }
     const links = [];

@@ -79,7 +79,10 @@ var json_text = __webpack_require__(77670);
 var history_problems = __webpack_require__(17326);
 // EXTERNAL MODULE: ./src/history/iso-time.ts
 var iso_time = __webpack_require__(51459);
+// EXTERNAL MODULE: ./src/history/import-run.ts
+var import_run = __webpack_require__(12567);
 ;// CONCATENATED MODULE: ./src/history/verify.ts
+
 
 
 
@@ -89,7 +92,8 @@ var iso_time = __webpack_require__(51459);
  * Checks the integrity of a history document without throwing, for `bellgate verify` (exit 0
  * when the list is empty, 2 otherwise). Finds: malformed JSON ("line:col"), a missing, unknown or
  * newer version, wrong types, duplicated run ids, duplicated metric names, non-finite values,
- * ragged columns, unreadable times and runs out of time order — each located by a JSON path in
+ * ragged columns, unreadable times, runs out of time order and metric names every metric reader
+ * would refuse (control or bidirectional-override characters, over 512 characters) — each located by a JSON path in
  * the document's own layout ("metrics.values[3][17]", "runs[4].values[\"build/compile\"]").
  * At most 200 problems are listed, then a count of the rest.
  *
@@ -131,6 +135,13 @@ function verifyHistory(text, source) {
                 previousIndex = i;
             }
         });
+        // A hand-edited or imported history may hold names no reader lets in; the renderers clean
+        // them, but the document should be mended.
+        [...history.columns.keys()].forEach((name, i) => {
+            const problem = (0,import_run/* nameProblem */.rH)(name);
+            if (problem)
+                sink(v1 ? 'runs[].values' : `metrics.names[${i}]`, problem);
+        });
     }
     finish();
     return problems;
@@ -168,6 +179,93 @@ async function runVerify(ctx, options) {
         ctx.io.stdout((0,visible_text/* visibleText */.Q)(`${options.history}: ${p.where}: ${p.problem}`) + '\n');
     ctx.io.stderr(`bellgate: ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${options.history}\n`);
     ctx.exitCode = exit_codes/* EXIT */.d.input;
+}
+
+
+/***/ }),
+
+/***/ 12567:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   IK: () => (/* binding */ valueFrom),
+/* harmony export */   gc: () => (/* binding */ runInfoFrom),
+/* harmony export */   rH: () => (/* binding */ nameProblem)
+/* harmony export */ });
+/* harmony import */ var _inputs_names_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(85585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(38250);
+/* harmony import */ var _iso_time_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(51459);
+
+
+
+/**
+ * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
+ * an id is required (a string, or a whole number such as a CI run id); a time is required and
+ * must be ISO-8601 (stored normalised to UTC, since import order is time order); sha, ref and
+ * event are optional strings. Returns the reason as a string when the run must be skipped.
+ *
+ * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
+ */
+function runInfoFrom(fields) {
+    const { id, time } = fields;
+    let runId;
+    if (typeof id === 'string' && id.trim() !== '')
+        runId = id.trim();
+    else if (typeof id === 'number' && Number.isSafeInteger(id))
+        runId = String(id);
+    else
+        return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
+    if (time === undefined || time === null || time === '')
+        return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
+    const iso = typeof time === 'string' ? (0,_iso_time_js__WEBPACK_IMPORTED_MODULE_2__/* .normalizeIsoTime */ .U)(time) : undefined;
+    if (iso === undefined)
+        return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
+    const info = { id: runId, time: iso };
+    for (const field of ['sha', 'ref', 'event']) {
+        const text = fields[field];
+        if (text === undefined || text === null || text === '')
+            continue;
+        if (typeof text !== 'string')
+            return `run ${JSON.stringify(runId)}: ${field} must be a string`;
+        info[field] = text;
+    }
+    return info;
+}
+/**
+ * The reason a metric name cannot be imported, or undefined: the same rule as every metric file
+ * reader (checkMetricName: not blank, at most 512 characters, no control or bidi characters), so a
+ * name refused in a metric file cannot enter the history through an import instead.
+ * @example nameProblem('a\u202Eb') // 'metric name "a\u202Eb" contains a bidirectional override character (U+202E)'
+ */
+function nameProblem(name) {
+    try {
+        (0,_inputs_names_js__WEBPACK_IMPORTED_MODULE_0__/* .checkMetricName */ .WO)(name);
+        return undefined;
+    }
+    catch (error) {
+        if (error instanceof _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d)
+            return error.message;
+        throw error;
+    }
+}
+/**
+ * Reads one metric value: a finite JSON number, or decimal text when `text` is allowed (CSV
+ * cells). Returns the reason when it is not one — "NaN", "Infinity", 1e999, hex and empty text
+ * are all refused; in JSON a quoted number is refused too, since the writer meant something else.
+ *
+ * @example valueFrom('1.5e3', true) // 1500
+ */
+function valueFrom(raw, text = false) {
+    let v;
+    if (typeof raw === 'number')
+        v = raw;
+    else if (typeof raw === 'string' && text && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim()))
+        v = Number(raw.trim());
+    else if (typeof raw === 'string' && !text)
+        return `value ${JSON.stringify(raw)} is text, not a number`;
+    else
+        return `value ${JSON.stringify(raw) ?? String(raw)} is not a number`;
+    return Number.isFinite(v) ? v : `value ${String(raw)} is not a finite number`;
 }
 
 
@@ -217,6 +315,87 @@ function parseIsoTime(text) {
 function normalizeIsoTime(text) {
     const ms = parseIsoTime(text);
     return ms === undefined || !Number.isFinite(ms) || Math.abs(ms) > 8.64e15 ? undefined : new Date(ms).toISOString();
+}
+
+
+/***/ }),
+
+/***/ 85585:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   WO: () => (/* binding */ checkMetricName),
+/* harmony export */   lg: () => (/* binding */ checkUnit)
+/* harmony export */ });
+/* unused harmony exports MAX_NAME_LENGTH, MAX_UNIT_LENGTH */
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+
+/** Longest metric name accepted, in characters (code points). */
+const MAX_NAME_LENGTH = 512;
+// C0 controls, DEL and C1 controls: they break terminals, log lines and markdown tables.
+const CONTROL = /[\u0000-\u001f\u007f-\u009f]/u;
+// Bidirectional embeddings/overrides and isolates: they make a name read differently from what it is
+// ("Trojan Source", CVE-2021-42574), so a report could show a reviewer the wrong metric.
+const BIDI = /[\u202a-\u202e\u2066-\u2069]/u;
+/**
+ * Checks one metric name and returns it unchanged. The rule, the same for every format:
+ * - not empty (and not only whitespace);
+ * - at most 512 characters (code points);
+ * - no control characters (U+0000-001F, U+007F-009F);
+ * - no bidirectional override or isolate characters (U+202A-202E, U+2066-2069).
+ * Any other text is a valid name, `__proto__` and `constructor` included: names only ever key Maps.
+ * @throws InputError naming the place and the offending character.
+ * @example checkMetricName('route/match-static', 'bench.json:3') // 'route/match-static'
+ */
+function checkMetricName(name, where) {
+    if (name.trim() === '') {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('metric name is empty', { where, fix: 'give every metric a non-empty name' });
+    }
+    const length = countCodePoints(name);
+    if (length > MAX_NAME_LENGTH) {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric name is ${length} characters long, more than the ${MAX_NAME_LENGTH} allowed ("${name.slice(0, 40)}...")`, { where, fix: `shorten the name to at most ${MAX_NAME_LENGTH} characters` });
+    }
+    const bad = CONTROL.exec(name) ?? BIDI.exec(name);
+    if (bad) {
+        const code = bad[0].codePointAt(0).toString(16).toUpperCase().padStart(4, '0');
+        const kind = CONTROL.test(bad[0]) ? 'a control character' : 'a bidirectional override character';
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric name ${JSON.stringify(name)} contains ${kind} (U+${code})`, {
+            where,
+            fix: 'remove control and bidirectional formatting characters from metric names',
+        });
+    }
+    return name;
+}
+function countCodePoints(text) {
+    let count = 0;
+    for (let i = 0; i < text.length; i++) {
+        const c = text.charCodeAt(i);
+        // A high surrogate followed by a low one is one character.
+        if (c >= 0xd800 && c <= 0xdbff && i + 1 < text.length) {
+            const d = text.charCodeAt(i + 1);
+            if (d >= 0xdc00 && d <= 0xdfff)
+                i++;
+        }
+        count++;
+    }
+    return count;
+}
+/** Longest unit accepted, in UTF-16 units. */
+const MAX_UNIT_LENGTH = 64;
+/**
+ * Checks a unit string with the same character rule as names (no control or bidirectional
+ * formatting characters) and a length of at most 64: units are printed beside every value.
+ * @throws InputError naming the place.
+ * @example checkUnit('ns/op', 'b.txt:3') // 'ns/op'
+ */
+function checkUnit(unit, where) {
+    if (unit.length > MAX_UNIT_LENGTH || CONTROL.test(unit) || BIDI.test(unit)) {
+        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`unit ${JSON.stringify(unit.slice(0, 80))} is longer than ${MAX_UNIT_LENGTH} characters or contains control or bidirectional formatting characters`, {
+            where,
+            fix: 'write the unit as short plain text such as ms, B or ns/op',
+        });
+    }
+    return unit;
 }
 
 

@@ -217,7 +217,7 @@ function importCommand(ctx) {
     ]);
     cmd.addHelpText('after', '\nJSON Lines: {"id":"812-1","time":"2026-05-04T10:20:30Z","sha":"3f2a9c1","ref":"refs/heads/main","metrics":{"latency/p50":12.4}}\nCSV: id,time,sha,ref,name,value[,unit] (one row per metric) or id,time,sha,ref,<one column per metric>\n');
     // The work is imported when the command runs, so `--help` and the other commands never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(712), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(649)]).then(__webpack_require__.bind(__webpack_require__, 37649))).runImport(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(712), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(158)]).then(__webpack_require__.bind(__webpack_require__, 36158))).runImport(ctx, options));
 }
 
 ;// CONCATENATED MODULE: ./src/cli/commands/verify.ts

@@ -1,5 +1,5 @@
-export const id = 649;
-export const ids = [649];
+export const id = 158;
+export const ids = [158];
 export const modules = {
 
 /***/ 94034:
@@ -58,7 +58,7 @@ function reason(error) {
 
 /***/ }),
 
-/***/ 37649:
+/***/ 36158:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -73,84 +73,8 @@ __webpack_require__.d(__webpack_exports__, {
 var input_error = __webpack_require__(38250);
 // EXTERNAL MODULE: ./node_modules/csv-parse/lib/sync.js + 8 modules
 var sync = __webpack_require__(40712);
-// EXTERNAL MODULE: ./src/inputs/names.ts
-var names = __webpack_require__(85585);
-// EXTERNAL MODULE: ./src/history/iso-time.ts
-var iso_time = __webpack_require__(51459);
-;// CONCATENATED MODULE: ./src/history/import-run.ts
-
-
-
-/**
- * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
- * an id is required (a string, or a whole number such as a CI run id); a time is required and
- * must be ISO-8601 (stored normalised to UTC, since import order is time order); sha, ref and
- * event are optional strings. Returns the reason as a string when the run must be skipped.
- *
- * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
- */
-function runInfoFrom(fields) {
-    const { id, time } = fields;
-    let runId;
-    if (typeof id === 'string' && id.trim() !== '')
-        runId = id.trim();
-    else if (typeof id === 'number' && Number.isSafeInteger(id))
-        runId = String(id);
-    else
-        return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
-    if (time === undefined || time === null || time === '')
-        return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
-    const iso = typeof time === 'string' ? (0,iso_time/* normalizeIsoTime */.U)(time) : undefined;
-    if (iso === undefined)
-        return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
-    const info = { id: runId, time: iso };
-    for (const field of ['sha', 'ref', 'event']) {
-        const text = fields[field];
-        if (text === undefined || text === null || text === '')
-            continue;
-        if (typeof text !== 'string')
-            return `run ${JSON.stringify(runId)}: ${field} must be a string`;
-        info[field] = text;
-    }
-    return info;
-}
-/**
- * The reason a metric name cannot be imported, or undefined: the same rule as every metric file
- * reader (checkMetricName: not blank, at most 512 characters, no control or bidi characters), so a
- * name refused in a metric file cannot enter the history through an import instead.
- * @example nameProblem('a\u202Eb') // 'metric name "a\u202Eb" contains a bidirectional override character (U+202E)'
- */
-function nameProblem(name) {
-    try {
-        (0,names/* checkMetricName */.WO)(name);
-        return undefined;
-    }
-    catch (error) {
-        if (error instanceof input_error/* InputError */.d)
-            return error.message;
-        throw error;
-    }
-}
-/**
- * Reads one metric value: a finite JSON number, or decimal text when `text` is allowed (CSV
- * cells). Returns the reason when it is not one — "NaN", "Infinity", 1e999, hex and empty text
- * are all refused; in JSON a quoted number is refused too, since the writer meant something else.
- *
- * @example valueFrom('1.5e3', true) // 1500
- */
-function valueFrom(raw, text = false) {
-    let v;
-    if (typeof raw === 'number')
-        v = raw;
-    else if (typeof raw === 'string' && text && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim()))
-        v = Number(raw.trim());
-    else if (typeof raw === 'string' && !text)
-        return `value ${JSON.stringify(raw)} is text, not a number`;
-    else
-        return `value ${JSON.stringify(raw) ?? String(raw)} is not a number`;
-    return Number.isFinite(v) ? v : `value ${String(raw)} is not a finite number`;
-}
-
+// EXTERNAL MODULE: ./src/history/import-run.ts
+var import_run = __webpack_require__(12567);
 ;// CONCATENATED MODULE: ./src/history/import-csv.ts
 
 
@@ -214,7 +138,7 @@ function parseCsvRuns(text, source) {
             continue;
         }
         const cell = new Map(header.map((h, i) => [h, record[i] ?? '']));
-        const runInfo = runInfoFrom(Object.fromEntries(RUN_COLUMNS.map((c) => [c, cell.get(c)])));
+        const runInfo = (0,import_run/* runInfoFrom */.gc)(Object.fromEntries(RUN_COLUMNS.map((c) => [c, cell.get(c)])));
         if (typeof runInfo === 'string') {
             skip(runInfo);
             continue;
@@ -230,10 +154,10 @@ function parseCsvRuns(text, source) {
         }
         const target = run;
         const add = (name, raw, unit) => {
-            const badName = nameProblem(name);
+            const badName = (0,import_run/* nameProblem */.rH)(name);
             if (badName !== undefined)
                 return skip(badName);
-            const value = valueFrom(raw, true);
+            const value = (0,import_run/* valueFrom */.IK)(raw, true);
             if (typeof value === 'string')
                 return skip(`metric ${JSON.stringify(name)}: ${value}`);
             if (target.metrics.has(name))
@@ -304,7 +228,7 @@ function parseJsonLines(text, source) {
         }
         if (!(0,problems/* isObject */.Gv)(entry))
             return skip(`a run must be a JSON object, found ${(0,problems/* typeName */.go)(entry)}`);
-        const info = runInfoFrom(entry);
+        const info = (0,import_run/* runInfoFrom */.gc)(entry);
         if (typeof info === 'string')
             return skip(info);
         const run = { info, metrics: new Map(), units: new Map() };
@@ -312,10 +236,10 @@ function parseJsonLines(text, source) {
         const add = (name, raw, unit) => {
             if (typeof name !== 'string' || name === '')
                 return skip(`a metric needs a non-empty "name"`);
-            const badName = nameProblem(name);
+            const badName = (0,import_run/* nameProblem */.rH)(name);
             if (badName !== undefined)
                 return skip(badName);
-            const value = valueFrom(raw);
+            const value = (0,import_run/* valueFrom */.IK)(raw);
             if (typeof value === 'string')
                 return skip(`metric ${JSON.stringify(name)}: ${value}`);
             run.metrics.set(name, value);
@@ -482,6 +406,93 @@ async function runImport(ctx, options) {
         await store.save(result.history, history.runs.length);
     ctx.io.stdout(`imported ${options.runs}: ${result.added} runs added, ${result.updated} updated, ${result.unchanged} unchanged, ${skipped.length} skipped; ` +
         `${result.history.runs.length} runs in ${store?.describe() ?? options.history}\n`);
+}
+
+
+/***/ }),
+
+/***/ 12567:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   IK: () => (/* binding */ valueFrom),
+/* harmony export */   gc: () => (/* binding */ runInfoFrom),
+/* harmony export */   rH: () => (/* binding */ nameProblem)
+/* harmony export */ });
+/* harmony import */ var _inputs_names_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(85585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(38250);
+/* harmony import */ var _iso_time_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(51459);
+
+
+
+/**
+ * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
+ * an id is required (a string, or a whole number such as a CI run id); a time is required and
+ * must be ISO-8601 (stored normalised to UTC, since import order is time order); sha, ref and
+ * event are optional strings. Returns the reason as a string when the run must be skipped.
+ *
+ * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
+ */
+function runInfoFrom(fields) {
+    const { id, time } = fields;
+    let runId;
+    if (typeof id === 'string' && id.trim() !== '')
+        runId = id.trim();
+    else if (typeof id === 'number' && Number.isSafeInteger(id))
+        runId = String(id);
+    else
+        return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
+    if (time === undefined || time === null || time === '')
+        return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
+    const iso = typeof time === 'string' ? (0,_iso_time_js__WEBPACK_IMPORTED_MODULE_2__/* .normalizeIsoTime */ .U)(time) : undefined;
+    if (iso === undefined)
+        return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
+    const info = { id: runId, time: iso };
+    for (const field of ['sha', 'ref', 'event']) {
+        const text = fields[field];
+        if (text === undefined || text === null || text === '')
+            continue;
+        if (typeof text !== 'string')
+            return `run ${JSON.stringify(runId)}: ${field} must be a string`;
+        info[field] = text;
+    }
+    return info;
+}
+/**
+ * The reason a metric name cannot be imported, or undefined: the same rule as every metric file
+ * reader (checkMetricName: not blank, at most 512 characters, no control or bidi characters), so a
+ * name refused in a metric file cannot enter the history through an import instead.
+ * @example nameProblem('a\u202Eb') // 'metric name "a\u202Eb" contains a bidirectional override character (U+202E)'
+ */
+function nameProblem(name) {
+    try {
+        (0,_inputs_names_js__WEBPACK_IMPORTED_MODULE_0__/* .checkMetricName */ .WO)(name);
+        return undefined;
+    }
+    catch (error) {
+        if (error instanceof _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d)
+            return error.message;
+        throw error;
+    }
+}
+/**
+ * Reads one metric value: a finite JSON number, or decimal text when `text` is allowed (CSV
+ * cells). Returns the reason when it is not one — "NaN", "Infinity", 1e999, hex and empty text
+ * are all refused; in JSON a quoted number is refused too, since the writer meant something else.
+ *
+ * @example valueFrom('1.5e3', true) // 1500
+ */
+function valueFrom(raw, text = false) {
+    let v;
+    if (typeof raw === 'number')
+        v = raw;
+    else if (typeof raw === 'string' && text && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim()))
+        v = Number(raw.trim());
+    else if (typeof raw === 'string' && !text)
+        return `value ${JSON.stringify(raw)} is text, not a number`;
+    else
+        return `value ${JSON.stringify(raw) ?? String(raw)} is not a number`;
+    return Number.isFinite(v) ? v : `value ${String(raw)} is not a finite number`;
 }
 
 
