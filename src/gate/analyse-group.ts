@@ -46,31 +46,6 @@ export interface GroupAnalysis {
   tail: number;
 }
 
-/** Everything the group's decision needs, before any family adjustment. */
-export interface GroupAnalysis {
-  n: number;
-  p: number;
-  /** Mean of the members' signed standardised values in this run, against its baseline history. */
-  common: Move;
-  /** Each member's own move (its value minus the common move), against its own history. */
-  own: Move[];
-  /** min(1, p x smallest own tail): Bonferroni over the members' own moves. */
-  ownTail: number;
-  /** Squared Mahalanobis distance under the Ledoit-Wolf shrunk covariance, and its tail. */
-  distance: number;
-  distanceTail: number;
-  shrinkage: number;
-  /** Each member's share of the distance (mahalanobisContributions / distance). */
-  shares: number[];
-  /**
-   * The group's one joint tail: min(1, ownTail / 0.9, distanceTail / 0.1), a weighted Bonferroni
-   * over both checks (Holm 1979; weights after Benjamini & Hochberg 1997), so the group is one
-   * test at its level. Only ownTail while runs do not exceed members, where the chi-square
-   * stand-in for Hotelling's law is far too optimistic about a covariance from so few runs.
-   */
-  tail: number;
-}
-
 /**
  * Analyses a group of metrics judged together (issue 6):
  * - joint: squared Mahalanobis distance of this run from the baseline mean, covariance shrunk
