@@ -1,20 +1,13 @@
 import { settingsFor } from '../../config/rules.js';
-import { runGate } from '../../gate/gate.js';
 import { selectBaseline } from '../../gate/baseline.js';
 import { InputError } from '../../model/input-error.js';
 import { fromFitScale } from '../../model/transform.js';
 import { renderExplain } from '../../report/explain.js';
 import type { CommandContext } from '../context.js';
-import { loadConfig } from '../load-config.js';
-import { loadRun, type MetricFileOptions } from '../load-run.js';
-import { openHistory } from '../open-history.js';
-import { splitNewest } from '../split-newest.js';
+import { judgeRequestedRun, type RequestedRunOptions } from '../judge-requested-run.js';
 import { closeNames } from '../close-names.js';
 
-export interface ExplainOptions extends Partial<MetricFileOptions> {
-  history: string;
-  config?: string;
-  series: string;
+export interface ExplainOptions extends RequestedRunOptions {
 }
 
 /**
@@ -24,13 +17,7 @@ export interface ExplainOptions extends Partial<MetricFileOptions> {
  * @example await runExplain(ctx, 'latency/geocode-p95', { history: 'h.json', series: 'default' })
  */
 export async function runExplain(ctx: CommandContext, metric: string, options: ExplainOptions): Promise<void> {
-  const config = await loadConfig(ctx, options.config);
-  const opened = await openHistory(ctx, options.history, options.series);
-  const { history, run } =
-    options.metrics === undefined
-      ? splitNewest(opened.history, options.history)
-      : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
-  const report = runGate({ config, history, run, series: options.series });
+  const { config, history, run, report } = await judgeRequestedRun(ctx, options);
   const result = report.metrics.find((m) => m.name === metric);
   if (result === undefined) {
     const known = [...new Set([...history.columns.keys(), ...run.metrics.keys()])];

@@ -1,19 +1,12 @@
 import { mkdir, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
-import { runGate } from '../../gate/gate.js';
 import { renderHtmlReport } from '../../report/html.js';
 import type { CommandContext } from '../context.js';
-import { loadConfig } from '../load-config.js';
-import { loadRun, type MetricFileOptions } from '../load-run.js';
-import { openHistory } from '../open-history.js';
+import { judgeRequestedRun, type RequestedRunOptions } from '../judge-requested-run.js';
 import { resolvePath } from '../paths.js';
-import { splitNewest } from '../split-newest.js';
 
-export interface ReportOptions extends Partial<MetricFileOptions> {
-  history: string;
+export interface ReportOptions extends RequestedRunOptions {
   html: string;
-  config?: string;
-  series: string;
   title?: string;
 }
 
@@ -24,13 +17,7 @@ export interface ReportOptions extends Partial<MetricFileOptions> {
  * @example await runReport(ctx, { history: 'h.json', html: 'report.html', series: 'default' })
  */
 export async function runReport(ctx: CommandContext, options: ReportOptions): Promise<void> {
-  const config = await loadConfig(ctx, options.config);
-  const opened = await openHistory(ctx, options.history, options.series);
-  const { history, run } =
-    options.metrics === undefined
-      ? splitNewest(opened.history, options.history)
-      : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
-  const report = runGate({ config, history, run, series: options.series });
+  const { history, report } = await judgeRequestedRun(ctx, options);
   const html = renderHtmlReport({
     report,
     history,

@@ -1,0 +1,35 @@
+import { runGate } from '../gate/gate.js';
+import type { Report } from '../gate/report.js';
+import type { Config } from '../config/types.js';
+import type { History } from '../history/history.js';
+import type { Run } from '../inputs/run.js';
+import type { CommandContext } from './context.js';
+import { loadConfig } from './load-config.js';
+import { loadRun, type MetricFileOptions } from './load-run.js';
+import { openHistory } from './open-history.js';
+import { splitNewest } from './split-newest.js';
+
+export interface RequestedRunOptions extends Partial<MetricFileOptions> {
+  history: string;
+  config?: string;
+  series: string;
+}
+
+/**
+ * The run `explain` and `report` look at, judged: the metric files given with --metrics against
+ * the whole history, or without them the newest recorded run against the runs before it.
+ * @throws InputError (bad files, flags), StoreError (history unreadable).
+ * @example await judgeRequestedRun(ctx, { history: 'h.json', series: 'default' }) // { config, history, run, report }
+ */
+export async function judgeRequestedRun(
+  ctx: CommandContext,
+  options: RequestedRunOptions,
+): Promise<{ config: Config; history: History; run: Run; report: Report }> {
+  const config = await loadConfig(ctx, options.config);
+  const opened = await openHistory(ctx, options.history, options.series);
+  const { history, run } =
+    options.metrics === undefined
+      ? splitNewest(opened.history, options.history)
+      : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
+  return { config, history, run, report: runGate({ config, history, run, series: options.series }) };
+}
