@@ -84,6 +84,84 @@ module.exports.createColors = createColors
 
 /***/ }),
 
+/***/ 18370:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+
+// EXPORTS
+__webpack_require__.d(__webpack_exports__, {
+  v: () => (/* binding */ judgeRequestedRun)
+});
+
+// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
+var gate = __webpack_require__(71178);
+// EXTERNAL MODULE: ./src/cli/load-config.ts
+var load_config = __webpack_require__(86783);
+// EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
+var load_run = __webpack_require__(35946);
+// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
+var open_history = __webpack_require__(14695);
+// EXTERNAL MODULE: ./src/model/input-error.ts
+var input_error = __webpack_require__(38250);
+;// CONCATENATED MODULE: ./src/cli/split-newest.ts
+
+/**
+ * For `explain` and `report` without `--metrics`: the newest recorded run becomes "this run" and
+ * the runs before it the history, so a maintainer can see how the last trusted run was judged.
+ * @throws InputError when the history holds no runs.
+ * @example splitNewest(h).run.metrics.get('latency/p50') // the newest run's value of that metric
+ */
+function splitNewest(history, source) {
+    const last = history.runs.length - 1;
+    const newest = history.runs[last];
+    if (newest === undefined) {
+        throw new input_error/* InputError */.d('the history holds no runs, so there is nothing to judge', {
+            where: source,
+            fix: 'pass this run\'s metric files with --metrics, or record runs first (bellgate record / import)',
+        });
+    }
+    const metrics = new Map();
+    const columns = new Map();
+    for (const [name, column] of history.columns) {
+        const value = column.values[last];
+        if (value !== undefined && !Number.isNaN(value)) {
+            metrics.set(name, column.unit === undefined ? { value, count: 1 } : { value, unit: column.unit, count: 1 });
+        }
+        const earlier = column.values.slice(0, last);
+        if (earlier.some((v) => !Number.isNaN(v)))
+            columns.set(name, { ...column, values: earlier });
+    }
+    return {
+        history: { series: history.series, runs: history.runs.slice(0, last), columns },
+        run: { metrics, meta: new Map() },
+        id: newest.id,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/cli/judge-requested-run.ts
+
+
+
+
+
+/**
+ * The run `explain` and `report` look at, judged: the metric files given with --metrics against
+ * the whole history, or without them the newest recorded run against the runs before it.
+ * @throws InputError (bad files, flags), StoreError (history unreadable).
+ * @example await judgeRequestedRun(ctx, { history: 'h.json', series: 'default' }) // { config, history, run, report }
+ */
+async function judgeRequestedRun(ctx, options) {
+    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
+    const opened = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
+    const { history, run } = options.metrics === undefined
+        ? splitNewest(opened.history, options.history)
+        : { history: opened.history, run: await (0,load_run/* loadRun */.S)(ctx, config, { ...options, metrics: options.metrics }) };
+    return { config, history, run, report: (0,gate/* runGate */.R)({ config, history, run, series: options.series }) };
+}
+
+
+/***/ }),
+
 /***/ 82535:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
@@ -97,8 +175,6 @@ __webpack_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/config/rules.ts
 var rules = __webpack_require__(85413);
-// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
-var gate = __webpack_require__(71178);
 // EXTERNAL MODULE: ./src/gate/baseline.ts + 1 modules
 var gate_baseline = __webpack_require__(64614);
 // EXTERNAL MODULE: ./src/model/input-error.ts
@@ -229,14 +305,8 @@ function renderExplain(input) {
     return out.join('\n') + '\n';
 }
 
-// EXTERNAL MODULE: ./src/cli/load-config.ts
-var load_config = __webpack_require__(86783);
-// EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
-var load_run = __webpack_require__(35946);
-// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
-var open_history = __webpack_require__(14695);
-// EXTERNAL MODULE: ./src/cli/split-newest.ts
-var split_newest = __webpack_require__(74977);
+// EXTERNAL MODULE: ./src/cli/judge-requested-run.ts + 1 modules
+var judge_requested_run = __webpack_require__(18370);
 // EXTERNAL MODULE: ./src/config/did-you-mean.ts
 var did_you_mean = __webpack_require__(99255);
 ;// CONCATENATED MODULE: ./src/cli/close-names.ts
@@ -272,10 +342,6 @@ function closeNames(typed, names, limit = 3) {
 
 
 
-
-
-
-
 /**
  * The work of `bellgate explain METRIC` (loaded only when that command runs): judges the run and
  * draws the one metric's decision on stdout.
@@ -283,12 +349,7 @@ function closeNames(typed, names, limit = 3) {
  * @example await runExplain(ctx, 'latency/geocode-p95', { history: 'h.json', series: 'default' })
  */
 async function runExplain(ctx, metric, options) {
-    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
-    const opened = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
-    const { history, run } = options.metrics === undefined
-        ? (0,split_newest/* splitNewest */.L)(opened.history, options.history)
-        : { history: opened.history, run: await (0,load_run/* loadRun */.S)(ctx, config, { ...options, metrics: options.metrics }) };
-    const report = (0,gate/* runGate */.R)({ config, history, run, series: options.series });
+    const { config, history, run, report } = await (0,judge_requested_run/* judgeRequestedRun */.v)(ctx, options);
     const result = report.metrics.find((m) => m.name === metric);
     if (result === undefined) {
         const known = [...new Set([...history.columns.keys(), ...run.metrics.keys()])];
@@ -310,50 +371,6 @@ async function runExplain(ctx, metric, options) {
         ...(Number.isInteger(width) && width >= 40 ? { width: Math.min(width, 160) } : {}),
     });
     ctx.io.stdout(text.endsWith('\n') ? text : `${text}\n`);
-}
-
-
-/***/ }),
-
-/***/ 74977:
-/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
-
-/* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   L: () => (/* binding */ splitNewest)
-/* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-
-/**
- * For `explain` and `report` without `--metrics`: the newest recorded run becomes "this run" and
- * the runs before it the history, so a maintainer can see how the last trusted run was judged.
- * @throws InputError when the history holds no runs.
- * @example splitNewest(h).run.metrics.get('latency/p50') // the newest run's value of that metric
- */
-function splitNewest(history, source) {
-    const last = history.runs.length - 1;
-    const newest = history.runs[last];
-    if (newest === undefined) {
-        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('the history holds no runs, so there is nothing to judge', {
-            where: source,
-            fix: 'pass this run\'s metric files with --metrics, or record runs first (bellgate record / import)',
-        });
-    }
-    const metrics = new Map();
-    const columns = new Map();
-    for (const [name, column] of history.columns) {
-        const value = column.values[last];
-        if (value !== undefined && !Number.isNaN(value)) {
-            metrics.set(name, column.unit === undefined ? { value, count: 1 } : { value, unit: column.unit, count: 1 });
-        }
-        const earlier = column.values.slice(0, last);
-        if (earlier.some((v) => !Number.isNaN(v)))
-            columns.set(name, { ...column, values: earlier });
-    }
-    return {
-        history: { series: history.series, runs: history.runs.slice(0, last), columns },
-        run: { metrics, meta: new Map() },
-        id: newest.id,
-    };
 }
 
 

@@ -2,6 +2,84 @@ export const id = 574;
 export const ids = [574];
 export const modules = {
 
+/***/ 18370:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+
+// EXPORTS
+__webpack_require__.d(__webpack_exports__, {
+  v: () => (/* binding */ judgeRequestedRun)
+});
+
+// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
+var gate = __webpack_require__(71178);
+// EXTERNAL MODULE: ./src/cli/load-config.ts
+var load_config = __webpack_require__(86783);
+// EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
+var load_run = __webpack_require__(35946);
+// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
+var open_history = __webpack_require__(14695);
+// EXTERNAL MODULE: ./src/model/input-error.ts
+var input_error = __webpack_require__(38250);
+;// CONCATENATED MODULE: ./src/cli/split-newest.ts
+
+/**
+ * For `explain` and `report` without `--metrics`: the newest recorded run becomes "this run" and
+ * the runs before it the history, so a maintainer can see how the last trusted run was judged.
+ * @throws InputError when the history holds no runs.
+ * @example splitNewest(h).run.metrics.get('latency/p50') // the newest run's value of that metric
+ */
+function splitNewest(history, source) {
+    const last = history.runs.length - 1;
+    const newest = history.runs[last];
+    if (newest === undefined) {
+        throw new input_error/* InputError */.d('the history holds no runs, so there is nothing to judge', {
+            where: source,
+            fix: 'pass this run\'s metric files with --metrics, or record runs first (bellgate record / import)',
+        });
+    }
+    const metrics = new Map();
+    const columns = new Map();
+    for (const [name, column] of history.columns) {
+        const value = column.values[last];
+        if (value !== undefined && !Number.isNaN(value)) {
+            metrics.set(name, column.unit === undefined ? { value, count: 1 } : { value, unit: column.unit, count: 1 });
+        }
+        const earlier = column.values.slice(0, last);
+        if (earlier.some((v) => !Number.isNaN(v)))
+            columns.set(name, { ...column, values: earlier });
+    }
+    return {
+        history: { series: history.series, runs: history.runs.slice(0, last), columns },
+        run: { metrics, meta: new Map() },
+        id: newest.id,
+    };
+}
+
+;// CONCATENATED MODULE: ./src/cli/judge-requested-run.ts
+
+
+
+
+
+/**
+ * The run `explain` and `report` look at, judged: the metric files given with --metrics against
+ * the whole history, or without them the newest recorded run against the runs before it.
+ * @throws InputError (bad files, flags), StoreError (history unreadable).
+ * @example await judgeRequestedRun(ctx, { history: 'h.json', series: 'default' }) // { config, history, run, report }
+ */
+async function judgeRequestedRun(ctx, options) {
+    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
+    const opened = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
+    const { history, run } = options.metrics === undefined
+        ? splitNewest(opened.history, options.history)
+        : { history: opened.history, run: await (0,load_run/* loadRun */.S)(ctx, config, { ...options, metrics: options.metrics }) };
+    return { config, history, run, report: (0,gate/* runGate */.R)({ config, history, run, series: options.series }) };
+}
+
+
+/***/ }),
+
 /***/ 26574:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
@@ -17,8 +95,6 @@ __webpack_require__.d(__webpack_exports__, {
 var promises_ = __webpack_require__(51455);
 // EXTERNAL MODULE: external "node:path"
 var external_node_path_ = __webpack_require__(76760);
-// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
-var gate = __webpack_require__(71178);
 // EXTERNAL MODULE: ./src/report/cells.ts
 var cells = __webpack_require__(10571);
 // EXTERNAL MODULE: ./src/report/escape.ts
@@ -561,21 +637,11 @@ function renderHtmlReport(input) {
     ].join('\n');
 }
 
-// EXTERNAL MODULE: ./src/cli/load-config.ts
-var load_config = __webpack_require__(86783);
-// EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
-var load_run = __webpack_require__(35946);
-// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
-var open_history = __webpack_require__(14695);
+// EXTERNAL MODULE: ./src/cli/judge-requested-run.ts + 1 modules
+var judge_requested_run = __webpack_require__(18370);
 // EXTERNAL MODULE: ./src/cli/paths.ts
 var paths = __webpack_require__(45450);
-// EXTERNAL MODULE: ./src/cli/split-newest.ts
-var split_newest = __webpack_require__(74977);
 ;// CONCATENATED MODULE: ./src/cli/run/report.ts
-
-
-
-
 
 
 
@@ -588,12 +654,7 @@ var split_newest = __webpack_require__(74977);
  * @example await runReport(ctx, { history: 'h.json', html: 'report.html', series: 'default' })
  */
 async function runReport(ctx, options) {
-    const config = await (0,load_config/* loadConfig */.Z)(ctx, options.config);
-    const opened = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
-    const { history, run } = options.metrics === undefined
-        ? (0,split_newest/* splitNewest */.L)(opened.history, options.history)
-        : { history: opened.history, run: await (0,load_run/* loadRun */.S)(ctx, config, { ...options, metrics: options.metrics }) };
-    const report = (0,gate/* runGate */.R)({ config, history, run, series: options.series });
+    const { history, report } = await (0,judge_requested_run/* judgeRequestedRun */.v)(ctx, options);
     const html = renderHtmlReport({
         report,
         history,
@@ -604,50 +665,6 @@ async function runReport(ctx, options) {
     await (0,promises_.mkdir)((0,external_node_path_.dirname)(out), { recursive: true });
     await (0,promises_.writeFile)(out, html);
     ctx.io.stdout(`wrote ${out} (verdict ${report.verdict}, ${report.metrics.length} metrics)\n`);
-}
-
-
-/***/ }),
-
-/***/ 74977:
-/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
-
-/* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   L: () => (/* binding */ splitNewest)
-/* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-
-/**
- * For `explain` and `report` without `--metrics`: the newest recorded run becomes "this run" and
- * the runs before it the history, so a maintainer can see how the last trusted run was judged.
- * @throws InputError when the history holds no runs.
- * @example splitNewest(h).run.metrics.get('latency/p50') // the newest run's value of that metric
- */
-function splitNewest(history, source) {
-    const last = history.runs.length - 1;
-    const newest = history.runs[last];
-    if (newest === undefined) {
-        throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('the history holds no runs, so there is nothing to judge', {
-            where: source,
-            fix: 'pass this run\'s metric files with --metrics, or record runs first (bellgate record / import)',
-        });
-    }
-    const metrics = new Map();
-    const columns = new Map();
-    for (const [name, column] of history.columns) {
-        const value = column.values[last];
-        if (value !== undefined && !Number.isNaN(value)) {
-            metrics.set(name, column.unit === undefined ? { value, count: 1 } : { value, unit: column.unit, count: 1 });
-        }
-        const earlier = column.values.slice(0, last);
-        if (earlier.some((v) => !Number.isNaN(v)))
-            columns.set(name, { ...column, values: earlier });
-    }
-    return {
-        history: { series: history.series, runs: history.runs.slice(0, last), columns },
-        run: { metrics, meta: new Map() },
-        id: newest.id,
-    };
 }
 
 
