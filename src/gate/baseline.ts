@@ -36,40 +36,68 @@ export interface SelectedBaseline {
  */
 export function selectBaseline(history: History, name: string, settings: MetricSettings): SelectedBaseline {
   const column = history.columns.get(name);
+  const plain = settings.transform === 'none' && settings.relativeTo === undefined;
+  const selected: SelectedBaseline =
+    column === undefined
+      ? { values: [], runIds: [], available: 0 }
+      : plain
+        ? newestWindow(history, column.values, settings.window)
+        : checkedWindow(history, name, column.values, settings);
+  if (settings.relativeTo !== undefined) selected.relativeTo = settings.relativeTo;
+  return settings.changePoints ? sinceLastChange(selected, settings.minRuns) : selected;
+}
+
+/**
+ * The plain scale (no transform, no ratio), where no value can be refused: walks back from the
+ * newest run only until `window` values are found, and just counts the older ones.
+ */
+function newestWindow(history: History, column: readonly number[], window: number): SelectedBaseline {
+  const count = Math.min(column.length, history.runs.length);
+  const values: number[] = [];
+  const runIds: string[] = [];
+  let i = count - 1;
+  for (; i >= 0 && values.length < window; i--) {
+    const x = column[i]!;
+    if (!Number.isFinite(x)) continue;
+    values.push(x);
+    runIds.push(history.runs[i]!.id);
+  }
+  let available = values.length;
+  for (; i >= 0; i--) if (Number.isFinite(column[i]!)) available++;
+  return { values: values.reverse(), runIds: runIds.reverse(), available };
+}
+
+/** Any other scale: every value of the history is checked, since the transform or ratio can refuse it. */
+function checkedWindow(history: History, name: string, column: readonly number[], settings: MetricSettings): SelectedBaseline {
   const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
   const values: number[] = [];
   const runIds: string[] = [];
   let available = 0;
-  if (column !== undefined) {
-    const count = Math.min(column.values.length, history.runs.length);
-    // Only the newest `window` pairs are kept, so count the pairs first and build just those
-    // (a long history otherwise costs an array entry and a run-id lookup per run and metric).
-    const paired = pairs(column.values, reference?.values, count, settings.relativeTo !== undefined);
-    const firstKept = paired - settings.window;
-    // Values before the window are still checked when the scale can refuse them (log, ratios).
-    const checkAll = settings.transform !== 'none' || settings.relativeTo !== undefined;
-    let k = 0;
-    for (let i = 0; i < count; i++) {
-      let x = column.values[i]!;
-      if (!Number.isFinite(x)) continue;
-      available++;
-      if (settings.relativeTo !== undefined) {
-        const r = reference?.values[i];
-        if (r === undefined || !Number.isFinite(r) || r === 0) continue;
-        x /= r;
-      }
-      if (k++ < firstKept) {
-        if (checkAll) toHistoryFitScale(x, settings, name, history.runs[i]!.id);
-        continue;
-      }
-      const id = history.runs[i]!.id;
-      values.push(toHistoryFitScale(x, settings, name, id));
-      runIds.push(id);
+  const count = Math.min(column.length, history.runs.length);
+  // Only the newest `window` pairs are kept, so count the pairs first and build just those
+  // (a long history otherwise costs an array entry and a run-id lookup per run and metric).
+  const paired = pairs(column, reference?.values, count, settings.relativeTo !== undefined);
+  const firstKept = paired - settings.window;
+  let k = 0;
+  for (let i = 0; i < count; i++) {
+    let x = column[i]!;
+    if (!Number.isFinite(x)) continue;
+    available++;
+    if (settings.relativeTo !== undefined) {
+      const r = reference?.values[i];
+      if (r === undefined || !Number.isFinite(r) || r === 0) continue;
+      x /= r;
     }
+    // Values before the window are still checked: the scale can refuse them (log, ratios).
+    if (k++ < firstKept) {
+      toHistoryFitScale(x, settings, name, history.runs[i]!.id);
+      continue;
+    }
+    const id = history.runs[i]!.id;
+    values.push(toHistoryFitScale(x, settings, name, id));
+    runIds.push(id);
   }
-  const selected: SelectedBaseline = { values, runIds, available };
-  if (settings.relativeTo !== undefined) selected.relativeTo = settings.relativeTo;
-  return settings.changePoints ? sinceLastChange(selected, settings.minRuns) : selected;
+  return { values, runIds, available };
 }
 
 /** Keeps only the runs after the last level change, once they are at least `minRuns`. */

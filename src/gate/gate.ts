@@ -4,9 +4,9 @@ import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
 import { cutoffLevel } from '../model/tails.js';
 import { decideMetric, type Test } from './decide-metric.js';
-import { familyTests, type FamilyItem } from './family-test.js';
+import { familyTests } from './family-test.js';
 import type { GroupMemberInput } from './group-frame.js';
-import { judgeGroups } from './judge-groups.js';
+import { judgeGroups, type PendingGroup } from './judge-groups.js';
 import type { MetricScore } from './judge-metric.js';
 import { judgeName, metricNames } from './judge-name.js';
 import { REPORT_SCHEMA, type GroupResult, type MetricResult, type Report } from './report.js';
@@ -38,13 +38,21 @@ export function runGate(input: GateInput): Report {
     if ('score' in entry) scored.push(entry);
     else finished.push(entry.result);
   }
-  const groupOutcome = judgeGroups(config, scored, (name) => groupFor(config, name)?.name);
-  const lone = scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
-  const items: FamilyItem[] = [
-    ...lone.map((e) => ({ tail: e.score.result.tail ?? 1, level: cutoffLevel(e.score.settings.cutoff) })),
-    ...groupOutcome.pending.map((g) => ({ tail: g.analysis.tail, level: g.level })),
-  ];
-  const tests = familyTests(items, config.family);
+  // Without groups or family control (the defaults) nothing below changes a lone score, so the
+  // per-metric group lookups and cutoff levels are skipped.
+  const groupOutcome =
+    config.groups.length === 0 ? NO_GROUPS : judgeGroups(config, scored, (name) => groupFor(config, name)?.name);
+  const lone = groupOutcome.judged.size === 0 ? scored : scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
+  const tests =
+    config.family === 'none'
+      ? []
+      : familyTests(
+          [
+            ...lone.map((e) => ({ tail: e.score.result.tail ?? 1, level: cutoffLevel(e.score.settings.cutoff) })),
+            ...groupOutcome.pending.map((g) => ({ tail: g.analysis.tail, level: g.level })),
+          ],
+          config.family,
+        );
   const metrics = [...finished];
   lone.forEach((e, i) => metrics.push(decideLone(e.score, tests[i])));
   const groups: GroupResult[] = [...groupOutcome.learning];
@@ -67,3 +75,10 @@ function decideLone(score: MetricScore, family: { adjusted: number; test: Test }
   if (family === undefined || !score.scored) return score.result;
   return { ...decideMetric(score, family.test), adjusted: family.adjusted };
 }
+
+/** What judgeGroups returns when the config names no groups. */
+const NO_GROUPS: { judged: ReadonlySet<string>; pending: readonly PendingGroup[]; learning: readonly GroupResult[] } = {
+  judged: new Set(),
+  pending: [],
+  learning: [],
+};

@@ -1,6 +1,6 @@
 import { InputError } from './input-error.js';
 import { MAD_TO_SIGMA } from './fit.js';
-import { median, medianAbsoluteDeviation } from './median.js';
+import { medianInPlace } from './median.js';
 
 /** Options of detectChangePoints. */
 export interface ChangePointOptions {
@@ -11,18 +11,60 @@ export interface ChangePointOptions {
 }
 
 /**
- * The noise sigma, estimated from successive differences so level shifts barely bias it:
- * x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one difference only.
- * Robust (1.4826 MAD / sqrt 2), falling back to the plain RMS of differences for quantised data.
+ * Scratch buffers shared by every call (the gate runs this once per metric; fresh typed arrays per
+ * call were most of its cost). Grown on demand, never shrunk; safe because a call never yields
+ * and nothing it calls re-enters detectChangePoints.
  */
-function noiseSigma(centred: Float64Array): number {
-  const diffs = new Float64Array(centred.length - 1);
-  for (let i = 1; i < centred.length; i++) diffs[i - 1] = centred[i]! - centred[i - 1]!;
-  const robust = (MAD_TO_SIGMA * medianAbsoluteDeviation(diffs)) / Math.SQRT2;
+let scratchSize = 0;
+let work = new Float64Array(0);
+let centred = new Float64Array(0);
+let sum = new Float64Array(0);
+let sumSq = new Float64Array(0);
+let best = new Float64Array(0);
+let totals = new Float64Array(0);
+let previous = new Int32Array(0);
+let candidates = new Int32Array(0);
+
+function ensureScratch(n: number): void {
+  if (n + 1 <= scratchSize) return;
+  scratchSize = Math.max(n + 1, 2 * scratchSize);
+  work = new Float64Array(scratchSize);
+  centred = new Float64Array(scratchSize);
+  sum = new Float64Array(scratchSize);
+  sumSq = new Float64Array(scratchSize);
+  best = new Float64Array(scratchSize);
+  totals = new Float64Array(scratchSize);
+  previous = new Int32Array(scratchSize);
+  candidates = new Int32Array(scratchSize);
+}
+
+/**
+ * The noise sigma of centred[0..n), estimated from successive differences so level shifts barely
+ * bias it: x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one
+ * difference only. Robust (1.4826 MAD / sqrt 2), falling back to the plain RMS of differences for
+ * quantised data. The MAD is taken by selection in the `work` buffer (no sort, no copy).
+ */
+function noiseSigma(n: number): number {
+  const m = n - 1;
+  for (let i = 1; i < n; i++) work[i - 1] = finite(centred[i]! - centred[i - 1]!, i);
+  const centre = medianInPlace(work, m);
+  // Refilled in series order (not from the reordered buffer) so an overflow names its position.
+  for (let i = 1; i < n; i++) work[i - 1] = finite(Math.abs(centred[i]! - centred[i - 1]! - centre), i);
+  const robust = (MAD_TO_SIGMA * medianInPlace(work, m)) / Math.SQRT2;
   if (robust > 0) return robust;
+  // Summed in series order, as the differences come.
   let squares = 0;
-  for (const d of diffs) squares += d * d;
-  return Math.sqrt(squares / (2 * diffs.length));
+  for (let i = 1; i < n; i++) {
+    const d = centred[i]! - centred[i - 1]!;
+    squares += d * d;
+  }
+  return Math.sqrt(squares / (2 * m));
+}
+
+/** x, or InputError when a difference overflowed (values near the largest double). */
+function finite(x: number, position: number): number {
+  if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${position} is not a finite number`);
+  return x;
 }
 
 /**
@@ -57,25 +99,25 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
     });
     return [];
   }
-  const centre = median(values);
-  const centred = new Float64Array(n);
+  ensureScratch(n);
+  for (let i = 0; i < n; i++) {
+    const x = values[i]!;
+    if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${i + 1} is not a finite number`);
+    work[i] = x;
+  }
+  const centre = medianInPlace(work, n);
   for (let i = 0; i < n; i++) centred[i] = values[i]! - centre;
-  const sigma = noiseSigma(centred);
+  const sigma = noiseSigma(n);
   if (!(sigma > 0)) return [];
-  const sum = new Float64Array(n + 1);
-  const sumSq = new Float64Array(n + 1);
+  sum[0] = 0;
+  sumSq[0] = 0;
   for (let i = 0; i < n; i++) {
     const z = centred[i]! / sigma;
     sum[i + 1] = sum[i]! + z;
     sumSq[i + 1] = sumSq[i]! + z * z;
   }
-  const best = new Float64Array(n + 1).fill(Infinity);
-  const previous = new Int32Array(n + 1);
   best[0] = -penalty;
-  // The candidate starts and their totals live in fixed typed arrays, pruned in place: the gate
-  // runs this once per metric, and a fresh array and closure per step was most of its cost.
-  const candidates = new Int32Array(n + 1);
-  const totals = new Float64Array(n + 1);
+  // The candidate starts and their totals live in the scratch arrays, pruned in place.
   let count = 0;
   for (let end = minSegment; end <= n; end++) {
     // The start that just became far enough back joins the candidates, if it can end a segment.
