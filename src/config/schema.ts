@@ -1,5 +1,6 @@
-import { Ajv, type ErrorObject, type ValidateFunction } from 'ajv';
+import type { ErrorObject } from 'ajv';
 import schema from './bellgate.schema.json' with { type: 'json' };
+import { validate } from './schema-validator.generated.js';
 
 /**
  * The JSON Schema of `.github/bellgate.yml` (draft-07), the same file that ships in the package
@@ -7,16 +8,15 @@ import schema from './bellgate.schema.json' with { type: 'json' };
  */
 export const configSchema: Readonly<Record<string, unknown>> = schema;
 
-let validate: ValidateFunction | undefined;
-
 /**
  * Validates plain data (from the YAML tree) against the config schema and returns every error
- * (ajv allErrors, verbose so each error carries its schema node for wording). Compiled once.
+ * (ajv allErrors, verbose so each error carries its schema node for wording).
+ * The validator is ajv's own code for this schema, generated ahead of time
+ * (schema-validator.generated.js, `npm run gen:config-validator`): compiling it at every start
+ * cost about 40 ms and loading ajv's compiler another 275 KB. test/config/schema.test.ts checks
+ * the schema against the draft-07 meta-schema; validator-fresh.test.ts that the module is current.
  * @example schemaErrors({ defaults: { cutoff: 2 } })[0].keyword // 'exclusiveMaximum'
  */
 export function schemaErrors(value: unknown): ErrorObject[] {
-  // validateSchema: false skips checking our own schema against the draft-07 meta-schema on every
-  // start (about 55 ms, test/bench/README.md); test/config/schema.test.ts checks it once instead.
-  validate ??= new Ajv({ allErrors: true, verbose: true, strict: true, validateSchema: false }).compile(schema);
   return validate(value) ? [] : [...(validate.errors ?? [])];
 }
