@@ -101,30 +101,33 @@ function decodeMetrics(table: unknown, runCount: number, report: ProblemSink): M
   return columns;
 }
 
-/** Checks one value column in place: numbers stay, null becomes NaN, anything else is reported. */
+/**
+ * Checks one value column in place, in one tight pass: numbers stay, null becomes NaN, anything
+ * else is reported. NaN is already "missing": scanHistoryBytes reads null as NaN (JSON.parse never
+ * makes one). Rows the scan read are arrays of doubles, so the usual pass only compares numbers.
+ */
 function checkColumn(column: unknown, m: number, runCount: number, report: ProblemSink): number[] | undefined {
-  const path = at('metrics.values', m);
   if (!Array.isArray(column) || column.length !== runCount) {
-    report(path, `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`,
+    report(at('metrics.values', m), `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`,
       'the columns are ragged: a column was cut or extended by hand; restore the document from a backup');
     return undefined;
   }
   const cells = column as unknown[];
   for (let r = 0; r < runCount; r++) {
     const v = cells[r];
+    // v - v is 0 for every finite number, NaN for NaN and the infinities.
     if (typeof v === 'number') {
-      // JSON.parse turns an overflowing literal such as 1e999 into Infinity.
-      if (v - v !== 0) {
-        report(at(path, r), `value ${v} is not finite (an overflowing number such as 1e999?)`);
-        cells[r] = NaN;
-      }
+      if (v - v !== 0 && v === v) badCell(cells, m, r, `value ${v} is not finite (an overflowing number such as 1e999?)`, report);
     } else if (v === null) cells[r] = NaN;
-    else {
-      report(at(path, r), `a value must be a number or null (missing), found ${typeName(v)}`);
-      cells[r] = NaN;
-    }
+    else badCell(cells, m, r, `a value must be a number or null (missing), found ${typeName(v)}`, report);
   }
   return cells as number[];
+}
+
+/** Reports a bad entry (JSON.parse turns an overflowing literal such as 1e999 into Infinity) and makes it missing. */
+function badCell(cells: unknown[], m: number, r: number, problem: string, report: ProblemSink): void {
+  report(at(at('metrics.values', m), r), problem);
+  cells[r] = NaN;
 }
 
 function lengthOrType(value: unknown): string {

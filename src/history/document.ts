@@ -4,6 +4,7 @@ import { decodeV2, RUN_FIELDS } from './decode-v2.js';
 import type { History } from './history.js';
 import { parseJsonText } from './json-text.js';
 import { isObject, throwingSink, typeName, type ProblemSink } from './problems.js';
+import { scanHistoryBytes } from './values-scan.js';
 
 /**
  * The history document, one per series. Version 2 is written; version 1 is still read.
@@ -72,6 +73,34 @@ export function parseHistory(text: string, source: string): History {
 }
 
 /**
+ * parseHistory for the file's bytes, taking the fast road when it can: scanHistoryBytes reads the
+ * values rows straight into doubles (no JSON.parse object per number) and JSON.parse reads only
+ * the small rest. Any document the scan declines (another version, odd but valid JSON, or broken
+ * JSON) is decoded from its UTF-8 text by parseHistory, so the result and every error are the same.
+ * `rows` says where each values row lies in `bytes` (present only after a scan), which lets a
+ * store write an append by splicing the old rows (splice-append.ts).
+ * Throws InputError exactly as parseHistory.
+ *
+ * @example parseHistoryBytes(readFileSync('h.json'), 'h.json').history.runs.length // 120
+ */
+export function parseHistoryBytes(bytes: Uint8Array, source: string): { history: History; rows?: ValueRows } {
+  const scanned = scanHistoryBytes(bytes);
+  if (scanned === undefined) return { history: parseHistory(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), source) };
+  const history = decodeHistoryDocument(scanned.root, throwingSink(source));
+  if (!history) throw new InputError('unreadable history document', { where: source });
+  return { history, rows: { valuesStart: scanned.valuesStart, rowEnds: scanned.rowEnds } };
+}
+
+/**
+ * Where the values rows lie in the bytes a document was read from: the `[` that opens
+ * metrics.values and each row's closing `]`, in row order (only space and commas between rows).
+ */
+export interface ValueRows {
+  valuesStart: number;
+  rowEnds: number[];
+}
+
+/**
  * Writes a History as a version-2 document (layout above). NaN is written as null (missing).
  * Throws InputError when the History is inconsistent (a column not aligned with the runs, an
  * infinite value, a duplicated run id), so a broken History is never stored.
@@ -80,38 +109,64 @@ export function parseHistory(text: string, source: string): History {
  * // '{"schema":"bellgate.history/2","series":"s",\n"runs":{"id":[],...},\n"metrics":{...,"values":[\n]}}\n'
  */
 export function serializeHistory(h: History): string {
-  checkConsistent(h);
+  checkRuns(h);
+  for (const [name, column] of h.columns) checkStorable(h, name, column.values);
+  // JSON.stringify writes NaN as null, which is exactly the "missing" marker.
+  const lines = [...h.columns.values()].map((c) => JSON.stringify(c.values));
+  return `${historyHead(h)}${lines.join(',\n')}${HISTORY_TAIL}`;
+}
+
+/**
+ * Everything of the version-2 layout before the first values row: schema, series, the runs table,
+ * names and units, up to `"values":[` and its newline. The rows follow, joined by ",\n", then
+ * HISTORY_TAIL. Shared by serializeHistory and the text splice of an append (splice-append.ts).
+ *
+ * @example historyHead(emptyHistory('s')).endsWith('"values":[\n') // true
+ */
+export function historyHead(h: History): string {
   const runs: Record<string, unknown[]> = { id: h.runs.map((r) => r.id) };
   for (const field of RUN_FIELDS) runs[field] = h.runs.map((r) => r[field] ?? null);
   const names = [...h.columns.keys()];
   const units = [...h.columns.values()].map((c) => c.unit ?? null);
-  // JSON.stringify writes NaN as null, which is exactly the "missing" marker.
-  const lines = [...h.columns.values()].map((c) => JSON.stringify(c.values));
   return (
     `{"schema":${JSON.stringify(HISTORY_SCHEMA)},"series":${JSON.stringify(h.series)},\n` +
     `"runs":${JSON.stringify(runs)},\n` +
-    `"metrics":{"names":${JSON.stringify(names)},"units":${JSON.stringify(units)},"values":[\n` +
-    `${lines.join(',\n')}]}}\n`
+    `"metrics":{"names":${JSON.stringify(names)},"units":${JSON.stringify(units)},"values":[\n`
   );
 }
 
-function checkConsistent(h: History): void {
-  const where = `history of series ${JSON.stringify(h.series)}`;
-  const fix = 'this is a bug in the code that built the history; please report it';
+/** What closes a version-2 document after its last values row. */
+export const HISTORY_TAIL = ']}}\n';
+
+const NOT_STORABLE_FIX = 'this is a bug in the code that built the history; please report it';
+const storeWhere = (h: History): string => `history of series ${JSON.stringify(h.series)}`;
+
+/**
+ * The runs half of the check before storing: every run has an id and no id appears twice.
+ * Throws InputError, so a broken History is never stored.
+ */
+export function checkRuns(h: History): void {
+  const where = storeWhere(h);
   const ids = new Set<string>();
   for (const run of h.runs) {
-    if (typeof run.id !== 'string' || run.id === '') throw new InputError('a run without an id cannot be stored', { where, fix });
-    if (ids.has(run.id)) throw new InputError(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix });
+    if (typeof run.id !== 'string' || run.id === '') throw new InputError('a run without an id cannot be stored', { where, fix: NOT_STORABLE_FIX });
+    if (ids.has(run.id)) throw new InputError(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
     ids.add(run.id);
   }
-  for (const [name, column] of h.columns) {
-    if (column.values.length !== h.runs.length) {
-      throw new InputError(`metric ${JSON.stringify(name)} has ${column.values.length} values for ${h.runs.length} runs`, { where, fix });
-    }
-    for (const v of column.values) {
-      if (v === Infinity || v === -Infinity || typeof v !== 'number') {
-        throw new InputError(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, { where, fix });
-      }
+}
+
+/**
+ * The column half: one value per run, each a finite number or NaN (missing). `from` skips values
+ * already known to be storable (an append checks only what it adds). Throws InputError.
+ */
+export function checkStorable(h: History, name: string, values: readonly number[], from = 0): void {
+  if (values.length !== h.runs.length) {
+    throw new InputError(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, { where: storeWhere(h), fix: NOT_STORABLE_FIX });
+  }
+  for (let i = from; i < values.length; i++) {
+    const v = values[i];
+    if (v === Infinity || v === -Infinity || typeof v !== 'number') {
+      throw new InputError(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, { where: storeWhere(h), fix: NOT_STORABLE_FIX });
     }
   }
 }

@@ -2,9 +2,10 @@ import { createHash, randomBytes } from 'node:crypto';
 import { mkdir, open, readFile, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../model/input-error.js';
-import { parseHistory, serializeHistory } from './document.js';
+import { parseHistoryBytes, serializeHistory } from './document.js';
 import { emptyHistory, type History, type RunInfo } from './history.js';
 import { concurrentRuns, healConcurrent } from './merge.js';
+import { spliceHistory, type WrittenHistory } from './splice-append.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 
 /**
@@ -24,7 +25,9 @@ export const HISTORY_FILE_LIMIT = 500 * 1024 * 1024;
  *   be a readable history of this series) and keeps the runs another writer added since the load
  *   (healConcurrent; parsed again only when its bytes differ from every loaded document's, or h
  *   lacks some of their runs; the window between re-read and rename is left to the caller to keep
- *   single-writer, e.g. one CI job per series), then writes atomically: a temp file in the same
+ *   single-writer, e.g. one CI job per series), then writes: when h is the loaded document plus
+ *   appended runs (and perhaps trimmed), by splicing the loaded rows' bytes (spliceHistory, same
+ *   meaning as serializeHistory, which writes anything else), and atomically: a temp file in the same
  *   folder (so rename stays on one file system), fsync, rename over the old file, fsync the folder.
  *   A crash leaves either the old or the new document, never half of one. Creates the folder.
  *
@@ -54,10 +57,11 @@ export function createFileStore(path: string, series: string): HistoryStore {
     }
   }
 
-  function parseText(text: string): History {
-    let history: History;
+  /** The bytes read as a history of this series (parseHistoryBytes), or the StoreError why not. */
+  function parseBytes(bytes: Uint8Array): ReturnType<typeof parseHistoryBytes> {
+    let read: ReturnType<typeof parseHistoryBytes>;
     try {
-      history = parseHistory(text, path);
+      read = parseHistoryBytes(bytes, path);
     } catch (cause) {
       if (!(cause instanceof InputError)) throw cause;
       throw new StoreError(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
@@ -66,29 +70,33 @@ export function createFileStore(path: string, series: string): HistoryStore {
         cause,
       });
     }
-    if (history.series !== series) {
-      throw new StoreError(`the file holds the history of series ${JSON.stringify(history.series)}, not ${JSON.stringify(series)}`, {
+    const found = read.history.series;
+    if (found !== series) {
+      throw new StoreError(`the file holds the history of series ${JSON.stringify(found)}, not ${JSON.stringify(series)}`, {
         where,
-        fix: `use one file per series, or pass --series ${JSON.stringify(history.series)}`,
+        fix: `use one file per series, or pass --series ${JSON.stringify(found)}`,
       });
     }
-    return history;
+    return read;
   }
 
   // The runs of every document load() parsed, by fingerprint of its bytes: when save() finds the
   // same bytes on disk it knows their runs without parsing them again (the costliest step at scale).
   const loaded = new Map<string, RunInfo[]>();
+  // The newest document load() read, kept with its bytes so save() can splice an append into its
+  // rows instead of writing every number again (spliceHistory checks that h still agrees with it).
+  let written: WrittenHistory | undefined;
 
   return {
     describe: () => where,
     async load(): Promise<History> {
-      let bytes = await readBytes();
+      written = undefined;
+      const bytes = await readBytes();
       if (bytes === undefined) return emptyHistory(series);
-      const print = fingerprint(bytes);
-      const text = bytes.toString('utf8');
-      bytes = undefined; // the raw bytes (as large as the file) need not live through the parse
-      const history = parseText(text);
-      loaded.set(print, history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })));
+      const { history, rows } = parseBytes(bytes);
+      loaded.set(fingerprint(bytes), history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })));
+      // The bytes are kept only when they can be spliced (a plain version-2 document).
+      if (rows !== undefined) written = { bytes, rows, history };
       return history;
     },
     async save(h: History, readCount: number): Promise<void> {
@@ -97,17 +105,17 @@ export function createFileStore(path: string, series: string): HistoryStore {
       }
       guardAgainstLoss(where, h, readCount);
       const healed = await healFromDisk(h);
-      let text: string;
+      let text: string | Buffer;
       try {
-        text = serializeHistory(healed);
+        text = (healed === h && written !== undefined ? spliceHistory(h, written) : undefined) ?? serializeHistory(healed);
       } catch (cause) {
         // A document past V8's longest string fails inside serializeHistory with a RangeError.
         if (cause instanceof RangeError) throw tooLarge(undefined, where, 'the history to write would be');
         throw new StoreError(`the history cannot be written: ${messageOf(cause)}`, { where, cause });
       }
       // Characters <= UTF-8 bytes <= 3 x characters: count the bytes only when the bound is unclear.
-      if (text.length * 3 > HISTORY_FILE_LIMIT) {
-        const bytes = Buffer.byteLength(text, 'utf8');
+      if (typeof text !== 'string' || text.length * 3 > HISTORY_FILE_LIMIT) {
+        const bytes = typeof text === 'string' ? Buffer.byteLength(text, 'utf8') : text.length;
         if (bytes > HISTORY_FILE_LIMIT) throw tooLarge(bytes, where, 'the history to write would be');
       }
       await writeAtomically(path, text, where);
@@ -124,9 +132,9 @@ export function createFileStore(path: string, series: string): HistoryStore {
     if (bytes === undefined) return h;
     const runs = loaded.get(fingerprint(bytes));
     if (runs !== undefined && concurrentRuns(h, runs).length === 0) return h;
-    const text = bytes.toString('utf8');
+    const stored = parseBytes(bytes).history;
     bytes = undefined;
-    return healConcurrent(h, parseText(text));
+    return healConcurrent(h, stored);
   }
 }
 
@@ -135,7 +143,7 @@ function fingerprint(bytes: Buffer): string {
   return `${bytes.length}:${createHash('sha1').update(bytes).digest('hex')}`;
 }
 
-async function writeAtomically(path: string, text: string, where: string): Promise<void> {
+async function writeAtomically(path: string, text: string | Uint8Array, where: string): Promise<void> {
   const folder = dirname(path);
   // Short enough that a file name near the 255-byte limit still has room for its temp file.
   const temp = join(folder, `.${basename(path).slice(0, 32)}.${randomBytes(6).toString('hex')}.tmp`);

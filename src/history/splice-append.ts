@@ -1,0 +1,111 @@
+import { checkRuns, checkStorable, HISTORY_TAIL, historyHead, type ValueRows } from './document.js';
+import type { History } from './history.js';
+
+/** A document as read: its bytes, where its values rows lie, and the History decoded from them. */
+export interface WrittenHistory {
+  bytes: Uint8Array;
+  rows: ValueRows;
+  /** What parseHistoryBytes decoded from `bytes`; its arrays must not have been changed since. */
+  history: History;
+}
+
+const COMMA = 0x2c;
+const OPEN_SQUARE = 0x5b;
+
+/** One values row of the output: copied bytes [from, to) of the old document, then `tail`; or fresh text. */
+type Row = { from: number; to: number; tail: string } | string;
+
+/**
+ * serializeHistory(h) for the usual record — `h` is the history read from `written` with runs
+ * appended at the end and possibly the oldest runs dropped (trimHistory) — without writing a
+ * million numbers again: each values row whose kept values are exactly the old row's (same
+ * doubles, NaN for NaN) is the old row's bytes, less the dropped leading entries, plus the new
+ * values; the small head (runs, names, units) is written fresh. A row that differs in any way
+ * (a new metric, a replaced run, a -0 the generic writer would print as 0) is written fresh.
+ * The result parses to exactly what serializeHistory(h) parses to (test/history/splice-append.test.ts).
+ * Returns undefined when the runs do not line up that way (reordered, merged, all dropped);
+ * the caller then uses serializeHistory. Cost: one comparison per kept value and a copy of the bytes.
+ * Throws InputError as serializeHistory does for a History that cannot be stored.
+ *
+ * @example spliceHistory(appendRun(loaded.history, info, run), loaded) ?? Buffer.from(serializeHistory(h))
+ */
+export function spliceHistory(h: History, written: WrittenHistory): Buffer | undefined {
+  checkRuns(h);
+  const base = written.history;
+  const drop = base.runs.findIndex((r) => r.id === h.runs[0]?.id);
+  const kept = base.runs.length - drop;
+  if (drop < 0 || kept > h.runs.length || base.columns.size !== written.rows.rowEnds.length) return undefined;
+  for (let i = 0; i < kept; i++) if ((h.runs[i] as { id: string }).id !== (base.runs[drop + i] as { id: string }).id) return undefined;
+
+  const baseRows = new Map<string, { index: number; values: readonly number[] }>();
+  let index = 0;
+  for (const [name, column] of base.columns) baseRows.set(name, { index: index++, values: column.values });
+  const { bytes, rows: where } = written;
+  const rows: Row[] = [];
+  for (const [name, column] of h.columns) {
+    const values = column.values;
+    const old = baseRows.get(name);
+    const from = old !== undefined && keepsOld(values, old.values, drop, kept) ? rowBody(bytes, where, old.index, drop) : undefined;
+    if (from === undefined) {
+      checkStorable(h, name, values);
+      rows.push(JSON.stringify(values));
+      continue;
+    }
+    checkStorable(h, name, values, kept);
+    let tail = '';
+    for (let i = kept; i < values.length; i++) tail += values[i] === values[i] ? `,${values[i]}` : ',null';
+    rows.push({ from, to: where.rowEnds[old!.index]!, tail: `${tail}]` });
+  }
+  return assemble(historyHead(h), rows, bytes);
+}
+
+/**
+ * True when values[0, kept) are old[drop, drop + kept) exactly, none of them -0 (the bytes might
+ * say "-0" where serializeHistory writes 0), and values holds no fewer entries than that.
+ */
+function keepsOld(values: readonly number[], old: readonly number[], drop: number, kept: number): boolean {
+  if (values.length < kept) return false;
+  for (let i = 0; i < kept; i++) {
+    const x = values[i];
+    const y = old[drop + i] as number;
+    if (x === y) {
+      if (y === 0 && 1 / y < 0) return false;
+    } else if (x === x || y === y) return false;
+  }
+  return true;
+}
+
+/**
+ * The offset where row `index`'s kept entries begin, just after its `[` when nothing is dropped,
+ * else just after the drop-th comma (a row holds only numbers and null, so every comma separates
+ * entries). A leading "[" is written by assemble. Undefined when the row has too few entries.
+ */
+function rowBody(bytes: Uint8Array, where: ValueRows, index: number, drop: number): number | undefined {
+  const end = where.rowEnds[index] as number;
+  let at = bytes.indexOf(OPEN_SQUARE, index === 0 ? where.valuesStart + 1 : (where.rowEnds[index - 1] as number) + 1) + 1;
+  for (let d = 0; d < drop; d++) {
+    at = bytes.indexOf(COMMA, at) + 1;
+    if (at === 0 || at > end) return undefined;
+  }
+  return at;
+}
+
+/** head + "[" row "]" joined by ",\n" + HISTORY_TAIL, into one buffer. Rows are ASCII; the head may not be. */
+function assemble(head: string, rows: Row[], bytes: Uint8Array): Buffer {
+  let size = Buffer.byteLength(head) + HISTORY_TAIL.length + Math.max(0, rows.length - 1) * 2;
+  for (const row of rows) size += typeof row === 'string' ? row.length : 1 + row.to - row.from + row.tail.length;
+  const out = Buffer.allocUnsafe(size);
+  let at = out.write(head, 0, 'utf8');
+  rows.forEach((row, i) => {
+    if (i > 0) at += out.write(',\n', at, 'latin1');
+    if (typeof row === 'string') at += out.write(row, at, 'latin1');
+    else {
+      out[at++] = OPEN_SQUARE;
+      out.set(bytes.subarray(row.from, row.to), at);
+      at += row.to - row.from;
+      at += out.write(row.tail, at, 'latin1');
+    }
+  });
+  at += out.write(HISTORY_TAIL, at, 'latin1');
+  return at === size ? out : out.subarray(0, at);
+}
