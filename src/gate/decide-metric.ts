@@ -30,6 +30,11 @@ export function plainTest(result: Pick<MetricResult, 'relativeDensity' | 'cutoff
  * @example decideMetric(score, plainTest(score.result)).status // 'regressed'
  */
 export function decideMetric(score: MetricScore, test: Test): MetricResult {
+  return { ...score.result, ...decision(score, test) };
+}
+
+/** decideMetric's status and reason alone, for a caller that owns the result and sets them in place. */
+export function decision(score: MetricScore, test: Test): { status: Status; reason: string } {
   const { result } = score;
   const where = position(result);
   let status: Status = 'ok';
@@ -45,7 +50,7 @@ export function decideMetric(score: MetricScore, test: Test): MetricResult {
       reason = `${where} (the better side); ${test.phrase}`;
     }
   }
-  return { ...result, status, reason };
+  return { status, reason };
 }
 
 /** "4.1 sd above the baseline mean", or the constant-baseline wording when there is no z. */

@@ -4,11 +4,11 @@ import { fitGaussian, type GaussianFit } from '../model/fit.js';
 import { InputError } from '../model/input-error.js';
 import { normalTail, studentTail } from '../model/tails.js';
 import { fromFitScale, toFitScale } from '../model/transform.js';
-import type { MetricResult } from './report.js';
+import type { BaselineSummary, MetricResult } from './report.js';
 import { fitScaleFloor } from './resolution-floor.js';
 import { directionOf, type Direction } from './sides.js';
 import { beyondTolerance } from './tolerance.js';
-import { decideMetric, plainTest } from './decide-metric.js';
+import { decision, plainTest } from './decide-metric.js';
 
 /** Newest baseline values kept in a result for sparklines. */
 export const RECENT_VALUES = 30;
@@ -70,38 +70,28 @@ export function scoreMetric(
     throw new InputError(`value ${value} of ${name} is not a finite number`, { where: name, fix: 'check the metric file' });
   }
   const current = toFitScale(value, settings.transform, name);
-  const base: MetricResult = {
-    name,
-    status: 'ok',
-    value,
-    cutoff: settings.cutoff,
-    worse: settings.worse,
-    reason: '',
-    ...(extras.unit === undefined ? {} : { unit: extras.unit }),
-    ...(extras.count === undefined ? {} : { count: extras.count }),
-  };
-  const unscored = { settings, scored: false, direction: 'none' as const, beyondTolerance: false };
+  // Built key by key (in the report's key order) rather than by spreads: this runs per metric.
+  const base: MetricResult = { name, status: 'ok', value, cutoff: settings.cutoff, worse: settings.worse, reason: '' };
+  if (extras.unit !== undefined) base.unit = extras.unit;
+  if (extras.count !== undefined) base.count = extras.count;
   const n = baseline.length;
-  if (n === 0) return { ...unscored, result: { ...base, status: 'new', reason: 'no history for this metric yet' } };
-  base.recent = baseline.slice(-RECENT_VALUES).map((x) => fromFitScale(x, settings.transform));
+  if (n === 0) return unscored(settings, { ...base, status: 'new', reason: 'no history for this metric yet' });
+  base.recent = recentValues(baseline, settings.transform);
   if (n < settings.minRuns) {
     const reason = `only ${n} baseline run${n === 1 ? '' : 's'}; min-runs is ${settings.minRuns}`;
     const early = fitWithFloor(baseline, settings);
-    return { ...unscored, result: { ...base, status: 'learning', baseline: { n, mean: early.mean, sd: early.sd }, reason } };
+    return unscored(settings, { ...base, status: 'learning', baseline: { n, mean: early.mean, sd: early.sd }, reason });
   }
   const fit = fitWithFloor(baseline, settings);
   const centre = fromFitScale(fit.mean, settings.transform);
-  base.baseline = {
-    n,
-    mean: fit.mean,
-    sd: fit.sd,
-    ...(settings.transform === 'log' ? { scale: 'log' as const } : {}),
-    ...(extras.since === undefined ? {} : { since: extras.since }),
-    ...(extras.relativeTo === undefined ? {} : { relativeTo: extras.relativeTo }),
-  };
+  const summary: BaselineSummary = { n, mean: fit.mean, sd: fit.sd };
+  if (settings.transform === 'log') summary.scale = 'log';
+  if (extras.since !== undefined) summary.since = extras.since;
+  if (extras.relativeTo !== undefined) summary.relativeTo = extras.relativeTo;
+  base.baseline = summary;
   if (centre !== 0) base.change = (value - centre) / centre;
   const deviation = current - fit.mean;
-  Object.assign(base, deviationFigures(current, fit, settings));
+  addDeviationFigures(base, current, fit, settings);
   const score: MetricScore = {
     result: base,
     settings,
@@ -111,7 +101,24 @@ export function scoreMetric(
     current,
     fit,
   };
-  return { ...score, result: decideMetric(score, plainTest(base)) };
+  // `base` is this call's own object, so the decision is written into it (decideMetric would copy).
+  const decided = decision(score, plainTest(base));
+  base.status = decided.status;
+  base.reason = decided.reason;
+  return score;
+}
+
+/** A new or learning result, which no later decision changes. */
+function unscored(settings: MetricSettings, result: MetricResult): MetricScore {
+  return { settings, scored: false, direction: 'none', beyondTolerance: false, result };
+}
+
+/** The newest RECENT_VALUES baseline values on the metric's own scale. */
+function recentValues(baseline: readonly number[], transform: MetricSettings['transform']): number[] {
+  const recent = baseline.slice(-RECENT_VALUES);
+  if (transform === 'none') return recent;
+  for (let i = 0; i < recent.length; i++) recent[i] = fromFitScale(recent[i]!, transform);
+  return recent;
 }
 
 /** fitGaussian with the resolution moved to the fit scale around the fitted centre. */
@@ -121,22 +128,25 @@ function fitWithFloor(values: readonly number[], settings: MetricSettings): Gaus
   return floor > 0 ? fitGaussian(values, settings.fit, floor) : raw;
 }
 
-/** z, density, relative density and tail; a zero spread gives 0 or 1 and no z. */
-function deviationFigures(x: number, fit: GaussianFit, settings: MetricSettings): Partial<MetricResult> {
+/** Sets z, density, relative density and tail on the result; a zero spread gives 0 or 1 and no z. */
+function addDeviationFigures(result: MetricResult, x: number, fit: GaussianFit, settings: MetricSettings): void {
   const deviation = x - fit.mean;
   const predictive = settings.uncertainty === 'predictive' && fit.n >= 2;
   if (fit.sd === 0 || (predictive && fit.sampleSd === 0)) {
     const moved = deviation !== 0;
-    return { relativeDensity: moved ? 0 : 1, tail: moved ? 0 : 1 };
+    result.relativeDensity = moved ? 0 : 1;
+    result.tail = moved ? 0 : 1;
+    return;
   }
   const z = deviation / fit.sd;
-  const density = gaussianDensity(x, fit.mean, fit.sd);
-  if (!predictive) return { z, density, relativeDensity: plugInRelativeDensity(x, fit.mean, fit.sd), tail: normalTail(z, 'both') };
+  result.z = z;
+  result.density = gaussianDensity(x, fit.mean, fit.sd);
+  if (!predictive) {
+    result.relativeDensity = plugInRelativeDensity(x, fit.mean, fit.sd);
+    result.tail = normalTail(z, 'both');
+    return;
+  }
   const t = deviation / predictiveScale(fit.sampleSd, fit.n);
-  return {
-    z,
-    density,
-    relativeDensity: predictiveRelativeDensity(x, fit.mean, fit.sampleSd, fit.n),
-    tail: studentTail(t, fit.n - 1, 'both'),
-  };
+  result.relativeDensity = predictiveRelativeDensity(x, fit.mean, fit.sampleSd, fit.n);
+  result.tail = studentTail(t, fit.n - 1, 'both');
 }

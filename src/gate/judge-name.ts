@@ -1,10 +1,10 @@
 import { settingsFor } from '../config/rules.js';
-import type { Config } from '../config/types.js';
+import type { Config, MetricSettings } from '../config/types.js';
 import type { History } from '../history/history.js';
-import type { Run } from '../inputs/run.js';
+import type { Measurement, Run } from '../inputs/run.js';
 import { selectBaseline } from './baseline.js';
 import type { GroupMemberInput } from './group-frame.js';
-import { scoreMetric } from './judge-metric.js';
+import { scoreMetric, type JudgeExtras } from './judge-metric.js';
 import type { MetricResult } from './report.js';
 
 /**
@@ -15,9 +15,15 @@ import type { MetricResult } from './report.js';
 export function metricNames(history: History, run: Run): string[] {
   const names = new Set<string>(run.metrics.keys());
   for (const [name, column] of history.columns) {
-    if (column.values.some((v) => Number.isFinite(v))) names.add(name);
+    if (!names.has(name) && holdsValue(column.values)) names.add(name);
   }
   return [...names].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+}
+
+/** Whether any value is finite (a plain loop: `some` with a closure costs more per metric). */
+function holdsValue(values: readonly number[]): boolean {
+  for (let i = 0; i < values.length; i++) if (Number.isFinite(values[i]!)) return true;
+  return false;
 }
 
 /**
@@ -35,18 +41,13 @@ export function judgeName(
 ): GroupMemberInput | { result: MetricResult } {
   const settings = settingsFor(config, name);
   const measurement = run.metrics.get(name);
-  const plain = { name, cutoff: settings.cutoff, worse: settings.worse };
-  const own =
-    measurement === undefined
-      ? {}
-      : { value: measurement.value, count: measurement.count, ...(measurement.unit === undefined ? {} : { unit: measurement.unit }) };
   if (settings.ignore) {
-    return { result: { ...plain, ...own, status: 'ignored', reason: 'matched a rule with ignore: true' } };
+    return { result: { ...plain(name, settings), ...own(measurement), status: 'ignored', reason: 'matched a rule with ignore: true' } };
   }
   const baseline = selectBaseline(history, name, settings);
   if (measurement === undefined) {
     const runs = `${baseline.available} run${baseline.available === 1 ? '' : 's'}`;
-    return { result: { ...plain, status: 'missing', reason: `in the history (${runs}) but absent from this run` } };
+    return { result: { ...plain(name, settings), status: 'missing', reason: `in the history (${runs}) but absent from this run` } };
   }
   let value = measurement.value;
   if (settings.relativeTo !== undefined) {
@@ -54,17 +55,30 @@ export function judgeName(
     if (reference === undefined || !Number.isFinite(reference) || reference === 0) {
       const lacks = reference === undefined ? 'lacks' : `has ${reference} for`;
       const reason = `cannot be judged relative to ${settings.relativeTo}: this run ${lacks} that metric`;
-      return { result: { ...plain, ...own, status: baseline.values.length === 0 ? 'new' : 'missing', reason } };
+      const status = baseline.values.length === 0 ? 'new' : 'missing';
+      return { result: { ...plain(name, settings), ...own(measurement), status, reason } };
     }
     value /= reference;
   }
-  const extras = {
-    count: measurement.count,
-    // a ratio has no unit
-    ...(measurement.unit === undefined || settings.relativeTo !== undefined ? {} : { unit: measurement.unit }),
-    ...(baseline.since === undefined ? {} : { since: baseline.since }),
-    ...(baseline.relativeTo === undefined ? {} : { relativeTo: baseline.relativeTo }),
-  };
+  // Set key by key rather than spread: this runs once per metric.
+  const extras: JudgeExtras = { count: measurement.count };
+  // a ratio has no unit
+  if (measurement.unit !== undefined && settings.relativeTo === undefined) extras.unit = measurement.unit;
+  if (baseline.since !== undefined) extras.since = baseline.since;
+  if (baseline.relativeTo !== undefined) extras.relativeTo = baseline.relativeTo;
   const score = scoreMetric(name, settings, baseline.values, value, extras);
   return score.scored ? { score, baseline } : { result: score.result };
+}
+
+/** The fields every result of this metric starts with. */
+function plain(name: string, settings: MetricSettings): Pick<MetricResult, 'name' | 'cutoff' | 'worse'> {
+  return { name, cutoff: settings.cutoff, worse: settings.worse };
+}
+
+/** This run's own value, count and unit, for the results that are not scored. */
+function own(measurement: Measurement | undefined): Partial<MetricResult> {
+  if (measurement === undefined) return {};
+  const fields: Partial<MetricResult> = { value: measurement.value, count: measurement.count };
+  if (measurement.unit !== undefined) fields.unit = measurement.unit;
+  return fields;
 }

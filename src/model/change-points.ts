@@ -46,16 +46,18 @@ function ensureScratch(n: number): void {
  */
 function noiseSigma(n: number): number {
   const m = n - 1;
-  for (let i = 1; i < n; i++) work[i - 1] = finite(centred[i]! - centred[i - 1]!, i);
-  const centre = medianInPlace(work, m);
+  const w = work;
+  const c = centred;
+  for (let i = 1; i < n; i++) w[i - 1] = finite(c[i]! - c[i - 1]!, i);
+  const centre = medianInPlace(w, m);
   // Refilled in series order (not from the reordered buffer) so an overflow names its position.
-  for (let i = 1; i < n; i++) work[i - 1] = finite(Math.abs(centred[i]! - centred[i - 1]! - centre), i);
-  const robust = (MAD_TO_SIGMA * medianInPlace(work, m)) / Math.SQRT2;
+  for (let i = 1; i < n; i++) w[i - 1] = finite(Math.abs(c[i]! - c[i - 1]! - centre), i);
+  const robust = (MAD_TO_SIGMA * medianInPlace(w, m)) / Math.SQRT2;
   if (robust > 0) return robust;
   // Summed in series order, as the differences come.
   let squares = 0;
   for (let i = 1; i < n; i++) {
-    const d = centred[i]! - centred[i - 1]!;
+    const d = c[i]! - c[i - 1]!;
     squares += d * d;
   }
   return Math.sqrt(squares / (2 * m));
@@ -100,53 +102,93 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
     return [];
   }
   ensureScratch(n);
+  const sigma = centreAndScale(values, n);
+  if (!(sigma > 0)) return [];
+  prefixSums(n, sigma);
+  optimalPartition(n, penalty, minSegment);
+  return segmentStarts(n);
+}
+
+// The steps below are separate small functions on purpose: V8 optimises each on its own, where one
+// long function compiled while its first loop ran lacked type feedback for the rest and kept
+// being thrown away (a cost paid on every cold start of the gate).
+
+/** Copies the values to the scratch, centres them on their median and returns the noise sigma. */
+function centreAndScale(values: readonly number[], n: number): number {
+  const w = work;
   for (let i = 0; i < n; i++) {
     const x = values[i]!;
     if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${i + 1} is not a finite number`);
-    work[i] = x;
+    w[i] = x;
   }
-  const centre = medianInPlace(work, n);
-  for (let i = 0; i < n; i++) centred[i] = values[i]! - centre;
-  const sigma = noiseSigma(n);
-  if (!(sigma > 0)) return [];
-  sum[0] = 0;
-  sumSq[0] = 0;
+  const centre = medianInPlace(w, n);
+  const c = centred;
+  for (let i = 0; i < n; i++) c[i] = values[i]! - centre;
+  return noiseSigma(n);
+}
+
+/** sum[i] and sumSq[i]: the sums of z and z^2 over the first i values, z = centred / sigma. */
+function prefixSums(n: number, sigma: number): void {
+  const c = centred;
+  const s1 = sum;
+  const s2 = sumSq;
+  s1[0] = 0;
+  s2[0] = 0;
   for (let i = 0; i < n; i++) {
-    const z = centred[i]! / sigma;
-    sum[i + 1] = sum[i]! + z;
-    sumSq[i + 1] = sumSq[i]! + z * z;
+    const z = c[i]! / sigma;
+    s1[i + 1] = s1[i]! + z;
+    s2[i + 1] = s2[i]! + z * z;
   }
-  best[0] = -penalty;
-  // The candidate starts and their totals live in the scratch arrays, pruned in place.
+}
+
+/**
+ * The PELT recursion: best[end] = min over kept starts of best[start] + C(start, end) + penalty,
+ * previous[end] the minimising start (the first one on ties). Candidates are pruned in place.
+ */
+function optimalPartition(n: number, penalty: number, minSegment: number): void {
+  const s1 = sum;
+  const s2 = sumSq;
+  const f = best;
+  const from = previous;
+  const kept = candidates;
+  const t = totals;
+  f[0] = -penalty;
   let count = 0;
   for (let end = minSegment; end <= n; end++) {
     // The start that just became far enough back joins the candidates, if it can end a segment.
     const fresh = end - minSegment;
-    if (fresh === 0 || fresh >= minSegment) candidates[count++] = fresh;
+    if (fresh === 0 || fresh >= minSegment) kept[count++] = fresh;
+    const sumEnd = s1[end]!;
+    const sumSqEnd = s2[end]!;
     let bestValue = Infinity;
     let bestStart = 0;
     for (let k = 0; k < count; k++) {
-      const start = candidates[k]!;
+      const start = kept[k]!;
       // Segment cost C = sum z^2 - (sum z)^2 / length, never below 0 (rounding).
-      const s = sum[end]! - sum[start]!;
-      const cost = Math.max(0, sumSq[end]! - sumSq[start]! - (s * s) / (end - start));
-      const total = best[start]! + cost + penalty;
-      totals[k] = total;
+      const s = sumEnd - s1[start]!;
+      const cost = Math.max(0, sumSqEnd - s2[start]! - (s * s) / (end - start));
+      const total = f[start]! + cost + penalty;
+      t[k] = total;
       if (total < bestValue) {
         bestValue = total;
         bestStart = start;
       }
     }
-    best[end] = bestValue;
-    previous[end] = bestStart;
+    f[end] = bestValue;
+    from[end] = bestStart;
     // PELT pruning: a start already worse by the penalty can never become optimal again.
-    let kept = 0;
+    let left = 0;
     for (let k = 0; k < count; k++) {
-      if (totals[k]! - penalty <= bestValue) candidates[kept++] = candidates[k]!;
+      if (t[k]! - penalty <= bestValue) kept[left++] = kept[k]!;
     }
-    count = kept;
+    count = left;
   }
+}
+
+/** The segment starts after 0, ascending, read back from previous[]. */
+function segmentStarts(n: number): number[] {
+  const from = previous;
   const starts: number[] = [];
-  for (let at = previous[n]!; at > 0; at = previous[at]!) starts.push(at);
+  for (let at = from[n]!; at > 0; at = from[at]!) starts.push(at);
   return starts.reverse();
 }
