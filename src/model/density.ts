@@ -1,6 +1,5 @@
-import normalLogpdf from '@stdlib/stats-base-dists-normal-logpdf';
-import normalPdf from '@stdlib/stats-base-dists-normal-pdf';
 import { InputError } from './input-error.js';
+import { normalDensity, normalLogDensity } from './special/normal.js';
 
 /** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */
 function checkSpread(sd: number): void {
@@ -17,7 +16,7 @@ function checkSpread(sd: number): void {
  */
 export function gaussianDensity(x: number, mean: number, sd: number): number {
   checkSpread(sd);
-  return normalPdf(x, mean, sd);
+  return normalDensity(x, mean, sd);
 }
 
 /**
@@ -26,7 +25,7 @@ export function gaussianDensity(x: number, mean: number, sd: number): number {
  */
 export function gaussianLogDensity(x: number, mean: number, sd: number): number {
   checkSpread(sd);
-  return normalLogpdf(x, mean, sd);
+  return normalLogDensity(x, mean, sd);
 }
 
 /**

@@ -1,6 +1,6 @@
-import chisquareCdf from '@stdlib/stats-base-dists-chisquare-cdf';
-import fCdf from '@stdlib/stats-base-dists-f-cdf';
 import { InputError } from './input-error.js';
+import { chiSquareUpperTail } from './special/chi-square.js';
+import { fisherUpperTail } from './special/fisher-f.js';
 
 function checkDistance(d2: number, p: number): void {
   if (!(d2 >= 0)) {
@@ -11,15 +11,15 @@ function checkDistance(d2: number, p: number): void {
 
 /**
  * P(chi^2_p > d2): the tail of a squared Mahalanobis distance when mean and covariance are known
- * exactly (the large-history limit of hotellingTail). Computed as 1 - cdf, so it is accurate to
- * about 1e-16 absolute — far below any level a gate uses. An infinite d2 has tail 0.
+ * exactly (the large-history limit of hotellingTail): the upper incomplete gamma Q(p/2, d2/2),
+ * computed directly, so far tails keep their relative accuracy. An infinite d2 has tail 0.
  * Throws InputError on a negative or NaN d2 or p < 1.
  * @example chiSquareTail(3.841458820645, 1) // ≈ 0.05 (chi-square table, 1 degree of freedom)
  */
 export function chiSquareTail(d2: number, p: number): number {
   checkDistance(d2, p);
   if (d2 === Infinity) return 0;
-  return Math.min(1, Math.max(0, 1 - chisquareCdf(d2, p)));
+  return chiSquareUpperTail(d2, p);
 }
 
 /**
@@ -29,7 +29,7 @@ export function chiSquareTail(d2: number, p: number): number {
  * returns; the default) or 'unbiased' (divide by n - 1). With the n-1 covariance S_u,
  *   T^2 = d2_u n / (n + 1),  F = T^2 (n - p) / (p (n - 1)) ~ F(p, n - p)
  * (x_new - mean has covariance Sigma (1 + 1/n), independent of S_u). Since S_mle = S_u (n-1)/n,
- * d2_u = d2_mle (n - 1) / n. The F tail is taken as cdf(1/F) of F(n - p, p) — no 1 - cdf
+ * d2_u = d2_mle (n - 1) / n. The F tail is computed directly as an incomplete beta — no 1 - cdf
  * cancellation. Needs n > p. With a shrunk covariance this is an approximation (the F law holds
  * for the plain sample covariance). Throws InputError on bad d2, p < 1 or n <= p.
  *
@@ -47,6 +47,5 @@ export function hotellingTail(d2: number, p: number, n: number, divisor: 'mle' |
   const unbiased = divisor === 'mle' ? (d2 * (n - 1)) / n : d2;
   const t2 = (unbiased * n) / (n + 1);
   const statistic = (t2 * (n - p)) / (p * (n - 1));
-  // P(F(p, m) > x) = P(F(m, p) < 1/x).
-  return fCdf(1 / statistic, n - p, p);
+  return fisherUpperTail(statistic, p, n - p);
 }

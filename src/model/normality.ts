@@ -1,6 +1,6 @@
-import normalLogcdf from '@stdlib/stats-base-dists-normal-logcdf';
 import { InputError } from './input-error.js';
 import { meanAndSquares } from './moments.js';
+import { normalLogCdf } from './special/normal.js';
 
 /**
  * Sample skewness G1, the adjusted Fisher-Pearson coefficient (Joanes & Gill 1998, "Comparing
@@ -72,7 +72,7 @@ export function andersonDarling(values: ArrayLike<number>): AndersonDarling {
   const w = Float64Array.from(values, (x) => (x - mean) / sd).sort();
   let sum = 0;
   for (let i = 0; i < n; i++) {
-    sum += (2 * i + 1) * (normalLogcdf(w[i]!, 0, 1) + normalLogcdf(-w[n - 1 - i]!, 0, 1));
+    sum += (2 * i + 1) * (normalLogCdf(w[i]!) + normalLogCdf(-w[n - 1 - i]!));
   }
   const statistic = -n - sum / n;
   const adjusted = statistic * (1 + 0.75 / n + 2.25 / (n * n));

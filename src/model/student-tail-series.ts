@@ -8,7 +8,7 @@
  * gate takes one tail per metric, so on many metrics this is most of the tail's cost.
  * 1 - A cancels when the tail is small, so the series answers only down to SERIES_TAIL_FLOOR
  * (where at most ~12 of 16 digits remain); below it, and for a fractional, huge or infinite
- * input, it returns undefined and the caller uses the incomplete beta (stdlib's t CDF).
+ * input, it returns undefined and the caller uses the incomplete beta (special/student-t.ts).
  *
  * @example seriesTwoSidedTail(2.228, 10) // ≈ 0.05 (standard t table, nu = 10)
  */

@@ -1,8 +1,6 @@
-// One stdlib function per package: the namespace packages load every function of the
-// distribution at start-up (about half of the stdlib load time; see test/bench/README.md).
-import normalCdf from '@stdlib/stats-base-dists-normal-cdf';
-import studentTCdf from '@stdlib/stats-base-dists-t-cdf';
 import { InputError } from './input-error.js';
+import { normalUpperTail } from './special/normal.js';
+import { studentTwoSidedTail, studentUpperTail } from './special/student-t.js';
 import { seriesTwoSidedTail } from './student-tail-series.js';
 
 /** Which tail counts: the upper (higher is worse), the lower, or both. */
@@ -10,20 +8,21 @@ export type Side = 'upper' | 'lower' | 'both';
 
 /**
  * Tail probability of a standard normal z: P(Z > z), P(Z < z) or P(|Z| > |z|).
- * Uses the complementary CDF directly (no 1 - cdf cancellation in the far tail).
+ * Uses the upper tail erfc(z / sqrt 2) / 2 directly (no 1 - cdf cancellation in the far tail).
  * @example normalTail(1.96, 'both') // ≈ 0.04999579
  */
 export function normalTail(z: number, side: Side): number {
   if (Number.isNaN(z)) throw new InputError('a tail probability needs a number, got NaN');
-  if (side === 'upper') return normalCdf(-z, 0, 1);
-  if (side === 'lower') return normalCdf(z, 0, 1);
-  return 2 * normalCdf(-Math.abs(z), 0, 1);
+  if (side === 'upper') return normalUpperTail(z);
+  if (side === 'lower') return normalUpperTail(-z);
+  return 2 * normalUpperTail(Math.abs(z));
 }
 
 /**
  * Tail probability of a Student-t statistic with nu degrees of freedom, sides as normalTail.
  * Whole nu and a tail not too small take the finite series (seriesTwoSidedTail, A&S 26.7.3-4);
- * the rest stdlib's incomplete-beta CDF, which keeps full precision far out in the tail.
+ * the rest the incomplete beta I_x(nu/2, 1/2), x = nu / (nu + t^2), which keeps full relative
+ * precision far out in the tail.
  * @example studentTail(2.228, 10, 'both') // ≈ 0.05 (standard t table, nu = 10)
  */
 export function studentTail(t: number, nu: number, side: Side): number {
@@ -36,9 +35,9 @@ export function studentTail(t: number, nu: number, side: Side): number {
     const far = side === 'upper' ? t >= 0 : t <= 0;
     return far ? both / 2 : 1 - both / 2;
   }
-  if (side === 'upper') return studentTCdf(-t, nu);
-  if (side === 'lower') return studentTCdf(t, nu);
-  return 2 * studentTCdf(-Math.abs(t), nu);
+  if (side === 'upper') return studentUpperTail(t, nu);
+  if (side === 'lower') return studentUpperTail(-t, nu);
+  return studentTwoSidedTail(t, nu);
 }
 
 /** A cutoff is a relative density: a number in (0, 1]. */
