@@ -2,7 +2,7 @@ import { readFile, stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { InputError } from '../model/input-error.js';
 import { defaultConfig } from './defaults.js';
-import { parseConfig } from './load.js';
+import { parseConfigLazily } from './parse-lazily.js';
 import type { Config } from './types.js';
 
 import { DEFAULT_CONFIG_PATHS } from './locate.js';
@@ -33,7 +33,7 @@ export async function readConfigFile(path?: string, options: ReadConfigOptions =
   const candidates = path === undefined ? DEFAULT_CONFIG_PATHS : [path];
   for (const candidate of candidates) {
     const text = await readText(candidate, resolve(cwd, candidate));
-    if (text !== undefined) return parseConfig(text, candidate);
+    if (text !== undefined) return parseConfigLazily(text, candidate);
   }
   if (required) {
     throw new InputError(`config file ${path ?? candidates[0]} does not exist`, {

@@ -1,0 +1,49 @@
+import { explainSchemaErrors } from './explain-schema-errors.js';
+import { exactMatcher, type GlobCompiler } from './name-matchers.js';
+import { problemsError } from './problems.js';
+import { schemaErrors } from './schema.js';
+import { globList, toConfig } from './to-config.js';
+import type { Config } from './types.js';
+import { readYamlTree, type YamlTree } from './yaml-tree.js';
+
+type Data = Record<string, unknown>;
+
+/**
+ * The first two steps of reading a config: YAML under hard limits (yaml-tree.ts), then the JSON
+ * Schema (bellgate.schema.json). Returns the tree, or undefined when the file is empty or holds
+ * only comments (the defaults apply). A leading byte-order mark is dropped.
+ * @throws InputError listing every problem, at the "source:line:col" of the first.
+ * @example checkedConfigTree('cutoff: 2\n', 'b.yml') // throws InputError at b.yml:1:1 (unknown key)
+ */
+export function checkedConfigTree(text: string, source: string): YamlTree | undefined {
+  const body = text.startsWith('\uFEFF') ? text.slice(1) : text;
+  const { tree, problems } = readYamlTree(body);
+  if (!tree || problems.length > 0) throw problemsError(problems, source);
+  if (tree.value === undefined || tree.value === null) return undefined;
+  const schemaProblems = explainSchemaErrors(schemaErrors(tree.value), tree);
+  if (schemaProblems.length > 0) throw problemsError(schemaProblems, source);
+  return tree;
+}
+
+/**
+ * The last step: the Config from a checked tree (to-config.ts), with the rules' globs compiled by
+ * `globs`. @throws InputError for what the schema cannot say (a bad glob, window < min-runs, ...).
+ */
+export function configFromTree(tree: YamlTree, source: string, globs: GlobCompiler): Config {
+  const built = toConfig(tree.value, tree, source, globs);
+  if (built.problems.length > 0) throw problemsError(built.problems, source);
+  return built.config;
+}
+
+/**
+ * Whether any `metrics:` rule or `groups:` entry of a checked tree has a glob that is more than a
+ * plain name (a group without `match` means "name/**"), so the glob library must be loaded.
+ * @example needsGlobLibrary({ metrics: [{ match: 'latency/render' }] }) // false
+ */
+export function needsGlobLibrary(value: unknown): boolean {
+  const root = (value ?? {}) as Data;
+  const rules = (root.metrics ?? []) as Data[];
+  const groups = (root.groups ?? []) as Data[];
+  return rules.some((rule) => !exactMatcher(globList(rule.match)))
+    || groups.some((group) => group.match === undefined || !exactMatcher(globList(group.match)));
+}
