@@ -1,6 +1,5 @@
 import { readFile, stat } from 'node:fs/promises';
 import path from 'node:path';
-import { glob } from 'tinyglobby';
 import type { Aggregate, InputLimits } from '../config/types.js';
 import { InputError } from '../model/input-error.js';
 import { collectRun } from './collect.js';
@@ -66,6 +65,8 @@ async function expand(pattern: string, cwd: string): Promise<string[]> {
   if (info?.isDirectory()) {
     throw new InputError(`${pattern} is a directory`, { fix: `name files in it, such as ${path.join(pattern, '*.json')}` });
   }
+  // The glob library (tinyglobby, with picomatch) loads only for a pattern that is not a file.
+  const { glob } = await import('tinyglobby');
   const files = await glob([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
   if (files.length === 0) {
     throw new InputError(`no metric file matches ${JSON.stringify(pattern)} (looked in ${cwd})`, {
