@@ -1,5 +1,5 @@
 import type { History, MetricColumn, RunInfo } from './history.js';
-import { compareRuns } from './run-order.js';
+import { compareRuns, timeKey } from './run-order.js';
 
 /**
  * appendRun's fast path for the usual record: a run with a new id that sorts after every run
@@ -15,14 +15,22 @@ import { compareRuns } from './run-order.js';
 export function appendNewest(h: History, info: RunInfo, added: Map<string, MetricColumn>): History | undefined {
   const n = h.runs.length;
   const ids = new Set<string>();
+  // compareRuns, with each run's time read once (reading a time is the costly part).
   let previous: RunInfo | undefined;
-  for (const run of h.runs) {
-    if (previous !== undefined && compareRuns(previous, run) > 0) return undefined;
-    ids.add(run.id);
+  let previousKey = -Infinity;
+  const inOrder = (run: RunInfo): boolean => {
+    const key = timeKey(run);
+    const ordered = previous === undefined || previousKey < key || (previousKey === key && compareRuns(previous, run) <= 0);
     previous = run;
+    previousKey = key;
+    return ordered;
+  };
+  for (const run of h.runs) {
+    if (!inOrder(run)) return undefined;
+    ids.add(run.id);
   }
   if (ids.size !== n || ids.has(info.id)) return undefined;
-  if (previous !== undefined && compareRuns(previous, info) > 0) return undefined;
+  if (!inOrder(info)) return undefined;
   for (const column of h.columns.values()) if (column.values.length !== n) return undefined;
 
   const columns = new Map<string, MetricColumn>();

@@ -96,16 +96,22 @@ function assemble(head: string, rows: Row[], bytes: Uint8Array): Buffer {
   for (const row of rows) size += typeof row === 'string' ? row.length : 1 + row.to - row.from + row.tail.length;
   const out = Buffer.allocUnsafe(size);
   let at = out.write(head, 0, 'utf8');
-  rows.forEach((row, i) => {
-    if (i > 0) at += out.write(',\n', at, 'latin1');
+  // Byte by byte for the short pieces: a Buffer.write or a subarray per row costs more than it copies.
+  const ascii = (text: string): void => {
+    for (let j = 0; j < text.length; j++) out[at++] = text.charCodeAt(j);
+  };
+  const source = new Uint8Array(bytes.buffer, bytes.byteOffset, bytes.byteLength);
+  for (let i = 0; i < rows.length; i++) {
+    const row = rows[i] as Row;
+    if (i > 0) ascii(',\n');
     if (typeof row === 'string') at += out.write(row, at, 'latin1');
     else {
       out[at++] = OPEN_SQUARE;
-      out.set(bytes.subarray(row.from, row.to), at);
+      out.set(source.subarray(row.from, row.to), at);
       at += row.to - row.from;
-      at += out.write(row.tail, at, 'latin1');
+      ascii(row.tail);
     }
-  });
-  at += out.write(HISTORY_TAIL, at, 'latin1');
+  }
+  ascii(HISTORY_TAIL);
   return at === size ? out : out.subarray(0, at);
 }
