@@ -62,9 +62,19 @@ function newestWindow(history: History, column: readonly number[], window: numbe
     values.push(x);
     runIds.push(history.runs[i]!.id);
   }
-  let available = values.length;
-  for (; i >= 0; i--) if (Number.isFinite(column[i]!)) available++;
-  return { values: values.reverse(), runIds: runIds.reverse(), available };
+  const newer = values.length;
+  const older = i;
+  return {
+    values: values.reverse(),
+    runIds: runIds.reverse(),
+    // Counted only when read (the `missing` wording): walking the older runs of every metric was
+    // most of the selection's cost on a long history.
+    get available(): number {
+      let available = newer;
+      for (let k = older; k >= 0; k--) if (Number.isFinite(column[k]!)) available++;
+      return available;
+    },
+  };
 }
 
 /** Any other scale: every value of the history is checked, since the transform or ratio can refuse it. */

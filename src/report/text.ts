@@ -1,5 +1,5 @@
 import pc from 'picocolors';
-import type { GroupResult, MetricResult, Report, Status } from '../gate/report.js';
+import type { GroupResult, Report, Status } from '../gate/report.js';
 import { cleanText } from './clean.js';
 import { metricCells } from './cells.js';
 import { formatSigma } from './format.js';
@@ -20,16 +20,28 @@ function paint(c: Colors, s: Status, text: string): string {
   return c.dim(text);
 }
 
-function padEnd(s: string, width: number): string {
-  return s + ' '.repeat(Math.max(0, width - Array.from(s).length));
+// Printable ASCII only: such a name is what cleanText would return (within the cap), and its
+// width is its length. One native regular-expression test per cell costs less than a loop over
+// its characters in a process that runs the report once, before the loop could be optimised.
+const PLAIN = /^[\u0020-\u007E]*$/;
+const SURROGATE = /[\uD800-\uDFFF]/;
+
+/** cleanText, skipping its two replacements for a printable-ASCII name within the cap. */
+function clean(s: string, max: number): string {
+  return s.length <= max && PLAIN.test(s) ? s : cleanText(s, max);
+}
+
+/** Width in code points (Array.from(s).length), building the array only when a pair can occur. */
+function codePoints(s: string): number {
+  return SURROGATE.test(s) ? Array.from(s).length : s.length;
 }
 
 function groupLine(g: GroupResult): string {
   const top = [...g.members]
     .sort((a, b) => b.share - a.share)
     .slice(0, 3)
-    .map((m) => `${cleanText(m.name, TEXT_NAME_MAX)} (${Math.round(m.share * 100)}%, own ${formatSigma(m.ownZ)})`);
-  return `group ${cleanText(g.name, TEXT_NAME_MAX)}: ${g.status} — common move ${formatSigma(g.common.z)} (${g.common.status}); main contributors: ${top.join(', ') || 'none'}`;
+    .map((m) => `${clean(m.name, TEXT_NAME_MAX)} (${Math.round(m.share * 100)}%, own ${formatSigma(m.ownZ)})`);
+  return `group ${clean(g.name, TEXT_NAME_MAX)}: ${g.status} — common move ${formatSigma(g.common.z)} (${g.common.status}); main contributors: ${top.join(', ') || 'none'}`;
 }
 
 /**
@@ -44,7 +56,7 @@ export function renderText(report: Report, options: { color: boolean }): string 
   const c = pc.createColors(options.color);
   const lines: string[] = [];
   const verdictWord = report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
-  lines.push(`Bellgate — series "${cleanText(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
+  lines.push(`Bellgate — series "${clean(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
   lines.push(`${VERDICT_HEADLINE[report.verdict]}; ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`);
 
   const judged = report.metrics
@@ -52,26 +64,49 @@ export function renderText(report: Report, options: { color: boolean }): string 
     .sort((a, b) => statusRank(a.status) - statusRank(b.status));
   if (judged.length > 0) {
     const head = ['status', 'metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density vs cutoff'];
-    const rows = judged.map((m) => {
-      const cells = metricCells(m, m.unit === undefined ? undefined : cleanText(m.unit, 20));
-      return [`${STATUS_GLYPH[m.status]} ${m.status}`, cleanText(m.name, TEXT_NAME_MAX), cells.value, cells.baseline, cells.change, cells.sigma, cells.density];
+    const columns = head.length;
+    // Every cell and its width once, flat (row-major); the widths pad the columns and the cells.
+    const cells: string[] = new Array<string>(judged.length * columns);
+    const cellWidths = new Int32Array(judged.length * columns);
+    const widths = head.map((h) => h.length);
+    judged.forEach((m, row) => {
+      const shown = metricCells(m, m.unit === undefined ? undefined : clean(m.unit, 20));
+      const at = row * columns;
+      cells[at] = `${STATUS_GLYPH[m.status]} ${m.status}`;
+      cells[at + 1] = clean(m.name, TEXT_NAME_MAX);
+      cells[at + 2] = shown.value;
+      cells[at + 3] = shown.baseline;
+      cells[at + 4] = shown.change;
+      cells[at + 5] = shown.sigma;
+      cells[at + 6] = shown.density;
+      for (let i = 0; i < columns; i++) {
+        const width = codePoints(cells[at + i]!);
+        cellWidths[at + i] = width;
+        if (width > widths[i]!) widths[i] = width;
+      }
     });
-    const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => Array.from(r[i] ?? '').length)));
     lines.push('');
-    lines.push(c.bold(head.map((h, i) => padEnd(h, widths[i] ?? 0)).join('  ').trimEnd()));
-    judged.forEach((m, k) => {
-      const row = rows[k] ?? [];
-      const text = row.map((cell, i) => padEnd(cell, widths[i] ?? 0)).join('  ').trimEnd();
-      lines.push(paint(c, m.status, text));
-      if (m.status !== 'ok') lines.push(`    ${cleanText(m.reason, 400)}`);
+    lines.push(c.bold(head.map((h, i) => h + ' '.repeat(widths[i]! - h.length)).join('  ').trimEnd()));
+    const parts: string[] = new Array<string>(columns);
+    judged.forEach((m, row) => {
+      const at = row * columns;
+      for (let i = 0; i < columns; i++) parts[i] = cells[at + i]! + ' '.repeat(widths[i]! - cellWidths[at + i]!);
+      lines.push(paint(c, m.status, parts.join('  ').trimEnd()));
+      if (m.status !== 'ok') lines.push(`    ${clean(m.reason, 400)}`);
     });
   }
 
   if (report.groups.length > 0) lines.push('');
   for (const g of report.groups) lines.push(paint(c, g.status, groupLine(g)));
 
-  const listed = LISTED.map((s) => [s, report.metrics.filter((m) => m.status === s)] as const).filter(([, ms]) => ms.length > 0);
-  if (listed.length > 0) lines.push('');
-  for (const [s, ms] of listed) lines.push(paint(c, s, `${STATUS_GLYPH[s]} ${s} (${ms.length}): ${ms.map((m: MetricResult) => cleanText(m.name, TEXT_NAME_MAX)).join(', ')}`));
+  const listed = new Map<Status, string[]>(LISTED.map((status) => [status, []]));
+  for (const m of report.metrics) listed.get(m.status)?.push(clean(m.name, TEXT_NAME_MAX));
+  let first = true;
+  for (const [s, names] of listed) {
+    if (names.length === 0) continue;
+    if (first) lines.push('');
+    first = false;
+    lines.push(paint(c, s, `${STATUS_GLYPH[s]} ${s} (${names.length}): ${names.join(', ')}`));
+  }
   return lines.join('\n') + '\n';
 }
