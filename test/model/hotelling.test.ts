@@ -37,6 +37,24 @@ describe('chiSquareTail', () => {
   });
 });
 
+describe('far tails (computed directly, not as 1 - cdf)', () => {
+  it('chiSquareTail keeps relative accuracy where 1 - cdf would be 0 (50-digit mpmath 1.3.0)', () => {
+    // mpmath: upper incomplete gamma Q(p/2, d2/2) at 50 digits (A&S 6.5.31 continued fraction).
+    expectClose(chiSquareTail(1000, 1), 1.7958327848007262e-219, 1e-13);
+    // Two degrees of freedom: P(chi^2_2 > x) = exp(-x/2) exactly (from memory).
+    expectClose(chiSquareTail(600, 2), Math.exp(-300), 1e-13);
+  });
+
+  it('hotellingTail with p = 2 follows the closed form of F(2, m): (1 + 2F/m)^(-m/2) (from memory)', () => {
+    for (const [d2, n] of [[40, 30], [400, 1000], [3000, 5000]] as const) {
+      const t2 = (d2 * n) / (n + 1);
+      const f = (t2 * (n - 2)) / (2 * (n - 1));
+      const m = n - 2;
+      expectClose(hotellingTail(d2, 2, n, 'unbiased'), Math.exp((-m / 2) * Math.log1p((2 * f) / m)), 1e-12);
+    }
+  });
+});
+
 describe('hotellingTail', () => {
   // Upper critical values of F(d1, d2), NIST/SEMATECH e-Handbook table 1.3.6.7.3 (3 decimals,
   // from memory). For the prediction form, F = d2_mle (n - 1)/n * n/(n + 1) * (n - p)/(p (n - 1))

@@ -8,6 +8,10 @@ export interface JStatSubset {
   centralF: { cdf(x: number, d1: number, d2: number): number };
   inv(m: number[][]): number[][];
   skewness(values: number[]): number;
+  ibeta(x: number, a: number, b: number): number;
+  gammaln(x: number): number;
+  lowRegGamma(a: number, x: number): number;
+  erfc(x: number): number;
 }
 
 /** jStat, the reference statistics library from the npm registry (dev dependency). */

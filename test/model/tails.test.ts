@@ -34,6 +34,18 @@ describe('normalTail', () => {
   });
 });
 
+describe('far tails (relative accuracy, not 1 - cdf)', () => {
+  it('normalTail and studentTail match 50-digit mpmath 1.3.0 values far out', () => {
+    // mpmath: mp.ncdf(-z); mp.betainc(nu/2, 1/2, 0, nu/(nu+t^2)) / 2; mp.dps = 50.
+    expectClose(normalTail(37, 'upper'), 5.7255712225245768e-300, 1e-14);
+    expectClose(normalTail(-30, 'lower'), 4.9067139271481871e-198, 1e-14);
+    expectClose(normalTail(20, 'both'), 2 * 2.7536241186062337e-89, 1e-14);
+    expectClose(studentTail(1e6, 1, 'upper'), 3.1830988618368457e-7, 1e-14);
+    expectClose(studentTail(-30, 999, 'lower'), 8.3641360655859234e-142, 1e-13);
+    expectClose(studentTail(7.5, 1e6, 'both'), 2 * 3.1935057368574253e-14, 1e-13);
+  });
+});
+
 describe('studentTail', () => {
   // Two-sided critical values of Student's t, standard t table (e.g. NIST/SEMATECH e-Handbook
   // 1.3.6.7.2; 3 decimals, from memory).

@@ -1,7 +1,7 @@
 import { regularizedGamma } from './incomplete-gamma.js';
 
 /**
- * Upper tail P(chi^2_k > q) = Q(k/2, q/2) (A&S 26.4.19), computed directly for far tails.
+ * Upper tail P(chi^2_k > q) = Q(k/2, q/2) (chi-square is the gamma law of shape k/2 and scale 2), computed directly for far tails.
  * NaN for NaN input or k <= 0; 1 for q <= 0.
  * @example chiSquareUpperTail(3.841458820694124, 1) // ≈ 0.05
  */

@@ -6,7 +6,7 @@ const INV_SQRT_2PI = 0.39894228040143267794;
 
 /**
  * Standard normal upper tail Q(z) = P(Z > z) = erfc(z / sqrt 2) / 2, computed directly (never as
- * 1 - cdf) with Cody's erfc (A&S 26.2.29 relates the two); exp(-z^2/2) is split as in erfc so the
+ * 1 - cdf) with Cody's erfc; exp(-z^2/2) is split as in erfc so the
  * relative accuracy holds out to z = 37 and beyond, until the result underflows. NaN in, NaN out.
  * @example normalUpperTail(1.96) // ≈ 0.0249979
  */
