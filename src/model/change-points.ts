@@ -24,6 +24,7 @@ let best = new Float64Array(0);
 let totals = new Float64Array(0);
 let previous = new Int32Array(0);
 let candidates = new Int32Array(0);
+let dropAt = new Int32Array(0);
 
 function ensureScratch(n: number): void {
   if (n + 1 <= scratchSize) return;
@@ -36,6 +37,7 @@ function ensureScratch(n: number): void {
   totals = new Float64Array(scratchSize);
   previous = new Int32Array(scratchSize);
   candidates = new Int32Array(scratchSize);
+  dropAt = new Int32Array(scratchSize);
 }
 
 /**
@@ -143,7 +145,12 @@ function prefixSums(n: number, sigma: number): void {
 
 /**
  * The PELT recursion: best[end] = min over kept starts of best[start] + C(start, end) + penalty,
- * previous[end] the minimising start (the first one on ties). Candidates are pruned in place.
+ * previous[end] the minimising start (the first one on ties).
+ * Pruning with a shortest segment m: a start s with best[s] + C(s, t) > best[t] is beaten by t
+ * for every later end u, since C(s, u) >= C(s, t) + C(t, u), but t may only start a segment
+ * ending at u >= t + m. So s is dropped at end t + m (when t has joined), not at once; dropping
+ * it at t (plain PELT) could lose the optimum for the ends in between. With m = 1 that is the
+ * next end, as in plain PELT. Candidates are compacted in place.
  */
 function optimalPartition(n: number, penalty: number, minSegment: number): void {
   const s1 = sum;
@@ -152,12 +159,16 @@ function optimalPartition(n: number, penalty: number, minSegment: number): void 
   const from = previous;
   const kept = candidates;
   const t = totals;
+  const until = dropAt;
   f[0] = -penalty;
   let count = 0;
   for (let end = minSegment; end <= n; end++) {
     // The start that just became far enough back joins the candidates, if it can end a segment.
     const fresh = end - minSegment;
-    if (fresh === 0 || fresh >= minSegment) kept[count++] = fresh;
+    if (fresh === 0 || fresh >= minSegment) {
+      kept[count++] = fresh;
+      until[fresh] = n + 1;
+    }
     const sumEnd = s1[end]!;
     const sumSqEnd = s2[end]!;
     let bestValue = Infinity;
@@ -176,10 +187,13 @@ function optimalPartition(n: number, penalty: number, minSegment: number): void 
     }
     f[end] = bestValue;
     from[end] = bestStart;
-    // PELT pruning: a start already worse by the penalty can never become optimal again.
+    // A start already worse by the penalty is beaten by `end` once `end` can start a segment.
+    const beatenFrom = end + minSegment;
     let left = 0;
     for (let k = 0; k < count; k++) {
-      if (t[k]! - penalty <= bestValue) kept[left++] = kept[k]!;
+      const start = kept[k]!;
+      if (t[k]! - penalty > bestValue && beatenFrom < until[start]!) until[start] = beatenFrom;
+      if (until[start]! > end + 1) kept[left++] = start;
     }
     count = left;
   }

@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { seededNormal } from './random.js';
 import { detectChangePoints } from '../../src/model/change-points.js';
@@ -18,14 +19,7 @@ function plainMedian(values: number[]): number {
  */
 function optimalPartition(values: number[], penalty: number, minSegment: number): number[] {
   const n = values.length;
-  const diffs = values.slice(1).map((x, i) => x - values[i]!);
-  const centre = plainMedian(diffs);
-  const sigma = (1.4826 * plainMedian(diffs.map((d) => Math.abs(d - centre)))) / Math.SQRT2;
-  const cost = (a: number, b: number): number => {
-    const seg = values.slice(a, b);
-    const m = seg.reduce((s, x) => s + x, 0) / seg.length;
-    return seg.reduce((s, x) => s + (x - m) ** 2, 0) / sigma ** 2;
-  };
+  const cost = segmentCost(values);
   const best = [-penalty];
   const from = [0];
   for (let end = 1; end <= n; end++) {
@@ -43,6 +37,36 @@ function optimalPartition(values: number[], penalty: number, minSegment: number)
   const starts: number[] = [];
   for (let at = from[n]!; at > 0; at = from[at]!) starts.push(at);
   return starts.reverse();
+}
+
+/**
+ * The noise sigma the detector documents: 1.4826 MAD of successive differences / sqrt 2, or, when
+ * that MAD is 0 (quantised data), the RMS of the differences / sqrt 2.
+ */
+function noiseSigma(values: number[]): number {
+  const diffs = values.slice(1).map((x, i) => x - values[i]!);
+  const centre = plainMedian(diffs);
+  const robust = (1.4826 * plainMedian(diffs.map((d) => Math.abs(d - centre)))) / Math.SQRT2;
+  return robust > 0 ? robust : Math.sqrt(diffs.reduce((s, d) => s + d * d, 0) / (2 * diffs.length));
+}
+
+/** C(a, b): squared deviations of values[a..b) from their mean, over sigma^2, summed directly. */
+function segmentCost(values: number[]): (a: number, b: number) => number {
+  const sigma = noiseSigma(values);
+  return (a, b) => {
+    const seg = values.slice(a, b);
+    const m = seg.reduce((s, x) => s + x, 0) / seg.length;
+    return seg.reduce((s, x) => s + (x - m) ** 2, 0) / sigma ** 2;
+  };
+}
+
+/** The penalised cost of a segmentation given by its starts. */
+function penalisedCost(values: number[], starts: number[], penalty: number): number {
+  const cost = segmentCost(values);
+  const bounds = [0, ...starts, values.length];
+  let total = penalty * starts.length;
+  for (let i = 1; i < bounds.length; i++) total += cost(bounds[i - 1]!, bounds[i]!);
+  return total;
 }
 
 function steps(levels: [number, number][], sd: number, seed: number): number[] {
@@ -78,6 +102,46 @@ describe('detectChangePoints', () => {
         expect(detectChangePoints(values, { penalty, minSegment })).toEqual(optimalPartition(values, penalty, minSegment));
       }
     }
+  });
+
+  it('property: equals the plain O(n^2) optimal partition on random level-shift series of any length', () => {
+    // Segments of random length and level, Gaussian noise; some series quantised to whole units so
+    // the MAD of differences is often 0 (the RMS fallback) and costs tie. A long series first, so
+    // the scratch buffers shared between calls are larger than the series and hold stale values.
+    const segment = fc.record({ length: fc.integer({ min: 1, max: 40 }), level: fc.double({ min: -6, max: 6, noNaN: true }) });
+    const series = fc.record({
+      segments: fc.array(segment, { minLength: 1, maxLength: 5 }),
+      seed: fc.integer({ min: 1, max: 1e6 }),
+      offset: fc.constantFrom(0, 1e6),
+      quantised: fc.boolean(),
+      minSegment: fc.integer({ min: 1, max: 8 }),
+      penaltyScale: fc.constantFrom(0, 0.5, 1, 3),
+    });
+    fc.assert(
+      fc.property(series, ({ segments, seed, offset, quantised, minSegment, penaltyScale }) => {
+        detectChangePoints(steps([[300, 0], [200, 3]], 1, seed));
+        const raw = steps(segments.map((s) => [s.length, s.level] as [number, number]), 1, seed);
+        const values = raw.map((x) => offset + (quantised ? Math.round(x) : x));
+        const penalty = penaltyScale * Math.log(Math.max(values.length, 2));
+        const found = detectChangePoints(values, { penalty, minSegment });
+        if (values.length < 2 * minSegment || !(noiseSigma(values) > 0)) {
+          expect(found).toEqual([]);
+          return;
+        }
+        const optimal = optimalPartition(values, penalty, minSegment);
+        for (let i = 0; i < found.length; i++) {
+          const from = i === 0 ? 0 : found[i - 1]!;
+          expect(found[i]! - from).toBeGreaterThanOrEqual(minSegment);
+        }
+        if (values.length - (found.at(-1) ?? 0) < minSegment) expect.fail('last segment shorter than minSegment');
+        // Equal cost always (ties may pick another optimum); equal partition on untied data.
+        const ours = penalisedCost(values, found, penalty);
+        const best = penalisedCost(values, optimal, penalty);
+        expect(Math.abs(ours - best)).toBeLessThanOrEqual(1e-7 * Math.max(1, Math.abs(best)));
+        if (!quantised) expect(found).toEqual(optimal);
+      }),
+      { numRuns: 300, seed: 4242 },
+    );
   });
 
   it('respects the shortest segment and handles short or constant series', () => {
