@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { selectBaseline } from '../../src/gate/baseline.js';
 import { InputError } from '../../src/model/input-error.js';
@@ -44,5 +45,30 @@ describe('selectBaseline', () => {
     expect(young.values).toHaveLength(45);
     // change-points: false turns it off
     expect(selectBaseline(history, 'm', settingsWith({ minRuns: 8, changePoints: false })).since).toBeUndefined();
+  });
+
+  it('property: on the plain scale it equals the straightforward filter-then-slice of the column', () => {
+    // The optimised path walks back from the newest run and counts older runs only on demand;
+    // the reference below builds every (run, value) pair, drops the missing, keeps the last
+    // `window` and counts all of them. Missing values (NaN) and windows above the run count included.
+    const cell = fc.oneof(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.constant(Number.NaN));
+    fc.assert(
+      fc.property(fc.array(cell, { maxLength: 120 }), fc.integer({ min: 2, max: 150 }), (column, window) => {
+        const history = historyOf({ m: column });
+        const got = selectBaseline(history, 'm', settingsWith({ window, changePoints: false }));
+        const present = column.map((x, i) => ({ x, id: `run-${i + 1}` })).filter((p) => Number.isFinite(p.x));
+        const kept = present.slice(Math.max(0, present.length - window));
+        expect(got.values).toEqual(kept.map((p) => p.x));
+        expect(got.runIds).toEqual(kept.map((p) => p.id));
+        expect(got.available).toBe(present.length);
+        // The log scale still goes through the checked path and agrees on which runs it keeps.
+        if (present.every((p) => p.x > 0)) {
+          const logged = selectBaseline(history, 'm', settingsWith({ window, changePoints: false, transform: 'log' }));
+          expect(logged.runIds).toEqual(got.runIds);
+          expect(logged.available).toBe(got.available);
+        }
+      }),
+      { numRuns: 300, seed: 9117 },
+    );
   });
 });

@@ -44,4 +44,29 @@ describe('renderText', () => {
     // Names are capped, so a 10 KB name cannot flood the log.
     expect(out).not.toContain('L'.repeat(100));
   });
+
+  it('aligns every column by code points, whatever the names hold (accents, CJK, astral emoji, long names)', () => {
+    // Reference: the column start is where the header word starts, counted in code points as
+    // Array.from counts them (so a surrogate pair is one), after the cells before it and 2 spaces.
+    const names = ['plain/name', 'accent/é-ü', 'cjk/名前', 'emoji/\u{1F680}\u{1F680}-x', 'lone/\uD800-surrogate', `long/${'n'.repeat(120)}`];
+    const extra = names.map((name) => ({ name, unit: 'µs', centre: 5, spread: 1, now: 5, status: 'ok' as const }));
+    const lines = renderText(makeFixture(extra).report, { color: false }).split('\n');
+    const header = lines.find((l) => l.startsWith('status'))!;
+    const start = (line: string, text: string): number => Array.from(line.slice(0, line.indexOf(text))).length;
+    const valueColumn = start(header, 'this run');
+    const baselineColumn = start(header, 'baseline');
+    const rows = lines.filter((l) => /^[▲▼●] /.test(l));
+    expect(rows.length).toBe(4 + names.length);
+    for (const row of rows) {
+      const points = Array.from(row);
+      // The cell before each column start ends with two spaces, and the column starts with a non-space.
+      for (const column of [valueColumn, baselineColumn]) {
+        expect(points.slice(column - 2, column).join('')).toBe('  ');
+        expect(points[column]).not.toBe(' ');
+      }
+    }
+    // The long name is capped with an ellipsis at 80 code points, the others shown whole.
+    expect(rows.some((r) => r.includes(`long/${'n'.repeat(74)}…`))).toBe(true);
+    expect(rows.some((r) => r.includes('emoji/\u{1F680}\u{1F680}-x'))).toBe(true);
+  });
 });
