@@ -1,6 +1,6 @@
 import { join } from 'node:path';
 import type { Report } from '../gate/report.js';
-import { artifactName } from '../history/artifact-store.js';
+import { artifactName } from '../history/artifact-name.js';
 import type { History } from '../history/history.js';
 import type { RunContext } from './context.js';
 import { describeError } from './describe-error.js';

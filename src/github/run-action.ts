@@ -18,7 +18,8 @@ import { join } from 'node:path';
 import { settingsFor } from '../config/rules.js';
 import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
-import { artifactName, type ArtifactUploader } from '../history/artifact-store.js';
+import { artifactName } from '../history/artifact-name.js';
+import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
 import { InputError } from '../model/input-error.js';
@@ -49,7 +50,7 @@ export interface ActionDeps {
   now(): Date;
   createApi: GitHubApiFactory;
   upload: ArtifactUploader;
-  createStore?: (spec: StoreSpec) => HistoryStore;
+  createStore?: (spec: StoreSpec) => HistoryStore | Promise<HistoryStore>;
   retry?: RetryTuning;
 }
 
@@ -112,7 +113,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     });
     return api;
   };
-  const store = (deps.createStore ?? createHistoryStore)({
+  const store = await (deps.createStore ?? createHistoryStore)({
     kind: inputs.store,
     history: inputs.history,
     series,

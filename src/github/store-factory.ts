@@ -2,9 +2,8 @@
  * Picks the history store named by the `store` input. This is the seam for further stores: a
  * builder per kind in STORE_BUILDERS.
  */
-import { createArtifactStore, type ArtifactUploader } from '../history/artifact-store.js';
+import type { ArtifactUploader } from '../history/artifact-store.js';
 import { createFileStore } from '../history/file-store.js';
-import { createBranchStore } from '../history/branch-store.js';
 import { dataBranchName, DEFAULT_DATA_BRANCH } from '../history/branch-path.js';
 import type { HistoryStore } from '../history/store.js';
 import { InputError } from '../model/input-error.js';
@@ -27,11 +26,13 @@ export interface StoreSpec {
   warn: (message: string) => void;
 }
 
-export type StoreBuilder = (spec: StoreSpec) => HistoryStore;
+/** Builds one kind of store. The artifact and branch stores load on use: a file store (and the
+ * start-up of every run) need not pay for their zip reader and API code. */
+export type StoreBuilder = (spec: StoreSpec) => HistoryStore | Promise<HistoryStore>;
 
 export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
-  artifact: (s) =>
-    createArtifactStore({
+  artifact: async (s) =>
+    (await import('../history/artifact-store.js')).createArtifactStore({
       api: s.api(),
       upload: s.upload,
       history: s.history,
@@ -50,7 +51,7 @@ export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
  * `bellgate-data`). Writing onto the baseline branch itself is refused: the history would land
  * among the code it measures.
  */
-function buildBranchStore(s: StoreSpec): HistoryStore {
+async function buildBranchStore(s: StoreSpec): Promise<HistoryStore> {
   const branch = dataBranchName(s.history === DEFAULT_HISTORY ? DEFAULT_DATA_BRANCH : s.history);
   if (branch === s.baselineBranch) {
     throw new InputError(`input \`history\` names the baseline branch "${branch}" as the data branch`, {
@@ -60,14 +61,15 @@ function buildBranchStore(s: StoreSpec): HistoryStore {
   }
   const api = s.api().gitData;
   if (!api) throw new InputError('this GitHub client cannot write a data branch', { where: 'input store', fix: 'use `store: artifact` or `store: file`' });
+  const { createBranchStore } = await import('../history/branch-store.js');
   return createBranchStore({ api, branch, series: s.series });
 }
 
 /**
  * Builds the store for the spec's kind.
  * @throws InputError for a kind that is not available.
- * @example createHistoryStore({ kind: 'file', history: 'bench/history.json', ... }).describe()
+ * @example (await createHistoryStore({ kind: 'file', history: 'bench/history.json', ... })).describe()
  */
-export function createHistoryStore(spec: StoreSpec, builders: Record<StoreKind, StoreBuilder> = STORE_BUILDERS): HistoryStore {
+export async function createHistoryStore(spec: StoreSpec, builders: Record<StoreKind, StoreBuilder> = STORE_BUILDERS): Promise<HistoryStore> {
   return builders[spec.kind](spec);
 }

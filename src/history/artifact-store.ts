@@ -17,12 +17,14 @@
  * load fails: writing then would bury the history.
  * Save never uploads fewer runs than load read.
  */
-import { createHash } from 'node:crypto';
 import { emptyHistory, type History } from './history.js';
 import { parseHistory, serializeHistory } from './document.js';
 import { mergeHistories } from './merge.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 import { DEFAULT_ZIP_LIMITS, readZipEntry, type ZipLimits } from './artifact-zip.js';
+import { artifactName } from './artifact-name.js';
+
+export { artifactName } from './artifact-name.js';
 
 /** One artifact as the REST API lists it (the fields the store needs). */
 export interface ArtifactEntry {
@@ -65,17 +67,6 @@ export interface ArtifactStoreOptions {
 
 /** The history file's name inside the artifact zip. */
 export const HISTORY_FILE = 'history.json';
-
-/**
- * The artifact name of a series: readable slug plus a short hash, so distinct series never share a
- * name even when their slugs coincide. Only characters the artifact service accepts.
- * @example artifactName('bellgate-history', 'bench/linux') // 'bellgate-history-bench-linux-<8 hex>'
- */
-export function artifactName(history: string, series: string): string {
-  const slug = series.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60);
-  const hash = createHash('sha256').update(series).digest('hex').slice(0, 8);
-  return slug === '' ? `${history}-${hash}` : `${history}-${slug}-${hash}`;
-}
 
 /**
  * Builds the artifact store.
