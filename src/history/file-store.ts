@@ -1,4 +1,4 @@
-import { createHash, randomBytes } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import { mkdir, open, readFile, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../model/input-error.js';
@@ -80,9 +80,10 @@ export function createFileStore(path: string, series: string): HistoryStore {
     return read;
   }
 
-  // The runs of every document load() parsed, by fingerprint of its bytes: when save() finds the
-  // same bytes on disk it knows their runs without parsing them again (the costliest step at scale).
-  const loaded = new Map<string, RunInfo[]>();
+  // Every document load() parsed, its bytes and runs: when save() finds the same bytes on disk it
+  // knows their runs without parsing them again (the costliest step at scale). Comparing the bytes
+  // (a memcmp) costs less than hashing them twice; they are kept for the splice anyway.
+  const loaded: { bytes: Buffer; runs: RunInfo[] }[] = [];
   // The newest document load() read, kept with its bytes so save() can splice an append into its
   // rows instead of writing every number again (spliceHistory checks that h still agrees with it).
   let written: WrittenHistory | undefined;
@@ -94,7 +95,9 @@ export function createFileStore(path: string, series: string): HistoryStore {
       const bytes = await readBytes();
       if (bytes === undefined) return emptyHistory(series);
       const { history, rows } = parseBytes(bytes);
-      loaded.set(fingerprint(bytes), history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })));
+      if (!loaded.some((d) => d.bytes.equals(bytes))) {
+        loaded.push({ bytes, runs: history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })) });
+      }
       // The bytes are kept only when they can be spliced (a plain version-2 document).
       if (rows !== undefined) written = { bytes, rows, history };
       return history;
@@ -130,17 +133,13 @@ export function createFileStore(path: string, series: string): HistoryStore {
   async function healFromDisk(h: History): Promise<History> {
     let bytes = await readBytes();
     if (bytes === undefined) return h;
-    const runs = loaded.get(fingerprint(bytes));
+    const disk = bytes;
+    const runs = loaded.find((d) => d.bytes.equals(disk))?.runs;
     if (runs !== undefined && concurrentRuns(h, runs).length === 0) return h;
     const stored = parseBytes(bytes).history;
     bytes = undefined;
     return healConcurrent(h, stored);
   }
-}
-
-/** Size and SHA-1 of a file's bytes: equal prints mean the same document (SHA-1 as a checksum, not for security). */
-function fingerprint(bytes: Buffer): string {
-  return `${bytes.length}:${createHash('sha1').update(bytes).digest('hex')}`;
 }
 
 async function writeAtomically(path: string, text: string | Uint8Array, where: string): Promise<void> {

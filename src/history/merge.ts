@@ -122,10 +122,13 @@ export function healConcurrent(h: History, stored: History): History {
  */
 export function concurrentRuns(h: History, storedRuns: readonly RunInfo[]): number[] {
   const mine = new Set(h.runs.map((r) => r.id));
-  const oldest = h.runs.reduce((min, r) => Math.min(min, timeKey(r)), Infinity);
+  // Reading every time is the costly part, and needed only when some stored id is not in h.
+  let oldest: number | undefined;
   const keep: number[] = [];
   storedRuns.forEach((r, i) => {
-    if (!mine.has(r.id) && timeKey(r) >= oldest) keep.push(i);
+    if (mine.has(r.id)) return;
+    oldest ??= h.runs.reduce((min, run) => Math.min(min, timeKey(run)), Infinity);
+    if (timeKey(r) >= oldest) keep.push(i);
   });
   return keep;
 }
