@@ -157,10 +157,7 @@ class ByteReader {
       const c = b[i]!;
       if (c === QUOTE) {
         // A string ends at the first quote no backslash escapes (\uXXXX holds neither).
-        i++;
-        while (i < b.length && b[i] !== QUOTE) i += b[i] === BACKSLASH ? 2 : 1;
-        if (i >= b.length) throw new NotPlain();
-        i++;
+        i = stringEnd(b, i + 1);
         if (depth === 0) break;
       } else if (c === OPEN_SQUARE || c === OPEN_CURLY) {
         depth++;
@@ -185,95 +182,115 @@ class ByteReader {
       this.at++;
       return { rows, rowEnds };
     }
+    // Rows are as long as the runs table, so the first row's length sizes the others' arrays.
+    let sizeHint = 0;
     for (;;) {
       this.expect(OPEN_SQUARE);
-      rows.push(this.row());
-      rowEnds.push(this.at - 1);
+      const row = readRow(this.bytes, this.at, sizeHint);
+      sizeHint = row.length;
+      this.at = rowEnd + 1;
+      rows.push(row);
+      rowEnds.push(rowEnd);
       const c = this.peek();
       this.at++;
       if (c === CLOSE_SQUARE) return { rows, rowEnds };
       if (c !== COMMA) throw new NotPlain();
     }
   }
+}
 
-  /** One row after its `[`, up to and past its `]`. */
-  private row(): number[] {
-    const b = this.bytes;
-    const row: number[] = [];
-    let i = this.at;
-    while (isSpace(b[i] ?? 0)) i++;
-    if (b[i] === CLOSE_SQUARE) {
-      this.at = i + 1;
-      return row;
-    }
-    for (;;) {
-      if (b[i] === 0x6e) {
-        // null
-        if (b[i + 1] !== 0x75 || b[i + 2] !== 0x6c || b[i + 3] !== 0x6c) throw new NotPlain();
-        row.push(NaN);
-        i += 4;
-      } else {
-        i = this.number(i, row);
-      }
-      while (isSpace(b[i] ?? 0)) i++;
-      const c = b[i];
-      i++;
-      if (c === CLOSE_SQUARE) break;
-      if (c !== COMMA) throw new NotPlain();
-      while (isSpace(b[i] ?? 0)) i++;
-    }
-    this.at = i;
+/**
+ * The offset just past the closing quote of a string whose content starts at `from`. A quote
+ * closes it unless an odd run of backslashes precedes it (\\uXXXX holds neither); indexOf keeps
+ * the long id and name lists of the header from costing a step per byte.
+ */
+function stringEnd(b: Uint8Array, from: number): number {
+  for (let i = b.indexOf(QUOTE, from); i >= 0; i = b.indexOf(QUOTE, i + 1)) {
+    let slashes = 0;
+    while (b[i - 1 - slashes] === BACKSLASH) slashes++;
+    if (slashes % 2 === 0) return i + 1;
+  }
+  throw new NotPlain();
+}
+
+/** Where readRow found its row's `]` (a module variable, so the hot loop returns no object). */
+let rowEnd = 0;
+
+/**
+ * One row from just after its `[`: numbers and nulls (as NaN) into an array of doubles, stored by
+ * index into an array sized by `sizeHint` (stores into a pre-sized array beat push). Sets rowEnd.
+ */
+function readRow(b: Uint8Array, start: number, sizeHint: number): number[] {
+  const row: number[] = new Array<number>(sizeHint);
+  let k = 0;
+  let i = start;
+  const end = b.length;
+  let c = i < end ? b[i]! : -1;
+  while (c === SPACE || c === LF || c === CR || c === TAB) c = ++i < end ? b[i]! : -1;
+  if (c === CLOSE_SQUARE) {
+    rowEnd = i;
+    row.length = 0;
     return row;
   }
-
-  /**
-   * One JSON number starting at `i`, pushed onto `row`; returns the offset after it. Up to 15
-   * significant digits without an exponent, the value is digits / 10^scale: both are exact
-   * doubles, so the one division rounds correctly (Clinger 1990, "How to read floating point
-   * numbers accurately", the fast path). Anything else goes to Number(), which rounds correctly too.
-   */
-  private number(start: number, row: number[]): number {
-    const b = this.bytes;
-    let i = start;
-    let c = b[i] ?? -1;
-    const negative = c === MINUS;
-    if (negative) c = b[++i] ?? -1;
-    let digits = 0;
-    let mantissa = 0;
-    let scale = 0;
-    if (c === ZERO) c = b[++i] ?? -1;
-    else if (c > ZERO && c <= NINE) {
-      do {
-        mantissa = mantissa * 10 + (c - ZERO);
-        digits++;
-        c = b[++i] ?? -1;
-      } while (c >= ZERO && c <= NINE);
-    } else throw new NotPlain();
-    if (c === DOT) {
-      c = b[++i] ?? -1;
-      if (!(c >= ZERO && c <= NINE)) throw new NotPlain();
-      do {
-        mantissa = mantissa * 10 + (c - ZERO);
-        digits++;
-        scale++;
-        c = b[++i] ?? -1;
-      } while (c >= ZERO && c <= NINE);
-    }
-    let exact = digits <= 15 && scale <= 22;
-    if (c === LOWER_E || c === UPPER_E) {
-      exact = false;
-      c = b[++i] ?? -1;
-      if (c === PLUS || c === MINUS) c = b[++i] ?? -1;
-      if (!(c >= ZERO && c <= NINE)) throw new NotPlain();
-      do c = b[++i] ?? -1;
-      while (c >= ZERO && c <= NINE);
-    }
-    if (exact) {
-      const magnitude = scale === 0 ? mantissa : mantissa / EXACT_POWERS[scale]!;
-      row.push(negative ? -magnitude : magnitude);
+  for (;;) {
+    if (c === 0x6e) {
+      // null
+      if (b[i + 1] !== 0x75 || b[i + 2] !== 0x6c || b[i + 3] !== 0x6c) throw new NotPlain();
+      row[k++] = NaN;
+      i += 4;
     } else {
-      row.push(Number(ASCII.decode(b.subarray(start, i))));
+      // A JSON number. Up to 15 significant digits and no exponent, the value is digits / 10^scale:
+      // both are exact doubles, so the one division rounds correctly (Clinger 1990, "How to read
+      // floating point numbers accurately", the fast path). Anything else goes to Number(), which
+      // rounds correctly too.
+      const first = i;
+      const negative = c === MINUS;
+      if (negative) c = ++i < end ? b[i]! : -1;
+      let digits = 0;
+      let mantissa = 0;
+      let scale = 0;
+      if (c === ZERO) c = ++i < end ? b[i]! : -1;
+      else if (c > ZERO && c <= NINE) {
+        do {
+          mantissa = mantissa * 10 + (c - ZERO);
+          digits++;
+          c = ++i < end ? b[i]! : -1;
+        } while (c >= ZERO && c <= NINE);
+      } else throw new NotPlain();
+      if (c === DOT) {
+        c = ++i < end ? b[i]! : -1;
+        if (!(c >= ZERO && c <= NINE)) throw new NotPlain();
+        do {
+          mantissa = mantissa * 10 + (c - ZERO);
+          digits++;
+          scale++;
+          c = ++i < end ? b[i]! : -1;
+        } while (c >= ZERO && c <= NINE);
+      }
+      let exact = digits <= 15 && scale <= 22;
+      if (c === LOWER_E || c === UPPER_E) {
+        exact = false;
+        c = ++i < end ? b[i]! : -1;
+        if (c === PLUS || c === MINUS) c = ++i < end ? b[i]! : -1;
+        if (!(c >= ZERO && c <= NINE)) throw new NotPlain();
+        do c = ++i < end ? b[i]! : -1;
+        while (c >= ZERO && c <= NINE);
+      }
+      if (exact) {
+        const magnitude = scale === 0 ? mantissa : mantissa / EXACT_POWERS[scale]!;
+        row[k++] = negative ? -magnitude : magnitude;
+      } else {
+        row[k++] = Number(ASCII.decode(b.subarray(first, i)));
+      }
     }
-    return i;
+    c = i < end ? b[i]! : -1;
+    while (c === SPACE || c === LF || c === CR || c === TAB) c = ++i < end ? b[i]! : -1;
+    if (c === CLOSE_SQUARE) break;
+    if (c !== COMMA) throw new NotPlain();
+    c = ++i < end ? b[i]! : -1;
+    while (c === SPACE || c === LF || c === CR || c === TAB) c = ++i < end ? b[i]! : -1;
   }
+  rowEnd = i;
+  if (k !== row.length) row.length = k;
+  return row;
 }
