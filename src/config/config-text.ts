@@ -28,6 +28,7 @@ export function checkedConfigTree(text: string, source: string): YamlTree | unde
 /**
  * The last step: the Config from a checked tree (to-config.ts), with the rules' globs compiled by
  * `globs`. @throws InputError for what the schema cannot say (a bad glob, window < min-runs, ...).
+ * @example configFromTree(checkedConfigTree('keep: 900\n', 'b.yml')!, 'b.yml', exactNameCompiler).keep // 900
  */
 export function configFromTree(tree: YamlTree, source: string, globs: GlobCompiler): Config {
   const built = toConfig(tree.value, tree, source, globs);
