@@ -1,15 +1,16 @@
 import pc from 'picocolors';
-import type { GroupResult, Report, Status } from '../gate/report.js';
+import type { GroupResult, MetricResult, Report, Status } from '../gate/report.js';
 import { cleanText } from './clean.js';
 import { metricCells } from './cells.js';
 import { formatSigma } from './format.js';
-import { STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
+import { STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
 
 type Colors = ReturnType<typeof pc.createColors>;
 
 /** Names are capped shorter in a terminal table than elsewhere, so a row fits a wide terminal. */
 const TEXT_NAME_MAX = 80;
-const JUDGED: ReadonlySet<Status> = new Set<Status>(['regressed', 'improved', 'ok']);
+/** The statuses of the table, in statusRank order. */
+const JUDGED: readonly Status[] = ['regressed', 'improved', 'ok'];
 const LISTED: readonly Status[] = ['missing', 'learning', 'new', 'ignored'];
 
 function paint(c: Colors, s: Status, text: string): string {
@@ -59,9 +60,10 @@ export function renderText(report: Report, options: { color: boolean }): string 
   lines.push(`Bellgate — series "${clean(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
   lines.push(`${VERDICT_HEADLINE[report.verdict]}; ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`);
 
-  const judged = report.metrics
-    .filter((m) => JUDGED.has(m.status))
-    .sort((a, b) => statusRank(a.status) - statusRank(b.status));
+  // Regressed, then improved, then ok, each in report order (a stable sort by statusRank, in one pass).
+  const byStatus = new Map<Status, MetricResult[]>(JUDGED.map((status) => [status, []]));
+  for (const m of report.metrics) byStatus.get(m.status)?.push(m);
+  const judged = [...byStatus.values()].flat();
   if (judged.length > 0) {
     const head = ['status', 'metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density vs cutoff'];
     const columns = head.length;
