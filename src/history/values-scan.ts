@@ -186,7 +186,9 @@ class ByteReader {
     let sizeHint = 0;
     for (;;) {
       this.expect(OPEN_SQUARE);
-      let row = new Array<number>(sizeHint);
+      // A copy of the previous row is an array of doubles of the right size: filling it stores
+      // in place, where a new Array(n) would first hold tagged holes and be converted on the first double.
+      let row = rows.length > 0 ? (rows[rows.length - 1] as number[]).slice() : [];
       let end = plainRow(this.bytes, this.at, row);
       if (end < 0) {
         row = readRow(this.bytes, this.at, sizeHint);
