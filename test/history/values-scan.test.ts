@@ -94,6 +94,20 @@ describe('scanHistoryBytes', () => {
     );
   });
 
+  it('compact rows of valid and broken number tokens read as JSON.parse reads them, or are left to it', () => {
+    // Rows without spaces take the reader's short road (plainRow); broken tokens must still be refused.
+    const token = fc.oneof(
+      numberText,
+      fc.constantFrom('null', 'nul', 'nulll', '-', '--1', '01', '1.', '.5', '1e', '1e+', '+1', '0x1', '1.2.3', '', '-0', '0.000001', '999999999999999', '9999999999999999', 'true', '"1"'),
+    );
+    fc.assert(
+      fc.property(fc.array(token, { maxLength: 8 }), fc.boolean(), (cells, trailingComma) => {
+        parsesLikeJson(`{"metrics":{"values":[[${cells.join(',')}${trailingComma ? ',' : ''}],[${cells.slice().reverse().join(',')}]]}}`);
+      }),
+      { numRuns: 3000 },
+    );
+  });
+
   it('leaves unusual but valid shapes to JSON.parse: escaped or repeated keys, strings in rows, BOM', () => {
     const cases = [
       '{"metrics":{"val\\u0075es":[[1]]}}',
