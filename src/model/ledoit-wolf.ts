@@ -1,5 +1,5 @@
-import { Matrix } from 'ml-matrix';
 import { checkRows } from './matrix-input.js';
+import { matrixLibrary } from './matrix-library.js';
 
 /** A covariance estimate shrunk toward its diagonal. */
 export interface ShrunkCovariance {
@@ -27,6 +27,7 @@ export interface ShrunkCovariance {
 export function shrunkCovariance(rows: readonly (readonly number[])[]): ShrunkCovariance {
   const p = checkRows(rows, 2);
   const n = rows.length;
+  const { Matrix } = matrixLibrary();
   const x = new Matrix(rows.map((row) => [...row]));
   const mean = x.mean('column');
   // Centring first keeps large offsets (timings around 1e9 ns) from swamping the products.

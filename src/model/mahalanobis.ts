@@ -1,5 +1,5 @@
-import { CholeskyDecomposition, Matrix } from 'ml-matrix';
 import { InputError } from './input-error.js';
+import { matrixLibrary } from './matrix-library.js';
 
 /**
  * Ridges tried, relative to the mean variance, when the covariance is not positive definite
@@ -24,6 +24,7 @@ function solveCovariance(d: number[], covariance: readonly (readonly number[])[]
       fix: 'give the metrics a resolution, or leave constant metrics out of the joint check',
     });
   }
+  const { CholeskyDecomposition, Matrix } = matrixLibrary();
   for (const relative of RELATIVE_RIDGES) {
     const ridge = (relative * trace) / p;
     const matrix = new Matrix(covariance.map((row, i) => row.map((v, j) => (i === j ? v + ridge : v))));
