@@ -3,6 +3,9 @@
  * metric aligned with them (NaN where a run lacks the metric). Columnar because the gate reads a
  * metric's whole past at once, and because the stored document is columnar too (names once).
  * This module is pure; reading and writing documents lives beside it (document.ts, stores).
+ * A History is never changed in place: appendRun, trimHistory and merges return new ones, and may
+ * share unchanged value arrays with their input; the file store relies on that when it splices an
+ * append into the text it read (splice-append.ts compares values with the arrays it decoded).
  */
 
 /** Who produced a run. `id` is the CI run id and attempt ("1234-1"), unique within a series. */

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
-import { serializeHistory } from '../../src/history/document.js';
+import { parseHistory, serializeHistory } from '../../src/history/document.js';
 import { createFileStore, HISTORY_FILE_LIMIT } from '../../src/history/file-store.js';
 import { appendRun, trimHistory } from '../../src/history/merge.js';
 import { StoreError } from '../../src/history/store.js';
@@ -181,6 +181,25 @@ describe('createFileStore', () => {
     const back = await createFileStore(path, 'linux-x64').load();
     expect(back.runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1', '8104-1']);
     expect(back.columns.get('build/compile')?.values).toEqual([1.5, 2.5, 3.5, 4.5]);
+  });
+
+  it('an append to a hand-spaced file keeps its rows as written and reads back as the generic writer would write it', async () => {
+    // Reference: serializeHistory (JSON.stringify of every row) read back by parseHistory.
+    const path = join(root, 'hand-spaced.json');
+    const runs = [info(1), info(2), info(3)];
+    await writeFile(
+      path,
+      `{ "schema": "bellgate.history/2", "series": "linux-x64",\n  "runs": ${JSON.stringify({ id: runs.map((r) => r.id), time: runs.map((r) => r.time) }, null, 2)},\n` +
+        '  "metrics": { "names": ["build/compile", "size"], "units": ["s", "B"], "values": [\n    [ 1.50, null, 2.5E0 ],\n    [-0, 7, 1e-300]\n  ] }\n}\n',
+    );
+    const store = createFileStore(path, 'linux-x64');
+    const loaded = await store.load();
+    const next = trimHistory(appendRun(loaded, info(4), run(4.25)), 3);
+    await store.save(next, 3);
+    const text = await readFile(path, 'utf8');
+    expect(text).toContain('[ null, 2.5E0 ,4.25]'); // the old row's bytes, the oldest entry dropped
+    expect(text).toContain('[ 7, 1e-300,null]'); // the -0 was dropped with the oldest run; no new size value
+    expect(parseHistory(text, path)).toEqual(parseHistory(serializeHistory(next), 'generic'));
   });
 
   it('another writer (another process) saved between load and save: both runs are kept', async () => {
