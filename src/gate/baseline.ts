@@ -31,7 +31,9 @@ export interface SelectedBaseline {
  * 3. with `change-points` on, PELT-style segmentation of that window (detectChangePoints); when the
  *    last segment already spans `min-runs` runs, only it is kept, so a merged level change stops
  *    counting as a regression once the new level has enough history.
- * O(runs) plus the change-point search. Throws InputError when a value cannot take the transform.
+ * O(window) on the plain scale (older runs are counted only when `available` is read), O(runs)
+ * with a transform or ratio, plus the change-point search. Throws InputError when a value cannot
+ * take the transform.
  * @example selectBaseline(history, 'build/time', settings).values // [412.5, 409.9, ...]
  */
 export function selectBaseline(history: History, name: string, settings: MetricSettings): SelectedBaseline {

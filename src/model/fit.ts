@@ -34,8 +34,8 @@ export interface GaussianFit {
  * The spread is never below `resolution` (the smallest meaningful step). It is 0 only for a
  * constant history (or a single run) with resolution 0; the relative densities treat a zero
  * spread as "any other value is infinitely unlikely" instead of returning NaN.
- * O(n) (robust: O(n log n)). Throws InputError on an empty input, a non-finite value or a
- * negative or non-finite resolution.
+ * O(n) (robust: O(n) expected, the medians by selection). Throws InputError on an empty input,
+ * a non-finite value or a negative or non-finite resolution.
  *
  * @example fitGaussian([9, 10, 11], 'mle') // { n: 3, mean: 10, sd: 0.8165, sampleSd: 1, ... }
  */
