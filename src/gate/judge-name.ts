@@ -17,7 +17,9 @@ export function metricNames(history: History, run: Run): string[] {
   for (const [name, column] of history.columns) {
     if (!names.has(name) && holdsValue(column.values)) names.add(name);
   }
-  return [...names].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+  // The default sort compares strings by UTF-16 code units, the same order as `<`, without a
+  // callback per comparison.
+  return [...names].sort();
 }
 
 /** Whether any value is finite (a plain loop: `some` with a closure costs more per metric). */
