@@ -7,6 +7,14 @@
  * @example parseIsoTime('2026-03-01T10:00:00+01:00') // 1772355600000 (09:00 UTC)
  */
 export function parseIsoTime(text: string): number | undefined {
+  // The canonical form Bellgate stores ("2026-03-01T10:00:00.000Z", toISOString): Date.parse reads
+  // it exactly, and the round trip proves the text was that form (an impossible date such as
+  // 2026-02-30 does not come back the same, and goes on to the checks below). A history holds one
+  // per run, so this is the common case.
+  if (text.length === 24 && text.charCodeAt(23) === 0x5a) {
+    const ms = Date.parse(text);
+    if (!Number.isNaN(ms) && new Date(ms).toISOString() === text) return ms;
+  }
   const m = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?$/i.exec(text.trim());
   if (!m) return undefined;
   const [, y, mo, d, h = '00', mi = '00', s = '00', frac = '', zone = 'Z'] = m;

@@ -17,6 +17,17 @@ describe('parseIsoTime', () => {
     }
   });
 
+  it('reads the canonical stored form (toISOString) as ECMA-262 Date.parse does, and refuses its impossible dates', () => {
+    for (let ms = 0; ms < 1000; ms += 37) {
+      const text = new Date(Date.UTC(2026, 2, 1, 10, 0, 59, ms)).toISOString();
+      expect(parseIsoTime(text)).toBe(Date.parse(text));
+    }
+    // Gregorian rules (from memory): February 2023 has 28 days, April 30; neither rolls over into the next month.
+    expect(parseIsoTime('2023-02-29T10:00:00.000Z')).toBeUndefined();
+    expect(parseIsoTime('2026-04-31T10:00:00.000Z')).toBeUndefined();
+    expect(parseIsoTime('2026-03-01T24:00:00.000Z')).toBeUndefined();
+  });
+
   it('takes a time without offset as UTC, whatever the machine zone (ISO 8601 leaves it local; Bellgate chooses UTC)', () => {
     expect(parseIsoTime('2026-03-01T10:00:00')).toBe(Date.UTC(2026, 2, 1, 10));
     expect(parseIsoTime('2026-03-01 10:00')).toBe(Date.UTC(2026, 2, 1, 10));
