@@ -79,37 +79,41 @@ function newestWindow(history: History, column: readonly number[], window: numbe
   };
 }
 
-/** Any other scale: every value of the history is checked, since the transform or ratio can refuse it. */
+/**
+ * Any other scale: every value of the history is checked, since the transform or ratio can refuse
+ * it. One forward pass checks and counts (in run order, so an error names the oldest bad run), then
+ * a walk back from the newest run builds just the `window` kept values.
+ */
 function checkedWindow(history: History, name: string, column: readonly number[], settings: MetricSettings): SelectedBaseline {
   const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
+  const ratio = settings.relativeTo !== undefined;
+  const count = Math.min(column.length, history.runs.length);
+  let available = 0;
+  for (let i = 0; i < count; i++) {
+    const x = pairedValue(column, reference?.values, ratio, i);
+    if (Number.isFinite(column[i]!)) available++;
+    if (x !== undefined) toHistoryFitScale(x, settings, name, history.runs[i]!.id);
+  }
   const values: number[] = [];
   const runIds: string[] = [];
-  let available = 0;
-  const count = Math.min(column.length, history.runs.length);
-  // Only the newest `window` pairs are kept, so count the pairs first and build just those
-  // (a long history otherwise costs an array entry and a run-id lookup per run and metric).
-  const paired = pairs(column, reference?.values, count, settings.relativeTo !== undefined);
-  const firstKept = paired - settings.window;
-  let k = 0;
-  for (let i = 0; i < count; i++) {
-    let x = column[i]!;
-    if (!Number.isFinite(x)) continue;
-    available++;
-    if (settings.relativeTo !== undefined) {
-      const r = reference?.values[i];
-      if (r === undefined || !Number.isFinite(r) || r === 0) continue;
-      x /= r;
-    }
-    // Values before the window are still checked: the scale can refuse them (log, ratios).
-    if (k++ < firstKept) {
-      toHistoryFitScale(x, settings, name, history.runs[i]!.id);
-      continue;
-    }
+  for (let i = count - 1; i >= 0 && values.length < settings.window; i--) {
+    const x = pairedValue(column, reference?.values, ratio, i);
+    if (x === undefined) continue;
     const id = history.runs[i]!.id;
     values.push(toHistoryFitScale(x, settings, name, id));
     runIds.push(id);
   }
-  return { values, runIds, available };
+  return { values: values.reverse(), runIds: runIds.reverse(), available };
+}
+
+/** Run i's value, divided by the reference of the same run for a ratio; undefined when it lacks either. */
+function pairedValue(column: readonly number[], reference: readonly number[] | undefined, ratio: boolean, i: number): number | undefined {
+  const x = column[i]!;
+  if (!Number.isFinite(x)) return undefined;
+  if (!ratio) return x;
+  const r = reference?.[i];
+  if (r === undefined || !Number.isFinite(r) || r === 0) return undefined;
+  return x / r;
 }
 
 /** Keeps only the runs after the last level change, once they are at least `minRuns`. */
@@ -127,20 +131,6 @@ function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedB
     since: baseline.runIds[last]!,
     window: { values: baseline.values, runIds: baseline.runIds },
   };
-}
-
-/** How many of the first `count` runs hold the metric (and, for ratios, a usable reference). */
-function pairs(column: readonly number[], reference: readonly number[] | undefined, count: number, ratio: boolean): number {
-  let n = 0;
-  for (let i = 0; i < count; i++) {
-    if (!Number.isFinite(column[i]!)) continue;
-    if (ratio) {
-      const r = reference?.[i];
-      if (r === undefined || !Number.isFinite(r) || r === 0) continue;
-    }
-    n++;
-  }
-  return n;
 }
 
 function toHistoryFitScale(x: number, settings: MetricSettings, name: string, runId: string): number {

@@ -61,14 +61,42 @@ describe('selectBaseline', () => {
         expect(got.values).toEqual(kept.map((p) => p.x));
         expect(got.runIds).toEqual(kept.map((p) => p.id));
         expect(got.available).toBe(present.length);
-        // The log scale still goes through the checked path and agrees on which runs it keeps.
-        if (present.every((p) => p.x > 0)) {
-          const logged = selectBaseline(history, 'm', settingsWith({ window, changePoints: false, transform: 'log' }));
+        // The log scale goes through the checked path: the same runs, each value's Math.log, or
+        // an error naming the oldest run whose value is not above 0.
+        const logSettings = settingsWith({ window, changePoints: false, transform: 'log' });
+        const firstBad = present.find((p) => !(p.x > 0));
+        if (firstBad === undefined) {
+          const logged = selectBaseline(history, 'm', logSettings);
+          expect(logged.values).toEqual(kept.map((p) => Math.log(p.x)));
           expect(logged.runIds).toEqual(got.runIds);
           expect(logged.available).toBe(got.available);
+        } else {
+          expect(() => selectBaseline(history, 'm', logSettings)).toThrow(`history run ${firstBad.id} has value ${firstBad.x} for m`);
         }
       }),
       { numRuns: 300, seed: 9117 },
+    );
+  });
+
+  it('property: relative-to keeps the newest `window` runs holding both values and a non-zero reference', () => {
+    // Reference: pair every run, keep those with a finite value and a finite non-zero reference,
+    // divide, keep the last `window`; `available` counts the runs holding the metric at all.
+    // Whole numbers and halves (no subnormal reference whose ratio would overflow), zeros and gaps.
+    const cell = fc.oneof(fc.integer({ min: -400, max: 400 }).map((k) => k / 2), fc.constant(Number.NaN), fc.constant(0));
+    const columns = fc.integer({ min: 0, max: 80 }).chain((n) => fc.tuple(fc.array(cell, { minLength: n, maxLength: n }), fc.array(cell, { minLength: n, maxLength: n })));
+    fc.assert(
+      fc.property(columns, fc.integer({ min: 2, max: 90 }), ([m, calib], window) => {
+        const history = historyOf({ m, calib });
+        const got = selectBaseline(history, 'm', settingsWith({ window, changePoints: false, relativeTo: 'calib' }));
+        const pairs = m
+          .map((x, i) => ({ x, r: calib[i]!, id: `run-${i + 1}` }))
+          .filter((p) => Number.isFinite(p.x) && Number.isFinite(p.r) && p.r !== 0);
+        const kept = pairs.slice(Math.max(0, pairs.length - window));
+        expect(got.values).toEqual(kept.map((p) => p.x / p.r));
+        expect(got.runIds).toEqual(kept.map((p) => p.id));
+        expect(got.available).toBe(m.filter((x) => Number.isFinite(x)).length);
+      }),
+      { numRuns: 300, seed: 9118 },
     );
   });
 });
