@@ -5,7 +5,7 @@ import { InputError } from '../model/input-error.js';
 import { parseHistoryBytes, serializeHistory } from './document.js';
 import { emptyHistory, type History, type RunInfo } from './history.js';
 import { concurrentRuns, healConcurrent } from './merge.js';
-import { spliceHistory, type WrittenHistory } from './splice-append.js';
+import { spliceHistory, writtenHistory, type WrittenHistory } from './splice-append.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 
 /**
@@ -99,7 +99,7 @@ export function createFileStore(path: string, series: string): HistoryStore {
         loaded.push({ bytes, runs: history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })) });
       }
       // The bytes are kept only when they can be spliced (a plain version-2 document).
-      if (rows !== undefined) written = { bytes, rows, history };
+      if (rows !== undefined) written = writtenHistory(bytes, rows, history);
       return history;
     },
     async save(h: History, readCount: number): Promise<void> {

@@ -1,12 +1,27 @@
 import { checkRuns, checkStorable, HISTORY_TAIL, historyHead, type ValueRows } from './document.js';
-import type { History } from './history.js';
+import type { History, RunInfo } from './history.js';
 
-/** A document as read: its bytes, where its values rows lie, and the History decoded from them. */
+/**
+ * A document as read: its bytes, where its values rows lie, and what was decoded from them — the
+ * run ids and each metric's row number and value array (taken at load, so a later change to the
+ * History's Map cannot misplace a row; the arrays themselves are never changed in place).
+ */
 export interface WrittenHistory {
   bytes: Uint8Array;
   rows: ValueRows;
-  /** What parseHistoryBytes decoded from `bytes`; its arrays must not have been changed since. */
-  history: History;
+  runIds: readonly string[];
+  columns: ReadonlyMap<string, { index: number; values: readonly number[] }>;
+}
+
+/**
+ * What spliceHistory needs to know of a document parseHistoryBytes read (bytes, rows) into `history`.
+ *
+ * @example const { history, rows } = parseHistoryBytes(bytes, path); if (rows) written = writtenHistory(bytes, rows, history);
+ */
+export function writtenHistory(bytes: Uint8Array, rows: ValueRows, history: History): WrittenHistory {
+  const columns = new Map<string, { index: number; values: readonly number[] }>();
+  for (const [name, column] of history.columns) columns.set(name, { index: columns.size, values: column.values });
+  return { bytes, rows, runIds: history.runs.map((r) => r.id), columns };
 }
 
 const COMMA = 0x2c;
@@ -16,7 +31,7 @@ const OPEN_SQUARE = 0x5b;
 type Row = { from: number; to: number; tail: string } | string;
 
 /**
- * serializeHistory(h) for the usual record — `h` is the history read from `written` with runs
+ * serializeHistory(h) for the usual record — `h` is the history decoded from `written` with runs
  * appended at the end and possibly the oldest runs dropped (trimHistory) — without writing a
  * million numbers again: each values row whose kept values are exactly the old row's (same
  * doubles, NaN for NaN) is the old row's bytes, less the dropped leading entries, plus the new
@@ -27,20 +42,16 @@ type Row = { from: number; to: number; tail: string } | string;
  * the caller then uses serializeHistory. Cost: one comparison per kept value and a copy of the bytes.
  * Throws InputError as serializeHistory does for a History that cannot be stored.
  *
- * @example spliceHistory(appendRun(loaded.history, info, run), loaded) ?? Buffer.from(serializeHistory(h))
+ * @example spliceHistory(appendRun(history, info, run), writtenHistory(bytes, rows, history)) ?? serializeHistory(next)
  */
 export function spliceHistory(h: History, written: WrittenHistory): Buffer | undefined {
   checkRuns(h);
-  const base = written.history;
-  const drop = base.runs.findIndex((r) => r.id === h.runs[0]?.id);
-  const kept = base.runs.length - drop;
-  if (drop < 0 || kept > h.runs.length || base.columns.size !== written.rows.rowEnds.length) return undefined;
-  for (let i = 0; i < kept; i++) if ((h.runs[i] as { id: string }).id !== (base.runs[drop + i] as { id: string }).id) return undefined;
+  const { bytes, rows: where, runIds, columns: baseRows } = written;
+  const drop = h.runs.length === 0 ? -1 : runIds.indexOf((h.runs[0] as RunInfo).id);
+  const kept = runIds.length - drop;
+  if (drop < 0 || kept > h.runs.length || baseRows.size !== where.rowEnds.length) return undefined;
+  for (let i = 0; i < kept; i++) if ((h.runs[i] as RunInfo).id !== runIds[drop + i]) return undefined;
 
-  const baseRows = new Map<string, { index: number; values: readonly number[] }>();
-  let index = 0;
-  for (const [name, column] of base.columns) baseRows.set(name, { index: index++, values: column.values });
-  const { bytes, rows: where } = written;
   const rows: Row[] = [];
   for (const [name, column] of h.columns) {
     const values = column.values;
@@ -54,7 +65,7 @@ export function spliceHistory(h: History, written: WrittenHistory): Buffer | und
     checkStorable(h, name, values, kept);
     let tail = '';
     for (let i = kept; i < values.length; i++) tail += values[i] === values[i] ? `,${values[i]}` : ',null';
-    rows.push({ from, to: where.rowEnds[old!.index]!, tail: `${tail}]` });
+    rows.push({ from, to: where.rowEnds[(old as { index: number }).index] as number, tail: `${tail}]` });
   }
   return assemble(historyHead(h), rows, bytes);
 }

@@ -8,7 +8,7 @@ import type { Run } from '../../src/inputs/run.js';
 import { parseHistory, parseHistoryBytes, serializeHistory } from '../../src/history/document.js';
 import type { History, RunInfo } from '../../src/history/history.js';
 import { appendRun, trimHistory } from '../../src/history/merge.js';
-import { spliceHistory, type WrittenHistory } from '../../src/history/splice-append.js';
+import { spliceHistory, writtenHistory, type WrittenHistory } from '../../src/history/splice-append.js';
 import { historyArbitrary, metricName } from './arbitraries.js';
 
 const SPACES = ['', ' ', '\n', '\t', '\r\n', '   '];
@@ -42,11 +42,11 @@ function oddText(h: History, noise: number[]): string {
 }
 
 /** The document read from text, as a store's load keeps it; fails the test when the fast reader declines it. */
-function readWritten(text: string): WrittenHistory {
+function readWritten(text: string): WrittenHistory & { history: History } {
   const bytes = Buffer.from(text, 'utf8');
   const { history, rows } = parseHistoryBytes(bytes, 'h.json');
   expect(rows).toBeDefined();
-  return { bytes, rows: rows!, history };
+  return { ...writtenHistory(bytes, rows!, history), history };
 }
 
 /** A History as comparable plain data, each number shown with its sign of zero (Object.is). */
