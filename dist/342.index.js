@@ -17,8 +17,8 @@ var cells = __webpack_require__(10571);
 var report_escape = __webpack_require__(14031);
 // EXTERNAL MODULE: ./src/report/format.ts
 var format = __webpack_require__(12011);
-// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
-var tails = __webpack_require__(60312);
+// EXTERNAL MODULE: ./src/model/tails.ts + 2 modules
+var tails = __webpack_require__(67963);
 ;// CONCATENATED MODULE: ./src/report/html-data.ts
 
 /** The finite values of a history column with their run, oldest first. */

@@ -2653,7 +2653,7 @@ exports.HN = lineCounter.LineCounter;
 exports.iX = parser.Parser;
 __webpack_unused_export__ = publicApi.parse;
 __webpack_unused_export__ = publicApi.parseAllDocuments;
-exports.Tp = publicApi.parseDocument;
+__webpack_unused_export__ = publicApi.parseDocument;
 __webpack_unused_export__ = publicApi.stringify;
 __webpack_unused_export__ = visit.visit;
 __webpack_unused_export__ = visit.visitAsync;
@@ -6550,7 +6550,7 @@ exports.trueTag = trueTag;
 
 /***/ }),
 
-/***/ 13401:
+/***/ 35782:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
 
@@ -6952,7 +6952,7 @@ var seq = __webpack_require__(1706);
 var string = __webpack_require__(66464);
 var binary = __webpack_require__(56083);
 var bool = __webpack_require__(88398);
-var float = __webpack_require__(13401);
+var float = __webpack_require__(35782);
 var int = __webpack_require__(10873);
 var merge = __webpack_require__(90452);
 var omap = __webpack_require__(50303);

@@ -2,16 +2,16 @@ export const id = 158;
 export const ids = [158];
 export const modules = {
 
-/***/ 94034:
+/***/ 4034:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   n: () => (/* binding */ readUserText)
 /* harmony export */ });
 /* unused harmony export MAX_TEXT_BYTES */
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(1455);
 /* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(8250);
 
 
 /** Files the CLI reads whole (history, import runs) are refused above this size (256 MiB). */
@@ -58,7 +58,7 @@ function reason(error) {
 
 /***/ }),
 
-/***/ 36158:
+/***/ 6158:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -70,11 +70,11 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./node_modules/csv-parse/lib/sync.js + 8 modules
-var sync = __webpack_require__(40712);
+var sync = __webpack_require__(712);
 // EXTERNAL MODULE: ./src/history/import-run.ts
-var import_run = __webpack_require__(12567);
+var import_run = __webpack_require__(2567);
 ;// CONCATENATED MODULE: ./src/history/import-csv.ts
 
 
@@ -195,7 +195,7 @@ function parseCsvRuns(text, source) {
 }
 
 // EXTERNAL MODULE: ./src/history/problems.ts
-var problems = __webpack_require__(17326);
+var problems = __webpack_require__(7326);
 ;// CONCATENATED MODULE: ./src/history/import-jsonl.ts
 
 
@@ -275,7 +275,7 @@ function parseJsonLines(text, source) {
 }
 
 // EXTERNAL MODULE: ./src/history/merge.ts + 2 modules
-var merge = __webpack_require__(57822);
+var merge = __webpack_require__(7822);
 ;// CONCATENATED MODULE: ./src/history/import.ts
 
 
@@ -369,13 +369,13 @@ function sameRun(h, index, run) {
 }
 
 // EXTERNAL MODULE: ./src/model/visible-text.ts
-var visible_text = __webpack_require__(22639);
-// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
-var open_history = __webpack_require__(14695);
+var visible_text = __webpack_require__(2639);
+// EXTERNAL MODULE: ./src/cli/open-history.ts + 3 modules
+var open_history = __webpack_require__(6952);
 // EXTERNAL MODULE: ./src/cli/paths.ts
-var paths = __webpack_require__(45450);
+var paths = __webpack_require__(5450);
 // EXTERNAL MODULE: ./src/cli/read-text.ts
-var read_text = __webpack_require__(94034);
+var read_text = __webpack_require__(4034);
 ;// CONCATENATED MODULE: ./src/cli/run/import.ts
 
 
@@ -411,7 +411,7 @@ async function runImport(ctx, options) {
 
 /***/ }),
 
-/***/ 12567:
+/***/ 2567:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -419,9 +419,9 @@ async function runImport(ctx, options) {
 /* harmony export */   gc: () => (/* binding */ runInfoFrom),
 /* harmony export */   rH: () => (/* binding */ nameProblem)
 /* harmony export */ });
-/* harmony import */ var _inputs_names_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(85585);
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(38250);
-/* harmony import */ var _iso_time_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(51459);
+/* harmony import */ var _inputs_names_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(5585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(8250);
+/* harmony import */ var _iso_time_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(1459);
 
 
 

@@ -2,14 +2,14 @@ export const id = 179;
 export const ids = [179];
 export const modules = {
 
-/***/ 18909:
+/***/ 8909:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
-const { Argument } = __webpack_require__(49154);
-const { Command } = __webpack_require__(34348);
-const { CommanderError, InvalidArgumentError } = __webpack_require__(41135);
-const { Help } = __webpack_require__(79754);
-const { Option } = __webpack_require__(45240);
+const { Argument } = __webpack_require__(9154);
+const { Command } = __webpack_require__(4348);
+const { CommanderError, InvalidArgumentError } = __webpack_require__(1135);
+const { Help } = __webpack_require__(9754);
+const { Option } = __webpack_require__(5240);
 
 exports.DM = new Command();
 
@@ -33,10 +33,10 @@ exports.a2 = InvalidArgumentError; // Deprecated
 
 /***/ }),
 
-/***/ 49154:
+/***/ 9154:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
-const { InvalidArgumentError } = __webpack_require__(41135);
+const { InvalidArgumentError } = __webpack_require__(1135);
 
 class Argument {
   /**
@@ -190,20 +190,20 @@ exports.humanReadableArgName = humanReadableArgName;
 
 /***/ }),
 
-/***/ 34348:
+/***/ 4348:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
-const EventEmitter = (__webpack_require__(78474).EventEmitter);
-const childProcess = __webpack_require__(31421);
-const path = __webpack_require__(76760);
-const fs = __webpack_require__(73024);
+const EventEmitter = (__webpack_require__(8474).EventEmitter);
+const childProcess = __webpack_require__(1421);
+const path = __webpack_require__(6760);
+const fs = __webpack_require__(3024);
 const process = __webpack_require__(1708);
 
-const { Argument, humanReadableArgName } = __webpack_require__(49154);
-const { CommanderError } = __webpack_require__(41135);
-const { Help, stripColor } = __webpack_require__(79754);
-const { Option, DualOptions } = __webpack_require__(45240);
-const { suggestSimilar } = __webpack_require__(65030);
+const { Argument, humanReadableArgName } = __webpack_require__(9154);
+const { CommanderError } = __webpack_require__(1135);
+const { Help, stripColor } = __webpack_require__(9754);
+const { Option, DualOptions } = __webpack_require__(5240);
+const { suggestSimilar } = __webpack_require__(5030);
 
 class Command extends EventEmitter {
   /**
@@ -2974,7 +2974,7 @@ exports.useColor = useColor; // exporting for tests
 
 /***/ }),
 
-/***/ 41135:
+/***/ 1135:
 /***/ ((__unused_webpack_module, exports) => {
 
 /**
@@ -3020,10 +3020,10 @@ exports.InvalidArgumentError = InvalidArgumentError;
 
 /***/ }),
 
-/***/ 79754:
+/***/ 9754:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
-const { humanReadableArgName } = __webpack_require__(49154);
+const { humanReadableArgName } = __webpack_require__(9154);
 
 /**
  * TypeScript import types for JSDoc, used by Visual Studio Code IntelliSense and `npm run typescript-checkJS`
@@ -3774,10 +3774,10 @@ exports.stripColor = stripColor;
 
 /***/ }),
 
-/***/ 45240:
+/***/ 5240:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
-const { InvalidArgumentError } = __webpack_require__(41135);
+const { InvalidArgumentError } = __webpack_require__(1135);
 
 class Option {
   /**
@@ -4161,7 +4161,7 @@ exports.DualOptions = DualOptions;
 
 /***/ }),
 
-/***/ 65030:
+/***/ 5030:
 /***/ ((__unused_webpack_module, exports) => {
 
 const maxDistance = 3;
@@ -4269,7 +4269,7 @@ exports.suggestSimilar = suggestSimilar;
 
 /***/ }),
 
-/***/ 48179:
+/***/ 8179:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -4279,7 +4279,7 @@ exports.suggestSimilar = suggestSimilar;
 /* harmony export */   uB: () => (/* binding */ Command)
 /* harmony export */ });
 /* unused harmony exports program, createCommand, createArgument, createOption, InvalidOptionArgumentError, Argument, Help */
-/* harmony import */ var _index_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(18909);
+/* harmony import */ var _index_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8909);
 
 
 // wrapper to provide named exports for ESM.

@@ -2,14 +2,14 @@ export const id = 268;
 export const ids = [268];
 export const modules = {
 
-/***/ 86783:
+/***/ 6783:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   Z: () => (/* binding */ loadConfig)
 /* harmony export */ });
 /* unused harmony export LOOKED_UP_CONFIGS */
-/* harmony import */ var _config_locate_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(55562);
+/* harmony import */ var _config_locate_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(5562);
 
 /** Where a config is looked for without --config (src/config/locate.ts). */
 const LOOKED_UP_CONFIGS = (/* unused pure expression or super */ null && (DEFAULT_CONFIG_PATHS));
@@ -28,13 +28,13 @@ async function loadConfig(ctx, path) {
 
 /***/ }),
 
-/***/ 15881:
+/***/ 5881:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   v: () => (/* binding */ recordRun)
 /* harmony export */ });
-/* harmony import */ var _history_merge_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(57822);
+/* harmony import */ var _history_merge_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(7822);
 
 /**
  * Appends one run to the history (a run with the same id is replaced), trims to the newest `keep`
@@ -51,13 +51,13 @@ async function recordRun(store, history, info, run, keep) {
 
 /***/ }),
 
-/***/ 95795:
+/***/ 5795:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   g: () => (/* binding */ runInfoFrom)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /** ISO-8601 date-time with a zone, e.g. 2026-05-04T10:20:30Z or 2026-05-04T10:20:30.5+02:00. */
 const ISO_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/;
@@ -105,18 +105,18 @@ function runInfoFrom(ctx, options) {
 
 /***/ }),
 
-/***/ 15779:
+/***/ 5779:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 __webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   runRecord: () => (/* binding */ runRecord)
 /* harmony export */ });
-/* harmony import */ var _load_config_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(86783);
-/* harmony import */ var _load_run_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(35946);
-/* harmony import */ var _open_history_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(14695);
-/* harmony import */ var _record_run_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(15881);
-/* harmony import */ var _run_info_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(95795);
+/* harmony import */ var _load_config_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6783);
+/* harmony import */ var _load_run_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(5946);
+/* harmony import */ var _open_history_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(6952);
+/* harmony import */ var _record_run_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(5881);
+/* harmony import */ var _run_info_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(5795);
 
 
 
@@ -144,7 +144,7 @@ async function runRecord(ctx, options) {
 
 /***/ }),
 
-/***/ 31954:
+/***/ 1954:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -196,53 +196,7 @@ function defaultConfig() {
 
 /***/ }),
 
-/***/ 80517:
-/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
-
-/* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   M: () => (/* binding */ isLiteralGlob),
-/* harmony export */   t: () => (/* binding */ compileGlobs)
-/* harmony export */ });
-/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(14006);
-/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(picomatch__WEBPACK_IMPORTED_MODULE_0__);
-
-// Metric names are not paths: a leading '.' is an ordinary character (dot: true), and '\' is
-// never a separator, whatever the operating system (windows: false).
-const OPTIONS = { dot: true, windows: false };
-const cache = new WeakMap();
-/**
- * Compiles a rule's globs (picomatch syntax) into one matcher: a name matches when it matches at
- * least one plain glob and no glob starting with '!' (only '!' globs: everything but those).
- * Metric names contain '/', and `*` stays within one '/' segment while `**` crosses segments:
- * `throughput/*` matches `throughput/home` but not `throughput/api/v2`; `size/**` matches both
- * `size/app.js` and `size/assets/logo.svg`. Compiled once per globs array (WeakMap cache).
- * Throws picomatch's error for a pattern it cannot compile (load.ts reports it with line:column).
- * @example compileGlobs(['latency/*', '!latency/calibrate'])('latency/render') // true
- */
-function compileGlobs(globs) {
-    const cached = cache.get(globs);
-    if (cached)
-        return cached;
-    const plain = globs.filter((g) => !g.startsWith('!'));
-    const negated = globs.filter((g) => g.startsWith('!')).map((g) => g.slice(1));
-    const include = plain.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_0___default()(plain, OPTIONS) : () => true;
-    const exclude = negated.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_0___default()(negated, OPTIONS) : () => false;
-    const matcher = (name) => include(name) && !exclude(name);
-    cache.set(globs, matcher);
-    return matcher;
-}
-/**
- * True when the glob has no wildcard or brace characters, so it names exactly one metric.
- * @example isLiteralGlob('latency/calibrate') // true
- */
-function isLiteralGlob(glob) {
-    return !picomatch__WEBPACK_IMPORTED_MODULE_0___default().scan(glob).isGlob && !glob.startsWith('!');
-}
-
-
-/***/ }),
-
-/***/ 55562:
+/***/ 5562:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -250,11 +204,11 @@ function isLiteralGlob(glob) {
 /* harmony export */   yH: () => (/* binding */ loadConfigLazily)
 /* harmony export */ });
 /* unused harmony export anyConfigPresent */
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(1455);
 /* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(31954);
+/* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(1954);
 
 
 
@@ -281,29 +235,124 @@ async function anyConfigPresent(cwd, paths = DEFAULT_CONFIG_PATHS) {
 /**
  * The config for a run: a named file must exist (unless `required` is false); without a name,
  * `.github/bellgate.yml` (or `.yaml`) is read when present, else the defaults are used. The reader
- * (YAML and schema validation, ~40 ms of start-up) is imported only when there is a file to read;
- * this module itself loads neither.
+ * (the YAML library, ~290 KB, and the generated schema validator) is imported only when there is
+ * a file to read, picomatch only when its rules hold real globs; this module itself loads none.
  * @throws InputError for a missing named file or an invalid config (with file:line:col).
  * @example await loadConfigLazily(undefined, '/repo') // the defaults in a folder without a config file
  */
 async function loadConfigLazily(path, cwd, required = path !== undefined) {
     if (path === undefined && !(await anyConfigPresent(cwd)))
         return (0,_defaults_js__WEBPACK_IMPORTED_MODULE_2__/* .defaultConfig */ .sb)();
-    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(446), __webpack_require__.e(0)]).then(__webpack_require__.bind(__webpack_require__, 62000));
+    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(964), __webpack_require__.e(115)]).then(__webpack_require__.bind(__webpack_require__, 1115));
     return readConfigFile(path, { cwd, required });
 }
 
 
 /***/ }),
 
-/***/ 85413:
+/***/ 6471:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   Bz: () => (/* binding */ useFallbackCompiler),
+/* harmony export */   Cp: () => (/* binding */ exactNameCompiler),
+/* harmony export */   Gh: () => (/* binding */ exactMatcher),
+/* harmony export */   at: () => (/* binding */ knownMatcher),
+/* harmony export */   gV: () => (/* binding */ rememberMatcher),
+/* harmony export */   sp: () => (/* binding */ matcherFor)
+/* harmony export */ });
+/* unused harmony export isPlainGlob */
+// Characters that picomatch (dot: true, windows: false) reads as themselves, checked against it by
+// test/config/name-matchers.test.ts. Left out: its specials (* ? [ ] { } ( ) ! + @ |), the escape
+// '\', '"' and '$' (it treats them specially), and anything outside ASCII. A leading "./" is
+// stripped by picomatch, so such a glob is not plain either.
+const PLAIN = /^(?!\.\/)[A-Za-z0-9 _.,:;=#%&~<>'`^/-]+$/;
+/**
+ * True when the glob can only match the one name written, so a string comparison decides it and
+ * no glob library is needed: letters, digits and the punctuation listed in PLAIN, not "./" first.
+ * @example isPlainGlob('latency/calibrate') // true
+ * @example isPlainGlob('latency/*') // false
+ */
+function isPlainGlob(glob) {
+    return PLAIN.test(glob);
+}
+/**
+ * The matcher of globs that are all plain names, each maybe with a leading '!' (exclude), with the
+ * same meaning as compileGlobs: a name matches when it is one of the plain names (or there are
+ * none) and none of the excluded ones. undefined when any glob needs the glob library.
+ * @example exactMatcher(['a/b', 'a/c'])?.('a/c') // true
+ */
+function exactMatcher(globs) {
+    const include = new Set();
+    const exclude = new Set();
+    for (const glob of globs) {
+        const negated = glob.startsWith('!');
+        const body = negated ? glob.slice(1) : glob;
+        if (!isPlainGlob(body))
+            return undefined;
+        (negated ? exclude : include).add(body);
+    }
+    if (include.size === 1 && exclude.size === 0) {
+        const only = [...include][0];
+        return (name) => name === only;
+    }
+    return (name) => (include.size === 0 || include.has(name)) && !exclude.has(name);
+}
+// Matchers by globs array (the `match` array of a rule or group), filled when a config is read,
+// so settingsFor and groupFor stay pure and synchronous however the glob library was loaded.
+const compiled = new WeakMap();
+let fallback;
+/** Files the matcher of a globs array for matcherFor; returns it. */
+function rememberMatcher(globs, matcher) {
+    compiled.set(globs, matcher);
+    return matcher;
+}
+/** The matcher filed for this globs array, if any. */
+function knownMatcher(globs) {
+    return compiled.get(globs);
+}
+/** Sets the compiler for globs that were never filed (glob-matcher.ts registers picomatch's). */
+function useFallbackCompiler(compile) {
+    fallback = compile;
+}
+/**
+ * The matcher for a rule's globs: the one filed when the config was read, else plain names
+ * compared as strings, else the fallback compiler (present once glob-matcher.ts is loaded).
+ * @throws Error when the globs need the glob library and it was never loaded: a Config built by
+ *   hand with globs must be read through parseConfig/readConfigFile or compiled with compileGlobs.
+ * @example matcherFor(['latency/render'])('latency/render') // true
+ */
+function matcherFor(globs) {
+    const known = compiled.get(globs);
+    if (known)
+        return known;
+    const made = exactMatcher(globs) ?? fallback?.(globs);
+    if (!made)
+        throw new Error(`the globs ${JSON.stringify(globs)} were never compiled; read the config with readConfigFile or parseConfig`);
+    return rememberMatcher(globs, made);
+}
+/** Compiles rules of plain names only, without any glob library. */
+const exactNameCompiler = {
+    compile(globs) {
+        const matcher = knownMatcher(globs) ?? exactMatcher(globs);
+        if (!matcher)
+            throw new Error(`exactNameCompiler got globs that need the glob library: ${JSON.stringify(globs)}`);
+        return rememberMatcher(globs, matcher);
+    },
+    isLiteral: isPlainGlob,
+};
+
+
+/***/ }),
+
+/***/ 5413:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   R: () => (/* binding */ groupFor),
 /* harmony export */   z: () => (/* binding */ settingsFor)
 /* harmony export */ });
-/* harmony import */ var _glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(80517);
+/* harmony import */ var _name_matchers_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6471);
 
 /**
  * The settings that decide one metric: the defaults, then every `metrics:` rule whose globs match
@@ -311,12 +360,14 @@ async function loadConfigLazily(path, cwd, required = path !== undefined) {
  * Globs are picomatch globs over the whole name; `*` does not cross '/', `**` does; a glob starting
  * with '!' excludes (see compileGlobs). A metric is never relative to itself: when the resolved
  * `relative-to` names the metric (the calibration benchmark matched by its own rule), it is dropped.
+ * The matchers were compiled when the config was read (name-matchers.ts), so no glob library is
+ * loaded here.
  * @example settingsFor(config, 'throughput/home').worse // 'lower' with the rule { match: 'throughput/*', worse: lower }
  */
 function settingsFor(config, metric) {
     const settings = { ...config.defaults };
     for (const rule of config.rules) {
-        if ((0,_glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__/* .compileGlobs */ .t)(rule.match)(metric))
+        if ((0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .matcherFor */ .sp)(rule.match)(metric))
             Object.assign(settings, rule.settings);
     }
     if (settings.relativeTo === metric)
@@ -328,43 +379,105 @@ function settingsFor(config, metric) {
  * @example groupFor(config, 'latency/render')?.name // 'latency' with the group { name: latency, match: 'latency/*' }
  */
 function groupFor(config, metric) {
-    return config.groups.find((group) => (0,_glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__/* .compileGlobs */ .t)(group.match)(metric));
+    return config.groups.find((group) => (0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .matcherFor */ .sp)(group.match)(metric));
 }
 
 
 /***/ }),
 
-/***/ 90071:
+/***/ 71:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   J: () => (/* binding */ median),
-/* harmony export */   h: () => (/* binding */ medianAbsoluteDeviation)
+/* harmony export */   JZ: () => (/* binding */ median),
+/* harmony export */   Te: () => (/* binding */ medianInPlace),
+/* harmony export */   hK: () => (/* binding */ medianAbsoluteDeviation)
 /* harmony export */ });
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
-/** A sorted copy, rejecting what has no median (the input is not reordered). */
-function sortedCopy(values) {
-    const n = values.length;
-    if (n === 0)
+/** Rejects what has no median: an empty set or a non-finite value (1-based position in the message). */
+function checkFinite(values) {
+    if (values.length === 0)
         throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('cannot take the median of an empty set of values');
-    for (let i = 0; i < n; i++) {
+    for (let i = 0; i < values.length; i++) {
         const x = values[i];
         if (!Number.isFinite(x))
             throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value ${x} at position ${i + 1} is not a finite number`);
     }
-    // A Float64Array sorts numerically (a plain array would sort as strings).
-    return Float64Array.from(values).sort();
 }
 /**
- * Median of the values. O(n log n). Throws InputError on an empty input or a non-finite value.
+ * Moves the k-th smallest of buffer[0..length) to index k, smaller-or-equal values before it and
+ * larger-or-equal after (Hoare's FIND / quickselect, Hoare 1961, "Algorithm 65: Find"), with a
+ * median-of-three pivot so sorted and reversed inputs stay linear. O(length) expected.
+ * The values must be finite (no NaN: comparisons with NaN would not order).
+ */
+function selectInPlace(buffer, length, k) {
+    let lo = 0;
+    let hi = length - 1;
+    while (hi > lo) {
+        const mid = (lo + hi) >> 1;
+        // Median of three: order buffer[lo] <= buffer[mid] <= buffer[hi], pivot on the middle one.
+        if (buffer[mid] < buffer[lo])
+            swap(buffer, mid, lo);
+        if (buffer[hi] < buffer[lo])
+            swap(buffer, hi, lo);
+        if (buffer[hi] < buffer[mid])
+            swap(buffer, hi, mid);
+        const pivot = buffer[mid];
+        let i = lo;
+        let j = hi;
+        while (i <= j) {
+            while (buffer[i] < pivot)
+                i++;
+            while (buffer[j] > pivot)
+                j--;
+            if (i <= j) {
+                swap(buffer, i, j);
+                i++;
+                j--;
+            }
+        }
+        // Now [lo, j] <= pivot <= [i, hi], and any index strictly between j and i holds the pivot.
+        if (k <= j)
+            hi = j;
+        else if (k >= i)
+            lo = i;
+        else
+            break;
+    }
+    return buffer[k];
+}
+function swap(buffer, a, b) {
+    const t = buffer[a];
+    buffer[a] = buffer[b];
+    buffer[b] = t;
+}
+/**
+ * Median of buffer[0..length), reordering that part of the buffer (no copy). For the change-point
+ * detector, which reuses one scratch buffer per call. The values must be finite and length >= 1.
+ * O(length) expected (selection, not a sort): the same value a sort would give.
+ * @example medianInPlace(Float64Array.of(3, 1, 2, 10), 4) // 2.5
+ */
+function medianInPlace(buffer, length) {
+    const half = length >> 1;
+    const upper = selectInPlace(buffer, length, half);
+    if (length % 2 === 1)
+        return upper;
+    // Everything before `half` is <= the upper middle value; the lower middle is their largest.
+    let lower = buffer[0];
+    for (let i = 1; i < half; i++)
+        if (buffer[i] > lower)
+            lower = buffer[i];
+    return (lower + upper) / 2;
+}
+/**
+ * Median of the values. O(n) expected, by selection on a copy (the input is not reordered).
+ * Throws InputError on an empty input or a non-finite value.
  * @example median([3, 1, 2, 10]) // 2.5
  */
 function median(values) {
-    const sorted = sortedCopy(values);
-    const n = sorted.length;
-    const half = n >> 1;
-    return n % 2 === 1 ? sorted[half] : (sorted[half - 1] + sorted[half]) / 2;
+    checkFinite(values);
+    return medianInPlace(Float64Array.from(values), values.length);
 }
 /**
  * Median absolute deviation from the median (unscaled). Multiply by 1.4826 for a consistent
@@ -373,18 +486,20 @@ function median(values) {
  * @example medianAbsoluteDeviation([1, 2, 3, 4, 100]) // 1
  */
 function medianAbsoluteDeviation(values) {
-    const centre = median(values);
-    // A plain loop: Float64Array.from with a map function takes a slow generic path in V8.
-    const deviations = new Float64Array(values.length);
-    for (let i = 0; i < values.length; i++)
-        deviations[i] = Math.abs(values[i] - centre);
-    return median(deviations);
+    checkFinite(values);
+    const n = values.length;
+    const scratch = Float64Array.from(values);
+    const centre = medianInPlace(scratch, n);
+    // The median of |x - centre| does not depend on the order, so the reordered copy serves.
+    for (let i = 0; i < n; i++)
+        scratch[i] = Math.abs(scratch[i] - centre);
+    return medianInPlace(scratch, n);
 }
 
 
 /***/ }),
 
-/***/ 88884:
+/***/ 8884:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -392,7 +507,7 @@ function medianAbsoluteDeviation(values) {
 /* harmony export */   i2: () => (/* binding */ mean)
 /* harmony export */ });
 /* unused harmony export variance */
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /**
  * Mean and sum of squared deviations by the corrected two-pass algorithm (Chan, Golub & LeVeque,

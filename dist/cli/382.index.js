@@ -2,26 +2,26 @@ export const id = 382;
 export const ids = [382];
 export const modules = {
 
-/***/ 73382:
+/***/ 3382:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 
 // EXPORTS
 __webpack_require__.d(__webpack_exports__, {
-  TI: () => (/* binding */ glob)
+  glob: () => (/* binding */ glob)
 });
 
 // UNUSED EXPORTS: convertPathToPattern, escapePath, globSync, isDynamicPattern
 
 // EXTERNAL MODULE: external "fs"
-var external_fs_ = __webpack_require__(79896);
+var external_fs_ = __webpack_require__(9896);
 var external_fs_namespaceObject = /*#__PURE__*/__webpack_require__.t(external_fs_, 2);
 // EXTERNAL MODULE: external "path"
-var external_path_ = __webpack_require__(16928);
+var external_path_ = __webpack_require__(6928);
 // EXTERNAL MODULE: external "url"
-var external_url_ = __webpack_require__(87016);
+var external_url_ = __webpack_require__(7016);
 // EXTERNAL MODULE: external "module"
-var external_module_ = __webpack_require__(73339);
+var external_module_ = __webpack_require__(3339);
 ;// CONCATENATED MODULE: ./node_modules/fdir/dist/index.mjs
 
 
@@ -594,7 +594,7 @@ var Builder = class {
 //#endregion
 
 // EXTERNAL MODULE: ./node_modules/picomatch/index.js
-var picomatch = __webpack_require__(14006);
+var picomatch = __webpack_require__(4006);
 ;// CONCATENATED MODULE: ./node_modules/tinyglobby/dist/index.mjs
 
 

@@ -2,16 +2,16 @@ export const id = 469;
 export const ids = [469];
 export const modules = {
 
-/***/ 91469:
+/***/ 1469:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 __webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   readGoBench: () => (/* binding */ readGoBench)
 /* harmony export */ });
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(56497);
-/* harmony import */ var _numbers_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(52671);
-/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(17829);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6497);
+/* harmony import */ var _numbers_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(2671);
+/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(7829);
 
 
 
@@ -91,7 +91,7 @@ function parseResultLine(line, where) {
 
 /***/ }),
 
-/***/ 52671:
+/***/ 2671:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -99,7 +99,7 @@ function parseResultLine(line, where) {
 /* harmony export */   xv: () => (/* binding */ truncate)
 /* harmony export */ });
 /* unused harmony export nonFinite */
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 // A plain decimal number: optional sign, digits with an optional fraction, optional exponent.
 // Stricter than Number(): no hex, no "", no surrounding spaces, no "Infinity".
@@ -141,15 +141,15 @@ function truncate(text, max = 60) {
 
 /***/ }),
 
-/***/ 17829:
+/***/ 7829:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   I: () => (/* binding */ ReadingSink)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(56497);
-/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(85585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(6497);
+/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5585);
 
 
 

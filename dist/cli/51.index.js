@@ -2,7 +2,7 @@ export const id = 51;
 export const ids = [51];
 export const modules = {
 
-/***/ 10850:
+/***/ 850:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -11,7 +11,7 @@ export const modules = {
 /* harmony export */   kw: () => (/* binding */ describeJson),
 /* harmony export */   u4: () => (/* binding */ isRecord)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /** A plain object (not an array, not null). */
 function isRecord(value) {
@@ -100,7 +100,7 @@ function describeJson(value) {
 
 /***/ }),
 
-/***/ 77138:
+/***/ 7138:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -110,12 +110,10 @@ __webpack_require__.d(__webpack_exports__, {
   LF: () => (/* binding */ whereInJson)
 });
 
-// UNUSED EXPORTS: locateJsonError
+// UNUSED EXPORTS: jsonValueOffset, locateJsonError
 
-// EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
-var dist = __webpack_require__(38815);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 ;// CONCATENATED MODULE: ./src/inputs/position.ts
 /**
  * 1-based line and column of a UTF-16 offset in a text, as editors count them (a "\r\n" ends one line).
@@ -139,7 +137,6 @@ function whereAt(file, text, offset) {
 }
 
 ;// CONCATENATED MODULE: ./src/inputs/json-text.ts
-
 
 
 /**
@@ -174,22 +171,98 @@ function parseJsonText(text, file, line) {
     }
 }
 /**
- * "file:line:col" of the value at a path inside JSON text, found only when an error needs it (a
- * second, position-keeping parse through the YAML parser, of which JSON is a subset). Falls back
- * to "file (path)" when the position cannot be found.
+ * "file:line:col" of the value at a path inside JSON text, found only when an error needs it.
+ * Falls back to "file (path)" when the path is not in the text.
+ * @example whereInJson('{\n  "a": [1, "x"]\n}', 'm.json', ['a', 1]) // 'm.json:2:12 (a[1])'
  */
 function whereInJson(text, file, path) {
-    const label = path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`)).join('');
-    try {
-        const doc = (0,dist/* parseDocument */.Tp)(text, { uniqueKeys: false, strict: false });
-        const node = doc.getIn(path, true);
-        if (node?.range)
-            return `${whereAt(file, text, node.range[0])} (${label.replace(/^\./, '')})`;
+    const label = path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`)).join('').replace(/^\./, '');
+    const offset = jsonValueOffset(text, path);
+    return offset === undefined ? `${file} (${label})` : `${whereAt(file, text, offset)} (${label})`;
+}
+// JSON's own whitespace (RFC 8259, section 2): space, tab, line feed, carriage return.
+const SPACE = new Set([0x20, 0x09, 0x0a, 0x0d]);
+/**
+ * Offset of the value at `path` (object keys and array indices) in text that JSON.parse has
+ * accepted, or undefined when the path is not there. One pass over the text that steps over the
+ * values it does not enter; of a key written twice, the last (the one JSON.parse keeps). This
+ * spares every metric file a second parser (the YAML library, ~300 KB, loaded for error positions
+ * only): metric readers are synchronous, so it could not be loaded just when needed.
+ * @example jsonValueOffset('{"a": [1, 2]}', ['a', 1]) // 10
+ */
+function jsonValueOffset(text, path) {
+    let at = skipSpace(text, 0);
+    for (const step of path) {
+        const open = text.charCodeAt(at);
+        let found;
+        if (open === 0x7b && typeof step === 'string') {
+            at = skipSpace(text, at + 1);
+            while (text.charCodeAt(at) === 0x22) {
+                const keyEnd = skipString(text, at);
+                const valueAt = skipSpace(text, skipSpace(text, keyEnd) + 1); // past the ':'
+                if (JSON.parse(text.slice(at, keyEnd)) === step)
+                    found = valueAt;
+                at = skipSpace(text, skipValue(text, valueAt));
+                if (text.charCodeAt(at) === 0x2c)
+                    at = skipSpace(text, at + 1);
+            }
+        }
+        else if (open === 0x5b && typeof step === 'number' && Number.isInteger(step) && step >= 0) {
+            at = skipSpace(text, at + 1);
+            for (let index = 0; text.charCodeAt(at) !== 0x5d && at < text.length; index++) {
+                if (index === step) {
+                    found = at;
+                    break;
+                }
+                at = skipSpace(text, skipValue(text, at));
+                if (text.charCodeAt(at) === 0x2c)
+                    at = skipSpace(text, at + 1);
+            }
+        }
+        if (found === undefined)
+            return undefined;
+        at = found;
     }
-    catch {
-        // The position is a courtesy; the message still names the path.
+    return at;
+}
+function skipSpace(text, at) {
+    while (SPACE.has(text.charCodeAt(at)))
+        at++;
+    return at;
+}
+/** From an opening quote to just after the closing one ('\' escapes the next character). */
+function skipString(text, at) {
+    for (let i = at + 1; i < text.length; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 0x5c)
+            i++;
+        else if (c === 0x22)
+            return i + 1;
     }
-    return `${file} (${label.replace(/^\./, '')})`;
+    return text.length;
+}
+/** From the first character of a value to just after it. */
+function skipValue(text, at) {
+    const first = text.charCodeAt(at);
+    if (first === 0x22)
+        return skipString(text, at);
+    if (first !== 0x7b && first !== 0x5b) {
+        let i = at; // a number, true, false or null: up to the next delimiter
+        while (i < text.length && !SPACE.has(text.charCodeAt(i)) && !',]}'.includes(text[i]))
+            i++;
+        return i;
+    }
+    let depth = 0;
+    for (let i = at; i < text.length; i++) {
+        const c = text.charCodeAt(i);
+        if (c === 0x22)
+            i = skipString(text, i) - 1;
+        else if (c === 0x7b || c === 0x5b)
+            depth++;
+        else if ((c === 0x7d || c === 0x5d) && --depth === 0)
+            return i + 1;
+    }
+    return text.length;
 }
 /**
  * Offset of the first character that makes `text` invalid JSON, for the engine messages that give
@@ -231,18 +304,18 @@ function shiftLine(where, lineOffset) {
 
 /***/ }),
 
-/***/ 73051:
+/***/ 3051:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 __webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   readJsonMetrics: () => (/* binding */ readJsonMetrics)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-/* harmony import */ var _json_entry_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(10850);
-/* harmony import */ var _json_text_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(77138);
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(56497);
-/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(17829);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _json_entry_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(850);
+/* harmony import */ var _json_text_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(7138);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(6497);
+/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(7829);
 
 
 
@@ -333,15 +406,15 @@ function findDuplicateKey(text, distinct) {
 
 /***/ }),
 
-/***/ 17829:
+/***/ 7829:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   I: () => (/* binding */ ReadingSink)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(56497);
-/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(85585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(6497);
+/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5585);
 
 
 

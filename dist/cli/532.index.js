@@ -2,7 +2,7 @@ export const id = 532;
 export const ids = [532];
 export const modules = {
 
-/***/ 52671:
+/***/ 2671:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -10,7 +10,7 @@ export const modules = {
 /* harmony export */   xv: () => (/* binding */ truncate)
 /* harmony export */ });
 /* unused harmony export nonFinite */
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 // A plain decimal number: optional sign, digits with an optional fraction, optional exponent.
 // Stricter than Number(): no hex, no "", no surrounding spaces, no "Infinity".
@@ -52,7 +52,7 @@ function truncate(text, max = 60) {
 
 /***/ }),
 
-/***/ 86532:
+/***/ 6532:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -64,11 +64,11 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/inputs/limits.ts
-var inputs_limits = __webpack_require__(56497);
+var inputs_limits = __webpack_require__(6497);
 // EXTERNAL MODULE: ./src/inputs/numbers.ts
-var numbers = __webpack_require__(52671);
+var numbers = __webpack_require__(2671);
 ;// CONCATENATED MODULE: ./src/inputs/openmetrics-labels.ts
 // Characters in label values that would make a folded name ambiguous or unsafe to show: the escape
 // itself, the pair separator, controls and bidirectional formatting characters.
@@ -183,7 +183,7 @@ function readQuoted(line, start) {
 }
 
 // EXTERNAL MODULE: ./src/inputs/reading-sink.ts
-var reading_sink = __webpack_require__(17829);
+var reading_sink = __webpack_require__(7829);
 ;// CONCATENATED MODULE: ./src/inputs/openmetrics.ts
 
 
@@ -289,15 +289,15 @@ function familyOf(name, types) {
 
 /***/ }),
 
-/***/ 17829:
+/***/ 7829:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   I: () => (/* binding */ ReadingSink)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(56497);
-/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(85585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(6497);
+/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5585);
 
 
 

@@ -2,7 +2,7 @@ export const id = 535;
 export const ids = [535];
 export const modules = {
 
-/***/ 57336:
+/***/ 7336:
 /***/ ((module) => {
 
 let p = process || {}, argv = p.argv || [], env = p.env || {}
@@ -84,7 +84,7 @@ module.exports.createColors = createColors
 
 /***/ }),
 
-/***/ 18370:
+/***/ 8370:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -93,16 +93,16 @@ __webpack_require__.d(__webpack_exports__, {
   v: () => (/* binding */ judgeRequestedRun)
 });
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
-var gate = __webpack_require__(71178);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 16 modules
+var gate = __webpack_require__(8129);
 // EXTERNAL MODULE: ./src/cli/load-config.ts
-var load_config = __webpack_require__(86783);
+var load_config = __webpack_require__(6783);
 // EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
-var load_run = __webpack_require__(35946);
-// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
-var open_history = __webpack_require__(14695);
+var load_run = __webpack_require__(5946);
+// EXTERNAL MODULE: ./src/cli/open-history.ts + 3 modules
+var open_history = __webpack_require__(6952);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 ;// CONCATENATED MODULE: ./src/cli/split-newest.ts
 
 /**
@@ -162,7 +162,7 @@ async function judgeRequestedRun(ctx, options) {
 
 /***/ }),
 
-/***/ 82535:
+/***/ 2535:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -174,26 +174,26 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./src/config/rules.ts
-var rules = __webpack_require__(85413);
+var rules = __webpack_require__(5413);
 // EXTERNAL MODULE: ./src/gate/baseline.ts + 1 modules
-var gate_baseline = __webpack_require__(64614);
+var gate_baseline = __webpack_require__(4614);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/model/transform.ts
 var transform = __webpack_require__(8077);
 // EXTERNAL MODULE: ./node_modules/picocolors/picocolors.js
-var picocolors = __webpack_require__(57336);
+var picocolors = __webpack_require__(7336);
 var picocolors_default = /*#__PURE__*/__webpack_require__.n(picocolors);
-// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
-var tails = __webpack_require__(60312);
+// EXTERNAL MODULE: ./src/model/tails.ts + 2 modules
+var tails = __webpack_require__(7963);
 // EXTERNAL MODULE: ./src/report/clean.ts
-var clean = __webpack_require__(60023);
+var clean = __webpack_require__(23);
 // EXTERNAL MODULE: ./src/report/format.ts
-var format = __webpack_require__(12011);
+var format = __webpack_require__(2011);
 // EXTERNAL MODULE: ./src/report/sparkline.ts
-var sparkline = __webpack_require__(29833);
+var sparkline = __webpack_require__(9833);
 // EXTERNAL MODULE: ./src/report/status.ts
-var report_status = __webpack_require__(16934);
+var report_status = __webpack_require__(6934);
 // EXTERNAL MODULE: ./src/report/predictive.ts
 var predictive = __webpack_require__(4713);
 ;// CONCATENATED MODULE: ./src/report/explain.ts
@@ -306,9 +306,9 @@ function renderExplain(input) {
 }
 
 // EXTERNAL MODULE: ./src/cli/judge-requested-run.ts + 1 modules
-var judge_requested_run = __webpack_require__(18370);
+var judge_requested_run = __webpack_require__(8370);
 // EXTERNAL MODULE: ./src/config/did-you-mean.ts
-var did_you_mean = __webpack_require__(99255);
+var did_you_mean = __webpack_require__(9255);
 ;// CONCATENATED MODULE: ./src/cli/close-names.ts
 
 /**
@@ -376,7 +376,7 @@ async function runExplain(ctx, metric, options) {
 
 /***/ }),
 
-/***/ 99255:
+/***/ 9255:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -454,7 +454,7 @@ function usesPredictive(m) {
 
 /***/ }),
 
-/***/ 29833:
+/***/ 9833:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {

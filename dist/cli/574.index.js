@@ -2,7 +2,7 @@ export const id = 574;
 export const ids = [574];
 export const modules = {
 
-/***/ 18370:
+/***/ 8370:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -11,16 +11,16 @@ __webpack_require__.d(__webpack_exports__, {
   v: () => (/* binding */ judgeRequestedRun)
 });
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
-var gate = __webpack_require__(71178);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 16 modules
+var gate = __webpack_require__(8129);
 // EXTERNAL MODULE: ./src/cli/load-config.ts
-var load_config = __webpack_require__(86783);
+var load_config = __webpack_require__(6783);
 // EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
-var load_run = __webpack_require__(35946);
-// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
-var open_history = __webpack_require__(14695);
+var load_run = __webpack_require__(5946);
+// EXTERNAL MODULE: ./src/cli/open-history.ts + 3 modules
+var open_history = __webpack_require__(6952);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 ;// CONCATENATED MODULE: ./src/cli/split-newest.ts
 
 /**
@@ -80,7 +80,7 @@ async function judgeRequestedRun(ctx, options) {
 
 /***/ }),
 
-/***/ 26574:
+/***/ 6574:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -92,17 +92,17 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __webpack_require__(51455);
+var promises_ = __webpack_require__(1455);
 // EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __webpack_require__(76760);
+var external_node_path_ = __webpack_require__(6760);
 // EXTERNAL MODULE: ./src/report/cells.ts
-var cells = __webpack_require__(10571);
+var cells = __webpack_require__(571);
 // EXTERNAL MODULE: ./src/report/escape.ts
-var report_escape = __webpack_require__(14031);
+var report_escape = __webpack_require__(4031);
 // EXTERNAL MODULE: ./src/report/format.ts
-var format = __webpack_require__(12011);
-// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
-var tails = __webpack_require__(60312);
+var format = __webpack_require__(2011);
+// EXTERNAL MODULE: ./src/model/tails.ts + 2 modules
+var tails = __webpack_require__(7963);
 ;// CONCATENATED MODULE: ./src/report/html-data.ts
 
 /** The finite values of a history column with their run, oldest first. */
@@ -159,11 +159,11 @@ function chartColumn(history, m) {
 }
 
 // EXTERNAL MODULE: ./node_modules/d3-scale/dist/d3-scale.mjs + 4 modules
-var d3_scale = __webpack_require__(25602);
+var d3_scale = __webpack_require__(5602);
 // EXTERNAL MODULE: ./node_modules/d3-shape/dist/d3-shape.mjs + 1 modules
-var d3_shape = __webpack_require__(76879);
+var d3_shape = __webpack_require__(6879);
 // EXTERNAL MODULE: ./src/model/density.ts
-var density = __webpack_require__(20913);
+var density = __webpack_require__(913);
 ;// CONCATENATED MODULE: ./src/report/html-svg.ts
 /** SVG coordinates with two decimals: enough for a screen, and non-finite values never leak in. */
 const px = (x) => (Number.isFinite(x) ? Math.round(x * 100) / 100 : 0);
@@ -543,7 +543,7 @@ footer { color: var(--muted); font-size: 12px; margin-top: 2rem; }
 // EXTERNAL MODULE: ./src/report/predictive.ts
 var predictive = __webpack_require__(4713);
 // EXTERNAL MODULE: ./src/report/status.ts
-var report_status = __webpack_require__(16934);
+var report_status = __webpack_require__(6934);
 ;// CONCATENATED MODULE: ./src/report/html.ts
 
 
@@ -638,9 +638,9 @@ function renderHtmlReport(input) {
 }
 
 // EXTERNAL MODULE: ./src/cli/judge-requested-run.ts + 1 modules
-var judge_requested_run = __webpack_require__(18370);
+var judge_requested_run = __webpack_require__(8370);
 // EXTERNAL MODULE: ./src/cli/paths.ts
-var paths = __webpack_require__(45450);
+var paths = __webpack_require__(5450);
 ;// CONCATENATED MODULE: ./src/cli/run/report.ts
 
 
@@ -670,14 +670,14 @@ async function runReport(ctx, options) {
 
 /***/ }),
 
-/***/ 10571:
+/***/ 571:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   G: () => (/* binding */ metricCells)
 /* harmony export */ });
 /* unused harmony export formatBaseline */
-/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(12011);
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(2011);
 
 /**
  * "10.1 ± 0.4 ms (n=60)". On the log scale the fitted centre is shown as the geometric mean
@@ -709,14 +709,14 @@ function metricCells(m, unit) {
 
 /***/ }),
 
-/***/ 14031:
+/***/ 4031:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   F: () => (/* binding */ escapeMarkdown),
 /* harmony export */   Z: () => (/* binding */ escapeHtml)
 /* harmony export */ });
-/* harmony import */ var _clean_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(60023);
+/* harmony import */ var _clean_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(23);
 
 /** Zero-width space: breaks GitHub's @mention and #123 autolinks while reading the same. */
 const ZWSP = '\u200B';

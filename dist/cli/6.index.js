@@ -2,13 +2,13 @@ export const id = 6;
 export const ids = [6];
 export const modules = {
 
-/***/ 14006:
+/***/ 4006:
 /***/ ((module, __unused_webpack_exports, __webpack_require__) => {
 
 
 
-const pico = __webpack_require__(98016);
-const utils = __webpack_require__(64059);
+const pico = __webpack_require__(8016);
+const utils = __webpack_require__(4059);
 
 function picomatch(glob, options, returnState = false) {
   // default to os.platform()
@@ -217,13 +217,13 @@ module.exports = {
 
 /***/ }),
 
-/***/ 78265:
+/***/ 8265:
 /***/ ((module, __unused_webpack_exports, __webpack_require__) => {
 
 
 
 const constants = __webpack_require__(5595);
-const utils = __webpack_require__(64059);
+const utils = __webpack_require__(4059);
 
 /**
  * Constants
@@ -1649,14 +1649,14 @@ module.exports = parse;
 
 /***/ }),
 
-/***/ 98016:
+/***/ 8016:
 /***/ ((module, __unused_webpack_exports, __webpack_require__) => {
 
 
 
-const scan = __webpack_require__(31781);
-const parse = __webpack_require__(78265);
-const utils = __webpack_require__(64059);
+const scan = __webpack_require__(1781);
+const parse = __webpack_require__(8265);
+const utils = __webpack_require__(4059);
 const constants = __webpack_require__(5595);
 const isObject = val => val && typeof val === 'object' && !Array.isArray(val);
 
@@ -2017,12 +2017,12 @@ module.exports = picomatch;
 
 /***/ }),
 
-/***/ 31781:
+/***/ 1781:
 /***/ ((module, __unused_webpack_exports, __webpack_require__) => {
 
 
 
-const utils = __webpack_require__(64059);
+const utils = __webpack_require__(4059);
 const {
   CHAR_ASTERISK,             /* * */
   CHAR_AT,                   /* @ */
@@ -2427,7 +2427,7 @@ module.exports = scan;
 
 /***/ }),
 
-/***/ 64059:
+/***/ 4059:
 /***/ ((__unused_webpack_module, exports, __webpack_require__) => {
 
 /*global navigator*/

@@ -2,7 +2,7 @@ export const id = 612;
 export const ids = [612];
 export const modules = {
 
-/***/ 28551:
+/***/ 8551:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -26,7 +26,7 @@ const EXIT = {
 
 /***/ }),
 
-/***/ 48612:
+/***/ 8612:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -38,7 +38,7 @@ __webpack_require__.d(__webpack_exports__, {
 // UNUSED EXPORTS: COMMANDS, VERSION, buildProgram
 
 // EXTERNAL MODULE: ./node_modules/commander/esm.mjs
-var esm = __webpack_require__(48179);
+var esm = __webpack_require__(8179);
 ;// CONCATENATED MODULE: ./src/cli/context.ts
 /**
  * What every command receives: the outside world as plain values and callbacks, so tests run the
@@ -54,11 +54,11 @@ function createContext(io, now = () => new Date()) {
 }
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/history/store.ts
-var store = __webpack_require__(84689);
+var store = __webpack_require__(4689);
 // EXTERNAL MODULE: ./src/cli/exit-codes.ts
-var exit_codes = __webpack_require__(28551);
+var exit_codes = __webpack_require__(8551);
 ;// CONCATENATED MODULE: ./src/cli/errors.ts
 
 
@@ -119,7 +119,7 @@ function firstLine(s) {
 }
 
 // EXTERNAL MODULE: ./src/cli/options.ts
-var options = __webpack_require__(60776);
+var options = __webpack_require__(776);
 ;// CONCATENATED MODULE: ./src/cli/commands/check.ts
 
 
@@ -148,7 +148,7 @@ function checkCommand(ctx) {
     cmd.addHelpText('after', '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\n');
     return cmd.action(async (options) => {
         // Imported when the command runs, so `--help` and the other commands never load the gate.
-        const { performCheck, verdictExitCode } = await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(382), __webpack_require__.e(241), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(901), __webpack_require__.e(838)]).then(__webpack_require__.bind(__webpack_require__, 94838));
+        const { performCheck, verdictExitCode } = await Promise.all(/* import() */[__webpack_require__.e(76), __webpack_require__.e(614), __webpack_require__.e(914), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(718), __webpack_require__.e(838)]).then(__webpack_require__.bind(__webpack_require__, 4838));
         const report = await performCheck(ctx, options);
         ctx.exitCode = verdictExitCode(report);
     });
@@ -171,7 +171,7 @@ function recordCommand(ctx) {
         'bellgate record --metrics bench.json --history h.json --id 8812-1 --sha 3f2a9c1 --ref refs/heads/main --time 2026-05-04T10:20:30Z',
     ]);
     // The work is imported when the command runs, so `--help` and the other commands never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(382), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(946), __webpack_require__.e(268)]).then(__webpack_require__.bind(__webpack_require__, 15779))).runRecord(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(614), __webpack_require__.e(914), __webpack_require__.e(946), __webpack_require__.e(268)]).then(__webpack_require__.bind(__webpack_require__, 5779))).runRecord(ctx, options));
 }
 
 ;// CONCATENATED MODULE: ./src/cli/commands/explain.ts
@@ -195,7 +195,7 @@ function explainCommand(ctx) {
         'bellgate explain size/web-bundle.js.gz --history h.json --metrics bench.json',
     ]);
     // The work is imported when the command runs, so `--help` and the other commands never load it.
-    return cmd.action(async (metric, options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(382), __webpack_require__.e(241), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(901), __webpack_require__.e(535)]).then(__webpack_require__.bind(__webpack_require__, 82535))).runExplain(ctx, metric, options));
+    return cmd.action(async (metric, options) => (await Promise.all(/* import() */[__webpack_require__.e(76), __webpack_require__.e(614), __webpack_require__.e(914), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(718), __webpack_require__.e(535)]).then(__webpack_require__.bind(__webpack_require__, 2535))).runExplain(ctx, metric, options));
 }
 
 ;// CONCATENATED MODULE: ./src/cli/commands/import.ts
@@ -217,7 +217,7 @@ function importCommand(ctx) {
     ]);
     cmd.addHelpText('after', '\nJSON Lines: {"id":"812-1","time":"2026-05-04T10:20:30Z","sha":"3f2a9c1","ref":"refs/heads/main","metrics":{"latency/p50":12.4}}\nCSV: id,time,sha,ref,name,value[,unit] (one row per metric) or id,time,sha,ref,<one column per metric>\n');
     // The work is imported when the command runs, so `--help` and the other commands never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(712), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(158)]).then(__webpack_require__.bind(__webpack_require__, 36158))).runImport(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(712), __webpack_require__.e(614), __webpack_require__.e(914), __webpack_require__.e(158)]).then(__webpack_require__.bind(__webpack_require__, 6158))).runImport(ctx, options));
 }
 
 ;// CONCATENATED MODULE: ./src/cli/commands/verify.ts
@@ -229,7 +229,7 @@ function verifyCommand(ctx) {
     (0,options/* historyOption */.cc)(cmd, true, 'history file to check');
     (0,options/* examples */.K1)(cmd, ['bellgate verify --history .bellgate/history.json']);
     // The work is imported when the command runs, so `--help` and the other commands never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(205), __webpack_require__.e(393)]).then(__webpack_require__.bind(__webpack_require__, 63774))).runVerify(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(614), __webpack_require__.e(774)]).then(__webpack_require__.bind(__webpack_require__, 3774))).runVerify(ctx, options));
 }
 
 ;// CONCATENATED MODULE: ./src/cli/commands/report.ts
@@ -253,11 +253,11 @@ function reportCommand(ctx) {
         'bellgate report --history h.json --metrics bench.json --html out/report.html --title "Nightly"',
     ]);
     // The work (with d3 and the HTML code) is imported when the command runs, so the others never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(382), __webpack_require__.e(241), __webpack_require__.e(850), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(901), __webpack_require__.e(574)]).then(__webpack_require__.bind(__webpack_require__, 26574))).runReport(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(76), __webpack_require__.e(850), __webpack_require__.e(614), __webpack_require__.e(914), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(718), __webpack_require__.e(574)]).then(__webpack_require__.bind(__webpack_require__, 6574))).runReport(ctx, options));
 }
 
 // EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __webpack_require__(76760);
+var external_node_path_ = __webpack_require__(6760);
 ;// CONCATENATED MODULE: ./src/cli/commands/demo.ts
 
 
@@ -278,7 +278,7 @@ function demoCommand(ctx) {
     (0,options/* examples */.K1)(cmd, ['bellgate demo', 'bellgate demo --out /tmp/bellgate-demo']);
     return cmd.action(async (options) => {
         // Imported when the command runs, so `--help` and the other commands never load the gate.
-        const [{ performCheck, verdictExitCode }, { DEMO_FILES, locateDemo }] = await Promise.all([Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(382), __webpack_require__.e(241), __webpack_require__.e(205), __webpack_require__.e(367), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(901), __webpack_require__.e(838)]).then(__webpack_require__.bind(__webpack_require__, 94838)), __webpack_require__.e(/* import() */ 604).then(__webpack_require__.bind(__webpack_require__, 26604))]);
+        const [{ performCheck, verdictExitCode }, { DEMO_FILES, locateDemo }] = await Promise.all([Promise.all(/* import() */[__webpack_require__.e(76), __webpack_require__.e(614), __webpack_require__.e(914), __webpack_require__.e(628), __webpack_require__.e(946), __webpack_require__.e(718), __webpack_require__.e(838)]).then(__webpack_require__.bind(__webpack_require__, 4838)), __webpack_require__.e(/* import() */ 604).then(__webpack_require__.bind(__webpack_require__, 6604))]);
         const dir = locateDemo(ctx.io.cwd, process.argv[1]);
         ctx.io.stdout(`Demo: the Kestrel Post geocoding service — 120 trusted runs on main, and one pull request.\n\n`);
         const report = await performCheck(ctx, {
@@ -327,7 +327,7 @@ function tuneCommand(ctx) {
         'bellgate tune --history h.json --target 0.5 --write .github/bellgate.yml',
     ]);
     // The work (replay, diff library) is imported when the command runs, so the others never load it.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(774), __webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(194), __webpack_require__.e(205), __webpack_require__.e(628), __webpack_require__.e(446), __webpack_require__.e(385)]).then(__webpack_require__.bind(__webpack_require__, 16385))).runTune(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(815), __webpack_require__.e(291), __webpack_require__.e(614), __webpack_require__.e(628), __webpack_require__.e(964), __webpack_require__.e(369)]).then(__webpack_require__.bind(__webpack_require__, 2369))).runTune(ctx, options));
 }
 function parseTarget(text) {
     const n = Number(text);
@@ -412,7 +412,7 @@ function buildProgram(ctx) {
 
 /***/ }),
 
-/***/ 60776:
+/***/ 776:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -426,7 +426,7 @@ function buildProgram(ctx) {
 /* harmony export */   qo: () => (/* binding */ runInfoOptions)
 /* harmony export */ });
 /* unused harmony export DEFAULT_SERIES */
-/* harmony import */ var _inputs_formats_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(77713);
+/* harmony import */ var _inputs_formats_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(7713);
 
 const REPORT_FORMATS = ['text', 'markdown', 'json'];
 /** The series used when --series is not given. */
@@ -470,7 +470,7 @@ function examples(cmd, lines) {
 
 /***/ }),
 
-/***/ 84689:
+/***/ 4689:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -529,14 +529,14 @@ function guardAgainstLoss(store, h, readCount) {
 
 /***/ }),
 
-/***/ 77713:
+/***/ 7713:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   A: () => (/* binding */ metricFormat),
 /* harmony export */   Y: () => (/* binding */ METRIC_FORMATS)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /** The metric file formats Bellgate reads; the names `--input-format` and `input-format` accept. */
 const METRIC_FORMATS = ['json', 'jsonl', 'csv', 'openmetrics', 'gobench', 'junit'];
@@ -567,13 +567,13 @@ function metricFormat(name) {
 
 /***/ }),
 
-/***/ 38250:
+/***/ 8250:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   d: () => (/* binding */ InputError)
 /* harmony export */ });
-/* harmony import */ var _visible_text_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(22639);
+/* harmony import */ var _visible_text_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(2639);
 
 /**
  * The project's one contract for bad input: a typed error whose message a user can act on.
@@ -613,7 +613,7 @@ function shortenQuotes(text) {
 
 /***/ }),
 
-/***/ 22639:
+/***/ 2639:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {

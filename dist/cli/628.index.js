@@ -2,14 +2,14 @@ export const id = 628;
 export const ids = [628];
 export const modules = {
 
-/***/ 86783:
+/***/ 6783:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   Z: () => (/* binding */ loadConfig)
 /* harmony export */ });
 /* unused harmony export LOOKED_UP_CONFIGS */
-/* harmony import */ var _config_locate_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(55562);
+/* harmony import */ var _config_locate_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(5562);
 
 /** Where a config is looked for without --config (src/config/locate.ts). */
 const LOOKED_UP_CONFIGS = (/* unused pure expression or super */ null && (DEFAULT_CONFIG_PATHS));
@@ -28,7 +28,7 @@ async function loadConfig(ctx, path) {
 
 /***/ }),
 
-/***/ 31954:
+/***/ 1954:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -80,53 +80,7 @@ function defaultConfig() {
 
 /***/ }),
 
-/***/ 80517:
-/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
-
-/* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   M: () => (/* binding */ isLiteralGlob),
-/* harmony export */   t: () => (/* binding */ compileGlobs)
-/* harmony export */ });
-/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(14006);
-/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(picomatch__WEBPACK_IMPORTED_MODULE_0__);
-
-// Metric names are not paths: a leading '.' is an ordinary character (dot: true), and '\' is
-// never a separator, whatever the operating system (windows: false).
-const OPTIONS = { dot: true, windows: false };
-const cache = new WeakMap();
-/**
- * Compiles a rule's globs (picomatch syntax) into one matcher: a name matches when it matches at
- * least one plain glob and no glob starting with '!' (only '!' globs: everything but those).
- * Metric names contain '/', and `*` stays within one '/' segment while `**` crosses segments:
- * `throughput/*` matches `throughput/home` but not `throughput/api/v2`; `size/**` matches both
- * `size/app.js` and `size/assets/logo.svg`. Compiled once per globs array (WeakMap cache).
- * Throws picomatch's error for a pattern it cannot compile (load.ts reports it with line:column).
- * @example compileGlobs(['latency/*', '!latency/calibrate'])('latency/render') // true
- */
-function compileGlobs(globs) {
-    const cached = cache.get(globs);
-    if (cached)
-        return cached;
-    const plain = globs.filter((g) => !g.startsWith('!'));
-    const negated = globs.filter((g) => g.startsWith('!')).map((g) => g.slice(1));
-    const include = plain.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_0___default()(plain, OPTIONS) : () => true;
-    const exclude = negated.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_0___default()(negated, OPTIONS) : () => false;
-    const matcher = (name) => include(name) && !exclude(name);
-    cache.set(globs, matcher);
-    return matcher;
-}
-/**
- * True when the glob has no wildcard or brace characters, so it names exactly one metric.
- * @example isLiteralGlob('latency/calibrate') // true
- */
-function isLiteralGlob(glob) {
-    return !picomatch__WEBPACK_IMPORTED_MODULE_0___default().scan(glob).isGlob && !glob.startsWith('!');
-}
-
-
-/***/ }),
-
-/***/ 55562:
+/***/ 5562:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -134,11 +88,11 @@ function isLiteralGlob(glob) {
 /* harmony export */   yH: () => (/* binding */ loadConfigLazily)
 /* harmony export */ });
 /* unused harmony export anyConfigPresent */
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(1455);
 /* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(76760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(31954);
+/* harmony import */ var _defaults_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(1954);
 
 
 
@@ -165,29 +119,124 @@ async function anyConfigPresent(cwd, paths = DEFAULT_CONFIG_PATHS) {
 /**
  * The config for a run: a named file must exist (unless `required` is false); without a name,
  * `.github/bellgate.yml` (or `.yaml`) is read when present, else the defaults are used. The reader
- * (YAML and schema validation, ~40 ms of start-up) is imported only when there is a file to read;
- * this module itself loads neither.
+ * (the YAML library, ~290 KB, and the generated schema validator) is imported only when there is
+ * a file to read, picomatch only when its rules hold real globs; this module itself loads none.
  * @throws InputError for a missing named file or an invalid config (with file:line:col).
  * @example await loadConfigLazily(undefined, '/repo') // the defaults in a folder without a config file
  */
 async function loadConfigLazily(path, cwd, required = path !== undefined) {
     if (path === undefined && !(await anyConfigPresent(cwd)))
         return (0,_defaults_js__WEBPACK_IMPORTED_MODULE_2__/* .defaultConfig */ .sb)();
-    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(463), __webpack_require__.e(446), __webpack_require__.e(0)]).then(__webpack_require__.bind(__webpack_require__, 62000));
+    const { readConfigFile } = await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(964), __webpack_require__.e(115)]).then(__webpack_require__.bind(__webpack_require__, 1115));
     return readConfigFile(path, { cwd, required });
 }
 
 
 /***/ }),
 
-/***/ 85413:
+/***/ 6471:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   Bz: () => (/* binding */ useFallbackCompiler),
+/* harmony export */   Cp: () => (/* binding */ exactNameCompiler),
+/* harmony export */   Gh: () => (/* binding */ exactMatcher),
+/* harmony export */   at: () => (/* binding */ knownMatcher),
+/* harmony export */   gV: () => (/* binding */ rememberMatcher),
+/* harmony export */   sp: () => (/* binding */ matcherFor)
+/* harmony export */ });
+/* unused harmony export isPlainGlob */
+// Characters that picomatch (dot: true, windows: false) reads as themselves, checked against it by
+// test/config/name-matchers.test.ts. Left out: its specials (* ? [ ] { } ( ) ! + @ |), the escape
+// '\', '"' and '$' (it treats them specially), and anything outside ASCII. A leading "./" is
+// stripped by picomatch, so such a glob is not plain either.
+const PLAIN = /^(?!\.\/)[A-Za-z0-9 _.,:;=#%&~<>'`^/-]+$/;
+/**
+ * True when the glob can only match the one name written, so a string comparison decides it and
+ * no glob library is needed: letters, digits and the punctuation listed in PLAIN, not "./" first.
+ * @example isPlainGlob('latency/calibrate') // true
+ * @example isPlainGlob('latency/*') // false
+ */
+function isPlainGlob(glob) {
+    return PLAIN.test(glob);
+}
+/**
+ * The matcher of globs that are all plain names, each maybe with a leading '!' (exclude), with the
+ * same meaning as compileGlobs: a name matches when it is one of the plain names (or there are
+ * none) and none of the excluded ones. undefined when any glob needs the glob library.
+ * @example exactMatcher(['a/b', 'a/c'])?.('a/c') // true
+ */
+function exactMatcher(globs) {
+    const include = new Set();
+    const exclude = new Set();
+    for (const glob of globs) {
+        const negated = glob.startsWith('!');
+        const body = negated ? glob.slice(1) : glob;
+        if (!isPlainGlob(body))
+            return undefined;
+        (negated ? exclude : include).add(body);
+    }
+    if (include.size === 1 && exclude.size === 0) {
+        const only = [...include][0];
+        return (name) => name === only;
+    }
+    return (name) => (include.size === 0 || include.has(name)) && !exclude.has(name);
+}
+// Matchers by globs array (the `match` array of a rule or group), filled when a config is read,
+// so settingsFor and groupFor stay pure and synchronous however the glob library was loaded.
+const compiled = new WeakMap();
+let fallback;
+/** Files the matcher of a globs array for matcherFor; returns it. */
+function rememberMatcher(globs, matcher) {
+    compiled.set(globs, matcher);
+    return matcher;
+}
+/** The matcher filed for this globs array, if any. */
+function knownMatcher(globs) {
+    return compiled.get(globs);
+}
+/** Sets the compiler for globs that were never filed (glob-matcher.ts registers picomatch's). */
+function useFallbackCompiler(compile) {
+    fallback = compile;
+}
+/**
+ * The matcher for a rule's globs: the one filed when the config was read, else plain names
+ * compared as strings, else the fallback compiler (present once glob-matcher.ts is loaded).
+ * @throws Error when the globs need the glob library and it was never loaded: a Config built by
+ *   hand with globs must be read through parseConfig/readConfigFile or compiled with compileGlobs.
+ * @example matcherFor(['latency/render'])('latency/render') // true
+ */
+function matcherFor(globs) {
+    const known = compiled.get(globs);
+    if (known)
+        return known;
+    const made = exactMatcher(globs) ?? fallback?.(globs);
+    if (!made)
+        throw new Error(`the globs ${JSON.stringify(globs)} were never compiled; read the config with readConfigFile or parseConfig`);
+    return rememberMatcher(globs, made);
+}
+/** Compiles rules of plain names only, without any glob library. */
+const exactNameCompiler = {
+    compile(globs) {
+        const matcher = knownMatcher(globs) ?? exactMatcher(globs);
+        if (!matcher)
+            throw new Error(`exactNameCompiler got globs that need the glob library: ${JSON.stringify(globs)}`);
+        return rememberMatcher(globs, matcher);
+    },
+    isLiteral: isPlainGlob,
+};
+
+
+/***/ }),
+
+/***/ 5413:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   R: () => (/* binding */ groupFor),
 /* harmony export */   z: () => (/* binding */ settingsFor)
 /* harmony export */ });
-/* harmony import */ var _glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(80517);
+/* harmony import */ var _name_matchers_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6471);
 
 /**
  * The settings that decide one metric: the defaults, then every `metrics:` rule whose globs match
@@ -195,12 +244,14 @@ async function loadConfigLazily(path, cwd, required = path !== undefined) {
  * Globs are picomatch globs over the whole name; `*` does not cross '/', `**` does; a glob starting
  * with '!' excludes (see compileGlobs). A metric is never relative to itself: when the resolved
  * `relative-to` names the metric (the calibration benchmark matched by its own rule), it is dropped.
+ * The matchers were compiled when the config was read (name-matchers.ts), so no glob library is
+ * loaded here.
  * @example settingsFor(config, 'throughput/home').worse // 'lower' with the rule { match: 'throughput/*', worse: lower }
  */
 function settingsFor(config, metric) {
     const settings = { ...config.defaults };
     for (const rule of config.rules) {
-        if ((0,_glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__/* .compileGlobs */ .t)(rule.match)(metric))
+        if ((0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .matcherFor */ .sp)(rule.match)(metric))
             Object.assign(settings, rule.settings);
     }
     if (settings.relativeTo === metric)
@@ -212,13 +263,13 @@ function settingsFor(config, metric) {
  * @example groupFor(config, 'latency/render')?.name // 'latency' with the group { name: latency, match: 'latency/*' }
  */
 function groupFor(config, metric) {
-    return config.groups.find((group) => (0,_glob_matcher_js__WEBPACK_IMPORTED_MODULE_0__/* .compileGlobs */ .t)(group.match)(metric));
+    return config.groups.find((group) => (0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .matcherFor */ .sp)(group.match)(metric));
 }
 
 
 /***/ }),
 
-/***/ 64614:
+/***/ 4614:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -228,31 +279,76 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/model/fit.ts
-var fit = __webpack_require__(95046);
+var fit = __webpack_require__(5046);
 // EXTERNAL MODULE: ./src/model/median.ts
-var median = __webpack_require__(90071);
+var median = __webpack_require__(71);
 ;// CONCATENATED MODULE: ./src/model/change-points.ts
 
 
 
 /**
- * The noise sigma, estimated from successive differences so level shifts barely bias it:
- * x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one difference only.
- * Robust (1.4826 MAD / sqrt 2), falling back to the plain RMS of differences for quantised data.
+ * Scratch buffers shared by every call (the gate runs this once per metric; fresh typed arrays per
+ * call were most of its cost). Grown on demand, never shrunk; safe because a call never yields
+ * and nothing it calls re-enters detectChangePoints.
  */
-function noiseSigma(centred) {
-    const diffs = new Float64Array(centred.length - 1);
-    for (let i = 1; i < centred.length; i++)
-        diffs[i - 1] = centred[i] - centred[i - 1];
-    const robust = (fit/* MAD_TO_SIGMA */.tF * (0,median/* medianAbsoluteDeviation */.h)(diffs)) / Math.SQRT2;
+let scratchSize = 0;
+let work = new Float64Array(0);
+let centred = new Float64Array(0);
+let sum = new Float64Array(0);
+let sumSq = new Float64Array(0);
+let best = new Float64Array(0);
+let totals = new Float64Array(0);
+let previous = new Int32Array(0);
+let candidates = new Int32Array(0);
+let dropAt = new Int32Array(0);
+function ensureScratch(n) {
+    if (n + 1 <= scratchSize)
+        return;
+    scratchSize = Math.max(n + 1, 2 * scratchSize);
+    work = new Float64Array(scratchSize);
+    centred = new Float64Array(scratchSize);
+    sum = new Float64Array(scratchSize);
+    sumSq = new Float64Array(scratchSize);
+    best = new Float64Array(scratchSize);
+    totals = new Float64Array(scratchSize);
+    previous = new Int32Array(scratchSize);
+    candidates = new Int32Array(scratchSize);
+    dropAt = new Int32Array(scratchSize);
+}
+/**
+ * The noise sigma of centred[0..n), estimated from successive differences so level shifts barely
+ * bias it: x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one
+ * difference only. Robust (1.4826 MAD / sqrt 2), falling back to the plain RMS of differences for
+ * quantised data. The MAD is taken by selection in the `work` buffer (no sort, no copy).
+ */
+function noiseSigma(n) {
+    const m = n - 1;
+    const w = work;
+    const c = centred;
+    for (let i = 1; i < n; i++)
+        w[i - 1] = finite(c[i] - c[i - 1], i);
+    const centre = (0,median/* medianInPlace */.Te)(w, m);
+    // Refilled in series order (not from the reordered buffer) so an overflow names its position.
+    for (let i = 1; i < n; i++)
+        w[i - 1] = finite(Math.abs(c[i] - c[i - 1] - centre), i);
+    const robust = (fit/* MAD_TO_SIGMA */.tF * (0,median/* medianInPlace */.Te)(w, m)) / Math.SQRT2;
     if (robust > 0)
         return robust;
+    // Summed in series order, as the differences come.
     let squares = 0;
-    for (const d of diffs)
+    for (let i = 1; i < n; i++) {
+        const d = c[i] - c[i - 1];
         squares += d * d;
-    return Math.sqrt(squares / (2 * diffs.length));
+    }
+    return Math.sqrt(squares / (2 * m));
+}
+/** x, or InputError when a difference overflowed (values near the largest double). */
+function finite(x, position) {
+    if (!Number.isFinite(x))
+        throw new input_error/* InputError */.d(`value ${x} at position ${position} is not a finite number`);
+    return x;
 }
 /**
  * Where the level of a series changes, by PELT (Killick, Fearnhead & Eckley 2012, "Optimal
@@ -287,59 +383,107 @@ function detectChangePoints(values, options = {}) {
         });
         return [];
     }
-    const centre = (0,median/* median */.J)(values);
-    const centred = new Float64Array(n);
-    for (let i = 0; i < n; i++)
-        centred[i] = values[i] - centre;
-    const sigma = noiseSigma(centred);
+    ensureScratch(n);
+    const sigma = centreAndScale(values, n);
     if (!(sigma > 0))
         return [];
-    const sum = new Float64Array(n + 1);
-    const sumSq = new Float64Array(n + 1);
+    prefixSums(n, sigma);
+    optimalPartition(n, penalty, minSegment);
+    return segmentStarts(n);
+}
+// The steps below are separate small functions on purpose: V8 optimises each on its own, where one
+// long function compiled while its first loop ran lacked type feedback for the rest and kept
+// being thrown away (a cost paid on every cold start of the gate).
+/** Copies the values to the scratch, centres them on their median and returns the noise sigma. */
+function centreAndScale(values, n) {
+    const w = work;
     for (let i = 0; i < n; i++) {
-        const z = centred[i] / sigma;
-        sum[i + 1] = sum[i] + z;
-        sumSq[i + 1] = sumSq[i] + z * z;
+        const x = values[i];
+        if (!Number.isFinite(x))
+            throw new input_error/* InputError */.d(`value ${x} at position ${i + 1} is not a finite number`);
+        w[i] = x;
     }
-    const best = new Float64Array(n + 1).fill(Infinity);
-    const previous = new Int32Array(n + 1);
-    best[0] = -penalty;
-    // The candidate starts and their totals live in fixed typed arrays, pruned in place: the gate
-    // runs this once per metric, and a fresh array and closure per step was most of its cost.
-    const candidates = new Int32Array(n + 1);
-    const totals = new Float64Array(n + 1);
+    const centre = (0,median/* medianInPlace */.Te)(w, n);
+    const c = centred;
+    for (let i = 0; i < n; i++)
+        c[i] = values[i] - centre;
+    return noiseSigma(n);
+}
+/** sum[i] and sumSq[i]: the sums of z and z^2 over the first i values, z = centred / sigma. */
+function prefixSums(n, sigma) {
+    const c = centred;
+    const s1 = sum;
+    const s2 = sumSq;
+    s1[0] = 0;
+    s2[0] = 0;
+    for (let i = 0; i < n; i++) {
+        const z = c[i] / sigma;
+        s1[i + 1] = s1[i] + z;
+        s2[i + 1] = s2[i] + z * z;
+    }
+}
+/**
+ * The PELT recursion: best[end] = min over kept starts of best[start] + C(start, end) + penalty,
+ * previous[end] the minimising start (the first one on ties).
+ * Pruning with a shortest segment m: a start s with best[s] + C(s, t) > best[t] is beaten by t
+ * for every later end u, since C(s, u) >= C(s, t) + C(t, u), but t may only start a segment
+ * ending at u >= t + m. So s is dropped at end t + m (when t has joined), not at once; dropping
+ * it at t (plain PELT) could lose the optimum for the ends in between. With m = 1 that is the
+ * next end, as in plain PELT. Candidates are compacted in place.
+ */
+function optimalPartition(n, penalty, minSegment) {
+    const s1 = sum;
+    const s2 = sumSq;
+    const f = best;
+    const from = previous;
+    const kept = candidates;
+    const t = totals;
+    const until = dropAt;
+    f[0] = -penalty;
     let count = 0;
     for (let end = minSegment; end <= n; end++) {
         // The start that just became far enough back joins the candidates, if it can end a segment.
         const fresh = end - minSegment;
-        if (fresh === 0 || fresh >= minSegment)
-            candidates[count++] = fresh;
+        if (fresh === 0 || fresh >= minSegment) {
+            kept[count++] = fresh;
+            until[fresh] = n + 1;
+        }
+        const sumEnd = s1[end];
+        const sumSqEnd = s2[end];
         let bestValue = Infinity;
         let bestStart = 0;
         for (let k = 0; k < count; k++) {
-            const start = candidates[k];
+            const start = kept[k];
             // Segment cost C = sum z^2 - (sum z)^2 / length, never below 0 (rounding).
-            const s = sum[end] - sum[start];
-            const cost = Math.max(0, sumSq[end] - sumSq[start] - (s * s) / (end - start));
-            const total = best[start] + cost + penalty;
-            totals[k] = total;
+            const s = sumEnd - s1[start];
+            const cost = Math.max(0, sumSqEnd - s2[start] - (s * s) / (end - start));
+            const total = f[start] + cost + penalty;
+            t[k] = total;
             if (total < bestValue) {
                 bestValue = total;
                 bestStart = start;
             }
         }
-        best[end] = bestValue;
-        previous[end] = bestStart;
-        // PELT pruning: a start already worse by the penalty can never become optimal again.
-        let kept = 0;
+        f[end] = bestValue;
+        from[end] = bestStart;
+        // A start already worse by the penalty is beaten by `end` once `end` can start a segment.
+        const beatenFrom = end + minSegment;
+        let left = 0;
         for (let k = 0; k < count; k++) {
-            if (totals[k] - penalty <= bestValue)
-                candidates[kept++] = candidates[k];
+            const start = kept[k];
+            if (t[k] - penalty > bestValue && beatenFrom < until[start])
+                until[start] = beatenFrom;
+            if (until[start] > end + 1)
+                kept[left++] = start;
         }
-        count = kept;
+        count = left;
     }
+}
+/** The segment starts after 0, ascending, read back from previous[]. */
+function segmentStarts(n) {
+    const from = previous;
     const starts = [];
-    for (let at = previous[n]; at > 0; at = previous[at])
+    for (let at = from[n]; at > 0; at = from[at])
         starts.push(at);
     return starts.reverse();
 }
@@ -358,49 +502,95 @@ var transform = __webpack_require__(8077);
  * 3. with `change-points` on, PELT-style segmentation of that window (detectChangePoints); when the
  *    last segment already spans `min-runs` runs, only it is kept, so a merged level change stops
  *    counting as a regression once the new level has enough history.
- * O(runs) plus the change-point search. Throws InputError when a value cannot take the transform.
+ * O(window) on the plain scale (older runs are counted only when `available` is read), O(runs)
+ * with a transform or ratio, plus the change-point search. Throws InputError when a value cannot
+ * take the transform.
  * @example selectBaseline(history, 'build/time', settings).values // [412.5, 409.9, ...]
  */
 function selectBaseline(history, name, settings) {
     const column = history.columns.get(name);
-    const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
-    const values = [];
-    const runIds = [];
-    let available = 0;
-    if (column !== undefined) {
-        const count = Math.min(column.values.length, history.runs.length);
-        // Only the newest `window` pairs are kept, so count the pairs first and build just those
-        // (a long history otherwise costs an array entry and a run-id lookup per run and metric).
-        const paired = pairs(column.values, reference?.values, count, settings.relativeTo !== undefined);
-        const firstKept = paired - settings.window;
-        // Values before the window are still checked when the scale can refuse them (log, ratios).
-        const checkAll = settings.transform !== 'none' || settings.relativeTo !== undefined;
-        let k = 0;
-        for (let i = 0; i < count; i++) {
-            let x = column.values[i];
-            if (!Number.isFinite(x))
-                continue;
-            available++;
-            if (settings.relativeTo !== undefined) {
-                const r = reference?.values[i];
-                if (r === undefined || !Number.isFinite(r) || r === 0)
-                    continue;
-                x /= r;
-            }
-            if (k++ < firstKept) {
-                if (checkAll)
-                    toHistoryFitScale(x, settings, name, history.runs[i].id);
-                continue;
-            }
-            const id = history.runs[i].id;
-            values.push(toHistoryFitScale(x, settings, name, id));
-            runIds.push(id);
-        }
-    }
-    const selected = { values, runIds, available };
+    const plain = settings.transform === 'none' && settings.relativeTo === undefined;
+    const selected = column === undefined
+        ? { values: [], runIds: [], available: 0 }
+        : plain
+            ? newestWindow(history, column.values, settings.window)
+            : checkedWindow(history, name, column.values, settings);
     if (settings.relativeTo !== undefined)
         selected.relativeTo = settings.relativeTo;
     return settings.changePoints ? sinceLastChange(selected, settings.minRuns) : selected;
+}
+/**
+ * The plain scale (no transform, no ratio), where no value can be refused: walks back from the
+ * newest run only until `window` values are found, and just counts the older ones.
+ */
+function newestWindow(history, column, window) {
+    const count = Math.min(column.length, history.runs.length);
+    const values = [];
+    const runIds = [];
+    let i = count - 1;
+    for (; i >= 0 && values.length < window; i--) {
+        const x = column[i];
+        if (!Number.isFinite(x))
+            continue;
+        values.push(x);
+        runIds.push(history.runs[i].id);
+    }
+    const newer = values.length;
+    const older = i;
+    return {
+        values: values.reverse(),
+        runIds: runIds.reverse(),
+        // Counted only when read (the `missing` wording): walking the older runs of every metric was
+        // most of the selection's cost on a long history.
+        get available() {
+            let available = newer;
+            for (let k = older; k >= 0; k--)
+                if (Number.isFinite(column[k]))
+                    available++;
+            return available;
+        },
+    };
+}
+/**
+ * Any other scale: every value of the history is checked, since the transform or ratio can refuse
+ * it. One forward pass checks and counts (in run order, so an error names the oldest bad run), then
+ * a walk back from the newest run builds just the `window` kept values.
+ */
+function checkedWindow(history, name, column, settings) {
+    const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
+    const ratio = settings.relativeTo !== undefined;
+    const count = Math.min(column.length, history.runs.length);
+    let available = 0;
+    for (let i = 0; i < count; i++) {
+        const x = pairedValue(column, reference?.values, ratio, i);
+        if (Number.isFinite(column[i]))
+            available++;
+        if (x !== undefined)
+            toHistoryFitScale(x, settings, name, history.runs[i].id);
+    }
+    const values = [];
+    const runIds = [];
+    for (let i = count - 1; i >= 0 && values.length < settings.window; i--) {
+        const x = pairedValue(column, reference?.values, ratio, i);
+        if (x === undefined)
+            continue;
+        const id = history.runs[i].id;
+        values.push(toHistoryFitScale(x, settings, name, id));
+        runIds.push(id);
+    }
+    return { values: values.reverse(), runIds: runIds.reverse(), available };
+}
+/** Run i's value, divided by the reference of the same run for a ratio; undefined when it lacks either. */
+function pairedValue(column, reference, ratio, i) {
+    const x = column[i];
+    if (!Number.isFinite(x))
+        return undefined;
+    if (!ratio)
+        return x;
+    const r = reference?.[i];
+    if (r === undefined || !Number.isFinite(r) || r === 0)
+        return undefined;
+    return x / r;
 }
 /** Keeps only the runs after the last level change, once they are at least `minRuns`. */
 function sinceLastChange(baseline, minRuns) {
@@ -420,21 +610,6 @@ function sinceLastChange(baseline, minRuns) {
         window: { values: baseline.values, runIds: baseline.runIds },
     };
 }
-/** How many of the first `count` runs hold the metric (and, for ratios, a usable reference). */
-function pairs(column, reference, count, ratio) {
-    let n = 0;
-    for (let i = 0; i < count; i++) {
-        if (!Number.isFinite(column[i]))
-            continue;
-        if (ratio) {
-            const r = reference?.[i];
-            if (r === undefined || !Number.isFinite(r) || r === 0)
-                continue;
-        }
-        n++;
-    }
-    return n;
-}
 function toHistoryFitScale(x, settings, name, runId) {
     try {
         return (0,transform/* toFitScale */.P)(x, settings.transform, name);
@@ -453,15 +628,16 @@ function toHistoryFitScale(x, settings, name, runId) {
 
 /***/ }),
 
-/***/ 18176:
+/***/ 8176:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   h: () => (/* binding */ plainTest),
-/* harmony export */   n: () => (/* binding */ decideMetric)
+/* harmony export */   hB: () => (/* binding */ plainTest),
+/* harmony export */   nR: () => (/* binding */ decideMetric),
+/* harmony export */   xR: () => (/* binding */ decision)
 /* harmony export */ });
-/* harmony import */ var _format_number_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(19616);
-/* harmony import */ var _tolerance_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(20592);
+/* harmony import */ var _format_number_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(9616);
+/* harmony import */ var _tolerance_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(592);
 
 
 /**
@@ -483,6 +659,10 @@ function plainTest(result) {
  * @example decideMetric(score, plainTest(score.result)).status // 'regressed'
  */
 function decideMetric(score, test) {
+    return { ...score.result, ...decision(score, test) };
+}
+/** decideMetric's status and reason alone, for a caller that owns the result and sets them in place. */
+function decision(score, test) {
     const { result } = score;
     const where = position(result);
     let status = 'ok';
@@ -500,7 +680,7 @@ function decideMetric(score, test) {
             reason = `${where} (the better side); ${test.phrase}`;
         }
     }
-    return { ...result, status, reason };
+    return { status, reason };
 }
 /** "4.1 sd above the baseline mean", or the constant-baseline wording when there is no z. */
 function position(result) {
@@ -521,7 +701,7 @@ function position(result) {
 
 /***/ }),
 
-/***/ 19616:
+/***/ 9616:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -548,22 +728,22 @@ function formatPercent(share) {
 
 /***/ }),
 
-/***/ 81177:
+/***/ 1177:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   zN: () => (/* binding */ scoreMetric)
 /* harmony export */ });
 /* unused harmony exports RECENT_VALUES, judgeMetric */
-/* harmony import */ var _model_density_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(20913);
-/* harmony import */ var _model_fit_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(95046);
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(38250);
-/* harmony import */ var _model_tails_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(60312);
+/* harmony import */ var _model_density_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(913);
+/* harmony import */ var _model_fit_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(5046);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(8250);
+/* harmony import */ var _model_tails_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(7963);
 /* harmony import */ var _model_transform_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(8077);
 /* harmony import */ var _resolution_floor_js__WEBPACK_IMPORTED_MODULE_8__ = __webpack_require__(1198);
-/* harmony import */ var _sides_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(33979);
-/* harmony import */ var _tolerance_js__WEBPACK_IMPORTED_MODULE_6__ = __webpack_require__(20592);
-/* harmony import */ var _decide_metric_js__WEBPACK_IMPORTED_MODULE_7__ = __webpack_require__(18176);
+/* harmony import */ var _sides_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(3979);
+/* harmony import */ var _tolerance_js__WEBPACK_IMPORTED_MODULE_6__ = __webpack_require__(592);
+/* harmony import */ var _decide_metric_js__WEBPACK_IMPORTED_MODULE_7__ = __webpack_require__(8176);
 
 
 
@@ -597,40 +777,35 @@ function scoreMetric(name, settings, baseline, value, extras = {}) {
         throw new _model_input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .d(`value ${value} of ${name} is not a finite number`, { where: name, fix: 'check the metric file' });
     }
     const current = (0,_model_transform_js__WEBPACK_IMPORTED_MODULE_4__/* .toFitScale */ .P)(value, settings.transform, name);
-    const base = {
-        name,
-        status: 'ok',
-        value,
-        cutoff: settings.cutoff,
-        worse: settings.worse,
-        reason: '',
-        ...(extras.unit === undefined ? {} : { unit: extras.unit }),
-        ...(extras.count === undefined ? {} : { count: extras.count }),
-    };
-    const unscored = { settings, scored: false, direction: 'none', beyondTolerance: false };
+    // Built key by key (in the report's key order) rather than by spreads: this runs per metric.
+    const base = { name, status: 'ok', value, cutoff: settings.cutoff, worse: settings.worse, reason: '' };
+    if (extras.unit !== undefined)
+        base.unit = extras.unit;
+    if (extras.count !== undefined)
+        base.count = extras.count;
     const n = baseline.length;
     if (n === 0)
-        return { ...unscored, result: { ...base, status: 'new', reason: 'no history for this metric yet' } };
-    base.recent = baseline.slice(-RECENT_VALUES).map((x) => (0,_model_transform_js__WEBPACK_IMPORTED_MODULE_4__/* .fromFitScale */ .G)(x, settings.transform));
+        return unscored(settings, { ...base, status: 'new', reason: 'no history for this metric yet' });
+    base.recent = recentValues(baseline, settings.transform);
     if (n < settings.minRuns) {
         const reason = `only ${n} baseline run${n === 1 ? '' : 's'}; min-runs is ${settings.minRuns}`;
         const early = fitWithFloor(baseline, settings);
-        return { ...unscored, result: { ...base, status: 'learning', baseline: { n, mean: early.mean, sd: early.sd }, reason } };
+        return unscored(settings, { ...base, status: 'learning', baseline: { n, mean: early.mean, sd: early.sd }, reason });
     }
     const fit = fitWithFloor(baseline, settings);
     const centre = (0,_model_transform_js__WEBPACK_IMPORTED_MODULE_4__/* .fromFitScale */ .G)(fit.mean, settings.transform);
-    base.baseline = {
-        n,
-        mean: fit.mean,
-        sd: fit.sd,
-        ...(settings.transform === 'log' ? { scale: 'log' } : {}),
-        ...(extras.since === undefined ? {} : { since: extras.since }),
-        ...(extras.relativeTo === undefined ? {} : { relativeTo: extras.relativeTo }),
-    };
+    const summary = { n, mean: fit.mean, sd: fit.sd };
+    if (settings.transform === 'log')
+        summary.scale = 'log';
+    if (extras.since !== undefined)
+        summary.since = extras.since;
+    if (extras.relativeTo !== undefined)
+        summary.relativeTo = extras.relativeTo;
+    base.baseline = summary;
     if (centre !== 0)
         base.change = (value - centre) / centre;
     const deviation = current - fit.mean;
-    Object.assign(base, deviationFigures(current, fit, settings));
+    addDeviationFigures(base, current, fit, settings);
     const score = {
         result: base,
         settings,
@@ -640,7 +815,24 @@ function scoreMetric(name, settings, baseline, value, extras = {}) {
         current,
         fit,
     };
-    return { ...score, result: (0,_decide_metric_js__WEBPACK_IMPORTED_MODULE_7__/* .decideMetric */ .n)(score, (0,_decide_metric_js__WEBPACK_IMPORTED_MODULE_7__/* .plainTest */ .h)(base)) };
+    // `base` is this call's own object, so the decision is written into it (decideMetric would copy).
+    const decided = (0,_decide_metric_js__WEBPACK_IMPORTED_MODULE_7__/* .decision */ .xR)(score, (0,_decide_metric_js__WEBPACK_IMPORTED_MODULE_7__/* .plainTest */ .hB)(base));
+    base.status = decided.status;
+    base.reason = decided.reason;
+    return score;
+}
+/** A new or learning result, which no later decision changes. */
+function unscored(settings, result) {
+    return { settings, scored: false, direction: 'none', beyondTolerance: false, result };
+}
+/** The newest RECENT_VALUES baseline values on the metric's own scale. */
+function recentValues(baseline, transform) {
+    const recent = baseline.slice(-RECENT_VALUES);
+    if (transform === 'none')
+        return recent;
+    for (let i = 0; i < recent.length; i++)
+        recent[i] = (0,_model_transform_js__WEBPACK_IMPORTED_MODULE_4__/* .fromFitScale */ .G)(recent[i], transform);
+    return recent;
 }
 /** fitGaussian with the resolution moved to the fit scale around the fitted centre. */
 function fitWithFloor(values, settings) {
@@ -648,25 +840,27 @@ function fitWithFloor(values, settings) {
     const floor = (0,_resolution_floor_js__WEBPACK_IMPORTED_MODULE_8__/* .fitScaleFloor */ .c)(settings.resolution, settings.transform, raw.mean);
     return floor > 0 ? (0,_model_fit_js__WEBPACK_IMPORTED_MODULE_1__/* .fitGaussian */ .Dk)(values, settings.fit, floor) : raw;
 }
-/** z, density, relative density and tail; a zero spread gives 0 or 1 and no z. */
-function deviationFigures(x, fit, settings) {
+/** Sets z, density, relative density and tail on the result; a zero spread gives 0 or 1 and no z. */
+function addDeviationFigures(result, x, fit, settings) {
     const deviation = x - fit.mean;
     const predictive = settings.uncertainty === 'predictive' && fit.n >= 2;
     if (fit.sd === 0 || (predictive && fit.sampleSd === 0)) {
         const moved = deviation !== 0;
-        return { relativeDensity: moved ? 0 : 1, tail: moved ? 0 : 1 };
+        result.relativeDensity = moved ? 0 : 1;
+        result.tail = moved ? 0 : 1;
+        return;
     }
     const z = deviation / fit.sd;
-    const density = (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .gaussianDensity */ .QA)(x, fit.mean, fit.sd);
-    if (!predictive)
-        return { z, density, relativeDensity: (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .plugInRelativeDensity */ .YS)(x, fit.mean, fit.sd), tail: (0,_model_tails_js__WEBPACK_IMPORTED_MODULE_3__/* .normalTail */ .WI)(z, 'both') };
+    result.z = z;
+    result.density = (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .gaussianDensity */ .QA)(x, fit.mean, fit.sd);
+    if (!predictive) {
+        result.relativeDensity = (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .plugInRelativeDensity */ .YS)(x, fit.mean, fit.sd);
+        result.tail = (0,_model_tails_js__WEBPACK_IMPORTED_MODULE_3__/* .normalTail */ .WI)(z, 'both');
+        return;
+    }
     const t = deviation / (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .predictiveScale */ .Wn)(fit.sampleSd, fit.n);
-    return {
-        z,
-        density,
-        relativeDensity: (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .predictiveRelativeDensity */ .kr)(x, fit.mean, fit.sampleSd, fit.n),
-        tail: (0,_model_tails_js__WEBPACK_IMPORTED_MODULE_3__/* .studentTail */ .gq)(t, fit.n - 1, 'both'),
-    };
+    result.relativeDensity = (0,_model_density_js__WEBPACK_IMPORTED_MODULE_0__/* .predictiveRelativeDensity */ .kr)(x, fit.mean, fit.sampleSd, fit.n);
+    result.tail = (0,_model_tails_js__WEBPACK_IMPORTED_MODULE_3__/* .studentTail */ .gq)(t, fit.n - 1, 'both');
 }
 
 
@@ -694,7 +888,7 @@ function fitScaleFloor(resolution, transform, centre) {
 
 /***/ }),
 
-/***/ 33979:
+/***/ 3979:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -727,7 +921,7 @@ function worseSign(worse) {
 
 /***/ }),
 
-/***/ 20592:
+/***/ 592:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -735,7 +929,7 @@ function worseSign(worse) {
 /* harmony export */   f5: () => (/* binding */ beyondTolerance)
 /* harmony export */ });
 /* unused harmony export toleranceAmount */
-/* harmony import */ var _format_number_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(19616);
+/* harmony import */ var _format_number_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(9616);
 
 /**
  * Whether |value - centre| exceeds the tolerance: an amount in the metric's unit, or a percent
@@ -758,7 +952,7 @@ function describeTolerance(tolerance) {
 
 /***/ }),
 
-/***/ 20913:
+/***/ 913:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -768,18 +962,14 @@ function describeTolerance(tolerance) {
 /* harmony export */   kr: () => (/* binding */ predictiveRelativeDensity)
 /* harmony export */ });
 /* unused harmony export gaussianLogDensity */
-/* harmony import */ var _stdlib_stats_base_dists_normal_logpdf__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(80821);
-/* harmony import */ var _stdlib_stats_base_dists_normal_logpdf__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(_stdlib_stats_base_dists_normal_logpdf__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _stdlib_stats_base_dists_normal_pdf__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(49993);
-/* harmony import */ var _stdlib_stats_base_dists_normal_pdf__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(_stdlib_stats_base_dists_normal_pdf__WEBPACK_IMPORTED_MODULE_1__);
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(38250);
-
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _special_normal_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(2986);
 
 
 /** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */
 function checkSpread(sd) {
     if (!(sd >= 0) || !Number.isFinite(sd)) {
-        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .d(`a standard deviation must be a finite number, 0 or more, got ${sd}`);
+        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`a standard deviation must be a finite number, 0 or more, got ${sd}`);
     }
 }
 /**
@@ -790,7 +980,7 @@ function checkSpread(sd) {
  */
 function gaussianDensity(x, mean, sd) {
     checkSpread(sd);
-    return _stdlib_stats_base_dists_normal_pdf__WEBPACK_IMPORTED_MODULE_1___default()(x, mean, sd);
+    return (0,_special_normal_js__WEBPACK_IMPORTED_MODULE_1__/* .normalDensity */ .kC)(x, mean, sd);
 }
 /**
  * log p(x), exact where p(x) underflows to 0 (beyond about 38 sigma).
@@ -798,7 +988,7 @@ function gaussianDensity(x, mean, sd) {
  */
 function gaussianLogDensity(x, mean, sd) {
     checkSpread(sd);
-    return normalLogpdf(x, mean, sd);
+    return normalLogDensity(x, mean, sd);
 }
 /**
  * Relative density under the fitted Gaussian used as is ("plug-in"): p(x) / p(mean) =
@@ -833,7 +1023,7 @@ function predictiveScale(sampleSd, n) {
  */
 function predictiveRelativeDensity(x, mean, sampleSd, n) {
     if (!(n >= 2)) {
-        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .d(`the predictive distribution needs at least 2 runs, got ${n}`, {
+        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`the predictive distribution needs at least 2 runs, got ${n}`, {
             fix: 'raise `min-runs` to 2 or more, or use `uncertainty: plug-in`',
         });
     }
@@ -848,13 +1038,13 @@ function predictiveRelativeDensity(x, mean, sampleSd, n) {
 
 /***/ }),
 
-/***/ 97089:
+/***/ 7089:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   F: () => (/* binding */ adjustTails)
 /* harmony export */ });
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /**
  * Adjusted p-values for testing m metrics at once, returned in input order and capped at 1;
@@ -903,7 +1093,7 @@ function adjustTails(tails, method) {
 
 /***/ }),
 
-/***/ 95046:
+/***/ 5046:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -911,9 +1101,9 @@ function adjustTails(tails, method) {
 /* harmony export */   tF: () => (/* binding */ MAD_TO_SIGMA)
 /* harmony export */ });
 /* unused harmony export MEAN_AD_TO_SIGMA */
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-/* harmony import */ var _moments_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(88884);
-/* harmony import */ var _median_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(90071);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _moments_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(8884);
+/* harmony import */ var _median_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(71);
 
 
 
@@ -932,8 +1122,8 @@ const MEAN_AD_TO_SIGMA = Math.sqrt(Math.PI / 2);
  * The spread is never below `resolution` (the smallest meaningful step). It is 0 only for a
  * constant history (or a single run) with resolution 0; the relative densities treat a zero
  * spread as "any other value is infinitely unlikely" instead of returning NaN.
- * O(n) (robust: O(n log n)). Throws InputError on an empty input, a non-finite value or a
- * negative or non-finite resolution.
+ * O(n) (robust: O(n) expected, the medians by selection). Throws InputError on an empty input,
+ * a non-finite value or a negative or non-finite resolution.
  *
  * @example fitGaussian([9, 10, 11], 'mle') // { n: 3, mean: 10, sd: 0.8165, sampleSd: 1, ... }
  */
@@ -949,8 +1139,8 @@ function fitGaussian(values, method = 'mle', resolution = 0) {
     let spread;
     let sampleSpread;
     if (method === 'robust') {
-        centre = (0,_median_js__WEBPACK_IMPORTED_MODULE_2__/* .median */ .J)(values);
-        spread = MAD_TO_SIGMA * (0,_median_js__WEBPACK_IMPORTED_MODULE_2__/* .medianAbsoluteDeviation */ .h)(values);
+        centre = (0,_median_js__WEBPACK_IMPORTED_MODULE_2__/* .median */ .JZ)(values);
+        spread = MAD_TO_SIGMA * (0,_median_js__WEBPACK_IMPORTED_MODULE_2__/* .medianAbsoluteDeviation */ .hK)(values);
         if (spread === 0)
             spread = MEAN_AD_TO_SIGMA * meanAbsoluteDeviation(values, centre);
         sampleSpread = spread;
@@ -979,37 +1169,99 @@ function meanAbsoluteDeviation(values, centre) {
 
 /***/ }),
 
-/***/ 90071:
+/***/ 71:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   J: () => (/* binding */ median),
-/* harmony export */   h: () => (/* binding */ medianAbsoluteDeviation)
+/* harmony export */   JZ: () => (/* binding */ median),
+/* harmony export */   Te: () => (/* binding */ medianInPlace),
+/* harmony export */   hK: () => (/* binding */ medianAbsoluteDeviation)
 /* harmony export */ });
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
-/** A sorted copy, rejecting what has no median (the input is not reordered). */
-function sortedCopy(values) {
-    const n = values.length;
-    if (n === 0)
+/** Rejects what has no median: an empty set or a non-finite value (1-based position in the message). */
+function checkFinite(values) {
+    if (values.length === 0)
         throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('cannot take the median of an empty set of values');
-    for (let i = 0; i < n; i++) {
+    for (let i = 0; i < values.length; i++) {
         const x = values[i];
         if (!Number.isFinite(x))
             throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`value ${x} at position ${i + 1} is not a finite number`);
     }
-    // A Float64Array sorts numerically (a plain array would sort as strings).
-    return Float64Array.from(values).sort();
 }
 /**
- * Median of the values. O(n log n). Throws InputError on an empty input or a non-finite value.
+ * Moves the k-th smallest of buffer[0..length) to index k, smaller-or-equal values before it and
+ * larger-or-equal after (Hoare's FIND / quickselect, Hoare 1961, "Algorithm 65: Find"), with a
+ * median-of-three pivot so sorted and reversed inputs stay linear. O(length) expected.
+ * The values must be finite (no NaN: comparisons with NaN would not order).
+ */
+function selectInPlace(buffer, length, k) {
+    let lo = 0;
+    let hi = length - 1;
+    while (hi > lo) {
+        const mid = (lo + hi) >> 1;
+        // Median of three: order buffer[lo] <= buffer[mid] <= buffer[hi], pivot on the middle one.
+        if (buffer[mid] < buffer[lo])
+            swap(buffer, mid, lo);
+        if (buffer[hi] < buffer[lo])
+            swap(buffer, hi, lo);
+        if (buffer[hi] < buffer[mid])
+            swap(buffer, hi, mid);
+        const pivot = buffer[mid];
+        let i = lo;
+        let j = hi;
+        while (i <= j) {
+            while (buffer[i] < pivot)
+                i++;
+            while (buffer[j] > pivot)
+                j--;
+            if (i <= j) {
+                swap(buffer, i, j);
+                i++;
+                j--;
+            }
+        }
+        // Now [lo, j] <= pivot <= [i, hi], and any index strictly between j and i holds the pivot.
+        if (k <= j)
+            hi = j;
+        else if (k >= i)
+            lo = i;
+        else
+            break;
+    }
+    return buffer[k];
+}
+function swap(buffer, a, b) {
+    const t = buffer[a];
+    buffer[a] = buffer[b];
+    buffer[b] = t;
+}
+/**
+ * Median of buffer[0..length), reordering that part of the buffer (no copy). For the change-point
+ * detector, which reuses one scratch buffer per call. The values must be finite and length >= 1.
+ * O(length) expected (selection, not a sort): the same value a sort would give.
+ * @example medianInPlace(Float64Array.of(3, 1, 2, 10), 4) // 2.5
+ */
+function medianInPlace(buffer, length) {
+    const half = length >> 1;
+    const upper = selectInPlace(buffer, length, half);
+    if (length % 2 === 1)
+        return upper;
+    // Everything before `half` is <= the upper middle value; the lower middle is their largest.
+    let lower = buffer[0];
+    for (let i = 1; i < half; i++)
+        if (buffer[i] > lower)
+            lower = buffer[i];
+    return (lower + upper) / 2;
+}
+/**
+ * Median of the values. O(n) expected, by selection on a copy (the input is not reordered).
+ * Throws InputError on an empty input or a non-finite value.
  * @example median([3, 1, 2, 10]) // 2.5
  */
 function median(values) {
-    const sorted = sortedCopy(values);
-    const n = sorted.length;
-    const half = n >> 1;
-    return n % 2 === 1 ? sorted[half] : (sorted[half - 1] + sorted[half]) / 2;
+    checkFinite(values);
+    return medianInPlace(Float64Array.from(values), values.length);
 }
 /**
  * Median absolute deviation from the median (unscaled). Multiply by 1.4826 for a consistent
@@ -1018,18 +1270,20 @@ function median(values) {
  * @example medianAbsoluteDeviation([1, 2, 3, 4, 100]) // 1
  */
 function medianAbsoluteDeviation(values) {
-    const centre = median(values);
-    // A plain loop: Float64Array.from with a map function takes a slow generic path in V8.
-    const deviations = new Float64Array(values.length);
-    for (let i = 0; i < values.length; i++)
-        deviations[i] = Math.abs(values[i] - centre);
-    return median(deviations);
+    checkFinite(values);
+    const n = values.length;
+    const scratch = Float64Array.from(values);
+    const centre = medianInPlace(scratch, n);
+    // The median of |x - centre| does not depend on the order, so the reordered copy serves.
+    for (let i = 0; i < n; i++)
+        scratch[i] = Math.abs(scratch[i] - centre);
+    return medianInPlace(scratch, n);
 }
 
 
 /***/ }),
 
-/***/ 88884:
+/***/ 8884:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -1037,7 +1291,7 @@ function medianAbsoluteDeviation(values) {
 /* harmony export */   i2: () => (/* binding */ mean)
 /* harmony export */ });
 /* unused harmony export variance */
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /**
  * Mean and sum of squared deviations by the corrected two-pass algorithm (Chan, Golub & LeVeque,
@@ -1091,7 +1345,410 @@ function variance(values, divisor) {
 
 /***/ }),
 
-/***/ 60312:
+/***/ 916:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   RL: () => (/* binding */ regularizedBeta),
+/* harmony export */   rP: () => (/* binding */ betaPointFromOdds)
+/* harmony export */ });
+/* unused harmony export betaPointAt */
+/* harmony import */ var _log_gamma_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(2231);
+
+/**
+ * The point with odds w = y / x >= 0: x = 1 / (1 + w), y = w / (1 + w), ln x = -log1p(w),
+ * ln y = ln w - log1p(w) = -log1p(1 / w). A Student-t statistic has w = t^2 / nu, an F statistic w = d1 f / d2.
+ * @example betaPointFromOdds(1).x // 0.5
+ */
+function betaPointFromOdds(w) {
+    if (w === Infinity)
+        return { x: 0, y: 1, logX: -Infinity, logY: 0 };
+    const s = 1 + w;
+    // ln y = ln w - log1p(w) cancels for large w; -log1p(1/w) is the same without the cancellation.
+    const logY = w <= 1 ? Math.log(w) - Math.log1p(w) : -Math.log1p(1 / w);
+    return { x: 1 / s, y: w / s, logX: -Math.log1p(w), logY };
+}
+/**
+ * The point x itself (y = 1 - x, ln y = log1p(-x)), for callers that only have x.
+ * @example betaPointAt(0.25).y // 0.75
+ */
+function betaPointAt(x) {
+    return { x, y: 1 - x, logX: Math.log(x), logY: Math.log1p(-x) };
+}
+/**
+ * x^a y^b / B(a, b). With both a and b at least 10, Stirling's formula for the three Gammas
+ * folds the powers into a log1p(u) + b log1p(v) with u = (x (a + b) - a) / a and
+ * v = -(x (a + b) - a) / b, whose first-order terms cancel exactly (a u + b v = 0), so the sum is
+ * a log1pMinus(u) + b log1pMinus(v) (cf. DiDonato & Morris 1992, ACM TOMS 18, "BRCOMP"):
+ *   sqrt(a b / (2 pi (a + b))) exp(a log1pMinus(u) + b log1pMinus(v) + mu(a + b) - mu(a) - mu(b)).
+ * Otherwise exp(a ln x + b ln y - ln B(a, b)), every term of moderate size.
+ */
+function betaFront(a, b, p) {
+    if (a >= _log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .STIRLING_FROM */ .k0 && b >= _log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .STIRLING_FROM */ .k0) {
+        const s = a + b;
+        const excess = p.x * b - p.y * a; // x (a + b) - a
+        const exponent = powerExcess(a, excess / a, p.logX, s) +
+            powerExcess(b, -excess / b, p.logY, s) +
+            (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .stirlingCorrection */ .np)(s) -
+            (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .stirlingCorrection */ .np)(a) -
+            (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .stirlingCorrection */ .np)(b);
+        return Math.sqrt(((a / s) * b) / (2 * Math.PI)) * Math.exp(exponent);
+    }
+    return Math.exp(a * p.logX + b * p.logY - (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .logBeta */ .ln)(a, b));
+}
+/**
+ * a (log1p(u) - u) for u = x / x0 - 1, x0 = a / s: near x0 by log1pMinus; far below it
+ * (u <= -1/2, where 1 + u has lost digits) with log1p(u) = ln x - ln x0 from the exact ln x.
+ */
+function powerExcess(a, u, logX, s) {
+    if (u > -0.5)
+        return a * (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .log1pMinus */ ._g)(u);
+    return a * (logX + Math.log(s / a) - u);
+}
+const TINY = 1e-300;
+const TOLERANCE = 4 * Number.EPSILON;
+/**
+ * lambda = a - (a + b) x, from whichever of x and y is smaller so that a point near 1 (a Student-t
+ * near its centre with many degrees of freedom) keeps its digits: (a + b) y - b there.
+ */
+function betaLambda(a, b, p) {
+    return p.x <= p.y ? a - (a + b) * p.x : (a + b) * p.y - b;
+}
+/**
+ * The continued fraction of I_x(a, b) (A&S 26.5.8: I = x^a y^b / (a B(a, b)) / (1 + d1 / (1 + d2 / ...)),
+ * d_2m+1 = -(a + m)(a + b + m) x / ((a + 2m)(a + 2m + 1)), d_2m = m (b - m) x / ((a + 2m - 1)(a + 2m)))
+ * in its even contraction 1 / (beta_1 + alpha_1 / (beta_2 + alpha_2 / ...)), beta_1 = 1 + d1,
+ * beta_m+1 = 1 + d_2m + d_2m+1, alpha_m = -d_2m-1 d_2m, with the betas rewritten in
+ * lambda = a - (a + b) x so that no 1 - x cancels (as DiDonato & Morris 1992, ACM TOMS 18, "BFRAC"):
+ *   beta_1 = (1 + lambda) / (a + 1),
+ *   beta_m+1 = (a^2 (2m + 1) + a b (4m + 1) + 2m^2 (a + 2b) - a - b
+ *              + lambda (a^2 + a b + 2a m + 2m^2 - a - b)) / ((a + b)(a + 2m - 1)(a + 2m + 1)).
+ * Evaluated by the modified Lentz method (Numerical Recipes 3rd ed., 5.2); converges fast for
+ * x < (a + 1) / (a + b + 2), in O(sqrt(max(a, b))) steps at worst; the bound is far above that.
+ */
+function betaFraction(a, b, p) {
+    const x = p.x;
+    const lambda = betaLambda(a, b, p);
+    const s = a + b;
+    let f = (1 + lambda) / (a + 1);
+    if (Math.abs(f) < TINY)
+        f = TINY;
+    let c = f;
+    let d = 0;
+    const steps = 1000 + Math.ceil(50 * Math.sqrt(Math.max(a, b)));
+    for (let m = 1; m <= steps; m++) {
+        const am = a + 2 * m;
+        const alpha = ((a + m - 1) * (s + m - 1) * m * (b - m) * x * x) / ((am - 2) * (am - 1) * (am - 1) * am);
+        const beta = (a * a * (2 * m + 1) + a * b * (4 * m + 1) + 2 * m * m * (a + 2 * b) - a - b +
+            lambda * (a * a + a * b + 2 * a * m + 2 * m * m - a - b)) /
+            (s * (am - 1) * (am + 1));
+        d = beta + alpha * d;
+        if (Math.abs(d) < TINY)
+            d = TINY;
+        c = beta + alpha / c;
+        if (Math.abs(c) < TINY)
+            c = TINY;
+        d = 1 / d;
+        const delta = c * d;
+        f *= delta;
+        if (Math.abs(delta - 1) < TOLERANCE)
+            break;
+    }
+    return 1 / f;
+}
+/**
+ * The regularised incomplete beta function I_x(a, b) (upper = false) or its complement
+ * 1 - I_x(a, b) = I_y(b, a) (upper = true), for a, b > 0. The side below the mean
+ * (x <= (a + 1) / (a + b + 2), where the continued fraction converges) is computed directly as
+ * x^a y^b / (a B(a, b)) times the fraction, the other as 1 minus it; for a, b >= 1/2 (every
+ * t, chi-square and F law) that other side is at least ~0.08, so small results, far tails
+ * included, keep their relative accuracy (about 2e-13 against 50-digit references up to 1e6).
+ * NaN when a or b is not above 0.
+ * @example regularizedBeta(2, 3, betaPointAt(0.4), false) // 0.5248
+ */
+function regularizedBeta(a, b, p, upper) {
+    if (!(a > 0 && b > 0) || Number.isNaN(p.x) || Number.isNaN(p.y))
+        return Number.NaN;
+    if (p.x <= 0)
+        return upper ? 1 : 0;
+    if (p.y <= 0)
+        return upper ? 0 : 1;
+    if (p.x <= (a + 1) / (a + b + 2)) {
+        const lower = (betaFront(a, b, p) * betaFraction(a, b, p)) / a;
+        return Math.min(1, Math.max(0, upper ? 1 - lower : lower));
+    }
+    const q = { x: p.y, y: p.x, logX: p.logY, logY: p.logX };
+    const complement = (betaFront(b, a, q) * betaFraction(b, a, q)) / b;
+    return Math.min(1, Math.max(0, upper ? complement : 1 - complement));
+}
+
+
+/***/ }),
+
+/***/ 2231:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   SX: () => (/* binding */ logGamma),
+/* harmony export */   _g: () => (/* binding */ log1pMinus),
+/* harmony export */   k0: () => (/* binding */ STIRLING_FROM),
+/* harmony export */   ln: () => (/* binding */ logBeta),
+/* harmony export */   np: () => (/* binding */ stirlingCorrection)
+/* harmony export */ });
+/* unused harmony export logGammaShift */
+/**
+ * ln Gamma by Stirling's series with its Bernoulli-number corrections (A&S 6.1.40-41):
+ *   ln Gamma(x) = (x - 1/2) ln x - x + ln sqrt(2 pi) + mu(x),
+ *   mu(x) = 1/(12x) - 1/(360x^3) + 1/(1260x^5) - 1/(1680x^7) + 1/(1188x^9) - 691/(360360x^11) + 1/(156x^13),
+ * used from x = 10 up (the next term is below 3e-17 there) and below 10 through the recurrence
+ * Gamma(x) = Gamma(x + k) / (x (x + 1) ... (x + k - 1)). Absolute error a few 1e-15.
+ */
+const LN_SQRT_2PI = 0.91893853320467274178;
+/** Where Stirling's series is used as is. */
+const STIRLING_FROM = 10;
+/**
+ * The Stirling correction mu(x) = ln Gamma(x) - ((x - 1/2) ln x - x + ln sqrt(2 pi)), x >= 10
+ * (A&S 6.1.41; coefficients B_2k / (2k (2k - 1))).
+ * @example stirlingCorrection(10) // ≈ 0.0083305634
+ */
+function stirlingCorrection(x) {
+    const r = 1 / x;
+    const r2 = r * r;
+    return r * (1 / 12 + r2 * (-1 / 360 + r2 * (1 / 1260 + r2 * (-1 / 1680 + r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 / 156))))));
+}
+/**
+ * ln Gamma(x) for x > 0 (Stirling's series, recurrence below 10). NaN for x <= 0 or NaN.
+ * @example logGamma(0.5) // ≈ 0.5723649429247001 (ln sqrt(pi))
+ */
+function logGamma(x) {
+    if (!(x > 0))
+        return Number.NaN;
+    if (x >= STIRLING_FROM)
+        return (x - 0.5) * Math.log(x) - x + LN_SQRT_2PI + stirlingCorrection(x);
+    let product = 1;
+    let y = x;
+    while (y < STIRLING_FROM) {
+        product *= y;
+        y += 1;
+    }
+    return logGamma(y) - Math.log(product);
+}
+/**
+ * ln Gamma(x + s) - ln Gamma(x) for x >= 10 and s >= 0, without subtracting two large logs:
+ *   (x - 1/2) log1p(s / x) + s ln(x + s) - s + mu(x + s) - mu(x).
+ * @example logGammaShift(1e6, 0.5) // ≈ 0.5 ln 1e6 = 6.9077552789821
+ */
+function logGammaShift(x, s) {
+    return (x - 0.5) * Math.log1p(s / x) + s * Math.log(x + s) - s + stirlingCorrection(x + s) - stirlingCorrection(x);
+}
+/**
+ * ln B(a, b) = ln Gamma(a) + ln Gamma(b) - ln Gamma(a + b) for a, b > 0. When the larger argument
+ * is 10 or more, the two large terms are combined by logGammaShift (no cancellation).
+ * @example logBeta(0.5, 0.5) // ≈ 1.1447298858494002 (ln pi)
+ */
+function logBeta(a, b) {
+    const small = Math.min(a, b);
+    const large = Math.max(a, b);
+    if (large < STIRLING_FROM)
+        return logGamma(a) + logGamma(b) - logGamma(a + b);
+    return logGamma(small) - logGammaShift(large, small);
+}
+/**
+ * log1p(u) - u for u > -1, accurate near 0 where the two terms cancel: with t = u / (2 + u),
+ * log1p(u) = 2 atanh(t) = 2 (t + t^3/3 + t^5/5 + ...) and u - 2t = u t.
+ * @example log1pMinus(1e-10) // ≈ -5e-21
+ */
+function log1pMinus(u) {
+    if (!(Math.abs(u) < 0.5))
+        return Math.log1p(u) - u;
+    const t = u / (2 + u);
+    const t2 = t * t;
+    let power = t * t2;
+    let sum = 0;
+    for (let k = 3; k < 80; k += 2) {
+        const term = power / k;
+        sum += term;
+        if (Math.abs(term) <= 1e-17 * Math.abs(sum))
+            break;
+        power *= t2;
+    }
+    return 2 * sum - u * t;
+}
+
+
+/***/ }),
+
+/***/ 2986:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+
+// EXPORTS
+__webpack_require__.d(__webpack_exports__, {
+  kC: () => (/* binding */ normalDensity),
+  Hi: () => (/* binding */ normalLogCdf),
+  IL: () => (/* binding */ normalUpperTail)
+});
+
+// UNUSED EXPORTS: normalLogDensity
+
+;// CONCATENATED MODULE: ./src/model/special/erfc.ts
+/**
+ * The complementary error function by W. J. Cody's rational Chebyshev approximations ("Rational
+ * Chebyshev approximations for the error function", Math. Comp. 23 (1969) 631-637; the
+ * coefficients of his CALERF routine in netlib's SPECFUN, good to about 1e-18): three intervals,
+ * |x| <= 0.46875, up to 4, and beyond 4 (in 1/x^2). The exponential factor exp(-x^2) is taken
+ * in two exact pieces so that far tails keep their relative accuracy down to the underflow.
+ */
+// Cody's coefficients for erf(x) = x R(x^2), |x| <= 0.46875.
+const A = [3.1611237438705656, 113.86415415105016, 377.485237685302021, 3209.37758913846947, 0.185777706184603153];
+const B = [23.6012909523441209, 244.024637934444173, 1282.61652607737228, 2844.23683343917062];
+// exp(x^2) erfc(x) = R(x), 0.46875 < x <= 4.
+const C = [
+    0.564188496988670089, 8.88314979438837594, 66.1191906371416295, 298.635138197400131, 881.95222124176909,
+    1712.04761263407058, 2051.07837782607147, 1230.33935479799725, 2.15311535474403846e-8,
+];
+const D = [
+    15.7449261107098347, 117.693950891312499, 537.181101862009858, 1621.38957456669019, 3290.79923573345963,
+    4362.61909014324716, 3439.36767414372164, 1230.33935480374942,
+];
+// exp(x^2) erfc(x) = (1/sqrt(pi) - R(1/x^2) / x^2) / x, x > 4.
+const P = [
+    0.305326634961232344, 0.360344899949804439, 0.125781726111229246, 0.0160837851487422766,
+    6.58749161529837803e-4, 0.0163153871373020978,
+];
+const Q = [2.56852019228982242, 1.87295284992346725, 0.527905102951428412, 0.0605183413124413191, 2.33520497626869185e-3];
+const INV_SQRT_PI = 0.56418958354775628695;
+/** Where Cody's first interval (erf as a rational function of x^2) ends. */
+const ERF_SMALL_LIMIT = 0.46875;
+/** erf(x) for |x| <= ERF_SMALL_LIMIT (Cody's first interval). */
+function erfSmall(x) {
+    const z = x * x;
+    let num = A[4] * z;
+    let den = z;
+    for (let i = 0; i < 3; i++) {
+        num = (num + A[i]) * z;
+        den = (den + B[i]) * z;
+    }
+    return (x * (num + A[3])) / (den + B[3]);
+}
+/**
+ * exp(y^2) erfc(y) for y > ERF_SMALL_LIMIT (Cody's second and third intervals); about
+ * 1 / (y sqrt(pi)) for large y, 0 at Infinity.
+ */
+function erfcScaledTail(y) {
+    if (y <= 4) {
+        let num = C[8] * y;
+        let den = y;
+        for (let i = 0; i < 7; i++) {
+            num = (num + C[i]) * y;
+            den = (den + D[i]) * y;
+        }
+        return (num + C[7]) / (den + D[7]);
+    }
+    const z = 1 / (y * y);
+    let num = P[5] * z;
+    let den = z;
+    for (let i = 0; i < 4; i++) {
+        num = (num + P[i]) * z;
+        den = (den + Q[i]) * z;
+    }
+    return (INV_SQRT_PI - (z * (num + P[4])) / (den + Q[4])) / y;
+}
+/**
+ * exp(-s y^2) for y >= 0 and s = 1 or 1/2, as Cody takes it: y = h + r with h a multiple of
+ * 1/16, so h^2 is exact and only the small exp(-s (y - h)(y + h)) carries rounding. 0 beyond 40.
+ */
+function expNegSquare(y, s) {
+    if (y > 40)
+        return 0;
+    const h = Math.trunc(y * 16) / 16;
+    return Math.exp(-s * h * h) * Math.exp(-s * (y - h) * (y + h));
+}
+/**
+ * Complementary error function erfc(x) = (2 / sqrt(pi)) integral_x^inf exp(-t^2) dt, with full
+ * relative accuracy for large x (W. J. Cody 1969). NaN in, NaN out.
+ * @example erfc(1) // 0.15729920705028513
+ */
+function erfc(x) {
+    const y = Math.abs(x);
+    if (!(y > ERF_SMALL_LIMIT))
+        return 1 - erfSmall(x); // also NaN
+    const upper = erfcScaledTail(y) * expNegSquare(y, 1);
+    return x < 0 ? 2 - upper : upper;
+}
+/**
+ * Scaled complementary error function exp(x^2) erfc(x) for x >= 0 (finite where erfc underflows:
+ * about 1 / (x sqrt(pi)) for large x). Throws RangeError for negative x, where it grows as
+ * 2 exp(x^2) and nothing here needs it.
+ * @example erfcScaled(30) // ≈ 0.0187958888
+ */
+function erfcScaled(x) {
+    if (x < 0)
+        throw new RangeError(`erfcScaled takes x >= 0, got ${x}`);
+    if (!(x > ERF_SMALL_LIMIT))
+        return Math.exp(x * x) * (1 - erfSmall(x));
+    return erfcScaledTail(x);
+}
+
+;// CONCATENATED MODULE: ./src/model/special/normal.ts
+
+/** ln sqrt(2 pi). */
+const LN_SQRT_2PI = 0.91893853320467274178;
+const INV_SQRT_2PI = 0.39894228040143267794;
+/**
+ * Standard normal upper tail Q(z) = P(Z > z) = erfc(z / sqrt 2) / 2, computed directly (never as
+ * 1 - cdf) with Cody's erfc; exp(-z^2/2) is split as in erfc so the
+ * relative accuracy holds out to z = 37 and beyond, until the result underflows. NaN in, NaN out.
+ * @example normalUpperTail(1.96) // ≈ 0.0249979
+ */
+function normalUpperTail(z) {
+    const y = Math.abs(z) * Math.SQRT1_2;
+    if (!(y > ERF_SMALL_LIMIT))
+        return 0.5 - 0.5 * erfSmall(z * Math.SQRT1_2); // also NaN
+    const far = 0.5 * erfcScaledTail(y) * expNegSquare(Math.abs(z), 0.5);
+    return z < 0 ? 1 - far : far;
+}
+/**
+ * ln P(Z < z) for a standard normal, finite far below where P underflows: for z < -1 it is
+ * ln(erfcx(-z / sqrt 2) / 2) - z^2 / 2 with erfcx the scaled erfc, otherwise log1p(-Q(z)).
+ * -Infinity at -Infinity, 0 at +Infinity, NaN for NaN.
+ * @example normalLogCdf(-40) // ≈ -804.608
+ */
+function normalLogCdf(z) {
+    if (z < -1) {
+        if (z === -Infinity)
+            return -Infinity;
+        return Math.log(0.5 * erfcScaledTail(-z * Math.SQRT1_2)) - 0.5 * z * z;
+    }
+    return Math.log1p(-normalUpperTail(z));
+}
+/**
+ * Normal density exp(-(x - mean)^2 / (2 sd^2)) / (sd sqrt(2 pi)). sd = 0 is the degenerate
+ * distribution (Infinity at the mean, 0 elsewhere). The caller checks sd >= 0; NaN in, NaN out.
+ * @example normalDensity(1, 0, 1) // 0.24197072451914337
+ */
+function normalDensity(x, mean, sd) {
+    if (sd === 0)
+        return x === mean ? Infinity : Number.isNaN(x - mean) ? Number.NaN : 0;
+    const z = Math.abs((x - mean) / sd);
+    return (INV_SQRT_2PI / sd) * expNegSquare(z, 0.5);
+}
+/**
+ * ln of normalDensity: -(x - mean)^2 / (2 sd^2) - ln sd - ln sqrt(2 pi), finite where the density
+ * underflows. sd = 0: Infinity at the mean, -Infinity elsewhere. NaN in, NaN out.
+ * @example normalLogDensity(0, 0, 1) // -0.9189385332046727
+ */
+function normalLogDensity(x, mean, sd) {
+    if (sd === 0)
+        return x === mean ? Infinity : Number.isNaN(x - mean) ? Number.NaN : -Infinity;
+    const z = (x - mean) / sd;
+    return -0.5 * z * z - Math.log(sd) - LN_SQRT_2PI;
+}
+
+
+/***/ }),
+
+/***/ 7963:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -1103,14 +1760,40 @@ __webpack_require__.d(__webpack_exports__, {
   gq: () => (/* binding */ studentTail)
 });
 
-// EXTERNAL MODULE: ./node_modules/@stdlib/stats-base-dists-normal-cdf/lib/index.js
-var lib = __webpack_require__(72484);
-var lib_default = /*#__PURE__*/__webpack_require__.n(lib);
-// EXTERNAL MODULE: ./node_modules/@stdlib/stats-base-dists-t-cdf/lib/index.js
-var stats_base_dists_t_cdf_lib = __webpack_require__(86021);
-var stats_base_dists_t_cdf_lib_default = /*#__PURE__*/__webpack_require__.n(stats_base_dists_t_cdf_lib);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
+// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
+var normal = __webpack_require__(2986);
+// EXTERNAL MODULE: ./src/model/special/incomplete-beta.ts
+var incomplete_beta = __webpack_require__(916);
+;// CONCATENATED MODULE: ./src/model/special/student-t.ts
+
+
+/**
+ * Two-sided tail P(|T| > |t|) of Student's t with nu > 0 degrees of freedom:
+ * I_x(nu/2, 1/2) with x = nu / (nu + t^2) (A&S 26.7.1 and 26.5.27), from the odds t^2 / nu so that
+ * neither x nor 1 - x is formed by subtraction. nu = Infinity is the normal limit.
+ * NaN for NaN input or nu <= 0.
+ * @example studentTwoSidedTail(2.228, 10) // ≈ 0.05
+ */
+function studentTwoSidedTail(t, nu) {
+    if (Number.isNaN(t) || !(nu > 0))
+        return Number.NaN;
+    if (nu === Infinity)
+        return 2 * (0,normal/* normalUpperTail */.IL)(Math.abs(t));
+    if (t === 0)
+        return 1;
+    return (0,incomplete_beta/* regularizedBeta */.RL)(nu / 2, 0.5, (0,incomplete_beta/* betaPointFromOdds */.rP)((t * t) / nu), false);
+}
+/**
+ * Upper tail P(T > t): half the two-sided tail for t >= 0, one minus half of it below 0.
+ * @example studentUpperTail(1.812, 10) // ≈ 0.05
+ */
+function studentUpperTail(t, nu) {
+    const half = studentTwoSidedTail(t, nu) / 2;
+    return t >= 0 ? half : 1 - half;
+}
+
 ;// CONCATENATED MODULE: ./src/model/student-tail-series.ts
 /**
  * The two-sided tail P(|T| > |t|) of Student's t with a whole number nu of degrees of freedom, by
@@ -1122,7 +1805,7 @@ var input_error = __webpack_require__(38250);
  * gate takes one tail per metric, so on many metrics this is most of the tail's cost.
  * 1 - A cancels when the tail is small, so the series answers only down to SERIES_TAIL_FLOOR
  * (where at most ~12 of 16 digits remain); below it, and for a fractional, huge or infinite
- * input, it returns undefined and the caller uses the incomplete beta (stdlib's t CDF).
+ * input, it returns undefined and the caller uses the incomplete beta (special/student-t.ts).
  *
  * @example seriesTwoSidedTail(2.228, 10) // ≈ 0.05 (standard t table, nu = 10)
  */
@@ -1167,30 +1850,29 @@ const SERIES_TAIL_FLOOR = 1e-4;
 const SERIES_MAX_NU = 400;
 
 ;// CONCATENATED MODULE: ./src/model/tails.ts
-// One stdlib function per package: the namespace packages load every function of the
-// distribution at start-up (about half of the stdlib load time; see test/bench/README.md).
 
 
 
 
 /**
  * Tail probability of a standard normal z: P(Z > z), P(Z < z) or P(|Z| > |z|).
- * Uses the complementary CDF directly (no 1 - cdf cancellation in the far tail).
+ * Uses the upper tail erfc(z / sqrt 2) / 2 directly (no 1 - cdf cancellation in the far tail).
  * @example normalTail(1.96, 'both') // ≈ 0.04999579
  */
 function normalTail(z, side) {
     if (Number.isNaN(z))
         throw new input_error/* InputError */.d('a tail probability needs a number, got NaN');
     if (side === 'upper')
-        return lib_default()(-z, 0, 1);
+        return (0,normal/* normalUpperTail */.IL)(z);
     if (side === 'lower')
-        return lib_default()(z, 0, 1);
-    return 2 * lib_default()(-Math.abs(z), 0, 1);
+        return (0,normal/* normalUpperTail */.IL)(-z);
+    return 2 * (0,normal/* normalUpperTail */.IL)(Math.abs(z));
 }
 /**
  * Tail probability of a Student-t statistic with nu degrees of freedom, sides as normalTail.
  * Whole nu and a tail not too small take the finite series (seriesTwoSidedTail, A&S 26.7.3-4);
- * the rest stdlib's incomplete-beta CDF, which keeps full precision far out in the tail.
+ * the rest the incomplete beta I_x(nu/2, 1/2), x = nu / (nu + t^2), which keeps full relative
+ * precision far out in the tail.
  * @example studentTail(2.228, 10, 'both') // ≈ 0.05 (standard t table, nu = 10)
  */
 function studentTail(t, nu, side) {
@@ -1207,10 +1889,10 @@ function studentTail(t, nu, side) {
         return far ? both / 2 : 1 - both / 2;
     }
     if (side === 'upper')
-        return stats_base_dists_t_cdf_lib_default()(-t, nu);
+        return studentUpperTail(t, nu);
     if (side === 'lower')
-        return stats_base_dists_t_cdf_lib_default()(t, nu);
-    return 2 * stats_base_dists_t_cdf_lib_default()(-Math.abs(t), nu);
+        return studentUpperTail(-t, nu);
+    return studentTwoSidedTail(t, nu);
 }
 /** A cutoff is a relative density: a number in (0, 1]. */
 function checkCutoff(cutoff) {
@@ -1248,7 +1930,7 @@ function cutoffLevel(cutoff) {
 /* harmony export */   G: () => (/* binding */ fromFitScale),
 /* harmony export */   P: () => (/* binding */ toFitScale)
 /* harmony export */ });
-/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /**
  * The scale a metric is fitted on. `log` suits right-skewed timings and sizes: a multiplicative
@@ -1278,7 +1960,7 @@ function fromFitScale(value, transform) {
 
 /***/ }),
 
-/***/ 60023:
+/***/ 23:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -1316,7 +1998,7 @@ function cleanText(s, max = MAX_SHOWN_LENGTH) {
 
 /***/ }),
 
-/***/ 12011:
+/***/ 2011:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {

@@ -2,7 +2,7 @@ export const id = 712;
 export const ids = [712];
 export const modules = {
 
-/***/ 40712:
+/***/ 712:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 

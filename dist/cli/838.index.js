@@ -2,7 +2,7 @@ export const id = 838;
 export const ids = [838];
 export const modules = {
 
-/***/ 57336:
+/***/ 7336:
 /***/ ((module) => {
 
 let p = process || {}, argv = p.argv || [], env = p.env || {}
@@ -84,7 +84,7 @@ module.exports.createColors = createColors
 
 /***/ }),
 
-/***/ 94838:
+/***/ 4838:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -97,8 +97,8 @@ __webpack_require__.d(__webpack_exports__, {
   verdictExitCode: () => (/* binding */ verdictExitCode)
 });
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 12 modules
-var gate = __webpack_require__(71178);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 16 modules
+var gate = __webpack_require__(8129);
 ;// CONCATENATED MODULE: ./src/report/json.ts
 /** JSON has no NaN or Infinity; a number that is not finite becomes null, never a string. */
 const num = (x) => (x !== undefined && Number.isFinite(x) ? x : null);
@@ -187,11 +187,11 @@ function renderJson(report) {
 }
 
 // EXTERNAL MODULE: ./src/report/cells.ts
-var report_cells = __webpack_require__(10571);
+var report_cells = __webpack_require__(571);
 // EXTERNAL MODULE: ./src/report/escape.ts
-var report_escape = __webpack_require__(14031);
+var report_escape = __webpack_require__(4031);
 // EXTERNAL MODULE: ./src/report/format.ts
-var format = __webpack_require__(12011);
+var format = __webpack_require__(2011);
 ;// CONCATENATED MODULE: ./src/report/marker.ts
 /**
  * The hidden marker that lets the action find its own PR comment for a series and update it in
@@ -219,9 +219,9 @@ function markerLine(marker) {
 }
 
 // EXTERNAL MODULE: ./src/report/sparkline.ts
-var sparkline = __webpack_require__(29833);
+var sparkline = __webpack_require__(9833);
 // EXTERNAL MODULE: ./src/report/status.ts
-var report_status = __webpack_require__(16934);
+var report_status = __webpack_require__(6934);
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
 
 
@@ -321,10 +321,10 @@ function renderMarkdown(report, options = {}) {
 }
 
 // EXTERNAL MODULE: ./node_modules/picocolors/picocolors.js
-var picocolors = __webpack_require__(57336);
+var picocolors = __webpack_require__(7336);
 var picocolors_default = /*#__PURE__*/__webpack_require__.n(picocolors);
 // EXTERNAL MODULE: ./src/report/clean.ts
-var clean = __webpack_require__(60023);
+var clean = __webpack_require__(23);
 ;// CONCATENATED MODULE: ./src/report/text.ts
 
 
@@ -333,7 +333,8 @@ var clean = __webpack_require__(60023);
 
 /** Names are capped shorter in a terminal table than elsewhere, so a row fits a wide terminal. */
 const TEXT_NAME_MAX = 80;
-const JUDGED = new Set(['regressed', 'improved', 'ok']);
+/** The statuses of the table, in statusRank order. */
+const JUDGED = ['regressed', 'improved', 'ok'];
 const LISTED = ['missing', 'learning', 'new', 'ignored'];
 function paint(c, s, text) {
     if (s === 'regressed')
@@ -346,15 +347,25 @@ function paint(c, s, text) {
         return text;
     return c.dim(text);
 }
-function padEnd(s, width) {
-    return s + ' '.repeat(Math.max(0, width - Array.from(s).length));
+// Printable ASCII only: such a name is what cleanText would return (within the cap), and its
+// width is its length. One native regular-expression test per cell costs less than a loop over
+// its characters in a process that runs the report once, before the loop could be optimised.
+const PLAIN = /^[\u0020-\u007E]*$/;
+const SURROGATE = /[\uD800-\uDFFF]/;
+/** cleanText, skipping its two replacements for a printable-ASCII name within the cap. */
+function text_clean(s, max) {
+    return s.length <= max && PLAIN.test(s) ? s : (0,clean/* cleanText */.X)(s, max);
+}
+/** Width in code points (Array.from(s).length), building the array only when a pair can occur. */
+function codePoints(s) {
+    return SURROGATE.test(s) ? Array.from(s).length : s.length;
 }
 function text_groupLine(g) {
     const top = [...g.members]
         .sort((a, b) => b.share - a.share)
         .slice(0, 3)
-        .map((m) => `${(0,clean/* cleanText */.X)(m.name, TEXT_NAME_MAX)} (${Math.round(m.share * 100)}%, own ${(0,format/* formatSigma */.Hx)(m.ownZ)})`);
-    return `group ${(0,clean/* cleanText */.X)(g.name, TEXT_NAME_MAX)}: ${g.status} — common move ${(0,format/* formatSigma */.Hx)(g.common.z)} (${g.common.status}); main contributors: ${top.join(', ') || 'none'}`;
+        .map((m) => `${text_clean(m.name, TEXT_NAME_MAX)} (${Math.round(m.share * 100)}%, own ${(0,format/* formatSigma */.Hx)(m.ownZ)})`);
+    return `group ${text_clean(g.name, TEXT_NAME_MAX)}: ${g.status} — common move ${(0,format/* formatSigma */.Hx)(g.common.z)} (${g.common.status}); main contributors: ${top.join(', ') || 'none'}`;
 }
 /**
  * The terminal report: a headline (verdict and counts), a table of judged metrics (regressed and
@@ -368,60 +379,88 @@ function renderText(report, options) {
     const c = picocolors_default().createColors(options.color);
     const lines = [];
     const verdictWord = report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
-    lines.push(`Bellgate — series "${(0,clean/* cleanText */.X)(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
+    lines.push(`Bellgate — series "${text_clean(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
     lines.push(`${report_status/* VERDICT_HEADLINE */.pB[report.verdict]}; ${(0,report_status/* statusCounts */.rc)(report.metrics.map((m) => m.status)) || 'no metrics'}.`);
-    const judged = report.metrics
-        .filter((m) => JUDGED.has(m.status))
-        .sort((a, b) => (0,report_status/* statusRank */.Tx)(a.status) - (0,report_status/* statusRank */.Tx)(b.status));
+    // Regressed, then improved, then ok, each in report order (a stable sort by statusRank, in one pass).
+    const byStatus = new Map(JUDGED.map((status) => [status, []]));
+    for (const m of report.metrics)
+        byStatus.get(m.status)?.push(m);
+    const judged = [...byStatus.values()].flat();
     if (judged.length > 0) {
         const head = ['status', 'metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density vs cutoff'];
-        const rows = judged.map((m) => {
-            const cells = (0,report_cells/* metricCells */.G)(m, m.unit === undefined ? undefined : (0,clean/* cleanText */.X)(m.unit, 20));
-            return [`${report_status/* STATUS_GLYPH */.id[m.status]} ${m.status}`, (0,clean/* cleanText */.X)(m.name, TEXT_NAME_MAX), cells.value, cells.baseline, cells.change, cells.sigma, cells.density];
+        const columns = head.length;
+        // Every cell and its width once, flat (row-major); the widths pad the columns and the cells.
+        const cells = new Array(judged.length * columns);
+        const cellWidths = new Int32Array(judged.length * columns);
+        const widths = head.map((h) => h.length);
+        judged.forEach((m, row) => {
+            const shown = (0,report_cells/* metricCells */.G)(m, m.unit === undefined ? undefined : text_clean(m.unit, 20));
+            const at = row * columns;
+            cells[at] = `${report_status/* STATUS_GLYPH */.id[m.status]} ${m.status}`;
+            cells[at + 1] = text_clean(m.name, TEXT_NAME_MAX);
+            cells[at + 2] = shown.value;
+            cells[at + 3] = shown.baseline;
+            cells[at + 4] = shown.change;
+            cells[at + 5] = shown.sigma;
+            cells[at + 6] = shown.density;
+            for (let i = 0; i < columns; i++) {
+                const width = codePoints(cells[at + i]);
+                cellWidths[at + i] = width;
+                if (width > widths[i])
+                    widths[i] = width;
+            }
         });
-        const widths = head.map((h, i) => Math.max(h.length, ...rows.map((r) => Array.from(r[i] ?? '').length)));
         lines.push('');
-        lines.push(c.bold(head.map((h, i) => padEnd(h, widths[i] ?? 0)).join('  ').trimEnd()));
-        judged.forEach((m, k) => {
-            const row = rows[k] ?? [];
-            const text = row.map((cell, i) => padEnd(cell, widths[i] ?? 0)).join('  ').trimEnd();
-            lines.push(paint(c, m.status, text));
+        lines.push(c.bold(head.map((h, i) => h + ' '.repeat(widths[i] - h.length)).join('  ').trimEnd()));
+        const parts = new Array(columns);
+        judged.forEach((m, row) => {
+            const at = row * columns;
+            for (let i = 0; i < columns; i++)
+                parts[i] = cells[at + i] + ' '.repeat(widths[i] - cellWidths[at + i]);
+            lines.push(paint(c, m.status, parts.join('  ').trimEnd()));
             if (m.status !== 'ok')
-                lines.push(`    ${(0,clean/* cleanText */.X)(m.reason, 400)}`);
+                lines.push(`    ${text_clean(m.reason, 400)}`);
         });
     }
     if (report.groups.length > 0)
         lines.push('');
     for (const g of report.groups)
         lines.push(paint(c, g.status, text_groupLine(g)));
-    const listed = LISTED.map((s) => [s, report.metrics.filter((m) => m.status === s)]).filter(([, ms]) => ms.length > 0);
-    if (listed.length > 0)
-        lines.push('');
-    for (const [s, ms] of listed)
-        lines.push(paint(c, s, `${report_status/* STATUS_GLYPH */.id[s]} ${s} (${ms.length}): ${ms.map((m) => (0,clean/* cleanText */.X)(m.name, TEXT_NAME_MAX)).join(', ')}`));
+    const listed = new Map(LISTED.map((status) => [status, []]));
+    for (const m of report.metrics)
+        listed.get(m.status)?.push(text_clean(m.name, TEXT_NAME_MAX));
+    let first = true;
+    for (const [s, names] of listed) {
+        if (names.length === 0)
+            continue;
+        if (first)
+            lines.push('');
+        first = false;
+        lines.push(paint(c, s, `${report_status/* STATUS_GLYPH */.id[s]} ${s} (${names.length}): ${names.join(', ')}`));
+    }
     return lines.join('\n') + '\n';
 }
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/cli/exit-codes.ts
-var exit_codes = __webpack_require__(28551);
+var exit_codes = __webpack_require__(8551);
 // EXTERNAL MODULE: ./src/cli/load-config.ts
-var load_config = __webpack_require__(86783);
+var load_config = __webpack_require__(6783);
 // EXTERNAL MODULE: ./src/cli/load-run.ts + 8 modules
-var load_run = __webpack_require__(35946);
-// EXTERNAL MODULE: ./src/cli/open-history.ts + 2 modules
-var open_history = __webpack_require__(14695);
+var load_run = __webpack_require__(5946);
+// EXTERNAL MODULE: ./src/cli/open-history.ts + 3 modules
+var open_history = __webpack_require__(6952);
 // EXTERNAL MODULE: ./src/cli/paths.ts
-var paths = __webpack_require__(45450);
+var paths = __webpack_require__(5450);
 // EXTERNAL MODULE: ./src/cli/record-run.ts
-var record_run = __webpack_require__(15881);
+var record_run = __webpack_require__(5881);
 // EXTERNAL MODULE: ./src/cli/run-info.ts
-var run_info = __webpack_require__(95795);
+var run_info = __webpack_require__(5795);
 // EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __webpack_require__(51455);
+var promises_ = __webpack_require__(1455);
 // EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __webpack_require__(76760);
+var external_node_path_ = __webpack_require__(6760);
 ;// CONCATENATED MODULE: ./src/cli/write-reports.ts
 
 
@@ -456,7 +495,7 @@ function ensureNewline(s) {
 }
 
 // EXTERNAL MODULE: ./src/cli/options.ts
-var options = __webpack_require__(60776);
+var options = __webpack_require__(776);
 ;// CONCATENATED MODULE: ./src/cli/check-flow.ts
 
 
@@ -520,13 +559,13 @@ function check_flow_ensureNewline(s) {
 
 /***/ }),
 
-/***/ 15881:
+/***/ 5881:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   v: () => (/* binding */ recordRun)
 /* harmony export */ });
-/* harmony import */ var _history_merge_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(57822);
+/* harmony import */ var _history_merge_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(7822);
 
 /**
  * Appends one run to the history (a run with the same id is replaced), trims to the newest `keep`
@@ -543,13 +582,13 @@ async function recordRun(store, history, info, run, keep) {
 
 /***/ }),
 
-/***/ 95795:
+/***/ 5795:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   g: () => (/* binding */ runInfoFrom)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /** ISO-8601 date-time with a zone, e.g. 2026-05-04T10:20:30Z or 2026-05-04T10:20:30.5+02:00. */
 const ISO_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d{2})$/;
@@ -597,14 +636,14 @@ function runInfoFrom(ctx, options) {
 
 /***/ }),
 
-/***/ 10571:
+/***/ 571:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   G: () => (/* binding */ metricCells)
 /* harmony export */ });
 /* unused harmony export formatBaseline */
-/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(12011);
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(2011);
 
 /**
  * "10.1 ± 0.4 ms (n=60)". On the log scale the fitted centre is shown as the geometric mean
@@ -636,14 +675,14 @@ function metricCells(m, unit) {
 
 /***/ }),
 
-/***/ 14031:
+/***/ 4031:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   F: () => (/* binding */ escapeMarkdown),
 /* harmony export */   Z: () => (/* binding */ escapeHtml)
 /* harmony export */ });
-/* harmony import */ var _clean_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(60023);
+/* harmony import */ var _clean_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(23);
 
 /** Zero-width space: breaks GitHub's @mention and #123 autolinks while reading the same. */
 const ZWSP = '\u200B';
@@ -688,7 +727,7 @@ function escapeHtml(s, max = Number.POSITIVE_INFINITY) {
 
 /***/ }),
 
-/***/ 29833:
+/***/ 9833:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {

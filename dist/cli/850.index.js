@@ -2,7 +2,7 @@ export const id = 850;
 export const ids = [850];
 export const modules = {
 
-/***/ 25602:
+/***/ 5602:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 
@@ -4038,7 +4038,7 @@ function divergingSqrt() {
 
 /***/ }),
 
-/***/ 76879:
+/***/ 6879:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 

@@ -2,18 +2,18 @@ export const id = 881;
 export const ids = [881];
 export const modules = {
 
-/***/ 23881:
+/***/ 3881:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 __webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   readCsvMetrics: () => (/* binding */ readCsvMetrics)
 /* harmony export */ });
-/* harmony import */ var csv_parse_sync__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(40712);
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(38250);
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(56497);
-/* harmony import */ var _numbers_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(52671);
-/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(17829);
+/* harmony import */ var csv_parse_sync__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(712);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(8250);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(6497);
+/* harmony import */ var _numbers_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(2671);
+/* harmony import */ var _reading_sink_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(7829);
 
 
 
@@ -113,7 +113,7 @@ function splitUnit(cell) {
 
 /***/ }),
 
-/***/ 52671:
+/***/ 2671:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -121,7 +121,7 @@ function splitUnit(cell) {
 /* harmony export */   xv: () => (/* binding */ truncate)
 /* harmony export */ });
 /* unused harmony export nonFinite */
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 // A plain decimal number: optional sign, digits with an optional fraction, optional exponent.
 // Stricter than Number(): no hex, no "", no surrounding spaces, no "Infinity".
@@ -163,15 +163,15 @@ function truncate(text, max = 60) {
 
 /***/ }),
 
-/***/ 17829:
+/***/ 7829:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   I: () => (/* binding */ ReadingSink)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
-/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(56497);
-/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(85585);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
+/* harmony import */ var _limits_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(6497);
+/* harmony import */ var _names_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(5585);
 
 
 

@@ -2,13 +2,13 @@ export const id = 893;
 export const ids = [893];
 export const modules = {
 
-/***/ 75824:
+/***/ 5824:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   iI: () => (/* binding */ XMLValidator)
 /* harmony export */ });
-/* harmony import */ var _validator_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(61176);
+/* harmony import */ var _validator_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(1176);
 
 
 
@@ -22,7 +22,7 @@ const XMLValidator = {
 
 /***/ }),
 
-/***/ 90984:
+/***/ 984:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -97,13 +97,13 @@ const criticalProperties = ["__proto__", "constructor", "prototype"];
 
 /***/ }),
 
-/***/ 61176:
+/***/ 1176:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   t: () => (/* binding */ validate)
 /* harmony export */ });
-/* harmony import */ var _util_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(90984);
+/* harmony import */ var _util_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(984);
 
 
 
@@ -624,7 +624,7 @@ function getPositionFromMatch(match) {
 
 /***/ }),
 
-/***/ 69658:
+/***/ 9658:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
 
@@ -634,7 +634,7 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./node_modules/fast-xml-parser/src/util.js
-var util = __webpack_require__(90984);
+var util = __webpack_require__(984);
 ;// CONCATENATED MODULE: ./node_modules/fast-xml-parser/src/xmlparser/OptionsBuilder.js
 
 
@@ -7263,7 +7263,7 @@ function isLeafTag(obj, options) {
   return false;
 }
 // EXTERNAL MODULE: ./node_modules/fast-xml-parser/src/validator.js
-var validator = __webpack_require__(61176);
+var validator = __webpack_require__(1176);
 ;// CONCATENATED MODULE: ./node_modules/fast-xml-parser/src/xmlparser/XMLParser.js
 /* global Uint8Array */
 

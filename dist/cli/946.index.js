@@ -2,7 +2,7 @@ export const id = 946;
 export const ids = [946];
 export const modules = {
 
-/***/ 35946:
+/***/ 5946:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -14,18 +14,16 @@ __webpack_require__.d(__webpack_exports__, {
 // UNUSED EXPORTS: parsePrefixes
 
 // EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __webpack_require__(51455);
+var promises_ = __webpack_require__(1455);
 // EXTERNAL MODULE: external "node:path"
-var external_node_path_ = __webpack_require__(76760);
+var external_node_path_ = __webpack_require__(6760);
 var external_node_path_default = /*#__PURE__*/__webpack_require__.n(external_node_path_);
-// EXTERNAL MODULE: ./node_modules/tinyglobby/dist/index.mjs + 1 modules
-var dist = __webpack_require__(73382);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/model/moments.ts
-var moments = __webpack_require__(88884);
+var moments = __webpack_require__(8884);
 // EXTERNAL MODULE: ./src/model/median.ts
-var median = __webpack_require__(90071);
+var median = __webpack_require__(71);
 ;// CONCATENATED MODULE: ./src/inputs/aggregate.ts
 
 
@@ -47,7 +45,7 @@ function aggregateSamples(values, kind) {
         case 'max':
             return values.reduce((a, b) => Math.max(a, b));
         default:
-            return (0,median/* median */.J)(values);
+            return (0,median/* median */.JZ)(values);
     }
 }
 
@@ -174,9 +172,9 @@ function converted(name, value, unit, where, seen) {
 }
 
 // EXTERNAL MODULE: ./src/inputs/limits.ts
-var inputs_limits = __webpack_require__(56497);
+var inputs_limits = __webpack_require__(6497);
 // EXTERNAL MODULE: ./src/inputs/formats.ts
-var formats = __webpack_require__(77713);
+var formats = __webpack_require__(7713);
 ;// CONCATENATED MODULE: ./src/inputs/detect.ts
 
 
@@ -305,12 +303,12 @@ function runReader(reader, chosen, body, file, limits) {
 // Each reader (and its parser library: csv-parse, fast-xml-parser) loads only when a file of that
 // format turns up, which keeps them out of the start-up of a run that reads plain JSON.
 const LOADERS = {
-    json: async () => (await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(51)]).then(__webpack_require__.bind(__webpack_require__, 73051))).readJsonMetrics,
-    jsonl: async () => (await Promise.all(/* import() */[__webpack_require__.e(815), __webpack_require__.e(243)]).then(__webpack_require__.bind(__webpack_require__, 243))).readJsonLines,
-    csv: async () => (await Promise.all(/* import() */[__webpack_require__.e(712), __webpack_require__.e(881)]).then(__webpack_require__.bind(__webpack_require__, 23881))).readCsvMetrics,
-    openmetrics: async () => (await __webpack_require__.e(/* import() */ 532).then(__webpack_require__.bind(__webpack_require__, 86532))).readOpenMetrics,
-    gobench: async () => (await __webpack_require__.e(/* import() */ 469).then(__webpack_require__.bind(__webpack_require__, 91469))).readGoBench,
-    junit: async () => (await Promise.all(/* import() */[__webpack_require__.e(893), __webpack_require__.e(622)]).then(__webpack_require__.bind(__webpack_require__, 93241))).readJunit,
+    json: async () => (await __webpack_require__.e(/* import() */ 51).then(__webpack_require__.bind(__webpack_require__, 3051))).readJsonMetrics,
+    jsonl: async () => (await __webpack_require__.e(/* import() */ 243).then(__webpack_require__.bind(__webpack_require__, 243))).readJsonLines,
+    csv: async () => (await Promise.all(/* import() */[__webpack_require__.e(712), __webpack_require__.e(881)]).then(__webpack_require__.bind(__webpack_require__, 3881))).readCsvMetrics,
+    openmetrics: async () => (await __webpack_require__.e(/* import() */ 532).then(__webpack_require__.bind(__webpack_require__, 6532))).readOpenMetrics,
+    gobench: async () => (await __webpack_require__.e(/* import() */ 469).then(__webpack_require__.bind(__webpack_require__, 1469))).readGoBench,
+    junit: async () => (await Promise.all(/* import() */[__webpack_require__.e(893), __webpack_require__.e(241)]).then(__webpack_require__.bind(__webpack_require__, 3241))).readJunit,
 };
 /**
  * parseMetricText (parse.ts), loading only the reader the format needs.
@@ -323,7 +321,7 @@ async function parseMetricTextLazily(text, file, format, limits = inputs_limits/
 }
 
 // EXTERNAL MODULE: ./src/inputs/names.ts
-var names = __webpack_require__(85585);
+var names = __webpack_require__(5585);
 ;// CONCATENATED MODULE: ./src/inputs/pattern.ts
 
 
@@ -380,7 +378,6 @@ function trimSlashes(text) {
 
 
 
-
 /**
  * Reads every metric file the patterns name and folds them into one Run (collectRun).
  * - A pattern is a path or a glob (tinyglobby: `**`, `*`, `{a,b}`), optionally `pattern => prefix`
@@ -429,7 +426,9 @@ async function expand(pattern, cwd) {
     if (info?.isDirectory()) {
         throw new input_error/* InputError */.d(`${pattern} is a directory`, { fix: `name files in it, such as ${external_node_path_default().join(pattern, '*.json')}` });
     }
-    const files = await (0,dist/* glob */.TI)([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
+    // The glob library (tinyglobby, with picomatch) loads only for a pattern that is not a file.
+    const { glob } = await Promise.all(/* import() */[__webpack_require__.e(6), __webpack_require__.e(382)]).then(__webpack_require__.bind(__webpack_require__, 3382));
+    const files = await glob([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
     if (files.length === 0) {
         throw new input_error/* InputError */.d(`no metric file matches ${JSON.stringify(pattern)} (looked in ${cwd})`, {
             fix: 'check the path (relative to the working directory) and that the step writing the metrics ran',
@@ -463,7 +462,7 @@ function withPrefix(result, prefix) {
 }
 
 // EXTERNAL MODULE: ./src/config/rules.ts
-var rules = __webpack_require__(85413);
+var rules = __webpack_require__(5413);
 ;// CONCATENATED MODULE: ./src/cli/load-run.ts
 
 
@@ -510,7 +509,7 @@ function parsePrefixes(values) {
 
 /***/ }),
 
-/***/ 56497:
+/***/ 6497:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -519,7 +518,7 @@ function parsePrefixes(values) {
 /* harmony export */   yT: () => (/* binding */ limitError)
 /* harmony export */ });
 /* unused harmony export LIMIT_KEYS */
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /** Limits used when the config gives none: 64 MiB per file, 1 MiB per line, 100000 metrics. */
 const DEFAULT_LIMITS = Object.freeze({

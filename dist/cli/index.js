@@ -2,17 +2,17 @@
 import { createRequire as __WEBPACK_EXTERNAL_createRequire } from "module";
 /******/ var __webpack_modules__ = ({
 
-/***/ 95581:
+/***/ 5581:
 /***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
 
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var node_module__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(98995);
+/* harmony import */ var node_module__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8995);
 /* harmony import */ var node_module__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_module__WEBPACK_IMPORTED_MODULE_0__);
 
 // Node >= 22.1 keeps compiled code between runs (the runner's node24 has it; on 20 this is a no-op).
 // It covers only what loads after it, so everything else is imported below, not statically.
 node_module__WEBPACK_IMPORTED_MODULE_0___default().enableCompileCache?.();
-const { runCli } = await Promise.all(/* import() */[__nccwpck_require__.e(179), __nccwpck_require__.e(612)]).then(__nccwpck_require__.bind(__nccwpck_require__, 48612));
+const { runCli } = await Promise.all(/* import() */[__nccwpck_require__.e(179), __nccwpck_require__.e(612)]).then(__nccwpck_require__.bind(__nccwpck_require__, 8612));
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
 process.stdout.on('error', (e) => {
     if (e.code !== 'EPIPE')
@@ -27,70 +27,70 @@ __webpack_async_result__();
 
 /***/ }),
 
-/***/ 20181:
+/***/ 181:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("buffer");
 
 /***/ }),
 
-/***/ 79896:
+/***/ 9896:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("fs");
 
 /***/ }),
 
-/***/ 73339:
+/***/ 3339:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("module");
 
 /***/ }),
 
-/***/ 31421:
+/***/ 1421:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
 
 /***/ }),
 
-/***/ 77598:
+/***/ 7598:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:crypto");
 
 /***/ }),
 
-/***/ 78474:
+/***/ 8474:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:events");
 
 /***/ }),
 
-/***/ 73024:
+/***/ 3024:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs");
 
 /***/ }),
 
-/***/ 51455:
+/***/ 1455:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/promises");
 
 /***/ }),
 
-/***/ 98995:
+/***/ 8995:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:module");
 
 /***/ }),
 
-/***/ 76760:
+/***/ 6760:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:path");
@@ -104,14 +104,14 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:process
 
 /***/ }),
 
-/***/ 73136:
+/***/ 3136:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
 
 /***/ }),
 
-/***/ 16928:
+/***/ 6928:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("path");
@@ -125,7 +125,7 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("process");
 
 /***/ }),
 
-/***/ 87016:
+/***/ 7016:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("url");
@@ -400,6 +400,6 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("url");
 /******/ // startup
 /******/ // Load entry module and return exports
 /******/ // This entry module used 'module' so it can't be inlined
-/******/ var __webpack_exports__ = __nccwpck_require__(95581);
+/******/ var __webpack_exports__ = __nccwpck_require__(5581);
 /******/ __webpack_exports__ = await __webpack_exports__;
 /******/ 

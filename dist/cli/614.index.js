@@ -1,14 +1,14 @@
-export const id = 205;
-export const ids = [205];
+export const id = 614;
+export const ids = [614];
 export const modules = {
 
-/***/ 45450:
+/***/ 5450:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   o: () => (/* binding */ resolvePath)
 /* harmony export */ });
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(76760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6760);
 /* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
 
 /**
@@ -23,24 +23,29 @@ function resolvePath(ctx, path) {
 
 /***/ }),
 
-/***/ 85050:
+/***/ 3557:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
 // EXPORTS
 __webpack_require__.d(__webpack_exports__, {
   Z_: () => (/* binding */ HISTORY_SCHEMA_V1),
+  Y_: () => (/* binding */ HISTORY_TAIL),
+  l4: () => (/* binding */ checkRuns),
+  zz: () => (/* binding */ checkStorable),
   q0: () => (/* binding */ decodeHistoryDocument),
+  Td: () => (/* binding */ historyHead),
   i6: () => (/* binding */ parseHistory),
+  pL: () => (/* binding */ parseHistoryBytes),
   ph: () => (/* binding */ serializeHistory)
 });
 
 // UNUSED EXPORTS: HISTORY_SCHEMA
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 // EXTERNAL MODULE: ./src/history/problems.ts
-var problems = __webpack_require__(17326);
+var problems = __webpack_require__(7326);
 ;// CONCATENATED MODULE: ./src/history/decode-v2.ts
 
 /** The optional text columns of the runs table, in the order they are written. */
@@ -150,31 +155,35 @@ function decodeMetrics(table, runCount, report) {
     }
     return columns;
 }
-/** Checks one value column in place: numbers stay, null becomes NaN, anything else is reported. */
+/**
+ * Checks one value column in place, in one tight pass: numbers stay, null becomes NaN, anything
+ * else is reported. NaN is already "missing": scanHistoryBytes reads null as NaN (JSON.parse never
+ * makes one). Rows the scan read are arrays of doubles, so the usual pass only compares numbers.
+ */
 function checkColumn(column, m, runCount, report) {
-    const path = (0,problems.at)('metrics.values', m);
     if (!Array.isArray(column) || column.length !== runCount) {
-        report(path, `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`, 'the columns are ragged: a column was cut or extended by hand; restore the document from a backup');
+        report((0,problems.at)('metrics.values', m), `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`, 'the columns are ragged: a column was cut or extended by hand; restore the document from a backup');
         return undefined;
     }
     const cells = column;
     for (let r = 0; r < runCount; r++) {
         const v = cells[r];
+        // v - v is 0 for every finite number, NaN for NaN and the infinities.
         if (typeof v === 'number') {
-            // JSON.parse turns an overflowing literal such as 1e999 into Infinity.
-            if (v - v !== 0) {
-                report((0,problems.at)(path, r), `value ${v} is not finite (an overflowing number such as 1e999?)`);
-                cells[r] = NaN;
-            }
+            if (v - v !== 0 && v === v)
+                badCell(cells, m, r, `value ${v} is not finite (an overflowing number such as 1e999?)`, report);
         }
         else if (v === null)
             cells[r] = NaN;
-        else {
-            report((0,problems.at)(path, r), `a value must be a number or null (missing), found ${(0,problems/* typeName */.go)(v)}`);
-            cells[r] = NaN;
-        }
+        else
+            badCell(cells, m, r, `a value must be a number or null (missing), found ${(0,problems/* typeName */.go)(v)}`, report);
     }
     return cells;
+}
+/** Reports a bad entry (JSON.parse turns an overflowing literal such as 1e999 into Infinity) and makes it missing. */
+function badCell(cells, m, r, problem, report) {
+    report((0,problems.at)((0,problems.at)('metrics.values', m), r), problem);
+    cells[r] = NaN;
 }
 function lengthOrType(value) {
     return Array.isArray(value) ? `${value.length} entries` : (0,problems/* typeName */.go)(value);
@@ -263,8 +272,408 @@ function readValues(entry, path, r, runCount, columns, report) {
 }
 
 // EXTERNAL MODULE: ./src/history/json-text.ts
-var json_text = __webpack_require__(77670);
+var json_text = __webpack_require__(7670);
+;// CONCATENATED MODULE: ./src/history/values-scan.ts
+/**
+ * The fast reader of a version-2 history document's bytes (document.ts has the layout).
+ *
+ * JSON.parse makes a heap object of every number in `metrics.values`, and collecting those objects
+ * costs about as much again as parsing them; at 1,000 runs x 1,000 metrics that was most of a
+ * check. This reader walks the bytes once: it finds `metrics.values`, reads its rows straight into
+ * arrays of unboxed doubles (missing = NaN), and hands only the small rest of the document
+ * (schema, series, runs, names, units) to JSON.parse with `"values":[]` in the rows' place.
+ *
+ * It is all or nothing: whenever the bytes stray from plain JSON of the expected shape (a syntax
+ * error, a string or object inside a row, an escaped or repeated "metrics"/"values" key) it
+ * returns undefined and the caller parses the whole text the ordinary way, which reports the
+ * problem with its line and column. So it never changes what a document means, only how fast a
+ * well-formed one is read.
+ */
+const SPACE = 0x20, TAB = 0x09, LF = 0x0a, CR = 0x0d;
+const QUOTE = 0x22, BACKSLASH = 0x5c, COMMA = 0x2c, COLON = 0x3a;
+const OPEN_SQUARE = 0x5b, CLOSE_SQUARE = 0x5d, OPEN_CURLY = 0x7b, CLOSE_CURLY = 0x7d;
+const MINUS = 0x2d, PLUS = 0x2b, DOT = 0x2e, ZERO = 0x30, NINE = 0x39, LOWER_E = 0x65, UPPER_E = 0x45;
+/** Exact powers of ten: every 10^k with k <= 22 is a double without rounding. */
+const EXACT_POWERS = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));
+/** A checked JSON number is ASCII, so any single-byte decoder reads it. */
+const ASCII = new TextDecoder('latin1');
+const isSpace = (c) => c === SPACE || c === LF || c === CR || c === TAB;
+/** Fails the scan; the caller falls back to JSON.parse, which explains the problem. */
+class NotPlain extends Error {
+}
+/**
+ * Reads a history document's bytes; undefined when they are not plain JSON of the version-2
+ * shape (then parse the text with JSON.parse instead). Work: one pass over the bytes, no object
+ * per value.
+ * @example scanHistoryBytes(Buffer.from('{"schema":"bellgate.history/2","metrics":{"names":["a"],"values":[[1,null]]}}'))?.root
+ * // { schema: 'bellgate.history/2', metrics: { names: ['a'], values: [[1, NaN]] } }
+ */
+function scanHistoryBytes(bytes) {
+    try {
+        return scan(bytes);
+    }
+    catch (error) {
+        if (error instanceof NotPlain)
+            return undefined;
+        throw error;
+    }
+}
+function scan(bytes) {
+    const reader = new ByteReader(bytes);
+    // A UTF-8 byte-order mark, which parseJsonText also skips.
+    if (bytes[0] === 0xef && bytes[1] === 0xbb && bytes[2] === 0xbf)
+        reader.at = 3;
+    const bodyStart = reader.at;
+    let found;
+    reader.members((topKey) => {
+        if (topKey !== 'metrics' || reader.peek() !== OPEN_CURLY)
+            return reader.skipValue();
+        if (found !== undefined)
+            throw new NotPlain();
+        reader.members((key) => {
+            if (key !== 'values')
+                return reader.skipValue();
+            if (found !== undefined)
+                throw new NotPlain();
+            const start = reader.at;
+            const { rows, rowEnds } = reader.rows();
+            found = { start, end: reader.at, rows, rowEnds };
+        });
+    });
+    reader.skipSpace();
+    if (reader.at !== bytes.length || found === undefined)
+        return undefined;
+    const { start, end, rows, rowEnds } = found;
+    const decoder = new TextDecoder();
+    const rest = decoder.decode(bytes.subarray(bodyStart, start)) + '[]' + decoder.decode(bytes.subarray(end));
+    let root;
+    try {
+        root = JSON.parse(rest);
+    }
+    catch {
+        return undefined;
+    }
+    const metrics = root.metrics;
+    if (metrics === undefined || !Array.isArray(metrics.values) || metrics.values.length !== 0)
+        return undefined;
+    metrics.values = rows;
+    return { root, rowEnds, valuesStart: start, valuesEnd: end };
+}
+/** A cursor over the bytes, with just the steps the scan needs. Every step throws NotPlain on surprise. */
+class ByteReader {
+    bytes;
+    at = 0;
+    constructor(bytes) {
+        this.bytes = bytes;
+    }
+    peek() {
+        this.skipSpace();
+        return this.bytes[this.at] ?? -1;
+    }
+    skipSpace() {
+        const b = this.bytes;
+        let i = this.at;
+        while (i < b.length && isSpace(b[i]))
+            i++;
+        this.at = i;
+    }
+    expect(c) {
+        if (this.peek() !== c)
+            throw new NotPlain();
+        this.at++;
+    }
+    /** Walks an object's members, calling `onMember(key)` with the cursor on each value (which it must consume). */
+    members(onMember) {
+        this.expect(OPEN_CURLY);
+        if (this.peek() === CLOSE_CURLY) {
+            this.at++;
+            return;
+        }
+        for (;;) {
+            onMember(this.key());
+            const c = this.peek();
+            this.at++;
+            if (c === CLOSE_CURLY)
+                return;
+            if (c !== COMMA)
+                throw new NotPlain();
+        }
+    }
+    /** A member's key and its colon. Keys with escapes are refused: they could spell "values" another way. */
+    key() {
+        this.expect(QUOTE);
+        const b = this.bytes;
+        const start = this.at;
+        let i = start;
+        while (i < b.length && b[i] !== QUOTE) {
+            if (b[i] === BACKSLASH)
+                throw new NotPlain();
+            i++;
+        }
+        if (i >= b.length)
+            throw new NotPlain();
+        this.at = i + 1;
+        this.expect(COLON);
+        this.skipSpace();
+        return new TextDecoder().decode(b.subarray(start, i));
+    }
+    /** Moves past any value; its content is checked later by JSON.parse of the rest. */
+    skipValue() {
+        const b = this.bytes;
+        this.skipSpace();
+        let depth = 0;
+        let i = this.at;
+        for (;;) {
+            if (i >= b.length)
+                throw new NotPlain();
+            const c = b[i];
+            if (c === QUOTE) {
+                // A string ends at the first quote no backslash escapes (\uXXXX holds neither).
+                i = stringEnd(b, i + 1);
+                if (depth === 0)
+                    break;
+            }
+            else if (c === OPEN_SQUARE || c === OPEN_CURLY) {
+                depth++;
+                i++;
+            }
+            else if (c === CLOSE_SQUARE || c === CLOSE_CURLY) {
+                if (depth === 0)
+                    break;
+                depth--;
+                i++;
+                if (depth === 0)
+                    break;
+            }
+            else if (depth === 0 && (c === COMMA || isSpace(c)))
+                break;
+            else
+                i++;
+        }
+        this.at = i;
+    }
+    /** The values array: rows of numbers or null, each row read into an array of doubles. */
+    rows() {
+        const rows = [];
+        const rowEnds = [];
+        this.expect(OPEN_SQUARE);
+        if (this.peek() === CLOSE_SQUARE) {
+            this.at++;
+            return { rows, rowEnds };
+        }
+        // Rows are as long as the runs table, so the first row's length sizes the others' arrays.
+        let sizeHint = 0;
+        for (;;) {
+            this.expect(OPEN_SQUARE);
+            // A copy of the previous row is an array of doubles of the right size: filling it stores
+            // in place, where a new Array(n) would first hold tagged holes and be converted on the first double.
+            let row = rows.length > 0 ? rows[rows.length - 1].slice() : [];
+            let end = plainRow(this.bytes, this.at, row);
+            if (end < 0) {
+                row = readRow(this.bytes, this.at, sizeHint);
+                end = rowEnd;
+            }
+            sizeHint = row.length;
+            this.at = end + 1;
+            rows.push(row);
+            rowEnds.push(end);
+            const c = this.peek();
+            this.at++;
+            if (c === CLOSE_SQUARE)
+                return { rows, rowEnds };
+            if (c !== COMMA)
+                throw new NotPlain();
+        }
+    }
+}
+/**
+ * The offset just past the closing quote of a string whose content starts at `from`. A quote
+ * closes it unless an odd run of backslashes precedes it (\\uXXXX holds neither); indexOf keeps
+ * the long id and name lists of the header from costing a step per byte.
+ */
+function stringEnd(b, from) {
+    for (let i = b.indexOf(QUOTE, from); i >= 0; i = b.indexOf(QUOTE, i + 1)) {
+        let slashes = 0;
+        while (b[i - 1 - slashes] === BACKSLASH)
+            slashes++;
+        if (slashes % 2 === 0)
+            return i + 1;
+    }
+    throw new NotPlain();
+}
+/**
+ * The common row, as Bellgate writes it: no spaces, numbers of at most 15 significant digits
+ * without an exponent, and null. Reads it from just after its `[` into `row` (pre-sized; cut to
+ * the count read) and returns the offset of its `]`, or -1 at the first byte outside that form —
+ * the caller then reads the row again with readRow, which knows all of JSON's row syntax. Kept
+ * apart and small because V8 compiles it in a few milliseconds: one cold run of the whole reader
+ * at 1,000 x 1,000 went from ~100 to ~55 ms CPU. Values as readRow's fast path (Clinger 1990):
+ * digits / 10^scale, both exact, one correctly rounded division.
+ */
+function plainRow(b, start, row) {
+    let i = start;
+    let k = 0;
+    let c = b[i];
+    if (c === CLOSE_SQUARE) {
+        row.length = 0;
+        return i;
+    }
+    for (;;) {
+        if (c === 0x6e) {
+            if (b[i + 1] !== 0x75 || b[i + 2] !== 0x6c || b[i + 3] !== 0x6c)
+                return -1;
+            row[k++] = NaN;
+            i += 4;
+        }
+        else {
+            let negative = false;
+            if (c === MINUS) {
+                negative = true;
+                c = b[++i];
+            }
+            let mantissa = 0;
+            let digits = 0;
+            let scale = 0;
+            // Past the end of the bytes c is undefined, which every comparison below refuses.
+            if (c === ZERO)
+                c = b[++i];
+            else if (c !== undefined && c > ZERO && c <= NINE) {
+                do {
+                    mantissa = mantissa * 10 + (c - ZERO);
+                    digits++;
+                    c = b[++i];
+                } while (c !== undefined && c >= ZERO && c <= NINE);
+            }
+            else
+                return -1;
+            if (c === DOT) {
+                c = b[++i];
+                if (c === undefined || c < ZERO || c > NINE)
+                    return -1;
+                do {
+                    mantissa = mantissa * 10 + (c - ZERO);
+                    digits++;
+                    scale++;
+                    c = b[++i];
+                } while (c !== undefined && c >= ZERO && c <= NINE);
+            }
+            if (digits > 15 || c === LOWER_E || c === UPPER_E)
+                return -1;
+            const magnitude = scale === 0 ? mantissa : mantissa / EXACT_POWERS[scale];
+            row[k++] = negative ? -magnitude : magnitude;
+        }
+        c = b[i];
+        if (c === COMMA) {
+            c = b[++i];
+            continue;
+        }
+        if (c !== CLOSE_SQUARE)
+            return -1;
+        if (k !== row.length)
+            row.length = k;
+        return i;
+    }
+}
+/** Where readRow found its row's `]` (a module variable, so the hot loop returns no object). */
+let rowEnd = 0;
+/**
+ * One row from just after its `[`: numbers and nulls (as NaN) into an array of doubles, stored by
+ * index into an array sized by `sizeHint` (stores into a pre-sized array beat push). Sets rowEnd.
+ */
+function readRow(b, start, sizeHint) {
+    const row = new Array(sizeHint);
+    let k = 0;
+    let i = start;
+    const end = b.length;
+    let c = i < end ? b[i] : -1;
+    while (c === SPACE || c === LF || c === CR || c === TAB)
+        c = ++i < end ? b[i] : -1;
+    if (c === CLOSE_SQUARE) {
+        rowEnd = i;
+        row.length = 0;
+        return row;
+    }
+    for (;;) {
+        if (c === 0x6e) {
+            // null
+            if (b[i + 1] !== 0x75 || b[i + 2] !== 0x6c || b[i + 3] !== 0x6c)
+                throw new NotPlain();
+            row[k++] = NaN;
+            i += 4;
+        }
+        else {
+            // A JSON number. Up to 15 significant digits and no exponent, the value is digits / 10^scale:
+            // both are exact doubles, so the one division rounds correctly (Clinger 1990, "How to read
+            // floating point numbers accurately", the fast path). Anything else goes to Number(), which
+            // rounds correctly too.
+            const first = i;
+            const negative = c === MINUS;
+            if (negative)
+                c = ++i < end ? b[i] : -1;
+            let digits = 0;
+            let mantissa = 0;
+            let scale = 0;
+            if (c === ZERO)
+                c = ++i < end ? b[i] : -1;
+            else if (c > ZERO && c <= NINE) {
+                do {
+                    mantissa = mantissa * 10 + (c - ZERO);
+                    digits++;
+                    c = ++i < end ? b[i] : -1;
+                } while (c >= ZERO && c <= NINE);
+            }
+            else
+                throw new NotPlain();
+            if (c === DOT) {
+                c = ++i < end ? b[i] : -1;
+                if (!(c >= ZERO && c <= NINE))
+                    throw new NotPlain();
+                do {
+                    mantissa = mantissa * 10 + (c - ZERO);
+                    digits++;
+                    scale++;
+                    c = ++i < end ? b[i] : -1;
+                } while (c >= ZERO && c <= NINE);
+            }
+            let exact = digits <= 15 && scale <= 22;
+            if (c === LOWER_E || c === UPPER_E) {
+                exact = false;
+                c = ++i < end ? b[i] : -1;
+                if (c === PLUS || c === MINUS)
+                    c = ++i < end ? b[i] : -1;
+                if (!(c >= ZERO && c <= NINE))
+                    throw new NotPlain();
+                do
+                    c = ++i < end ? b[i] : -1;
+                while (c >= ZERO && c <= NINE);
+            }
+            if (exact) {
+                const magnitude = scale === 0 ? mantissa : mantissa / EXACT_POWERS[scale];
+                row[k++] = negative ? -magnitude : magnitude;
+            }
+            else {
+                row[k++] = Number(ASCII.decode(b.subarray(first, i)));
+            }
+        }
+        c = i < end ? b[i] : -1;
+        while (c === SPACE || c === LF || c === CR || c === TAB)
+            c = ++i < end ? b[i] : -1;
+        if (c === CLOSE_SQUARE)
+            break;
+        if (c !== COMMA)
+            throw new NotPlain();
+        c = ++i < end ? b[i] : -1;
+        while (c === SPACE || c === LF || c === CR || c === TAB)
+            c = ++i < end ? b[i] : -1;
+    }
+    rowEnd = i;
+    if (k !== row.length)
+        row.length = k;
+    return row;
+}
+
 ;// CONCATENATED MODULE: ./src/history/document.ts
+
 
 
 
@@ -335,6 +744,26 @@ function parseHistory(text, source) {
     return history;
 }
 /**
+ * parseHistory for the file's bytes, taking the fast road when it can: scanHistoryBytes reads the
+ * values rows straight into doubles (no JSON.parse object per number) and JSON.parse reads only
+ * the small rest. Any document the scan declines (another version, odd but valid JSON, or broken
+ * JSON) is decoded from its UTF-8 text by parseHistory, so the result and every error are the same.
+ * `rows` says where each values row lies in `bytes` (present only after a scan), which lets a
+ * store write an append by splicing the old rows (splice-append.ts).
+ * Throws InputError exactly as parseHistory.
+ *
+ * @example parseHistoryBytes(readFileSync('h.json'), 'h.json').history.runs.length // 120
+ */
+function parseHistoryBytes(bytes, source) {
+    const scanned = scanHistoryBytes(bytes);
+    if (scanned === undefined)
+        return { history: parseHistory(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), source) };
+    const history = decodeHistoryDocument(scanned.root, (0,problems/* throwingSink */.sC)(source));
+    if (!history)
+        throw new input_error/* InputError */.d('unreadable history document', { where: source });
+    return { history, rows: { valuesStart: scanned.valuesStart, rowEnds: scanned.rowEnds } };
+}
+/**
  * Writes a History as a version-2 document (layout above). NaN is written as null (missing).
  * Throws InputError when the History is inconsistent (a column not aligned with the runs, an
  * infinite value, a duplicated run id), so a broken History is never stored.
@@ -343,38 +772,61 @@ function parseHistory(text, source) {
  * // '{"schema":"bellgate.history/2","series":"s",\n"runs":{"id":[],...},\n"metrics":{...,"values":[\n]}}\n'
  */
 function serializeHistory(h) {
-    checkConsistent(h);
+    checkRuns(h);
+    for (const [name, column] of h.columns)
+        checkStorable(h, name, column.values);
+    // JSON.stringify writes NaN as null, which is exactly the "missing" marker.
+    const lines = [...h.columns.values()].map((c) => JSON.stringify(c.values));
+    return `${historyHead(h)}${lines.join(',\n')}${HISTORY_TAIL}`;
+}
+/**
+ * Everything of the version-2 layout before the first values row: schema, series, the runs table,
+ * names and units, up to `"values":[` and its newline. The rows follow, joined by ",\n", then
+ * HISTORY_TAIL. Shared by serializeHistory and the text splice of an append (splice-append.ts).
+ *
+ * @example historyHead(emptyHistory('s')).endsWith('"values":[\n') // true
+ */
+function historyHead(h) {
     const runs = { id: h.runs.map((r) => r.id) };
     for (const field of RUN_FIELDS)
         runs[field] = h.runs.map((r) => r[field] ?? null);
     const names = [...h.columns.keys()];
     const units = [...h.columns.values()].map((c) => c.unit ?? null);
-    // JSON.stringify writes NaN as null, which is exactly the "missing" marker.
-    const lines = [...h.columns.values()].map((c) => JSON.stringify(c.values));
     return (`{"schema":${JSON.stringify(HISTORY_SCHEMA)},"series":${JSON.stringify(h.series)},\n` +
         `"runs":${JSON.stringify(runs)},\n` +
-        `"metrics":{"names":${JSON.stringify(names)},"units":${JSON.stringify(units)},"values":[\n` +
-        `${lines.join(',\n')}]}}\n`);
+        `"metrics":{"names":${JSON.stringify(names)},"units":${JSON.stringify(units)},"values":[\n`);
 }
-function checkConsistent(h) {
-    const where = `history of series ${JSON.stringify(h.series)}`;
-    const fix = 'this is a bug in the code that built the history; please report it';
+/** What closes a version-2 document after its last values row. */
+const HISTORY_TAIL = ']}}\n';
+const NOT_STORABLE_FIX = 'this is a bug in the code that built the history; please report it';
+const storeWhere = (h) => `history of series ${JSON.stringify(h.series)}`;
+/**
+ * The runs half of the check before storing: every run has an id and no id appears twice.
+ * Throws InputError, so a broken History is never stored.
+ */
+function checkRuns(h) {
+    const where = storeWhere(h);
     const ids = new Set();
     for (const run of h.runs) {
         if (typeof run.id !== 'string' || run.id === '')
-            throw new input_error/* InputError */.d('a run without an id cannot be stored', { where, fix });
+            throw new input_error/* InputError */.d('a run without an id cannot be stored', { where, fix: NOT_STORABLE_FIX });
         if (ids.has(run.id))
-            throw new input_error/* InputError */.d(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix });
+            throw new input_error/* InputError */.d(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
         ids.add(run.id);
     }
-    for (const [name, column] of h.columns) {
-        if (column.values.length !== h.runs.length) {
-            throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has ${column.values.length} values for ${h.runs.length} runs`, { where, fix });
-        }
-        for (const v of column.values) {
-            if (v === Infinity || v === -Infinity || typeof v !== 'number') {
-                throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, { where, fix });
-            }
+}
+/**
+ * The column half: one value per run, each a finite number or NaN (missing). `from` skips values
+ * already known to be storable (an append checks only what it adds). Throws InputError.
+ */
+function checkStorable(h, name, values, from = 0) {
+    if (values.length !== h.runs.length) {
+        throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, { where: storeWhere(h), fix: NOT_STORABLE_FIX });
+    }
+    for (let i = from; i < values.length; i++) {
+        const v = values[i];
+        if (v === Infinity || v === -Infinity || typeof v !== 'number') {
+            throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, { where: storeWhere(h), fix: NOT_STORABLE_FIX });
         }
     }
 }
@@ -382,14 +834,14 @@ function checkConsistent(h) {
 
 /***/ }),
 
-/***/ 77670:
+/***/ 7670:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   lk: () => (/* binding */ parseJsonText)
 /* harmony export */ });
 /* unused harmony exports syntaxErrorOffset, lineColumn */
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /**
  * Parses JSON text, turning a syntax error into an InputError that points at "source:line:col".
@@ -449,7 +901,7 @@ function lineColumn(text, offset) {
 
 /***/ }),
 
-/***/ 17326:
+/***/ 7326:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
@@ -460,7 +912,7 @@ function lineColumn(text, offset) {
 /* harmony export */   sC: () => (/* binding */ throwingSink),
 /* harmony export */   wN: () => (/* binding */ collectingSink)
 /* harmony export */ });
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8250);
 
 /**
  * A sink that throws InputError at the first problem, located as "source at path".

@@ -1,17 +1,17 @@
-export const id = 385;
-export const ids = [385];
+export const id = 369;
+export const ids = [369,517];
 export const modules = {
 
-/***/ 94034:
+/***/ 4034:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
 /* harmony export */   n: () => (/* binding */ readUserText)
 /* harmony export */ });
 /* unused harmony export MAX_TEXT_BYTES */
-/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(51455);
+/* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(1455);
 /* harmony import */ var node_fs_promises__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__webpack_require__.n(node_fs_promises__WEBPACK_IMPORTED_MODULE_0__);
-/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(38250);
+/* harmony import */ var _model_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(8250);
 
 
 /** Files the CLI reads whole (history, import runs) are refused above this size (256 MiB). */
@@ -58,7 +58,7 @@ function reason(error) {
 
 /***/ }),
 
-/***/ 16385:
+/***/ 2369:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -70,13 +70,13 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: external "node:fs/promises"
-var promises_ = __webpack_require__(51455);
+var promises_ = __webpack_require__(1455);
 // EXTERNAL MODULE: ./node_modules/diff/libesm/patch/create.js + 2 modules
-var create = __webpack_require__(37291);
+var create = __webpack_require__(7291);
 // EXTERNAL MODULE: ./node_modules/yaml/dist/index.js
-var dist = __webpack_require__(38815);
+var dist = __webpack_require__(8815);
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
+var input_error = __webpack_require__(8250);
 ;// CONCATENATED MODULE: ./src/gate/tune/labels.ts
 
 
@@ -165,13 +165,13 @@ function checkLabels(labels, history) {
 }
 
 // EXTERNAL MODULE: ./src/config/rules.ts
-var config_rules = __webpack_require__(85413);
+var config_rules = __webpack_require__(5413);
 // EXTERNAL MODULE: ./src/model/median.ts
-var median = __webpack_require__(90071);
+var median = __webpack_require__(71);
 // EXTERNAL MODULE: ./src/model/family.ts
-var model_family = __webpack_require__(97089);
-// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
-var tails = __webpack_require__(60312);
+var model_family = __webpack_require__(7089);
+// EXTERNAL MODULE: ./src/model/tails.ts + 2 modules
+var tails = __webpack_require__(7963);
 ;// CONCATENATED MODULE: ./src/gate/tune/truth.ts
 /**
  * Indexes labels (already checked with checkLabels) by run. A whole-run label covers every metric
@@ -294,7 +294,7 @@ function adjustedTails(replay, family) {
 }
 
 // EXTERNAL MODULE: ./src/gate/baseline.ts + 1 modules
-var baseline = __webpack_require__(64614);
+var baseline = __webpack_require__(4614);
 ;// CONCATENATED MODULE: ./src/gate/tune/metric-sequence.ts
 
 /**
@@ -317,11 +317,10 @@ function metricSequence(history, name, settings, indexOf) {
     return { name, settings, values: all.values, own, runIds: all.runIds, runIndex };
 }
 
-// EXTERNAL MODULE: ./node_modules/@stdlib/stats-base-dists-normal-logcdf/lib/index.js
-var lib = __webpack_require__(160);
-var lib_default = /*#__PURE__*/__webpack_require__.n(lib);
 // EXTERNAL MODULE: ./src/model/moments.ts
-var moments = __webpack_require__(88884);
+var moments = __webpack_require__(8884);
+// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
+var normal = __webpack_require__(2986);
 ;// CONCATENATED MODULE: ./src/model/normality.ts
 
 
@@ -392,7 +391,7 @@ function andersonDarling(values) {
     const w = Float64Array.from(values, (x) => (x - mean) / sd).sort();
     let sum = 0;
     for (let i = 0; i < n; i++) {
-        sum += (2 * i + 1) * (lib_default()(w[i], 0, 1) + lib_default()(-w[n - 1 - i], 0, 1));
+        sum += (2 * i + 1) * ((0,normal/* normalLogCdf */.Hi)(w[i]) + (0,normal/* normalLogCdf */.Hi)(-w[n - 1 - i]));
     }
     const statistic = -n - sum / n;
     const adjusted = statistic * (1 + 0.75 / n + 2.25 / (n * n));
@@ -440,9 +439,9 @@ function fmt(x) {
 }
 
 // EXTERNAL MODULE: ./src/model/density.ts
-var density = __webpack_require__(20913);
+var density = __webpack_require__(913);
 // EXTERNAL MODULE: ./src/model/fit.ts
-var fit = __webpack_require__(95046);
+var fit = __webpack_require__(5046);
 ;// CONCATENATED MODULE: ./src/model/running-moments.ts
 
 /**
@@ -528,9 +527,9 @@ var transform = __webpack_require__(8077);
 // EXTERNAL MODULE: ./src/gate/resolution-floor.ts
 var resolution_floor = __webpack_require__(1198);
 // EXTERNAL MODULE: ./src/gate/sides.ts
-var sides = __webpack_require__(33979);
+var sides = __webpack_require__(3979);
 // EXTERNAL MODULE: ./src/gate/tolerance.ts
-var tolerance = __webpack_require__(20592);
+var tolerance = __webpack_require__(592);
 ;// CONCATENATED MODULE: ./src/gate/tune/replay-point.ts
 /** An empty replay for a metric. */
 function emptyReplay(name, method) {
@@ -642,7 +641,7 @@ function decisionFigures(x, fit, settings) {
 }
 
 // EXTERNAL MODULE: ./src/gate/judge-metric.ts
-var judge_metric = __webpack_require__(81177);
+var judge_metric = __webpack_require__(1177);
 ;// CONCATENATED MODULE: ./src/gate/tune/refit-replay.ts
 
 
@@ -857,7 +856,7 @@ function tuneHistory(input) {
     for (const m of replay.metrics)
         for (const r of m.run)
             perRun.set(r, (perRun.get(r) ?? 0) + 1);
-    const metricsPerRun = perRun.size === 0 ? 0 : (0,median/* median */.J)([...perRun.values()]);
+    const metricsPerRun = perRun.size === 0 ? 0 : (0,median/* median */.JZ)([...perRun.values()]);
     const rows = ladders.get(config.family);
     // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
     const choice = perRun.size === 0
@@ -901,9 +900,35 @@ function tuneHistory(input) {
 }
 
 // EXTERNAL MODULE: ./src/config/glob-matcher.ts
-var glob_matcher = __webpack_require__(80517);
-// EXTERNAL MODULE: ./src/config/load.ts + 9 modules
-var load = __webpack_require__(95446);
+var glob_matcher = __webpack_require__(517);
+// EXTERNAL MODULE: ./src/config/config-text.ts + 10 modules
+var config_text = __webpack_require__(6964);
+// EXTERNAL MODULE: ./src/config/defaults.ts
+var defaults = __webpack_require__(1954);
+;// CONCATENATED MODULE: ./src/config/load.ts
+
+
+
+
+/**
+ * Reads the text of a Bellgate config (YAML, `.github/bellgate.yml`) into a Config.
+ * Steps: YAML under hard limits (1 MiB, 32 levels, 16 KiB scalars, 100 aliases, 10,000 values),
+ * the JSON Schema (bellgate.schema.json), then the rules the schema cannot express.
+ * An empty file, or one of only comments, gives the defaults.
+ * Synchronous, so it loads picomatch with it; readConfigFile (parse-lazily.ts) loads it only for
+ * configs that need it.
+ * Throws InputError for any problem: where = "source:line:col" of the first one, fix = what to
+ * write instead; every problem found is listed in the message, in reading order.
+ * @example parseConfig('defaults:\n  tolerance: 2%\n', 'bellgate.yml').defaults.tolerance // { kind: 'percent', amount: 0.02 }
+ * @example parseConfig('defaults:\n  cuttoff: 0.05\n', 'bellgate.yml') // throws InputError at bellgate.yml:2:3, fix 'did you mean "cutoff"?'
+ */
+function parseConfig(text, source) {
+    const tree = (0,config_text/* checkedConfigTree */.wR)(text, source);
+    if (tree === undefined)
+        return { ...(0,defaults/* defaultConfig */.sb)(), source };
+    return (0,config_text/* configFromTree */.H2)(tree, source, glob_matcher.picomatchCompiler);
+}
+
 ;// CONCATENATED MODULE: ./src/gate/tune/escape-glob.ts
 
 /**
@@ -914,7 +939,7 @@ var load = __webpack_require__(95446);
  */
 function literalGlob(name) {
     const glob = name.replace(/[\\*?[\]{}()!+@|^$]/g, '\\$&');
-    return (0,glob_matcher/* compileGlobs */.t)([glob])(name) ? glob : undefined;
+    return (0,glob_matcher.compileGlobs)([glob])(name) ? glob : undefined;
 }
 
 ;// CONCATENATED MODULE: ./src/gate/tune/write-config.ts
@@ -940,10 +965,10 @@ function literalGlob(name) {
  * @example applyConfigEdit('defaults:\n  cutoff: 0.01 # strict\n', 'b.yml', { cutoff: 0.001, rules: [] }) // 'defaults:\n  cutoff: 0.001 # strict\n'
  */
 function applyConfigEdit(text, source, edit) {
-    (0,load/* parseConfig */.o)(text, source);
+    parseConfig(text, source);
     const rules = edit.rules.filter((r) => literalGlob(r.metric) !== undefined);
     const out = spliceEdit(text, edit.cutoff, rules) ?? documentEdit(text, edit.cutoff, rules);
-    const config = (0,load/* parseConfig */.o)(out, source);
+    const config = parseConfig(out, source);
     if (!readsBack(config, edit.cutoff, rules)) {
         throw new input_error/* InputError */.d('could not write the suggestion so that it reads back as suggested; the config was not changed', {
             where: source,
@@ -1056,7 +1081,7 @@ function ownRuleIndex(metrics, rule) {
         return -1;
     const later = metrics.items.slice(own + 1).some((item) => {
         const globs = globsOf(item);
-        return globs.length > 0 && (0,glob_matcher/* compileGlobs */.t)(globs)(rule.metric);
+        return globs.length > 0 && (0,glob_matcher.compileGlobs)(globs)(rule.metric);
     });
     return later ? -1 : own;
 }
@@ -1114,8 +1139,8 @@ function setScalar(target, path, value) {
         target.setIn(path, value);
 }
 
-// EXTERNAL MODULE: ./src/history/document.ts + 2 modules
-var history_document = __webpack_require__(85050);
+// EXTERNAL MODULE: ./src/history/document.ts + 3 modules
+var history_document = __webpack_require__(3557);
 ;// CONCATENATED MODULE: ./src/report/tune-json.ts
 /** Schema tag of the tune JSON; bumped only on a breaking change of its fields. */
 const TUNE_SCHEMA = 'bellgate.tune/1';
@@ -1150,9 +1175,9 @@ function renderTuneJson(result, extra = {}) {
 }
 
 // EXTERNAL MODULE: ./src/report/clean.ts
-var clean = __webpack_require__(60023);
+var clean = __webpack_require__(23);
 // EXTERNAL MODULE: ./src/report/format.ts
-var format = __webpack_require__(12011);
+var format = __webpack_require__(2011);
 ;// CONCATENATED MODULE: ./src/report/tune-table.ts
 /**
  * A plain text table: columns padded to their widest cell, aligned by `align` ('l' left for
@@ -1285,11 +1310,11 @@ function per100(x) {
 }
 
 // EXTERNAL MODULE: ./src/cli/load-config.ts
-var load_config = __webpack_require__(86783);
+var load_config = __webpack_require__(6783);
 // EXTERNAL MODULE: ./src/cli/paths.ts
-var paths = __webpack_require__(45450);
+var paths = __webpack_require__(5450);
 // EXTERNAL MODULE: ./src/cli/read-text.ts
-var read_text = __webpack_require__(94034);
+var read_text = __webpack_require__(4034);
 ;// CONCATENATED MODULE: ./src/cli/run/tune.ts
 
 
@@ -1387,6 +1412,61 @@ function progressBar(io) {
         },
     };
 }
+
+
+/***/ }),
+
+/***/ 517:
+/***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
+
+__webpack_require__.r(__webpack_exports__);
+/* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   compileGlobs: () => (/* binding */ compileGlobs),
+/* harmony export */   isLiteralGlob: () => (/* binding */ isLiteralGlob),
+/* harmony export */   picomatchCompiler: () => (/* binding */ picomatchCompiler)
+/* harmony export */ });
+/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(4006);
+/* harmony import */ var picomatch__WEBPACK_IMPORTED_MODULE_1___default = /*#__PURE__*/__webpack_require__.n(picomatch__WEBPACK_IMPORTED_MODULE_1__);
+/* harmony import */ var _name_matchers_js__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(6471);
+
+
+// Metric names are not paths: a leading '.' is an ordinary character (dot: true), and '\' is
+// never a separator, whatever the operating system (windows: false).
+const OPTIONS = { dot: true, windows: false };
+/**
+ * Compiles a rule's globs (picomatch syntax) into one matcher: a name matches when it matches at
+ * least one plain glob and no glob starting with '!' (only '!' globs: everything but those).
+ * Metric names contain '/', and `*` stays within one '/' segment while `**` crosses segments:
+ * `throughput/*` matches `throughput/home` but not `throughput/api/v2`; `size/**` matches both
+ * `size/app.js` and `size/assets/logo.svg`. Globs that are plain names are compared as strings
+ * (exactMatcher, the same answers). Compiled once per globs array and filed for settingsFor.
+ * Throws picomatch's error for a pattern it cannot compile (load.ts reports it with line:column).
+ * @example compileGlobs(['latency/*', '!latency/calibrate'])('latency/render') // true
+ */
+function compileGlobs(globs) {
+    const known = (0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .knownMatcher */ .at)(globs);
+    if (known)
+        return known;
+    const exact = (0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .exactMatcher */ .Gh)(globs);
+    if (exact)
+        return (0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .rememberMatcher */ .gV)(globs, exact);
+    const plain = globs.filter((g) => !g.startsWith('!'));
+    const negated = globs.filter((g) => g.startsWith('!')).map((g) => g.slice(1));
+    const include = plain.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_1___default()(plain, OPTIONS) : () => true;
+    const exclude = negated.length > 0 ? picomatch__WEBPACK_IMPORTED_MODULE_1___default()(negated, OPTIONS) : () => false;
+    return (0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .rememberMatcher */ .gV)(globs, (name) => include(name) && !exclude(name));
+}
+/**
+ * True when the glob has no wildcard or brace characters, so it names exactly one metric.
+ * @example isLiteralGlob('latency/calibrate') // true
+ */
+function isLiteralGlob(glob) {
+    return !picomatch__WEBPACK_IMPORTED_MODULE_1___default().scan(glob).isGlob && !glob.startsWith('!');
+}
+/** The full glob syntax, through picomatch. */
+const picomatchCompiler = { compile: compileGlobs, isLiteral: isLiteralGlob };
+// Once picomatch is loaded anyway, globs filed by no reader (a Config built in code) still match.
+(0,_name_matchers_js__WEBPACK_IMPORTED_MODULE_0__/* .useFallbackCompiler */ .Bz)(compileGlobs);
 
 
 /***/ })

@@ -1,8 +1,8 @@
-export const id = 901;
-export const ids = [901];
+export const id = 718;
+export const ids = [718];
 export const modules = {
 
-/***/ 71178:
+/***/ 8129:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 
@@ -12,15 +12,15 @@ __webpack_require__.d(__webpack_exports__, {
 });
 
 // EXTERNAL MODULE: ./src/config/rules.ts
-var rules = __webpack_require__(85413);
-// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
-var tails = __webpack_require__(60312);
+var rules = __webpack_require__(5413);
+// EXTERNAL MODULE: ./src/model/tails.ts + 2 modules
+var tails = __webpack_require__(7963);
 // EXTERNAL MODULE: ./src/gate/decide-metric.ts
-var decide_metric = __webpack_require__(18176);
+var decide_metric = __webpack_require__(8176);
 // EXTERNAL MODULE: ./src/model/family.ts
-var model_family = __webpack_require__(97089);
+var model_family = __webpack_require__(7089);
 // EXTERNAL MODULE: ./src/gate/format-number.ts
-var format_number = __webpack_require__(19616);
+var format_number = __webpack_require__(9616);
 ;// CONCATENATED MODULE: ./src/gate/family-test.ts
 
 
@@ -45,13 +45,141 @@ function familyTests(items, family) {
 }
 
 // EXTERNAL MODULE: ./src/model/input-error.ts
-var input_error = __webpack_require__(38250);
-// EXTERNAL MODULE: ./node_modules/@stdlib/stats-base-dists-chisquare-cdf/lib/index.js
-var lib = __webpack_require__(16328);
-var lib_default = /*#__PURE__*/__webpack_require__.n(lib);
-// EXTERNAL MODULE: ./node_modules/@stdlib/stats-base-dists-f-cdf/lib/index.js
-var stats_base_dists_f_cdf_lib = __webpack_require__(38207);
-var stats_base_dists_f_cdf_lib_default = /*#__PURE__*/__webpack_require__.n(stats_base_dists_f_cdf_lib);
+var input_error = __webpack_require__(8250);
+// EXTERNAL MODULE: ./src/model/special/log-gamma.ts
+var log_gamma = __webpack_require__(2231);
+;// CONCATENATED MODULE: ./src/model/special/incomplete-gamma.ts
+
+const TINY = 1e-300;
+const TOLERANCE = 4 * Number.EPSILON;
+/**
+ * x^a e^-x / Gamma(a). For a >= 10 Stirling's formula gives
+ * sqrt(a / (2 pi)) exp(a log1pMinus((x - a) / a) - mu(a)): x - a is exact near the peak, so large
+ * a loses nothing to cancelling logarithms (cf. Temme; DiDonato & Morris 1986, ACM TOMS 12).
+ */
+function gammaFront(a, x) {
+    if (a >= log_gamma/* STIRLING_FROM */.k0) {
+        const u = (x - a) / a;
+        // Far below the peak 1 + u has lost digits; ln(x / a) is exact enough there.
+        const power = u > -0.5 ? a * (0,log_gamma/* log1pMinus */._g)(u) : a * Math.log(x / a) - (x - a);
+        return Math.sqrt(a / (2 * Math.PI)) * Math.exp(power - (0,log_gamma/* stirlingCorrection */.np)(a));
+    }
+    return Math.exp(a * Math.log(x) - x - (0,log_gamma/* logGamma */.SX)(a));
+}
+/** sum_n x^n / (a (a + 1) ... (a + n)) (A&S 6.5.29; Numerical Recipes 3rd ed., 6.2.5). */
+function gammaSeries(a, x) {
+    let term = 1 / a;
+    let sum = term;
+    const steps = 1000 + Math.ceil(50 * Math.sqrt(a));
+    for (let n = 1; n <= steps; n++) {
+        term *= x / (a + n);
+        sum += term;
+        if (Math.abs(term) < Math.abs(sum) * TOLERANCE)
+            break;
+    }
+    return sum;
+}
+/**
+ * The continued fraction of Gamma(a, x) e^x x^-a (A&S 6.5.31; Numerical Recipes 3rd ed., 6.2.7)
+ * by the modified Lentz method; for x >= a + 1.
+ */
+function gammaFraction(a, x) {
+    let b = x + 1 - a;
+    let c = 1 / TINY;
+    let d = 1 / b;
+    let h = d;
+    const steps = 1000 + Math.ceil(50 * Math.sqrt(a));
+    for (let i = 1; i <= steps; i++) {
+        const an = -i * (i - a);
+        b += 2;
+        d = an * d + b;
+        if (Math.abs(d) < TINY)
+            d = TINY;
+        c = b + an / c;
+        if (Math.abs(c) < TINY)
+            c = TINY;
+        d = 1 / d;
+        const delta = d * c;
+        h *= delta;
+        if (Math.abs(delta - 1) < TOLERANCE)
+            break;
+    }
+    return h;
+}
+/**
+ * The regularised incomplete gamma function P(a, x) (upper = false) or Q(a, x) = 1 - P(a, x)
+ * (upper = true), a > 0, x >= 0: the series for x < a + 1, the continued fraction above, each
+ * computing its own side directly and the other as 1 minus it (the directly computed side is
+ * the smaller one, or close to it), so far tails keep their relative accuracy. NaN for a <= 0,
+ * x < 0 or NaN.
+ * @example regularizedGamma(1, 2, true) // e^-2 = 0.1353352832366127
+ */
+function incomplete_gamma_regularizedGamma(a, x, upper) {
+    if (!(a > 0) || !(x >= 0))
+        return Number.NaN;
+    if (x === 0)
+        return upper ? 1 : 0;
+    if (x === Infinity)
+        return upper ? 0 : 1;
+    if (x < a + 1) {
+        const lower = gammaFront(a, x) * gammaSeries(a, x);
+        return Math.min(1, Math.max(0, upper ? 1 - lower : lower));
+    }
+    const tail = gammaFront(a, x) * gammaFraction(a, x);
+    return Math.min(1, Math.max(0, upper ? tail : 1 - tail));
+}
+
+;// CONCATENATED MODULE: ./src/model/special/chi-square.ts
+
+/**
+ * Upper tail P(chi^2_k > q) = Q(k/2, q/2) (chi-square is the gamma law of shape k/2 and scale 2), computed directly for far tails.
+ * NaN for NaN input or k <= 0; 1 for q <= 0.
+ * @example chiSquareUpperTail(3.841458820694124, 1) // ≈ 0.05
+ */
+function chiSquareUpperTail(q, k) {
+    if (Number.isNaN(q))
+        return Number.NaN;
+    return incomplete_gamma_regularizedGamma(k / 2, Math.max(0, q / 2), true);
+}
+/**
+ * Lower tail (CDF) P(chi^2_k <= q) = P(k/2, q/2).
+ * @example chiSquareCdf(2, 2) // 1 - e^-1 = 0.6321205588285577
+ */
+function chiSquareCdf(q, k) {
+    if (Number.isNaN(q))
+        return Number.NaN;
+    return regularizedGamma(k / 2, Math.max(0, q / 2), false);
+}
+
+// EXTERNAL MODULE: ./src/model/special/incomplete-beta.ts
+var incomplete_beta = __webpack_require__(916);
+;// CONCATENATED MODULE: ./src/model/special/fisher-f.ts
+
+/**
+ * Upper tail P(F > f) of Fisher's F with d1 and d2 degrees of freedom:
+ * I_x(d2/2, d1/2) with x = d2 / (d2 + d1 f) (A&S 26.6.2), from the odds d1 f / d2 so that a far
+ * tail is computed directly. 1 for f <= 0; NaN for NaN input or d1, d2 not above 0.
+ * @example fisherUpperTail(4.964602743730711, 1, 10) // ≈ 0.05
+ */
+function fisherUpperTail(f, d1, d2) {
+    if (Number.isNaN(f) || !(d1 > 0 && d2 > 0))
+        return Number.NaN;
+    if (f <= 0)
+        return 1;
+    return (0,incomplete_beta/* regularizedBeta */.RL)(d2 / 2, d1 / 2, (0,incomplete_beta/* betaPointFromOdds */.rP)((d1 * f) / d2), false);
+}
+/**
+ * Lower tail (CDF) P(F <= f) = 1 - I_x(d2/2, d1/2) = I_(1-x)(d1/2, d2/2), computed directly.
+ * @example fisherCdf(1, 4, 4) // 0.5
+ */
+function fisherCdf(f, d1, d2) {
+    if (Number.isNaN(f) || !(d1 > 0 && d2 > 0))
+        return Number.NaN;
+    if (f <= 0)
+        return 0;
+    return regularizedBeta(d2 / 2, d1 / 2, betaPointFromOdds((d1 * f) / d2), true);
+}
+
 ;// CONCATENATED MODULE: ./src/model/hotelling.ts
 
 
@@ -65,8 +193,8 @@ function checkDistance(d2, p) {
 }
 /**
  * P(chi^2_p > d2): the tail of a squared Mahalanobis distance when mean and covariance are known
- * exactly (the large-history limit of hotellingTail). Computed as 1 - cdf, so it is accurate to
- * about 1e-16 absolute — far below any level a gate uses. An infinite d2 has tail 0.
+ * exactly (the large-history limit of hotellingTail): the upper incomplete gamma Q(p/2, d2/2),
+ * computed directly, so far tails keep their relative accuracy. An infinite d2 has tail 0.
  * Throws InputError on a negative or NaN d2 or p < 1.
  * @example chiSquareTail(3.841458820645, 1) // ≈ 0.05 (chi-square table, 1 degree of freedom)
  */
@@ -74,7 +202,7 @@ function chiSquareTail(d2, p) {
     checkDistance(d2, p);
     if (d2 === Infinity)
         return 0;
-    return Math.min(1, Math.max(0, 1 - lib_default()(d2, p)));
+    return chiSquareUpperTail(d2, p);
 }
 /**
  * Tail probability of a NEW run's squared Mahalanobis distance d2 from a mean and covariance
@@ -83,7 +211,7 @@ function chiSquareTail(d2, p) {
  * returns; the default) or 'unbiased' (divide by n - 1). With the n-1 covariance S_u,
  *   T^2 = d2_u n / (n + 1),  F = T^2 (n - p) / (p (n - 1)) ~ F(p, n - p)
  * (x_new - mean has covariance Sigma (1 + 1/n), independent of S_u). Since S_mle = S_u (n-1)/n,
- * d2_u = d2_mle (n - 1) / n. The F tail is taken as cdf(1/F) of F(n - p, p) — no 1 - cdf
+ * d2_u = d2_mle (n - 1) / n. The F tail is computed directly as an incomplete beta — no 1 - cdf
  * cancellation. Needs n > p. With a shrunk covariance this is an approximation (the F law holds
  * for the plain sample covariance). Throws InputError on bad d2, p < 1 or n <= p.
  *
@@ -103,12 +231,9 @@ function hotellingTail(d2, p, n, divisor = 'mle') {
     const unbiased = divisor === 'mle' ? (d2 * (n - 1)) / n : d2;
     const t2 = (unbiased * n) / (n + 1);
     const statistic = (t2 * (n - p)) / (p * (n - 1));
-    // P(F(p, m) > x) = P(F(m, p) < 1/x).
-    return stats_base_dists_f_cdf_lib_default()(1 / statistic, n - p, p);
+    return fisherUpperTail(statistic, p, n - p);
 }
 
-// EXTERNAL MODULE: ./node_modules/ml-matrix/matrix.mjs
-var ml_matrix_matrix = __webpack_require__(24002);
 ;// CONCATENATED MODULE: ./src/model/matrix-input.ts
 
 /**
@@ -138,6 +263,20 @@ function checkRows(rows, minRows) {
     return p;
 }
 
+;// CONCATENATED MODULE: ./src/model/matrix-library.ts
+let library;
+/**
+ * ml-matrix, loaded on first use: only the joint check of metric groups needs it, and loading it
+ * costs a `check` without groups several milliseconds at start-up. A synchronous require (the
+ * bundler turns it into a lazy module load) keeps shrunkCovariance and the Mahalanobis functions
+ * synchronous.
+ * @example matrixLibrary().Matrix.eye(2).get(0, 0) // 1
+ */
+function matrixLibrary() {
+    library ??= __webpack_require__(3076);
+    return library;
+}
+
 ;// CONCATENATED MODULE: ./src/model/ledoit-wolf.ts
 
 
@@ -159,7 +298,8 @@ function checkRows(rows, minRows) {
 function shrunkCovariance(rows) {
     const p = checkRows(rows, 2);
     const n = rows.length;
-    const x = new ml_matrix_matrix/* Matrix */.uq(rows.map((row) => [...row]));
+    const { Matrix } = matrixLibrary();
+    const x = new Matrix(rows.map((row) => [...row]));
     const mean = x.mean('column');
     // Centring first keeps large offsets (timings around 1e9 ns) from swamping the products.
     x.subRowVector(mean);
@@ -209,12 +349,13 @@ function solveCovariance(d, covariance) {
             fix: 'give the metrics a resolution, or leave constant metrics out of the joint check',
         });
     }
+    const { CholeskyDecomposition, Matrix } = matrixLibrary();
     for (const relative of RELATIVE_RIDGES) {
         const ridge = (relative * trace) / p;
-        const matrix = new ml_matrix_matrix/* Matrix */.uq(covariance.map((row, i) => row.map((v, j) => (i === j ? v + ridge : v))));
-        const cholesky = new ml_matrix_matrix/* CholeskyDecomposition */.oN(matrix);
+        const matrix = new Matrix(covariance.map((row, i) => row.map((v, j) => (i === j ? v + ridge : v))));
+        const cholesky = new CholeskyDecomposition(matrix);
         if (cholesky.isPositiveDefinite())
-            return cholesky.solve(ml_matrix_matrix/* Matrix */.uq.columnVector(d)).getColumn(0);
+            return cholesky.solve(Matrix.columnVector(d)).getColumn(0);
     }
     throw new input_error/* InputError */.d('the covariance is not positive definite, even with a small ridge', {
         fix: 'drop metrics that are copies or linear combinations of others, or use more runs',
@@ -257,7 +398,7 @@ function mahalanobisContributions(x, mean, covariance) {
 }
 
 // EXTERNAL MODULE: ./src/model/moments.ts
-var moments = __webpack_require__(88884);
+var moments = __webpack_require__(8884);
 ;// CONCATENATED MODULE: ./src/gate/analyse-group.ts
 
 
@@ -366,14 +507,14 @@ function decideGroup(name, frame, analysis, level, test) {
             (commonStatus === 'improved' && single.direction === 'better');
         const commonPhrase = `common move ${signed(analysis.common.z)} sd, tail ${(0,format_number/* formatNumber */.Z)(analysis.common.tail)}`;
         if (withCommon) {
-            return (0,decide_metric/* decideMetric */.n)(single, { significant: true, phrase: `${describe}; ${commonPhrase}, beyond the group's history; ${test.phrase}` });
+            return (0,decide_metric/* decideMetric */.nR)(single, { significant: true, phrase: `${describe}; ${commonPhrase}, beyond the group's history; ${test.phrase}` });
         }
         if (test.significant && main) {
             const direction = ownDirection(own.z, single.settings.worse === 'both');
-            return (0,decide_metric/* decideMetric */.n)({ ...single, direction }, { significant: true, phrase: `${describe}; ${test.phrase}` });
+            return (0,decide_metric/* decideMetric */.nR)({ ...single, direction }, { significant: true, phrase: `${describe}; ${test.phrase}` });
         }
         const quiet = `${describe}; ${commonPhrase} within the group's history; ${test.phrase}`;
-        return { ...(0,decide_metric/* decideMetric */.n)(single, { significant: false, phrase: quiet }), group: name };
+        return { ...(0,decide_metric/* decideMetric */.nR)(single, { significant: false, phrase: quiet }), group: name };
     });
     for (const m of members)
         m.group = name;
@@ -419,7 +560,7 @@ function groupReason(status, a, test, common, level) {
 // EXTERNAL MODULE: ./src/gate/resolution-floor.ts
 var resolution_floor = __webpack_require__(1198);
 // EXTERNAL MODULE: ./src/gate/sides.ts
-var sides = __webpack_require__(33979);
+var sides = __webpack_require__(3979);
 ;// CONCATENATED MODULE: ./src/gate/group-frame.ts
 
 
@@ -556,9 +697,9 @@ function learningGroup(name, members, rows, minRows, level) {
 }
 
 // EXTERNAL MODULE: ./src/gate/baseline.ts + 1 modules
-var gate_baseline = __webpack_require__(64614);
+var gate_baseline = __webpack_require__(4614);
 // EXTERNAL MODULE: ./src/gate/judge-metric.ts
-var judge_metric = __webpack_require__(81177);
+var judge_metric = __webpack_require__(1177);
 ;// CONCATENATED MODULE: ./src/gate/judge-name.ts
 
 
@@ -571,10 +712,19 @@ var judge_metric = __webpack_require__(81177);
 function metricNames(history, run) {
     const names = new Set(run.metrics.keys());
     for (const [name, column] of history.columns) {
-        if (column.values.some((v) => Number.isFinite(v)))
+        if (!names.has(name) && holdsValue(column.values))
             names.add(name);
     }
-    return [...names].sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
+    // The default sort compares strings by UTF-16 code units, the same order as `<`, without a
+    // callback per comparison.
+    return [...names].sort();
+}
+/** Whether any value is finite (a plain loop: `some` with a closure costs more per metric). */
+function holdsValue(values) {
+    for (let i = 0; i < values.length; i++)
+        if (Number.isFinite(values[i]))
+            return true;
+    return false;
 }
 /**
  * One metric up to its single-metric score: `ignored` by a rule, `missing` from this run, `new`,
@@ -586,17 +736,13 @@ function metricNames(history, run) {
 function judgeName(config, history, run, name) {
     const settings = (0,rules/* settingsFor */.z)(config, name);
     const measurement = run.metrics.get(name);
-    const plain = { name, cutoff: settings.cutoff, worse: settings.worse };
-    const own = measurement === undefined
-        ? {}
-        : { value: measurement.value, count: measurement.count, ...(measurement.unit === undefined ? {} : { unit: measurement.unit }) };
     if (settings.ignore) {
-        return { result: { ...plain, ...own, status: 'ignored', reason: 'matched a rule with ignore: true' } };
+        return { result: { ...plain(name, settings), ...own(measurement), status: 'ignored', reason: 'matched a rule with ignore: true' } };
     }
     const baseline = (0,gate_baseline/* selectBaseline */.w)(history, name, settings);
     if (measurement === undefined) {
         const runs = `${baseline.available} run${baseline.available === 1 ? '' : 's'}`;
-        return { result: { ...plain, status: 'missing', reason: `in the history (${runs}) but absent from this run` } };
+        return { result: { ...plain(name, settings), status: 'missing', reason: `in the history (${runs}) but absent from this run` } };
     }
     let value = measurement.value;
     if (settings.relativeTo !== undefined) {
@@ -604,19 +750,35 @@ function judgeName(config, history, run, name) {
         if (reference === undefined || !Number.isFinite(reference) || reference === 0) {
             const lacks = reference === undefined ? 'lacks' : `has ${reference} for`;
             const reason = `cannot be judged relative to ${settings.relativeTo}: this run ${lacks} that metric`;
-            return { result: { ...plain, ...own, status: baseline.values.length === 0 ? 'new' : 'missing', reason } };
+            const status = baseline.values.length === 0 ? 'new' : 'missing';
+            return { result: { ...plain(name, settings), ...own(measurement), status, reason } };
         }
         value /= reference;
     }
-    const extras = {
-        count: measurement.count,
-        // a ratio has no unit
-        ...(measurement.unit === undefined || settings.relativeTo !== undefined ? {} : { unit: measurement.unit }),
-        ...(baseline.since === undefined ? {} : { since: baseline.since }),
-        ...(baseline.relativeTo === undefined ? {} : { relativeTo: baseline.relativeTo }),
-    };
+    // Set key by key rather than spread: this runs once per metric.
+    const extras = { count: measurement.count };
+    // a ratio has no unit
+    if (measurement.unit !== undefined && settings.relativeTo === undefined)
+        extras.unit = measurement.unit;
+    if (baseline.since !== undefined)
+        extras.since = baseline.since;
+    if (baseline.relativeTo !== undefined)
+        extras.relativeTo = baseline.relativeTo;
     const score = (0,judge_metric/* scoreMetric */.zN)(name, settings, baseline.values, value, extras);
     return score.scored ? { score, baseline } : { result: score.result };
+}
+/** The fields every result of this metric starts with. */
+function plain(name, settings) {
+    return { name, cutoff: settings.cutoff, worse: settings.worse };
+}
+/** This run's own value, count and unit, for the results that are not scored. */
+function own(measurement) {
+    if (measurement === undefined)
+        return {};
+    const fields = { value: measurement.value, count: measurement.count };
+    if (measurement.unit !== undefined)
+        fields.unit = measurement.unit;
+    return fields;
 }
 
 ;// CONCATENATED MODULE: ./src/gate/report.ts
@@ -684,13 +846,16 @@ function runGate(input) {
         else
             finished.push(entry.result);
     }
-    const groupOutcome = judgeGroups(config, scored, (name) => (0,rules/* groupFor */.R)(config, name)?.name);
-    const lone = scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
-    const items = [
-        ...lone.map((e) => ({ tail: e.score.result.tail ?? 1, level: (0,tails/* cutoffLevel */.yp)(e.score.settings.cutoff) })),
-        ...groupOutcome.pending.map((g) => ({ tail: g.analysis.tail, level: g.level })),
-    ];
-    const tests = familyTests(items, config.family);
+    // Without groups or family control (the defaults) nothing below changes a lone score, so the
+    // per-metric group lookups and cutoff levels are skipped.
+    const groupOutcome = config.groups.length === 0 ? NO_GROUPS : judgeGroups(config, scored, (name) => (0,rules/* groupFor */.R)(config, name)?.name);
+    const lone = groupOutcome.judged.size === 0 ? scored : scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
+    const tests = config.family === 'none'
+        ? []
+        : familyTests([
+            ...lone.map((e) => ({ tail: e.score.result.tail ?? 1, level: (0,tails/* cutoffLevel */.yp)(e.score.settings.cutoff) })),
+            ...groupOutcome.pending.map((g) => ({ tail: g.analysis.tail, level: g.level })),
+        ], config.family);
     const metrics = [...finished];
     lone.forEach((e, i) => metrics.push(decideLone(e.score, tests[i])));
     const groups = [...groupOutcome.learning];
@@ -711,13 +876,19 @@ function runGate(input) {
 function decideLone(score, family) {
     if (family === undefined || !score.scored)
         return score.result;
-    return { ...(0,decide_metric/* decideMetric */.n)(score, family.test), adjusted: family.adjusted };
+    return { ...(0,decide_metric/* decideMetric */.nR)(score, family.test), adjusted: family.adjusted };
 }
+/** What judgeGroups returns when the config names no groups. */
+const NO_GROUPS = {
+    judged: new Set(),
+    pending: [],
+    learning: [],
+};
 
 
 /***/ }),
 
-/***/ 16934:
+/***/ 6934:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
