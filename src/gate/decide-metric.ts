@@ -19,8 +19,21 @@ export function plainTest(result: Pick<MetricResult, 'relativeDensity' | 'cutoff
   const significant = r < result.cutoff;
   return {
     significant,
-    phrase: `relative density ${formatNumber(r)} ${significant ? '<' : '≥'} cutoff ${formatNumber(result.cutoff)}`,
+    phrase: `relative density ${formatNumber(r)} ${significant ? '<' : '≥'} cutoff ${cutoffText(result.cutoff)}`,
   };
+}
+
+/** The last cutoff formatted, and its text: every metric usually shares one cutoff. */
+let lastCutoff = NaN;
+let lastCutoffText = '';
+
+/** formatNumber(cutoff), remembered for the last cutoff seen (a pure function's result). */
+function cutoffText(cutoff: number): string {
+  if (cutoff !== lastCutoff) {
+    lastCutoffText = formatNumber(cutoff);
+    lastCutoff = cutoff;
+  }
+  return lastCutoffText;
 }
 
 /**

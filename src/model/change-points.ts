@@ -50,10 +50,18 @@ function noiseSigma(n: number): number {
   const m = n - 1;
   const w = work;
   const c = centred;
-  for (let i = 1; i < n; i++) w[i - 1] = finite(c[i]! - c[i - 1]!, i);
+  for (let i = 1; i < n; i++) {
+    const d = c[i]! - c[i - 1]!;
+    if (!Number.isFinite(d)) throw notFinite(d, i);
+    w[i - 1] = d;
+  }
   const centre = medianInPlace(w, m);
   // Refilled in series order (not from the reordered buffer) so an overflow names its position.
-  for (let i = 1; i < n; i++) w[i - 1] = finite(Math.abs(c[i]! - c[i - 1]! - centre), i);
+  for (let i = 1; i < n; i++) {
+    const d = Math.abs(c[i]! - c[i - 1]! - centre);
+    if (!Number.isFinite(d)) throw notFinite(d, i);
+    w[i - 1] = d;
+  }
   const robust = (MAD_TO_SIGMA * medianInPlace(w, m)) / Math.SQRT2;
   if (robust > 0) return robust;
   // Summed in series order, as the differences come.
@@ -65,10 +73,10 @@ function noiseSigma(n: number): number {
   return Math.sqrt(squares / (2 * m));
 }
 
-/** x, or InputError when a difference overflowed (values near the largest double). */
-function finite(x: number, position: number): number {
-  if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${position} is not a finite number`);
-  return x;
+/** The error for a difference that overflowed (values near the largest double). Checked inline
+ * by the callers: a call per value is what a cold start pays for most. */
+function notFinite(x: number, position: number): InputError {
+  return new InputError(`value ${x} at position ${position} is not a finite number`);
 }
 
 /**
@@ -150,7 +158,11 @@ function prefixSums(n: number, sigma: number): void {
  * for every later end u, since C(s, u) >= C(s, t) + C(t, u), but t may only start a segment
  * ending at u >= t + m. So s is dropped at end t + m (when t has joined), not at once; dropping
  * it at t (plain PELT) could lose the optimum for the ends in between. With m = 1 that is the
- * next end, as in plain PELT. Candidates are compacted in place.
+ * next end, as in plain PELT.
+ * One pass over the candidates per end: the pruning test of the previous end (its totals are kept
+ * in totals[]) is applied while the candidates are compacted and scored for this end. On a series
+ * without a change nothing is pruned, so this pass is the whole O(n^2) cost; a second pass per end
+ * doubled it.
  */
 function optimalPartition(n: number, penalty: number, minSegment: number): void {
   const s1 = sum;
@@ -162,40 +174,50 @@ function optimalPartition(n: number, penalty: number, minSegment: number): void 
   const until = dropAt;
   f[0] = -penalty;
   let count = 0;
+  // The previous end's best total; -Infinity before the first end, so nothing is pruned then.
+  let lastBest = -Infinity;
   for (let end = minSegment; end <= n; end++) {
-    // The start that just became far enough back joins the candidates, if it can end a segment.
-    const fresh = end - minSegment;
-    if (fresh === 0 || fresh >= minSegment) {
-      kept[count++] = fresh;
-      until[fresh] = n + 1;
-    }
     const sumEnd = s1[end]!;
     const sumSqEnd = s2[end]!;
+    // A start worse by the penalty at end - 1 is beaten by end - 1 once that can start a segment.
+    const beatenFrom = end - 1 + minSegment;
     let bestValue = Infinity;
     let bestStart = 0;
+    let left = 0;
     for (let k = 0; k < count; k++) {
       const start = kept[k]!;
+      let drop = until[start]!;
+      if (t[k]! - penalty > lastBest && beatenFrom < drop) until[start] = drop = beatenFrom;
+      if (drop <= end) continue;
       // Segment cost C = sum z^2 - (sum z)^2 / length, never below 0 (rounding).
       const s = sumEnd - s1[start]!;
       const cost = Math.max(0, sumSqEnd - s2[start]! - (s * s) / (end - start));
       const total = f[start]! + cost + penalty;
-      t[k] = total;
+      kept[left] = start;
+      t[left++] = total;
       if (total < bestValue) {
         bestValue = total;
         bestStart = start;
       }
     }
-    f[end] = bestValue;
-    from[end] = bestStart;
-    // A start already worse by the penalty is beaten by `end` once `end` can start a segment.
-    const beatenFrom = end + minSegment;
-    let left = 0;
-    for (let k = 0; k < count; k++) {
-      const start = kept[k]!;
-      if (t[k]! - penalty > bestValue && beatenFrom < until[start]!) until[start] = beatenFrom;
-      if (until[start]! > end + 1) kept[left++] = start;
+    // The start that just became far enough back joins the candidates, if it can end a segment.
+    const fresh = end - minSegment;
+    if (fresh === 0 || fresh >= minSegment) {
+      until[fresh] = n + 1;
+      const s = sumEnd - s1[fresh]!;
+      const cost = Math.max(0, sumSqEnd - s2[fresh]! - (s * s) / (end - fresh));
+      const total = f[fresh]! + cost + penalty;
+      kept[left] = fresh;
+      t[left++] = total;
+      if (total < bestValue) {
+        bestValue = total;
+        bestStart = fresh;
+      }
     }
     count = left;
+    f[end] = bestValue;
+    from[end] = bestStart;
+    lastBest = bestValue;
   }
 }
 

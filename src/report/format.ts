@@ -3,6 +3,7 @@
  * read everywhere; a decimal comma would break copy-paste into other tools). Non-finite numbers
  * print as "n/a", never "NaN".
  */
+import { precisionText } from '../gate/precision-text.js';
 
 export const NOT_AVAILABLE = 'n/a';
 
@@ -18,7 +19,7 @@ export function formatNumber(x: number | undefined, digits = 4): string {
   const abs = Math.abs(x);
   if (abs < 1e-3 || abs >= 1e9) return x.toExponential(digits - 1).replace(/\.?0+e/, 'e').replace('e+', 'e');
   if (abs >= 10 ** digits) return String(Math.round(x));
-  return String(Number(x.toPrecision(digits)));
+  return precisionText(x, digits);
 }
 
 /** A value with its unit ("412.5 ns"); the unit must already be escaped for the target format. */
@@ -64,5 +65,18 @@ export function formatDensity(r: number | undefined): string {
 /** "2.6e-7 < 0.01": the relative density against the cutoff, the comparison the gate made. */
 export function formatAgainstCutoff(r: number | undefined, cutoff: number): string {
   if (r === undefined || !Number.isFinite(r)) return NOT_AVAILABLE;
-  return `${formatDensity(r)} ${r < cutoff ? '<' : '≥'} ${formatDensity(cutoff)}`;
+  return `${formatDensity(r)} ${r < cutoff ? '<' : '≥'} ${cutoffDensity(cutoff)}`;
+}
+
+/** The last cutoff formatted, and its text: every metric usually shares one cutoff. */
+let lastCutoff = NaN;
+let lastCutoffText = '';
+
+/** formatDensity(cutoff), remembered for the last cutoff seen (a pure function's result). */
+function cutoffDensity(cutoff: number): string {
+  if (cutoff !== lastCutoff) {
+    lastCutoffText = formatDensity(cutoff);
+    lastCutoff = cutoff;
+  }
+  return lastCutoffText;
 }
