@@ -1,9 +1,13 @@
 #!/usr/bin/env node
 import module from 'node:module';
+import { warmUp } from './cli/warm-up.js';
 
 // Node >= 22.1 keeps compiled code between runs (the runner's node24 has it; on 20 this is a no-op).
-// It covers only what loads after it, so everything else is imported below, not statically.
+// It covers only what loads after it, so everything else is imported below, not statically
+// (the warm-up is a few lines with dynamic imports only).
 (module as { enableCompileCache?: () => unknown }).enableCompileCache?.();
+// The command's chunks start loading now, beside commander's (src/cli/warm-up.ts).
+warmUp(process.argv.slice(2), process.cwd());
 const { runCli } = await import('./cli/main.js');
 
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.

@@ -8,7 +8,7 @@ import type { CommandContext } from './context.js';
 import { EXIT } from './exit-codes.js';
 import { loadConfig } from './load-config.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
-import { openHistory } from './open-history.js';
+import { openEarly } from './open-history.js';
 import { resolvePath } from './paths.js';
 import { recordRun } from './record-run.js';
 import { runInfoFrom, type RunInfoOptions } from './run-info.js';
@@ -38,9 +38,10 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   if (options.record && options.history === undefined) {
     throw new InputError('--record needs --history FILE', { where: '--record', fix: 'name the history file to append this run to' });
   }
+  const opening = openEarly(ctx, options.history, options.series);
   const config = await loadConfig(ctx, options.config);
   const run = await loadRun(ctx, config, options);
-  const { history, store } = await openHistory(ctx, options.history, options.series);
+  const { history, store } = await opening;
   if (options.history !== undefined && history.runs.length === 0) {
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);

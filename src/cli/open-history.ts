@@ -20,3 +20,17 @@ export async function openHistory(ctx: CommandContext, path: string | undefined,
   const store = createFileStore(resolvePath(ctx, path), series);
   return { history: await store.load(), store };
 }
+
+/**
+ * openHistory started now, to be awaited after the config and metric files are read: the history
+ * file's read (I/O, off the main thread) overlaps their loading instead of following it. Awaiting
+ * the result last keeps the order of failures: a bad config or metric file is still reported
+ * before an unreadable history. A result nobody awaits (an earlier step threw) is dropped quietly.
+ * @throws StoreError when awaited, as openHistory.
+ * @example const opening = openEarly(ctx, 'h.json', 'default'); ...; const { history } = await opening;
+ */
+export function openEarly(ctx: CommandContext, path: string | undefined, series: string): Promise<OpenedHistory> {
+  const opening = openHistory(ctx, path, series);
+  opening.catch(() => undefined);
+  return opening;
+}

@@ -99,6 +99,26 @@ describe('check', () => {
     expect(readFileSync(corrupt, 'utf8')).toBe('{"schema": "bellgate.history/2", "series": "default", "runs": ');
   });
 
+  // The history file is read while the config and metric files load (openEarly); the order of
+  // failures must stay that of the steps: config, then metric files, then the history.
+  it('an invalid config and a corrupt history: the config is reported (exit 2), not the history', async () => {
+    const bad = work.write('bad-first.yml', 'defaults:\n  cutoff: 7\n');
+    const corrupt = work.write('corrupt-too.json', '{"schema": "bellgate.history/2", "runs": ');
+    const r = await bellgate(work.dir, ['check', '--metrics', calm, '--history', corrupt, '--config', bad]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toMatch(/bad-first\.yml:2:\d+/);
+    expect(r.stderr).not.toContain('corrupt-too.json');
+    noStack(r.stderr);
+  });
+
+  it('a missing metric file and a corrupt history: the metric file is reported (exit 2)', async () => {
+    const corrupt = work.write('corrupt-three.json', '{"schema": "bellgate.history/2", "runs": ');
+    const r = await bellgate(work.dir, ['check', '--metrics', 'no-such-metrics.json', '--history', corrupt]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('no-such-metrics.json');
+    expect(r.stderr).not.toContain('corrupt-three.json');
+  });
+
   it('a history of another series: exit 3 saying which series it holds', async () => {
     const r = await bellgate(work.dir, ['check', '--metrics', calm, '--history', history, '--series', 'nightly']);
     expect(r.code).toBe(3);

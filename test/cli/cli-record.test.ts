@@ -45,4 +45,14 @@ describe('record', () => {
     expect(r.code).toBe(3);
     expect(readFileSync(bad, 'utf8')).toBe('not json at all');
   });
+
+  // The history is read while the metric files load (openEarly); a bad metric file still comes first.
+  it('a missing metric file and a corrupt history: exit 2 naming the metric file, history unchanged', async () => {
+    const bad = work.write('bad-history-2.json', 'not json either');
+    const r = await bellgate(work.dir, ['record', '--metrics', 'missing-run.json', '--history', bad]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain('missing-run.json');
+    expect(r.stderr).not.toContain('bad-history-2.json');
+    expect(readFileSync(bad, 'utf8')).toBe('not json either');
+  });
 });

@@ -1,7 +1,7 @@
 import type { CommandContext } from '../context.js';
 import { loadConfig } from '../load-config.js';
 import { loadRun, type MetricFileOptions } from '../load-run.js';
-import { openHistory } from '../open-history.js';
+import { openEarly } from '../open-history.js';
 import { recordRun } from '../record-run.js';
 import { runInfoFrom, type RunInfoOptions } from '../run-info.js';
 
@@ -18,9 +18,10 @@ export interface RecordOptions extends MetricFileOptions, RunInfoOptions {
  * @example await runRecord(ctx, { metrics: ['bench.json'], history: 'h.json', series: 'default' })
  */
 export async function runRecord(ctx: CommandContext, options: RecordOptions): Promise<void> {
+  const opening = openEarly(ctx, options.history, options.series);
   const config = await loadConfig(ctx, options.config);
   const run = await loadRun(ctx, config, options);
-  const { history, store } = await openHistory(ctx, options.history, options.series);
+  const { history, store } = await opening;
   const info = runInfoFrom(ctx, options);
   // openHistory always returns a store when a path is given; the guard keeps the types honest.
   if (!store) return;
