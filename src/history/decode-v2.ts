@@ -10,15 +10,17 @@ export const RUN_FIELDS = ['sha', 'ref', 'event', 'time'] as const;
  * one pass per column checks each entry and turns null (missing) into NaN — no object per value.
  * Every problem goes to `report` with its JSON path; when `report` returns (verify mode), the bad
  * entry becomes NaN and decoding carries on. Returns undefined when the shape is beyond use.
+ * `finiteRows`: the value columns are known to be arrays of finite doubles or NaN (the byte
+ * scan's rows), so only their lengths are checked.
  *
  * @example decodeV2(JSON.parse(text), throwingSink('h.json')) // { series, runs, columns }
  */
-export function decodeV2(root: Record<string, unknown>, report: ProblemSink): History | undefined {
+export function decodeV2(root: Record<string, unknown>, report: ProblemSink, finiteRows = false): History | undefined {
   const series = typeof root.series === 'string' ? root.series : '';
   if (typeof root.series !== 'string') report('series', `series must be a string, found ${typeName(root.series)}`);
   const runs = decodeRuns(root.runs, report);
   if (!runs) return undefined;
-  const columns = decodeMetrics(root.metrics, runs.length, report);
+  const columns = decodeMetrics(root.metrics, runs.length, report, finiteRows);
   if (!columns) return undefined;
   return { series, runs, columns };
 }
@@ -62,7 +64,7 @@ function decodeRuns(table: unknown, report: ProblemSink): RunInfo[] | undefined 
   return runs;
 }
 
-function decodeMetrics(table: unknown, runCount: number, report: ProblemSink): Map<string, MetricColumn> | undefined {
+function decodeMetrics(table: unknown, runCount: number, report: ProblemSink, finiteRows: boolean): Map<string, MetricColumn> | undefined {
   if (!isObject(table)) {
     report('metrics', `metrics must be an object {names, units, values}, found ${typeName(table)}`);
     return undefined;
@@ -89,7 +91,7 @@ function decodeMetrics(table: unknown, runCount: number, report: ProblemSink): M
       report(at('metrics.names', m), `metric ${JSON.stringify(name)} appears twice in metrics.names`, 'merge the two columns into one');
       continue;
     }
-    const column = checkColumn(values[m], m, runCount, report);
+    const column = checkColumn(values[m], m, runCount, report, finiteRows);
     if (!column) continue;
     const unit: unknown = unitsOk && units !== undefined ? (units as unknown[])[m] : null;
     if (typeof unit === 'string') columns.set(name, { unit, values: column });
@@ -104,14 +106,17 @@ function decodeMetrics(table: unknown, runCount: number, report: ProblemSink): M
 /**
  * Checks one value column in place, in one tight pass: numbers stay, null becomes NaN, anything
  * else is reported. NaN is already "missing": scanHistoryBytes reads null as NaN (JSON.parse never
- * makes one). Rows the scan read are arrays of doubles, so the usual pass only compares numbers.
+ * makes one). Rows the scan read are arrays of doubles, finite or NaN unless it says otherwise
+ * (`finiteRows`), and then only their lengths are checked.
  */
-function checkColumn(column: unknown, m: number, runCount: number, report: ProblemSink): number[] | undefined {
+function checkColumn(column: unknown, m: number, runCount: number, report: ProblemSink, finiteRows: boolean): number[] | undefined {
   if (!Array.isArray(column) || column.length !== runCount) {
     report(at('metrics.values', m), `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`,
       'the columns are ragged: a column was cut or extended by hand; restore the document from a backup');
     return undefined;
   }
+  // The scan's rows hold nothing this pass would change or report (a million entries at scale).
+  if (finiteRows) return column as number[];
   const cells = column as unknown[];
   for (let r = 0; r < runCount; r++) {
     const v = cells[r];

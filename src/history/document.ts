@@ -28,11 +28,20 @@ export const HISTORY_SCHEMA = 'bellgate.history/2';
 export const HISTORY_SCHEMA_V1 = 'bellgate.history/1';
 const CURRENT_VERSION = 2;
 
+/** How decodeHistoryDocument may trust what it is given. */
+export interface DecodeOptions {
+  /**
+   * metrics.values holds only arrays of doubles, each finite or NaN (scanHistoryBytes' rows when
+   * it says `finite`): the value columns' lengths are checked, not each entry again.
+   */
+  finiteRows?: boolean;
+}
+
 /**
  * Decodes an already parsed document of any known version, reporting problems to `report`.
  * Shared by parseHistory (stops at the first problem) and verifyHistory (lists them all).
  */
-export function decodeHistoryDocument(root: unknown, report: ProblemSink): History | undefined {
+export function decodeHistoryDocument(root: unknown, report: ProblemSink, options: DecodeOptions = {}): History | undefined {
   if (!isObject(root)) {
     report('', `a history document must be a JSON object, found ${typeName(root)}`);
     return undefined;
@@ -51,7 +60,7 @@ export function decodeHistoryDocument(root: unknown, report: ProblemSink): Histo
     return undefined;
   }
   if (n === 1) return decodeV1(root, report);
-  if (n === 2) return decodeV2(root, report);
+  if (n === 2) return decodeV2(root, report, options.finiteRows === true);
   report('schema', `unknown history document version ${n}`, 'point the history option at a file that Bellgate wrote');
   return undefined;
 }
@@ -86,7 +95,7 @@ export function parseHistory(text: string, source: string): History {
 export function parseHistoryBytes(bytes: Uint8Array, source: string): { history: History; rows?: ValueRows } {
   const scanned = scanHistoryBytes(bytes);
   if (scanned === undefined) return { history: parseHistory(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), source) };
-  const history = decodeHistoryDocument(scanned.root, throwingSink(source));
+  const history = decodeHistoryDocument(scanned.root, throwingSink(source), { finiteRows: scanned.finite });
   if (!history) throw new InputError('unreadable history document', { where: source });
   return { history, rows: { valuesStart: scanned.valuesStart, rowEnds: scanned.rowEnds } };
 }

@@ -7,6 +7,7 @@ import { emptyHistory, type History, type RunInfo } from './history.js';
 import { concurrentRuns, healConcurrent } from './merge.js';
 import { spliceHistory, writtenHistory, type WrittenHistory } from './splice-append.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
+import { primeScan } from './values-scan.js';
 
 /**
  * The largest history file the file store reads or writes: 500 MiB. The file is read into one
@@ -43,7 +44,11 @@ export function createFileStore(path: string, series: string): HistoryStore {
       // Stat first: past the limit, reading would fail with V8's unexplained "Invalid string length".
       const size = (await stat(path)).size;
       if (size > HISTORY_FILE_LIMIT) throw tooLarge(size, where, 'the history file is');
-      const bytes = await readFile(path);
+      const reading = readFile(path);
+      // While the bytes arrive, the reader's hot loop is run on a few rows and V8 starts
+      // optimizing it in the background (primeScan), instead of during the first real rows.
+      primeScan();
+      const bytes = await reading;
       if (bytes.length > HISTORY_FILE_LIMIT) throw tooLarge(bytes.length, where, 'the history file is');
       return bytes;
     } catch (cause) {

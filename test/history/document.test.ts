@@ -2,7 +2,7 @@ import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/model/input-error.js';
-import { parseHistory, serializeHistory } from '../../src/history/document.js';
+import { parseHistory, parseHistoryBytes, serializeHistory } from '../../src/history/document.js';
 import { emptyHistory, type History } from '../../src/history/history.js';
 import { historyArbitrary } from './arbitraries.js';
 
@@ -122,6 +122,23 @@ describe('parseHistory / serializeHistory', () => {
       const error = inputError(() => parseHistory(text, 'h.json'));
       expect(error.where).toBe('h.json at metrics.values[0][1]');
       expect(error.message).toMatch(/not finite/);
+    });
+
+    it('the bytes reader (byte scan, then only row lengths checked) refuses every broken document as the text reader does', () => {
+      // The reference is parseHistory, which JSON.parses the whole text and checks every entry.
+      const texts = [
+        ...cases.map(([, text]) => text),
+        v2({}).replace('[[1,2]]', '[[1,1e999]]'),
+        v2({}).replace('[[1,2]]', '[[1,-1e999]]'),
+        v2({ metrics: { names: ['a', 'b'], values: [[1, 2], [3]] } }),
+        v2({ metrics: { names: ['a', 'b'], values: [[1, 2], [3, 4, 5]] } }),
+        v2({ metrics: { names: ['a'], values: [[1, 1e308]] } }).replace('1e+308', '1e309'),
+      ];
+      for (const text of texts) {
+        const expected = inputError(() => parseHistory(text, 'h.json'));
+        const error = inputError(() => parseHistoryBytes(new TextEncoder().encode(text), 'h.json'));
+        expect([error.message, error.where, error.fix]).toEqual([expected.message, expected.where, expected.fix]);
+      }
     });
 
     it('arbitrary text throws only InputError (fast-check)', () => {

@@ -84,6 +84,19 @@ describe('scanHistoryBytes', () => {
     );
   });
 
+  it('says its rows are all finite (or NaN for null) exactly when JSON.parse finds no infinite value in them', () => {
+    fc.assert(
+      fc.property(fc.array(fc.array(cell, { maxLength: 6 }), { minLength: 1, maxLength: 5 }), (rows) => {
+        const text = `{"metrics":{"values":[${rows.map((r) => `[${r.join(',')}]`).join(',\n')}]}}`;
+        const scanned = scanHistoryBytes(bytesOf(text))!;
+        const parsed = JSON.parse(text) as { metrics: { values: (number | null)[][] } };
+        const infinite = parsed.metrics.values.some((row) => row.some((v) => v === Infinity || v === -Infinity));
+        expect(scanned.finite).toBe(!infinite);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
   it('never accepts a text JSON.parse refuses, and never reads one differently (random damage)', () => {
     fc.assert(
       fc.property(documentText, fc.nat(), fc.constantFrom('', '"', ',', '[', ']', '{', '}', '\\', 'x', '1', 'n', ':', '-', '.', 'e'), (text, at, insert) => {
