@@ -7,12 +7,13 @@ import { compareRuns, timeKey } from './run-order.js';
  * copied once (a native concat of the new value), instead of mergeHistories' sort and per-value map.
  * Returns undefined when that does not hold — an id already present, a run that sorts before the
  * newest, a history not in run order, duplicate ids, a column not aligned with the runs — and
- * appendRun then merges. The result equals mergeHistories(h, the one-run history): a stable sort
+ * appendRun then merges. `inPlace`: h's value arrays are extended (push) instead of copied, for a
+ * caller that gives h up (see appendRun); nothing is changed unless the fast path is taken. The result equals mergeHistories(h, the one-run history): a stable sort
  * of an ordered list is the list itself, so the merge would put the run last too.
  *
  * @example appendNewest(h, { id: '83-1', time: '2026-03-02T10:00:00Z' }, columns)?.runs.at(-1)?.id // '83-1'
  */
-export function appendNewest(h: History, info: RunInfo, added: Map<string, MetricColumn>): History | undefined {
+export function appendNewest(h: History, info: RunInfo, added: Map<string, MetricColumn>, inPlace = false): History | undefined {
   const n = h.runs.length;
   const ids = new Set<string>();
   // compareRuns, with each run's time read once (reading a time is the costly part).
@@ -36,8 +37,16 @@ export function appendNewest(h: History, info: RunInfo, added: Map<string, Metri
   const columns = new Map<string, MetricColumn>();
   for (const [name, column] of h.columns) {
     const fromRun = added.get(name);
-    // One allocation of n + 1 (a slice and a push would allocate n, then grow to about 1.5 n).
-    const values = column.values.concat(fromRun?.values[0] ?? NaN);
+    const value = fromRun?.values[0] ?? NaN;
+    let values: number[];
+    if (inPlace) {
+      // The rows a file store reads have room for one more entry (values-scan.ts): no copy.
+      values = column.values;
+      values.push(value);
+    } else {
+      // One allocation of n + 1 (a slice and a push would allocate n, then grow to about 1.5 n).
+      values = column.values.concat(value);
+    }
     const unit = fromRun?.unit ?? column.unit;
     columns.set(name, unit === undefined ? { values } : { unit, values });
   }

@@ -6,6 +6,8 @@
  * A History is never changed in place: appendRun, trimHistory and merges return new ones, and may
  * share unchanged value arrays with their input; the file store relies on that when it splices an
  * append into the text it read (splice-append.ts compares values with the arrays it decoded).
+ * The one exception adds and never changes: appendRun's `extendInPlace`, for a caller that gives
+ * the old History up, pushes the new run's values onto its arrays.
  */
 
 /** Who produced a run. `id` is the CI run id and attempt ("1234-1"), unique within a series. */

@@ -4,7 +4,8 @@ import type { History, RunInfo } from './history.js';
 /**
  * A document as read: its bytes, where its values rows lie, and what was decoded from them — the
  * run ids and each metric's row number and value array (taken at load, so a later change to the
- * History's Map cannot misplace a row; the arrays themselves are never changed in place).
+ * History's Map cannot misplace a row; the entries they held at load are never changed, though an
+ * append may extend them in place: see appendRun's extendInPlace).
  */
 export interface WrittenHistory {
   bytes: Uint8Array;

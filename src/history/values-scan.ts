@@ -162,8 +162,17 @@ class ByteReader {
       if (i >= b.length) throw new NotPlain();
       const c = b[i]!;
       if (c === QUOTE) {
-        // A string ends at the first quote no backslash escapes (\uXXXX holds neither).
-        i = stringEnd(b, i + 1);
+        // A string ends at the first quote no backslash escapes (\uXXXX holds neither). Read
+        // here byte by byte: the header's strings are short (run ids, times, names), and a call
+        // per string (indexOf) cost more than the steps it saved.
+        i++;
+        for (;;) {
+          const s = b[i];
+          if (s === undefined) throw new NotPlain();
+          i++;
+          if (s === QUOTE) break;
+          if (s === BACKSLASH) i++;
+        }
         if (depth === 0) break;
       } else if (c === OPEN_SQUARE || c === OPEN_CURLY) {
         depth++;
@@ -195,7 +204,8 @@ class ByteReader {
       this.expect(OPEN_SQUARE);
       // A copy of the previous row is an array of doubles of the right size: filling it stores
       // in place, where a new Array(n) would first hold tagged holes and be converted on the first double.
-      let row = rows.length > 0 ? (rows[rows.length - 1] as number[]).slice() : noDoubles();
+      // concat: one spare slot, so that a record appends its value to the row without a copy.
+      let row = rows.length > 0 ? (rows[rows.length - 1] as number[]).concat(NaN) : noDoubles();
       let end = plainRow(this.bytes, this.at, row);
       if (end < 0) {
         row = readRow(this.bytes, this.at, sizeHint);
@@ -211,20 +221,6 @@ class ByteReader {
       if (c !== COMMA) throw new NotPlain();
     }
   }
-}
-
-/**
- * The offset just past the closing quote of a string whose content starts at `from`. A quote
- * closes it unless an odd run of backslashes precedes it (\\uXXXX holds neither); indexOf keeps
- * the long id and name lists of the header from costing a step per byte.
- */
-function stringEnd(b: Uint8Array, from: number): number {
-  for (let i = b.indexOf(QUOTE, from); i >= 0; i = b.indexOf(QUOTE, i + 1)) {
-    let slashes = 0;
-    while (b[i - 1 - slashes] === BACKSLASH) slashes++;
-    if (slashes % 2 === 0) return i + 1;
-  }
-  throw new NotPlain();
 }
 
 /**

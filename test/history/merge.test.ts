@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
 import { InputError } from '../../src/model/input-error.js';
-import type { History, RunInfo } from '../../src/history/history.js';
+import type { History, MetricColumn, RunInfo } from '../../src/history/history.js';
 import { emptyHistory } from '../../src/history/history.js';
 import { appendRun, mergeHistories, trimHistory } from '../../src/history/merge.js';
 import { cell, historyArbitrary, metricName, runInfo } from './arbitraries.js';
@@ -183,6 +183,33 @@ describe('appendRun equals the merge with a one-run history', () => {
         expect(got.trimmed).toBe(expected.trimmed);
       }),
       { numRuns: 500, seed: 7 },
+    );
+  });
+
+  it('with extendInPlace gives the same History, only adding to the input arrays (their old entries unchanged)', () => {
+    fc.assert(
+      fc.property(cases, ({ raw, ordered, trimmed, reuse, fresh, info, bump, run: r }) => {
+        const h = ordered ? mergeHistories(raw, emptyHistory(raw.series)) : raw;
+        if (trimmed !== undefined) h.trimmed = trimmed;
+        const newest = h.runs.at(-1)?.time;
+        const id = !fresh && h.runs.length > 0 ? (h.runs[reuse % h.runs.length] as RunInfo).id : `new-${reuse}`;
+        const time = fresh && newest !== undefined ? new Date(Date.parse(newest) + bump).toISOString() : info.time;
+        const next: RunInfo = time === undefined ? { ...info, id } : { ...info, id, time };
+        const expected = slow(h, next, r);
+        const before = structuredClone(h);
+        const got = appendRun(h, next, r, { extendInPlace: true });
+        expect(got).toEqual(expected);
+        expect([...got.columns.keys()]).toEqual([...expected.columns.keys()]);
+        expect(got.trimmed).toBe(expected.trimmed);
+        // The runs and series stay readable; each array keeps its entries and gains at most one.
+        expect(h.runs).toEqual(before.runs);
+        for (const [name, column] of before.columns) {
+          const now = (h.columns.get(name) as MetricColumn).values;
+          expect(now.slice(0, column.values.length)).toEqual(column.values);
+          expect(now.length - column.values.length).toBeLessThanOrEqual(1);
+        }
+      }),
+      { numRuns: 500, seed: 11 },
     );
   });
 
