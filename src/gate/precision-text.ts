@@ -17,5 +17,5 @@ export function precisionText(x: number, digits: number): string {
   let end = fixed.length;
   while (fixed.charCodeAt(end - 1) === 48) end--; // '0'
   if (fixed.charCodeAt(end - 1) === 46) end--; // '.'
-  return end === fixed.length ? fixed : fixed.slice(0, end);
+  return fixed.slice(0, end);
 }

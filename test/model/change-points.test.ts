@@ -144,6 +144,33 @@ describe('detectChangePoints', () => {
     );
   });
 
+  it('property: equals the plain optimal partition where a split barely pays or barely does not (the no-change shortcut)', () => {
+    // Pure-noise windows of the gate's size (the shortcut's common case), and windows with one or
+    // two steps sized so the best split gains about the penalty: a step d at b in n runs of unit
+    // noise gains about d^2 b (n - b) / n (Killick et al. 2012's cost), so d = sqrt(penalty n /
+    // (b (n - b))) x factor puts the gain near the penalty, where the shortcut hands over to PELT.
+    const window = fc.record({
+      n: fc.integer({ min: 10, max: 80 }),
+      cut: fc.double({ min: 0.1, max: 0.9, noNaN: true }),
+      second: fc.double({ min: 0, max: 1, noNaN: true }),
+      factor: fc.constantFrom(0, 0.5, 0.8, 0.9, 1, 1.1, 1.25, 1.5, 2),
+      steps: fc.constantFrom(1, 2),
+      seed: fc.integer({ min: 1, max: 1e6 }),
+      offset: fc.constantFrom(0, 250, 1e6),
+    });
+    fc.assert(
+      fc.property(window, ({ n, cut, second, factor, steps: count, seed, offset }) => {
+        const normal = seededNormal(seed);
+        const b = Math.max(1, Math.min(n - 1, Math.round(cut * n)));
+        const d = factor * Math.sqrt((3 * Math.log(n) * n) / (b * (n - b)));
+        const c = Math.max(b, Math.min(n - 1, b + Math.round(second * (n - b))));
+        const values = Array.from({ length: n }, (_, i) => offset + normal() + (i >= b ? d : 0) - (count === 2 && i >= c ? d : 0));
+        expect(detectChangePoints(values)).toEqual(optimalPartition(values, 3 * Math.log(n), 5));
+      }),
+      { numRuns: 600, seed: 2718 },
+    );
+  });
+
   it('respects the shortest segment and handles short or constant series', () => {
     // A 3-run burst cannot become its own segment with minSegment 5.
     const burst = [...steps([[30, 10]], 0.5, 21)];
