@@ -94,12 +94,18 @@ function keepsOld(values: readonly number[], old: readonly number[], drop: numbe
  */
 function rowBody(bytes: Uint8Array, where: ValueRows, index: number, drop: number): number | undefined {
   const end = where.rowEnds[index] as number;
-  let at = bytes.indexOf(OPEN_SQUARE, index === 0 ? where.valuesStart + 1 : (where.rowEnds[index - 1] as number) + 1) + 1;
-  for (let d = 0; d < drop; d++) {
-    at = bytes.indexOf(COMMA, at) + 1;
-    if (at === 0 || at > end) return undefined;
-  }
-  return at;
+  let at = byteAfter(bytes, OPEN_SQUARE, index === 0 ? where.valuesStart + 1 : (where.rowEnds[index - 1] as number) + 1, end);
+  for (let d = 0; d < drop && at > 0; d++) at = byteAfter(bytes, COMMA, at, end);
+  return at > 0 ? at : undefined;
+}
+
+/**
+ * The offset just past the first `byte` in bytes[from, end), or 0 when there is none. A plain loop:
+ * the byte is a few steps away, where a Buffer indexOf call per row costs more than the search.
+ */
+function byteAfter(bytes: Uint8Array, byte: number, from: number, end: number): number {
+  for (let i = from; i < end; i++) if (bytes[i] === byte) return i + 1;
+  return 0;
 }
 
 /** head + "[" row "]" joined by ",\n" + HISTORY_TAIL, into one buffer. Rows are ASCII; the head may not be. */
