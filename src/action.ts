@@ -5,8 +5,10 @@ import { warmUpAction } from './github/warm-up.js';
 // It covers only what loads after it, so the action itself is imported below, not statically
 // (the warm-up is a few lines with dynamic imports only).
 (module as { enableCompileCache?: () => unknown }).enableCompileCache?.();
-// The config and metric readers start loading now, beside the action's chunk (src/github/warm-up.ts).
+// The action's chunk loads first; the config and metric readers start loading right behind it
+// instead of after it (src/github/warm-up.ts).
+const loadingAction = import('./github/start.js');
 warmUpAction(process.env);
-const { startAction } = await import('./github/start.js');
+const { startAction } = await loadingAction;
 
 await startAction();

@@ -6,9 +6,11 @@ import { warmUp } from './cli/warm-up.js';
 // It covers only what loads after it, so everything else is imported below, not statically
 // (the warm-up is a few lines with dynamic imports only).
 (module as { enableCompileCache?: () => unknown }).enableCompileCache?.();
-// The command's chunks start loading now, beside commander's (src/cli/warm-up.ts).
+// Commander and the command table load first; the command's own chunks start loading right
+// behind them instead of after them (src/cli/warm-up.ts).
+const loadingMain = import('./cli/main.js');
 warmUp(process.argv.slice(2), process.cwd());
-const { runCli } = await import('./cli/main.js');
+const { runCli } = await loadingMain;
 
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
 process.stdout.on('error', (e: NodeJS.ErrnoException) => {
