@@ -51,32 +51,67 @@ export function selectBaseline(history: History, name: string, settings: MetricS
 
 /**
  * The plain scale (no transform, no ratio), where no value can be refused: walks back from the
- * newest run only until `window` values are found, and just counts the older ones.
+ * newest run only until `window` values are found (copied in one slice when none is missing), and
+ * names their runs or counts the older ones only when asked (see NewestWindow).
  */
 function newestWindow(history: History, column: readonly number[], window: number): SelectedBaseline {
   const count = Math.min(column.length, history.runs.length);
-  const values: number[] = [];
-  const runIds: string[] = [];
-  let i = count - 1;
-  for (; i >= 0 && values.length < window; i--) {
-    const x = column[i]!;
-    if (!Number.isFinite(x)) continue;
-    values.push(x);
-    runIds.push(history.runs[i]!.id);
+  let first = count;
+  let found = 0;
+  while (first > 0 && found < window) {
+    first--;
+    if (Number.isFinite(column[first]!)) found++;
   }
-  const newer = values.length;
-  const older = i;
-  return {
-    values: values.reverse(),
-    runIds: runIds.reverse(),
-    // Counted only when read (the `missing` wording): walking the older runs of every metric was
-    // most of the selection's cost on a long history.
-    get available(): number {
-      let available = newer;
-      for (let k = older; k >= 0; k--) if (Number.isFinite(column[k]!)) available++;
-      return available;
-    },
-  };
+  let values: number[];
+  if (found === count - first) {
+    values = column.slice(first, count);
+  } else {
+    values = [];
+    for (let i = first; i < count; i++) if (Number.isFinite(column[i]!)) values.push(column[i]!);
+  }
+  return new NewestWindow(values, history, column, first, count);
+}
+
+/**
+ * A plain-scale baseline: the values, with the run ids and the `available` count computed when
+ * read. Most metrics need neither (no level change, no group, not missing), and building an id
+ * array per metric, or walking every older run, was most of the selection's cost on a long history.
+ */
+class NewestWindow implements SelectedBaseline {
+  readonly #history: History;
+  readonly #column: readonly number[];
+  /** Runs [first, count) hold the window (with any missing values skipped). */
+  readonly #first: number;
+  readonly #count: number;
+  #runIds: string[] | undefined;
+
+  constructor(
+    readonly values: number[],
+    history: History,
+    column: readonly number[],
+    first: number,
+    count: number,
+  ) {
+    this.#history = history;
+    this.#column = column;
+    this.#first = first;
+    this.#count = count;
+  }
+
+  get runIds(): string[] {
+    if (this.#runIds === undefined) {
+      const ids: string[] = [];
+      for (let i = this.#first; i < this.#count; i++) if (Number.isFinite(this.#column[i]!)) ids.push(this.#history.runs[i]!.id);
+      this.#runIds = ids;
+    }
+    return this.#runIds;
+  }
+
+  get available(): number {
+    let available = this.values.length;
+    for (let k = this.#first - 1; k >= 0; k--) if (Number.isFinite(this.#column[k]!)) available++;
+    return available;
+  }
 }
 
 /**
@@ -124,13 +159,16 @@ function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedB
   const starts = detectChangePoints(baseline.values);
   const last = starts.filter((s) => s > 0 && s < baseline.values.length).at(-1);
   if (last === undefined || baseline.values.length - last < minRuns) return baseline;
-  return {
-    ...baseline,
+  // Field by field: a NewestWindow's run ids and count are getters, which a spread would drop.
+  const shortened: SelectedBaseline = {
     values: baseline.values.slice(last),
     runIds: baseline.runIds.slice(last),
     since: baseline.runIds[last]!,
+    available: baseline.available,
     window: { values: baseline.values, runIds: baseline.runIds },
   };
+  if (baseline.relativeTo !== undefined) shortened.relativeTo = baseline.relativeTo;
+  return shortened;
 }
 
 function toHistoryFitScale(x: number, settings: MetricSettings, name: string, runId: string): number {

@@ -21,9 +21,23 @@ function selectInPlace(buffer: Float64Array, length: number, k: number): number 
   while (hi > lo) {
     const mid = (lo + hi) >> 1;
     // Median of three: order buffer[lo] <= buffer[mid] <= buffer[hi], pivot on the middle one.
-    if (buffer[mid]! < buffer[lo]!) swap(buffer, mid, lo);
-    if (buffer[hi]! < buffer[lo]!) swap(buffer, hi, lo);
-    if (buffer[hi]! < buffer[mid]!) swap(buffer, hi, mid);
+    // Swaps written out: a call per swap is most of the cost before V8 optimises this.
+    // (lo and mid are the same index for two values, so each swap works on the buffer.)
+    if (buffer[mid]! < buffer[lo]!) {
+      const t = buffer[mid]!;
+      buffer[mid] = buffer[lo]!;
+      buffer[lo] = t;
+    }
+    if (buffer[hi]! < buffer[lo]!) {
+      const t = buffer[hi]!;
+      buffer[hi] = buffer[lo]!;
+      buffer[lo] = t;
+    }
+    if (buffer[hi]! < buffer[mid]!) {
+      const t = buffer[hi]!;
+      buffer[hi] = buffer[mid]!;
+      buffer[mid] = t;
+    }
     const pivot = buffer[mid]!;
     let i = lo;
     let j = hi;
@@ -31,7 +45,9 @@ function selectInPlace(buffer: Float64Array, length: number, k: number): number 
       while (buffer[i]! < pivot) i++;
       while (buffer[j]! > pivot) j--;
       if (i <= j) {
-        swap(buffer, i, j);
+        const t = buffer[i]!;
+        buffer[i] = buffer[j]!;
+        buffer[j] = t;
         i++;
         j--;
       }
@@ -42,12 +58,6 @@ function selectInPlace(buffer: Float64Array, length: number, k: number): number 
     else break;
   }
   return buffer[k]!;
-}
-
-function swap(buffer: Float64Array, a: number, b: number): void {
-  const t = buffer[a]!;
-  buffer[a] = buffer[b]!;
-  buffer[b] = t;
 }
 
 /**
