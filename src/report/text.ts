@@ -81,8 +81,12 @@ export function renderText(report: Report, options: { color: boolean }): string 
       cells[at + 4] = shown.change;
       cells[at + 5] = shown.sigma;
       cells[at + 6] = shown.density;
+      // Only the name and the cells carrying a unit can hold a surrogate pair: the glyphs and the
+      // formatted numbers are single UTF-16 units each, so their width is their length.
+      const unitCells = m.unit !== undefined;
       for (let i = 0; i < columns; i++) {
-        const width = codePoints(cells[at + i]!);
+        const cell = cells[at + i]!;
+        const width = i === 1 || (unitCells && (i === 2 || i === 3)) ? codePoints(cell) : cell.length;
         cellWidths[at + i] = width;
         if (width > widths[i]!) widths[i] = width;
       }

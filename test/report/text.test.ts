@@ -69,4 +69,28 @@ describe('renderText', () => {
     expect(rows.some((r) => r.includes(`long/${'n'.repeat(74)}…`))).toBe(true);
     expect(rows.some((r) => r.includes('emoji/\u{1F680}\u{1F680}-x'))).toBe(true);
   });
+
+  it('aligns all seven columns with astral units, no units and mixed statuses (widths counted only where a pair can occur)', () => {
+    // Reference as above: Array.from code points. Units with a surrogate pair, units without, no
+    // unit at all; regressed, improved and ok rows; the glyph and number cells are in the BMP.
+    const extra = [
+      { name: 'unitless/a', centre: 5, spread: 1, now: 5.2, status: 'ok' as const },
+      { name: 'astral/\u{1F680}', unit: '\u{1D4C8}/op', centre: 12, spread: 1, now: 19, status: 'regressed' as const },
+      { name: 'astral/unit', unit: '\u{1F552}', centre: 1200, spread: 10, now: 1150, status: 'improved' as const, worse: 'higher' as const },
+      { name: 'unitless/\u{1F680}\u{1F680}', centre: 0.004, spread: 0.0001, now: 0.0041, status: 'ok' as const },
+    ];
+    const lines = renderText(makeFixture(extra).report, { color: false }).split('\n');
+    const header = lines.find((l) => l.startsWith('status'))!;
+    const start = (line: string, text: string): number => Array.from(line.slice(0, line.indexOf(text))).length;
+    const columns = ['metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density'].map((word) => start(header, word));
+    const rows = lines.filter((l) => /^[▲▼●] /.test(l));
+    expect(rows.length).toBe(4 + extra.length);
+    for (const row of rows) {
+      const points = Array.from(row);
+      for (const column of columns) {
+        expect(points.slice(column - 2, column).join('')).toBe('  ');
+        expect(points[column]).not.toBe(' ');
+      }
+    }
+  });
 });
