@@ -5,9 +5,20 @@ import { DEFAULT_CONFIG_PATHS } from '../config/locate.js';
 /** What a warm-up can start loading: a command's module, the config reader, the JSON metric reader. */
 export type WarmUpPart = 'check' | 'record' | 'config' | 'json';
 
+/**
+ * The check flow's module. `check`, `demo` and the warm-up all import it through here: one import
+ * site gives the bundle one set of chunks for it (two sites in different chunks got two sets, and
+ * `check` then waited for a second copy of check-flow after the warm-up had loaded the first).
+ * @example const { performCheck } = await importCheckFlow();
+ */
+export const importCheckFlow = () => import('./check-flow.js');
+
+/** The record command's module, through one import site for the same reason as importCheckFlow. */
+export const importRecord = () => import('./run/record.js');
+
 const LOADERS: Record<WarmUpPart, () => Promise<unknown>> = {
-  check: () => import('./check-flow.js'),
-  record: () => import('./run/record.js'),
+  check: importCheckFlow,
+  record: importRecord,
   config: () => import('../config/read.js'),
   json: () => import('../inputs/json.js'),
 };

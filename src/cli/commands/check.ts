@@ -1,6 +1,7 @@
 import { Command, Option } from 'commander';
 import type { CommandContext } from '../context.js';
 import type { CheckOptions } from '../check-flow.js';
+import { importCheckFlow } from '../warm-up.js';
 import { configOption, examples, historyOption, inputOptions, metricsOption, REPORT_FORMATS, runInfoOptions, seriesOption } from '../options.js';
 
 /**
@@ -28,7 +29,7 @@ export function checkCommand(ctx: CommandContext): Command {
   cmd.addHelpText('after', '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\n');
   return cmd.action(async (options: CheckOptions) => {
     // Imported when the command runs, so `--help` and the other commands never load the gate.
-    const { performCheck, verdictExitCode } = await import('../check-flow.js');
+    const { performCheck, verdictExitCode } = await importCheckFlow();
     const report = await performCheck(ctx, options);
     ctx.exitCode = verdictExitCode(report);
   });
