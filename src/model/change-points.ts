@@ -94,8 +94,10 @@ function notFinite(x: number, position: number): InputError {
  * for a change's two parameters (where and the new mean), so pure noise rarely splits.
  * Returns the indices where new segments start, ascending; empty when none (also for a
  * constant series or fewer than 2 x minSegment values). Segment sums come from prefix sums of
- * the median-centred values, so large offsets do not lose precision. Work: O(n) expected with
- * pruning, O(n^2) worst case. Throws InputError on non-finite values or bad options.
+ * the median-centred values, so large offsets do not lose precision. Work: a window without a
+ * change is usually settled by an exact bound (noSplitPays, about n^2 / 8 multiply-adds) without
+ * PELT; PELT itself is O(n) expected when changes are frequent, O(n^2) on long quiet stretches
+ * (nothing can be pruned there). Throws InputError on non-finite values or bad options.
  *
  * @example detectChangePoints([...Array(40).fill(100), ...Array(30).fill(110)].map((x, i) => x + (i % 2) * 0.5)) // [40]
  */
