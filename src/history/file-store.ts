@@ -1,4 +1,3 @@
-import { randomBytes } from 'node:crypto';
 import { mkdir, open, readFile, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
 import { InputError } from '../model/input-error.js';
@@ -153,6 +152,8 @@ export function createFileStore(path: string, series: string): HistoryStore {
 
 async function writeAtomically(path: string, text: string | Uint8Array, where: string): Promise<void> {
   const folder = dirname(path);
+  // node:crypto loads here, on write, not at start-up: a check only reads.
+  const { randomBytes } = await import('node:crypto');
   // Short enough that a file name near the 255-byte limit still has room for its temp file.
   const temp = join(folder, `.${basename(path).slice(0, 32)}.${randomBytes(6).toString('hex')}.tmp`);
   try {
