@@ -2,6 +2,7 @@ import type { MetricResult, Status } from './report.js';
 import type { MetricScore } from './judge-metric.js';
 import { formatNumber, formatPercent } from './format-number.js';
 import { describeTolerance } from './tolerance.js';
+import { rememberLast } from './remember-last.js';
 
 /** The outcome of the test a metric's decision rests on, and how to say it in a reason. */
 export interface Test {
@@ -23,18 +24,8 @@ export function plainTest(result: Pick<MetricResult, 'relativeDensity' | 'cutoff
   };
 }
 
-/** The last cutoff formatted, and its text: every metric usually shares one cutoff. */
-let lastCutoff = NaN;
-let lastCutoffText = '';
-
-/** formatNumber(cutoff), remembered for the last cutoff seen (a pure function's result). */
-function cutoffText(cutoff: number): string {
-  if (cutoff !== lastCutoff) {
-    lastCutoffText = formatNumber(cutoff);
-    lastCutoff = cutoff;
-  }
-  return lastCutoffText;
-}
+/** formatNumber(cutoff), computed once for the cutoff the metrics share. */
+const cutoffText = rememberLast(formatNumber);
 
 /**
  * Status and reason of a scored metric from the outcome of its test (plain, family-adjusted or

@@ -4,6 +4,7 @@
  * print as "n/a", never "NaN".
  */
 import { precisionText } from '../gate/precision-text.js';
+import { rememberLast } from '../gate/remember-last.js';
 
 export const NOT_AVAILABLE = 'n/a';
 
@@ -68,15 +69,5 @@ export function formatAgainstCutoff(r: number | undefined, cutoff: number): stri
   return `${formatDensity(r)} ${r < cutoff ? '<' : '≥'} ${cutoffDensity(cutoff)}`;
 }
 
-/** The last cutoff formatted, and its text: every metric usually shares one cutoff. */
-let lastCutoff = NaN;
-let lastCutoffText = '';
-
-/** formatDensity(cutoff), remembered for the last cutoff seen (a pure function's result). */
-function cutoffDensity(cutoff: number): string {
-  if (cutoff !== lastCutoff) {
-    lastCutoffText = formatDensity(cutoff);
-    lastCutoff = cutoff;
-  }
-  return lastCutoffText;
-}
+/** formatDensity(cutoff), computed once for the cutoff the metrics share. */
+const cutoffDensity = rememberLast(formatDensity);
