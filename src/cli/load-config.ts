@@ -1,9 +1,6 @@
-import { anyConfigPresent, DEFAULT_CONFIG_PATHS, loadConfigLazily } from '../config/locate.js';
+import { loadConfigLazily } from '../config/locate.js';
 import type { Config } from '../config/types.js';
 import type { CommandContext } from './context.js';
-
-/** Where a config is looked for without --config (src/config/locate.ts). */
-export const LOOKED_UP_CONFIGS: readonly string[] = DEFAULT_CONFIG_PATHS;
 
 /**
  * The config for this invocation: `--config FILE` must exist (InputError naming it otherwise);

@@ -1,8 +1,5 @@
-import { DEFAULT_CONFIG_PATHS, loadConfigLazily } from '../config/locate.js';
+import { loadConfigLazily } from '../config/locate.js';
 import type { Config } from '../config/types.js';
-
-/** Where a config is looked for when the `config` input is left at its default (src/config/locate.ts). */
-export const LOOKED_UP_CONFIGS: readonly string[] = DEFAULT_CONFIG_PATHS;
 
 /**
  * The action's config: a named file must exist; left at the default, `.github/bellgate.yml` (or
@@ -11,5 +8,5 @@ export const LOOKED_UP_CONFIGS: readonly string[] = DEFAULT_CONFIG_PATHS;
  * @example await loadActionConfig(undefined, '/home/runner/work/repo') // defaults without a config file
  */
 export async function loadActionConfig(path: string | undefined, cwd: string): Promise<Config> {
-  return loadConfigLazily(path, cwd, path !== undefined);
+  return loadConfigLazily(path, cwd);
 }
