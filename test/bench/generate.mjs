@@ -4,18 +4,8 @@
 // Deterministic: the same sizes and seed give the same bytes.
 import { closeSync, mkdirSync, openSync, writeFileSync, writeSync } from 'node:fs';
 import { join } from 'node:path';
-
-/** Small seeded generator (mulberry32); Math.random would make runs differ. */
-export function seededRandom(seed) {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// The demo's generator (mulberry32): seeded, so every bench run writes the same bytes.
+import { mulberry32 as seededRandom } from '../../examples/demo/generate.mjs';
 
 /** A standard normal draw (Box-Muller). */
 function gaussian(random) {

@@ -13,7 +13,7 @@ import { branchStore, ids, infoOf, onBranch, runOf } from '../history/branch-hel
 import { startFaultProxy, type FaultProxy } from './standins/fault-proxy.js';
 import { startGitDataStandin, type GitDataStandin } from './standins/git-data.js';
 import { startRestStandin, type RestStandin } from './standins/rest-api.js';
-import { seededRandom } from './standins/seeded-random.js';
+import { seededUniform as seededRandom } from '../model/random.js';
 
 const RATE = 0.15;
 // A slow answer arrives well after the client's timeout; ordinary answers arrive well before it.

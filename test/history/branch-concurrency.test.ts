@@ -4,7 +4,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { appendRun } from '../../src/history/merge.js';
 import { startGitDataStandin, type GitDataStandin } from '../e2e/standins/git-data.js';
-import { seededRandom } from '../e2e/standins/seeded-random.js';
+import { seededUniform as seededRandom } from '../model/random.js';
 import { branchStore, ids, infoOf, onBranch, runOf } from './branch-helpers.js';
 
 const WRITERS = 5;

@@ -7,7 +7,7 @@ import { backoffMs } from '../../src/history/branch-backoff.js';
 import { createGitDataClient } from '../../src/history/branch-rest.js';
 import { startFaultProxy, type FaultKind } from '../e2e/standins/fault-proxy.js';
 import { startGitDataStandin, type GitDataStandin } from '../e2e/standins/git-data.js';
-import { seededRandom } from '../e2e/standins/seeded-random.js';
+import { seededUniform as seededRandom } from '../model/random.js';
 import { TOKEN } from './branch-helpers.js';
 
 let git: GitDataStandin;

@@ -8,7 +8,7 @@
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
-import { seededRandom } from './seeded-random.js';
+import { seededUniform as seededRandom } from '../../model/random.js';
 
 export const FAULT_KINDS = ['500', '502', '429', 'drop-before', 'drop-after', 'truncate', 'slow'] as const;
 export type FaultKind = (typeof FAULT_KINDS)[number];
