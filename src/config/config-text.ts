@@ -1,23 +1,31 @@
 import { explainSchemaErrors } from './explain-schema-errors.js';
 import { exactMatcher, type GlobCompiler } from './name-matchers.js';
-import { problemsError } from './problems.js';
+import { problemsError, type ConfigProblem } from './problems.js';
 import { schemaErrors } from './schema.js';
 import { globList, toConfig } from './to-config.js';
 import type { Config } from './types.js';
-import { readYamlTree, type YamlTree } from './yaml-tree.js';
+import type { YamlTree } from './tree.js';
 
 type Data = Record<string, unknown>;
 
 /**
- * The first two steps of reading a config: YAML under hard limits (yaml-tree.ts), then the JSON
- * Schema (bellgate.schema.json). Returns the tree, or undefined when the file is empty or holds
- * only comments (the defaults apply). A leading byte-order mark is dropped.
- * @throws InputError listing every problem, at the "source:line:col" of the first.
- * @example checkedConfigTree('cutoff: 2\n', 'b.yml') // throws InputError at b.yml:1:1 (unknown key)
+ * The text a config reader parses: a leading byte-order mark dropped (editors on Windows write one).
+ * @example configBody('\uFEFFkeep: 9\n') // 'keep: 9\n'
  */
-export function checkedConfigTree(text: string, source: string): YamlTree | undefined {
-  const body = text.startsWith('\uFEFF') ? text.slice(1) : text;
-  const { tree, problems } = readYamlTree(body);
+export function configBody(text: string): string {
+  return text.startsWith('\uFEFF') ? text.slice(1) : text;
+}
+
+/**
+ * The second step of reading a config, after the YAML was read (readYamlTree in yaml-tree.ts, or
+ * readPlainYaml in plain-yaml.ts for plain text): its problems, then the JSON Schema
+ * (bellgate.schema.json). Returns the tree, or undefined when the file is empty or holds only
+ * comments (the defaults apply). Imports no YAML code, so the lazy reader can skip the library.
+ * @throws InputError listing every problem, at the "source:line:col" of the first.
+ * @example checkedConfigTree(readYamlTree('cutoff: 2\n'), 'b.yml') // throws InputError at b.yml:1:1 (unknown key)
+ */
+export function checkedConfigTree(read: { tree?: YamlTree; problems: ConfigProblem[] }, source: string): YamlTree | undefined {
+  const { tree, problems } = read;
   if (!tree || problems.length > 0) throw problemsError(problems, source);
   if (tree.value === undefined || tree.value === null) return undefined;
   const schemaProblems = explainSchemaErrors(schemaErrors(tree.value), tree);
@@ -28,7 +36,7 @@ export function checkedConfigTree(text: string, source: string): YamlTree | unde
 /**
  * The last step: the Config from a checked tree (to-config.ts), with the rules' globs compiled by
  * `globs`. @throws InputError for what the schema cannot say (a bad glob, window < min-runs, ...).
- * @example configFromTree(checkedConfigTree('keep: 900\n', 'b.yml')!, 'b.yml', exactNameCompiler).keep // 900
+ * @example configFromTree(checkedConfigTree(readYamlTree('keep: 900\n'), 'b.yml')!, 'b.yml', exactNameCompiler).keep // 900
  */
 export function configFromTree(tree: YamlTree, source: string, globs: GlobCompiler): Config {
   const built = toConfig(tree.value, tree, source, globs);

@@ -3,7 +3,7 @@ import { didYouMean } from './did-you-mean.js';
 import type { ConfigProblem } from './problems.js';
 import { configSchema } from './schema.js';
 import { describeAllowed, describeValue } from './wording.js';
-import { pointerSegment, type Position, type YamlTree } from './yaml-tree.js';
+import { pointerSegment, type Position, type YamlTree } from './tree.js';
 
 type SchemaNode = Record<string, unknown>;
 

@@ -1,7 +1,8 @@
-import { checkedConfigTree, configFromTree } from './config-text.js';
+import { checkedConfigTree, configBody, configFromTree } from './config-text.js';
 import { defaultConfig } from './defaults.js';
 import { picomatchCompiler } from './glob-matcher.js';
 import type { Config } from './types.js';
+import { readYamlTree } from './yaml-tree.js';
 
 export { defaultConfig };
 
@@ -18,7 +19,7 @@ export { defaultConfig };
  * @example parseConfig('defaults:\n  cuttoff: 0.05\n', 'bellgate.yml') // throws InputError at bellgate.yml:2:3, fix 'did you mean "cutoff"?'
  */
 export function parseConfig(text: string, source: string): Config {
-  const tree = checkedConfigTree(text, source);
+  const tree = checkedConfigTree(readYamlTree(configBody(text)), source);
   if (tree === undefined) return { ...defaultConfig(), source };
   return configFromTree(tree, source, picomatchCompiler);
 }

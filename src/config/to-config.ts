@@ -3,7 +3,7 @@ import type { GlobCompiler } from './name-matchers.js';
 import type { ConfigProblem } from './problems.js';
 import { parseTolerance } from './tolerance.js';
 import type { Config, Family, GroupSpec, MetricRule, MetricSettings } from './types.js';
-import type { Position, YamlTree } from './yaml-tree.js';
+import type { Position, YamlTree } from './tree.js';
 
 type Data = Record<string, unknown>;
 

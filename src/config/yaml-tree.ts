@@ -1,5 +1,6 @@
 import { Composer, LineCounter, Parser, isAlias, isMap, isScalar, isSeq, type Document, type Node } from 'yaml';
 import type { ConfigProblem } from './problems.js';
+import { pointerSegment, type Position, type YamlTree } from './tree.js';
 import {
   MAX_ALIAS_COUNT,
   MAX_CONFIG_CHARS,
@@ -9,32 +10,9 @@ import {
   prescanShape,
 } from './yaml-limits.js';
 
-export interface Position {
-  line: number;
-  col: number;
-}
-
-/** A YAML document as plain data (null-prototype objects), with where each value and key was written. */
-export interface YamlTree {
-  /** undefined when the document is empty or only comments. */
-  value: unknown;
-  /** Position of the value at a JSON pointer ("/metrics/0/match"). */
-  valueAt: Map<string, Position>;
-  /** Position of the key whose value sits at a JSON pointer. */
-  keyAt: Map<string, Position>;
-}
-
 /** Thrown inside the builder to stop at a limit; turned into a problem by readYamlTree. */
 class Stop {
   constructor(readonly problem: ConfigProblem) {}
-}
-
-/**
- * JSON pointer segment escaping (RFC 6901: "~" -> "~0", "/" -> "~1"), the same as ajv's instancePath.
- * @example pointerSegment('size/app.js') // 'size~1app.js'
- */
-export function pointerSegment(key: string | number): string {
-  return String(key).replace(/~/g, '~0').replace(/\//g, '~1');
 }
 
 /**
