@@ -1,6 +1,5 @@
 import { join } from 'node:path';
 import type { Report } from '../gate/report.js';
-import { artifactName } from '../history/artifact-name.js';
 import type { History } from '../history/history.js';
 import type { RunContext } from './context.js';
 import { describeError } from './describe-error.js';
@@ -12,10 +11,12 @@ import type { ActionDeps } from './run-action.js';
  * @example await uploadHtml(deps, context, 'ci', report, history, 90)
  */
 export async function uploadHtml(deps: ActionDeps, context: RunContext, series: string, report: Report, history: History, retentionDays: number): Promise<void> {
+  // Imported here, on the html-report path only: d3, the page code and node:crypto (artifact names)
+  // stay out of every other run.
+  const { artifactName } = await import('../history/artifact-name.js');
   // One artifact per series and attempt: artifact names must be unique within a workflow run.
   const name = `${artifactName('bellgate-report', series)}-${context.attempt}`;
   try {
-    // Imported here, on the html-report path only: d3 and the page code stay out of every other run.
     const { renderHtmlReport } = await import('../report/html.js');
     const html = renderHtmlReport({ report, history, generatedAt: deps.now().toISOString() });
     await deps.writeText(join(context.runnerTemp, 'bellgate', `${name}.html`), html);

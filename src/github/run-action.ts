@@ -14,11 +14,9 @@
  * - NOTICE only: an event that is checked but never recorded (e.g. `release`).
  * Nothing prints a stack trace or the token (it is masked first).
  */
-import { join } from 'node:path';
 import { settingsFor } from '../config/rules.js';
 import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
-import { artifactName } from '../history/artifact-name.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
@@ -36,6 +34,7 @@ import { loadHistory, recordRun, runInfo } from './history-step.js';
 import { uploadHtml } from './html-report.js';
 import { OUTPUT, readActionInputs } from './inputs.js';
 import { postComment } from './pr-comment.js';
+import { reportPath } from './report-path.js';
 import type { ActionSink } from './sink.js';
 import { createHistoryStore, type StoreSpec } from './store-factory.js';
 
@@ -135,11 +134,11 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const runUrl = `${context.serverUrl}/${context.owner}/${context.repo}/actions/runs/${context.runNumericId}`;
   const marker = commentMarker(series);
   const markdown = renderMarkdown(report, { marker, runUrl });
-  const reportPath = join(context.runnerTemp, 'bellgate', `${artifactName('report', series)}.json`);
-  await deps.writeText(reportPath, renderJson(report));
+  const reportAt = reportPath(context.runnerTemp, series);
+  await deps.writeText(reportAt, renderJson(report));
   sink.setOutput(OUTPUT.verdict, report.verdict);
   sink.setOutput(OUTPUT.regressed, String(regressed));
-  sink.setOutput(OUTPUT.report, reportPath);
+  sink.setOutput(OUTPUT.report, reportAt);
   try {
     await sink.appendSummary(markdown);
   } catch (error) {

@@ -4,7 +4,6 @@
  */
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import { createFileStore } from '../history/file-store.js';
-import { dataBranchName, DEFAULT_DATA_BRANCH } from '../history/branch-path.js';
 import type { HistoryStore } from '../history/store.js';
 import { InputError } from '../model/input-error.js';
 import type { GitHubApi } from './api.js';
@@ -27,7 +26,7 @@ export interface StoreSpec {
 }
 
 /** Builds one kind of store. The artifact and branch stores load on use: a file store (and the
- * start-up of every run) need not pay for their zip reader and API code. */
+ * start-up of every run) need not pay for their zip reader, API code and node:crypto. */
 export type StoreBuilder = (spec: StoreSpec) => HistoryStore | Promise<HistoryStore>;
 
 export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
@@ -52,6 +51,7 @@ export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
  * among the code it measures.
  */
 async function buildBranchStore(s: StoreSpec): Promise<HistoryStore> {
+  const { dataBranchName, DEFAULT_DATA_BRANCH } = await import('../history/branch-path.js');
   const branch = dataBranchName(s.history === DEFAULT_HISTORY ? DEFAULT_DATA_BRANCH : s.history);
   if (branch === s.baselineBranch) {
     throw new InputError(`input \`history\` names the baseline branch "${branch}" as the data branch`, {

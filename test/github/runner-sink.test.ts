@@ -7,7 +7,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, afterEach, describe, expect, it, vi } from 'vitest';
 import type { AnnotationProps } from '../../src/github/sink.js';
-import { createRunnerSink, workflowCommand } from '../../src/github/runner-sink.js';
+import { createRunnerSink, keyValueEntry, workflowCommand } from '../../src/github/runner-sink.js';
 
 const dir = mkdtempSync(join(tmpdir(), 'bellgate-runner-sink-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -91,6 +91,16 @@ describe('createRunnerSink writes what @actions/core writes', () => {
     const plain = (file: string): string => readFileSync(file, 'utf8').replace(/ghadelimiter_[0-9a-f-]{36}/g, 'DELIMITER');
     expect(plain(mineFile)).toBe(plain(theirs));
     expect(plain(mineFile)).toContain('multi<<DELIMITER\nline one\nline two\n\nDELIMITER\n');
+  });
+
+  it('each entry gets its own delimiter, of the shape @actions/core writes, and a value holding it is refused', () => {
+    const delimiters = Array.from({ length: 200 }, () => /<<(ghadelimiter_[0-9a-f-]{36})\n/.exec(keyValueEntry('a', 'b'))?.[1]);
+    expect(delimiters.every((d) => d !== undefined && /^ghadelimiter_[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/.test(d))).toBe(true);
+    expect(new Set(delimiters).size).toBe(200);
+    const spy = vi.spyOn(Math, 'random').mockReturnValue(0.5);
+    const fixed = /<<(ghadelimiter_[0-9a-f-]{36})\n/.exec(keyValueEntry('a', 'b'))![1]!;
+    expect(() => keyValueEntry('a', `x${fixed}y`)).toThrow(/contains its delimiter/);
+    spy.mockRestore();
   });
 
   it('without GITHUB_OUTPUT: the set-output command, as @actions/core falls back to', () => {
