@@ -15,16 +15,10 @@ import type { Config } from './types.js';
 export async function parseConfigLazily(text: string, source: string): Promise<Config> {
   const body = configBody(text);
   const plain = readPlainYaml(body);
-  const read = plain !== undefined ? { tree: plain, problems: [] } : (await importYamlTree()).readYamlTree(body);
+  const read = plain !== undefined ? { tree: plain, problems: [] } : (await import('./yaml-tree.js')).readYamlTree(body);
   const tree = checkedConfigTree(read, source);
   if (tree === undefined) return { ...defaultConfig(), source };
   const globs = needsGlobLibrary(tree.value) ? (await import('./glob-matcher.js')).picomatchCompiler : exactNameCompiler;
   return configFromTree(tree, source, globs);
 }
 
-/**
- * The YAML reader (yaml-tree.ts and the library) for configs that are not plain. The warm-ups
- * start it through this one import site too, so the bundle has one chunk for it.
- * @example const { readYamlTree } = await importYamlTree();
- */
-export const importYamlTree = () => import('./yaml-tree.js');
