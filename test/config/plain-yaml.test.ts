@@ -149,7 +149,7 @@ describe('readPlainYaml on written examples', () => {
       'keep: 1010',
       '# gate settings\nfamily: holm\nkeep: 900\n\ndefaults:   # for every metric\n  cutoff: 0.01\n  window: 60\n  tolerance: 2%\n  change-points: false\n',
       'limits:\n    max-file-bytes: 16777216\n    max-metrics: 1000\ninput-format: json\n',
-      'a:\n  b:\n    c: -0\n  # back out\n d: 1\n'.replace(' d:', '  d:'),
+      'a:\n  b:\n    c: -0\n  # back out\n  d: 1\n',
       '__proto__: 1\nconstructor: x\n',
     ]) {
       expect(agreesWithLibrary(text), text).toBe(true);
@@ -169,10 +169,10 @@ describe('readPlainYaml on written examples', () => {
       'match: [a, b]\n', 'limits: {max-metrics: 5}\n', 'a: b, c\n', 'metrics:\n  - match: a\n', '- a\n',
       'a: &x 1\nb: *x\n', 'a: !!str 1\n', 'a: |\n  text\n', 'a: >\n  text\n', '---\nkeep: 5\n', 'keep: 5\n...\n',
       '%YAML 1.2\n---\nkeep: 5\n', 'keep:\n', 'defaults:\nkeep: 5\n', 'keep: 5\nkeep: 6\n', '1key: 5\n', 'a.b: 5\n',
-      '"keep": 5\n', 'keep : 5\n', 'a: b: c\n', 'a: b #c # d: e\n'.replace(' #c # d: e', ':c'), 'a: b#c\n', 'a: ~\n',
+      '"keep": 5\n', 'keep : 5\n', 'a: b: c\n', 'a: b:c\n', 'a: b#c\n', 'a: ~\n',
       'a: null\n', 'a: True\n', 'a: 0x1F\n', 'a: .5\n', 'a: 1_000\n', 'a: .inf\n', 'a: 012\n', 'a: 1e400\n', 'a: +1\n',
       'true: 1\n', 'null: 1\n', 'a: 1\n  b: 2\n', 'a:\n    b: 1\n  c: 2\n', '  a: 1\n', 'a: word\n  continued\n',
-      `a: ${'x'.repeat(2000)}\n`, `${'k: 1\n'.repeat(1)}${'# pad\n'.repeat(12_000)}`,
+      `a: ${'x'.repeat(2000)}\n`, `k: 1\n${'# pad\n'.repeat(12_000)}`,
     ];
     for (const text of declined) expect(readPlainYaml(text), JSON.stringify(text.slice(0, 40))).toBeUndefined();
   });
