@@ -9,7 +9,6 @@
  * writes the same bytes as @actions/core 3 (test/github/runner-sink.test.ts compares the two).
  */
 import { accessSync, appendFileSync, constants, existsSync } from 'node:fs';
-import { appendFile } from 'node:fs/promises';
 import { EOL } from 'node:os';
 import type { ActionSink, AnnotationProps } from './sink.js';
 
@@ -123,7 +122,8 @@ export function createRunnerSink(edges: RunnerEdges = defaultEdges()): ActionSin
       } catch {
         throw new Error(`Unable to access summary file: '${file}'. Check if the file has correct read/write permissions.`);
       }
-      await appendFile(file, md + EOL, { encoding: 'utf8' });
+      // Synchronous, as the outputs are: at the end of a run an await only lets queued V8 tasks run.
+      appendFileSync(file, md + EOL, { encoding: 'utf8' });
     },
   };
 }

@@ -6,7 +6,7 @@ import { emptyHistory, type History, type RunInfo } from './history.js';
 import { concurrentRuns, healConcurrent } from './merge.js';
 import { spliceHistory, writtenHistory, type WrittenHistory } from './splice-append.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
-import { primeScan } from './values-scan.js';
+import { PRIME_FROM, primeScan } from './values-scan.js';
 
 /**
  * The largest history file the file store reads or writes: 500 MiB. The file is read into one
@@ -15,9 +15,6 @@ import { primeScan } from './values-scan.js';
  * At 5 significant digits that is about 14,000 runs x 5,000 metrics; `keep` bounds it.
  */
 export const HISTORY_FILE_LIMIT = 500 * 1024 * 1024;
-
-/** From this size on (about 70,000 values) load primes the byte reader while the file is read. */
-const PRIME_FROM = 512 * 1024;
 
 /**
  * A history kept in one local file (any version readable, version 2 written).

@@ -197,7 +197,8 @@ class ByteReader {
       this.at++;
       return { rows, rowEnds };
     }
-    primeScan();
+    // A small document is read before priming would pay for itself (600 calls of plainRow).
+    if (this.bytes.length >= PRIME_FROM) primeScan();
     // Rows are as long as the runs table, so the first row's length sizes the others' arrays.
     let sizeHint = 0;
     for (;;) {
@@ -233,6 +234,11 @@ const PRIMER_TEXT = '[1,-0.5,null,0,12.25,-3] [4,5.5] [6,-7,null,0.125,987654321
 const PRIMER_ROWS = [1, 26, 34, 66];
 /** V8 (Node 20) marks plainRow for optimizing after about 450 calls on these rows. */
 const PRIMER_CALLS = 600;
+/**
+ * Documents from this size on (about 70,000 values) are primed; a smaller one (a PR check's
+ * 100 x 50 history is 40 KB) is read before the priming would pay for itself.
+ */
+export const PRIME_FROM = 512 * 1024;
 let primed = false;
 
 /**
