@@ -87,13 +87,14 @@ export function parseHistory(text: string, source: string): History {
  * the small rest. Any document the scan declines (another version, odd but valid JSON, or broken
  * JSON) is decoded from its UTF-8 text by parseHistory, so the result and every error are the same.
  * `rows` says where each values row lies in `bytes` (present only after a scan), which lets a
- * store write an append by splicing the old rows (splice-append.ts).
+ * store write an append by splicing the old rows (splice-append.ts). `scan: false` skips the scan
+ * (a small document is parsed faster whole).
  * Throws InputError exactly as parseHistory.
  *
  * @example parseHistoryBytes(readFileSync('h.json'), 'h.json').history.runs.length // 120
  */
-export function parseHistoryBytes(bytes: Uint8Array, source: string): { history: History; rows?: ValueRows } {
-  const scanned = scanHistoryBytes(bytes);
+export function parseHistoryBytes(bytes: Uint8Array, source: string, scan = true): { history: History; rows?: ValueRows } {
+  const scanned = scan ? scanHistoryBytes(bytes) : undefined;
   if (scanned === undefined) return { history: parseHistory(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), source) };
   const history = decodeHistoryDocument(scanned.root, throwingSink(source), { finiteRows: scanned.finite });
   if (!history) throw new InputError('unreadable history document', { where: source });

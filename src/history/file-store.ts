@@ -6,7 +6,7 @@ import { emptyHistory, type History, type RunInfo } from './history.js';
 import { concurrentRuns, healConcurrent } from './merge.js';
 import { spliceHistory, writtenHistory, type WrittenHistory } from './splice-append.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
-import { PRIME_FROM, primeScan } from './values-scan.js';
+import { primeScan, SCAN_FROM } from './values-scan.js';
 
 /**
  * The largest history file the file store reads or writes: 500 MiB. The file is read into one
@@ -44,10 +44,10 @@ export function createFileStore(path: string, series: string): HistoryStore {
       const size = (await stat(path)).size;
       if (size > HISTORY_FILE_LIMIT) throw tooLarge(size, where, 'the history file is');
       const reading = readFile(path);
-      // While the bytes arrive, the reader's hot loop is run on a few rows and V8 starts
-      // optimizing it in the background (primeScan), instead of during the first real rows.
-      // A small file is read before that would pay off (100 runs x 50 metrics: ~40 KB).
-      if (size >= PRIME_FROM) primeScan();
+      // While the bytes of a large file arrive, the byte reader's hot loop is run on a few rows
+      // and V8 starts optimizing it in the background (primeScan), instead of during the first
+      // real rows. A small file is read by JSON.parse (parseBytes).
+      if (size >= SCAN_FROM) primeScan();
       const bytes = await reading;
       if (bytes.length > HISTORY_FILE_LIMIT) throw tooLarge(bytes.length, where, 'the history file is');
       return bytes;
@@ -62,11 +62,14 @@ export function createFileStore(path: string, series: string): HistoryStore {
     }
   }
 
-  /** The bytes read as a history of this series (parseHistoryBytes), or the StoreError why not. */
+  /**
+   * The bytes read as a history of this series (parseHistoryBytes: by the byte reader from
+   * SCAN_FROM on, which also gives the rows an append splices), or the StoreError why not.
+   */
   function parseBytes(bytes: Uint8Array): ReturnType<typeof parseHistoryBytes> {
     let read: ReturnType<typeof parseHistoryBytes>;
     try {
-      read = parseHistoryBytes(bytes, path);
+      read = parseHistoryBytes(bytes, path, bytes.length >= SCAN_FROM);
     } catch (cause) {
       if (!(cause instanceof InputError)) throw cause;
       throw new StoreError(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
@@ -104,7 +107,8 @@ export function createFileStore(path: string, series: string): HistoryStore {
         loaded.push({ bytes, runs: history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })) });
       }
       // The bytes are kept only when they can be spliced (a plain version-2 document).
-      if (rows !== undefined) written = writtenHistory(bytes, rows, history);
+      // A document read whole (below SCAN_FROM) has its rows found by the first splice.
+      written = writtenHistory(bytes, rows, history);
       return history;
     },
     async save(h: History, readCount: number): Promise<void> {

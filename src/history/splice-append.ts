@@ -1,5 +1,6 @@
 import { checkRuns, checkStorable, HISTORY_TAIL, historyHead, type ValueRows } from './document.js';
 import type { History, RunInfo } from './history.js';
+import { scanHistoryBytes } from './values-scan.js';
 
 /**
  * A document as read: its bytes, where its values rows lie, and what was decoded from them — the
@@ -9,20 +10,28 @@ import type { History, RunInfo } from './history.js';
  */
 export interface WrittenHistory {
   bytes: Uint8Array;
-  rows: ValueRows;
+  /** Undefined when the document was parsed whole (JSON.parse): spliceHistory then scans the bytes for them. */
+  rows: ValueRows | undefined;
   runIds: readonly string[];
   columns: ReadonlyMap<string, { index: number; values: readonly number[] }>;
 }
 
 /**
  * What spliceHistory needs to know of a document parseHistoryBytes read (bytes, rows) into `history`.
+ * Without `rows` (a small document parsed whole) they are found by a scan if a splice is asked for.
  *
- * @example const { history, rows } = parseHistoryBytes(bytes, path); if (rows) written = writtenHistory(bytes, rows, history);
+ * @example const { history, rows } = parseHistoryBytes(bytes, path); written = writtenHistory(bytes, rows, history);
  */
-export function writtenHistory(bytes: Uint8Array, rows: ValueRows, history: History): WrittenHistory {
+export function writtenHistory(bytes: Uint8Array, rows: ValueRows | undefined, history: History): WrittenHistory {
   const columns = new Map<string, { index: number; values: readonly number[] }>();
   for (const [name, column] of history.columns) columns.set(name, { index: columns.size, values: column.values });
   return { bytes, rows, runIds: history.runs.map((r) => r.id), columns };
+}
+
+/** Where the rows of a document lie, by the byte reader; undefined when it declines the bytes. */
+function scannedRows(bytes: Uint8Array): ValueRows | undefined {
+  const scanned = scanHistoryBytes(bytes);
+  return scanned === undefined ? undefined : { valuesStart: scanned.valuesStart, rowEnds: scanned.rowEnds };
 }
 
 const COMMA = 0x2c;
@@ -47,7 +56,9 @@ type Row = { from: number; to: number; tail: string } | string;
  */
 export function spliceHistory(h: History, written: WrittenHistory): Buffer | undefined {
   checkRuns(h);
-  const { bytes, rows: where, runIds, columns: baseRows } = written;
+  const { bytes, runIds, columns: baseRows } = written;
+  const where = written.rows ?? scannedRows(bytes);
+  if (where === undefined) return undefined;
   const drop = h.runs.length === 0 ? -1 : runIds.indexOf((h.runs[0] as RunInfo).id);
   const kept = runIds.length - drop;
   if (drop < 0 || kept > h.runs.length || baseRows.size !== where.rowEnds.length) return undefined;
