@@ -1,4 +1,4 @@
-import { runGate } from '../gate/gate.js';
+import { prepareGate, runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
@@ -46,6 +46,7 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
   }
+  await prepareGate(config);
   const report = runGate({ config, history, run, series: options.series });
 
   ctx.io.stdout(ensureNewline(render(ctx, report, options.format)));

@@ -2,6 +2,7 @@ import type { Config } from '../config/types.js';
 import { groupFor } from '../config/rules.js';
 import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
+import { loadMatrixLibrary } from '../model/matrix-library.js';
 import { cutoffLevel } from '../model/tails.js';
 import { decideMetric, type Test } from './decide-metric.js';
 import { familyTests } from './family-test.js';
@@ -22,11 +23,21 @@ export interface GateInput {
 }
 
 /**
+ * Loads what runGate needs beyond its own code for this config: ml-matrix when the config names
+ * groups (their joint check), nothing otherwise. Await it before runGate.
+ * @example await prepareGate(config); const report = runGate({ config, history, run, series });
+ */
+export async function prepareGate(config: Config): Promise<void> {
+  if (config.groups.length > 0) await loadMatrixLibrary();
+}
+
+/**
  * The decision (DESIGN.md "Statistics", issue 6): every metric of the run and of the history is
  * scored against its baseline (selectBaseline, scoreMetric); metrics in a configured group are
  * judged together (judgeGroups); with `family` set, the tails of all remaining decisions are
  * adjusted together (familyTests); then the verdict. Pure: no I/O, no clock.
- * Throws InputError for values the settings cannot take (e.g. <= 0 on the log scale).
+ * Throws InputError for values the settings cannot take (e.g. <= 0 on the log scale). With groups,
+ * prepareGate must have run.
  * @example runGate({ config: defaultConfig(), history, run, series: 'main' }).verdict // 'pass'
  */
 export function runGate(input: GateInput): Report {

@@ -15,7 +15,7 @@
  * Nothing prints a stack trace or the token (it is masked first).
  */
 import { settingsFor } from '../config/rules.js';
-import { runGate } from '../gate/gate.js';
+import { prepareGate, runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
@@ -127,6 +127,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
 
   const { history, readable } = await loadHistory(store, series, inputs, sink);
   const accepted = context.pullRequest?.labels.includes(inputs.acceptLabel) ?? false;
+  await prepareGate(config);
   const report = runGate({ config, history, run, series, accepted });
   const regressed = report.metrics.filter((m) => m.status === 'regressed').length;
   const flagged = report.metrics.some((m) => m.status === 'regressed' || m.status === 'improved');

@@ -1,9 +1,13 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { runGate } from '../../src/gate/gate.js';
 import type { Report } from '../../src/gate/report.js';
 import { jStat } from '../model/jstat.js';
 import { configFrom, historyOf, runOf } from './helpers/scenario.js';
 import { historySlice, runAt, timingSeries, type TimingSeries } from './helpers/timings.js';
+import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
+
+// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
+beforeAll(loadMatrixLibrary);
 
 const GROUP = 'groups:\n  - name: timings\n    match: "time/*"\n';
 

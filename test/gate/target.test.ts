@@ -1,7 +1,11 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { runGate } from '../../src/gate/gate.js';
 import { configFrom } from './helpers/scenario.js';
 import { historySlice, runAt, timingSeries, type TimingSeries } from './helpers/timings.js';
+import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
+
+// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
+beforeAll(loadMatrixLibrary);
 
 // DESIGN.md "What good looks like": about 50 timing metrics whose runner-speed noise (sd 3.5%)
 // is larger than their own noise (sd 1.8%). Each of 300 runs is judged against the 100 runs

@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
@@ -6,6 +6,10 @@ import { seededNormal } from './random.js';
 import { chiSquareTail, hotellingTail } from '../../src/model/hotelling.js';
 import { InputError } from '../../src/model/input-error.js';
 import { mahalanobisSquared } from '../../src/model/mahalanobis.js';
+import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
+
+// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
+beforeAll(loadMatrixLibrary);
 
 describe('chiSquareTail', () => {
   // Upper critical values of the chi-square distribution, NIST/SEMATECH e-Handbook table

@@ -1,8 +1,12 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { expectClose } from '../helpers/close.js';
 import { seededNormal } from './random.js';
 import { InputError } from '../../src/model/input-error.js';
 import { shrunkCovariance } from '../../src/model/ledoit-wolf.js';
+import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
+
+// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
+beforeAll(loadMatrixLibrary);
 
 /**
  * An independent plain computation (no ml-matrix) from the formulas of Schäfer & Strimmer (2005),

@@ -1,9 +1,13 @@
-import { describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
 import { InputError } from '../../src/model/input-error.js';
 import { mahalanobisContributions, mahalanobisSquared } from '../../src/model/mahalanobis.js';
+import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
+
+// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
+beforeAll(loadMatrixLibrary);
 
 /** d' A^-1 d with the inverse from jstat (second opinion). */
 function jstatDistance(x: number[], mean: number[], covariance: number[][]): number {
