@@ -7,7 +7,7 @@ import { cutoffLevel } from '../model/tails.js';
 import { decideMetric, type Test } from './decide-metric.js';
 import { familyTests } from './family-test.js';
 import type { GroupMemberInput } from './group-frame.js';
-import { judgeGroups, type PendingGroup } from './judge-groups.js';
+import type { judgeGroups, PendingGroup } from './judge-groups.js';
 import type { MetricScore } from './judge-metric.js';
 import { judgeName, metricNames } from './judge-name.js';
 import { REPORT_SCHEMA, type GroupResult, type MetricResult, type Report } from './report.js';
@@ -22,13 +22,25 @@ export interface GateInput {
   accepted?: boolean;
 }
 
+/** The group judge (judge-groups.ts and the joint check under it), once prepareGate loaded it. */
+let groupJudge: typeof judgeGroups | undefined;
+
 /**
- * Loads what runGate needs beyond its own code for this config: ml-matrix when the config names
- * groups (their joint check), nothing otherwise. Await it before runGate.
+ * Loads what runGate needs beyond its own code for this config: when the config names groups,
+ * their judge and ml-matrix (their joint check); nothing otherwise, so a run without groups does
+ * not compile that code at all. Await it before runGate.
  * @example await prepareGate(config); const report = runGate({ config, history, run, series });
  */
 export async function prepareGate(config: Config): Promise<void> {
-  if (config.groups.length > 0) await loadMatrixLibrary();
+  if (config.groups.length === 0) return;
+  const [judge] = await Promise.all([import('./judge-groups.js'), loadMatrixLibrary()]);
+  groupJudge = judge.judgeGroups;
+}
+
+/** The group judge; a caller that skipped prepareGate is told so. */
+function loadedGroupJudge(): typeof judgeGroups {
+  if (groupJudge === undefined) throw new Error('the group judge is not loaded: await prepareGate(config) before runGate');
+  return groupJudge;
 }
 
 /**
@@ -52,7 +64,7 @@ export function runGate(input: GateInput): Report {
   // Without groups or family control (the defaults) nothing below changes a lone score, so the
   // per-metric group lookups and cutoff levels are skipped.
   const groupOutcome =
-    config.groups.length === 0 ? NO_GROUPS : judgeGroups(config, scored, (name) => groupFor(config, name)?.name);
+    config.groups.length === 0 ? NO_GROUPS : loadedGroupJudge()(config, scored, (name) => groupFor(config, name)?.name);
   const lone = groupOutcome.judged.size === 0 ? scored : scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
   const tests =
     config.family === 'none'

@@ -1,15 +1,14 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { runGate } from '../../src/gate/gate.js';
+import { prepareGate, runGate } from '../../src/gate/gate.js';
 import type { Report } from '../../src/gate/report.js';
 import { jStat } from '../model/jstat.js';
 import { configFrom, historyOf, runOf } from './helpers/scenario.js';
 import { historySlice, runAt, timingSeries, type TimingSeries } from './helpers/timings.js';
-import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
-
-// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
-beforeAll(loadMatrixLibrary);
 
 const GROUP = 'groups:\n  - name: timings\n    match: "time/*"\n';
+
+// The group judge and ml-matrix load on demand, as the gate's callers load them (prepareGate).
+beforeAll(() => prepareGate(configFrom(GROUP)));
 
 function judge(series: TimingSeries, window: number, factors: Map<string, number>, yaml: string): Report {
   const config = configFrom(`defaults:\n  transform: log\n  window: ${window}\n${yaml}`);

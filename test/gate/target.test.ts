@@ -1,11 +1,10 @@
 import { beforeAll, describe, expect, it } from 'vitest';
-import { runGate } from '../../src/gate/gate.js';
+import { prepareGate, runGate } from '../../src/gate/gate.js';
 import { configFrom } from './helpers/scenario.js';
 import { historySlice, runAt, timingSeries, type TimingSeries } from './helpers/timings.js';
-import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
 
-// Groups' joint check needs ml-matrix, which the gate's callers load first (prepareGate).
-beforeAll(loadMatrixLibrary);
+// The group judge and ml-matrix load on demand, as the gate's callers load them (prepareGate).
+beforeAll(() => prepareGate(configFrom('groups:\n  - name: timings\n    match: "time/*"\n')));
 
 // DESIGN.md "What good looks like": about 50 timing metrics whose runner-speed noise (sd 3.5%)
 // is larger than their own noise (sd 1.8%). Each of 300 runs is judged against the 100 runs
