@@ -26,6 +26,8 @@ export interface CheckOptions extends MetricFileOptions, RunInfoOptions {
   format: ReportFormat;
   out?: string;
   record?: boolean;
+  /** List every ok metric in the text report (by default more than OK_ROWS_LISTED are counted). */
+  all?: boolean;
 }
 
 /**
@@ -49,7 +51,7 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   await prepareGate(config);
   const report = runGate({ config, history, run, series: options.series });
 
-  ctx.io.stdout(ensureNewline(render(ctx, report, options.format)));
+  ctx.io.stdout(ensureNewline(render(ctx, report, options.format, options.all)));
   if (options.out !== undefined) {
     const written = await writeReports(resolvePath(ctx, options.out), report);
     ctx.io.stderr(`bellgate: wrote ${written.join(', ')}\n`);
@@ -67,10 +69,10 @@ export function verdictExitCode(report: Report): number {
   return report.verdict === 'regressed' ? EXIT.regressed : EXIT.ok;
 }
 
-function render(ctx: CommandContext, report: Report, format: ReportFormat): string {
+function render(ctx: CommandContext, report: Report, format: ReportFormat, all = false): string {
   if (format === 'json') return renderJson(report);
   if (format === 'markdown') return renderMarkdown(report, {});
-  return renderText(report, { color: ctx.color });
+  return renderText(report, { color: ctx.color, all });
 }
 
 function ensureNewline(s: string): string {

@@ -19,7 +19,7 @@ export async function writeReports(dir: string, report: Report): Promise<string[
   const contents: Record<(typeof REPORT_FILES)[number], string> = {
     'report.md': renderMarkdown(report, {}),
     'report.json': renderJson(report),
-    'report.txt': renderText(report, { color: false }),
+    'report.txt': renderText(report, { color: false, all: true }),
   };
   const written: string[] = [];
   for (const name of REPORT_FILES) {

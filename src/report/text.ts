@@ -2,6 +2,7 @@ import pc from 'picocolors';
 import type { GroupResult, MetricResult, Report, Status } from '../gate/report.js';
 import { cleanText } from './clean.js';
 import { metricCells } from './cells.js';
+import { OK_ROWS_LISTED } from './ok-rows.js';
 import { formatSigma } from './format.js';
 import { STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
 
@@ -48,12 +49,13 @@ function groupLine(g: GroupResult): string {
 /**
  * The terminal report: a headline (verdict and counts), a table of judged metrics (regressed and
  * improved first) with the reason under each flagged one, one line per group, then one line per
- * learning/new/missing/ignored set. Colour (picocolors) only when `color` is true; status words are
- * always printed, so the report reads the same without colour. Every name passes cleanText, so a
- * metric file cannot send terminal escape sequences.
+ * learning/new/missing/ignored set. More than OK_ROWS_LISTED ok metrics are counted on one line
+ * instead of listed, unless `all` is set. Colour (picocolors) only when `color` is true; status
+ * words are always printed, so the report reads the same without colour. Every name passes
+ * cleanText, so a metric file cannot send terminal escape sequences.
  * @example renderText(report, { color: false }).split('\n')[0] // 'Bellgate — series "ci": pass — ...'
  */
-export function renderText(report: Report, options: { color: boolean }): string {
+export function renderText(report: Report, options: { color: boolean; all?: boolean }): string {
   const c = pc.createColors(options.color);
   const lines: string[] = [];
   const verdictWord = report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
@@ -63,6 +65,9 @@ export function renderText(report: Report, options: { color: boolean }): string 
   // Regressed, then improved, then ok, each in report order (a stable sort by statusRank, in one pass).
   const byStatus = new Map<Status, MetricResult[]>(JUDGED.map((status) => [status, []]));
   for (const m of report.metrics) byStatus.get(m.status)?.push(m);
+  const okCount = byStatus.get('ok')!.length;
+  const foldOk = options.all !== true && okCount > OK_ROWS_LISTED;
+  if (foldOk) byStatus.set('ok', []);
   const judged = [...byStatus.values()].flat();
   if (judged.length > 0) {
     const head = ['status', 'metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density vs cutoff'];
@@ -100,6 +105,10 @@ export function renderText(report: Report, options: { color: boolean }): string 
       lines.push(paint(c, m.status, parts.join('  ').trimEnd()));
       if (m.status !== 'ok') lines.push(`    ${clean(m.reason, 400)}`);
     });
+  }
+  if (foldOk) {
+    if (judged.length === 0) lines.push('');
+    lines.push(`${STATUS_GLYPH.ok} ok (${okCount}): within their baselines, not listed (--all lists every metric)`);
   }
 
   if (report.groups.length > 0) lines.push('');

@@ -32,6 +32,23 @@ describe('check', () => {
     expect(r.stdout.trim().endsWith('}')).toBe(true);
   });
 
+  it('past 30 ok metrics the text report counts them on one line; --all lists them; report.txt always does', async () => {
+    const names = Array.from({ length: 40 }, (_, i) => `suite/m${i}`);
+    const values = Object.fromEntries(names.map((n) => [n, [100, 101, 99, 100, 102, 98, 100, 101, 99, 100]]));
+    values['suite/m0'] = values['suite/m0']!.map((v) => v * 10);
+    const wide = work.write('wide/history.json', handHistoryV1('default', values));
+    const run = work.write('wide/run.json', JSON.stringify(Object.fromEntries(names.map((n) => [n, n === 'suite/m0' ? 1300 : 100.5]))));
+    const rowsOf = (out: string): string[] => out.split('\n').filter((l) => /^[▲●] \S+ {2,}suite\//.test(l));
+    const folded = await bellgate(work.dir, ['check', '--metrics', run, '--history', wide, '--config', config, '--out', 'wide/out']);
+    expect(folded.code).toBe(1);
+    expect(rowsOf(folded.stdout)).toHaveLength(1); // only the regressed metric
+    expect(folded.stdout).toContain('● ok (39): within their baselines, not listed (--all lists every metric)');
+    expect(rowsOf(readFileSync(join(work.dir, 'wide', 'out', 'report.txt'), 'utf8'))).toHaveLength(40);
+    const all = await bellgate(work.dir, ['check', '--metrics', run, '--history', wide, '--config', config, '--all']);
+    expect(rowsOf(all.stdout)).toHaveLength(40);
+    expect(all.stdout).not.toContain('not listed');
+  });
+
   it('--format markdown prints a table', async () => {
     const r = await bellgate(work.dir, ['check', '--metrics', slow, '--history', history, '--config', config, '--format', 'markdown']);
     expect(r.code).toBe(1);

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { OK_ROWS_LISTED } from '../../src/report/ok-rows.js';
 import { renderText } from '../../src/report/text.js';
 import { HOSTILE, makeFixture } from './fixture.js';
 
@@ -18,6 +19,22 @@ describe('renderText', () => {
       expect(out).toContain(word);
     }
     expect(out).toContain('group timings: regressed');
+  });
+
+  it('counts the ok metrics on one line beyond OK_ROWS_LISTED, keeps every flagged row, and lists all with `all`', () => {
+    // The fixture holds 2 ok metrics; extra ok ones take the count to the limit and one past it.
+    const okRows = (out: string): number => out.split('\n').filter((l) => /^● ok {2,}/.test(l)).length;
+    const withOk = (count: number) =>
+      makeFixture(Array.from({ length: count - 2 }, (_, i) => ({ name: `extra/m${i}`, centre: 5, spread: 1, now: 5, status: 'ok' as const }))).report;
+    const atLimit = renderText(withOk(OK_ROWS_LISTED), { color: false });
+    expect(okRows(atLimit)).toBe(OK_ROWS_LISTED);
+    expect(atLimit).not.toContain('not listed');
+    const past = withOk(OK_ROWS_LISTED + 1);
+    const folded = renderText(past, { color: false });
+    expect(okRows(folded)).toBe(0);
+    expect(folded).toContain(`● ok (${OK_ROWS_LISTED + 1}): within their baselines, not listed (--all lists every metric)`);
+    for (const word of ['▲ regressed', '▼ improved', 'build/time']) expect(folded).toContain(word);
+    expect(okRows(renderText(past, { color: false, all: true }))).toBe(OK_ROWS_LISTED + 1);
   });
 
   it('lists regressed and improved before ok in the table', () => {

@@ -1,4 +1,5 @@
 import { Command, Option } from 'commander';
+import { OK_ROWS_LISTED } from '../../report/ok-rows.js';
 import type { CommandContext } from '../context.js';
 import type { CheckOptions } from '../check-flow.js';
 import { importCheckFlow } from '../warm-up.js';
@@ -16,7 +17,8 @@ export function checkCommand(ctx: CommandContext): Command {
   seriesOption(cmd);
   cmd
     .addOption(new Option('--format <format>', 'how to print the report on stdout').choices(REPORT_FORMATS).default('text'))
-    .option('--out <dir>', 'also write report.md, report.json and report.txt into this folder')
+    .option('--all', `list every metric in the text report, ok ones too (by default more than ${OK_ROWS_LISTED} ok metrics are counted, not listed)`)
+    .option('--out <dir>', 'also write report.md, report.json and report.txt (every metric) into this folder')
     .option('--record', 'append this run to the history after checking it (needs --history)');
   inputOptions(cmd);
   runInfoOptions(cmd);
