@@ -42,7 +42,9 @@ export interface ApiTarget {
   log?: (message: string) => void;
 }
 
-export type GitHubApiFactory = (target: ApiTarget) => GitHubApi;
+/** Makes the client; the real one loads its code on first use (octokit and retries stay out of a
+ * run that never calls the API), so it may answer with a promise. */
+export type GitHubApiFactory = (target: ApiTarget) => GitHubApi | Promise<GitHubApi>;
 
 /** The HTTP status of an octokit RequestError (or similar), if any. */
 export function statusOf(error: unknown): number | undefined {

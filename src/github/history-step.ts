@@ -5,7 +5,6 @@
  * the caller records nothing over a history it could not read.
  */
 import { emptyHistory, type History, type RunInfo } from '../history/history.js';
-import { appendRun, trimHistory } from '../history/merge.js';
 import type { HistoryStore } from '../history/store.js';
 import type { Run } from '../inputs/run.js';
 import type { RunContext } from './context.js';
@@ -40,6 +39,8 @@ export async function loadHistory(store: HistoryStore, series: string, inputs: A
  */
 export async function recordRun(store: HistoryStore, history: History, info: RunInfo, run: Run, keep: number, inputs: ActionInputs, sink: ActionSink): Promise<boolean> {
   try {
+    // Loaded here: a check that records nothing (every pull request) never needs the merge code.
+    const { appendRun, trimHistory } = await import('../history/merge.js');
     const next = trimHistory(appendRun(history, info, run), keep);
     await store.save(next, history.runs.length);
     sink.info(`bellgate: recorded run ${info.id} in ${store.describe()} (${next.runs.length} runs)`);

@@ -14,7 +14,7 @@ import type { ActionSink } from './sink.js';
  * @returns the outcome ('created', 'updated', 'unchanged', 'skipped', 'failed'), or undefined without a PR.
  * @example await postComment(api, context, inputs, marker, markdown, true, sink) // 'created'
  */
-export async function postComment(api: () => GitHubApi, context: RunContext, inputs: ActionInputs, marker: string, markdown: string, flagged: boolean, sink: ActionSink): Promise<string | undefined> {
+export async function postComment(api: () => GitHubApi | Promise<GitHubApi>, context: RunContext, inputs: ActionInputs, marker: string, markdown: string, flagged: boolean, sink: ActionSink): Promise<string | undefined> {
   const pr = context.pullRequest;
   if (!pr) return undefined;
   // `never` must not touch the API at all: asking for it with an empty token would throw and warn.
@@ -23,7 +23,7 @@ export async function postComment(api: () => GitHubApi, context: RunContext, inp
     return 'skipped';
   }
   try {
-    const outcome = await upsertComment(api(), pr.number, marker, markdown, inputs.comment, flagged);
+    const outcome = await upsertComment(await api(), pr.number, marker, markdown, inputs.comment, flagged);
     sink.info(`bellgate: PR comment ${outcome}`);
     return outcome;
   } catch (error) {

@@ -1,12 +1,11 @@
 /**
  * The real collaborators of runAction: the runner's environment, the workflow-command sink, the
- * file system, the clock, octokit, and the lazily loaded artifact uploader.
+ * file system, the clock, and the lazily loaded GitHub client and artifact uploader.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
 import { readFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { createArtifactUploader } from '../history/artifact-upload.js';
-import { createOctokitApi } from './octokit-api.js';
 import type { ActionDeps } from './run-action.js';
 import { createRunnerSink } from './runner-sink.js';
 
@@ -26,7 +25,8 @@ export function createRealDeps(env: Record<string, string | undefined> = process
       writeFileSync(path, text, 'utf8');
     },
     now: () => new Date(),
-    createApi: createOctokitApi,
+    // Loaded on first use: a PR check with the file store and `comment: never` never calls the API.
+    createApi: async (target) => (await import('./octokit-api.js')).createOctokitApi(target),
     upload: createArtifactUploader(env.RUNNER_TEMP || process.cwd()),
     // BELLGATE_RETRY_UNIT_MS shortens API backoff for the end-to-end tests; the runner never sets it.
     ...(env.BELLGATE_RETRY_UNIT_MS ? { retry: { retries: 3, unitMs: Math.max(1, Number(env.BELLGATE_RETRY_UNIT_MS) || 1000) } } : {}),

@@ -94,8 +94,8 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
   else sink.info(`bellgate: series "${series}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`);
 
-  let api: GitHubApi | undefined;
-  const apiOnce = (): GitHubApi => {
+  let api: GitHubApi | Promise<GitHubApi> | undefined;
+  const apiOnce = (): GitHubApi | Promise<GitHubApi> => {
     if (inputs.token === '') {
       throw new InputError('input `token` is empty, but the GitHub API is needed (history artifacts, PR comment)', {
         where: 'input token',

@@ -20,7 +20,7 @@ export interface StoreSpec {
   repositoryId?: number;
   retentionDays: number;
   workspace: string;
-  api: () => GitHubApi;
+  api: () => GitHubApi | Promise<GitHubApi>;
   upload: ArtifactUploader;
   warn: (message: string) => void;
 }
@@ -32,7 +32,7 @@ export type StoreBuilder = (spec: StoreSpec) => HistoryStore | Promise<HistorySt
 export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
   artifact: async (s) =>
     (await import('../history/artifact-store.js')).createArtifactStore({
-      api: s.api(),
+      api: await s.api(),
       upload: s.upload,
       history: s.history,
       series: s.series,
@@ -59,7 +59,7 @@ async function buildBranchStore(s: StoreSpec): Promise<HistoryStore> {
       fix: `name a branch of its own, e.g. \`history: ${DEFAULT_DATA_BRANCH}\``,
     });
   }
-  const api = s.api().gitData;
+  const api = (await s.api()).gitData;
   if (!api) throw new InputError('this GitHub client cannot write a data branch', { where: 'input store', fix: 'use `store: artifact` or `store: file`' });
   const { createBranchStore } = await import('../history/branch-store.js');
   return createBranchStore({ api, branch, series: s.series });

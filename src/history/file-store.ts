@@ -3,7 +3,6 @@ import { basename, dirname, join } from 'node:path';
 import { InputError } from '../model/input-error.js';
 import { parseHistoryBytes, serializeHistory } from './document.js';
 import { emptyHistory, type History, type RunInfo } from './history.js';
-import { concurrentRuns, healConcurrent } from './merge.js';
 import { spliceHistory, writtenHistory, type WrittenHistory } from './splice-append.js';
 import { guardAgainstLoss, StoreError, type HistoryStore } from './store.js';
 import { primeScan, SCAN_FROM } from './values-scan.js';
@@ -140,6 +139,8 @@ export function createFileStore(path: string, series: string): HistoryStore {
    * nothing to h (the usual case: nobody else wrote), healing is known to return h: no parse.
    */
   async function healFromDisk(h: History): Promise<History> {
+    // Loaded on save, as node:crypto is below: a check only reads.
+    const { concurrentRuns, healConcurrent } = await import('./merge.js');
     let bytes = await readBytes();
     if (bytes === undefined) return h;
     const disk = bytes;
