@@ -9,8 +9,9 @@ type SchemaNode = Record<string, unknown>;
 
 const MAX_EXPLAINED = 200;
 
+// The settings are one definition of the schema, used by `defaults` and by every rule.
 const SETTING_KEYS = Object.keys(
-  ((configSchema.properties as SchemaNode).defaults as SchemaNode).properties as SchemaNode,
+  ((configSchema.definitions as SchemaNode).settings as SchemaNode).properties as SchemaNode,
 );
 const RULE_ONLY_KEYS = ['match', 'ignore', 'relative-to'];
 const TOP_KEYS = Object.keys(configSchema.properties as SchemaNode);

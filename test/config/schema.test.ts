@@ -35,7 +35,8 @@ describe('the shipped JSON Schema', () => {
 
   it('documents the same defaults the loader uses', () => {
     const d = defaultConfig();
-    const props = schema.properties.defaults.properties;
+    expect(schema.properties.defaults.$ref).toBe('#/definitions/settings');
+    const props = schema.definitions.settings.properties;
     expect(props.cutoff.default).toBe(d.defaults.cutoff);
     expect(props.worse.default).toBe(d.defaults.worse);
     expect(props.tolerance.default).toBe(`${d.defaults.tolerance.amount * 100}%`);
@@ -49,7 +50,8 @@ describe('the shipped JSON Schema', () => {
     expect(props['change-points'].default).toBe(d.defaults.changePoints);
     expect(schema.properties.family.default).toBe(d.family);
     expect(schema.properties.keep.default).toBe(d.keep);
-    const limits = schema.properties.limits.properties;
+    expect(schema.properties.limits.$ref).toBe('#/definitions/limits');
+    const limits = schema.definitions.limits.properties;
     expect(limits['max-file-bytes'].default).toBe(d.limits.maxFileBytes);
     expect(limits['max-line-length'].default).toBe(d.limits.maxLineLength);
     expect(limits['max-metrics'].default).toBe(d.limits.maxMetrics);
