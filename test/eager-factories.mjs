@@ -12,16 +12,18 @@
 // different value, so those are left as arrows.
 import { parseSync } from 'rolldown/utils';
 
-/** The names webpack/ncc give the object that maps module ids to factories. */
+/** The names webpack/ncc give the object that maps module ids to factories (`const modules =` in an
+ * ES module chunk, `exports.modules =` in a CommonJS one, `var __webpack_modules__ =` in an entry). */
 const FACTORY_TABLES = new Set(['modules', '__webpack_modules__']);
 
 /**
+ * @param sourceType 'module', or 'script' for a CommonJS bundle file.
  * @returns the rewritten text and how many factories were rewritten or left as arrows.
  * @example eagerFactories('c.js', 'export const modules={1:((m)=>{m.x=1})};').text
  *   // 'export const modules={1:(function(m){m.x=1})};'
  */
-export function eagerFactories(path, text) {
-  const parsed = parseSync(path, text, { sourceType: 'module' });
+export function eagerFactories(path, text, sourceType = 'module') {
+  const parsed = parseSync(path, text, { sourceType });
   if (parsed.errors.length > 0) throw new Error(`cannot parse ${path}: ${parsed.errors[0].message}`);
   const edits = [];
   let kept = 0;
@@ -48,16 +50,22 @@ function factoriesOf(program) {
       return;
     }
     if (node.type === 'VariableDeclarator' && node.id?.type === 'Identifier' && FACTORY_TABLES.has(node.id.name)) {
-      const table = unwrap(node.init);
-      if (table?.type === 'ObjectExpression') {
-        for (const property of table.properties) {
-          const value = unwrap(property.value);
-          if (value?.type === 'ArrowFunctionExpression' && !value.async && value.body.type === 'BlockStatement') found.push(value);
-        }
-      }
+      collect(unwrap(node.init));
+      return;
+    }
+    const target = node.type === 'AssignmentExpression' ? node.left : undefined;
+    if (target?.type === 'MemberExpression' && target.object.name === 'exports' && FACTORY_TABLES.has(target.property.name)) {
+      collect(unwrap(node.right));
       return;
     }
     for (const key of Object.keys(node)) if (key !== 'parent') visit(node[key]);
+  };
+  const collect = (table) => {
+    if (table?.type !== 'ObjectExpression') return;
+    for (const property of table.properties) {
+      const value = unwrap(property.value);
+      if (value?.type === 'ArrowFunctionExpression' && !value.async && value.body.type === 'BlockStatement') found.push(value);
+    }
   };
   visit(program);
   return found;

@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { eagerFactories } from './eager-factories.mjs';
 
 type Rewrite = { text: string; rewritten: number; kept: number };
-const rewrite = eagerFactories as (path: string, text: string) => Rewrite;
+const rewrite = eagerFactories as (path: string, text: string, sourceType?: 'module' | 'script') => Rewrite;
 
 /** Runs a chunk's factory table as webpack's runtime does (`factory.call(exports, module, exports, require)`). */
 function runTable(chunk: string): Record<string, unknown> {
@@ -48,6 +48,11 @@ describe('eagerFactories (build step: arrow module factories become function exp
     const entry = 'var __webpack_modules__=({5:((m)=>{m.exports=1})});const other={6:((m)=>{m.exports=2})};';
     const out = rewrite('index.js', entry);
     expect(out.text).toBe('var __webpack_modules__=({5:(function(m){m.exports=1})});const other={6:((m)=>{m.exports=2})};');
+  });
+
+  it('finds the table of a CommonJS chunk (`exports.modules={...}`)', () => {
+    const out = rewrite('1.index.cjs.js', 'exports.id=1;exports.ids=[1];exports.modules={7:((m,e,r)=>{e.x=r(8)})};', 'script');
+    expect(out.text).toBe('exports.id=1;exports.ids=[1];exports.modules={7:(function(m,e,r){e.x=r(8)})};');
   });
 
   it('refuses text it cannot parse instead of writing a broken bundle', () => {

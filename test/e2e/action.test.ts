@@ -1,4 +1,4 @@
-// The action as the runner runs it: the real bundle (`node dist/index.js`, or BELLGATE_ACTION_BUNDLE)
+// The action as the runner runs it: the real bundle (`node dist/index.cjs`, or BELLGATE_ACTION_BUNDLE)
 // in a child process, against a loopback REST stand-in and a loopback results service whose
 // uploads land in Azurite blob storage, so @actions/artifact uploads for real. The contracts
 // checked are GitHub's (REST reference for artifacts and issue comments, the runner's INPUT_*,
@@ -33,7 +33,7 @@ let results: ResultsStandin;
 let dir: string;
 
 beforeAll(async () => {
-  if (!existsSync(BUNDLE)) throw new Error(`no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.js`);
+  if (!existsSync(BUNDLE)) throw new Error(`no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`);
   dir = await mkdtemp(join(tmpdir(), 'bellgate-e2e-action-'));
   azurite = await startAzurite(ROOT);
   rest = await startRestStandin();
