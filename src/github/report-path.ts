@@ -1,4 +1,5 @@
 import { join } from 'node:path';
+import { seriesSlug } from '../history/series-slug.js';
 
 /**
  * Where the action writes its JSON report (the `report` output): one file per series under
@@ -10,7 +11,7 @@ import { join } from 'node:path';
  * @example reportPath('/tmp/runner', 'bench/linux') // '/tmp/runner/bellgate/report-bench-linux-<8 hex>.json'
  */
 export function reportPath(runnerTemp: string, series: string): string {
-  const slug = series.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^[-.]+|[-.]+$/g, '').slice(0, 60);
+  const slug = seriesSlug(series);
   const hash = fnv1a32(series).toString(16).padStart(8, '0');
   return join(runnerTemp, 'bellgate', slug === '' ? `report-${hash}.json` : `report-${slug}-${hash}.json`);
 }

@@ -4,6 +4,7 @@
  */
 import { createHash } from 'node:crypto';
 import { InputError } from '../model/input-error.js';
+import { seriesSlug } from './series-slug.js';
 
 /** The data branch used when the `history` input is left at its default. */
 export const DEFAULT_DATA_BRANCH = 'bellgate-data';
@@ -18,10 +19,7 @@ export const BRANCH_FOLDER = 'bellgate';
  * @example seriesFilePath('bench/linux') // 'bellgate/bench-linux-<8 hex>.json'
  */
 export function seriesFilePath(series: string): string {
-  const slug = series
-    .replace(/[^A-Za-z0-9._-]+/g, '-')
-    .replace(/^[-.]+|[-.]+$/g, '')
-    .slice(0, 60);
+  const slug = seriesSlug(series);
   const hash = createHash('sha256').update(series, 'utf8').digest('hex').slice(0, 8);
   return `${BRANCH_FOLDER}/${slug === '' ? hash : `${slug}-${hash}`}.json`;
 }
