@@ -105,9 +105,10 @@ export function createFileStore(path: string, series: string): HistoryStore {
       if (!loaded.some((d) => d.bytes.equals(bytes))) {
         loaded.push({ bytes, runs: history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })) });
       }
-      // The bytes are kept only when they can be spliced (a plain version-2 document).
-      // A document read whole (below SCAN_FROM) has its rows found by the first splice.
-      written = writtenHistory(bytes, rows, history);
+      // What an append can splice into: a scanned document, with its rows, or one read whole
+      // (below SCAN_FROM), whose rows the first splice looks for. A large document the scan
+      // declined is not scanned again on save.
+      if (rows !== undefined || bytes.length < SCAN_FROM) written = writtenHistory(bytes, rows, history);
       return history;
     },
     async save(h: History, readCount: number): Promise<void> {
