@@ -17,5 +17,12 @@ process.stdout.on('error', (e: NodeJS.ErrnoException) => {
   if (e.code !== 'EPIPE') throw e;
   process.exit(process.exitCode ?? 0);
 });
-const io = { stdout: (s: string) => void process.stdout.write(s), stderr: (s: string) => void process.stderr.write(s), cwd: process.cwd(), env: process.env, isTTY: process.stdout.isTTY === true, stderrIsTTY: process.stderr.isTTY === true };
+const io = {
+  stdout: (s: string) => void process.stdout.write(s),
+  stderr: (s: string) => void process.stderr.write(s),
+  cwd: process.cwd(),
+  env: process.env,
+  isTTY: process.stdout.isTTY === true,
+  stderrIsTTY: process.stderr.isTTY === true,
+};
 void runCli(process.argv.slice(2), io).then((code) => (process.exitCode = code));

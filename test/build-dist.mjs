@@ -2,7 +2,16 @@
 // Usage: node test/build-dist.mjs [OUTDIR]   (default: dist). The check-dist test builds into a
 // temporary folder and compares, so dist/ can never drift from src/.
 import { execFileSync } from 'node:child_process';
-import { mkdirSync, rmSync, renameSync, existsSync, readdirSync, readFileSync, writeFileSync, copyFileSync } from 'node:fs';
+import {
+  mkdirSync,
+  rmSync,
+  renameSync,
+  existsSync,
+  readdirSync,
+  readFileSync,
+  writeFileSync,
+  copyFileSync,
+} from 'node:fs';
 import { join, resolve } from 'node:path';
 import { minifySync } from 'rolldown/utils';
 import { eagerFactories } from './eager-factories.mjs';
@@ -14,10 +23,14 @@ const ncc = join(root, 'node_modules', '@vercel', 'ncc', 'dist', 'ncc', 'cli.js'
 
 function bundle(entry, dir) {
   rmSync(dir, { recursive: true, force: true });
-  execFileSync(process.execPath, [ncc, 'build', entry, '-o', dir, '--target', 'es2022', '--quiet', '--no-source-map-register'], {
-    cwd: root,
-    stdio: 'inherit',
-  });
+  execFileSync(
+    process.execPath,
+    [ncc, 'build', entry, '-o', dir, '--target', 'es2022', '--quiet', '--no-source-map-register'],
+    {
+      cwd: root,
+      stdio: 'inherit',
+    },
+  );
 }
 
 mkdirSync(out, { recursive: true });
@@ -38,7 +51,8 @@ rmSync(actionTmp, { recursive: true, force: true });
 // deterministic, so a fresh build still equals the committed dist/ byte for byte. Then the module
 // factories become plain functions, which V8 compiles once instead of twice (eager-factories.mjs).
 for (const name of readdirSync(out).filter((f) => /\.c?js$/.test(f))) stripFile(join(out, name), false);
-for (const name of readdirSync(join(out, 'cli')).filter((f) => f.endsWith('.js'))) stripFile(join(out, 'cli', name), true);
+for (const name of readdirSync(join(out, 'cli')).filter((f) => f.endsWith('.js')))
+  stripFile(join(out, 'cli', name), true);
 // The CLI is ES modules ("type": "module" sources), the action CommonJS (a .cjs entry); each
 // folder says which, so plain `node` loads its files the right way.
 writeFileSync(join(out, 'package.json'), '{ "type": "commonjs" }\n');

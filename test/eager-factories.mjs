@@ -36,7 +36,8 @@ export function eagerFactories(path, text, sourceType = 'module') {
     edits.push({ from: factory.start, to: factory.body.start, text: `function(${params})` });
   }
   let out = text;
-  for (const edit of edits.sort((a, b) => b.from - a.from)) out = out.slice(0, edit.from) + edit.text + out.slice(edit.to);
+  for (const edit of edits.sort((a, b) => b.from - a.from))
+    out = out.slice(0, edit.from) + edit.text + out.slice(edit.to);
   return { text: out, rewritten: edits.length, kept };
 }
 
@@ -54,7 +55,11 @@ function factoriesOf(program) {
       return;
     }
     const target = node.type === 'AssignmentExpression' ? node.left : undefined;
-    if (target?.type === 'MemberExpression' && target.object.name === 'exports' && FACTORY_TABLES.has(target.property.name)) {
+    if (
+      target?.type === 'MemberExpression' &&
+      target.object.name === 'exports' &&
+      FACTORY_TABLES.has(target.property.name)
+    ) {
       collect(unwrap(node.right));
       return;
     }
@@ -64,7 +69,8 @@ function factoriesOf(program) {
     if (table?.type !== 'ObjectExpression') return;
     for (const property of table.properties) {
       const value = unwrap(property.value);
-      if (value?.type === 'ArrowFunctionExpression' && !value.async && value.body.type === 'BlockStatement') found.push(value);
+      if (value?.type === 'ArrowFunctionExpression' && !value.async && value.body.type === 'BlockStatement')
+        found.push(value);
     }
   };
   visit(program);
@@ -84,7 +90,11 @@ function readsOwnBinding(body) {
       for (const child of node) visit(child);
       return;
     }
-    if (node.type === 'ThisExpression' || node.type === 'MetaProperty' || (node.type === 'Identifier' && node.name === 'arguments')) {
+    if (
+      node.type === 'ThisExpression' ||
+      node.type === 'MetaProperty' ||
+      (node.type === 'Identifier' && node.name === 'arguments')
+    ) {
       found = true;
       return;
     }

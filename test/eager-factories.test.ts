@@ -7,7 +7,9 @@ const rewrite = eagerFactories as (path: string, text: string, sourceType?: 'mod
 
 /** Runs a chunk's factory table as webpack's runtime does (`factory.call(exports, module, exports, require)`). */
 function runTable(chunk: string): Record<string, unknown> {
-  const table = new Function(`${chunk.replace('export const modules=', 'const modules=')}; return modules;`)() as Record<string, Function>;
+  const table = new Function(
+    `${chunk.replace('export const modules=', 'const modules=')}; return modules;`,
+  )() as Record<string, (this: unknown, ...args: unknown[]) => unknown>;
   const cache: Record<string, { exports: Record<string, unknown> }> = {};
   const require = (id: string): Record<string, unknown> => {
     if (cache[id]) return cache[id].exports;
@@ -19,7 +21,8 @@ function runTable(chunk: string): Record<string, unknown> {
 }
 
 describe('eagerFactories (build step: arrow module factories become function expressions)', () => {
-  const chunk = 'export const modules={' +
+  const chunk =
+    'export const modules={' +
     '11:((module,exports,require)=>{const dep=require(12);exports.sum=dep.one+1;exports.inner=[1,2].map((x)=>x*2)}),' +
     '12:((module,exports)=>{exports.one=1;exports.arrowKept=(()=>{const f=(a)=>a;return f(3)})()}),' +
     '13:((module)=>{module.exports={self:this}}),' +
@@ -47,11 +50,17 @@ describe('eagerFactories (build step: arrow module factories become function exp
   it('finds the table of an entry file (`var __webpack_modules__=({...})`) and leaves other objects alone', () => {
     const entry = 'var __webpack_modules__=({5:((m)=>{m.exports=1})});const other={6:((m)=>{m.exports=2})};';
     const out = rewrite('index.js', entry);
-    expect(out.text).toBe('var __webpack_modules__=({5:(function(m){m.exports=1})});const other={6:((m)=>{m.exports=2})};');
+    expect(out.text).toBe(
+      'var __webpack_modules__=({5:(function(m){m.exports=1})});const other={6:((m)=>{m.exports=2})};',
+    );
   });
 
   it('finds the table of a CommonJS chunk (`exports.modules={...}`)', () => {
-    const out = rewrite('1.index.cjs.js', 'exports.id=1;exports.ids=[1];exports.modules={7:((m,e,r)=>{e.x=r(8)})};', 'script');
+    const out = rewrite(
+      '1.index.cjs.js',
+      'exports.id=1;exports.ids=[1];exports.modules={7:((m,e,r)=>{e.x=r(8)})};',
+      'script',
+    );
     expect(out.text).toBe('exports.id=1;exports.ids=[1];exports.modules={7:(function(m,e,r){e.x=r(8)})};');
   });
 

@@ -25,13 +25,20 @@ const out = resolve(process.argv[2] ?? resolve(root, 'src', 'config', 'schema-va
 const HELPERS = new Map([['ucs2length', ucs2length.default]]);
 
 const schema = JSON.parse(readFileSync(schemaPath, 'utf8'));
-const ajv = new Ajv({ allErrors: true, verbose: true, strict: true, inlineRefs: false, code: { source: true, esm: true, lines: true } });
+const ajv = new Ajv({
+  allErrors: true,
+  verbose: true,
+  strict: true,
+  inlineRefs: false,
+  code: { source: true, esm: true, lines: true },
+});
 const validate = ajv.compile(schema);
 let code = standalone.default(ajv, validate);
 
 code = code.replace(/require\("ajv\/dist\/runtime\/([\w-]+)"\)\.default/g, (_whole, name) => {
   const helper = HELPERS.get(name);
-  if (typeof helper !== 'function') throw new Error(`gen-config-validator: the schema needs ajv's ${name} helper; add it to HELPERS`);
+  if (typeof helper !== 'function')
+    throw new Error(`gen-config-validator: the schema needs ajv's ${name} helper; add it to HELPERS`);
   return `(${helper.toString()})`;
 });
 if (/\brequire\(/.test(code)) throw new Error('gen-config-validator: the generated code still calls require()');

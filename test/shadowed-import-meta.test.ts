@@ -29,8 +29,11 @@ describe('shadowedImportMeta (build step for the CommonJS action bundle)', () =>
   });
 
   it('leaves everything else alone: other quotes are repaired, mismatched names are not', () => {
-    expect(repair('x=a_require("url").pathToFileURL(a_filename).href').text).toBe('x=require("url").pathToFileURL(__filename).href');
-    const mismatched = 'x=a_require(`url`).pathToFileURL(b_filename).href;y=require("url").pathToFileURL(__filename).href';
+    expect(repair('x=a_require("url").pathToFileURL(a_filename).href').text).toBe(
+      'x=require("url").pathToFileURL(__filename).href',
+    );
+    const mismatched =
+      'x=a_require(`url`).pathToFileURL(b_filename).href;y=require("url").pathToFileURL(__filename).href';
     expect(repair(mismatched)).toEqual({ text: mismatched, repaired: 0 });
   });
 });

@@ -182,15 +182,21 @@ function main() {
   writeFileSync(join(here, 'bellgate.yml'), renderConfig());
   const cli = resolve(here, '..', '..', 'dist', 'cli', 'index.js');
   if (!existsSync(cli)) {
-    console.error(`wrote runs.jsonl, pr-run.json, bellgate.yml; build the CLI (npm run build) and run again to write history.json`);
+    console.error(
+      `wrote runs.jsonl, pr-run.json, bellgate.yml; build the CLI (npm run build) and run again to write history.json`,
+    );
     process.exitCode = 2;
     return;
   }
   const history = join(here, 'history.json');
   rmSync(history, { force: true });
-  execFileSync(process.execPath, [cli, 'import', '--history', history, '--runs', join(here, 'runs.jsonl'), '--series', SERIES], {
-    stdio: 'inherit',
-  });
+  execFileSync(
+    process.execPath,
+    [cli, 'import', '--history', history, '--runs', join(here, 'runs.jsonl'), '--series', SERIES],
+    {
+      stdio: 'inherit',
+    },
+  );
 }
 
 if (process.argv[1] && resolve(process.argv[1]) === fileURLToPath(import.meta.url)) main();

@@ -38,7 +38,10 @@ export interface CheckOptions extends MetricFileOptions, RunInfoOptions {
  */
 export async function performCheck(ctx: CommandContext, options: CheckOptions): Promise<Report> {
   if (options.record && options.history === undefined) {
-    throw new InputError('--record needs --history FILE', { where: '--record', fix: 'name the history file to append this run to' });
+    throw new InputError('--record needs --history FILE', {
+      where: '--record',
+      fix: 'name the history file to append this run to',
+    });
   }
   const opening = openEarly(ctx, options.history, options.series);
   const config = await loadConfig(ctx, options.config);

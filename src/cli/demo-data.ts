@@ -21,7 +21,10 @@ export function locateDemo(cwd: string, script: string | undefined, moduleUrl: s
   }
   if (script) starts.push(dirname(resolve(script)));
   const candidates = [
-    ...starts.flatMap((s) => [resolve(s, '..', '..', 'examples', 'demo'), resolve(s, '..', '..', '..', 'examples', 'demo')]),
+    ...starts.flatMap((s) => [
+      resolve(s, '..', '..', 'examples', 'demo'),
+      resolve(s, '..', '..', '..', 'examples', 'demo'),
+    ]),
     resolve(cwd, 'examples', 'demo'),
   ];
   const unique = [...new Set(candidates)];

@@ -15,7 +15,11 @@ export interface OpenedHistory {
  * an empty one when no `--history` was given (every metric is then `new`).
  * @throws StoreError when the file exists but cannot be read or parsed (exit 3; never overwritten).
  */
-export async function openHistory(ctx: CommandContext, path: string | undefined, series: string): Promise<OpenedHistory> {
+export async function openHistory(
+  ctx: CommandContext,
+  path: string | undefined,
+  series: string,
+): Promise<OpenedHistory> {
   if (path === undefined) return { history: emptyHistory(series) };
   const store = createFileStore(resolvePath(ctx, path), series);
   return { history: await store.load(), store };

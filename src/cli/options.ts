@@ -18,12 +18,19 @@ export function metricsOption(cmd: Command, required: boolean): Command {
   return required ? cmd.requiredOption(flags, text) : cmd.option(flags, text);
 }
 
-export function historyOption(cmd: Command, required: boolean, text = 'history file of trusted runs (JSON; a missing file is an empty history)'): Command {
+export function historyOption(
+  cmd: Command,
+  required: boolean,
+  text = 'history file of trusted runs (JSON; a missing file is an empty history)',
+): Command {
   return required ? cmd.requiredOption('--history <file>', text) : cmd.option('--history <file>', text);
 }
 
 export function configOption(cmd: Command): Command {
-  return cmd.option('--config <file>', 'config file (default: .github/bellgate.yml when present, else built-in defaults)');
+  return cmd.option(
+    '--config <file>',
+    'config file (default: .github/bellgate.yml when present, else built-in defaults)',
+  );
 }
 
 export function seriesOption(cmd: Command): Command {
@@ -31,10 +38,18 @@ export function seriesOption(cmd: Command): Command {
 }
 
 export function inputOptions(cmd: Command): Command {
-  return cmd
-    // Checked by the readers (metricFormat), which also take spellings like "prometheus".
-    .option('--input-format <format>', `read metric files as this format instead of detecting it: ${METRIC_FORMATS.join(', ')}`)
-    .option('--prefix <pattern=prefix...>', 'put "prefix/" before the names of metrics read from files the pattern matches');
+  return (
+    cmd
+      // Checked by the readers (metricFormat), which also take spellings like "prometheus".
+      .option(
+        '--input-format <format>',
+        `read metric files as this format instead of detecting it: ${METRIC_FORMATS.join(', ')}`,
+      )
+      .option(
+        '--prefix <pattern=prefix...>',
+        'put "prefix/" before the names of metrics read from files the pattern matches',
+      )
+  );
 }
 
 export function runInfoOptions(cmd: Command): Command {

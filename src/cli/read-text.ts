@@ -12,11 +12,16 @@ export async function readUserText(path: string, flag: string): Promise<string> 
   let size: number;
   try {
     const info = await stat(path);
-    if (info.isDirectory()) throw new InputError(`${flag} ${path} is a folder, not a file`, { where: path, fix: `name a file with ${flag}` });
+    if (info.isDirectory())
+      throw new InputError(`${flag} ${path} is a folder, not a file`, { where: path, fix: `name a file with ${flag}` });
     size = info.size;
   } catch (error) {
     if (error instanceof InputError) throw error;
-    throw new InputError(`cannot read ${flag} ${path}: ${reason(error)}`, { where: path, fix: `check the path given to ${flag}`, cause: error });
+    throw new InputError(`cannot read ${flag} ${path}: ${reason(error)}`, {
+      where: path,
+      fix: `check the path given to ${flag}`,
+      cause: error,
+    });
   }
   if (size > MAX_TEXT_BYTES) {
     throw new InputError(`${flag} ${path} is ${size} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
@@ -27,7 +32,11 @@ export async function readUserText(path: string, flag: string): Promise<string> 
   try {
     return await readFile(path, 'utf8');
   } catch (error) {
-    throw new InputError(`cannot read ${flag} ${path}: ${reason(error)}`, { where: path, fix: `check the path given to ${flag}`, cause: error });
+    throw new InputError(`cannot read ${flag} ${path}: ${reason(error)}`, {
+      where: path,
+      fix: `check the path given to ${flag}`,
+      cause: error,
+    });
   }
 }
 

@@ -11,7 +11,13 @@ import type { Run } from '../inputs/run.js';
  * @returns the history as saved.
  * @throws StoreError when the store cannot write.
  */
-export async function recordRun(store: HistoryStore, history: History, info: RunInfo, run: Run, keep: number): Promise<History> {
+export async function recordRun(
+  store: HistoryStore,
+  history: History,
+  info: RunInfo,
+  run: Run,
+  keep: number,
+): Promise<History> {
   // The loaded history is not read again (callers use only its runs), so its columns are extended
   // in place rather than copied.
   const next = trimHistory(appendRun(history, info, run, { extendInPlace: true }), keep);

@@ -38,7 +38,10 @@ export function runInfoFrom(ctx: CommandContext, options: RunInfoOptions): RunIn
   const ciId = env.GITHUB_RUN_ID ? `${env.GITHUB_RUN_ID}-${env.GITHUB_RUN_ATTEMPT || '1'}` : undefined;
   const id = options.id ?? ciId ?? `local-${time}`;
   if (id.trim() === '') {
-    throw new InputError('--id is empty', { where: '--id', fix: 'give a run id such as "1234-1", or leave the flag out' });
+    throw new InputError('--id is empty', {
+      where: '--id',
+      fix: 'give a run id such as "1234-1", or leave the flag out',
+    });
   }
   const info: RunInfo = { id, time };
   const sha = options.sha ?? (env.GITHUB_SHA || undefined);

@@ -14,7 +14,7 @@ export function splitNewest(history: History, source: string): { history: Histor
   if (newest === undefined) {
     throw new InputError('the history holds no runs, so there is nothing to judge', {
       where: source,
-      fix: 'pass this run\'s metric files with --metrics, or record runs first (bellgate record / import)',
+      fix: "pass this run's metric files with --metrics, or record runs first (bellgate record / import)",
     });
   }
   const metrics = new Map<string, Measurement>();

@@ -24,7 +24,10 @@ export function configBody(text: string): string {
  * @throws InputError listing every problem, at the "source:line:col" of the first.
  * @example checkedConfigTree(readYamlTree('cutoff: 2\n'), 'b.yml') // throws InputError at b.yml:1:1 (unknown key)
  */
-export function checkedConfigTree(read: { tree?: YamlTree; problems: ConfigProblem[] }, source: string): YamlTree | undefined {
+export function checkedConfigTree(
+  read: { tree?: YamlTree; problems: ConfigProblem[] },
+  source: string,
+): YamlTree | undefined {
   const { tree, problems } = read;
   if (!tree || problems.length > 0) throw problemsError(problems, source);
   if (tree.value === undefined || tree.value === null) return undefined;
@@ -53,6 +56,8 @@ export function needsGlobLibrary(value: unknown): boolean {
   const root = (value ?? {}) as Data;
   const rules = (root.metrics ?? []) as Data[];
   const groups = (root.groups ?? []) as Data[];
-  return rules.some((rule) => !exactMatcher(globList(rule.match)))
-    || groups.some((group) => group.match === undefined || !exactMatcher(globList(group.match)));
+  return (
+    rules.some((rule) => !exactMatcher(globList(rule.match))) ||
+    groups.some((group) => group.match === undefined || !exactMatcher(globList(group.match)))
+  );
 }

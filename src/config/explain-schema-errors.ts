@@ -17,7 +17,12 @@ const RULE_ONLY_KEYS = ['match', 'ignore', 'relative-to'];
 const TOP_KEYS = Object.keys(configSchema.properties as SchemaNode);
 
 function segments(pointer: string): string[] {
-  return pointer === '' ? [] : pointer.slice(1).split('/').map((s) => s.replace(/~1/g, '/').replace(/~0/g, '~'));
+  return pointer === ''
+    ? []
+    : pointer
+        .slice(1)
+        .split('/')
+        .map((s) => s.replace(/~1/g, '/').replace(/~0/g, '~'));
 }
 
 /**
@@ -59,9 +64,12 @@ function unknownKey(error: ErrorObject, tree: YamlTree): ConfigProblem {
   const where = error.instancePath === '' ? 'at the top level' : `in ${placeName(error.instancePath)}`;
   const guess = didYouMean(key, allowed);
   let fix = guess ? `did you mean "${guess}"?` : `allowed here: ${allowed.join(', ')}`;
-  if (!guess && error.instancePath === '' && SETTING_KEYS.includes(key)) fix = `"${key}" is a metric setting: put it under defaults: or in a metrics rule`;
-  if (!guess && error.instancePath !== '' && TOP_KEYS.includes(key)) fix = `"${key}" is a top-level key: write it without indentation`;
-  if (!guess && error.instancePath === '/defaults' && RULE_ONLY_KEYS.includes(key)) fix = `"${key}" belongs in a metrics rule (under metrics:), not in defaults`;
+  if (!guess && error.instancePath === '' && SETTING_KEYS.includes(key))
+    fix = `"${key}" is a metric setting: put it under defaults: or in a metrics rule`;
+  if (!guess && error.instancePath !== '' && TOP_KEYS.includes(key))
+    fix = `"${key}" is a top-level key: write it without indentation`;
+  if (!guess && error.instancePath === '/defaults' && RULE_ONLY_KEYS.includes(key))
+    fix = `"${key}" belongs in a metrics rule (under metrics:), not in defaults`;
   return { ...position(tree, pointer, true), message: `unknown key ${JSON.stringify(key)} ${where}`, fix };
 }
 

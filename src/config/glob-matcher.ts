@@ -1,5 +1,12 @@
 import picomatch from 'picomatch';
-import { exactMatcher, knownMatcher, rememberMatcher, useFallbackCompiler, type GlobCompiler, type NameMatcher } from './name-matchers.js';
+import {
+  exactMatcher,
+  knownMatcher,
+  rememberMatcher,
+  useFallbackCompiler,
+  type GlobCompiler,
+  type NameMatcher,
+} from './name-matchers.js';
 
 export type { NameMatcher };
 

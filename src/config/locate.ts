@@ -31,7 +31,11 @@ export async function anyConfigPresent(cwd: string, paths: readonly string[] = D
  * @throws InputError for a missing named file or an invalid config (with file:line:col).
  * @example await loadConfigLazily(undefined, '/repo') // the defaults in a folder without a config file
  */
-export async function loadConfigLazily(path: string | undefined, cwd: string, required = path !== undefined): Promise<Config> {
+export async function loadConfigLazily(
+  path: string | undefined,
+  cwd: string,
+  required = path !== undefined,
+): Promise<Config> {
   if (path === undefined && !(await anyConfigPresent(cwd))) return defaultConfig();
   const { readConfigFile } = await import('./read.js');
   return readConfigFile(path, { cwd, required });

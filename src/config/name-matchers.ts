@@ -77,7 +77,10 @@ export function matcherFor(globs: readonly string[]): NameMatcher {
   const known = compiled.get(globs);
   if (known) return known;
   const made = exactMatcher(globs) ?? fallback?.(globs);
-  if (!made) throw new Error(`the globs ${JSON.stringify(globs)} were never compiled; read the config with readConfigFile or parseConfig`);
+  if (!made)
+    throw new Error(
+      `the globs ${JSON.stringify(globs)} were never compiled; read the config with readConfigFile or parseConfig`,
+    );
   return rememberMatcher(globs, made);
 }
 

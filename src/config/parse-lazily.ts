@@ -15,10 +15,12 @@ import type { Config } from './types.js';
 export async function parseConfigLazily(text: string, source: string): Promise<Config> {
   const body = configBody(text);
   const plain = readPlainYaml(body);
-  const read = plain !== undefined ? { tree: plain, problems: [] } : (await import('./yaml-tree.js')).readYamlTree(body);
+  const read =
+    plain !== undefined ? { tree: plain, problems: [] } : (await import('./yaml-tree.js')).readYamlTree(body);
   const tree = checkedConfigTree(read, source);
   if (tree === undefined) return { ...defaultConfig(), source };
-  const globs = needsGlobLibrary(tree.value) ? (await import('./glob-matcher.js')).picomatchCompiler : exactNameCompiler;
+  const globs = needsGlobLibrary(tree.value)
+    ? (await import('./glob-matcher.js')).picomatchCompiler
+    : exactNameCompiler;
   return configFromTree(tree, source, globs);
 }
-

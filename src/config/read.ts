@@ -50,14 +50,21 @@ async function readText(shown: string, full: string): Promise<string | undefined
   try {
     const info = await stat(full);
     if (info.isDirectory()) {
-      throw new InputError(`config path ${shown} is a folder, not a file`, { where: shown, fix: 'name the YAML file itself' });
+      throw new InputError(`config path ${shown} is a folder, not a file`, {
+        where: shown,
+        fix: 'name the YAML file itself',
+      });
     }
     size = info.size;
   } catch (err) {
     if (err instanceof InputError) throw err;
     const code = (err as NodeJS.ErrnoException).code;
     if (code === 'ENOENT' || code === 'ENOTDIR') return undefined;
-    throw new InputError(`cannot read config file ${shown} (${code ?? String(err)})`, { where: shown, fix: 'check that the file is readable', cause: err });
+    throw new InputError(`cannot read config file ${shown} (${code ?? String(err)})`, {
+      where: shown,
+      fix: 'check that the file is readable',
+      cause: err,
+    });
   }
   if (size > MAX_CONFIG_FILE_BYTES) throw tooLarge(shown, size);
   let bytes: Buffer;
@@ -65,14 +72,22 @@ async function readText(shown: string, full: string): Promise<string | undefined
     bytes = await readFile(full);
   } catch (err) {
     const code = (err as NodeJS.ErrnoException).code;
-    throw new InputError(`cannot read config file ${shown} (${code ?? String(err)})`, { where: shown, fix: 'check that the file is readable', cause: err });
+    throw new InputError(`cannot read config file ${shown} (${code ?? String(err)})`, {
+      where: shown,
+      fix: 'check that the file is readable',
+      cause: err,
+    });
   }
   // The file may have grown since stat.
   if (bytes.length > MAX_CONFIG_FILE_BYTES) throw tooLarge(shown, bytes.length);
   try {
     return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
   } catch (err) {
-    throw new InputError(`config file ${shown} is not UTF-8 text`, { where: shown, fix: 'save the file as UTF-8', cause: err });
+    throw new InputError(`config file ${shown} is not UTF-8 text`, {
+      where: shown,
+      fix: 'save the file as UTF-8',
+      cause: err,
+    });
   }
 }
 

@@ -9,10 +9,19 @@ type Data = Record<string, unknown>;
 
 /** YAML key -> MetricSettings field. */
 const FIELDS: ReadonlyArray<[string, keyof MetricSettings]> = [
-  ['cutoff', 'cutoff'], ['worse', 'worse'], ['tolerance', 'tolerance'], ['resolution', 'resolution'],
-  ['window', 'window'], ['min-runs', 'minRuns'], ['transform', 'transform'], ['fit', 'fit'],
-  ['uncertainty', 'uncertainty'], ['aggregate', 'aggregate'], ['change-points', 'changePoints'],
-  ['ignore', 'ignore'], ['relative-to', 'relativeTo'],
+  ['cutoff', 'cutoff'],
+  ['worse', 'worse'],
+  ['tolerance', 'tolerance'],
+  ['resolution', 'resolution'],
+  ['window', 'window'],
+  ['min-runs', 'minRuns'],
+  ['transform', 'transform'],
+  ['fit', 'fit'],
+  ['uncertainty', 'uncertainty'],
+  ['aggregate', 'aggregate'],
+  ['change-points', 'changePoints'],
+  ['ignore', 'ignore'],
+  ['relative-to', 'relativeTo'],
 ];
 
 function settingsOf(data: Data): Partial<MetricSettings> {
@@ -37,7 +46,12 @@ export function globList(value: unknown): string[] {
  * a plain name), which files the matchers for settingsFor and groupFor.
  * @example toConfig({ defaults: { tolerance: '2%' } }, tree, 'bellgate.yml', picomatchCompiler).config.defaults.tolerance // { kind: 'percent', amount: 0.02 }
  */
-export function toConfig(value: unknown, tree: YamlTree, source: string, globs: GlobCompiler): { config: Config; problems: ConfigProblem[] } {
+export function toConfig(
+  value: unknown,
+  tree: YamlTree,
+  source: string,
+  globs: GlobCompiler,
+): { config: Config; problems: ConfigProblem[] } {
   const config = defaultConfig();
   config.source = source;
   const problems: ConfigProblem[] = [];
@@ -62,7 +76,11 @@ export function toConfig(value: unknown, tree: YamlTree, source: string, globs: 
     try {
       globs.compile(list);
     } catch (err) {
-      problems.push({ ...at(pointer), message: `a glob cannot be used: ${(err as Error).message}`, fix: 'write a shorter, simpler glob' });
+      problems.push({
+        ...at(pointer),
+        message: `a glob cannot be used: ${(err as Error).message}`,
+        fix: 'write a shorter, simpler glob',
+      });
     }
   };
 
@@ -71,7 +89,12 @@ export function toConfig(value: unknown, tree: YamlTree, source: string, globs: 
     const rule: MetricRule = { match: globList(item.match), settings: settingsOf(item), line: at(pointer).line };
     checkGlobs(rule.match, `${pointer}/match`);
     const target = rule.settings.relativeTo;
-    if (target !== undefined && rule.match.length === 1 && globs.isLiteral(rule.match[0]!) && rule.match[0] === target) {
+    if (
+      target !== undefined &&
+      rule.match.length === 1 &&
+      globs.isLiteral(rule.match[0]!) &&
+      rule.match[0] === target
+    ) {
       problems.push({
         ...at(`${pointer}/relative-to`),
         message: `relative-to names the rule's own metric "${target}"; it would be divided by itself`,
@@ -85,11 +108,19 @@ export function toConfig(value: unknown, tree: YamlTree, source: string, globs: 
   ((root.groups ?? []) as Data[]).forEach((item, i) => {
     const pointer = `/groups/${i}`;
     const name = String(item.name);
-    const group: GroupSpec = { name, match: item.match === undefined ? [`${name}/**`] : globList(item.match), line: at(pointer).line };
+    const group: GroupSpec = {
+      name,
+      match: item.match === undefined ? [`${name}/**`] : globList(item.match),
+      line: at(pointer).line,
+    };
     checkGlobs(group.match, `${pointer}/match`);
     const earlier = names.get(name);
     if (earlier !== undefined) {
-      problems.push({ ...at(`${pointer}/name`), message: `group name "${name}" is used twice (first on line ${earlier})`, fix: 'give each group its own name' });
+      problems.push({
+        ...at(`${pointer}/name`),
+        message: `group name "${name}" is used twice (first on line ${earlier})`,
+        fix: 'give each group its own name',
+      });
     } else {
       names.set(name, at(`${pointer}/name`).line);
     }
@@ -101,7 +132,12 @@ export function toConfig(value: unknown, tree: YamlTree, source: string, globs: 
 }
 
 /** window and keep below min-runs leave a metric in learning for ever; say so where it was set. */
-function checkRunCounts(config: Config, root: Data, at: (p: string, key?: boolean) => Position, problems: ConfigProblem[]): void {
+function checkRunCounts(
+  config: Config,
+  root: Data,
+  at: (p: string, key?: boolean) => Position,
+  problems: ConfigProblem[],
+): void {
   const levels = [
     { pointer: '/defaults', own: (root.defaults ?? {}) as Data, settings: config.defaults, label: 'defaults' },
     ...config.rules.map((rule, i) => ({

@@ -25,12 +25,14 @@ class Stop {
 export function readYamlTree(text: string): { tree?: YamlTree; problems: ConfigProblem[] } {
   if (text.length > MAX_CONFIG_CHARS) {
     return {
-      problems: [{
-        line: 1,
-        col: 1,
-        message: `the config is ${text.length} characters; the limit is ${MAX_CONFIG_CHARS} (1 MiB)`,
-        fix: 'a Bellgate config is a few kilobytes; check that the right file is named',
-      }],
+      problems: [
+        {
+          line: 1,
+          col: 1,
+          message: `the config is ${text.length} characters; the limit is ${MAX_CONFIG_CHARS} (1 MiB)`,
+          fix: 'a Bellgate config is a few kilobytes; check that the right file is named',
+        },
+      ],
     };
   }
   const deep = prescanShape(text);
@@ -44,13 +46,26 @@ export function readYamlTree(text: string): { tree?: YamlTree; problems: ConfigP
     docs = [...new Composer({ uniqueKeys: false, merge: false, strict: true }).compose(tokens, true, text.length)];
   } catch (err) {
     // The YAML library reports problems in doc.errors; a throw would be its own bug, still shown as bad input.
-    return { problems: [{ line: 1, col: 1, message: `the YAML could not be read (${(err as Error).message})`, fix: 'simplify the file' }] };
+    return {
+      problems: [
+        {
+          line: 1,
+          col: 1,
+          message: `the YAML could not be read (${(err as Error).message})`,
+          fix: 'simplify the file',
+        },
+      ],
+    };
   }
   const problems: ConfigProblem[] = [];
   const at = (offset: number): Position => counter.linePos(offset);
   for (const doc of docs) {
     for (const issue of [...doc.errors, ...doc.warnings]) {
-      problems.push({ ...at(issue.pos[0]), message: firstLine(issue.message), fix: 'write valid YAML (see https://yaml.org/spec/1.2.2/)' });
+      problems.push({
+        ...at(issue.pos[0]),
+        message: firstLine(issue.message),
+        fix: 'write valid YAML (see https://yaml.org/spec/1.2.2/)',
+      });
     }
   }
   if (docs.length > 1) {
@@ -82,22 +97,44 @@ function firstLine(message: string): string {
 
 // Duplicate keys are found here with a Set: the YAML library's own check (uniqueKeys) compares
 // every pair of keys, which takes seconds on a few thousand keys.
-function buildValue(doc: Document, root: Node, tree: YamlTree, at: (offset: number) => Position, problems: ConfigProblem[]): unknown {
+function buildValue(
+  doc: Document,
+  root: Node,
+  tree: YamlTree,
+  at: (offset: number) => Position,
+  problems: ConfigProblem[],
+): unknown {
   let values = 0;
   let aliases = 0;
   const build = (node: Node, pointer: string, depth: number): unknown => {
     const pos = at(node.range?.[0] ?? 0);
     if (++values > MAX_CONFIG_VALUES || depth > MAX_CONFIG_DEPTH) {
-      const what = values > MAX_CONFIG_VALUES ? `more than ${MAX_CONFIG_VALUES} values` : `nesting deeper than ${MAX_CONFIG_DEPTH} levels`;
-      throw new Stop({ ...pos, message: `the config expands to ${what}`, fix: 'use fewer aliases (*name); a config needs a few hundred values at most' });
+      const what =
+        values > MAX_CONFIG_VALUES
+          ? `more than ${MAX_CONFIG_VALUES} values`
+          : `nesting deeper than ${MAX_CONFIG_DEPTH} levels`;
+      throw new Stop({
+        ...pos,
+        message: `the config expands to ${what}`,
+        fix: 'use fewer aliases (*name); a config needs a few hundred values at most',
+      });
     }
     if (!tree.valueAt.has(pointer)) tree.valueAt.set(pointer, pos);
     if (isAlias(node)) {
       if (++aliases > MAX_ALIAS_COUNT) {
-        throw new Stop({ ...pos, message: `more than ${MAX_ALIAS_COUNT} aliases (*name)`, fix: 'repeat the values instead of aliasing them' });
+        throw new Stop({
+          ...pos,
+          message: `more than ${MAX_ALIAS_COUNT} aliases (*name)`,
+          fix: 'repeat the values instead of aliasing them',
+        });
       }
       const target = node.resolve(doc);
-      if (target === undefined) throw new Stop({ ...pos, message: `alias *${node.source} names no anchor`, fix: `define &${node.source} before using it` });
+      if (target === undefined)
+        throw new Stop({
+          ...pos,
+          message: `alias *${node.source} names no anchor`,
+          fix: `define &${node.source} before using it`,
+        });
       return build(target, pointer, depth + 1);
     }
     if (isScalar(node)) return node.value;
@@ -109,10 +146,18 @@ function buildValue(doc: Document, root: Node, tree: YamlTree, at: (offset: numb
         const keyPos = at(keyNode?.range?.[0] ?? node.range?.[0] ?? 0);
         const key = isScalar(keyNode) ? keyNode.value : undefined;
         if (typeof key !== 'string' && typeof key !== 'number') {
-          throw new Stop({ ...keyPos, message: 'a key must be a plain name', fix: 'write keys like "cutoff:"; lists and mappings cannot be keys' });
+          throw new Stop({
+            ...keyPos,
+            message: 'a key must be a plain name',
+            fix: 'write keys like "cutoff:"; lists and mappings cannot be keys',
+          });
         }
         if (Object.hasOwn(out, String(key))) {
-          problems.push({ ...keyPos, message: `the key ${JSON.stringify(String(key))} appears twice in one mapping`, fix: 'keep one of the two entries' });
+          problems.push({
+            ...keyPos,
+            message: `the key ${JSON.stringify(String(key))} appears twice in one mapping`,
+            fix: 'keep one of the two entries',
+          });
           continue;
         }
         const child = `${pointer}/${pointerSegment(key)}`;
@@ -134,7 +179,11 @@ function collectNonFinite(tree: YamlTree): ConfigProblem[] {
   const walk = (value: unknown, pointer: string): void => {
     if (typeof value === 'number' && !Number.isFinite(value)) {
       const pos = tree.valueAt.get(pointer) ?? { line: 1, col: 1 };
-      problems.push({ ...pos, message: `${value > 0 ? '.inf' : value < 0 ? '-.inf' : '.nan'} is not a finite number`, fix: 'write an ordinary number' });
+      problems.push({
+        ...pos,
+        message: `${value > 0 ? '.inf' : value < 0 ? '-.inf' : '.nan'} is not a finite number`,
+        fix: 'write an ordinary number',
+      });
     } else if (Array.isArray(value)) {
       value.forEach((item, i) => walk(item, `${pointer}/${i}`));
     } else if (value !== null && typeof value === 'object') {

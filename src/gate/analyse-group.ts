@@ -69,11 +69,19 @@ export function analyseGroup(frame: GroupFrame): GroupAnalysis {
   const commons = rows.map(average);
   const now = average(current);
   const common = judgeMove(commons, now);
-  const own = current.map((u, j) => judgeMove(rows.map((row, i) => row[j]! - commons[i]!), u - now));
+  const own = current.map((u, j) =>
+    judgeMove(
+      rows.map((row, i) => row[j]! - commons[i]!),
+      u - now,
+    ),
+  );
   const ownTail = Math.min(1, p * Math.min(...own.map((m) => m.tail)));
   const shrunk = shrunkCovariance(rows);
   const contributions = mahalanobisContributions(current, shrunk.mean, shrunk.covariance);
-  const distance = Math.max(0, contributions.reduce((sum, c) => sum + c, 0));
+  const distance = Math.max(
+    0,
+    contributions.reduce((sum, c) => sum + c, 0),
+  );
   const distanceTail = n > p ? hotellingTail(distance, p, n) : chiSquareTail(distance, p);
   return {
     n,

@@ -101,7 +101,8 @@ class NewestWindow implements SelectedBaseline {
   get runIds(): string[] {
     if (this.#runIds === undefined) {
       const ids: string[] = [];
-      for (let i = this.#first; i < this.#count; i++) if (Number.isFinite(this.#column[i]!)) ids.push(this.#history.runs[i]!.id);
+      for (let i = this.#first; i < this.#count; i++)
+        if (Number.isFinite(this.#column[i]!)) ids.push(this.#history.runs[i]!.id);
       this.#runIds = ids;
     }
     return this.#runIds;
@@ -119,7 +120,12 @@ class NewestWindow implements SelectedBaseline {
  * it. One forward pass checks and counts (in run order, so an error names the oldest bad run), then
  * a walk back from the newest run builds just the `window` kept values.
  */
-function checkedWindow(history: History, name: string, column: readonly number[], settings: MetricSettings): SelectedBaseline {
+function checkedWindow(
+  history: History,
+  name: string,
+  column: readonly number[],
+  settings: MetricSettings,
+): SelectedBaseline {
   const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
   const ratio = settings.relativeTo !== undefined;
   const count = Math.min(column.length, history.runs.length);
@@ -142,7 +148,12 @@ function checkedWindow(history: History, name: string, column: readonly number[]
 }
 
 /** Run i's value, divided by the reference of the same run for a ratio; undefined when it lacks either. */
-function pairedValue(column: readonly number[], reference: readonly number[] | undefined, ratio: boolean, i: number): number | undefined {
+function pairedValue(
+  column: readonly number[],
+  reference: readonly number[] | undefined,
+  ratio: boolean,
+  i: number,
+): number | undefined {
   const x = column[i]!;
   if (!Number.isFinite(x)) return undefined;
   if (!ratio) return x;

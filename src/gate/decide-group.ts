@@ -43,7 +43,10 @@ export function decideGroup(
       (commonStatus === 'improved' && single.direction === 'better');
     const commonPhrase = `common move ${signed(analysis.common.z)} sd, tail ${formatNumber(analysis.common.tail)}`;
     if (withCommon) {
-      return decideMetric(single, { significant: true, phrase: `${describe}; ${commonPhrase}, beyond the group's history; ${test.phrase}` });
+      return decideMetric(single, {
+        significant: true,
+        phrase: `${describe}; ${commonPhrase}, beyond the group's history; ${test.phrase}`,
+      });
     }
     if (test.significant && main) {
       const direction = ownDirection(own.z, single.settings.worse === 'both');

@@ -7,7 +7,11 @@ import { precisionText } from './precision-text.js';
 export function formatNumber(x: number): string {
   if (x === 0 || !Number.isFinite(x)) return String(x);
   const a = Math.abs(x);
-  if (a < 1e-3 || a >= 1e6) return x.toExponential(2).replace(/\.?0+e/, 'e').replace('e+', 'e');
+  if (a < 1e-3 || a >= 1e6)
+    return x
+      .toExponential(2)
+      .replace(/\.?0+e/, 'e')
+      .replace('e+', 'e');
   return precisionText(x, 3);
 }
 

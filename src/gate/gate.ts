@@ -39,7 +39,8 @@ export async function prepareGate(config: Config): Promise<void> {
 
 /** The group judge; a caller that skipped prepareGate is told so. */
 function loadedGroupJudge(): typeof judgeGroups {
-  if (groupJudge === undefined) throw new Error('the group judge is not loaded: await prepareGate(config) before runGate');
+  if (groupJudge === undefined)
+    throw new Error('the group judge is not loaded: await prepareGate(config) before runGate');
   return groupJudge;
 }
 
@@ -65,7 +66,8 @@ export function runGate(input: GateInput): Report {
   // per-metric group lookups and cutoff levels are skipped.
   const groupOutcome =
     config.groups.length === 0 ? NO_GROUPS : loadedGroupJudge()(config, scored, (name) => groupFor(config, name)?.name);
-  const lone = groupOutcome.judged.size === 0 ? scored : scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
+  const lone =
+    groupOutcome.judged.size === 0 ? scored : scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
   const tests =
     config.family === 'none'
       ? []

@@ -1,5 +1,10 @@
 import type { MetricSettings } from '../config/types.js';
-import { gaussianDensity, plugInRelativeDensity, predictiveRelativeDensity, predictiveScale } from '../model/density.js';
+import {
+  gaussianDensity,
+  plugInRelativeDensity,
+  predictiveRelativeDensity,
+  predictiveScale,
+} from '../model/density.js';
 import { fitGaussian, type GaussianFit } from '../model/fit.js';
 import { InputError } from '../model/input-error.js';
 import { normalTail, studentTail } from '../model/tails.js';
@@ -67,7 +72,10 @@ export function scoreMetric(
   extras: JudgeExtras = {},
 ): MetricScore {
   if (!Number.isFinite(value)) {
-    throw new InputError(`value ${value} of ${name} is not a finite number`, { where: name, fix: 'check the metric file' });
+    throw new InputError(`value ${value} of ${name} is not a finite number`, {
+      where: name,
+      fix: 'check the metric file',
+    });
   }
   const current = toFitScale(value, settings.transform, name);
   // Built key by key (in the report's key order) rather than by spreads: this runs per metric.

@@ -44,12 +44,25 @@ export function judgeName(
   const settings = settingsFor(config, name);
   const measurement = run.metrics.get(name);
   if (settings.ignore) {
-    return { result: { ...plain(name, settings), ...own(measurement), status: 'ignored', reason: 'matched a rule with ignore: true' } };
+    return {
+      result: {
+        ...plain(name, settings),
+        ...own(measurement),
+        status: 'ignored',
+        reason: 'matched a rule with ignore: true',
+      },
+    };
   }
   const baseline = selectBaseline(history, name, settings);
   if (measurement === undefined) {
     const runs = `${baseline.available} run${baseline.available === 1 ? '' : 's'}`;
-    return { result: { ...plain(name, settings), status: 'missing', reason: `in the history (${runs}) but absent from this run` } };
+    return {
+      result: {
+        ...plain(name, settings),
+        status: 'missing',
+        reason: `in the history (${runs}) but absent from this run`,
+      },
+    };
   }
   let value = measurement.value;
   if (settings.relativeTo !== undefined) {

@@ -16,7 +16,8 @@ function line(m: MetricResult): string {
   if (m.value !== undefined) parts.push(`value ${formatValue(m.value, unit)}`);
   if (m.baseline) parts.push(`baseline ${formatBaseline(m.baseline, unit)}`);
   if (m.change !== undefined) parts.push(`change ${formatChange(m.change)}`);
-  if (m.relativeDensity !== undefined) parts.push(`relative density ${formatAgainstCutoff(m.relativeDensity, m.cutoff)}`);
+  if (m.relativeDensity !== undefined)
+    parts.push(`relative density ${formatAgainstCutoff(m.relativeDensity, m.cutoff)}`);
   return `${cleanText(m.reason, 2000)}${parts.length ? ` (${parts.join(', ')})` : ''}`;
 }
 
@@ -24,7 +25,11 @@ function line(m: MetricResult): string {
  * Emits the annotations of a report; returns how many of each were written.
  * @example annotate(report, sink) // { errors: 1, notices: 0 }
  */
-export function annotate(report: Report, sink: Pick<ActionSink, 'error' | 'notice'>, series: string): { errors: number; notices: number } {
+export function annotate(
+  report: Report,
+  sink: Pick<ActionSink, 'error' | 'notice'>,
+  series: string,
+): { errors: number; notices: number } {
   let errors = 0;
   let notices = 0;
   for (const m of report.metrics) {

@@ -43,7 +43,9 @@ function required(env: Env, name: string): string {
 }
 
 function record(value: unknown): Record<string, unknown> | undefined {
-  return typeof value === 'object' && value !== null && !Array.isArray(value) ? (value as Record<string, unknown>) : undefined;
+  return typeof value === 'object' && value !== null && !Array.isArray(value)
+    ? (value as Record<string, unknown>)
+    : undefined;
 }
 
 /**
@@ -54,7 +56,9 @@ function record(value: unknown): Record<string, unknown> | undefined {
 export async function readRunContext(env: Env, readText: (path: string) => Promise<string>): Promise<RunContext> {
   const [owner, repo, ...rest] = required(env, 'GITHUB_REPOSITORY').split('/');
   if (!owner || !repo || rest.length > 0) {
-    throw new InputError(`GITHUB_REPOSITORY is "${env.GITHUB_REPOSITORY}", expected owner/name`, { where: 'GITHUB_REPOSITORY' });
+    throw new InputError(`GITHUB_REPOSITORY is "${env.GITHUB_REPOSITORY}", expected owner/name`, {
+      where: 'GITHUB_REPOSITORY',
+    });
   }
   const eventName = required(env, 'GITHUB_EVENT_NAME');
   let payload: Record<string, unknown> = {};
@@ -63,7 +67,10 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
     try {
       payload = record(JSON.parse(await readText(eventPath))) ?? {};
     } catch (cause) {
-      throw new InputError(`the event payload ${eventPath} cannot be read as JSON`, { where: 'GITHUB_EVENT_PATH', cause });
+      throw new InputError(`the event payload ${eventPath} cannot be read as JSON`, {
+        where: 'GITHUB_EVENT_PATH',
+        cause,
+      });
     }
   }
   const repository = record(payload.repository);
@@ -78,7 +85,8 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
       ? pr.labels.map((l) => record(l)?.name).filter((n): n is string => typeof n === 'string')
       : [];
     const headRepo = record(record(pr.head)?.repo);
-    const fromFork = headRepo?.fork === true || (typeof headRepo?.full_name === 'string' && headRepo.full_name !== `${owner}/${repo}`);
+    const fromFork =
+      headRepo?.fork === true || (typeof headRepo?.full_name === 'string' && headRepo.full_name !== `${owner}/${repo}`);
     pullRequest = { number: pr.number, labels, fromFork };
   }
   const runnerTemp = env.RUNNER_TEMP || env.TMPDIR || '/tmp';
@@ -94,7 +102,10 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
     ref: env.GITHUB_REF || undefined,
     workflow: env.GITHUB_WORKFLOW || 'workflow',
     job: env.GITHUB_JOB || 'job',
-    defaultBranch: typeof repository?.default_branch === 'string' ? repository.default_branch : scheduledBranch(eventName, env.GITHUB_REF),
+    defaultBranch:
+      typeof repository?.default_branch === 'string'
+        ? repository.default_branch
+        : scheduledBranch(eventName, env.GITHUB_REF),
     pullRequest,
     apiUrl: env.GITHUB_API_URL || 'https://api.github.com',
     serverUrl: env.GITHUB_SERVER_URL || 'https://github.com',

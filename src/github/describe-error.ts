@@ -4,7 +4,8 @@
  * @example describeError(new InputError('bad', { where: 'input store', fix: 'use artifact' })) // 'input store: bad\n  fix: use artifact'
  */
 export function describeError(error: unknown): string {
-  if (error && typeof (error as { describe?: unknown }).describe === 'function') return (error as { describe(): string }).describe();
+  if (error && typeof (error as { describe?: unknown }).describe === 'function')
+    return (error as { describe(): string }).describe();
   if (error instanceof Error) return error.message;
   return String(error);
 }

@@ -27,7 +27,11 @@ export interface RecordDecision {
  * Decides whether this run is recorded.
  * @example decideRecord('auto', { eventName: 'push', ref: 'refs/heads/main', ... }, 'main').record // true
  */
-export function decideRecord(mode: Mode, context: Pick<RunContext, 'eventName' | 'ref'>, baselineBranch: string | undefined): RecordDecision {
+export function decideRecord(
+  mode: Mode,
+  context: Pick<RunContext, 'eventName' | 'ref'>,
+  baselineBranch: string | undefined,
+): RecordDecision {
   if (mode === 'always') return { record: true, reason: 'record: always', notice: false };
   if (mode === 'never') return { record: false, reason: 'record: never', notice: false };
   const { eventName, ref } = context;
@@ -35,13 +39,21 @@ export function decideRecord(mode: Mode, context: Pick<RunContext, 'eventName' |
     return { record: false, reason: `${eventName} runs are checked, never recorded`, notice: false };
   }
   if (!BASELINE_EVENTS.includes(eventName)) {
-    return { record: false, reason: `event ${eventName} is checked only; set \`record: always\` to record it`, notice: true };
+    return {
+      record: false,
+      reason: `event ${eventName} is checked only; set \`record: always\` to record it`,
+      notice: true,
+    };
   }
   if (baselineBranch === undefined) {
     return { record: false, reason: 'the baseline branch is unknown; set `baseline-branch`', notice: true };
   }
   if (ref !== `refs/heads/${baselineBranch}`) {
-    return { record: false, reason: `${ref ?? 'this ref'} is not the baseline branch ${baselineBranch}`, notice: false };
+    return {
+      record: false,
+      reason: `${ref ?? 'this ref'} is not the baseline branch ${baselineBranch}`,
+      notice: false,
+    };
   }
   return { record: true, reason: `${eventName} on the baseline branch ${baselineBranch}`, notice: false };
 }

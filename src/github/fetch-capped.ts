@@ -32,7 +32,9 @@ export async function fetchCapped(url: string, maxBytes: number, tuning: RetryTu
     }
     return readCapped(res.body, maxBytes);
   }
-  throw new Error(`storage download failed after ${tuning.retries + 1} tries: ${last instanceof Error ? last.message : String(last)}`);
+  throw new Error(
+    `storage download failed after ${tuning.retries + 1} tries: ${last instanceof Error ? last.message : String(last)}`,
+  );
 }
 
 /** Reads a byte stream to its end, failing as soon as it passes `maxBytes`. */

@@ -19,7 +19,12 @@ function isStoreError(error: unknown): boolean {
 /**
  * @example (await loadHistory(store, 'ci', inputs, sink)).readable // false when the store failed
  */
-export async function loadHistory(store: HistoryStore, series: string, inputs: ActionInputs, sink: ActionSink): Promise<{ history: History; readable: boolean }> {
+export async function loadHistory(
+  store: HistoryStore,
+  series: string,
+  inputs: ActionInputs,
+  sink: ActionSink,
+): Promise<{ history: History; readable: boolean }> {
   try {
     const history = await store.load();
     sink.info(`bellgate: read ${history.runs.length} baseline runs from ${store.describe()}`);
@@ -28,7 +33,10 @@ export async function loadHistory(store: HistoryStore, series: string, inputs: A
     if (!isStoreError(error)) throw error;
     const message = `bellgate: the history could not be fetched from ${store.describe()}: ${describeError(error)}`;
     if (inputs.historyFailure === 'fail') sink.error(message);
-    else sink.warning(`${message}\nGoing on without history (every metric is new); set \`history-failure: fail\` to fail instead.`);
+    else
+      sink.warning(
+        `${message}\nGoing on without history (every metric is new); set \`history-failure: fail\` to fail instead.`,
+      );
     return { history: emptyHistory(series), readable: false };
   }
 }
@@ -37,7 +45,15 @@ export async function loadHistory(store: HistoryStore, series: string, inputs: A
  * Appends the run, trims to `keep` newest runs and saves. Returns whether it was saved.
  * @example await recordRun(store, history, info, run, 500, inputs, sink) // true
  */
-export async function recordRun(store: HistoryStore, history: History, info: RunInfo, run: Run, keep: number, inputs: ActionInputs, sink: ActionSink): Promise<boolean> {
+export async function recordRun(
+  store: HistoryStore,
+  history: History,
+  info: RunInfo,
+  run: Run,
+  keep: number,
+  inputs: ActionInputs,
+  sink: ActionSink,
+): Promise<boolean> {
   try {
     // Loaded here: a check that records nothing (every pull request) never needs the merge code.
     const { appendRun, trimHistory } = await import('../history/merge.js');

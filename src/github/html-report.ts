@@ -10,7 +10,14 @@ import type { ActionDeps } from './run-action.js';
  * a failure only warns.
  * @example await uploadHtml(deps, context, 'ci', report, history, 90)
  */
-export async function uploadHtml(deps: ActionDeps, context: RunContext, series: string, report: Report, history: History, retentionDays: number): Promise<void> {
+export async function uploadHtml(
+  deps: ActionDeps,
+  context: RunContext,
+  series: string,
+  report: Report,
+  history: History,
+  retentionDays: number,
+): Promise<void> {
   // Imported here, on the html-report path only: d3, the page code and node:crypto (artifact names)
   // stay out of every other run.
   const { artifactName } = await import('../history/artifact-name.js');

@@ -41,7 +41,11 @@ function toArtifact(raw: unknown): ArtifactEntry {
 function spacedGroup(minTime: number) {
   let next = 0;
   const limiter = {
-    schedule: async <T>(_options: unknown, job: (...args: unknown[]) => Promise<T> | T, ...args: unknown[]): Promise<T> => {
+    schedule: async <T>(
+      _options: unknown,
+      job: (...args: unknown[]) => Promise<T> | T,
+      ...args: unknown[]
+    ): Promise<T> => {
       const now = Date.now();
       const at = Math.max(now, next);
       next = at + minTime;
@@ -66,34 +70,59 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
   const tuning = target.retry ?? DEFAULT_RETRY;
   const maxPages = target.maxPages ?? 10;
   const log = target.log ?? (() => undefined);
-  const retryLimit = (after: number, options: { method?: string; url?: string }, _o: unknown, count: number): boolean => {
-    log(`GitHub API asked to wait ${after} s before ${options.method ?? ''} ${options.url ?? ''} (retry ${count + 1} of ${tuning.retries})`);
+  const retryLimit = (
+    after: number,
+    options: { method?: string; url?: string },
+    _o: unknown,
+    count: number,
+  ): boolean => {
+    log(
+      `GitHub API asked to wait ${after} s before ${options.method ?? ''} ${options.url ?? ''} (retry ${count + 1} of ${tuning.retries})`,
+    );
     return count < tuning.retries;
   };
   // @actions/github parses the event payload when it is first imported; importing it (and the
   // plugins, with Bottleneck) on first use keeps a run that never calls the API from loading any
   // of it, and any failure there becomes a plain message instead of a crash at start-up.
   let client: Promise<Octokit> | undefined;
-  const octokit = (): Promise<Octokit> => (client ??= Promise.all([
-    import('@actions/github'),
-    import('@octokit/plugin-retry'),
-    import('@octokit/plugin-throttling'),
-  ]).then(([{ getOctokit }, { retry }, { throttling }]) => getOctokit(
-    target.token,
-    {
-      baseUrl: target.baseUrl.replace(/\/+$/, ''),
-      // 429 is retried by honourRetryAfter (which reads Retry-After), not by plugin-retry.
-      retry: { retries: tuning.retries, retryAfterBaseValue: tuning.unitMs, doNotRetry: [400, 401, 403, 404, 410, 422, 429, 451] },
-      throttle: { onRateLimit: retryLimit, write: spacedGroup(tuning.unitMs) as never, notifications: spacedGroup(3 * tuning.unitMs) as never, onSecondaryRateLimit: retryLimit, retryAfterBaseValue: tuning.unitMs },
-      log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
-    },
-    honourRetryAfter(tuning) as never,
-    retry,
-    throttling,
-  )));
+  const octokit = (): Promise<Octokit> =>
+    (client ??= Promise.all([
+      import('@actions/github'),
+      import('@octokit/plugin-retry'),
+      import('@octokit/plugin-throttling'),
+    ]).then(([{ getOctokit }, { retry }, { throttling }]) =>
+      getOctokit(
+        target.token,
+        {
+          baseUrl: target.baseUrl.replace(/\/+$/, ''),
+          // 429 is retried by honourRetryAfter (which reads Retry-After), not by plugin-retry.
+          retry: {
+            retries: tuning.retries,
+            retryAfterBaseValue: tuning.unitMs,
+            doNotRetry: [400, 401, 403, 404, 410, 422, 429, 451],
+          },
+          throttle: {
+            onRateLimit: retryLimit,
+            write: spacedGroup(tuning.unitMs) as never,
+            notifications: spacedGroup(3 * tuning.unitMs) as never,
+            onSecondaryRateLimit: retryLimit,
+            retryAfterBaseValue: tuning.unitMs,
+          },
+          log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
+        },
+        honourRetryAfter(tuning) as never,
+        retry,
+        throttling,
+      ),
+    ));
   const repo = { owner: target.owner, repo: target.repo };
 
-  async function pages<T>(route: string, params: Json, pick: (data: unknown) => unknown[], map: (raw: unknown) => T): Promise<T[]> {
+  async function pages<T>(
+    route: string,
+    params: Json,
+    pick: (data: unknown) => unknown[],
+    map: (raw: unknown) => T,
+  ): Promise<T[]> {
     const out: T[] = [];
     for (let page = 1; page <= maxPages; page++) {
       const res = await (await octokit()).request(route, { ...repo, ...params, per_page: PER_PAGE, page });
@@ -106,11 +135,18 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
 
   return {
     listArtifacts: (name) =>
-      pages('GET /repos/{owner}/{repo}/actions/artifacts', { name }, (d) => (Array.isArray(obj(d).artifacts) ? (obj(d).artifacts as unknown[]) : []), toArtifact),
+      pages(
+        'GET /repos/{owner}/{repo}/actions/artifacts',
+        { name },
+        (d) => (Array.isArray(obj(d).artifacts) ? (obj(d).artifacts as unknown[]) : []),
+        toArtifact,
+      ),
     async downloadArtifact(id, maxBytes) {
       // The API answers 302 with a short-lived storage URL; following it by hand keeps the token
       // off the storage request and lets the download stop at the size cap.
-      const res = await (await octokit()).request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
+      const res = await (
+        await octokit()
+      ).request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
         ...repo,
         artifact_id: id,
         archive_format: 'zip',
@@ -124,15 +160,30 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
       throw new Error(`download of artifact #${id} answered ${res.status} without a location`);
     },
     listIssueComments: (issue) =>
-      pages('GET /repos/{owner}/{repo}/issues/{issue_number}/comments', { issue_number: issue }, (d) => (Array.isArray(d) ? d : []), toComment),
+      pages(
+        'GET /repos/{owner}/{repo}/issues/{issue_number}/comments',
+        { issue_number: issue },
+        (d) => (Array.isArray(d) ? d : []),
+        toComment,
+      ),
     async createIssueComment(issue, body) {
-      const res = await (await octokit()).request('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', { ...repo, issue_number: issue, body });
+      const res = await (
+        await octokit()
+      ).request('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', { ...repo, issue_number: issue, body });
       return toComment(res.data);
     },
     async updateIssueComment(id, body) {
-      await (await octokit()).request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
+      await (
+        await octokit()
+      ).request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
     },
     // The branch store's client: fetch-based, with its own timeout and the same retry tuning.
-    gitData: createGitDataClient({ ...repo, token: target.token, baseUrl: target.baseUrl, retries: tuning.retries, unitMs: tuning.unitMs }),
+    gitData: createGitDataClient({
+      ...repo,
+      token: target.token,
+      baseUrl: target.baseUrl,
+      retries: tuning.retries,
+      unitMs: tuning.unitMs,
+    }),
   };
 }

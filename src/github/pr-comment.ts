@@ -14,7 +14,15 @@ import type { ActionSink } from './sink.js';
  * @returns the outcome ('created', 'updated', 'unchanged', 'skipped', 'failed'), or undefined without a PR.
  * @example await postComment(api, context, inputs, marker, markdown, true, sink) // 'created'
  */
-export async function postComment(api: () => GitHubApi | Promise<GitHubApi>, context: RunContext, inputs: ActionInputs, marker: string, markdown: string, flagged: boolean, sink: ActionSink): Promise<string | undefined> {
+export async function postComment(
+  api: () => GitHubApi | Promise<GitHubApi>,
+  context: RunContext,
+  inputs: ActionInputs,
+  marker: string,
+  markdown: string,
+  flagged: boolean,
+  sink: ActionSink,
+): Promise<string | undefined> {
   const pr = context.pullRequest;
   if (!pr) return undefined;
   // `never` must not touch the API at all: asking for it with an empty token would throw and warn.
@@ -29,9 +37,10 @@ export async function postComment(api: () => GitHubApi | Promise<GitHubApi>, con
   } catch (error) {
     const status = statusOf(error);
     // A fork's pull_request run gets a read-only token: 403 (or 404) on comment writes.
-    const why = status === 403 || status === 404
-      ? `the token may not comment on pull request #${pr.number}${pr.fromFork ? ' (a fork PR gets a read-only token)' : ' (give the job `permissions: pull-requests: write`)'}`
-      : `the comment on pull request #${pr.number} failed: ${describeError(error)}`;
+    const why =
+      status === 403 || status === 404
+        ? `the token may not comment on pull request #${pr.number}${pr.fromFork ? ' (a fork PR gets a read-only token)' : ' (give the job `permissions: pull-requests: write`)'}`
+        : `the comment on pull request #${pr.number} failed: ${describeError(error)}`;
     sink.warning(`bellgate: ${why}; the report is in the job summary`);
     return 'failed';
   }

@@ -29,6 +29,8 @@ export function createRealDeps(env: Record<string, string | undefined> = process
     createApi: async (target) => (await import('./octokit-api.js')).createOctokitApi(target),
     upload: createArtifactUploader(env.RUNNER_TEMP || process.cwd()),
     // BELLGATE_RETRY_UNIT_MS shortens API backoff for the end-to-end tests; the runner never sets it.
-    ...(env.BELLGATE_RETRY_UNIT_MS ? { retry: { retries: 3, unitMs: Math.max(1, Number(env.BELLGATE_RETRY_UNIT_MS) || 1000) } } : {}),
+    ...(env.BELLGATE_RETRY_UNIT_MS
+      ? { retry: { retries: 3, unitMs: Math.max(1, Number(env.BELLGATE_RETRY_UNIT_MS) || 1000) } }
+      : {}),
   };
 }

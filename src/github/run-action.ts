@@ -83,7 +83,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   // A missing file at the default path means default settings; a missing named file is an error.
   const config = await loadActionConfig(inputs.config, deps.cwd);
   const run = await readMetricFiles(inputs.metrics, {
-    ...(inputs.inputFormat ?? config.inputFormat ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
+    ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
     limits: config.limits,
     aggregateFor: (name) => settingsFor(config, name).aggregate,
     cwd: deps.cwd,
@@ -92,7 +92,8 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const baselineBranch = inputs.baselineBranch ?? context.defaultBranch;
   const decision = decideRecord(inputs.record, context, baselineBranch);
   if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
-  else sink.info(`bellgate: series "${series}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`);
+  else
+    sink.info(`bellgate: series "${series}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`);
 
   let api: GitHubApi | Promise<GitHubApi> | undefined;
   const apiOnce = (): GitHubApi | Promise<GitHubApi> => {
@@ -164,8 +165,10 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (!readable && inputs.historyFailure === 'fail') failed = true;
 
   if (report.verdict === 'regressed' && inputs.block) {
-    sink.setFailed(`bellgate: ${regressed} metric${regressed === 1 ? '' : 's'} regressed in series "${series}" (see the job summary)` +
-      (context.pullRequest ? `; add the label "${inputs.acceptLabel}" to the pull request to accept` : ''));
+    sink.setFailed(
+      `bellgate: ${regressed} metric${regressed === 1 ? '' : 's'} regressed in series "${series}" (see the job summary)` +
+        (context.pullRequest ? `; add the label "${inputs.acceptLabel}" to the pull request to accept` : ''),
+    );
     failed = true;
   } else if (report.verdict === 'regressed') {
     sink.warning(`bellgate: ${regressed} metric(s) regressed; not failing because block is false`);

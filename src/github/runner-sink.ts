@@ -81,7 +81,10 @@ export function keyValueEntry(name: string, value: string): string {
  */
 function randomId(): string {
   let hex = '';
-  for (let i = 0; i < 4; i++) hex += Math.floor(Math.random() * 2 ** 32).toString(16).padStart(8, '0');
+  for (let i = 0; i < 4; i++)
+    hex += Math.floor(Math.random() * 2 ** 32)
+      .toString(16)
+      .padStart(8, '0');
   return `${hex.slice(0, 8)}-${hex.slice(8, 12)}-${hex.slice(12, 16)}-${hex.slice(16, 20)}-${hex.slice(20)}`;
 }
 
@@ -92,7 +95,8 @@ function randomId(): string {
  */
 export function createRunnerSink(edges: RunnerEdges = defaultEdges()): ActionSink {
   const { env, write } = edges;
-  const command = (name: string, properties: Properties, message: string): void => write(workflowCommand(name, properties, message) + EOL);
+  const command = (name: string, properties: Properties, message: string): void =>
+    write(workflowCommand(name, properties, message) + EOL);
   const error = (m: string, p?: AnnotationProps): void => command('error', annotationProperties(p), m);
   return {
     info: (m) => write(m + EOL),
@@ -116,11 +120,16 @@ export function createRunnerSink(edges: RunnerEdges = defaultEdges()): ActionSin
     },
     async appendSummary(md) {
       const file = env.GITHUB_STEP_SUMMARY;
-      if (!file) throw new Error('Unable to find environment variable for $GITHUB_STEP_SUMMARY. Check if your runtime environment supports job summaries.');
+      if (!file)
+        throw new Error(
+          'Unable to find environment variable for $GITHUB_STEP_SUMMARY. Check if your runtime environment supports job summaries.',
+        );
       try {
         accessSync(file, constants.R_OK | constants.W_OK);
       } catch {
-        throw new Error(`Unable to access summary file: '${file}'. Check if the file has correct read/write permissions.`);
+        throw new Error(
+          `Unable to access summary file: '${file}'. Check if the file has correct read/write permissions.`,
+        );
       }
       // Synchronous, as the outputs are: at the end of a run an await only lets queued V8 tasks run.
       appendFileSync(file, md + EOL, { encoding: 'utf8' });

@@ -60,7 +60,11 @@ async function buildBranchStore(s: StoreSpec): Promise<HistoryStore> {
     });
   }
   const api = (await s.api()).gitData;
-  if (!api) throw new InputError('this GitHub client cannot write a data branch', { where: 'input store', fix: 'use `store: artifact` or `store: file`' });
+  if (!api)
+    throw new InputError('this GitHub client cannot write a data branch', {
+      where: 'input store',
+      fix: 'use `store: artifact` or `store: file`',
+    });
   const { createBranchStore } = await import('../history/branch-store.js');
   return createBranchStore({ api, branch, series: s.series });
 }
@@ -70,6 +74,9 @@ async function buildBranchStore(s: StoreSpec): Promise<HistoryStore> {
  * @throws InputError for a kind that is not available.
  * @example (await createHistoryStore({ kind: 'file', history: 'bench/history.json', ... })).describe()
  */
-export async function createHistoryStore(spec: StoreSpec, builders: Record<StoreKind, StoreBuilder> = STORE_BUILDERS): Promise<HistoryStore> {
+export async function createHistoryStore(
+  spec: StoreSpec,
+  builders: Record<StoreKind, StoreBuilder> = STORE_BUILDERS,
+): Promise<HistoryStore> {
   return builders[spec.kind](spec);
 }

@@ -31,7 +31,10 @@ export function warmUpAction(env: Record<string, string | undefined>): void {
  * `metrics` line ends in `.json` and `input-format` is empty or `json`.
  * @example actionWarmUpPlan({ INPUT_METRICS: 'out/a.json' }, () => false) // ['json']
  */
-export function actionWarmUpPlan(env: Record<string, string | undefined>, exists: (path: string) => boolean): ActionWarmUpPart[] {
+export function actionWarmUpPlan(
+  env: Record<string, string | undefined>,
+  exists: (path: string) => boolean,
+): ActionWarmUpPart[] {
   // The variables of the inputs `config`, `input-format` and `metrics` (inputVariable in inputs.ts,
   // not imported: this module sits in the entry file and should pull nothing else in).
   const config = (env.INPUT_CONFIG ?? '').trim();

@@ -13,7 +13,12 @@ import { compareRuns, timeKey } from './run-order.js';
  *
  * @example appendNewest(h, { id: '83-1', time: '2026-03-02T10:00:00Z' }, columns)?.runs.at(-1)?.id // '83-1'
  */
-export function appendNewest(h: History, info: RunInfo, added: Map<string, MetricColumn>, inPlace = false): History | undefined {
+export function appendNewest(
+  h: History,
+  info: RunInfo,
+  added: Map<string, MetricColumn>,
+  inPlace = false,
+): History | undefined {
   const n = h.runs.length;
   const ids = new Set<string>();
   // compareRuns, with each run's time read once (reading a time is the costly part).
@@ -21,7 +26,8 @@ export function appendNewest(h: History, info: RunInfo, added: Map<string, Metri
   let previousKey = -Infinity;
   const inOrder = (run: RunInfo): boolean => {
     const key = timeKey(run);
-    const ordered = previous === undefined || previousKey < key || (previousKey === key && compareRuns(previous, run) <= 0);
+    const ordered =
+      previous === undefined || previousKey < key || (previousKey === key && compareRuns(previous, run) <= 0);
     previous = run;
     previousKey = key;
     return ordered;

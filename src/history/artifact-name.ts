@@ -7,7 +7,10 @@ import { createHash } from 'node:crypto';
  * @example artifactName('bellgate-history', 'bench/linux') // 'bellgate-history-bench-linux-<8 hex>'
  */
 export function artifactName(history: string, series: string): string {
-  const slug = series.replace(/[^A-Za-z0-9._-]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 60);
+  const slug = series
+    .replace(/[^A-Za-z0-9._-]+/g, '-')
+    .replace(/^-+|-+$/g, '')
+    .slice(0, 60);
   const hash = createHash('sha256').update(series).digest('hex').slice(0, 8);
   return slug === '' ? `${history}-${hash}` : `${history}-${slug}-${hash}`;
 }

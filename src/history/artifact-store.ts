@@ -92,12 +92,16 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
     }
     return listed
       .filter((a) => a.name === name && !a.expired && a.headBranch === options.baselineBranch)
-      .filter((a) => a.repositoryId === undefined || a.headRepositoryId === undefined || a.repositoryId === a.headRepositoryId)
+      .filter(
+        (a) =>
+          a.repositoryId === undefined || a.headRepositoryId === undefined || a.repositoryId === a.headRepositoryId,
+      )
       .sort((a, b) => (a.createdAt === b.createdAt ? b.id - a.id : a.createdAt < b.createdAt ? 1 : -1));
   }
 
   async function readOne(entry: ArtifactEntry): Promise<History> {
-    if (entry.sizeInBytes > maxDownload) throw new Error(`${entry.sizeInBytes} bytes, over the ${maxDownload} byte cap`);
+    if (entry.sizeInBytes > maxDownload)
+      throw new Error(`${entry.sizeInBytes} bytes, over the ${maxDownload} byte cap`);
     let zip: Uint8Array;
     try {
       zip = await options.api.downloadArtifact(entry.id, maxDownload);
@@ -114,7 +118,8 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
     }
     const text = readZipEntry(zip, HISTORY_FILE, zipLimits);
     const history = parseHistory(text, `${where} #${entry.id}/${HISTORY_FILE}`);
-    if (history.series !== options.series) throw new Error(`it holds series "${history.series}", not "${options.series}"`);
+    if (history.series !== options.series)
+      throw new Error(`it holds series "${history.series}", not "${options.series}"`);
     return history;
   }
 

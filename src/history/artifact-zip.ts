@@ -48,7 +48,8 @@ export function readZipEntry(bytes: Uint8Array, fileName: string, limits: ZipLim
     throw new ZipRefusedError(`not a readable zip (${cause instanceof Error ? cause.message : String(cause)})`);
   }
   if (hostile !== undefined) throw new ZipRefusedError(`entry "${hostile}" would leave its folder`);
-  if (entries > limits.maxEntries) throw new ZipRefusedError(`${entries} entries, more than the ${limits.maxEntries} allowed`);
+  if (entries > limits.maxEntries)
+    throw new ZipRefusedError(`${entries} entries, more than the ${limits.maxEntries} allowed`);
   if (declared > limits.maxUnzippedBytes) {
     throw new ZipRefusedError(`unzips to ${declared} bytes, more than the ${limits.maxUnzippedBytes} allowed`);
   }

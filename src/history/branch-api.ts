@@ -45,7 +45,10 @@ export class GitDataError extends Error {
   /** Seconds the server asked to wait (Retry-After), if it did. */
   readonly retryAfter?: number;
 
-  constructor(message: string, options: { status?: number; transient?: boolean; conflict?: boolean; retryAfter?: number; cause?: unknown } = {}) {
+  constructor(
+    message: string,
+    options: { status?: number; transient?: boolean; conflict?: boolean; retryAfter?: number; cause?: unknown } = {},
+  ) {
     super(message, options.cause === undefined ? undefined : { cause: options.cause });
     this.status = options.status;
     this.transient = options.transient ?? false;

@@ -41,7 +41,6 @@ export function dataBranchName(raw: string): string {
   };
   if (name === '' || name === '@') bad('it is empty');
   if (name.length > 200) bad('it is longer than 200 characters');
-  // eslint-disable-next-line no-control-regex
   if (/[\u0000-\u0020\u007f~^:?*[\\]/.test(name)) bad('it holds a space, a control character or one of ~ ^ : ? * [ \\');
   if (name.includes('..') || name.includes('@{')) bad('it holds ".." or "@{"');
   if (name.startsWith('-')) bad('it starts with "-"');

@@ -44,7 +44,12 @@ export function createGitDataClient(options: GitDataClientOptions): GitDataApi {
   const unitMs = options.unitMs ?? 1000;
   const random = options.random ?? Math.random;
 
-  async function once(method: string, path: string, body: unknown, refWrite: boolean): Promise<{ status: number; json: Json }> {
+  async function once(
+    method: string,
+    path: string,
+    body: unknown,
+    refWrite: boolean,
+  ): Promise<{ status: number; json: Json }> {
     let res: Response;
     let raw: string;
     try {
@@ -66,18 +71,28 @@ export function createGitDataClient(options: GitDataClientOptions): GitDataApi {
       // undici reports "fetch failed" and keeps the reason (a reset, a cut body) in `cause`.
       const inner = (cause as { cause?: { message?: string } })?.cause?.message;
       const why = `${(cause as Error)?.message ?? String(cause)}${inner ? ` (${inner})` : ''}`;
-      throw new GitDataError(timedOut ? `${method} ${path}: no answer within ${timeoutMs} ms` : `${method} ${path}: ${why}`, { transient: true, cause });
+      throw new GitDataError(
+        timedOut ? `${method} ${path}: no answer within ${timeoutMs} ms` : `${method} ${path}: ${why}`,
+        { transient: true, cause },
+      );
     }
     let json: Json = {};
     try {
       json = raw === '' ? {} : (JSON.parse(raw) as Json);
     } catch (cause) {
-      if (res.ok) throw new GitDataError(`${method} ${path}: the answer was cut short or is not JSON`, { status: res.status, transient: true, cause });
+      if (res.ok)
+        throw new GitDataError(`${method} ${path}: the answer was cut short or is not JSON`, {
+          status: res.status,
+          transient: true,
+          cause,
+        });
     }
     if (res.ok || res.status === 404) return { status: res.status, json };
     const after = Number(res.headers.get('retry-after'));
     const retryAfter = Number.isFinite(after) && after >= 0 && res.headers.has('retry-after') ? after : undefined;
-    const limited = res.status === 429 || (res.status === 403 && (retryAfter !== undefined || res.headers.get('x-ratelimit-remaining') === '0'));
+    const limited =
+      res.status === 429 ||
+      (res.status === 403 && (retryAfter !== undefined || res.headers.get('x-ratelimit-remaining') === '0'));
     const said = typeof json.message === 'string' ? json.message : '';
     throw new GitDataError(`${method} ${path} answered ${res.status}${said ? ` (${said.slice(0, 200)})` : ''}`, {
       status: res.status,
@@ -87,7 +102,12 @@ export function createGitDataClient(options: GitDataClientOptions): GitDataApi {
     });
   }
 
-  async function call(method: string, path: string, body?: unknown, refWrite = false): Promise<{ status: number; json: Json }> {
+  async function call(
+    method: string,
+    path: string,
+    body?: unknown,
+    refWrite = false,
+  ): Promise<{ status: number; json: Json }> {
     for (let attempt = 0; ; attempt++) {
       try {
         return await once(method, path, body, refWrite);
@@ -116,21 +136,27 @@ export function createGitDataClient(options: GitDataClientOptions): GitDataApi {
     async findFile(path, commit) {
       const { status, json } = await call('GET', `/contents/${segments(path)}?ref=${encodeURIComponent(commit)}`);
       if (status === 404) return undefined;
-      if (json.type !== 'file') throw new GitDataError(`${path} on the data branch is a ${String(json.type)}, not a file`);
+      if (json.type !== 'file')
+        throw new GitDataError(`${path} on the data branch is a ${String(json.type)}, not a file`);
       return { sha: text(json.sha, 'the file sha'), size: typeof json.size === 'number' ? json.size : 0 };
     },
     async getBlobText(sha) {
       const json = await found('GET', `/git/blobs/${sha}`);
-      if (json.encoding !== 'base64' || typeof json.content !== 'string') throw new GitDataError(`blob ${sha} came back without base64 content`, { transient: true });
+      if (json.encoding !== 'base64' || typeof json.content !== 'string')
+        throw new GitDataError(`blob ${sha} came back without base64 content`, { transient: true });
       const bytes = Buffer.from(json.content, 'base64');
-      if (typeof json.size === 'number' && bytes.length !== json.size) throw new GitDataError(`blob ${sha} came back with ${bytes.length} of ${json.size} bytes`, { transient: true });
+      if (typeof json.size === 'number' && bytes.length !== json.size)
+        throw new GitDataError(`blob ${sha} came back with ${bytes.length} of ${json.size} bytes`, { transient: true });
       return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
     },
     async createBlob(content) {
       return text((await found('POST', '/git/blobs', { content, encoding: 'utf-8' })).sha, 'the blob sha');
     },
     async createTree(entries, baseTree) {
-      return text((await found('POST', '/git/trees', { tree: entries, ...(baseTree ? { base_tree: baseTree } : {}) })).sha, 'the tree sha');
+      return text(
+        (await found('POST', '/git/trees', { tree: entries, ...(baseTree ? { base_tree: baseTree } : {}) })).sha,
+        'the tree sha',
+      );
     },
     async createCommit(message, tree, parents) {
       return text((await found('POST', '/git/commits', { message, tree, parents })).sha, 'the commit sha');

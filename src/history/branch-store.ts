@@ -65,7 +65,10 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
     const file = await api.findFile(path, head);
     if (file === undefined) return { head, stored: emptyHistory(series) };
     if (file.size > maxBytes) {
-      throw new StoreError(`the history file is ${file.size} bytes, over the ${maxBytes} byte limit; it was left as it is`, { where, fix: 'lower `keep` and trim the history with the CLI' });
+      throw new StoreError(
+        `the history file is ${file.size} bytes, over the ${maxBytes} byte limit; it was left as it is`,
+        { where, fix: 'lower `keep` and trim the history with the CLI' },
+      );
     }
     const text = await api.getBlobText(file.sha);
     let stored: History;
@@ -73,9 +76,16 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
       stored = parseHistory(text, `${branch}:${path}`);
     } catch (cause) {
       if (!(cause instanceof InputError)) throw cause;
-      throw new StoreError(`the history file is not a readable history document (${cause.message}); it was left as it is`, { where, fix: cause.fix ?? 'repair or delete the file on the data branch', cause });
+      throw new StoreError(
+        `the history file is not a readable history document (${cause.message}); it was left as it is`,
+        { where, fix: cause.fix ?? 'repair or delete the file on the data branch', cause },
+      );
     }
-    if (stored.series !== series) throw new StoreError(`the file holds series ${JSON.stringify(stored.series)}, not ${JSON.stringify(series)}`, { where, fix: 'give each series its own file (the series name picks it)' });
+    if (stored.series !== series)
+      throw new StoreError(`the file holds series ${JSON.stringify(stored.series)}, not ${JSON.stringify(series)}`, {
+        where,
+        fix: 'give each series its own file (the series name picks it)',
+      });
     return { head, stored, text };
   }
 
@@ -83,11 +93,16 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
     if (error instanceof StoreError) return error;
     const status = error instanceof GitDataError ? error.status : undefined;
     const denied = status === 401 || status === 403 || status === 404;
-    return new StoreError(`cannot ${doing} the data branch: ${error instanceof Error ? error.message : String(error)}`, {
-      where,
-      fix: denied ? 'give the job `permissions: contents: write` (contents: read to only check) and check the token' : 'run the job again; the history on the branch was left as it was',
-      cause: error,
-    });
+    return new StoreError(
+      `cannot ${doing} the data branch: ${error instanceof Error ? error.message : String(error)}`,
+      {
+        where,
+        fix: denied
+          ? 'give the job `permissions: contents: write` (contents: read to only check) and check the token'
+          : 'run the job again; the history on the branch was left as it was',
+        cause: error,
+      },
+    );
   }
 
   async function write(snap: Snapshot, text: string, runs: number): Promise<string> {
@@ -114,7 +129,8 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
         try {
           snap = await read();
         } catch (error) {
-          if (!(error instanceof GitDataError && error.transient) || attempt + 1 >= attempts) throw failure(error, 'read');
+          if (!(error instanceof GitDataError && error.transient) || attempt + 1 >= attempts)
+            throw failure(error, 'read');
           await new Promise((r) => setTimeout(r, backoffMs(attempt, unitMs, random, error.retryAfter)));
         }
       }
@@ -123,7 +139,11 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
       return snap.stored;
     },
     async save(h: History, readCount: number): Promise<void> {
-      if (h.series !== series) throw new StoreError(`refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`, { where });
+      if (h.series !== series)
+        throw new StoreError(
+          `refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`,
+          { where },
+        );
       guardAgainstLoss(where, h, Math.max(readCount, loadedIds.size));
       const kept = new Set(h.runs.map((r) => r.id));
       const deleted = new Set([...loadedIds].filter((id) => !kept.has(id)));
@@ -141,16 +161,21 @@ export function createBranchStore(options: BranchStoreOptions): HistoryStore {
           loadedIds = new Set(next.runs.map((r) => r.id));
           return;
         } catch (error) {
-          if (!(error instanceof GitDataError) || !(error.conflict || error.transient)) throw failure(error, 'write to');
+          if (!(error instanceof GitDataError) || !(error.conflict || error.transient))
+            throw failure(error, 'write to');
           last = error;
           snap = undefined;
-          if (attempt + 1 < attempts) await new Promise((r) => setTimeout(r, backoffMs(attempt, unitMs, random, error.retryAfter)));
+          if (attempt + 1 < attempts)
+            await new Promise((r) => setTimeout(r, backoffMs(attempt, unitMs, random, error.retryAfter)));
         }
       }
-      throw new StoreError(`gave up after ${attempts} tries (last: ${last instanceof Error ? last.message : String(last)}); the history on the branch is whole, but this run may not be recorded`, {
-        where,
-        fix: 'run the job again; if writers collide often, give each matrix job its own series',
-      });
+      throw new StoreError(
+        `gave up after ${attempts} tries (last: ${last instanceof Error ? last.message : String(last)}); the history on the branch is whole, but this run may not be recorded`,
+        {
+          where,
+          fix: 'run the job again; if writers collide often, give each matrix job its own series',
+        },
+      );
     },
   };
 }

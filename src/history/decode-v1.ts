@@ -37,13 +37,18 @@ export function decodeV1(root: Record<string, unknown>, report: ProblemSink): Hi
       info.id = entry.id;
       const earlier = first.get(entry.id);
       if (earlier === undefined) first.set(entry.id, r);
-      else report(`${path}.id`, `run id ${JSON.stringify(entry.id)} appears twice (also runs[${earlier}])`,
-        'keep one copy of the run; each run id may appear once per series');
+      else
+        report(
+          `${path}.id`,
+          `run id ${JSON.stringify(entry.id)} appears twice (also runs[${earlier}])`,
+          'keep one copy of the run; each run id may appear once per series',
+        );
     }
     for (const field of RUN_FIELDS) {
       const text = entry[field];
       if (typeof text === 'string') info[field] = text;
-      else if (text !== undefined && text !== null) report(`${path}.${field}`, `${field} must be a string, found ${typeName(text)}`);
+      else if (text !== undefined && text !== null)
+        report(`${path}.${field}`, `${field} must be a string, found ${typeName(text)}`);
     }
     readValues(entry, path, r, list.length, columns, report);
   });
@@ -59,7 +64,8 @@ function readValues(
   report: ProblemSink,
 ): void {
   const { values, units } = entry;
-  if (units !== undefined && !isObject(units)) report(`${path}.units`, `units must be an object of name -> unit, found ${typeName(units)}`);
+  if (units !== undefined && !isObject(units))
+    report(`${path}.units`, `units must be an object of name -> unit, found ${typeName(units)}`);
   if (!isObject(values)) {
     report(`${path}.values`, `values must be an object of name -> number, found ${typeName(values)}`);
     return;
@@ -72,9 +78,11 @@ function readValues(
       columns.set(name, column);
     }
     if (typeof v === 'number' && Number.isFinite(v)) column.values[r] = v;
-    else if (v !== null) report(key(`${path}.values`, name), `a value must be a finite number or null, found ${typeName(v)}`);
+    else if (v !== null)
+      report(key(`${path}.values`, name), `a value must be a finite number or null, found ${typeName(v)}`);
     const unit = isObject(units) && Object.hasOwn(units, name) ? units[name] : undefined;
     if (typeof unit === 'string') column.unit = unit;
-    else if (unit !== undefined && unit !== null) report(key(`${path}.units`, name), `a unit must be a string, found ${typeName(unit)}`);
+    else if (unit !== undefined && unit !== null)
+      report(key(`${path}.units`, name), `a unit must be a string, found ${typeName(unit)}`);
   }
 }

@@ -43,8 +43,11 @@ function decodeRuns(table: unknown, report: ProblemSink): RunInfo[] | undefined 
     }
     const earlier = first.get(id);
     if (earlier !== undefined) {
-      report(at('runs.id', i), `run id ${JSON.stringify(id)} appears twice (also runs.id[${earlier}])`,
-        'keep one copy of the run; each run id may appear once per series');
+      report(
+        at('runs.id', i),
+        `run id ${JSON.stringify(id)} appears twice (also runs.id[${earlier}])`,
+        'keep one copy of the run; each run id may appear once per series',
+      );
     } else first.set(id, i);
     return { id };
   });
@@ -64,7 +67,12 @@ function decodeRuns(table: unknown, report: ProblemSink): RunInfo[] | undefined 
   return runs;
 }
 
-function decodeMetrics(table: unknown, runCount: number, report: ProblemSink, finiteRows: boolean): Map<string, MetricColumn> | undefined {
+function decodeMetrics(
+  table: unknown,
+  runCount: number,
+  report: ProblemSink,
+  finiteRows: boolean,
+): Map<string, MetricColumn> | undefined {
   if (!isObject(table)) {
     report('metrics', `metrics must be an object {names, units, values}, found ${typeName(table)}`);
     return undefined;
@@ -75,11 +83,18 @@ function decodeMetrics(table: unknown, runCount: number, report: ProblemSink, fi
     return undefined;
   }
   if (!Array.isArray(values) || values.length !== names.length) {
-    report('metrics.values', `metrics.values must hold one column per name (${names.length}), found ${lengthOrType(values)}`);
+    report(
+      'metrics.values',
+      `metrics.values must hold one column per name (${names.length}), found ${lengthOrType(values)}`,
+    );
     return undefined;
   }
   const unitsOk = units === undefined || (Array.isArray(units) && units.length === names.length);
-  if (!unitsOk) report('metrics.units', `metrics.units must be as long as metrics.names (${names.length}), found ${lengthOrType(units)}`);
+  if (!unitsOk)
+    report(
+      'metrics.units',
+      `metrics.units must be as long as metrics.names (${names.length}), found ${lengthOrType(units)}`,
+    );
   const columns = new Map<string, MetricColumn>();
   for (let m = 0; m < names.length; m++) {
     const name: unknown = names[m];
@@ -88,7 +103,11 @@ function decodeMetrics(table: unknown, runCount: number, report: ProblemSink, fi
       continue;
     }
     if (columns.has(name)) {
-      report(at('metrics.names', m), `metric ${JSON.stringify(name)} appears twice in metrics.names`, 'merge the two columns into one');
+      report(
+        at('metrics.names', m),
+        `metric ${JSON.stringify(name)} appears twice in metrics.names`,
+        'merge the two columns into one',
+      );
       continue;
     }
     const column = checkColumn(values[m], m, runCount, report, finiteRows);
@@ -109,10 +128,19 @@ function decodeMetrics(table: unknown, runCount: number, report: ProblemSink, fi
  * makes one). Rows the scan read are arrays of doubles, finite or NaN unless it says otherwise
  * (`finiteRows`), and then only their lengths are checked.
  */
-function checkColumn(column: unknown, m: number, runCount: number, report: ProblemSink, finiteRows: boolean): number[] | undefined {
+function checkColumn(
+  column: unknown,
+  m: number,
+  runCount: number,
+  report: ProblemSink,
+  finiteRows: boolean,
+): number[] | undefined {
   if (!Array.isArray(column) || column.length !== runCount) {
-    report(at('metrics.values', m), `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`,
-      'the columns are ragged: a column was cut or extended by hand; restore the document from a backup');
+    report(
+      at('metrics.values', m),
+      `each value column must hold one entry per run (${runCount}), found ${lengthOrType(column)}`,
+      'the columns are ragged: a column was cut or extended by hand; restore the document from a backup',
+    );
     return undefined;
   }
   // The scan's rows hold nothing this pass would change or report (a million entries at scale).
@@ -122,7 +150,8 @@ function checkColumn(column: unknown, m: number, runCount: number, report: Probl
     const v = cells[r];
     // v - v is 0 for every finite number, NaN for NaN and the infinities.
     if (typeof v === 'number') {
-      if (v - v !== 0 && v === v) badCell(cells, m, r, `value ${v} is not finite (an overflowing number such as 1e999?)`, report);
+      if (v - v !== 0 && v === v)
+        badCell(cells, m, r, `value ${v} is not finite (an overflowing number such as 1e999?)`, report);
     } else if (v === null) cells[r] = NaN;
     else badCell(cells, m, r, `a value must be a number or null (missing), found ${typeName(v)}`, report);
   }

@@ -41,7 +41,11 @@ export interface DecodeOptions {
  * Decodes an already parsed document of any known version, reporting problems to `report`.
  * Shared by parseHistory (stops at the first problem) and verifyHistory (lists them all).
  */
-export function decodeHistoryDocument(root: unknown, report: ProblemSink, options: DecodeOptions = {}): History | undefined {
+export function decodeHistoryDocument(
+  root: unknown,
+  report: ProblemSink,
+  options: DecodeOptions = {},
+): History | undefined {
   if (!isObject(root)) {
     report('', `a history document must be a JSON object, found ${typeName(root)}`);
     return undefined;
@@ -49,14 +53,20 @@ export function decodeHistoryDocument(root: unknown, report: ProblemSink, option
   const schema = root.schema;
   const version = typeof schema === 'string' ? /^bellgate\.history\/(\d{1,9})$/.exec(schema)?.[1] : undefined;
   if (version === undefined) {
-    report('schema', `not a Bellgate history document: "schema" is ${typeName(schema) === 'a string' ? JSON.stringify(schema) : typeName(schema)}, expected "${HISTORY_SCHEMA}"`,
-      'point the history option at a file that Bellgate wrote');
+    report(
+      'schema',
+      `not a Bellgate history document: "schema" is ${typeName(schema) === 'a string' ? JSON.stringify(schema) : typeName(schema)}, expected "${HISTORY_SCHEMA}"`,
+      'point the history option at a file that Bellgate wrote',
+    );
     return undefined;
   }
   const n = Number(version);
   if (n > CURRENT_VERSION) {
-    report('schema', `the history was written by a newer Bellgate (document version ${n}; this one reads up to ${CURRENT_VERSION})`,
-      'upgrade Bellgate to the version that wrote this history');
+    report(
+      'schema',
+      `the history was written by a newer Bellgate (document version ${n}; this one reads up to ${CURRENT_VERSION})`,
+      'upgrade Bellgate to the version that wrote this history',
+    );
     return undefined;
   }
   if (n === 1) return decodeV1(root, report);
@@ -93,9 +103,16 @@ export function parseHistory(text: string, source: string): History {
  *
  * @example parseHistoryBytes(readFileSync('h.json'), 'h.json').history.runs.length // 120
  */
-export function parseHistoryBytes(bytes: Uint8Array, source: string, scan = true): { history: History; rows?: ValueRows } {
+export function parseHistoryBytes(
+  bytes: Uint8Array,
+  source: string,
+  scan = true,
+): { history: History; rows?: ValueRows } {
   const scanned = scan ? scanHistoryBytes(bytes) : undefined;
-  if (scanned === undefined) return { history: parseHistory(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), source) };
+  if (scanned === undefined)
+    return {
+      history: parseHistory(Buffer.from(bytes.buffer, bytes.byteOffset, bytes.byteLength).toString('utf8'), source),
+    };
   const history = decodeHistoryDocument(scanned.root, throwingSink(source), { finiteRows: scanned.finite });
   if (!history) throw new InputError('unreadable history document', { where: source });
   return { history, rows: { valuesStart: scanned.valuesStart, rowEnds: scanned.rowEnds } };
@@ -159,8 +176,10 @@ export function checkRuns(h: History): void {
   const where = storeWhere(h);
   const ids = new Set<string>();
   for (const run of h.runs) {
-    if (typeof run.id !== 'string' || run.id === '') throw new InputError('a run without an id cannot be stored', { where, fix: NOT_STORABLE_FIX });
-    if (ids.has(run.id)) throw new InputError(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
+    if (typeof run.id !== 'string' || run.id === '')
+      throw new InputError('a run without an id cannot be stored', { where, fix: NOT_STORABLE_FIX });
+    if (ids.has(run.id))
+      throw new InputError(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
     ids.add(run.id);
   }
 }
@@ -171,12 +190,18 @@ export function checkRuns(h: History): void {
  */
 export function checkStorable(h: History, name: string, values: readonly number[], from = 0): void {
   if (values.length !== h.runs.length) {
-    throw new InputError(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, { where: storeWhere(h), fix: NOT_STORABLE_FIX });
+    throw new InputError(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, {
+      where: storeWhere(h),
+      fix: NOT_STORABLE_FIX,
+    });
   }
   for (let i = from; i < values.length; i++) {
     const v = values[i];
     if (v === Infinity || v === -Infinity || typeof v !== 'number') {
-      throw new InputError(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, { where: storeWhere(h), fix: NOT_STORABLE_FIX });
+      throw new InputError(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, {
+        where: storeWhere(h),
+        fix: NOT_STORABLE_FIX,
+      });
     }
   }
 }

@@ -71,18 +71,24 @@ export function createFileStore(path: string, series: string): HistoryStore {
       read = parseHistoryBytes(bytes, path, bytes.length >= SCAN_FROM);
     } catch (cause) {
       if (!(cause instanceof InputError)) throw cause;
-      throw new StoreError(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
-        where,
-        fix: `${cause.fix ?? 'repair it'}; \`bellgate verify --history ${path}\` lists every problem`,
-        cause,
-      });
+      throw new StoreError(
+        `the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`,
+        {
+          where,
+          fix: `${cause.fix ?? 'repair it'}; \`bellgate verify --history ${path}\` lists every problem`,
+          cause,
+        },
+      );
     }
     const found = read.history.series;
     if (found !== series) {
-      throw new StoreError(`the file holds the history of series ${JSON.stringify(found)}, not ${JSON.stringify(series)}`, {
-        where,
-        fix: `use one file per series, or pass --series ${JSON.stringify(found)}`,
-      });
+      throw new StoreError(
+        `the file holds the history of series ${JSON.stringify(found)}, not ${JSON.stringify(series)}`,
+        {
+          where,
+          fix: `use one file per series, or pass --series ${JSON.stringify(found)}`,
+        },
+      );
     }
     return read;
   }
@@ -103,7 +109,10 @@ export function createFileStore(path: string, series: string): HistoryStore {
       if (bytes === undefined) return emptyHistory(series);
       const { history, rows } = parseBytes(bytes);
       if (!loaded.some((d) => d.bytes.equals(bytes))) {
-        loaded.push({ bytes, runs: history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })) });
+        loaded.push({
+          bytes,
+          runs: history.runs.map((r) => (r.time === undefined ? { id: r.id } : { id: r.id, time: r.time })),
+        });
       }
       // What an append can splice into: a scanned document, with its rows, or one read whole
       // (below SCAN_FROM), whose rows the first splice looks for. A large document the scan
@@ -113,13 +122,17 @@ export function createFileStore(path: string, series: string): HistoryStore {
     },
     async save(h: History, readCount: number): Promise<void> {
       if (h.series !== series) {
-        throw new StoreError(`refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`, { where });
+        throw new StoreError(
+          `refusing to save series ${JSON.stringify(h.series)} into the history of ${JSON.stringify(series)}`,
+          { where },
+        );
       }
       guardAgainstLoss(where, h, readCount);
       const healed = await healFromDisk(h);
       let text: string | Buffer;
       try {
-        text = (healed === h && written !== undefined ? spliceHistory(h, written) : undefined) ?? serializeHistory(healed);
+        text =
+          (healed === h && written !== undefined ? spliceHistory(h, written) : undefined) ?? serializeHistory(healed);
       } catch (cause) {
         // A document past V8's longest string fails inside serializeHistory with a RangeError.
         if (cause instanceof RangeError) throw tooLarge(undefined, where, 'the history to write would be');
@@ -161,7 +174,10 @@ async function writeAtomically(path: string, text: string | Uint8Array, where: s
   const temp = join(folder, `.${basename(path).slice(0, 32)}.${randomBytes(6).toString('hex')}.tmp`);
   try {
     await mkdir(folder, { recursive: true });
-    const mode = await stat(path).then((s) => s.mode & 0o777, () => 0o644);
+    const mode = await stat(path).then(
+      (s) => s.mode & 0o777,
+      () => 0o644,
+    );
     const handle = await open(temp, 'wx', mode);
     try {
       await handle.writeFile(text, 'utf8');
@@ -195,10 +211,13 @@ async function writeAtomically(path: string, text: string | Uint8Array, where: s
 function tooLarge(size: number | undefined, where: string, what: string): StoreError {
   const mib = (n: number) => `${(n / 1024 / 1024).toFixed(1)} MiB`;
   const amount = size === undefined ? 'larger than' : `${mib(size)} (${size} bytes), over`;
-  return new StoreError(`${what} ${amount} the limit of ${mib(HISTORY_FILE_LIMIT)} a history file may hold; it was left as it is`, {
-    where,
-    fix: 'lower `keep` (fewer runs per history), or split the series into several (one per group of metrics)',
-  });
+  return new StoreError(
+    `${what} ${amount} the limit of ${mib(HISTORY_FILE_LIMIT)} a history file may hold; it was left as it is`,
+    {
+      where,
+      fix: 'lower `keep` (fewer runs per history), or split the series into several (one per group of metrics)',
+    },
+  );
 }
 
 function messageOf(cause: unknown): string {

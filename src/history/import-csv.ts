@@ -21,7 +21,13 @@ const LONG_COLUMNS = new Set<string>([...RUN_COLUMNS, 'name', 'value', 'unit']);
 export function parseCsvRuns(text: string, source: string): ImportParse {
   let rows: Array<{ record: string[]; info: { lines: number } }>;
   try {
-    rows = parse(text, { bom: true, skip_empty_lines: true, trim: true, relax_column_count: true, info: true }) as unknown as typeof rows;
+    rows = parse(text, {
+      bom: true,
+      skip_empty_lines: true,
+      trim: true,
+      relax_column_count: true,
+      info: true,
+    }) as unknown as typeof rows;
   } catch (cause) {
     const line = (cause as { lines?: number }).lines;
     throw new InputError(`not valid CSV (${cause instanceof Error ? cause.message : String(cause)})`, {
@@ -31,12 +37,21 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
     });
   }
   const [head, ...body] = rows;
-  if (!head) throw new InputError('the file holds no rows', { where: source, fix: 'write a header row and one row per run' });
+  if (!head)
+    throw new InputError('the file holds no rows', { where: source, fix: 'write a header row and one row per run' });
   const header = head.record.map((h) => (LONG_COLUMNS.has(h.toLowerCase()) ? h.toLowerCase() : h));
   const seen = new Set<string>();
   for (const h of header) {
-    if (h === '') throw new InputError('a header cell is empty', { where: `${source}:${head.info.lines}`, fix: 'name every column' });
-    if (seen.has(h)) throw new InputError(`column ${JSON.stringify(h)} appears twice in the header`, { where: `${source}:${head.info.lines}`, fix: 'name every column once' });
+    if (h === '')
+      throw new InputError('a header cell is empty', {
+        where: `${source}:${head.info.lines}`,
+        fix: 'name every column',
+      });
+    if (seen.has(h))
+      throw new InputError(`column ${JSON.stringify(h)} appears twice in the header`, {
+        where: `${source}:${head.info.lines}`,
+        fix: 'name every column once',
+      });
     seen.add(h);
   }
   for (const need of ['id', 'time']) {
@@ -78,7 +93,10 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
       if (badName !== undefined) return skip(badName);
       const value = valueFrom(raw, true);
       if (typeof value === 'string') return skip(`metric ${JSON.stringify(name)}: ${value}`);
-      if (target.metrics.has(name)) skip(`metric ${JSON.stringify(name)} of run ${JSON.stringify(target.info.id)} was given before; this row's value is kept`);
+      if (target.metrics.has(name))
+        skip(
+          `metric ${JSON.stringify(name)} of run ${JSON.stringify(target.info.id)} was given before; this row's value is kept`,
+        );
       target.metrics.set(name, value);
       if (unit) target.units.set(name, unit);
     };

@@ -23,7 +23,9 @@ export function parseJsonLines(text: string, source: string): ImportParse {
     try {
       entry = JSON.parse(line);
     } catch (error) {
-      skip(`not valid JSON (${error instanceof Error ? error.message.replace(/, ".*" is not valid JSON$/s, '') : 'syntax error'})`);
+      skip(
+        `not valid JSON (${error instanceof Error ? error.message.replace(/, ".*" is not valid JSON$/s, '') : 'syntax error'})`,
+      );
       return;
     }
     if (!isObject(entry)) return skip(`a run must be a JSON object, found ${typeName(entry)}`);
@@ -47,12 +49,19 @@ export function parseJsonLines(text: string, source: string): ImportParse {
         else skip(`a metric entry must be an object {"name", "value", "unit"}, found ${typeName(m)}`);
       }
     } else if (isObject(metrics)) {
-      for (const name of Object.keys(metrics)) add(name, metrics[name], Object.hasOwn(units, name) ? units[name] : undefined);
-    } else return skip(`run ${JSON.stringify(info.id)}: "metrics" must be an object or an array, found ${typeName(metrics)}`);
+      for (const name of Object.keys(metrics))
+        add(name, metrics[name], Object.hasOwn(units, name) ? units[name] : undefined);
+    } else
+      return skip(
+        `run ${JSON.stringify(info.id)}: "metrics" must be an object or an array, found ${typeName(metrics)}`,
+      );
     if (run.metrics.size === 0) return skip(`run ${JSON.stringify(info.id)} has no metric values`);
     const earlier = lineOf.get(info.id);
     if (earlier !== undefined) {
-      result.skipped.push({ where: `${source}:${earlier + 1}`, reason: `run ${JSON.stringify(info.id)} appears again on line ${i + 1}, which is kept` });
+      result.skipped.push({
+        where: `${source}:${earlier + 1}`,
+        reason: `run ${JSON.stringify(info.id)} appears again on line ${i + 1}, which is kept`,
+      });
       result.runs = result.runs.filter((r) => r.info.id !== info.id);
     }
     lineOf.set(info.id, i);

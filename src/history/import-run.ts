@@ -29,15 +29,23 @@ export interface ImportParse {
  *
  * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
  */
-export function runInfoFrom(fields: { id?: unknown; time?: unknown; sha?: unknown; ref?: unknown; event?: unknown }): RunInfo | string {
+export function runInfoFrom(fields: {
+  id?: unknown;
+  time?: unknown;
+  sha?: unknown;
+  ref?: unknown;
+  event?: unknown;
+}): RunInfo | string {
   const { id, time } = fields;
   let runId: string;
   if (typeof id === 'string' && id.trim() !== '') runId = id.trim();
   else if (typeof id === 'number' && Number.isSafeInteger(id)) runId = String(id);
   else return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
-  if (time === undefined || time === null || time === '') return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
+  if (time === undefined || time === null || time === '')
+    return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
   const iso = typeof time === 'string' ? normalizeIsoTime(time) : undefined;
-  if (iso === undefined) return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
+  if (iso === undefined)
+    return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
   const info: RunInfo = { id: runId, time: iso };
   for (const field of ['sha', 'ref', 'event'] as const) {
     const text = fields[field];
@@ -74,7 +82,8 @@ export function nameProblem(name: string): string | undefined {
 export function valueFrom(raw: unknown, text = false): number | string {
   let v: number;
   if (typeof raw === 'number') v = raw;
-  else if (typeof raw === 'string' && text && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim())) v = Number(raw.trim());
+  else if (typeof raw === 'string' && text && /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(raw.trim()))
+    v = Number(raw.trim());
   else if (typeof raw === 'string' && !text) return `value ${JSON.stringify(raw)} is text, not a number`;
   else return `value ${JSON.stringify(raw) ?? String(raw)} is not a number`;
   return Number.isFinite(v) ? v : `value ${String(raw)} is not a finite number`;

@@ -28,10 +28,17 @@ export interface ImportOutcome {
 export function parseImportRuns(text: string, source: string): ImportParse {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const first = body.trimStart()[0];
-  if (first === undefined) throw new InputError('the file holds no runs', { where: source, fix: 'write one run per line (JSON Lines) or a CSV with a header' });
+  if (first === undefined)
+    throw new InputError('the file holds no runs', {
+      where: source,
+      fix: 'write one run per line (JSON Lines) or a CSV with a header',
+    });
   if (first === '{') return parseJsonLines(body, source);
   if (first === '[') {
-    throw new InputError('a JSON array is not an import form', { where: `${source}:1:1`, fix: 'write one run object per line (JSON Lines)' });
+    throw new InputError('a JSON array is not an import form', {
+      where: `${source}:1:1`,
+      fix: 'write one run object per line (JSON Lines)',
+    });
   }
   return parseCsvRuns(body, source);
 }
@@ -51,8 +58,13 @@ export function importRuns(h: History, input: ImportedRun[] | ImportParse): Impo
   const byId = new Map<string, ImportedRun>();
   list.forEach((run, i) => {
     const bad = [...run.metrics].find(([, v]) => !Number.isFinite(v));
-    if (typeof run.info?.id !== 'string' || run.info.id === '') skipped.push({ where: `run ${i + 1}`, reason: 'no id' });
-    else if (bad) skipped.push({ where: `run ${run.info.id}`, reason: `metric ${JSON.stringify(bad[0])}: value ${bad[1]} is not a finite number` });
+    if (typeof run.info?.id !== 'string' || run.info.id === '')
+      skipped.push({ where: `run ${i + 1}`, reason: 'no id' });
+    else if (bad)
+      skipped.push({
+        where: `run ${run.info.id}`,
+        reason: `metric ${JSON.stringify(bad[0])}: value ${bad[1]} is not a finite number`,
+      });
     else byId.set(run.info.id, run);
   });
   const incoming = [...byId.values()];

@@ -15,12 +15,20 @@ export function parseIsoTime(text: string): number | undefined {
     const ms = Date.parse(text);
     if (!Number.isNaN(ms) && new Date(ms).toISOString() === text) return ms;
   }
-  const m = /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?$/i.exec(text.trim());
+  const m =
+    /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(\.\d{1,9})?)?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?$/i.exec(
+      text.trim(),
+    );
   if (!m) return undefined;
   const [, y, mo, d, h = '00', mi = '00', s = '00', frac = '', zone = 'Z'] = m;
   const day = Date.UTC(Number(y), Number(mo) - 1, Number(d));
   const check = new Date(day);
-  if (check.getUTCFullYear() !== Number(y) || check.getUTCMonth() !== Number(mo) - 1 || check.getUTCDate() !== Number(d)) return undefined;
+  if (
+    check.getUTCFullYear() !== Number(y) ||
+    check.getUTCMonth() !== Number(mo) - 1 ||
+    check.getUTCDate() !== Number(d)
+  )
+    return undefined;
   if (Number(h) > 23 || Number(mi) > 59 || Number(s) > 59) return undefined;
   let offset = 0;
   if (zone.toUpperCase() !== 'Z') {

@@ -19,7 +19,10 @@ export function parseJsonText(text: string, source: string): unknown {
     const { line, column } = lineColumn(body, offset);
     throw new InputError(`not valid JSON (${message.replace(/, ".*" is not valid JSON$/s, '')})`, {
       where: `${source}:${line}:${column}`,
-      fix: body.trim() === '' ? 'the file is empty; remove it or write a complete document' : 'repair the JSON at that spot (a truncated or hand-edited file?)',
+      fix:
+        body.trim() === ''
+          ? 'the file is empty; remove it or write a complete document'
+          : 'repair the JSON at that spot (a truncated or hand-edited file?)',
       cause: error,
     });
   }

@@ -16,14 +16,19 @@ import { compareRuns, timeKey } from './run-order.js';
  */
 export function mergeHistories(a: History, b: History): History {
   if (a.series !== b.series) {
-    throw new InputError(`cannot merge the history of series ${JSON.stringify(b.series)} into ${JSON.stringify(a.series)}`, {
-      where: `series ${a.series}`,
-      fix: 'keep one history per series (the `series` option)',
-    });
+    throw new InputError(
+      `cannot merge the history of series ${JSON.stringify(b.series)} into ${JSON.stringify(a.series)}`,
+      {
+        where: `series ${a.series}`,
+        fix: 'keep one history per series (the `series` option)',
+      },
+    );
   }
   const chosen = new Map<string, { side: History; index: number }>();
   for (const side of [a, b]) side.runs.forEach((run, index) => chosen.set(run.id, { side, index }));
-  const picks = [...chosen.values()].sort((x, y) => compareRuns(x.side.runs[x.index] as RunInfo, y.side.runs[y.index] as RunInfo));
+  const picks = [...chosen.values()].sort((x, y) =>
+    compareRuns(x.side.runs[x.index] as RunInfo, y.side.runs[y.index] as RunInfo),
+  );
   const columns = new Map<string, MetricColumn>();
   for (const name of new Set([...a.columns.keys(), ...b.columns.keys()])) {
     const fromA = a.columns.get(name);
@@ -32,7 +37,11 @@ export function mergeHistories(a: History, b: History): History {
     const unit = fromB?.unit ?? fromA?.unit;
     columns.set(name, unit === undefined ? { values } : { unit, values });
   }
-  const merged: History = { series: a.series, runs: picks.map(({ side, index }) => ({ ...side.runs[index] }) as RunInfo), columns };
+  const merged: History = {
+    series: a.series,
+    runs: picks.map(({ side, index }) => ({ ...side.runs[index] }) as RunInfo),
+    columns,
+  };
   const trimmed = (a.trimmed ?? 0) + (b.trimmed ?? 0);
   if (trimmed > 0) merged.trimmed = trimmed;
   return merged;
@@ -53,7 +62,10 @@ export function mergeHistories(a: History, b: History): History {
  */
 export function appendRun(h: History, info: RunInfo, run: Run, options: { extendInPlace?: boolean } = {}): History {
   if (typeof info.id !== 'string' || info.id.trim() === '') {
-    throw new InputError('a run needs an id to be recorded', { where: `series ${h.series}`, fix: 'pass --id (the CI run id and attempt, e.g. 1234-1)' });
+    throw new InputError('a run needs an id to be recorded', {
+      where: `series ${h.series}`,
+      fix: 'pass --id (the CI run id and attempt, e.g. 1234-1)',
+    });
   }
   const columns = new Map<string, MetricColumn>();
   for (const [name, m] of run.metrics) {
@@ -65,7 +77,10 @@ export function appendRun(h: History, info: RunInfo, run: Run, options: { extend
     }
     columns.set(name, m.unit === undefined ? { values: [m.value] } : { unit: m.unit, values: [m.value] });
   }
-  return appendNewest(h, info, columns, options.extendInPlace === true) ?? mergeHistories(h, { series: h.series, runs: [{ ...info }], columns });
+  return (
+    appendNewest(h, info, columns, options.extendInPlace === true) ??
+    mergeHistories(h, { series: h.series, runs: [{ ...info }], columns })
+  );
 }
 
 /**
@@ -80,7 +95,9 @@ export function appendRun(h: History, info: RunInfo, run: Run, options: { extend
  */
 export function trimHistory(h: History, keep: number): History {
   if (!(keep === Infinity || (Number.isInteger(keep) && keep >= 1))) {
-    throw new InputError(`keep must be a whole number of runs, at least 1, got ${keep}`, { fix: 'set `keep` to the number of newest runs to keep, e.g. 500' });
+    throw new InputError(`keep must be a whole number of runs, at least 1, got ${keep}`, {
+      fix: 'set `keep` to the number of newest runs to keep, e.g. 500',
+    });
   }
   const drop = Math.max(0, h.runs.length - keep);
   const columns = new Map<string, MetricColumn>();

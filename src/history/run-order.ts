@@ -22,5 +22,5 @@ export function compareRuns(a: RunInfo, b: RunInfo): number {
 
 /** Milliseconds of a run's time, -Infinity when it has none or it cannot be read. */
 export function timeKey(run: RunInfo): number {
-  return run.time === undefined ? -Infinity : parseIsoTime(run.time) ?? -Infinity;
+  return run.time === undefined ? -Infinity : (parseIsoTime(run.time) ?? -Infinity);
 }

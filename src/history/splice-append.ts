@@ -68,7 +68,10 @@ export function spliceHistory(h: History, written: WrittenHistory): Buffer | und
   for (const [name, column] of h.columns) {
     const values = column.values;
     const old = baseRows.get(name);
-    const from = old !== undefined && keepsOld(values, old.values, drop, kept) ? rowBody(bytes, where, old.index, drop) : undefined;
+    const from =
+      old !== undefined && keepsOld(values, old.values, drop, kept)
+        ? rowBody(bytes, where, old.index, drop)
+        : undefined;
     if (from === undefined) {
       checkStorable(h, name, values);
       rows.push(JSON.stringify(values));
@@ -105,7 +108,12 @@ function keepsOld(values: readonly number[], old: readonly number[], drop: numbe
  */
 function rowBody(bytes: Uint8Array, where: ValueRows, index: number, drop: number): number | undefined {
   const end = where.rowEnds[index] as number;
-  let at = byteAfter(bytes, OPEN_SQUARE, index === 0 ? where.valuesStart + 1 : (where.rowEnds[index - 1] as number) + 1, end);
+  let at = byteAfter(
+    bytes,
+    OPEN_SQUARE,
+    index === 0 ? where.valuesStart + 1 : (where.rowEnds[index - 1] as number) + 1,
+    end,
+  );
   for (let d = 0; d < drop && at > 0; d++) at = byteAfter(bytes, COMMA, at, end);
   return at > 0 ? at : undefined;
 }

@@ -67,7 +67,10 @@ export function guardAgainstLoss(store: string, h: History, readCount: number): 
   if (accounted < readCount) {
     throw new StoreError(
       `refusing to save ${h.runs.length} runs over the ${readCount} that were read: ${readCount - accounted} runs would be lost`,
-      { where: store, fix: 'append to the history that load returned; delete runs only with trimHistory (the `keep` setting)' },
+      {
+        where: store,
+        fix: 'append to the history that load returned; delete runs only with trimHistory (the `keep` setting)',
+      },
     );
   }
 }

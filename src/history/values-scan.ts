@@ -30,10 +30,25 @@ export interface ScannedHistory {
   finite: boolean;
 }
 
-const SPACE = 0x20, TAB = 0x09, LF = 0x0a, CR = 0x0d;
-const QUOTE = 0x22, BACKSLASH = 0x5c, COMMA = 0x2c, COLON = 0x3a;
-const OPEN_SQUARE = 0x5b, CLOSE_SQUARE = 0x5d, OPEN_CURLY = 0x7b, CLOSE_CURLY = 0x7d;
-const MINUS = 0x2d, PLUS = 0x2b, DOT = 0x2e, ZERO = 0x30, NINE = 0x39, LOWER_E = 0x65, UPPER_E = 0x45;
+const SPACE = 0x20,
+  TAB = 0x09,
+  LF = 0x0a,
+  CR = 0x0d;
+const QUOTE = 0x22,
+  BACKSLASH = 0x5c,
+  COMMA = 0x2c,
+  COLON = 0x3a;
+const OPEN_SQUARE = 0x5b,
+  CLOSE_SQUARE = 0x5d,
+  OPEN_CURLY = 0x7b,
+  CLOSE_CURLY = 0x7d;
+const MINUS = 0x2d,
+  PLUS = 0x2b,
+  DOT = 0x2e,
+  ZERO = 0x30,
+  NINE = 0x39,
+  LOWER_E = 0x65,
+  UPPER_E = 0x45;
 
 /** Exact powers of ten: every 10^k with k <= 22 is a double without rounding. */
 const EXACT_POWERS = Array.from({ length: 23 }, (_, k) => Number(`1e${k}`));

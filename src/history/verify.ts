@@ -42,7 +42,10 @@ export function verifyHistory(text: string, source: string): HistoryProblem[] {
         return;
       }
       if (ms < previous) {
-        sink(timePath(i), `run ${JSON.stringify(run.id)} (${run.time}) is older than the run before it (runs are stored oldest first; see ${timePath(previousIndex)})`);
+        sink(
+          timePath(i),
+          `run ${JSON.stringify(run.id)} (${run.time}) is older than the run before it (runs are stored oldest first; see ${timePath(previousIndex)})`,
+        );
       } else {
         previous = ms;
         previousIndex = i;

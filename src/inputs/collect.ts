@@ -41,17 +41,26 @@ export function collectRun(results: ReadResult[], aggregateFor: (name: string) =
   for (const [name, { unit, values, where }] of byName) {
     const value = aggregateSamples(values, aggregateFor(name));
     if (!Number.isFinite(value)) {
-      throw new InputError(`the ${aggregateFor(name)} of the ${values.length} samples of ${JSON.stringify(name)} overflows`, {
-        where,
-        fix: 'check the values of this metric, or change its unit so the numbers are smaller',
-      });
+      throw new InputError(
+        `the ${aggregateFor(name)} of the ${values.length} samples of ${JSON.stringify(name)} overflows`,
+        {
+          where,
+          fix: 'check the values of this metric, or change its unit so the numbers are smaller',
+        },
+      );
     }
     metrics.set(name, unit === undefined ? { value, count: values.length } : { value, unit, count: values.length });
   }
   return notFitted.size > 0 ? { metrics, meta, notFitted } : { metrics, meta };
 }
 
-function converted(name: string, value: number, unit: string | undefined, where: string | undefined, seen: Samples): number {
+function converted(
+  name: string,
+  value: number,
+  unit: string | undefined,
+  where: string | undefined,
+  seen: Samples,
+): number {
   if (unit === seen.unit) return value;
   const out = unit !== undefined && seen.unit !== undefined ? convertUnit(value, unit, seen.unit) : undefined;
   if (out !== undefined && Number.isFinite(out)) return out;

@@ -23,11 +23,17 @@ export function readCsvMetrics(text: string, file: string, limits: InputLimits =
   checkLineLengths(text, file, limits);
   const rows = parseRows(text, file);
   const header = rows[0];
-  if (!header) throw new InputError('the CSV file has no header row', { where: file, fix: 'start the file with a header such as name,value,unit' });
+  if (!header)
+    throw new InputError('the CSV file has no header row', {
+      where: file,
+      fix: 'start the file with a header such as name,value,unit',
+    });
   const sink = new ReadingSink(file, limits);
   const columns = header.record.map((cell) => cell.toLowerCase());
   const isLong =
-    columns.includes('name') && columns.includes('value') && columns.every((c) => c === 'name' || c === 'value' || c === 'unit');
+    columns.includes('name') &&
+    columns.includes('value') &&
+    columns.every((c) => c === 'name' || c === 'value' || c === 'unit');
   if (isLong) readLong(rows, columns, file, sink);
   else readWide(rows, file, sink);
   return sink.result;
@@ -35,7 +41,10 @@ export function readCsvMetrics(text: string, file: string, limits: InputLimits =
 
 function readLong(rows: Row[], columns: string[], file: string, sink: ReadingSink): void {
   if (new Set(columns).size !== columns.length) {
-    throw new InputError(`the CSV header repeats a column: ${columns.join(',')}`, { where: `${file}:1`, fix: 'name each column once' });
+    throw new InputError(`the CSV header repeats a column: ${columns.join(',')}`, {
+      where: `${file}:1`,
+      fix: 'name each column once',
+    });
   }
   const nameAt = columns.indexOf('name');
   const valueAt = columns.indexOf('value');
@@ -66,7 +75,12 @@ function readWide(rows: Row[], file: string, sink: ReadingSink): void {
     record.forEach((cell, i) => {
       if (cell === '') return;
       const { name, unit } = metrics[i]!;
-      sink.add(name, parseDecimal(cell, `${where}:${i + 1}`, `value of ${JSON.stringify(name)} (column ${i + 1})`), unit, where);
+      sink.add(
+        name,
+        parseDecimal(cell, `${where}:${i + 1}`, `value of ${JSON.stringify(name)} (column ${i + 1})`),
+        unit,
+        where,
+      );
     });
   }
   // A header with no data rows still names metrics; check them so a bad name is not accepted silently.

@@ -5,10 +5,17 @@ const HEAD_LINES = 64;
 const GO_RESULT = /^Benchmark(?:$|[^\p{Ll}\s])\S*\s+\d+\s+\S+\s+\S+/u;
 const OM_COMMENT = /^#\s+(?:TYPE|HELP|UNIT)\s+\S|^#\s*EOF\s*$/;
 // Label sets are matched quote-aware and without backtracking between alternatives.
-const OM_SAMPLE = /^[a-zA-Z_:][a-zA-Z0-9_:]*(?:\{(?:[^"}]|"(?:[^"\\]|\\.)*")*\})?[ \t]+[+-]?(?:\.?\d\S*|inf|nan)(?:[ \t]+\S+)?(?:[ \t]+#.*)?$/i;
+const OM_SAMPLE =
+  /^[a-zA-Z_:][a-zA-Z0-9_:]*(?:\{(?:[^"}]|"(?:[^"\\]|\\.)*")*\})?[ \t]+[+-]?(?:\.?\d\S*|inf|nan)(?:[ \t]+\S+)?(?:[ \t]+#.*)?$/i;
 const EXTENSIONS = new Map<string, MetricFormat>([
-  ['json', 'json'], ['jsonl', 'jsonl'], ['ndjson', 'jsonl'], ['csv', 'csv'],
-  ['prom', 'openmetrics'], ['om', 'openmetrics'], ['metrics', 'openmetrics'], ['xml', 'junit'],
+  ['json', 'json'],
+  ['jsonl', 'jsonl'],
+  ['ndjson', 'jsonl'],
+  ['csv', 'csv'],
+  ['prom', 'openmetrics'],
+  ['om', 'openmetrics'],
+  ['metrics', 'openmetrics'],
+  ['xml', 'junit'],
 ]);
 
 /**
@@ -35,7 +42,10 @@ export function detectFormat(text: string, file: string): MetricFormat {
   } else {
     if (head.some((line) => GO_RESULT.test(line))) candidates.add('gobench');
     const samples = head.filter((line) => !line.startsWith('#'));
-    if (head.some((line) => OM_COMMENT.test(line)) || (samples.length > 0 && samples.every((line) => OM_SAMPLE.test(line)))) {
+    if (
+      head.some((line) => OM_COMMENT.test(line)) ||
+      (samples.length > 0 && samples.every((line) => OM_SAMPLE.test(line)))
+    ) {
       candidates.add('openmetrics');
     }
     if (first.includes(',') && !first.startsWith('#')) candidates.add('csv');
@@ -71,7 +81,12 @@ function looksLikeJsonLine(first: string, lineCount: number): boolean {
   if (!first.startsWith('{') || !first.endsWith('}')) return false;
   try {
     const value = JSON.parse(first) as unknown;
-    return typeof value === 'object' && value !== null && typeof (value as { name?: unknown }).name === 'string' && (lineCount > 1 || !('metrics' in value));
+    return (
+      typeof value === 'object' &&
+      value !== null &&
+      typeof (value as { name?: unknown }).name === 'string' &&
+      (lineCount > 1 || !('metrics' in value))
+    );
   } catch {
     return false;
   }

@@ -24,10 +24,13 @@ export function readEntry(entry: unknown, sink: ReadingSink, place: string, wher
   }
   const { name, value, samples, unit } = entry;
   if (typeof name !== 'string') {
-    throw new InputError(`metric entry has ${name === undefined ? 'no "name"' : `a "name" that is ${describeJson(name)}`}`, {
-      where: where(),
-      fix: 'give every entry a "name" string',
-    });
+    throw new InputError(
+      `metric entry has ${name === undefined ? 'no "name"' : `a "name" that is ${describeJson(name)}`}`,
+      {
+        where: where(),
+        fix: 'give every entry a "name" string',
+      },
+    );
   }
   if (unit !== undefined && typeof unit !== 'string') {
     throw new InputError(`"unit" of ${JSON.stringify(name)} is ${describeJson(unit)}, not a string`, {
@@ -76,7 +79,10 @@ export function readNumbers(
     }
     if (!Number.isFinite(v)) {
       // JSON.parse turns 1e999 into Infinity.
-      throw new InputError(`value of ${JSON.stringify(name)} overflows to ${v}`, { where: where(), fix: 'write a finite number' });
+      throw new InputError(`value of ${JSON.stringify(name)} overflows to ${v}`, {
+        where: where(),
+        fix: 'write a finite number',
+      });
     }
     sink.add(name, v, unit, place);
   }
@@ -86,7 +92,8 @@ export function readNumbers(
 export function describeJson(value: unknown): string {
   if (value === null) return 'null';
   if (Array.isArray(value)) return 'an array';
-  if (typeof value === 'string') return `the string ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}...` : value)}`;
+  if (typeof value === 'string')
+    return `the string ${JSON.stringify(value.length > 40 ? `${value.slice(0, 40)}...` : value)}`;
   if (typeof value === 'object') return 'an object';
   return `${typeof value} ${String(value)}`;
 }

@@ -36,7 +36,10 @@ export function parseJsonText(text: string, file: string, line?: number): unknow
  * @example whereInJson('{\n  "a": [1, "x"]\n}', 'm.json', ['a', 1]) // 'm.json:2:12 (a[1])'
  */
 export function whereInJson(text: string, file: string, path: (string | number)[]): string {
-  const label = path.map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`)).join('').replace(/^\./, '');
+  const label = path
+    .map((p) => (typeof p === 'number' ? `[${p}]` : `.${p}`))
+    .join('')
+    .replace(/^\./, '');
   const offset = jsonValueOffset(text, path);
   return offset === undefined ? `${file} (${label})` : `${whereAt(file, text, offset)} (${label})`;
 }

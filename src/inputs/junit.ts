@@ -33,13 +33,19 @@ export function readJunit(text: string, file: string, limits: InputLimits = DEFA
   const checked = XMLValidator.validate(text);
   if (checked !== true) {
     const { msg, line, col } = checked.err;
-    throw new InputError(`malformed XML: ${msg}`, { where: `${file}:${line}:${col}`, fix: 'check that the file is complete, well-formed XML' });
+    throw new InputError(`malformed XML: ${msg}`, {
+      where: `${file}:${line}:${col}`,
+      fix: 'check that the file is complete, well-formed XML',
+    });
   }
   let doc: Element;
   try {
     doc = parser.parse(text) as Element;
   } catch (error) {
-    throw new InputError(`malformed XML: ${error instanceof Error ? error.message : String(error)}`, { where: file, cause: error });
+    throw new InputError(`malformed XML: ${error instanceof Error ? error.message : String(error)}`, {
+      where: file,
+      cause: error,
+    });
   }
   const sink = new ReadingSink(file, limits);
   const roots = asElements(doc.testsuites);
@@ -99,7 +105,10 @@ function readCase(testCase: Element, where: string, suitePath: string[], suiteNa
 function seconds(text: string, where: string): number {
   const value = parseDecimal(text, `${where}@time`, 'time');
   if (value < 0) {
-    throw new InputError(`time ${text} is negative`, { where: `${where}@time`, fix: 'write the duration in seconds, 0 or more' });
+    throw new InputError(`time ${text} is negative`, {
+      where: `${where}@time`,
+      fix: 'write the duration in seconds, 0 or more',
+    });
   }
   return value;
 }

@@ -67,10 +67,13 @@ export const MAX_UNIT_LENGTH = 64;
  */
 export function checkUnit(unit: string, where?: string): string {
   if (unit.length > MAX_UNIT_LENGTH || CONTROL.test(unit) || BIDI.test(unit)) {
-    throw new InputError(`unit ${JSON.stringify(unit.slice(0, 80))} is longer than ${MAX_UNIT_LENGTH} characters or contains control or bidirectional formatting characters`, {
-      where,
-      fix: 'write the unit as short plain text such as ms, B or ns/op',
-    });
+    throw new InputError(
+      `unit ${JSON.stringify(unit.slice(0, 80))} is longer than ${MAX_UNIT_LENGTH} characters or contains control or bidirectional formatting characters`,
+      {
+        where,
+        fix: 'write the unit as short plain text such as ms, B or ns/op',
+      },
+    );
   }
   return unit;
 }

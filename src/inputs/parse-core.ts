@@ -18,18 +18,27 @@ export function chooseFormat(text: string, file: string, format?: string): { bod
  * Runs a reader so that only InputError comes out, and refuses a file that yields no metric at all
  * (almost always a step that failed to write it).
  */
-export function runReader(reader: Reader, chosen: MetricFormat, body: string, file: string, limits: InputLimits): ReadResult {
+export function runReader(
+  reader: Reader,
+  chosen: MetricFormat,
+  body: string,
+  file: string,
+  limits: InputLimits,
+): ReadResult {
   let result: ReadResult;
   try {
     result = reader(body, file, limits);
   } catch (error) {
     if (error instanceof InputError) throw error;
     // A library failing in a way it does not document must still reach the user as bad input.
-    throw new InputError(`cannot read the file as ${chosen}: ${error instanceof Error ? error.message : String(error)}`, {
-      where: file,
-      fix: 'check the file, or choose another format with --input-format',
-      cause: error,
-    });
+    throw new InputError(
+      `cannot read the file as ${chosen}: ${error instanceof Error ? error.message : String(error)}`,
+      {
+        where: file,
+        fix: 'check the file, or choose another format with --input-format',
+        cause: error,
+      },
+    );
   }
   if (result.readings.length === 0 && result.notFitted.size === 0) {
     throw new InputError(`no metrics found in the file (read as ${chosen})`, {

@@ -20,7 +20,12 @@ const LOADERS: Record<MetricFormat, () => Promise<Reader>> = {
  * @throws InputError as parseMetricText.
  * @example (await parseMetricTextLazily('{"a": 1}', 'm.json')).readings.length // 1
  */
-export async function parseMetricTextLazily(text: string, file: string, format?: string, limits: InputLimits = DEFAULT_LIMITS): Promise<ReadResult> {
+export async function parseMetricTextLazily(
+  text: string,
+  file: string,
+  format?: string,
+  limits: InputLimits = DEFAULT_LIMITS,
+): Promise<ReadResult> {
   const { body, chosen } = chooseFormat(text, file, format);
   return runReader(await LOADERS[chosen](), chosen, body, file, limits);
 }

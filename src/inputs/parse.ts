@@ -28,7 +28,12 @@ const READERS: Record<MetricFormat, Reader> = {
  *   problem the reader finds; never anything else.
  * @example parseMetricText('{"a": 1}', 'm.json').readings.length // 1
  */
-export function parseMetricText(text: string, file: string, format?: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
+export function parseMetricText(
+  text: string,
+  file: string,
+  format?: string,
+  limits: InputLimits = DEFAULT_LIMITS,
+): ReadResult {
   const { body, chosen } = chooseFormat(text, file, format);
   return runReader(READERS[chosen], chosen, body, file, limits);
 }

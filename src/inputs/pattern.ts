@@ -19,7 +19,9 @@ export function splitPattern(text: string): FilePattern {
   const arrow = text.indexOf('=>');
   const pattern = (arrow < 0 ? text : text.slice(0, arrow)).trim();
   if (pattern === '') {
-    throw new InputError(`empty metric file pattern in ${JSON.stringify(text)}`, { fix: 'write a path or glob, optionally followed by "=> prefix"' });
+    throw new InputError(`empty metric file pattern in ${JSON.stringify(text)}`, {
+      fix: 'write a path or glob, optionally followed by "=> prefix"',
+    });
   }
   if (arrow < 0) return { pattern };
   return { pattern, prefix: normalizePrefix(text.slice(arrow + 2), text) };
@@ -34,7 +36,9 @@ export function splitPattern(text: string): FilePattern {
 export function normalizePrefix(text: string, where: string): string {
   const prefix = trimSlashes(text.trim());
   if (prefix === '') {
-    throw new InputError(`empty prefix in ${JSON.stringify(where)}`, { fix: 'write "path => prefix", or leave out the prefix' });
+    throw new InputError(`empty prefix in ${JSON.stringify(where)}`, {
+      fix: 'write "path => prefix", or leave out the prefix',
+    });
   }
   return checkMetricName(prefix, where);
 }

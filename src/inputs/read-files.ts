@@ -53,7 +53,12 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
   }
   const run = collectRun(results, options.aggregateFor);
   if (run.metrics.size > limits.maxMetrics) {
-    throw limitError('maxMetrics', limits.maxMetrics, patterns.join(', '), `the metric files hold ${run.metrics.size} metrics`);
+    throw limitError(
+      'maxMetrics',
+      limits.maxMetrics,
+      patterns.join(', '),
+      `the metric files hold ${run.metrics.size} metrics`,
+    );
   }
   return run;
 }
@@ -63,7 +68,9 @@ async function expand(pattern: string, cwd: string): Promise<string[]> {
   const info = await stat(literal).catch(() => undefined);
   if (info?.isFile()) return [literal];
   if (info?.isDirectory()) {
-    throw new InputError(`${pattern} is a directory`, { fix: `name files in it, such as ${path.join(pattern, '*.json')}` });
+    throw new InputError(`${pattern} is a directory`, {
+      fix: `name files in it, such as ${path.join(pattern, '*.json')}`,
+    });
   }
   // The glob library (tinyglobby, with picomatch) loads only for a pattern that is not a file.
   const { glob } = await import('tinyglobby');
@@ -76,7 +83,12 @@ async function expand(pattern: string, cwd: string): Promise<string[]> {
   return files.sort();
 }
 
-async function readOne(file: string, shown: string, format: string | undefined, limits: InputLimits): Promise<ReadResult> {
+async function readOne(
+  file: string,
+  shown: string,
+  format: string | undefined,
+  limits: InputLimits,
+): Promise<ReadResult> {
   const info = await stat(file);
   if (info.size > limits.maxFileBytes) {
     throw limitError('maxFileBytes', limits.maxFileBytes, shown, `the file is ${info.size} bytes`);
@@ -86,7 +98,11 @@ async function readOne(file: string, shown: string, format: string | undefined, 
     text = new TextDecoder('utf-8', { fatal: true }).decode(await readFile(file));
   } catch (error) {
     if (error instanceof TypeError) {
-      throw new InputError('the file is not UTF-8 text', { where: shown, fix: 'write metric files as UTF-8', cause: error });
+      throw new InputError('the file is not UTF-8 text', {
+        where: shown,
+        fix: 'write metric files as UTF-8',
+        cause: error,
+      });
     }
     throw new InputError(`cannot read the file: ${(error as Error).message}`, { where: shown, cause: error });
   }

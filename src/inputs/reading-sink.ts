@@ -48,7 +48,12 @@ export class ReadingSink {
   private count(name: string, where: string): void {
     if (this.names.has(name)) return;
     if (this.names.size >= this.limits.maxMetrics) {
-      throw limitError('maxMetrics', this.limits.maxMetrics, where, `${this.file} has more than ${this.limits.maxMetrics} metrics`);
+      throw limitError(
+        'maxMetrics',
+        this.limits.maxMetrics,
+        where,
+        `${this.file} has more than ${this.limits.maxMetrics} metrics`,
+      );
     }
     this.names.add(name);
   }

@@ -36,5 +36,10 @@ const QUOTED = /"((?:[^"\\]|\\.)*)"/g;
 function shortenQuotes(text: string): string {
   if (text.length <= MAX_QUOTED) return text;
   return text.replace(QUOTED, (whole, inner: string) =>
-    inner.length <= MAX_QUOTED ? whole : `"${Array.from(inner).slice(0, MAX_QUOTED / 2).join('')}…" (${inner.length} characters)`);
+    inner.length <= MAX_QUOTED
+      ? whole
+      : `"${Array.from(inner)
+          .slice(0, MAX_QUOTED / 2)
+          .join('')}…" (${inner.length} characters)`,
+  );
 }

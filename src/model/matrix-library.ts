@@ -19,6 +19,7 @@ export async function loadMatrixLibrary(): Promise<void> {
  * @throws Error when it was not loaded first (a caller's mistake, not a user's).
  */
 export function matrixLibrary(): typeof MlMatrix {
-  if (library === undefined) throw new Error('ml-matrix is not loaded: await loadMatrixLibrary() (or prepareGate) first');
+  if (library === undefined)
+    throw new Error('ml-matrix is not loaded: await loadMatrixLibrary() (or prepareGate) first');
   return library;
 }

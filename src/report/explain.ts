@@ -56,7 +56,12 @@ export function renderExplain(input: ExplainInput): string {
   const k = cutoffSigma(cutoff);
   const pts = input.baselineValues.map(toFit).filter((t) => Number.isFinite(t));
   const now = m.value === undefined ? NaN : toFit(m.value);
-  const span = [b.mean - Math.max(k, 3.5) * b.sd, b.mean + Math.max(k, 3.5) * b.sd, ...pts, ...(Number.isFinite(now) ? [now] : [])];
+  const span = [
+    b.mean - Math.max(k, 3.5) * b.sd,
+    b.mean + Math.max(k, 3.5) * b.sd,
+    ...pts,
+    ...(Number.isFinite(now) ? [now] : []),
+  ];
   let lo = Math.min(...span);
   let hi = Math.max(...span);
   const pad = (hi - lo) * 0.03;
@@ -90,7 +95,10 @@ export function renderExplain(input: ExplainInput): string {
   const counts = new Array<number>(width).fill(0);
   for (const t of pts) counts[col(t)] = (counts[col(t)] ?? 0) + 1;
   for (let r = 0; r < DOT_ROWS; r++) {
-    const line = counts.map((n) => (n > r ? (r === DOT_ROWS - 1 && n > DOT_ROWS ? '+' : '•') : ' ')).join('').trimEnd();
+    const line = counts
+      .map((n) => (n > r ? (r === DOT_ROWS - 1 && n > DOT_ROWS ? '+' : '•') : ' '))
+      .join('')
+      .trimEnd();
     if (line) out.push(line);
   }
   const axis = Array.from({ length: width }, () => ' ');
@@ -107,8 +115,12 @@ export function renderExplain(input: ExplainInput): string {
   out.push(`baseline: ${centre}, n = ${b.n} runs${b.since ? ` since run ${cleanText(b.since, 80)}` : ''}`);
   out.push(`this run: ${formatValue(m.value, unit)} (${formatChange(m.change)}, ${formatSigma(m.z)})`);
   const [low, high] = [formatValue(fromFit(b.mean - k * b.sd), unit), formatValue(fromFit(b.mean + k * b.sd), unit)];
-  out.push(`band where the fitted Gaussian's density stays above the cutoff: ${low} to ${high} (mean ± ${formatNumber(k, 3)} sd)`);
-  out.push(`relative density vs cutoff: ${formatAgainstCutoff(m.relativeDensity, cutoff)}; worse side: ${m.worse === 'both' ? 'either' : m.worse}`);
+  out.push(
+    `band where the fitted Gaussian's density stays above the cutoff: ${low} to ${high} (mean ± ${formatNumber(k, 3)} sd)`,
+  );
+  out.push(
+    `relative density vs cutoff: ${formatAgainstCutoff(m.relativeDensity, cutoff)}; worse side: ${m.worse === 'both' ? 'either' : m.worse}`,
+  );
   if (usesPredictive(m)) {
     out.push(
       `  (from the predictive Student-t for a new run, n - 1 = ${b.n - 1} degrees of freedom: heavier tails than the ` +

@@ -18,7 +18,11 @@ export function formatNumber(x: number | undefined, digits = 4): string {
   if (x === undefined || !Number.isFinite(x)) return NOT_AVAILABLE;
   if (x === 0) return '0';
   const abs = Math.abs(x);
-  if (abs < 1e-3 || abs >= 1e9) return x.toExponential(digits - 1).replace(/\.?0+e/, 'e').replace('e+', 'e');
+  if (abs < 1e-3 || abs >= 1e9)
+    return x
+      .toExponential(digits - 1)
+      .replace(/\.?0+e/, 'e')
+      .replace('e+', 'e');
   if (abs >= 10 ** digits) return String(Math.round(x));
   return precisionText(x, digits);
 }
@@ -39,7 +43,16 @@ export function formatChange(change: number | undefined): string {
   // A change near the largest double would overflow to Infinity when turned into percent.
   const pct = Math.max(-Number.MAX_VALUE, Math.min(Number.MAX_VALUE, change * 100));
   const abs = Math.abs(pct);
-  const body = abs === 0 ? '0' : abs >= 1e6 ? formatNumber(abs, 3) : abs >= 10 ? abs.toFixed(1) : abs >= 1 ? abs.toFixed(2) : formatNumber(abs, 2);
+  const body =
+    abs === 0
+      ? '0'
+      : abs >= 1e6
+        ? formatNumber(abs, 3)
+        : abs >= 10
+          ? abs.toFixed(1)
+          : abs >= 1
+            ? abs.toFixed(2)
+            : formatNumber(abs, 2);
   return `${pct > 0 ? '+' : pct < 0 ? '-' : '±'}${body}%`;
 }
 

@@ -21,7 +21,6 @@ function tickLabels(scale: AxisScale, ticks: number[], count: number): string[] 
   return own;
 }
 
-
 /**
  * A horizontal axis at height `y`: a baseline, d3-scale's ticks with their own format, and an
  * escaped label centred under it.

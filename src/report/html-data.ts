@@ -48,7 +48,8 @@ export interface Band {
  */
 export function cutoffBand(m: MetricResult, cutoff: number): Band | undefined {
   const b = m.baseline;
-  if (!b || !Number.isFinite(b.mean) || !(b.sd >= 0 && Number.isFinite(b.sd)) || !(cutoff > 0 && cutoff < 1)) return undefined;
+  if (!b || !Number.isFinite(b.mean) || !(b.sd >= 0 && Number.isFinite(b.sd)) || !(cutoff > 0 && cutoff < 1))
+    return undefined;
   const k = cutoffSigma(cutoff);
   const back = (t: number): number => (b.scale === 'log' ? Math.exp(t) : t);
   return { mean: back(b.mean), low: back(b.mean - k * b.sd), high: back(b.mean + k * b.sd) };
@@ -64,5 +65,10 @@ export function chartColumn(history: History, m: MetricResult): MetricColumn | u
   const refName = m.baseline?.relativeTo;
   if (!own || refName === undefined) return own;
   const ref = history.columns.get(refName);
-  return { values: own.values.map((v, i) => { const r = ref?.values[i]; return r === undefined || r === 0 ? NaN : v / r; }) };
+  return {
+    values: own.values.map((v, i) => {
+      const r = ref?.values[i];
+      return r === undefined || r === 0 ? NaN : v / r;
+    }),
+  };
 }

@@ -38,7 +38,11 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
   const all = [...vals, band.low, band.high, ...tails, ...(now === undefined ? [] : [now])];
   const x = valueScale(log, Math.min(...all), Math.max(...all), [M.left, W - M.right]);
   const [d0 = 0, d1 = 1] = x.domain();
-  const edges = [d0, ...x.ticks(Math.min(40, Math.max(8, Math.ceil(2 * Math.sqrt(vals.length))))).filter((t) => t > d0 && t < d1), d1];
+  const edges = [
+    d0,
+    ...x.ticks(Math.min(40, Math.max(8, Math.ceil(2 * Math.sqrt(vals.length))))).filter((t) => t > d0 && t < d1),
+    d1,
+  ];
   const bins = edges.slice(1).map((hiEdge, i) => {
     const loEdge = edges[i] ?? d0;
     const last = i === edges.length - 2;
@@ -47,7 +51,10 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
   });
   const peak = gaussianDensity(b.mean, b.mean, b.sd);
   const top = Math.max(peak, ...bins.map((bin) => bin.density));
-  const y = scaleLinear().domain([0, top]).range([H - M.bottom, M.top]).nice();
+  const y = scaleLinear()
+    .domain([0, top])
+    .range([H - M.bottom, M.top])
+    .nice();
   const unit = m.unit === undefined ? '' : escapeHtml(m.unit, 40);
   const parts: string[] = [];
   for (const bin of bins) {
@@ -57,7 +64,10 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
     const attrs = { class: 'bin', x: x(bin.loEdge), y: y(bin.density), width, height: y(0) - y(bin.density) };
     parts.push(svgElement('rect', attrs, `${escapeHtml(tip)} ${unit}`));
   }
-  const ts = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => toFit(d0) + ((toFit(d1) - toFit(d0)) * i) / CURVE_POINTS);
+  const ts = Array.from(
+    { length: CURVE_POINTS + 1 },
+    (_, i) => toFit(d0) + ((toFit(d1) - toFit(d0)) * i) / CURVE_POINTS,
+  );
   const curve = line<number>()
     .x((t) => x(log ? Math.exp(t) : t))
     .y((t) => y(gaussianDensity(t, b.mean, b.sd)));
@@ -71,7 +81,14 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
   parts.push(svgElement('line', { class: 'cutoff', x1: x(band.low), x2: x(band.high), y1: level, y2: level }));
   if (now !== undefined) {
     parts.push(svgElement('line', { class: 'now', x1: x(now), x2: x(now), y1: y(0), y2: M.top }));
-    parts.push(statusSymbol(m.status, px(x(now)), px(y(0) - 9), `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`));
+    parts.push(
+      statusSymbol(
+        m.status,
+        px(x(now)),
+        px(y(0) - 9),
+        `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`,
+      ),
+    );
   }
   if (offChart && given !== undefined) {
     const right = toFit(given) > b.mean;
@@ -82,7 +99,8 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
     const noteAttrs = { class: 'note', x: edgeX, y: M.top + 10, 'text-anchor': right ? 'end' : 'start' };
     parts.push(textElement(noteAttrs, `this run ${right ? '→' : '←'} ${shown}`));
   }
-  const axes = bottomAxis(x, H - M.bottom, unit || 'value') + leftAxis(y, M.left, log ? 'density (per log unit)' : 'density');
+  const axes =
+    bottomAxis(x, H - M.bottom, unit || 'value') + leftAxis(y, M.left, log ? 'density (per log unit)' : 'density');
   const title = `baseline of ${escapeHtml(m.name, 200)}: histogram and fitted density`;
   return chartSvg(W, H, title, axes + parts.join(''));
 }

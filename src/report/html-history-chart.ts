@@ -23,7 +23,12 @@ const MAX_RUNS = 400;
  * y axis is logarithmic, so the band reads symmetric as it was fitted. Every point has a <title>
  * tooltip (run id, time, value). Returns '' when there is nothing to draw.
  */
-export function historyChart(m: MetricResult, column: MetricColumn | undefined, runs: readonly RunInfo[], cutoff: number): string {
+export function historyChart(
+  m: MetricResult,
+  column: MetricColumn | undefined,
+  runs: readonly RunInfo[],
+  cutoff: number,
+): string {
   const every = columnPoints(column, runs);
   const base = baselinePoints(every, m);
   // The newest runs only: enough to show the baseline and some before it, and a page of 500
@@ -37,7 +42,9 @@ export function historyChart(m: MetricResult, column: MetricColumn | undefined, 
   const all = [...pts.map((p) => p.value), ...(now === undefined ? [] : [now]), ...(band ? [band.low, band.high] : [])];
   const log = m.baseline?.scale === 'log' && all.every((v) => v > 0);
   const y = valueScale(log, Math.min(...all), Math.max(...all), [H - M.bottom, M.top]);
-  const x = scaleLinear().domain([start, Math.max(start + 1, runs.length)]).range([M.left, W - M.right]);
+  const x = scaleLinear()
+    .domain([start, Math.max(start + 1, runs.length)])
+    .range([M.left, W - M.right]);
   const unit = m.unit === undefined ? '' : escapeHtml(m.unit, 40);
   const parts: string[] = [];
   if (band && base.length > 0) {
@@ -67,7 +74,8 @@ export function historyChart(m: MetricResult, column: MetricColumn | undefined, 
     const tip = `this run: ${escapeHtml(formatValue(now))} ${unit} (${m.status})`;
     parts.push(statusSymbol(m.status, px(x(runs.length)), px(y(now)), tip));
   }
-  const xLabel = start > 0 ? `run, newest ${shown} of ${runs.length} (last: this run)` : 'run, oldest to newest (last: this run)';
+  const xLabel =
+    start > 0 ? `run, newest ${shown} of ${runs.length} (last: this run)` : 'run, oldest to newest (last: this run)';
   const axes = bottomAxis(x, H - M.bottom, xLabel) + leftAxis(y, M.left, unit || 'value');
   return chartSvg(W, H, `history of ${escapeHtml(m.name, 200)}`, axes + parts.join(''));
 }

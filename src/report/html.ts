@@ -47,18 +47,25 @@ function metricSection(m: MetricResult, i: number, history: History): string {
   // A chart whose coordinates overflowed (values near the largest double) is left out, not drawn wrong.
   const charts = [historyChart(m, column, history.runs, m.cutoff), baselineHistogram(m, baseValues, m.cutoff)]
     .filter((s) => s !== '')
-    .map((s) => (/\bNaN\b|Infinity/.test(s) ? '<p class="note-text">This chart cannot be drawn for these values.</p>' : s));
+    .map((s) =>
+      /\bNaN\b|Infinity/.test(s) ? '<p class="note-text">This chart cannot be drawn for these values.</p>' : s,
+    );
   const unit = m.unit === undefined ? '' : ` <span class="meta">(${escapeHtml(m.unit, 40)})</span>`;
   const reason = escapeHtml(m.reason, 1000).replace(/([^.!?])$/, '$1.');
   const scale = m.baseline?.scale === 'log' ? ' Fitted on the log scale.' : '';
   const judged = usesPredictive(m)
     ? ` Judged by the predictive Student-t (${(m.baseline?.n ?? 0) - 1} degrees of freedom), whose tails are heavier than the Gaussian band drawn.`
     : '';
-  const ratio = m.baseline?.relativeTo !== undefined ? ` Fitted and drawn as ratios to ${escapeHtml(m.baseline.relativeTo, 300)} in the same run.` : '';
+  const ratio =
+    m.baseline?.relativeTo !== undefined
+      ? ` Fitted and drawn as ratios to ${escapeHtml(m.baseline.relativeTo, 300)} in the same run.`
+      : '';
   return (
     `<section class="metric" id="m${i}"><h2><span class="s-${m.status}">${STATUS_GLYPH[m.status]} ${m.status}</span> ${escapeHtml(m.name, 300)}${unit}</h2>` +
     `<p class="reason">${reason}${scale}${ratio}${judged}</p>` +
-    (charts.length > 0 ? `<div class="charts">${charts.join('')}</div>` : '<p class="note-text">No values to draw yet.</p>') +
+    (charts.length > 0
+      ? `<div class="charts">${charts.join('')}</div>`
+      : '<p class="note-text">No values to draw yet.</p>') +
     '</section>'
   );
 }
@@ -79,7 +86,9 @@ export function renderHtmlReport(input: HtmlReportInput): string {
   const order = report.metrics
     .map((m, i) => ({ m, i }))
     .sort((a, b) => statusRank(a.m.status) - statusRank(b.m.status) || a.i - b.i);
-  const head = COLUMNS.map((c, k) => `<th scope="col"${NUMERIC.has(k) ? ' class="num"' : ''}><button type="button">${c}</button></th>`);
+  const head = COLUMNS.map(
+    (c, k) => `<th scope="col"${NUMERIC.has(k) ? ' class="num"' : ''}><button type="button">${c}</button></th>`,
+  );
   const groups = report.groups.map((g) => {
     const top = [...g.members].sort((a, b) => b.share - a.share).slice(0, 3);
     const names = top.map((mm) => `${escapeHtml(mm.name, 300)} ${Math.round(mm.share * 100)}%`).join(', ');

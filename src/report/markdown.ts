@@ -10,7 +10,8 @@ import { STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './stat
 export const MARKDOWN_LIMIT = 65_536;
 const BUDGET = MARKDOWN_LIMIT - 2_000;
 const FLAGGED: ReadonlySet<Status> = new Set<Status>(['regressed', 'improved']);
-const HEAD = '| status | metric | baseline (mean ± sd) | this run | change | sigma | rel. density vs cutoff |\n|---|---|---|---|---|---|---|';
+const HEAD =
+  '| status | metric | baseline (mean ± sd) | this run | change | sigma | rel. density vs cutoff |\n|---|---|---|---|---|---|---|';
 
 export interface MarkdownOptions {
   /** Hidden marker put in an HTML comment on the first line (see commentMarker). */
@@ -22,7 +23,9 @@ export interface MarkdownOptions {
 function row(m: MetricResult): string {
   const unit = m.unit === undefined ? undefined : escapeMarkdown(m.unit, 20);
   const c = metricCells(m, unit);
-  const status = FLAGGED.has(m.status) ? `${STATUS_GLYPH[m.status]} **${m.status}**` : `${STATUS_GLYPH[m.status]} ${m.status}`;
+  const status = FLAGGED.has(m.status)
+    ? `${STATUS_GLYPH[m.status]} **${m.status}**`
+    : `${STATUS_GLYPH[m.status]} ${m.status}`;
   return `| ${status} | ${escapeMarkdown(m.name)} | ${c.baseline} | ${c.value} | ${c.change} | ${c.sigma} | ${c.density.replace('<', '&lt;')} |`;
 }
 
@@ -30,7 +33,9 @@ function picture(m: MetricResult): string {
   const recent = m.recent ?? [];
   const line = sparkline(recent, m.value);
   const unit = m.unit === undefined ? undefined : escapeMarkdown(m.unit, 20);
-  const shown = line ? `\`${line}\` ${recent.length} baseline runs → this run ${formatValue(m.value, unit)}` : `this run ${formatValue(m.value, unit)}`;
+  const shown = line
+    ? `\`${line}\` ${recent.length} baseline runs → this run ${formatValue(m.value, unit)}`
+    : `this run ${formatValue(m.value, unit)}`;
   return `- **${escapeMarkdown(m.name)}** ${shown}. ${escapeMarkdown(m.reason, 500)}`;
 }
 
@@ -95,7 +100,9 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   }
   if (rest.length > 0) {
     add('');
-    add(`<details><summary>${rest.length} other metric${rest.length === 1 ? '' : 's'}: ${statusCounts(rest.map((m) => m.status))}</summary>\n`);
+    add(
+      `<details><summary>${rest.length} other metric${rest.length === 1 ? '' : 's'}: ${statusCounts(rest.map((m) => m.status))}</summary>\n`,
+    );
     add(`${HEAD}\n${fit(rest.map(row), room, 'metrics').text}\n\n</details>`);
   }
   const links: string[] = [];
@@ -103,6 +110,8 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   if (isWebUrl(options.htmlReportUrl)) links.push(`[full HTML report](${options.htmlReportUrl})`);
   out.push('');
   if (links.length > 0) out.push(links.join(' · '));
-  out.push('<sub>Reported by Bellgate: a metric is flagged when its relative density under the baseline fit falls below its cutoff on its worse side.</sub>');
+  out.push(
+    '<sub>Reported by Bellgate: a metric is flagged when its relative density under the baseline fit falls below its cutoff on its worse side.</sub>',
+  );
   return out.join('\n') + '\n';
 }

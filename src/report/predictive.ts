@@ -7,7 +7,8 @@ import type { MetricResult } from '../gate/report.js';
  * @example usesPredictive({ ...m, z: 3, relativeDensity: Math.exp(-4.5) }) // false (plug-in)
  */
 export function usesPredictive(m: MetricResult): boolean {
-  if (m.z === undefined || m.relativeDensity === undefined || !Number.isFinite(m.z) || Math.abs(m.z) < 0.5) return false;
+  if (m.z === undefined || m.relativeDensity === undefined || !Number.isFinite(m.z) || Math.abs(m.z) < 0.5)
+    return false;
   const plugIn = Math.exp(-0.5 * m.z * m.z);
   return m.relativeDensity > plugIn * (1 + 1e-6);
 }

@@ -58,9 +58,12 @@ function groupLine(g: GroupResult): string {
 export function renderText(report: Report, options: { color: boolean; all?: boolean }): string {
   const c = pc.createColors(options.color);
   const lines: string[] = [];
-  const verdictWord = report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
+  const verdictWord =
+    report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
   lines.push(`Bellgate — series "${clean(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
-  lines.push(`${VERDICT_HEADLINE[report.verdict]}; ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`);
+  lines.push(
+    `${VERDICT_HEADLINE[report.verdict]}; ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`,
+  );
 
   // Regressed, then improved, then ok, each in report order (a stable sort by statusRank, in one pass).
   const byStatus = new Map<Status, MetricResult[]>(JUDGED.map((status) => [status, []]));
@@ -97,7 +100,14 @@ export function renderText(report: Report, options: { color: boolean; all?: bool
       }
     });
     lines.push('');
-    lines.push(c.bold(head.map((h, i) => h + ' '.repeat(widths[i]! - h.length)).join('  ').trimEnd()));
+    lines.push(
+      c.bold(
+        head
+          .map((h, i) => h + ' '.repeat(widths[i]! - h.length))
+          .join('  ')
+          .trimEnd(),
+      ),
+    );
     const parts: string[] = new Array<string>(columns);
     judged.forEach((m, row) => {
       const at = row * columns;

@@ -19,12 +19,18 @@ export function renderTuneText(result: TuneResult): string {
     `bellgate tune: series ${cleanText(result.series)}, ${result.runs} runs, ${result.replayedRuns} replayed, ` +
       `${formatNumber(result.metricsPerRun)} metrics judged in a typical run`,
   );
-  out.push(`replay: ${result.metrics.length - refit} metrics slid incrementally, ${refit} refitted per run (change points or robust fit)`);
+  out.push(
+    `replay: ${result.metrics.length - refit} metrics slid incrementally, ${refit} refitted per run (change points or robust fit)`,
+  );
   if (result.groups.length > 0) {
-    out.push(`note: groups (${result.groups.map((g) => cleanText(g)).join(', ')}) are replayed member by member, as the gate judges them while a group is learning; their joint check is not in the ladder`);
+    out.push(
+      `note: groups (${result.groups.map((g) => cleanText(g)).join(', ')}) are replayed member by member, as the gate judges them while a group is learning; their joint check is not in the ladder`,
+    );
   }
   out.push('', ladderTable(result), '');
-  out.push(`false alarms: alarms on runs not labelled as regressions; "runs/100" is the share of runs with at least one, by family setting (config: ${result.family}).`);
+  out.push(
+    `false alarms: alarms on runs not labelled as regressions; "runs/100" is the share of runs with at least one, by family setting (config: ${result.family}).`,
+  );
   out.push('', perMetricTable(result));
   const normality = normalityTable(result);
   if (normality !== '') out.push('', normality);
@@ -38,10 +44,14 @@ function ladderTable(result: TuneResult): string {
   const head = ['', 'cutoff', 'sigma', 'false/run', ...FAMILIES.map((f) => `runs/100 ${f}`)];
   if (labelled) head.push('precision', 'recall', 'F1');
   const rows = own.map((row, i) => {
-    const mark = [row.cutoff === result.suggestion.cutoff ? '>' : ' ', row.cutoff === result.currentCutoff ? '*' : ' '].join('');
+    const mark = [
+      row.cutoff === result.suggestion.cutoff ? '>' : ' ',
+      row.cutoff === result.currentCutoff ? '*' : ' ',
+    ].join('');
     const cells = [mark, formatNumber(row.cutoff), row.sigma.toFixed(2), row.alarmsPerRun.toFixed(3)];
     for (const f of FAMILIES) cells.push(per100(result.ladders.get(f as Family)![i]!.runsFlaggedPer100));
-    if (row.labelled !== undefined) cells.push(row.labelled.precision.toFixed(3), row.labelled.recall.toFixed(3), row.labelled.f1.toFixed(3));
+    if (row.labelled !== undefined)
+      cells.push(row.labelled.precision.toFixed(3), row.labelled.recall.toFixed(3), row.labelled.f1.toFixed(3));
     return cells;
   });
   const legend = `  (> suggested, * current; ladder scored with family ${result.family}${labelled ? `; ${result.labels?.count ?? 0} labelled regressions` : ''})`;
@@ -82,7 +92,7 @@ function normalityTable(result: TuneResult): string {
   if (rows.length === 0) return '';
   const head = ['metric', 'n', 'skew', 'A*²', 'skew log', 'A*² log', 'transform', 'note'];
   return (
-    'normality of the newest window (skewness: Joanes & Gill 1998; Anderson-Darling A*² with estimated mean and sd, 5% critical value 0.752: D\'Agostino & Stephens 1986)\n' +
+    "normality of the newest window (skewness: Joanes & Gill 1998; Anderson-Darling A*² with estimated mean and sd, 5% critical value 0.752: D'Agostino & Stephens 1986)\n" +
     textTable([head, ...rows], 'lrrrrrll')
   );
 }
@@ -90,9 +100,14 @@ function normalityTable(result: TuneResult): string {
 function suggestionLines(result: TuneResult): string[] {
   const s = result.suggestion;
   const lines = ['suggestion', `  defaults.cutoff: ${formatNumber(s.cutoff)} — ${s.reason}`];
-  lines.push(`  family: ${s.family}${s.family === result.family ? ' (as configured)' : ` (configured: ${result.family})`} — ${s.familyReason}`);
+  lines.push(
+    `  family: ${s.family}${s.family === result.family ? ' (as configured)' : ` (configured: ${result.family})`} — ${s.familyReason}`,
+  );
   for (const rule of s.rules) {
-    const keys = [rule.cutoff === undefined ? '' : `cutoff: ${formatNumber(rule.cutoff)}`, rule.transform === undefined ? '' : `transform: ${rule.transform}`].filter((k) => k !== '');
+    const keys = [
+      rule.cutoff === undefined ? '' : `cutoff: ${formatNumber(rule.cutoff)}`,
+      rule.transform === undefined ? '' : `transform: ${rule.transform}`,
+    ].filter((k) => k !== '');
     lines.push(`  rule ${cleanText(rule.metric)}: ${keys.join(', ')} — ${cleanText(rule.reason, 400)}`);
   }
   const t = result.target;
@@ -103,7 +118,9 @@ function suggestionLines(result: TuneResult): string[] {
   );
   if (result.labels?.best !== undefined) {
     const b = result.labels.best;
-    lines.push(`  labels: best F1 ${b.f1.toFixed(3)} at cutoff ${formatNumber(b.cutoff)} (precision ${b.precision.toFixed(3)}, recall ${b.recall.toFixed(3)})`);
+    lines.push(
+      `  labels: best F1 ${b.f1.toFixed(3)} at cutoff ${formatNumber(b.cutoff)} (precision ${b.precision.toFixed(3)}, recall ${b.recall.toFixed(3)})`,
+    );
   }
   return lines;
 }

@@ -33,10 +33,12 @@ export function generate(dir, runs, metrics, seed = 7) {
   const start = Date.UTC(2026, 0, 1);
   const times = ids.map((_, r) => new Date(start + r * 3_600_000).toISOString());
   const names = Array.from({ length: metrics }, (_, m) => metricName(m));
-  writeSync(history,
+  writeSync(
+    history,
     `{"schema":"bellgate.history/2","series":"bench",\n` +
-    `"runs":${JSON.stringify({ id: ids, event: ids.map(() => 'push'), time: times })},\n` +
-    `"metrics":{"names":${JSON.stringify(names)},"values":[\n`);
+      `"runs":${JSON.stringify({ id: ids, event: ids.map(() => 'push'), time: times })},\n` +
+      `"metrics":{"names":${JSON.stringify(names)},"values":[\n`,
+  );
   writeSync(floor, '[\n');
   let bytes = 0;
   const row = new Array(runs);
@@ -56,7 +58,8 @@ export function generate(dir, runs, metrics, seed = 7) {
   closeSync(floor);
   // The new run: the same distributions, so nothing should move (a quiet pull request).
   const run = Object.create(null);
-  for (let m = 0; m < metrics; m++) run[metricName(m)] = Number((levels[m] * (1 + 0.02 * gaussian(random))).toPrecision(5));
+  for (let m = 0; m < metrics; m++)
+    run[metricName(m)] = Number((levels[m] * (1 + 0.02 * gaussian(random))).toPrecision(5));
   writeFileSync(join(dir, 'run.json'), JSON.stringify(run));
   // keep above the run count, so `record` appends instead of trimming; everything else default.
   writeFileSync(join(dir, 'bellgate.yml'), `keep: ${Math.max(runs + 10, 500)}\n`);

@@ -54,7 +54,8 @@ for (const file of [cli, action]) {
 }
 const peakPreload = join(root, 'test', 'bench', 'peak-memory.cjs');
 const work = mkdtempSync(join(tmpdir(), 'bellgate-bench-'));
-const floorScript = "const a=JSON.parse(require('fs').readFileSync(process.argv[1],'utf8'));if(!Array.isArray(a))process.exit(9)";
+const floorScript =
+  "const a=JSON.parse(require('fs').readFileSync(process.argv[1],'utf8'));if(!Array.isArray(a))process.exit(9)";
 
 const median = (xs) => {
   const s = [...xs].sort((a, b) => a - b);
@@ -79,14 +80,22 @@ function runOnce(t) {
   const t0 = process.hrtime.bigint();
   const out = spawnSync(process.execPath, [...profile, ...t.args], {
     cwd: t.cwd,
-    env: { PATH: process.env.PATH, HOME: process.env.HOME, ...t.env, NODE_OPTIONS: `--require ${peakPreload}`, BENCH_PEAK_FILE: peakFile },
+    env: {
+      PATH: process.env.PATH,
+      HOME: process.env.HOME,
+      ...t.env,
+      NODE_OPTIONS: `--require ${peakPreload}`,
+      BENCH_PEAK_FILE: peakFile,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
     maxBuffer: 64 * 1024 * 1024,
   });
   const elapsed = Number(process.hrtime.bigint() - t0) / 1e6;
   if (!t.okCodes.includes(out.status)) {
     if (!flags['keep-files']) rmSync(work, { recursive: true, force: true });
-    console.error(`bench: ${t.label} exited with ${out.status ?? out.signal}:\n${out.stdout.toString().slice(-4000)}\n${out.stderr.toString().slice(0, 4000)}`);
+    console.error(
+      `bench: ${t.label} exited with ${out.status ?? out.signal}:\n${out.stdout.toString().slice(-4000)}\n${out.stderr.toString().slice(0, 4000)}`,
+    );
     process.exit(1);
   }
   const [rss, cpuMicros] = readFileSync(peakFile, 'utf8').split(' ').map(Number);
@@ -105,9 +114,18 @@ function measureTogether(tasks, times = repeat) {
     for (let k = 0; k < tasks.length; k++) runOnce(tasks[(k + round) % tasks.length]);
   }
   return tasks.map((t) => {
-    const result = { label: t.label, ms: median(t.ms), cpu: median(t.cpu), mib: median(t.peaks), load: t.load, all: t.ms };
-    console.log(`${t.label.padEnd(28)} ${result.ms.toFixed(0).padStart(7)} ms wall ${result.cpu.toFixed(0).padStart(7)} ms cpu ${result.mib.toFixed(0).padStart(6)} MiB peak  ` +
-      `(load ${t.load.toFixed(1)}; runs: ${t.ms.map((x) => x.toFixed(0)).join(' ')})`);
+    const result = {
+      label: t.label,
+      ms: median(t.ms),
+      cpu: median(t.cpu),
+      mib: median(t.peaks),
+      load: t.load,
+      all: t.ms,
+    };
+    console.log(
+      `${t.label.padEnd(28)} ${result.ms.toFixed(0).padStart(7)} ms wall ${result.cpu.toFixed(0).padStart(7)} ms cpu ${result.mib.toFixed(0).padStart(6)} MiB peak  ` +
+        `(load ${t.load.toFixed(1)}; runs: ${t.ms.map((x) => x.toFixed(0)).join(' ')})`,
+    );
     return result;
   });
 }
@@ -117,19 +135,54 @@ function sizeRun(r, m, parts, times = repeat) {
   const dir = join(work, `${r}x${m}`);
   const t0 = Date.now();
   const bytes = generate(dir, r, m);
-  console.log(`# ${r} runs x ${m} metrics: history ${(bytes / 2 ** 20).toFixed(1)} MiB of values (generated in ${((Date.now() - t0) / 1000).toFixed(1)} s)`);
+  console.log(
+    `# ${r} runs x ${m} metrics: history ${(bytes / 2 ** 20).toFixed(1)} MiB of values (generated in ${((Date.now() - t0) / 1000).toFixed(1)} s)`,
+  );
   const tasks = {};
   if (parts.has('floor')) tasks.floor = task(`floor ${r}x${m}`, ['-e', floorScript, join(dir, 'floor.json')]);
   if (parts.has('check')) {
-    tasks.check = task(`check ${r}x${m}`, [cli, 'check', '--metrics', 'run.json', '--history', 'history.json', '--config', 'bellgate.yml', '--series', 'bench'],
-      { cwd: dir, okCodes: [0, 1] });
+    tasks.check = task(
+      `check ${r}x${m}`,
+      [
+        cli,
+        'check',
+        '--metrics',
+        'run.json',
+        '--history',
+        'history.json',
+        '--config',
+        'bellgate.yml',
+        '--series',
+        'bench',
+      ],
+      { cwd: dir, okCodes: [0, 1] },
+    );
   }
   if (parts.has('record')) {
-    tasks.record = task(`record ${r}x${m}`, [cli, 'record', '--metrics', 'run.json', '--history', 'h.json', '--config', 'bellgate.yml', '--series', 'bench', '--id', 'bench-new'],
-      { cwd: dir, before: () => copyFileSync(join(dir, 'history.json'), join(dir, 'h.json')) });
+    tasks.record = task(
+      `record ${r}x${m}`,
+      [
+        cli,
+        'record',
+        '--metrics',
+        'run.json',
+        '--history',
+        'h.json',
+        '--config',
+        'bellgate.yml',
+        '--series',
+        'bench',
+        '--id',
+        'bench-new',
+      ],
+      { cwd: dir, before: () => copyFileSync(join(dir, 'history.json'), join(dir, 'h.json')) },
+    );
   }
   const names = Object.keys(tasks);
-  const results = measureTogether(names.map((k) => tasks[k]), times);
+  const results = measureTogether(
+    names.map((k) => tasks[k]),
+    times,
+  );
   const out = Object.fromEntries(names.map((k, i) => [k, results[i]]));
   rmSync(dir, { recursive: true, force: true });
   return out;
@@ -140,18 +193,45 @@ function actionRun() {
   const dir = join(work, 'action');
   generate(dir, 100, 50);
   const event = join(dir, 'event.json');
-  writeFileSync(event, JSON.stringify({
-    pull_request: { number: 7, labels: [], head: { repo: { full_name: 'render/farm' } }, base: { repo: { full_name: 'render/farm' } } },
-    repository: { id: 1, default_branch: 'main', full_name: 'render/farm' },
-  }));
+  writeFileSync(
+    event,
+    JSON.stringify({
+      pull_request: {
+        number: 7,
+        labels: [],
+        head: { repo: { full_name: 'render/farm' } },
+        base: { repo: { full_name: 'render/farm' } },
+      },
+      repository: { id: 1, default_branch: 'main', full_name: 'render/farm' },
+    }),
+  );
   const env = {
-    GITHUB_ACTIONS: 'true', GITHUB_REPOSITORY: 'render/farm', GITHUB_EVENT_NAME: 'pull_request', GITHUB_EVENT_PATH: event,
-    GITHUB_RUN_ID: '4242', GITHUB_RUN_ATTEMPT: '1', GITHUB_REF: 'refs/pull/7/merge', GITHUB_SHA: 'a'.repeat(40),
-    GITHUB_WORKFLOW: 'bench', GITHUB_JOB: 'scenes', GITHUB_WORKSPACE: dir, RUNNER_TEMP: dir,
-    GITHUB_OUTPUT: join(dir, 'output.txt'), GITHUB_STEP_SUMMARY: join(dir, 'summary.md'),
-    GITHUB_API_URL: 'http://127.0.0.1:9', GITHUB_SERVER_URL: 'http://127.0.0.1:9',
-    INPUT_METRICS: 'run.json', INPUT_CONFIG: 'bellgate.yml', INPUT_SERIES: 'bench', INPUT_STORE: 'file', INPUT_HISTORY: 'history.json',
-    INPUT_RECORD: 'auto', INPUT_BLOCK: 'false', INPUT_COMMENT: 'never', INPUT_TOKEN: '', 'INPUT_HISTORY-FAILURE': 'fail',
+    GITHUB_ACTIONS: 'true',
+    GITHUB_REPOSITORY: 'render/farm',
+    GITHUB_EVENT_NAME: 'pull_request',
+    GITHUB_EVENT_PATH: event,
+    GITHUB_RUN_ID: '4242',
+    GITHUB_RUN_ATTEMPT: '1',
+    GITHUB_REF: 'refs/pull/7/merge',
+    GITHUB_SHA: 'a'.repeat(40),
+    GITHUB_WORKFLOW: 'bench',
+    GITHUB_JOB: 'scenes',
+    GITHUB_WORKSPACE: dir,
+    RUNNER_TEMP: dir,
+    GITHUB_OUTPUT: join(dir, 'output.txt'),
+    GITHUB_STEP_SUMMARY: join(dir, 'summary.md'),
+    GITHUB_API_URL: 'http://127.0.0.1:9',
+    GITHUB_SERVER_URL: 'http://127.0.0.1:9',
+    INPUT_METRICS: 'run.json',
+    INPUT_CONFIG: 'bellgate.yml',
+    INPUT_SERIES: 'bench',
+    INPUT_STORE: 'file',
+    INPUT_HISTORY: 'history.json',
+    INPUT_RECORD: 'auto',
+    INPUT_BLOCK: 'false',
+    INPUT_COMMENT: 'never',
+    INPUT_TOKEN: '',
+    'INPUT_HISTORY-FAILURE': 'fail',
   };
 
   // The runner creates the output and summary files; @actions/core refuses missing ones.
@@ -173,8 +253,10 @@ function actionRun() {
   return { bare, version, pr };
 }
 
-console.log(`bellgate bench: node ${process.version}, ${cpus().length} x ${cpus()[0]?.model ?? '?'}, ${(totalmem() / 2 ** 30).toFixed(1)} GiB, ` +
-  `${new Date().toISOString()}; median of ${repeat}; dist ${dist}`);
+console.log(
+  `bellgate bench: node ${process.version}, ${cpus().length} x ${cpus()[0]?.model ?? '?'}, ${(totalmem() / 2 ** 30).toFixed(1)} GiB, ` +
+    `${new Date().toISOString()}; median of ${repeat}; dist ${dist}`,
+);
 const lines = [];
 let ratio;
 /** "wall X.XX (cpu Y.YY)": the wall-time ratio is the target; the CPU ratio is steadier on a busy machine. */
@@ -185,11 +267,15 @@ const main = sizeRun(runs, metrics, only);
 if (main.floor && main.check) {
   ratio = main.check.ms / main.floor.ms;
   lines.push(`check/floor time: ${ratios(main.check, main.floor)}${target(ratio, 1.5)}`);
-  lines.push(`check/floor peak memory: ${(main.check.mib / main.floor.mib).toFixed(2)}${target(main.check.mib / main.floor.mib, 2)}`);
+  lines.push(
+    `check/floor peak memory: ${(main.check.mib / main.floor.mib).toFixed(2)}${target(main.check.mib / main.floor.mib, 2)}`,
+  );
 }
 if (main.floor && main.record) {
   lines.push(`record/floor time: ${ratios(main.record, main.floor)}${target(main.record.ms / main.floor.ms, 2)}`);
-  lines.push(`record/floor peak memory: ${(main.record.mib / main.floor.mib).toFixed(2)}${target(main.record.mib / main.floor.mib, 2)}`);
+  lines.push(
+    `record/floor peak memory: ${(main.record.mib / main.floor.mib).toFixed(2)}${target(main.record.mib / main.floor.mib, 2)}`,
+  );
 }
 if (only.has('action')) {
   const { bare, version, pr } = actionRun();
@@ -197,11 +283,22 @@ if (only.has('action')) {
   lines.push(`action PR check/bare node: ${ratios(pr, bare)}${target(pr.ms / bare.ms, 3)}`);
 }
 if (flags.growth) {
-  const table = ['| size (runs x metrics) | floor ms | check ms | check/floor | check cpu ms | floor cpu ms | load |', '| --- | --- | --- | --- | --- | --- | --- |'];
-  const sizes = [[250, 1000], [500, 1000], [1000, 1000], [1000, 250], [1000, 500]];
+  const table = [
+    '| size (runs x metrics) | floor ms | check ms | check/floor | check cpu ms | floor cpu ms | load |',
+    '| --- | --- | --- | --- | --- | --- | --- |',
+  ];
+  const sizes = [
+    [250, 1000],
+    [500, 1000],
+    [1000, 1000],
+    [1000, 250],
+    [1000, 500],
+  ];
   for (const [r, m] of sizes) {
     const { floor, check } = sizeRun(r, m, new Set(['floor', 'check']));
-    table.push(`| ${r} x ${m} | ${floor.ms.toFixed(0)} | ${check.ms.toFixed(0)} | ${(check.ms / floor.ms).toFixed(2)} | ${check.cpu.toFixed(0)} | ${floor.cpu.toFixed(0)} | ${check.load.toFixed(1)} |`);
+    table.push(
+      `| ${r} x ${m} | ${floor.ms.toFixed(0)} | ${check.ms.toFixed(0)} | ${(check.ms / floor.ms).toFixed(2)} | ${check.cpu.toFixed(0)} | ${floor.cpu.toFixed(0)} | ${check.load.toFixed(1)} |`,
+    );
   }
   console.log(table.join('\n'));
 }

@@ -40,7 +40,17 @@ interface JsonMetric {
 }
 
 async function check(config: string): Promise<{ code: number; verdict: string; metric: JsonMetric; stderr: string }> {
-  const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--config', config, '--format', 'json']);
+  const r = await bellgate(work.dir, [
+    'check',
+    '--metrics',
+    run,
+    '--history',
+    history,
+    '--config',
+    config,
+    '--format',
+    'json',
+  ]);
   const parsed = JSON.parse(r.stdout) as { verdict: string; metrics: JsonMetric[] };
   const metric = parsed.metrics.find((m) => m.name === 'api/latency');
   if (metric === undefined) throw new Error('api/latency missing from the report');

@@ -22,9 +22,23 @@ describe('check', () => {
   });
 
   it('--format json prints only the JSON report on stdout', async () => {
-    const r = await bellgate(work.dir, ['check', '--metrics', slow, '--history', history, '--config', config, '--format', 'json']);
+    const r = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      slow,
+      '--history',
+      history,
+      '--config',
+      config,
+      '--format',
+      'json',
+    ]);
     expect(r.code).toBe(1);
-    const parsed = JSON.parse(r.stdout) as { schema: string; verdict: string; metrics: Array<{ name: string; status: string }> };
+    const parsed = JSON.parse(r.stdout) as {
+      schema: string;
+      verdict: string;
+      metrics: Array<{ name: string; status: string }>;
+    };
     expect(parsed.schema).toBe('bellgate.report/1'); // DESIGN.md JSON report
     expect(parsed.verdict).toBe('regressed');
     expect(parsed.metrics.find((m) => m.name === 'api/latency')?.status).toBe('regressed');
@@ -37,9 +51,22 @@ describe('check', () => {
     const values = Object.fromEntries(names.map((n) => [n, [100, 101, 99, 100, 102, 98, 100, 101, 99, 100]]));
     values['suite/m0'] = values['suite/m0']!.map((v) => v * 10);
     const wide = work.write('wide/history.json', handHistoryV1('default', values));
-    const run = work.write('wide/run.json', JSON.stringify(Object.fromEntries(names.map((n) => [n, n === 'suite/m0' ? 1300 : 100.5]))));
+    const run = work.write(
+      'wide/run.json',
+      JSON.stringify(Object.fromEntries(names.map((n) => [n, n === 'suite/m0' ? 1300 : 100.5]))),
+    );
     const rowsOf = (out: string): string[] => out.split('\n').filter((l) => /^[▲●] \S+ {2,}suite\//.test(l));
-    const folded = await bellgate(work.dir, ['check', '--metrics', run, '--history', wide, '--config', config, '--out', 'wide/out']);
+    const folded = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      run,
+      '--history',
+      wide,
+      '--config',
+      config,
+      '--out',
+      'wide/out',
+    ]);
     expect(folded.code).toBe(1);
     expect(rowsOf(folded.stdout)).toHaveLength(1); // only the regressed metric
     expect(folded.stdout).toContain('● ok (39): within their baselines, not listed (--all lists every metric)');
@@ -50,7 +77,17 @@ describe('check', () => {
   });
 
   it('--format markdown prints a table', async () => {
-    const r = await bellgate(work.dir, ['check', '--metrics', slow, '--history', history, '--config', config, '--format', 'markdown']);
+    const r = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      slow,
+      '--history',
+      history,
+      '--config',
+      config,
+      '--format',
+      'markdown',
+    ]);
     expect(r.code).toBe(1);
     expect(r.stdout).toContain('|');
   });
@@ -71,9 +108,20 @@ describe('check', () => {
   });
 
   it('--out writes report.md, report.json and report.txt', async () => {
-    const r = await bellgate(work.dir, ['check', '--metrics', slow, '--history', history, '--config', config, '--out', 'out/a']);
+    const r = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      slow,
+      '--history',
+      history,
+      '--config',
+      config,
+      '--out',
+      'out/a',
+    ]);
     expect(r.code).toBe(1);
-    for (const f of ['report.md', 'report.json', 'report.txt']) expect(existsSync(join(work.dir, 'out/a', f)), f).toBe(true);
+    for (const f of ['report.md', 'report.json', 'report.txt'])
+      expect(existsSync(join(work.dir, 'out/a', f)), f).toBe(true);
     const json = JSON.parse(readFileSync(join(work.dir, 'out/a/report.json'), 'utf8')) as { verdict: string };
     expect(json.verdict).toBe('regressed');
     expect(readFileSync(join(work.dir, 'out/a/report.txt'), 'utf8')).not.toContain('\u001b['); // no colour in files
@@ -150,7 +198,20 @@ describe('check', () => {
 
   it('--record appends the checked run to the history', async () => {
     const h = work.write('rec/history.json', handHistoryV1('default', { 'api/latency': steady }));
-    const r = await bellgate(work.dir, ['check', '--metrics', calm, '--history', h, '--config', config, '--record', '--id', 'pr-9', '--time', '2026-02-01T00:00:00Z']);
+    const r = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      calm,
+      '--history',
+      h,
+      '--config',
+      config,
+      '--record',
+      '--id',
+      'pr-9',
+      '--time',
+      '2026-02-01T00:00:00Z',
+    ]);
     expect(r.code).toBe(0);
     expect(r.stderr).toContain('recorded run pr-9');
     const doc = readFileSync(h, 'utf8');
@@ -162,7 +223,15 @@ describe('check', () => {
 describe('metric file flags', () => {
   it('--prefix puts a prefix before the names read from the files a pattern matches', async () => {
     const f = work.write('pre/a.json', JSON.stringify({ latency: 5 }));
-    const r = await bellgate(work.dir, ['check', '--metrics', 'pre/*.json', '--prefix', 'pre/*.json=api', '--format', 'json']);
+    const r = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      'pre/*.json',
+      '--prefix',
+      'pre/*.json=api',
+      '--format',
+      'json',
+    ]);
     expect(r.code, r.stderr).toBe(0);
     const names = (JSON.parse(r.stdout) as { metrics: Array<{ name: string }> }).metrics.map((m) => m.name);
     expect(names).toEqual(['api/latency']);

@@ -17,7 +17,16 @@ describe('explain and report', () => {
   });
 
   it('explain with --metrics judges that run', async () => {
-    const r = await bellgate(work.dir, ['explain', 'api/latency', '--history', history, '--metrics', slow, '--config', config]);
+    const r = await bellgate(work.dir, [
+      'explain',
+      'api/latency',
+      '--history',
+      history,
+      '--metrics',
+      slow,
+      '--config',
+      config,
+    ]);
     expect(r.code).toBe(0);
     expect(r.stdout).toContain('regressed');
   });
@@ -29,7 +38,17 @@ describe('explain and report', () => {
   });
 
   it('report --html writes one self-contained page', async () => {
-    const r = await bellgate(work.dir, ['report', '--history', history, '--metrics', slow, '--html', 'pages/report.html', '--config', config]);
+    const r = await bellgate(work.dir, [
+      'report',
+      '--history',
+      history,
+      '--metrics',
+      slow,
+      '--html',
+      'pages/report.html',
+      '--config',
+      config,
+    ]);
     expect(r.code).toBe(0);
     const html = readFileSync(join(work.dir, 'pages/report.html'), 'utf8');
     expect(html).toContain('<svg');

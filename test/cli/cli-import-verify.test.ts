@@ -4,7 +4,7 @@ import { bellgate, handHistoryV1, steadyFixture } from './helpers/cli-harness.js
 
 // Exit codes are DESIGN.md's: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
 // 3 store unreachable. Every failure must be one readable message, never a stack trace.
-const { work, history } = steadyFixture();
+const { work } = steadyFixture();
 afterAll(() => work.remove());
 
 describe('import and verify', () => {
@@ -17,7 +17,10 @@ describe('import and verify', () => {
       metrics: { 'api/latency': 100 + (i % 3) },
     }),
   );
-  const runs = work.write('runs.jsonl', `${lines.join('\n')}\n{"id": "broken", "time": "not a time", "metrics": {"api/latency": 1}}\n`);
+  const runs = work.write(
+    'runs.jsonl',
+    `${lines.join('\n')}\n{"id": "broken", "time": "not a time", "metrics": {"api/latency": 1}}\n`,
+  );
 
   it('import merges JSON Lines runs and reports what it skipped', async () => {
     const h = join(work.dir, 'imported/history.json');

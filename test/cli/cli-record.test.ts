@@ -5,7 +5,7 @@ import { bellgate, steadyFixture } from './helpers/cli-harness.js';
 
 // Exit codes are DESIGN.md's: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
 // 3 store unreachable. Every failure must be one readable message, never a stack trace.
-const { work, history, calm } = steadyFixture();
+const { work, calm } = steadyFixture();
 afterAll(() => work.remove());
 
 describe('record', () => {
@@ -33,7 +33,15 @@ describe('record', () => {
   });
 
   it('a bad --time: exit 2 saying the expected form', async () => {
-    const r = await bellgate(work.dir, ['record', '--metrics', calm, '--history', join(work.dir, 't.json'), '--time', 'yesterday']);
+    const r = await bellgate(work.dir, [
+      'record',
+      '--metrics',
+      calm,
+      '--history',
+      join(work.dir, 't.json'),
+      '--time',
+      'yesterday',
+    ]);
     expect(r.code).toBe(2);
     expect(r.stderr).toContain('ISO-8601');
     expect(existsSync(join(work.dir, 't.json'))).toBe(false);

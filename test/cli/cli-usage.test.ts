@@ -12,7 +12,8 @@ describe('usage', () => {
   it('--help lists every command and exits 0', async () => {
     const r = await bellgate(work.dir, ['--help']);
     expect(r.code).toBe(0);
-    for (const c of ['check', 'record', 'explain', 'tune', 'report', 'import', 'verify', 'demo']) expect(r.stdout).toContain(c);
+    for (const c of ['check', 'record', 'explain', 'tune', 'report', 'import', 'verify', 'demo'])
+      expect(r.stdout).toContain(c);
     expect(r.stdout).toContain('Exit codes');
   });
 
@@ -26,7 +27,9 @@ describe('usage', () => {
   });
 
   it('--version prints the version of package.json', async () => {
-    const pkg = JSON.parse(readFileSync(join(import.meta.dirname, '..', '..', 'package.json'), 'utf8')) as { version: string };
+    const pkg = JSON.parse(readFileSync(join(import.meta.dirname, '..', '..', 'package.json'), 'utf8')) as {
+      version: string;
+    };
     const r = await bellgate(work.dir, ['--version']);
     expect(r.code).toBe(0);
     expect(r.stdout.trim()).toBe(pkg.version);

@@ -36,7 +36,15 @@ describe('demo data', () => {
 
   it('history.json equals what `bellgate import` makes of runs.jsonl', async () => {
     const out = join(work.dir, 'history.json');
-    const r = await bellgate(work.dir, ['import', '--history', out, '--runs', join(demo, 'runs.jsonl'), '--series', gen.SERIES]);
+    const r = await bellgate(work.dir, [
+      'import',
+      '--history',
+      out,
+      '--runs',
+      join(demo, 'runs.jsonl'),
+      '--series',
+      gen.SERIES,
+    ]);
     expect(r.code, r.stderr).toBe(0);
     expect(readFileSync(out, 'utf8')).toBe(committed('history.json'));
   });
@@ -47,7 +55,8 @@ describe('bellgate demo', () => {
     const r = await bellgate(work.dir, ['demo', '--out', 'demo-out']);
     expect(r.code, r.stderr).toBe(0);
     expect(r.stdout).toContain('(demo: the verdict would exit 1 in CI');
-    for (const f of ['report.md', 'report.json', 'report.txt']) expect(existsSync(join(work.dir, 'demo-out', f)), f).toBe(true);
+    for (const f of ['report.md', 'report.json', 'report.txt'])
+      expect(existsSync(join(work.dir, 'demo-out', f)), f).toBe(true);
   });
 
   it('finds the planted changes and nothing else', async () => {

@@ -13,7 +13,9 @@ describe('toFailure: one message and DESIGN.md exit code for anything thrown', (
   });
 
   it('StoreError -> 3 naming the store', () => {
-    const f = toFailure(new StoreError('cannot read the history file', { where: 'file h.json', fix: 'check the path' }));
+    const f = toFailure(
+      new StoreError('cannot read the history file', { where: 'file h.json', fix: 'check the path' }),
+    );
     expect(f.code).toBe(3);
     expect(f.text).toContain('file h.json');
     expect(f.text).toContain('fix: check the path');
@@ -21,11 +23,18 @@ describe('toFailure: one message and DESIGN.md exit code for anything thrown', (
 
   it('commander help -> 0 silently; usage errors -> 2 silently (commander printed them)', () => {
     expect(toFailure(new CommanderError(0, 'commander.helpDisplayed', '(outputHelp)'))).toEqual({ code: 0, text: '' });
-    expect(toFailure(new CommanderError(1, 'commander.unknownOption', "error: unknown option '--x'"))).toEqual({ code: 2, text: '' });
+    expect(toFailure(new CommanderError(1, 'commander.unknownOption', "error: unknown option '--x'"))).toEqual({
+      code: 2,
+      text: '',
+    });
   });
 
   it('a file-system error -> 2 naming the path, no stack', () => {
-    const e = Object.assign(new Error("EACCES: permission denied, open '/ro/report.md'"), { code: 'EACCES', path: '/ro/report.md', syscall: 'open' });
+    const e = Object.assign(new Error("EACCES: permission denied, open '/ro/report.md'"), {
+      code: 'EACCES',
+      path: '/ro/report.md',
+      syscall: 'open',
+    });
     expect(toFailure(e)).toEqual({ code: 2, text: 'bellgate: cannot open /ro/report.md: permission denied' });
   });
 
@@ -49,7 +58,10 @@ describe('closeNames', () => {
   });
 
   it('suggests near names first, and nothing for far ones', () => {
-    expect(closeNames('latency/p59', ['latency/p50', 'size/app.js', 'latency/p95'])).toEqual(['latency/p50', 'latency/p95']);
+    expect(closeNames('latency/p59', ['latency/p50', 'size/app.js', 'latency/p95'])).toEqual([
+      'latency/p50',
+      'latency/p95',
+    ]);
     expect(closeNames('zzzzzzzz', ['latency/p50'])).toEqual([]);
     expect(closeNames('__proto__', ['__proto__', 'constructor'])).toEqual(['__proto__']);
   });

@@ -7,14 +7,16 @@ import { loadConfig } from '../../src/cli/load-config.js';
 import { CONFIG_FOLDERS, configFolderRoot, outcome } from '../helpers/config-folders.js';
 
 const folder = configFolderRoot('bellgate-cli-config-');
-const contextIn = (cwd: string) => createContext({ stdout: () => undefined, stderr: () => undefined, cwd, env: {}, isTTY: false });
+const contextIn = (cwd: string) =>
+  createContext({ stdout: () => undefined, stderr: () => undefined, cwd, env: {}, isTTY: false });
 
 describe('loadConfig (CLI) decides as readConfigFile does', () => {
   it.each(CONFIG_FOLDERS)('without --config, in a folder: %s', async (name, make) => {
     const cwd = folder(`cli-${name}`, make);
     const mine = await outcome(() => loadConfig(contextIn(cwd), undefined));
     expect(mine).toEqual(await outcome(() => readConfigFile(undefined, { cwd, required: false })));
-    if (name === 'yml') expect((mine as { config: { defaults: { cutoff: number } } }).config.defaults.cutoff).toBe(0.05);
+    if (name === 'yml')
+      expect((mine as { config: { defaults: { cutoff: number } } }).config.defaults.cutoff).toBe(0.05);
     if (name === 'invalid' || name === 'config-is-a-folder') expect(mine).toHaveProperty('error');
   });
 

@@ -28,7 +28,9 @@ describe('README.md', () => {
   });
 
   it('documents every command and every flag', () => {
-    const program = buildProgram(createContext({ stdout: () => {}, stderr: () => {}, cwd: root, env: {}, isTTY: false }));
+    const program = buildProgram(
+      createContext({ stdout: () => {}, stderr: () => {}, cwd: root, env: {}, isTTY: false }),
+    );
     expect(program.commands).toHaveLength(COMMANDS.length);
     for (const cmd of program.commands) {
       expect(readme, cmd.name()).toContain(`bellgate ${cmd.name()}`);

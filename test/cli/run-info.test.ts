@@ -25,12 +25,24 @@ describe('createContext colour rule', () => {
 
 describe('runInfoFrom', () => {
   it('without flags or CI variables: id local-<time>, time now', () => {
-    expect(runInfoFrom(createContext(io(), clock), {})).toEqual({ id: 'local-2026-05-04T10:20:30.000Z', time: '2026-05-04T10:20:30.000Z' });
+    expect(runInfoFrom(createContext(io(), clock), {})).toEqual({
+      id: 'local-2026-05-04T10:20:30.000Z',
+      time: '2026-05-04T10:20:30.000Z',
+    });
   });
 
   it('GitHub Actions variables fill the gaps; flags win', () => {
-    const ctx = createContext(io({ GITHUB_RUN_ID: '99', GITHUB_SHA: 'abc', GITHUB_REF: 'refs/heads/main', GITHUB_EVENT_NAME: 'push' }), clock);
-    expect(runInfoFrom(ctx, {})).toEqual({ id: '99-1', time: '2026-05-04T10:20:30.000Z', sha: 'abc', ref: 'refs/heads/main', event: 'push' });
+    const ctx = createContext(
+      io({ GITHUB_RUN_ID: '99', GITHUB_SHA: 'abc', GITHUB_REF: 'refs/heads/main', GITHUB_EVENT_NAME: 'push' }),
+      clock,
+    );
+    expect(runInfoFrom(ctx, {})).toEqual({
+      id: '99-1',
+      time: '2026-05-04T10:20:30.000Z',
+      sha: 'abc',
+      ref: 'refs/heads/main',
+      event: 'push',
+    });
     expect(runInfoFrom(ctx, { id: 'x', sha: 'def' })).toMatchObject({ id: 'x', sha: 'def' });
   });
 

@@ -29,16 +29,33 @@ describe('bellgate tune', () => {
 
   it('--format json: --target picks the loosest cutoff whose runs falsely flagged stay at or under N per 100', async () => {
     for (const target of [0, 2, 10]) {
-      const r = await bellgate(root, ['tune', '--history', demoHistory, '--config', demoConfig, '--format', 'json', '--target', String(target)]);
+      const r = await bellgate(root, [
+        'tune',
+        '--history',
+        demoHistory,
+        '--config',
+        demoConfig,
+        '--format',
+        'json',
+        '--target',
+        String(target),
+      ]);
       expect(r.code).toBe(0);
-      const json = JSON.parse(r.stdout) as { schema: string; family: string; ladders: Record<string, LadderRowJson[]>; target: { per100: number; cutoff?: number } };
+      const json = JSON.parse(r.stdout) as {
+        schema: string;
+        family: string;
+        ladders: Record<string, LadderRowJson[]>;
+        target: { per100: number; cutoff?: number };
+      };
       expect(json.schema).toBe('bellgate.tune/1');
       const rows = json.ladders[json.family]!;
       const qualifying = rows.filter((row) => row.runsFlaggedPer100 <= target).map((row) => row.cutoff);
       expect(json.target.per100).toBe(target);
       expect(json.target.cutoff).toBe(Math.max(...qualifying));
       // Looser cutoffs than the pick all exceed the target.
-      expect(rows.filter((row) => row.cutoff > json.target.cutoff!).every((row) => row.runsFlaggedPer100 > target)).toBe(true);
+      expect(
+        rows.filter((row) => row.cutoff > json.target.cutoff!).every((row) => row.runsFlaggedPer100 > target),
+      ).toBe(true);
     }
   });
 
@@ -50,19 +67,43 @@ describe('bellgate tune', () => {
 
   it('a bad labels file exits 2 naming file:line:col', async () => {
     dir.write('labels.yml', 'regressions:\n  - run: "4180203-1"\n  - runn: "4180206-1"\n');
-    const r = await bellgate(dir.dir, ['tune', '--history', demoHistory, '--config', demoConfig, '--labels', 'labels.yml']);
+    const r = await bellgate(dir.dir, [
+      'tune',
+      '--history',
+      demoHistory,
+      '--config',
+      demoConfig,
+      '--labels',
+      'labels.yml',
+    ]);
     expect(r.code).toBe(2);
     expect(r.stderr).toMatch(/^bellgate: labels\.yml:3:5: unknown key "runn"/m);
     expect(r.stdout).toBe('');
     dir.write('unknown-run.yml', 'regressions:\n  - run: "4180203-1"\n  - run: "999-1"\n');
-    const r2 = await bellgate(dir.dir, ['tune', '--history', demoHistory, '--config', demoConfig, '--labels', 'unknown-run.yml']);
+    const r2 = await bellgate(dir.dir, [
+      'tune',
+      '--history',
+      demoHistory,
+      '--config',
+      demoConfig,
+      '--labels',
+      'unknown-run.yml',
+    ]);
     expect(r2.code).toBe(2);
     expect(r2.stderr).toMatch(/unknown-run\.yml:3:5: no run "999-1" in the history/);
   });
 
   it('labels add precision, recall and F1 to the ladder', async () => {
     dir.write('good.yml', 'regressions:\n  - run: "4180203-1"\n');
-    const r = await bellgate(dir.dir, ['tune', '--history', demoHistory, '--config', demoConfig, '--labels', 'good.yml']);
+    const r = await bellgate(dir.dir, [
+      'tune',
+      '--history',
+      demoHistory,
+      '--config',
+      demoConfig,
+      '--labels',
+      'good.yml',
+    ]);
     expect(r.code).toBe(0);
     expect(r.stdout).toMatch(/precision\s+recall\s+F1/);
     expect(r.stdout).toMatch(/labels: best F1/);
@@ -71,7 +112,17 @@ describe('bellgate tune', () => {
   it('--write puts the suggested cutoff into the config, keeps its other lines and prints the diff', async () => {
     const loose = readFileSync(demoConfig, 'utf8').replace('  cutoff: 0.01 ', '  cutoff: 0.1  ');
     const path = dir.write('conf/bellgate.yml', loose);
-    const r = await bellgate(dir.dir, ['tune', '--history', demoHistory, '--config', 'conf/bellgate.yml', '--write', 'conf/bellgate.yml', '--target', '1']);
+    const r = await bellgate(dir.dir, [
+      'tune',
+      '--history',
+      demoHistory,
+      '--config',
+      'conf/bellgate.yml',
+      '--write',
+      'conf/bellgate.yml',
+      '--target',
+      '1',
+    ]);
     expect(r.code).toBe(0);
     const after = readFileSync(path, 'utf8');
     const suggested = /defaults\.cutoff: (\S+)/.exec(r.stdout)![1]!;
@@ -86,13 +137,29 @@ describe('bellgate tune', () => {
       at = lines.indexOf(line, at);
       expect(at, `kept ${JSON.stringify(line)}`).toBeGreaterThanOrEqual(0);
     }
-    expect(lines.some((l) => l.startsWith(`  cutoff: ${Number(suggested)} `) && l.endsWith('# flag a metric whose relative density falls below 1%'))).toBe(true);
+    expect(
+      lines.some(
+        (l) =>
+          l.startsWith(`  cutoff: ${Number(suggested)} `) &&
+          l.endsWith('# flag a metric whose relative density falls below 1%'),
+      ),
+    ).toBe(true);
     expect(r.stdout).toMatch(/^wrote conf\/bellgate\.yml:$/m);
     expect(r.stdout).toContain(`-${changed}`);
     expect(r.stdout).toMatch(new RegExp(`^\\+  cutoff: ${suggested.replace('.', '\\.')}\\s+# flag`, 'm'));
     expect(r.stdout).toMatch(/^--- conf\/bellgate\.yml\tbefore$/m);
     // A second run finds nothing to change.
-    const again = await bellgate(dir.dir, ['tune', '--history', demoHistory, '--config', 'conf/bellgate.yml', '--write', 'conf/bellgate.yml', '--target', '1']);
+    const again = await bellgate(dir.dir, [
+      'tune',
+      '--history',
+      demoHistory,
+      '--config',
+      'conf/bellgate.yml',
+      '--write',
+      'conf/bellgate.yml',
+      '--target',
+      '1',
+    ]);
     expect(again.stdout).toMatch(/already as suggested, not changed/);
   });
 
@@ -118,7 +185,12 @@ describe('bellgate tune', () => {
   it('draws a progress bar on stderr only when stderr is a terminal', async () => {
     let stderr = '';
     const io = { stdout: () => {}, stderr: (s: string) => void (stderr += s), cwd: root, env: {}, isTTY: false };
-    expect(await runCli(['tune', '--history', demoHistory, '--config', demoConfig], { ...io, stderrIsTTY: true } as typeof io)).toBe(0);
+    expect(
+      await runCli(['tune', '--history', demoHistory, '--config', demoConfig], {
+        ...io,
+        stderrIsTTY: true,
+      } as typeof io),
+    ).toBe(0);
     expect(stderr).toContain('replaying [');
     expect(stderr).toContain('10/10 metrics');
     stderr = '';
@@ -135,7 +207,11 @@ describe('bellgate tune with hostile metric names and groups', () => {
       series: 'x',
       runs: values(0).map((_, i) => ({
         id: `r${i + 1}`,
-        values: { 'evil/\u001b[31mred\u001b[0m\nname': values(100)[i], ['__proto__']: values(50)[i], 'timing/a': values(10)[i] },
+        values: {
+          'evil/\u001b[31mred\u001b[0m\nname': values(100)[i],
+          ['__proto__']: values(50)[i],
+          'timing/a': values(10)[i],
+        },
       })),
     };
     dir.write('hostile.json', JSON.stringify(history));
@@ -145,7 +221,15 @@ describe('bellgate tune with hostile metric names and groups', () => {
     expect(r.stdout).not.toContain('\u001b');
     expect(r.stdout).toMatch(/^evil\/\[31mred\[0m name\s/m);
     expect(r.stdout).toMatch(/groups \(timing\) are replayed member by member/);
-    const json = await bellgate(dir.dir, ['tune', '--history', 'hostile.json', '--config', 'groups.yml', '--format', 'json']);
+    const json = await bellgate(dir.dir, [
+      'tune',
+      '--history',
+      'hostile.json',
+      '--config',
+      'groups.yml',
+      '--format',
+      'json',
+    ]);
     const parsed = JSON.parse(json.stdout) as { metrics: { name: string }[]; groups: string[] };
     expect(parsed.metrics.map((m) => m.name)).toContain('evil/\u001b[31mred\u001b[0m\nname');
     expect(parsed.metrics.map((m) => m.name)).toContain('__proto__');

@@ -8,12 +8,18 @@ const none = () => false;
 
 describe('warmUpPlan', () => {
   it('check with a named config and a JSON metric file: all three parts', () => {
-    expect(warmUpPlan(['check', '--metrics', 'out/bench.json', '--history', 'h.json', '--config', 'b.yml'], none)).toEqual(['check', 'config', 'json']);
+    expect(
+      warmUpPlan(['check', '--metrics', 'out/bench.json', '--history', 'h.json', '--config', 'b.yml'], none),
+    ).toEqual(['check', 'config', 'json']);
   });
 
   it('record without --config: the config reader only when a default config is present', () => {
     expect(warmUpPlan(['record', '--metrics', 'a.JSON', '--history', 'h.json'], none)).toEqual(['record', 'json']);
-    expect(warmUpPlan(['record', '--metrics', 'a.json', '--history', 'h.json'], () => true)).toEqual(['record', 'config', 'json']);
+    expect(warmUpPlan(['record', '--metrics', 'a.json', '--history', 'h.json'], () => true)).toEqual([
+      'record',
+      'config',
+      'json',
+    ]);
     expect(warmUpPlan(['check', '--config=b.yml', '--metrics', 'a.csv'], none)).toEqual(['check', 'config']);
   });
 

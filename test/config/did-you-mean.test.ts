@@ -18,7 +18,19 @@ describe('editDistance', () => {
 });
 
 describe('didYouMean', () => {
-  const keys = ['cutoff', 'worse', 'tolerance', 'resolution', 'window', 'min-runs', 'transform', 'fit', 'uncertainty', 'aggregate', 'change-points'];
+  const keys = [
+    'cutoff',
+    'worse',
+    'tolerance',
+    'resolution',
+    'window',
+    'min-runs',
+    'transform',
+    'fit',
+    'uncertainty',
+    'aggregate',
+    'change-points',
+  ];
   it('finds near misses', () => {
     expect(didYouMean('cuttoff', keys)).toBe('cutoff');
     expect(didYouMean('minruns', keys)).toBe('min-runs');

@@ -28,9 +28,54 @@ function holdsContract(text: string): void {
 }
 
 const YAML_PIECES = [
-  '[', ']', '{', '}', ',', '-', ' ', '  ', '\n', ':', ': ', '&a ', '*a', '!t ', '!!str ', '#', '"', "'", '?', '|', '>',
-  '---', '...', '%YAML 1.2', '<<', 'defaults', 'metrics', 'groups', 'match', 'cutoff', 'window', 'min-runs', 'tolerance',
-  'name', 'keep', 'limits', '__proto__', '0.5', '1%', '-3', '.inf', '1e400', 'true', 'null', '~', 'latency/*', '\t', '\r\n',
+  '[',
+  ']',
+  '{',
+  '}',
+  ',',
+  '-',
+  ' ',
+  '  ',
+  '\n',
+  ':',
+  ': ',
+  '&a ',
+  '*a',
+  '!t ',
+  '!!str ',
+  '#',
+  '"',
+  "'",
+  '?',
+  '|',
+  '>',
+  '---',
+  '...',
+  '%YAML 1.2',
+  '<<',
+  'defaults',
+  'metrics',
+  'groups',
+  'match',
+  'cutoff',
+  'window',
+  'min-runs',
+  'tolerance',
+  'name',
+  'keep',
+  'limits',
+  '__proto__',
+  '0.5',
+  '1%',
+  '-3',
+  '.inf',
+  '1e400',
+  'true',
+  'null',
+  '~',
+  'latency/*',
+  '\t',
+  '\r\n',
 ];
 
 // Property-based checks (fast-check, common practice for parser robustness): no input, however
@@ -42,30 +87,62 @@ describe('parseConfig never throws anything but InputError', () => {
 
   it('on text made of YAML punctuation and config words', () => {
     fc.assert(
-      fc.property(fc.array(fc.constantFrom(...YAML_PIECES), { maxLength: 80 }).map((p) => p.join('')), holdsContract),
+      fc.property(
+        fc.array(fc.constantFrom(...YAML_PIECES), { maxLength: 80 }).map((p) => p.join('')),
+        holdsContract,
+      ),
       { numRuns: 1500 },
     );
   });
 
   it('on arbitrary data written as YAML', () => {
-    fc.assert(fc.property(fc.jsonValue({ maxDepth: 4 }), (value) => holdsContract(stringify(value))), { numRuns: 300 });
+    fc.assert(
+      fc.property(fc.jsonValue({ maxDepth: 4 }), (value) => holdsContract(stringify(value))),
+      { numRuns: 300 },
+    );
   });
 
   it('on config-shaped data with arbitrary values', () => {
-    const anyValue = fc.oneof(fc.double(), fc.integer({ min: -5, max: 600 }), fc.string({ maxLength: 6 }), fc.boolean(), fc.constant(null));
+    const anyValue = fc.oneof(
+      fc.double(),
+      fc.integer({ min: -5, max: 600 }),
+      fc.string({ maxLength: 6 }),
+      fc.boolean(),
+      fc.constant(null),
+    );
     const settings = fc.dictionary(
-      fc.constantFrom('cutoff', 'worse', 'tolerance', 'resolution', 'window', 'min-runs', 'transform', 'fit', 'uncertainty', 'aggregate', 'change-points'),
+      fc.constantFrom(
+        'cutoff',
+        'worse',
+        'tolerance',
+        'resolution',
+        'window',
+        'min-runs',
+        'transform',
+        'fit',
+        'uncertainty',
+        'aggregate',
+        'change-points',
+      ),
       anyValue,
     );
     const shape = fc.record(
       {
         defaults: settings,
-        metrics: fc.array(fc.record({ match: fc.oneof(fc.string({ maxLength: 8 }), fc.array(fc.string({ maxLength: 8 }))), worse: anyValue })),
+        metrics: fc.array(
+          fc.record({
+            match: fc.oneof(fc.string({ maxLength: 8 }), fc.array(fc.string({ maxLength: 8 }))),
+            worse: anyValue,
+          }),
+        ),
         keep: anyValue,
         family: anyValue,
       },
       { requiredKeys: [] },
     );
-    fc.assert(fc.property(shape, (value) => holdsContract(stringify(value))), { numRuns: 500 });
+    fc.assert(
+      fc.property(shape, (value) => holdsContract(stringify(value))),
+      { numRuns: 500 },
+    );
   });
 });

@@ -22,7 +22,9 @@ export function reportedProblems(fn: () => unknown, source: string): { error: In
   const error = caught as InputError;
   const first = new RegExp(`^${escape(source)}:(\\d+):(\\d+)$`).exec(error.where ?? '');
   expect(first, `where = ${error.where}`).not.toBeNull();
-  const problems: Reported[] = [{ line: Number(first![1]), col: Number(first![2]), message: error.message.split('\n')[0]! }];
+  const problems: Reported[] = [
+    { line: Number(first![1]), col: Number(first![2]), message: error.message.split('\n')[0]! },
+  ];
   const rest = new RegExp(`^  ${escape(source)}:(\\d+):(\\d+): (.*)$`);
   for (const line of error.message.split('\n').slice(1)) {
     const found = rest.exec(line);

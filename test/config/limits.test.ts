@@ -77,14 +77,21 @@ describe('parseConfig: hard limits', () => {
   });
 
   it('accepts exactly the documented nesting a config needs', () => {
-    expect(parseConfig('metrics:\n  - match:\n      - "a/*"\n      - "!a/b"\n', 'ok.yml').rules[0]!.match).toEqual(['a/*', '!a/b']);
+    expect(parseConfig('metrics:\n  - match:\n      - "a/*"\n      - "!a/b"\n', 'ok.yml').rules[0]!.match).toEqual([
+      'a/*',
+      '!a/b',
+    ]);
   });
 });
 
 describe('parseConfig: names are data, never object machinery', () => {
   it('refuses __proto__, constructor and prototype keys without touching Object.prototype', () => {
     for (const key of ['__proto__', 'constructor', 'prototype']) {
-      for (const text of [`${key}: {polluted: 1}\n`, `defaults:\n  ${key}:\n    polluted: 1\n`, `metrics:\n  - match: a\n    ${key}: {polluted: 1}\n`]) {
+      for (const text of [
+        `${key}: {polluted: 1}\n`,
+        `defaults:\n  ${key}:\n    polluted: 1\n`,
+        `metrics:\n  - match: a\n    ${key}: {polluted: 1}\n`,
+      ]) {
         const { error } = reportedProblems(() => parseConfig(text, 'p.yml'), 'p.yml');
         expect(error.message).toContain(`unknown key "${key}"`);
       }
@@ -94,7 +101,10 @@ describe('parseConfig: names are data, never object machinery', () => {
   });
 
   it('keeps metric names like __proto__ as plain strings in rules and groups', () => {
-    const config = parseConfig('metrics:\n  - match: __proto__\n    worse: lower\ngroups:\n  - name: constructor\n', 'p.yml');
+    const config = parseConfig(
+      'metrics:\n  - match: __proto__\n    worse: lower\ngroups:\n  - name: constructor\n',
+      'p.yml',
+    );
     expect(config.rules[0]!.match).toEqual(['__proto__']);
     expect(config.groups[0]).toEqual({ name: 'constructor', match: ['constructor/**'], line: 5 });
   });

@@ -43,8 +43,12 @@ describe('parseConfig: refused input, with line:column', () => {
     expect(text).toContain('worse (in defaults) must be one of higher, lower, both; got "upward"');
     expect(text).toContain('window (in defaults) must be a whole number of at least 2; got 1');
     expect(text).toContain('transform (in defaults) must be one of none, log; got "sqrt"');
-    expect(text).toContain('tolerance (in metrics rule #1) must be a number of at least 0, or a percent such as "1%"; got "-2%"');
-    expect(text).toContain('match (in metrics rule #2) must be a non-empty string, or a non-empty list of non-empty strings; got a list');
+    expect(text).toContain(
+      'tolerance (in metrics rule #1) must be a number of at least 0, or a percent such as "1%"; got "-2%"',
+    );
+    expect(text).toContain(
+      'match (in metrics rule #2) must be a non-empty string, or a non-empty list of non-empty strings; got a list',
+    );
     expect(text).toContain('groups entry #1 has no "name"');
     expect(text).toContain('family must be one of none, bonferroni, holm, fdr; got "all"');
     expect(text).toContain('keep must be a whole number of at least 1; got 0');
@@ -77,8 +81,16 @@ describe('parseConfig: refused input, with line:column', () => {
   it('checks rules the schema cannot: relative-to naming itself, a group name used twice', () => {
     const { problems } = reportedProblems(fixture('cross-field.yml'), 'cross-field.yml');
     expect(problems).toEqual([
-      { line: 3, col: 18, message: 'relative-to names the rule\'s own metric "latency/calibrate"; it would be divided by itself' },
-      { line: 7, col: 11, message: 'group name "timings" is used twice (first on line 5) (give each group its own name)' },
+      {
+        line: 3,
+        col: 18,
+        message: 'relative-to names the rule\'s own metric "latency/calibrate"; it would be divided by itself',
+      },
+      {
+        line: 7,
+        col: 11,
+        message: 'group name "timings" is used twice (first on line 5) (give each group its own name)',
+      },
     ]);
   });
 
@@ -86,7 +98,10 @@ describe('parseConfig: refused input, with line:column', () => {
     let r = reportedProblems(() => parseConfig('defaults:\n  min-runs: 100\n', 'c.yml'), 'c.yml');
     expect(r.problems[0]).toMatchObject({ line: 2, col: 3 });
     expect(r.error.message).toMatch(/window \(60\) is smaller than min-runs \(100\)/);
-    r = reportedProblems(() => parseConfig('keep: 20\nmetrics:\n  - match: "a/*"\n    min-runs: 30\n    window: 40\n', 'c.yml'), 'c.yml');
+    r = reportedProblems(
+      () => parseConfig('keep: 20\nmetrics:\n  - match: "a/*"\n    min-runs: 30\n    window: 40\n', 'c.yml'),
+      'c.yml',
+    );
     expect(r.problems).toHaveLength(1);
     expect(r.problems[0]).toMatchObject({ line: 1, col: 1 });
     expect(r.error.message).toMatch(/keep \(20\) is smaller than min-runs \(30\) in metrics rule #1/);
@@ -130,30 +145,65 @@ describe('parseConfig: refused input, with line:column', () => {
   it('refuses a bad value for every key, at the value', () => {
     // [section template, key, bad value]; the value starts right after "key: " on line 2 (or 1).
     const defaults: Array<[string, string]> = [
-      ['cutoff', '0'], ['cutoff', '1'], ['worse', 'up'], ['tolerance', '"1 percent"'], ['tolerance', '-1'],
-      ['resolution', '-0.5'], ['window', '1'], ['window', '10.5'], ['min-runs', '1'], ['transform', 'sqrt'],
-      ['fit', 'mean'], ['uncertainty', 'plugin'], ['aggregate', 'mode'], ['change-points', '1'],
+      ['cutoff', '0'],
+      ['cutoff', '1'],
+      ['worse', 'up'],
+      ['tolerance', '"1 percent"'],
+      ['tolerance', '-1'],
+      ['resolution', '-0.5'],
+      ['window', '1'],
+      ['window', '10.5'],
+      ['min-runs', '1'],
+      ['transform', 'sqrt'],
+      ['fit', 'mean'],
+      ['uncertainty', 'plugin'],
+      ['aggregate', 'mode'],
+      ['change-points', '1'],
     ];
     for (const [key, value] of defaults) {
       const { problems } = reportedProblems(() => parseConfig(`defaults:\n  ${key}: ${value}\n`, 'k.yml'), 'k.yml');
       expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 2, col: 3 + key.length + 2 });
-      const rule = reportedProblems(() => parseConfig(`metrics:\n  - match: a\n    ${key}: ${value}\n`, 'k.yml'), 'k.yml');
+      const rule = reportedProblems(
+        () => parseConfig(`metrics:\n  - match: a\n    ${key}: ${value}\n`, 'k.yml'),
+        'k.yml',
+      );
       expect(rule.problems[0], `rule ${key}: ${value}`).toMatchObject({ line: 3, col: 5 + key.length + 2 });
     }
-    const rules: Array<[string, string]> = [['ignore', '"yes"'], ['relative-to', '""'], ['relative-to', '5'], ['match', '""'], ['match', '[a, 5]']];
+    const rules: Array<[string, string]> = [
+      ['ignore', '"yes"'],
+      ['relative-to', '""'],
+      ['relative-to', '5'],
+      ['match', '""'],
+      ['match', '[a, 5]'],
+    ];
     for (const [key, value] of rules) {
       const text = `metrics:\n  - ${key}: ${value}\n${key === 'match' ? '' : '    match: x\n'}`;
       const { problems } = reportedProblems(() => parseConfig(text, 'k.yml'), 'k.yml');
       const col = 5 + key.length + 2 + (value === '[a, 5]' ? 4 : 0); // a list points at its bad item
       expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 2, col });
     }
-    const groups: Array<[string, string]> = [['name', '""'], ['name', '[a]'], ['match', '[]']];
+    const groups: Array<[string, string]> = [
+      ['name', '""'],
+      ['name', '[a]'],
+      ['match', '[]'],
+    ];
     for (const [key, value] of groups) {
       const other = key === 'name' ? 'match: x' : 'name: g';
-      const { problems } = reportedProblems(() => parseConfig(`groups:\n  - ${key}: ${value}\n    ${other}\n`, 'k.yml'), 'k.yml');
+      const { problems } = reportedProblems(
+        () => parseConfig(`groups:\n  - ${key}: ${value}\n    ${other}\n`, 'k.yml'),
+        'k.yml',
+      );
       expect(problems[0], `group ${key}: ${value}`).toMatchObject({ line: 2, col: 5 + key.length + 2 });
     }
-    const top: Array<[string, string]> = [['family', 'sidak'], ['keep', '-1'], ['keep', '2.5'], ['input-format', 'xml'], ['defaults', '5'], ['limits', '[1]'], ['groups', 'x']];
+    const top: Array<[string, string]> = [
+      ['family', 'sidak'],
+      ['keep', '-1'],
+      ['keep', '2.5'],
+      ['input-format', 'xml'],
+      ['defaults', '5'],
+      ['limits', '[1]'],
+      ['groups', 'x'],
+    ];
     for (const [key, value] of top) {
       const { problems } = reportedProblems(() => parseConfig(`${key}: ${value}\n`, 'k.yml'), 'k.yml');
       expect(problems[0], `${key}: ${value}`).toMatchObject({ line: 1, col: key.length + 3 });
@@ -167,7 +217,10 @@ describe('parseConfig: refused input, with line:column', () => {
   });
 
   it('reports every duplicate key, in mappings at any level', () => {
-    const { problems } = reportedProblems(() => parseConfig('keep: 5\nmetrics:\n  - {match: a, worse: lower, worse: both}\nkeep: 6\n', 'd.yml'), 'd.yml');
+    const { problems } = reportedProblems(
+      () => parseConfig('keep: 5\nmetrics:\n  - {match: a, worse: lower, worse: both}\nkeep: 6\n', 'd.yml'),
+      'd.yml',
+    );
     expect(problems.map((p) => [p.line, p.col])).toEqual([
       [3, 30], // the second "worse"
       [4, 1], // the second "keep"

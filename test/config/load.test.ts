@@ -12,13 +12,26 @@ describe('parseConfig: accepted keys', () => {
       const config = parseConfig(text, 'bellgate.yml');
       // Defaults from the task and DESIGN.md's "Config file" section.
       expect(config.defaults).toEqual({
-        cutoff: 0.01, worse: 'higher', tolerance: { kind: 'percent', amount: 0.01 }, resolution: 0, window: 60,
-        minRuns: 8, transform: 'none', fit: 'mle', uncertainty: 'predictive', ignore: false, aggregate: 'median',
+        cutoff: 0.01,
+        worse: 'higher',
+        tolerance: { kind: 'percent', amount: 0.01 },
+        resolution: 0,
+        window: 60,
+        minRuns: 8,
+        transform: 'none',
+        fit: 'mle',
+        uncertainty: 'predictive',
+        ignore: false,
+        aggregate: 'median',
         changePoints: true,
       });
       expect(config.family).toBe('none');
       expect(config.keep).toBe(500);
-      expect(config.limits).toEqual({ maxFileBytes: 64 * 1024 * 1024, maxLineLength: 1024 * 1024, maxMetrics: 100_000 });
+      expect(config.limits).toEqual({
+        maxFileBytes: 64 * 1024 * 1024,
+        maxLineLength: 1024 * 1024,
+        maxMetrics: 100_000,
+      });
       expect(config.rules).toEqual([]);
       expect(config.groups).toEqual([]);
       expect(config.inputFormat).toBeUndefined();
@@ -46,8 +59,17 @@ describe('parseConfig: accepted keys', () => {
       'c.yml',
     );
     expect(config.defaults).toEqual({
-      cutoff: 0.005, worse: 'both', tolerance: { kind: 'percent', amount: 0.025 }, resolution: 0.001, window: 40,
-      minRuns: 12, transform: 'log', fit: 'robust', uncertainty: 'plug-in', ignore: false, aggregate: 'min',
+      cutoff: 0.005,
+      worse: 'both',
+      tolerance: { kind: 'percent', amount: 0.025 },
+      resolution: 0.001,
+      window: 40,
+      minRuns: 12,
+      transform: 'log',
+      fit: 'robust',
+      uncertainty: 'plug-in',
+      ignore: false,
+      aggregate: 'min',
       changePoints: false,
     });
   });
@@ -61,7 +83,8 @@ describe('parseConfig: accepted keys', () => {
     expect(config.keep).toBe(250);
     expect(config.inputFormat).toBe('openmetrics');
     expect(config.limits).toEqual({ maxFileBytes: 1000, maxLineLength: 200, maxMetrics: 30 });
-    for (const family of ['none', 'bonferroni', 'holm', 'fdr']) expect(parseConfig(`family: ${family}`, 'c').family).toBe(family);
+    for (const family of ['none', 'bonferroni', 'holm', 'fdr'])
+      expect(parseConfig(`family: ${family}`, 'c').family).toBe(family);
     for (const format of ['json', 'jsonl', 'csv', 'openmetrics', 'gobench', 'junit']) {
       expect(parseConfig(`input-format: ${format}`, 'c').inputFormat).toBe(format);
     }
@@ -95,8 +118,17 @@ describe('parseConfig: accepted keys', () => {
       {
         match: ['throughput/*', '!throughput/warmup'],
         settings: {
-          worse: 'lower', cutoff: 0.02, resolution: 5, window: 30, minRuns: 9, transform: 'log', fit: 'unbiased',
-          uncertainty: 'plug-in', aggregate: 'max', changePoints: false, relativeTo: 'throughput/calibrate',
+          worse: 'lower',
+          cutoff: 0.02,
+          resolution: 5,
+          window: 30,
+          minRuns: 9,
+          transform: 'log',
+          fit: 'unbiased',
+          uncertainty: 'plug-in',
+          aggregate: 'max',
+          changePoints: false,
+          relativeTo: 'throughput/calibrate',
         },
         line: 4,
       },
@@ -105,7 +137,10 @@ describe('parseConfig: accepted keys', () => {
   });
 
   it('reads groups; a group without match holds NAME/**; null sections are empty', () => {
-    const config = parseConfig('groups:\n  - name: timings\n    match: ["latency/*", "build/*"]\n  - name: throughput\ndefaults:\nmetrics:\nlimits:\n', 'c');
+    const config = parseConfig(
+      'groups:\n  - name: timings\n    match: ["latency/*", "build/*"]\n  - name: throughput\ndefaults:\nmetrics:\nlimits:\n',
+      'c',
+    );
     expect(config.groups).toEqual([
       { name: 'timings', match: ['latency/*', 'build/*'], line: 2 },
       { name: 'throughput', match: ['throughput/**'], line: 4 },

@@ -20,20 +20,36 @@ const plainGlob = fc
   .map((cs) => cs.join(''))
   .filter((g) => !g.startsWith('./'));
 /** Names that picomatch might confuse with the glob: the same with a slash, dot or case changed. */
-const near = (g: string): string[] => [g, `${g}/`, `./${g}`, `/${g}`, g.replace(/\//g, '//'), g.toUpperCase(), g.slice(1), g.slice(0, -1), `${g}a`, `a${g}`, g.replace(/^\.\//, '')];
+const near = (g: string): string[] => [
+  g,
+  `${g}/`,
+  `./${g}`,
+  `/${g}`,
+  g.replace(/\//g, '//'),
+  g.toUpperCase(),
+  g.slice(1),
+  g.slice(0, -1),
+  `${g}a`,
+  `a${g}`,
+  g.replace(/^\.\//, ''),
+];
 
 describe('plain globs', () => {
   it('match exactly what picomatch matches, with and without ! exclusions', () => {
     fc.assert(
-      fc.property(fc.array(fc.tuple(fc.boolean(), plainGlob), { minLength: 1, maxLength: 4 }), fc.string({ maxLength: 6 }), (parts, extra) => {
-        const globs = parts.map(([negated, g]) => (negated ? `!${g}` : g));
-        const exact = exactMatcher(globs);
-        expect(exact).toBeDefined();
-        const reference = byPicomatch(globs);
-        for (const name of [...parts.flatMap(([, g]) => near(g)), extra]) {
-          expect(exact!(name), `${JSON.stringify(globs)} vs ${JSON.stringify(name)}`).toBe(reference(name));
-        }
-      }),
+      fc.property(
+        fc.array(fc.tuple(fc.boolean(), plainGlob), { minLength: 1, maxLength: 4 }),
+        fc.string({ maxLength: 6 }),
+        (parts, extra) => {
+          const globs = parts.map(([negated, g]) => (negated ? `!${g}` : g));
+          const exact = exactMatcher(globs);
+          expect(exact).toBeDefined();
+          const reference = byPicomatch(globs);
+          for (const name of [...parts.flatMap(([, g]) => near(g)), extra]) {
+            expect(exact!(name), `${JSON.stringify(globs)} vs ${JSON.stringify(name)}`).toBe(reference(name));
+          }
+        },
+      ),
       { numRuns: 2000, seed: 7 },
     );
   });

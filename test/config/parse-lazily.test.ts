@@ -31,7 +31,18 @@ async function lazy(text: string): Promise<Outcome> {
   }
 }
 
-const NAMES = ['latency/render', 'latency/calibrate', 'size/app.js', 'size/a/b.js', 'build', 'build/x', 'a', 'b', '__proto__', 'x y'];
+const NAMES = [
+  'latency/render',
+  'latency/calibrate',
+  'size/app.js',
+  'size/a/b.js',
+  'build',
+  'build/x',
+  'a',
+  'b',
+  '__proto__',
+  'x y',
+];
 
 async function expectSame(text: string): Promise<void> {
   const want = eager(text);
@@ -63,19 +74,47 @@ describe('parseConfigLazily', () => {
   });
 
   it('agrees with parseConfig on random rules and groups', async () => {
-    const glob = fc.constantFrom('latency/render', 'latency/*', '!latency/calibrate', 'size/**', 'size/app.js', 'build', '!build',
-      'a', '{a,b}', 'x y', './a', 'a\\b', '__proto__', '');
+    const glob = fc.constantFrom(
+      'latency/render',
+      'latency/*',
+      '!latency/calibrate',
+      'size/**',
+      'size/app.js',
+      'build',
+      '!build',
+      'a',
+      '{a,b}',
+      'x y',
+      './a',
+      'a\\b',
+      '__proto__',
+      '',
+    );
     const match = fc.oneof(glob, fc.array(glob, { maxLength: 3 }));
-    const rule = fc.record({ match, worse: fc.constantFrom('lower', 'higher'), 'relative-to': fc.constantFrom('a', 'build', 'latency/render') },
-      { requiredKeys: ['match'] });
+    const rule = fc.record(
+      {
+        match,
+        worse: fc.constantFrom('lower', 'higher'),
+        'relative-to': fc.constantFrom('a', 'build', 'latency/render'),
+      },
+      { requiredKeys: ['match'] },
+    );
     const group = fc.record({ name: fc.constantFrom('g', 'latency', 'size', 'h'), match }, { requiredKeys: ['name'] });
-    const shape = fc.record({ metrics: fc.array(rule, { maxLength: 4 }), groups: fc.array(group, { maxLength: 3 }) }, { requiredKeys: [] });
-    await fc.assert(fc.asyncProperty(shape, async (value) => expectSame(stringify(value))), { numRuns: 300, seed: 5 });
+    const shape = fc.record(
+      { metrics: fc.array(rule, { maxLength: 4 }), groups: fc.array(group, { maxLength: 3 }) },
+      { requiredKeys: [] },
+    );
+    await fc.assert(
+      fc.asyncProperty(shape, async (value) => expectSame(stringify(value))),
+      { numRuns: 300, seed: 5 },
+    );
   });
 
   it('needs the glob library only for globs, exclusions of globs and groups without match', () => {
     expect(needsGlobLibrary({ keep: 9 })).toBe(false);
-    expect(needsGlobLibrary({ metrics: [{ match: 'a/b' }, { match: ['!c', 'd'] }], groups: [{ name: 'g', match: 'a/b' }] })).toBe(false);
+    expect(
+      needsGlobLibrary({ metrics: [{ match: 'a/b' }, { match: ['!c', 'd'] }], groups: [{ name: 'g', match: 'a/b' }] }),
+    ).toBe(false);
     expect(needsGlobLibrary({ metrics: [{ match: 'a/*' }] })).toBe(true);
     expect(needsGlobLibrary({ metrics: [{ match: ['a', '!b/*'] }] })).toBe(true);
     expect(needsGlobLibrary({ groups: [{ name: 'g' }] })).toBe(true);

@@ -43,23 +43,42 @@ async function expectSameAsLibrary(text: string, source: string): Promise<number
 }
 
 const root = join(import.meta.dirname, '../..');
-const files = (dir: string): string[] => readdirSync(join(root, dir)).filter((f) => /\.ya?ml$/.test(f)).map((f) => join(dir, f));
+const files = (dir: string): string[] =>
+  readdirSync(join(root, dir))
+    .filter((f) => /\.ya?ml$/.test(f))
+    .map((f) => join(dir, f));
 
 describe('parseConfigLazily with the plain reader', () => {
   it('reads the bench config (`keep: 500`) and plain configs without the YAML library', async () => {
-    for (const text of ['keep: 500\n', '\uFEFFkeep: 900\n', 'family: holm\ndefaults:\n  cutoff: 0.01\n  tolerance: 2%\n', '# only comments\n']) {
+    for (const text of [
+      'keep: 500\n',
+      '\uFEFFkeep: 900\n',
+      'family: holm\ndefaults:\n  cutoff: 0.01\n  tolerance: 2%\n',
+      '# only comments\n',
+    ]) {
       expect(await expectSameAsLibrary(text, 'plain.yml'), text).toBe(0);
     }
   });
 
-  it('gives plain configs with bad values the library\'s errors, positions and fixes', async () => {
-    for (const text of ['defaults:\n  cuttoff: 0.05\n', 'keep: 0\n', 'defaults:\n  cutoff: 1.5\n  window: 1\n', 'defaults:\n  min-runs: 30\n  window: 20\n', 'family: sidak\n']) {
+  it("gives plain configs with bad values the library's errors, positions and fixes", async () => {
+    for (const text of [
+      'defaults:\n  cuttoff: 0.05\n',
+      'keep: 0\n',
+      'defaults:\n  cutoff: 1.5\n  window: 1\n',
+      'defaults:\n  min-runs: 30\n  window: 20\n',
+      'family: sidak\n',
+    ]) {
       expect(await expectSameAsLibrary(text, 'bad.yml'), text).toBe(0);
     }
   });
 
   it('loads the library for configs with lists and gives the same Config for examples and fixtures', async () => {
-    const paths = [...files('examples'), ...files('examples/demo'), ...files('test/fixtures/config'), ...files('test/fixtures/tune')];
+    const paths = [
+      ...files('examples'),
+      ...files('examples/demo'),
+      ...files('test/fixtures/config'),
+      ...files('test/fixtures/tune'),
+    ];
     expect(paths.length).toBeGreaterThanOrEqual(8);
     for (const path of paths) {
       const text = readFileSync(join(root, path), 'utf8');

@@ -37,7 +37,23 @@ const CORE_WORDS = new Set(['null', 'Null', 'NULL', 'true', 'True', 'TRUE', 'fal
 
 const KEY = fc.oneof(
   fc.stringMatching(/^[A-Za-z_][A-Za-z0-9_-]{0,11}$/).filter((k) => !CORE_WORDS.has(k)),
-  fc.constantFrom('keep', 'defaults', 'cutoff', 'tolerance', 'limits', 'family', '__proto__', 'constructor', 'yes', 'no', 'on', 'Infinity', 'NaN', 'e5', 'x'),
+  fc.constantFrom(
+    'keep',
+    'defaults',
+    'cutoff',
+    'tolerance',
+    'limits',
+    'family',
+    '__proto__',
+    'constructor',
+    'yes',
+    'no',
+    'on',
+    'Infinity',
+    'NaN',
+    'e5',
+    'x',
+  ),
 );
 
 /** Scalars in every accepted spelling (source text as written). */
@@ -47,11 +63,30 @@ const ACCEPTED_SCALAR = fc.oneof(
   fc.constantFrom('0', '-0', '0.0', '-0.0', '1e5', '1E-3', '2.5e+2', '900', '0.01', '1e308', '123456789012345'),
   fc.constantFrom('true', 'false'),
   fc.stringMatching(/^[0-9]{1,3}(\.[0-9]{1,2})?%$/),
-  fc.stringMatching(/^[A-Za-z][A-Za-z0-9_./%+-]{0,10}( {1,2}[A-Za-z0-9_./%+-]{1,5}){0,2}$/).filter((w) => !CORE_WORDS.has(w)),
-  fc.constantFrom('holm', 'log', 'json', 'higher', 'plug-in', 'yes', 'no', 'on', 'off', 'Infinity', 'NaN', 'e5', 'x.y/z'),
+  fc
+    .stringMatching(/^[A-Za-z][A-Za-z0-9_./%+-]{0,10}( {1,2}[A-Za-z0-9_./%+-]{1,5}){0,2}$/)
+    .filter((w) => !CORE_WORDS.has(w)),
+  fc.constantFrom(
+    'holm',
+    'log',
+    'json',
+    'higher',
+    'plug-in',
+    'yes',
+    'no',
+    'on',
+    'off',
+    'Infinity',
+    'NaN',
+    'e5',
+    'x.y/z',
+  ),
 );
 
-interface PlainMap { entries: Array<[string, string | PlainMap]>; indent: number }
+interface PlainMap {
+  entries: Array<[string, string | PlainMap]>;
+  indent: number;
+}
 
 const MAP: fc.Arbitrary<PlainMap> = fc.letrec<{ map: PlainMap; value: string | PlainMap }>((tie) => ({
   value: fc.oneof({ maxDepth: 4, depthIdentifier: 'plain' }, ACCEPTED_SCALAR, tie('map')),
@@ -63,7 +98,9 @@ const MAP: fc.Arbitrary<PlainMap> = fc.letrec<{ map: PlainMap; value: string | P
 
 /** Line decorations: blank and comment lines, spaces after ":", trailing comments. */
 const STYLE = fc.record({
-  between: fc.array(fc.constantFrom('', '   ', '# note', '  # indented note: with - [odd] "chars"', '#'), { maxLength: 2 }),
+  between: fc.array(fc.constantFrom('', '   ', '# note', '  # indented note: with - [odd] "chars"', '#'), {
+    maxLength: 2,
+  }),
   gap: fc.constantFrom(' ', ' ', '  ', '    '),
   trailing: fc.constantFrom('', '', ' ', '  ', ' # why', '   #', ' #: - [x]'),
 });
@@ -90,18 +127,97 @@ function write(root: PlainMap, styles: ReadonlyArray<{ between: string[]; gap: s
   return lines.join('\n') + (styles[0]!.trailing.length % 2 === 0 ? '\n' : '');
 }
 
-const PLAIN_TEXT = fc.tuple(MAP, fc.array(STYLE, { minLength: 1, maxLength: 6 })).map(([map, styles]) => write(map, styles));
+const PLAIN_TEXT = fc
+  .tuple(MAP, fc.array(STYLE, { minLength: 1, maxLength: 6 }))
+  .map(([map, styles]) => write(map, styles));
 
 // ---- near misses: one declined feature injected ----------------------------------------------
 
 const REJECTED_SCALAR = fc.constantFrom(
-  'null', 'Null', 'NULL', '~', 'True', 'TRUE', 'False', 'FALSE', '0x1F', '0o17', '.5', '1.', '+1', '1_000', '.inf', '-.inf', '.nan',
-  '012', '-012', '1e400', '12345678901234567890', '"quoted"', "'single'", '[a, b]', '{a: 1}', '&a x', '*a', '!!str x', '|', '>',
-  'a: b', 'a #b', 'a#b', 'é', 'tab\there', '2 %', '%2', '-', '- x', '?', '@x', '`x`', 'a,b', 'x:', '1:2',
+  'null',
+  'Null',
+  'NULL',
+  '~',
+  'True',
+  'TRUE',
+  'False',
+  'FALSE',
+  '0x1F',
+  '0o17',
+  '.5',
+  '1.',
+  '+1',
+  '1_000',
+  '.inf',
+  '-.inf',
+  '.nan',
+  '012',
+  '-012',
+  '1e400',
+  '12345678901234567890',
+  '"quoted"',
+  "'single'",
+  '[a, b]',
+  '{a: 1}',
+  '&a x',
+  '*a',
+  '!!str x',
+  '|',
+  '>',
+  'a: b',
+  'a #b',
+  'a#b',
+  'é',
+  'tab\there',
+  '2 %',
+  '%2',
+  '-',
+  '- x',
+  '?',
+  '@x',
+  '`x`',
+  'a,b',
+  'x:',
+  '1:2',
 );
 
-const INSERTS = ['\t', '\r', '\r\n', ' ', '  ', '-', '- ', '"', "'", '[', ']', '{', '}', ',', '&a ', '*a', '!', '|', '>', '---\n', '...\n',
-  '%YAML 1.2\n', ':', ': ', ' #', '#', '?', '\u00e9', '\u2028', '\0', 'x', '\n', '\n  ', '\n    x', '~'];
+const INSERTS = [
+  '\t',
+  '\r',
+  '\r\n',
+  ' ',
+  '  ',
+  '-',
+  '- ',
+  '"',
+  "'",
+  '[',
+  ']',
+  '{',
+  '}',
+  ',',
+  '&a ',
+  '*a',
+  '!',
+  '|',
+  '>',
+  '---\n',
+  '...\n',
+  '%YAML 1.2\n',
+  ':',
+  ': ',
+  ' #',
+  '#',
+  '?',
+  '\u00e9',
+  '\u2028',
+  '\0',
+  'x',
+  '\n',
+  '\n  ',
+  '\n    x',
+  '~',
+];
 
 const NEAR_MISS = fc.oneof(
   // A rejected scalar spelling in place of an accepted one.
@@ -127,16 +243,22 @@ const NEAR_MISS = fc.oneof(
 
 describe('readPlainYaml', () => {
   it('reads every generated plain config exactly as the yaml library does', () => {
-    fc.assert(fc.property(PLAIN_TEXT, (text) => {
-      expect(agreesWithLibrary(text), `declined:\n${text}`).toBe(true);
-    }), { numRuns: 1500, seed: 20261202 });
+    fc.assert(
+      fc.property(PLAIN_TEXT, (text) => {
+        expect(agreesWithLibrary(text), `declined:\n${text}`).toBe(true);
+      }),
+      { numRuns: 1500, seed: 20261202 },
+    );
   });
 
-  it('answers near misses only when its tree is the library\'s (declining is always allowed)', () => {
+  it("answers near misses only when its tree is the library's (declining is always allowed)", () => {
     let answered = 0;
-    fc.assert(fc.property(NEAR_MISS, (text) => {
-      if (agreesWithLibrary(text)) answered++;
-    }), { numRuns: 4000, seed: 7 });
+    fc.assert(
+      fc.property(NEAR_MISS, (text) => {
+        if (agreesWithLibrary(text)) answered++;
+      }),
+      { numRuns: 4000, seed: 7 },
+    );
     // The mutations leave some texts plain (a space in a comment); the check above covered those.
     expect(answered).toBeGreaterThan(0);
   });
@@ -156,7 +278,7 @@ describe('readPlainYaml on written examples', () => {
     }
   });
 
-  it('gives the library\'s empty tree for empty and comment-only text', () => {
+  it("gives the library's empty tree for empty and comment-only text", () => {
     for (const text of ['', '\n\n', '# only a comment\n', '  # indented\n\n#\n']) {
       expect(readPlainYaml(text)?.value, JSON.stringify(text)).toBeUndefined();
       expect(agreesWithLibrary(text)).toBe(true);
@@ -165,14 +287,52 @@ describe('readPlainYaml on written examples', () => {
 
   it('declines every feature outside the subset', () => {
     const declined = [
-      'keep:\t500\n', '\tkeep: 500\n', 'keep: 500\r\n', 'name: caf\u00e9\n', 'name: "holm"\n', "name: 'holm'\n",
-      'match: [a, b]\n', 'limits: {max-metrics: 5}\n', 'a: b, c\n', 'metrics:\n  - match: a\n', '- a\n',
-      'a: &x 1\nb: *x\n', 'a: !!str 1\n', 'a: |\n  text\n', 'a: >\n  text\n', '---\nkeep: 5\n', 'keep: 5\n...\n',
-      '%YAML 1.2\n---\nkeep: 5\n', 'keep:\n', 'defaults:\nkeep: 5\n', 'keep: 5\nkeep: 6\n', '1key: 5\n', 'a.b: 5\n',
-      '"keep": 5\n', 'keep : 5\n', 'a: b: c\n', 'a: b:c\n', 'a: b#c\n', 'a: ~\n',
-      'a: null\n', 'a: True\n', 'a: 0x1F\n', 'a: .5\n', 'a: 1_000\n', 'a: .inf\n', 'a: 012\n', 'a: 1e400\n', 'a: +1\n',
-      'true: 1\n', 'null: 1\n', 'a: 1\n  b: 2\n', 'a:\n    b: 1\n  c: 2\n', '  a: 1\n', 'a: word\n  continued\n',
-      `a: ${'x'.repeat(2000)}\n`, `k: 1\n${'# pad\n'.repeat(12_000)}`,
+      'keep:\t500\n',
+      '\tkeep: 500\n',
+      'keep: 500\r\n',
+      'name: caf\u00e9\n',
+      'name: "holm"\n',
+      "name: 'holm'\n",
+      'match: [a, b]\n',
+      'limits: {max-metrics: 5}\n',
+      'a: b, c\n',
+      'metrics:\n  - match: a\n',
+      '- a\n',
+      'a: &x 1\nb: *x\n',
+      'a: !!str 1\n',
+      'a: |\n  text\n',
+      'a: >\n  text\n',
+      '---\nkeep: 5\n',
+      'keep: 5\n...\n',
+      '%YAML 1.2\n---\nkeep: 5\n',
+      'keep:\n',
+      'defaults:\nkeep: 5\n',
+      'keep: 5\nkeep: 6\n',
+      '1key: 5\n',
+      'a.b: 5\n',
+      '"keep": 5\n',
+      'keep : 5\n',
+      'a: b: c\n',
+      'a: b:c\n',
+      'a: b#c\n',
+      'a: ~\n',
+      'a: null\n',
+      'a: True\n',
+      'a: 0x1F\n',
+      'a: .5\n',
+      'a: 1_000\n',
+      'a: .inf\n',
+      'a: 012\n',
+      'a: 1e400\n',
+      'a: +1\n',
+      'true: 1\n',
+      'null: 1\n',
+      'a: 1\n  b: 2\n',
+      'a:\n    b: 1\n  c: 2\n',
+      '  a: 1\n',
+      'a: word\n  continued\n',
+      `a: ${'x'.repeat(2000)}\n`,
+      `k: 1\n${'# pad\n'.repeat(12_000)}`,
     ];
     for (const text of declined) expect(readPlainYaml(text), JSON.stringify(text.slice(0, 40))).toBeUndefined();
   });

@@ -20,7 +20,10 @@ afterAll(() => {
 });
 
 async function refusal(promise: Promise<unknown>): Promise<InputError> {
-  const err = await promise.then(() => undefined, (e: unknown) => e);
+  const err = await promise.then(
+    () => undefined,
+    (e: unknown) => e,
+  );
   expect(err).toBeInstanceOf(InputError);
   return err as InputError;
 }
@@ -69,8 +72,12 @@ describe('readConfigFile', () => {
     expect((await refusal(readConfigFile('big.yml', { cwd }))).message).toBe(
       'config file big.yml is 1048579 bytes; the limit is 1048576 (1 MiB)',
     );
-    expect((await refusal(readConfigFile('folder.yml', { cwd }))).message).toBe('config path folder.yml is a folder, not a file');
-    expect((await refusal(readConfigFile('latin1.yml', { cwd }))).message).toBe('config file latin1.yml is not UTF-8 text');
+    expect((await refusal(readConfigFile('folder.yml', { cwd }))).message).toBe(
+      'config path folder.yml is a folder, not a file',
+    );
+    expect((await refusal(readConfigFile('latin1.yml', { cwd }))).message).toBe(
+      'config file latin1.yml is not UTF-8 text',
+    );
   });
 
   it.skipIf(process.getuid?.() === 0)('refuses an unreadable file with the reason', async () => {

@@ -1,3 +1,4 @@
+/* eslint-disable @typescript-eslint/no-explicit-any -- the schema is walked as untyped JSON */
 import { readFileSync } from 'node:fs';
 import { Ajv } from 'ajv';
 import { parse } from 'yaml';
@@ -6,7 +7,10 @@ import { defaultConfig } from '../../src/config/defaults.js';
 import { parseConfig } from '../../src/config/load.js';
 
 const root = new URL('../../', import.meta.url);
-const schema = JSON.parse(readFileSync(new URL('src/config/bellgate.schema.json', root), 'utf8')) as Record<string, any>;
+const schema = JSON.parse(readFileSync(new URL('src/config/bellgate.schema.json', root), 'utf8')) as Record<
+  string,
+  any
+>;
 
 // The outside reference here is the JSON Schema draft-07 meta-schema (json-schema.org), which ajv
 // ships and checks with validateSchema; strict mode also refuses unknown keywords.

@@ -9,7 +9,10 @@ import { schemaErrors } from '../../src/config/schema.js';
 
 const root = resolve(import.meta.dirname, '..', '..');
 const committed = join(root, 'src', 'config', 'schema-validator.generated.js');
-const schema = JSON.parse(readFileSync(join(root, 'src', 'config', 'bellgate.schema.json'), 'utf8')) as Record<string, unknown>;
+const schema = JSON.parse(readFileSync(join(root, 'src', 'config', 'bellgate.schema.json'), 'utf8')) as Record<
+  string,
+  unknown
+>;
 const fresh = mkdtempSync(join(tmpdir(), 'bellgate-validator-'));
 afterAll(() => rmSync(fresh, { recursive: true, force: true }));
 
@@ -21,7 +24,10 @@ describe('the generated config validator', () => {
       ['schema-validator.generated.js', out, committed],
       ['schema-validator.generated.d.ts', out.replace(/\.js$/, '.d.ts'), committed.replace(/\.js$/, '.d.ts')],
     ].filter(([, made, kept]) => !readFileSync(made!).equals(readFileSync(kept!)));
-    if (stale.length > 0) expect.fail(`stale: src/config/${stale.map(([name]) => name).join(', ')}; run npm run gen:config-validator and commit`);
+    if (stale.length > 0)
+      expect.fail(
+        `stale: src/config/${stale.map(([name]) => name).join(', ')}; run npm run gen:config-validator and commit`,
+      );
   });
 
   it('imports nothing, so ajv is not loaded at run time', () => {
@@ -35,12 +41,63 @@ describe('the generated config validator', () => {
   // because the config messages are worded from them.
   it('reports exactly the errors a run-time ajv compile reports, on random config-shaped data', () => {
     const reference = new Ajv({ allErrors: true, verbose: true, strict: true, inlineRefs: false }).compile(schema);
-    const keys = ['defaults', 'metrics', 'groups', 'family', 'keep', 'input-format', 'limits', 'cutoff', 'worse', 'tolerance',
-      'resolution', 'window', 'min-runs', 'transform', 'fit', 'uncertainty', 'aggregate', 'change-points', 'ignore',
-      'relative-to', 'match', 'name', 'max-file-bytes', 'max-line-length', 'max-metrics', 'cuttoff', '__proto__', 'x'];
+    const keys = [
+      'defaults',
+      'metrics',
+      'groups',
+      'family',
+      'keep',
+      'input-format',
+      'limits',
+      'cutoff',
+      'worse',
+      'tolerance',
+      'resolution',
+      'window',
+      'min-runs',
+      'transform',
+      'fit',
+      'uncertainty',
+      'aggregate',
+      'change-points',
+      'ignore',
+      'relative-to',
+      'match',
+      'name',
+      'max-file-bytes',
+      'max-line-length',
+      'max-metrics',
+      'cuttoff',
+      '__proto__',
+      'x',
+    ];
     const scalar = fc.oneof(
-      fc.constantFrom(0, 1, 2, 0.5, -1, 1e9, 60, 8, 'higher', 'lower', 'both', 'log', 'robust', 'holm', 'json', '1%', '2.5 %', '5 percent',
-        '', 'a/*', '\u{1F600}'.repeat(201), true, false, null),
+      fc.constantFrom(
+        0,
+        1,
+        2,
+        0.5,
+        -1,
+        1e9,
+        60,
+        8,
+        'higher',
+        'lower',
+        'both',
+        'log',
+        'robust',
+        'holm',
+        'json',
+        '1%',
+        '2.5 %',
+        '5 percent',
+        '',
+        'a/*',
+        '\u{1F600}'.repeat(201),
+        true,
+        false,
+        null,
+      ),
       fc.double({ noNaN: true, noDefaultInfinity: true }),
       fc.string({ maxLength: 6 }),
     );

@@ -70,13 +70,24 @@ export async function runStep(spec: StepSpec): Promise<StepResult> {
     GITHUB_SERVER_URL: 'https://github.com',
     ...spec.env,
   };
-  for (const [name, value] of Object.entries(spec.inputs)) env[`INPUT_${name.replace(/ /g, '_').toUpperCase()}`] = value;
+  for (const [name, value] of Object.entries(spec.inputs))
+    env[`INPUT_${name.replace(/ /g, '_').toUpperCase()}`] = value;
   const child = spawn(process.execPath, [BUNDLE], { cwd: spec.dir, env, stdio: ['ignore', 'pipe', 'pipe'] });
   let stdout = '';
   let stderr = '';
   child.stdout.on('data', (d: Buffer) => (stdout += d.toString()));
   child.stderr.on('data', (d: Buffer) => (stderr += d.toString()));
   const code = await new Promise<number>((r) => child.on('close', (c) => r(c ?? -1)));
-  const annotations = [...stdout.matchAll(/^::(error|warning|notice)(.*)$/gm)].map((m) => ({ kind: m[1] ?? '', text: m[2] ?? '' }));
-  return { code, stdout, stderr, outputs: parseOutputFile(await readFile(outputPath, 'utf8')), summary: await readFile(summaryPath, 'utf8'), annotations };
+  const annotations = [...stdout.matchAll(/^::(error|warning|notice)(.*)$/gm)].map((m) => ({
+    kind: m[1] ?? '',
+    text: m[2] ?? '',
+  }));
+  return {
+    code,
+    stdout,
+    stderr,
+    outputs: parseOutputFile(await readFile(outputPath, 'utf8')),
+    summary: await readFile(summaryPath, 'utf8'),
+    annotations,
+  };
 }

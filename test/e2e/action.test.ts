@@ -33,7 +33,10 @@ let results: ResultsStandin;
 let dir: string;
 
 beforeAll(async () => {
-  if (!existsSync(BUNDLE)) throw new Error(`no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`);
+  if (!existsSync(BUNDLE))
+    throw new Error(
+      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`,
+    );
   dir = await mkdtemp(join(tmpdir(), 'bellgate-e2e-action-'));
   azurite = await startAzurite(ROOT);
   rest = await startRestStandin();
@@ -48,18 +51,31 @@ afterAll(async () => {
 });
 
 async function writeMetrics(route: number, bundle: number): Promise<void> {
-  await writeFile(join(dir, 'bench.json'), JSON.stringify({ metrics: [
-    { name: 'route/match-static', value: route, unit: 'ns' },
-    { name: 'bundle/app.js.gz', value: bundle, unit: 'B' },
-  ] }));
+  await writeFile(
+    join(dir, 'bench.json'),
+    JSON.stringify({
+      metrics: [
+        { name: 'route/match-static', value: route, unit: 'ns' },
+        { name: 'bundle/app.js.gz', value: bundle, unit: 'B' },
+      ],
+    }),
+  );
 }
 
 function push(runId: number, extra: Record<string, string> = {}): Promise<StepResult> {
   const e = NOISE[runId % NOISE.length] ?? 0;
-  return writeMetrics(412 + 2 * e, 40211 + Math.round(5 * e)).then(() => step(runId, 'push', 'main', { repository, ref: 'refs/heads/main' }, extra));
+  return writeMetrics(412 + 2 * e, 40211 + Math.round(5 * e)).then(() =>
+    step(runId, 'push', 'main', { repository, ref: 'refs/heads/main' }, extra),
+  );
 }
 
-function step(runId: number, event: string, branch: string, payload: unknown, extra: Record<string, string> = {}): Promise<StepResult> {
+function step(
+  runId: number,
+  event: string,
+  branch: string,
+  payload: unknown,
+  extra: Record<string, string> = {},
+): Promise<StepResult> {
   const runtime = results.tokenFor({ workflowRunId: runId, headBranch: branch, headRepositoryId: 5, repositoryId: 5 });
   return runStep({
     dir,
@@ -85,13 +101,25 @@ function step(runId: number, event: string, branch: string, payload: unknown, ex
 
 /** The newest history artifact of the series, read back through the REST download and its redirect. */
 async function newestHistory(): Promise<History> {
-  const listed = await (await fetch(`${rest.url}/repos/acme/router/actions/artifacts?name=${NAME}&per_page=1`)).json() as { artifacts: { id: number }[] };
+  const listed = (await (
+    await fetch(`${rest.url}/repos/acme/router/actions/artifacts?name=${NAME}&per_page=1`)
+  ).json()) as { artifacts: { id: number }[] };
   const id = listed.artifacts[0]?.id;
-  const zip = new Uint8Array(await (await fetch(`${rest.url}/repos/acme/router/actions/artifacts/${id}/zip`)).arrayBuffer());
+  const zip = new Uint8Array(
+    await (await fetch(`${rest.url}/repos/acme/router/actions/artifacts/${id}/zip`)).arrayBuffer(),
+  );
   return parseHistory(readZipEntry(zip, HISTORY_FILE), `artifact #${id}`);
 }
 
-const pr = (labels: string[] = []) => ({ repository, number: 7, pull_request: { number: 7, labels: labels.map((name) => ({ name })), head: { ref: 'faster-router', repo: { full_name: 'acme/router', fork: false } } } });
+const pr = (labels: string[] = []) => ({
+  repository,
+  number: 7,
+  pull_request: {
+    number: 7,
+    labels: labels.map((name) => ({ name })),
+    head: { ref: 'faster-router', repo: { full_name: 'acme/router', fork: false } },
+  },
+});
 const explain = (r: StepResult) => `exit ${r.code}\n${r.stdout}\n${r.stderr}`;
 
 describe('the action bundle, as the runner runs it', () => {
@@ -176,7 +204,18 @@ describe('the action bundle, as the runner runs it', () => {
   it('a corrupt and a hostile artifact are refused without losing the history', async () => {
     const now = Date.now();
     const bad = (id: number, zip: Uint8Array, ms: number) =>
-      rest.state.artifacts.push({ id, name: NAME, createdAt: new Date(now + ms).toISOString(), expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 9000 + id, sizeInBytes: zip.length, zip });
+      rest.state.artifacts.push({
+        id,
+        name: NAME,
+        createdAt: new Date(now + ms).toISOString(),
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: 9000 + id,
+        sizeInBytes: zip.length,
+        zip,
+      });
     bad(90001, strToU8('this is not a zip'), 1);
     bad(90002, zipSync({ [HISTORY_FILE]: strToU8('{}'), '../../escape.sh': strToU8('echo hi') }), 2);
     const r = await push(1017);
@@ -192,7 +231,11 @@ describe('the action bundle, as the runner runs it', () => {
   it('a re-run attempt of a recorded run warns that the first attempt kept its numbers, and passes', async () => {
     const r = await runStepAttempt(1017, 2);
     expect(r.code, explain(r)).toBe(0);
-    expect(r.annotations.some((a) => a.kind === 'warning' && /earlier attempt of this workflow run already recorded it/.test(a.text))).toBe(true);
+    expect(
+      r.annotations.some(
+        (a) => a.kind === 'warning' && /earlier attempt of this workflow run already recorded it/.test(a.text),
+      ),
+    ).toBe(true);
     expect(results.calls.filter((c) => c.method === 'CreateArtifact' && c.status === 409)).toHaveLength(1);
     expect((await newestHistory()).runs).toHaveLength(17);
   });
@@ -218,8 +261,15 @@ async function runStepAttempt(runId: number, attempt: number): Promise<StepResul
     event: { repository, ref: 'refs/heads/main' },
     inputs: { metrics: 'bench.json', series: SERIES, token: TOKEN },
     env: {
-      GITHUB_REPOSITORY: 'acme/router', GITHUB_EVENT_NAME: 'push', GITHUB_RUN_ID: String(runId), GITHUB_RUN_ATTEMPT: String(attempt),
-      GITHUB_REF: 'refs/heads/main', GITHUB_API_URL: rest.url, ACTIONS_RESULTS_URL: results.url, ACTIONS_RUNTIME_TOKEN: runtime, BELLGATE_RETRY_UNIT_MS: '2',
+      GITHUB_REPOSITORY: 'acme/router',
+      GITHUB_EVENT_NAME: 'push',
+      GITHUB_RUN_ID: String(runId),
+      GITHUB_RUN_ATTEMPT: String(attempt),
+      GITHUB_REF: 'refs/heads/main',
+      GITHUB_API_URL: rest.url,
+      ACTIONS_RESULTS_URL: results.url,
+      ACTIONS_RUNTIME_TOKEN: runtime,
+      BELLGATE_RETRY_UNIT_MS: '2',
     },
   });
 }

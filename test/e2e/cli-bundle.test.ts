@@ -15,7 +15,10 @@ if (!built) console.warn(`cli-bundle e2e tests skipped: ${cli} is absent; run np
 const work = mkdtempSync(join(tmpdir(), 'bellgate-e2e-'));
 afterAll(() => rmSync(work, { recursive: true, force: true }));
 
-function run(args: string[], env: Record<string, string> = {}): { code: number | null; stdout: string; stderr: string } {
+function run(
+  args: string[],
+  env: Record<string, string> = {},
+): { code: number | null; stdout: string; stderr: string } {
   const r = spawnSync(process.execPath, [cli, ...args], {
     cwd: work,
     encoding: 'utf8',
@@ -46,7 +49,17 @@ describe.skipIf(!built)('the built CLI (dist/cli/index.js)', () => {
     const history = join(work, 'history.json');
     for (let i = 0; i < 10; i++) {
       writeFileSync(join(work, 'run.json'), JSON.stringify({ 'api/latency': 100 + (i % 3) - 1 }));
-      const rec = run(['record', '--metrics', 'run.json', '--history', history, '--id', `r${i}`, '--time', `2026-01-${String(10 + i)}T00:00:00Z`]);
+      const rec = run([
+        'record',
+        '--metrics',
+        'run.json',
+        '--history',
+        history,
+        '--id',
+        `r${i}`,
+        '--time',
+        `2026-01-${String(10 + i)}T00:00:00Z`,
+      ]);
       expect(rec.code, rec.stderr).toBe(0);
     }
     writeFileSync(join(work, 'slow.json'), JSON.stringify({ 'api/latency': 140 }));

@@ -33,7 +33,9 @@ describe('dist/ is up to date with src/', () => {
     const committed = new Set(files(dist));
     expect(built.length, 'the build wrote no files').toBeGreaterThan(0);
     const missing = built.filter((f) => !committed.has(f));
-    const stale = built.filter((f) => committed.has(f) && !readFileSync(join(fresh, f)).equals(readFileSync(join(dist, f))));
+    const stale = built.filter(
+      (f) => committed.has(f) && !readFileSync(join(fresh, f)).equals(readFileSync(join(dist, f))),
+    );
     const extra = [...committed].filter((f) => !built.includes(f));
     const problems = [
       ...stale.map((f) => `stale: dist/${f}`),

@@ -28,7 +28,10 @@ let git: GitDataStandin;
 let proxy: FaultProxy;
 let dir: string;
 beforeAll(async () => {
-  if (!existsSync(BUNDLE)) throw new Error(`no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`);
+  if (!existsSync(BUNDLE))
+    throw new Error(
+      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`,
+    );
   dir = await mkdtemp(join(tmpdir(), 'bellgate-e2e-faults-'));
   git = await startGitDataStandin();
   proxy = await startFaultProxy({ target: git.url, rate: 0.15, seed: 808, slowMs: 3000, retryAfter: 1 });
@@ -40,46 +43,55 @@ afterAll(async () => {
 });
 
 describe('the action bundle with store: branch through a faulty API', () => {
-  it.skipIf(!bundleHasBranchStore)('8 pushes: each records or warns, exit 0, no run lost, token never printed', async () => {
-    const recorded: string[] = [];
-    let warned = 0;
-    for (let runId = 700; runId < 708; runId++) {
-      await writeFile(join(dir, 'bench.json'), JSON.stringify({ metrics: [{ name: 'route/match-static', value: 412 + (runId % 3), unit: 'ns' }] }));
-      const before = ids(onBranch(git, SERIES));
-      const result = await runStep({
-        dir,
-        tag: `${runId}`,
-        event: { repository, ref: 'refs/heads/main' },
-        inputs: { metrics: 'bench.json', series: SERIES, token: TOKEN, store: 'branch' },
-        env: {
-          GITHUB_REPOSITORY: 'acme/router',
-          GITHUB_EVENT_NAME: 'push',
-          GITHUB_RUN_ID: String(runId),
-          GITHUB_RUN_ATTEMPT: '1',
-          GITHUB_SHA: String(runId).padStart(40, 'c'),
-          GITHUB_REF: 'refs/heads/main',
-          GITHUB_WORKFLOW: 'bench',
-          GITHUB_JOB: 'linux',
-          GITHUB_API_URL: proxy.url,
-          // Millisecond backoff instead of seconds (the runner never sets this).
-          BELLGATE_RETRY_UNIT_MS: '1',
-        },
-      });
-      expect(result.code, result.stdout + result.stderr).toBe(0);
-      // `::add-mask::` hands the token to the runner, which masks it everywhere after.
-      expect(result.stdout.replace(/^::add-mask::.*$/m, '') + result.stderr).not.toContain(TOKEN);
-      expect(result.stderr).not.toMatch(/\n\s+at /); // never a stack trace
-      const after = ids(onBranch(git, SERIES));
-      expect(before.every((id) => after.includes(id))).toBe(true);
-      if (after.includes(`${runId}-1`)) recorded.push(`${runId}-1`);
-      else {
-        warned += 1;
-        expect(result.annotations.some((a) => a.kind === 'warning' && /history/.test(a.text))).toBe(true);
+  it.skipIf(!bundleHasBranchStore)(
+    '8 pushes: each records or warns, exit 0, no run lost, token never printed',
+    async () => {
+      const recorded: string[] = [];
+      let warned = 0;
+      for (let runId = 700; runId < 708; runId++) {
+        await writeFile(
+          join(dir, 'bench.json'),
+          JSON.stringify({ metrics: [{ name: 'route/match-static', value: 412 + (runId % 3), unit: 'ns' }] }),
+        );
+        const before = ids(onBranch(git, SERIES));
+        const result = await runStep({
+          dir,
+          tag: `${runId}`,
+          event: { repository, ref: 'refs/heads/main' },
+          inputs: { metrics: 'bench.json', series: SERIES, token: TOKEN, store: 'branch' },
+          env: {
+            GITHUB_REPOSITORY: 'acme/router',
+            GITHUB_EVENT_NAME: 'push',
+            GITHUB_RUN_ID: String(runId),
+            GITHUB_RUN_ATTEMPT: '1',
+            GITHUB_SHA: String(runId).padStart(40, 'c'),
+            GITHUB_REF: 'refs/heads/main',
+            GITHUB_WORKFLOW: 'bench',
+            GITHUB_JOB: 'linux',
+            GITHUB_API_URL: proxy.url,
+            // Millisecond backoff instead of seconds (the runner never sets this).
+            BELLGATE_RETRY_UNIT_MS: '1',
+          },
+        });
+        expect(result.code, result.stdout + result.stderr).toBe(0);
+        // `::add-mask::` hands the token to the runner, which masks it everywhere after.
+        expect(result.stdout.replace(/^::add-mask::.*$/m, '') + result.stderr).not.toContain(TOKEN);
+        expect(result.stderr).not.toMatch(/\n\s+at /); // never a stack trace
+        const after = ids(onBranch(git, SERIES));
+        expect(before.every((id) => after.includes(id))).toBe(true);
+        if (after.includes(`${runId}-1`)) recorded.push(`${runId}-1`);
+        else {
+          warned += 1;
+          expect(result.annotations.some((a) => a.kind === 'warning' && /history/.test(a.text))).toBe(true);
+        }
       }
-    }
-    const final = ids(onBranch(git, SERIES));
-    expect(recorded.every((id) => final.includes(id))).toBe(true);
-    expect(recorded.length).toBeGreaterThan(0);
-    console.log(`bundle faults: 8 pushes, ${recorded.length} recorded, ${warned} warned; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected`);
-  }, 180_000);
+      const final = ids(onBranch(git, SERIES));
+      expect(recorded.every((id) => final.includes(id))).toBe(true);
+      expect(recorded.length).toBeGreaterThan(0);
+      console.log(
+        `bundle faults: 8 pushes, ${recorded.length} recorded, ${warned} warned; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected`,
+      );
+    },
+    180_000,
+  );
 });

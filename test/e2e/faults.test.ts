@@ -78,7 +78,9 @@ describe('branch store with faults', () => {
     }
     await new Promise((r) => setTimeout(r, SLOW_MS * 2));
     t.lost += missing(recorded, ids(onBranch(git, series)));
-    console.log(`branch faults, one writer: ${JSON.stringify(t)}; ${proxy.totalInjected() - injectedBefore} faults injected; failures: ${JSON.stringify(Object.fromEntries(reasons))}`);
+    console.log(
+      `branch faults, one writer: ${JSON.stringify(t)}; ${proxy.totalInjected() - injectedBefore} faults injected; failures: ${JSON.stringify(Object.fromEntries(reasons))}`,
+    );
     expect(t.lost).toBe(0);
     expect(proxy.totalInjected() - injectedBefore).toBeGreaterThan(20);
   }, 180_000);
@@ -92,7 +94,12 @@ describe('branch store with faults', () => {
       for (let i = 0; i < 30; i++) {
         const id = `${i}-${w}`;
         const before = ids(onBranch(git, series));
-        const store = branchStore(proxy.url, series, { attempts: 5, random }, { timeoutMs: TIMEOUT_MS, retries: 2, random });
+        const store = branchStore(
+          proxy.url,
+          series,
+          { attempts: 5, random },
+          { timeoutMs: TIMEOUT_MS, retries: 2, random },
+        );
         t.tried += 1;
         let ok = false;
         try {
@@ -122,11 +129,14 @@ describe('branch store with faults', () => {
     const final = ids(onBranch(git, series));
     t.lost += missing(recorded, final);
     expect(new Set(final).size).toBe(final.length);
-    console.log(`branch faults: ${JSON.stringify(t)}; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected ${JSON.stringify(Object.fromEntries(proxy.injected))}`);
+    console.log(
+      `branch faults: ${JSON.stringify(t)}; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected ${JSON.stringify(Object.fromEntries(proxy.injected))}`,
+    );
     expect(t.tried).toBe(90);
     expect(t.lost).toBe(0);
     expect(proxy.totalInjected()).toBeGreaterThan(50);
-    for (const kind of ['500', '502', '429', 'drop-before', 'drop-after', 'truncate', 'slow']) expect(proxy.injected.get(kind as never) ?? 0).toBeGreaterThan(0);
+    for (const kind of ['500', '502', '429', 'drop-before', 'drop-after', 'truncate', 'slow'])
+      expect(proxy.injected.get(kind as never) ?? 0).toBeGreaterThan(0);
     expect(t.recorded).toBeGreaterThan(0);
   }, 180_000);
 });
@@ -163,11 +173,28 @@ describe('artifact store with faults', () => {
     };
     function register(artifact: string, zip: Uint8Array): void {
       clock += 60_000;
-      rest.state.artifacts.push({ id: rest.state.nextId++, name: artifact, createdAt: new Date(clock).toISOString(), expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: run++, sizeInBytes: zip.length, zip });
+      rest.state.artifacts.push({
+        id: rest.state.nextId++,
+        name: artifact,
+        createdAt: new Date(clock).toISOString(),
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: run++,
+        sizeInBytes: zip.length,
+        zip,
+      });
     }
     const storeVia = (url: string) =>
       createArtifactStore({
-        api: createOctokitApi({ token: 'ghs_standin', baseUrl: url, owner: 'acme', repo: 'router', retry: { retries: 2, unitMs: 1 } }),
+        api: createOctokitApi({
+          token: 'ghs_standin',
+          baseUrl: url,
+          owner: 'acme',
+          repo: 'router',
+          retry: { retries: 2, unitMs: 1 },
+        }),
         upload,
         history: 'bellgate-history',
         series,
@@ -211,7 +238,9 @@ describe('artifact store with faults', () => {
     const final = ids(await storeVia(rest.url).load());
     t.lost += missing(recorded, final);
     const artifacts = rest.state.artifacts.filter((a) => a.name === name).length;
-    console.log(`artifact faults: ${JSON.stringify(t)}; ${artifacts} artifacts, ${incompleteLoads} loads that missed runs, ${warnings.length} warnings; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected ${JSON.stringify(Object.fromEntries(proxy.injected))}`);
+    console.log(
+      `artifact faults: ${JSON.stringify(t)}; ${artifacts} artifacts, ${incompleteLoads} loads that missed runs, ${warnings.length} warnings; ${proxy.requests} API calls, ${proxy.totalInjected()} faults injected ${JSON.stringify(Object.fromEntries(proxy.injected))}`,
+    );
     expect(t.lost).toBe(0);
     expect(t.failed).toBeGreaterThan(0);
     expect(proxy.totalInjected()).toBeGreaterThan(0);

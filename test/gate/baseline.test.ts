@@ -28,7 +28,9 @@ describe('selectBaseline', () => {
     expectClose(selectBaseline(history, 'm', settingsWith({ transform: 'log' })).values[0]!, 1, 1e-15);
     const bad = historyOf({ 'time/x': [3, -1, 4] });
     expect(() => selectBaseline(bad, 'time/x', settingsWith({ transform: 'log' }))).toThrow(InputError);
-    expect(() => selectBaseline(bad, 'time/x', settingsWith({ transform: 'log' }))).toThrow(/run-2 has value -1 for time\/x/);
+    expect(() => selectBaseline(bad, 'time/x', settingsWith({ transform: 'log' }))).toThrow(
+      /run-2 has value -1 for time\/x/,
+    );
   });
 
   it('change points: uses only the runs since the last level change once they are min-runs', () => {
@@ -40,7 +42,11 @@ describe('selectBaseline', () => {
     expect(b.values).toHaveLength(12);
     expect(b.window?.values).toHaveLength(52);
     // fewer than min-runs since the change: the whole window stays
-    const young = selectBaseline(historyOf({ m: [...level(100, 40), ...level(110, 5)] }), 'm', settingsWith({ minRuns: 8 }));
+    const young = selectBaseline(
+      historyOf({ m: [...level(100, 40), ...level(110, 5)] }),
+      'm',
+      settingsWith({ minRuns: 8 }),
+    );
     expect(young.since).toBeUndefined();
     expect(young.values).toHaveLength(45);
     // change-points: false turns it off
@@ -71,7 +77,9 @@ describe('selectBaseline', () => {
           expect(logged.runIds).toEqual(got.runIds);
           expect(logged.available).toBe(got.available);
         } else {
-          expect(() => selectBaseline(history, 'm', logSettings)).toThrow(`history run ${firstBad.id} has value ${firstBad.x} for m`);
+          expect(() => selectBaseline(history, 'm', logSettings)).toThrow(
+            `history run ${firstBad.id} has value ${firstBad.x} for m`,
+          );
         }
       }),
       { numRuns: 300, seed: 9117 },
@@ -82,8 +90,16 @@ describe('selectBaseline', () => {
     // Reference: pair every run, keep those with a finite value and a finite non-zero reference,
     // divide, keep the last `window`; `available` counts the runs holding the metric at all.
     // Whole numbers and halves (no subnormal reference whose ratio would overflow), zeros and gaps.
-    const cell = fc.oneof(fc.integer({ min: -400, max: 400 }).map((k) => k / 2), fc.constant(Number.NaN), fc.constant(0));
-    const columns = fc.integer({ min: 0, max: 80 }).chain((n) => fc.tuple(fc.array(cell, { minLength: n, maxLength: n }), fc.array(cell, { minLength: n, maxLength: n })));
+    const cell = fc.oneof(
+      fc.integer({ min: -400, max: 400 }).map((k) => k / 2),
+      fc.constant(Number.NaN),
+      fc.constant(0),
+    );
+    const columns = fc
+      .integer({ min: 0, max: 80 })
+      .chain((n) =>
+        fc.tuple(fc.array(cell, { minLength: n, maxLength: n }), fc.array(cell, { minLength: n, maxLength: n })),
+      );
     fc.assert(
       fc.property(columns, fc.integer({ min: 2, max: 90 }), ([m, calib], window) => {
         const history = historyOf({ m, calib });

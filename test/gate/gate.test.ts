@@ -57,12 +57,16 @@ describe('runGate: statuses and verdicts', () => {
     const windowed = gate('defaults:\n  window: 3\n  min-runs: 3\n', { m: QUIET }, { m: 100 }).metrics[0]!;
     expect(windowed.baseline!.n).toBe(3);
     expectClose(windowed.baseline!.mean, 301 / 3, 1e-12);
-    expect(gate('metrics:\n  - match: "*"\n    worse: lower\n', { m: QUIET }, { m: 130 }).metrics[0]!.status).toBe('improved');
+    expect(gate('metrics:\n  - match: "*"\n    worse: lower\n', { m: QUIET }, { m: 130 }).metrics[0]!.status).toBe(
+      'improved',
+    );
     expect(gate('defaults:\n  tolerance: 40\n', { m: QUIET }, { m: 130 }).metrics[0]!.status).toBe('ok');
     expect(gate('defaults:\n  tolerance: 40%\n', { m: QUIET }, { m: 130 }).metrics[0]!.status).toBe('ok');
     expect(gate('defaults:\n  tolerance: 20%\n', { m: QUIET }, { m: 130 }).metrics[0]!.status).toBe('regressed');
     // 103: t = 3 / (0.8165 sqrt(1.1)) = 3.503 with 9 dof -> r = (1 + 3.503^2/9)^-5 = 2.364^-5 = 0.0136
-    expect(gate('defaults:\n  cutoff: 0.02\n  tolerance: 0\n', { m: QUIET }, { m: 103 }).metrics[0]!.status).toBe('regressed');
+    expect(gate('defaults:\n  cutoff: 0.02\n  tolerance: 0\n', { m: QUIET }, { m: 103 }).metrics[0]!.status).toBe(
+      'regressed',
+    );
     expect(gate('defaults:\n  cutoff: 0.01\n  tolerance: 0\n', { m: QUIET }, { m: 103 }).metrics[0]!.status).toBe('ok');
   });
 
@@ -107,7 +111,10 @@ describe('runGate: statuses and verdicts', () => {
   });
 
   it('change-points: a merged step stops being flagged once min-runs runs hold the new level', () => {
-    const step = (k: number) => [...Array.from({ length: 40 }, (_, i) => QUIET[i % 10]!), ...Array.from({ length: k }, (_, i) => 10 + QUIET[i % 10]!)];
+    const step = (k: number) => [
+      ...Array.from({ length: 40 }, (_, i) => QUIET[i % 10]!),
+      ...Array.from({ length: k }, (_, i) => 10 + QUIET[i % 10]!),
+    ];
     const at = (k: number, yaml = '') => gate(yaml, { m: step(k) }, { m: 110 }).metrics[0]!;
     expect(at(2).status).toBe('regressed');
     expect(at(8).status).toBe('ok');
@@ -124,7 +131,10 @@ describe('runGate: statuses and verdicts', () => {
 
   it('names like __proto__ are ordinary metrics', () => {
     // JSON.parse makes "__proto__" an own key, as a metric file would
-    const columns = JSON.parse(`{"__proto__": [${QUIET.join(',')}], "constructor": [${QUIET.join(',')}]}`) as Record<string, number[]>;
+    const columns = JSON.parse(`{"__proto__": [${QUIET.join(',')}], "constructor": [${QUIET.join(',')}]}`) as Record<
+      string,
+      number[]
+    >;
     const report = gate('', columns, JSON.parse('{"__proto__": 130}') as Record<string, number>);
     expect(report.metrics.map((m) => [m.name, m.status])).toEqual([
       ['__proto__', 'regressed'],

@@ -12,7 +12,12 @@ beforeAll(() => prepareGate(configFrom(GROUP)));
 
 function judge(series: TimingSeries, window: number, factors: Map<string, number>, yaml: string): Report {
   const config = configFrom(`defaults:\n  transform: log\n  window: ${window}\n${yaml}`);
-  return runGate({ config, history: historySlice(series, 0, window), run: runAt(series, window, factors), series: 'main' });
+  return runGate({
+    config,
+    history: historySlice(series, 0, window),
+    run: runAt(series, window, factors),
+    series: 'main',
+  });
 }
 
 /** Factors that move run k's runner speed to exp(log factor) while keeping each metric's own noise. */
@@ -25,7 +30,7 @@ function meanSd(values: readonly number[]): { mean: number; sd: number } {
   return { mean, sd: Math.sqrt(values.reduce((s, x) => s + (x - mean) ** 2, 0) / (values.length - 1)) };
 }
 
-describe('groups (issue 6): the common move and each member\'s own move', () => {
+describe("groups (issue 6): the common move and each member's own move", () => {
   // 50 invented benchmarks; runner-speed sd 3.5% shared by all, own noise 1.8% each (seeded).
   const shared = timingSeries(11, 50, 101, 0.035, 0.018);
 
@@ -50,7 +55,7 @@ describe('groups (issue 6): the common move and each member\'s own move', () => 
     expect(grouped.metrics.some((m) => (m.relativeDensity ?? 1) < 0.01)).toBe(true);
   });
 
-  it('a slowdown of everything beyond the runners\' history is caught by the common move', () => {
+  it("a slowdown of everything beyond the runners' history is caught by the common move", () => {
     const runners = meanSd(shared.runner.slice(0, 100));
     const grouped = judge(shared, 100, runnerAt(shared, 100, runners.mean + 6 * runners.sd), GROUP);
     expect(grouped.groups[0]!.common.status).toBe('regressed');
@@ -146,11 +151,18 @@ describe('groups: calibration and family control', () => {
     // 10 members, runner sd 3%, own noise 1.5%; cutoff 0.2 stands for level 0.0728, large enough
     // to count in 300 runs. The group is one test at that level: its three checks share it.
     const series = timingSeries(31, 10, 340, 0.03, 0.015);
-    const config = configFrom(`defaults:\n  transform: log\n  window: 40\n  cutoff: 0.2\n  change-points: false\n${GROUP}`);
+    const config = configFrom(
+      `defaults:\n  transform: log\n  window: 40\n  cutoff: 0.2\n  change-points: false\n${GROUP}`,
+    );
     let fired = 0;
     let level = 0;
     for (let k = 40; k < 340; k++) {
-      const report = runGate({ config, history: historySlice(series, k - 40, k), run: runAt(series, k), series: 'main' });
+      const report = runGate({
+        config,
+        history: historySlice(series, k - 40, k),
+        run: runAt(series, k),
+        series: 'main',
+      });
       const group = report.groups[0]!;
       level = group.level;
       if (group.tail < group.level) fired++;

@@ -77,7 +77,9 @@ describe('judgeMetric: statuses and keys', () => {
   it('improved on the better side, never regressed; worse: lower flips the sides; both has no better side', () => {
     const plug = { uncertainty: 'plug-in' as const };
     expect(judgeMetric('m', settingsWith(plug), BASELINE, 7.5).status).toBe('improved');
-    expect(judgeMetric('m', settingsWith(plug), BASELINE, 7.5).reason).toMatch(/below the baseline mean \(the better side\)/);
+    expect(judgeMetric('m', settingsWith(plug), BASELINE, 7.5).reason).toMatch(
+      /below the baseline mean \(the better side\)/,
+    );
     expect(judgeMetric('m', settingsWith({ ...plug, worse: 'lower' }), BASELINE, 7.5).status).toBe('regressed');
     expect(judgeMetric('m', settingsWith({ ...plug, worse: 'lower' }), BASELINE, 12.5).status).toBe('improved');
     expect(judgeMetric('m', settingsWith({ ...plug, worse: 'both' }), BASELINE, 7.5).status).toBe('regressed');
@@ -87,7 +89,9 @@ describe('judgeMetric: statuses and keys', () => {
   it('cutoff: the same value is ok at a stricter cutoff', () => {
     // plug-in r = exp(-6.25) = 1.93e-3: below 0.01, above 0.001
     expect(judgeMetric('m', settingsWith({ uncertainty: 'plug-in', cutoff: 0.001 }), BASELINE, 12.5).status).toBe('ok');
-    expect(judgeMetric('m', settingsWith({ uncertainty: 'plug-in', cutoff: 0.01 }), BASELINE, 12.5).status).toBe('regressed');
+    expect(judgeMetric('m', settingsWith({ uncertainty: 'plug-in', cutoff: 0.01 }), BASELINE, 12.5).status).toBe(
+      'regressed',
+    );
   });
 
   it('tolerance, absolute and percent of the baseline mean: an improbable but small move is ok', () => {
@@ -95,10 +99,16 @@ describe('judgeMetric: statuses and keys', () => {
     const abs = judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'absolute', amount: 3 } }), BASELINE, 12.5);
     expect(abs.status).toBe('ok');
     expect(abs.reason).toMatch(/but the change 25% is within the tolerance 3$/);
-    expect(judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'absolute', amount: 2 } }), BASELINE, 12.5).status).toBe('regressed');
+    expect(
+      judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'absolute', amount: 2 } }), BASELINE, 12.5).status,
+    ).toBe('regressed');
     // 30% of mean 10 = 3 > 2.5; 20% = 2 < 2.5
-    expect(judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'percent', amount: 0.3 } }), BASELINE, 12.5).status).toBe('ok');
-    expect(judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'percent', amount: 0.2 } }), BASELINE, 12.5).status).toBe('regressed');
+    expect(
+      judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'percent', amount: 0.3 } }), BASELINE, 12.5).status,
+    ).toBe('ok');
+    expect(
+      judgeMetric('m', settingsWith({ ...plug, tolerance: { kind: 'percent', amount: 0.2 } }), BASELINE, 12.5).status,
+    ).toBe('regressed');
   });
 
   it('fit: unbiased divides by n - 1; fit: robust uses median and 1.4826 MAD', () => {
@@ -124,11 +134,18 @@ describe('judgeMetric: statuses and keys', () => {
     expect(moved.z).toBeUndefined();
     expect(moved.reason).toMatch(/constant baseline 100 \(sd 0; set `resolution`/);
     // resolution 2: sd = s = 2; plug-in z = 1 -> r = exp(-1/2) = 0.607
-    const floored = judgeMetric('size/app', settingsWith({ resolution: 2, uncertainty: 'plug-in', tolerance: { kind: 'absolute', amount: 0 } }), constant, 102);
+    const floored = judgeMetric(
+      'size/app',
+      settingsWith({ resolution: 2, uncertainty: 'plug-in', tolerance: { kind: 'absolute', amount: 0 } }),
+      constant,
+      102,
+    );
     expectClose(floored.baseline!.sd, 2, 1e-15);
     expectClose(floored.relativeDensity!, Math.exp(-0.5), 1e-12);
     expect(floored.status).toBe('ok');
-    expect(judgeMetric('size/app', settingsWith({ resolution: 2, uncertainty: 'plug-in' }), constant, 110).status).toBe('regressed');
+    expect(judgeMetric('size/app', settingsWith({ resolution: 2, uncertainty: 'plug-in' }), constant, 110).status).toBe(
+      'regressed',
+    );
   });
 
   it('transform: log fits the logs and reports the log scale; change stays on the own scale', () => {
@@ -146,7 +163,12 @@ describe('judgeMetric: statuses and keys', () => {
 
   it('transform: log turns the resolution into resolution / centre on the log scale', () => {
     // constant 100 with resolution 1: floor ln-scale 1/100 = 0.01; value 103 -> z = ln(1.03) / 0.01 = 2.956
-    const r = judgeMetric('time/x', settingsWith({ transform: 'log', resolution: 1 }), Array(10).fill(Math.log(100)), 103);
+    const r = judgeMetric(
+      'time/x',
+      settingsWith({ transform: 'log', resolution: 1 }),
+      Array(10).fill(Math.log(100)),
+      103,
+    );
     expectClose(r.baseline!.sd, 0.01, 1e-12);
     expectClose(r.z!, Math.log(1.03) / 0.01, 1e-9);
   });

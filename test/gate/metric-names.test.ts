@@ -7,7 +7,18 @@ import { historyOf, runOf } from './helpers/scenario.js';
 // property names a plain object would treat specially.
 const name = fc.oneof(
   fc.string({ minLength: 1, maxLength: 8, unit: 'binary' }),
-  fc.constantFrom('__proto__', 'constructor', 'toString', 'Z/upper', 'a/lower', 'é/accent', '\u{1F680}/rocket', '\uFF21/wide-A', 'a/10', 'a/9'),
+  fc.constantFrom(
+    '__proto__',
+    'constructor',
+    'toString',
+    'Z/upper',
+    'a/lower',
+    'é/accent',
+    '\u{1F680}/rocket',
+    '\uFF21/wide-A',
+    'a/10',
+    'a/9',
+  ),
 );
 
 describe('metricNames', () => {

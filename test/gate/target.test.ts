@@ -45,7 +45,9 @@ describe('the DESIGN target on realistic CI noise (bounded: 300 clean + 300 regr
 
   it('plain per-metric Gaussian at cutoff 0.01 catches only a minority of +10% regressions', () => {
     const plain = measure(SERIES, `defaults:\n  transform: log\n  window: ${WINDOW}\n`);
-    console.info(`plain cutoff 0.01: ${plain.falseAlarms.toFixed(2)} false alarms per 100, recall ${(100 * plain.recall).toFixed(1)}%`);
+    console.info(
+      `plain cutoff 0.01: ${plain.falseAlarms.toFixed(2)} false alarms per 100, recall ${(100 * plain.recall).toFixed(1)}%`,
+    );
     expect(plain.recall).toBeLessThan(0.5);
   }, 900_000);
 
@@ -57,7 +59,9 @@ describe('the DESIGN target on realistic CI noise (bounded: 300 clean + 300 regr
       SERIES,
       `defaults:\n  transform: log\n  window: ${WINDOW}\n  cutoff: 0.04\ngroups:\n  - name: timings\n    match: "time/*"\n`,
     );
-    console.info(`group cutoff 0.04: ${grouped.falseAlarms.toFixed(2)} false alarms per 100, recall ${(100 * grouped.recall).toFixed(1)}%`);
+    console.info(
+      `group cutoff 0.04: ${grouped.falseAlarms.toFixed(2)} false alarms per 100, recall ${(100 * grouped.recall).toFixed(1)}%`,
+    );
     expect(grouped.falseAlarms).toBeLessThanOrEqual(1);
     expect(grouped.recall).toBeGreaterThanOrEqual(0.85);
   }, 900_000);

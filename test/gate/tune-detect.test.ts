@@ -19,7 +19,10 @@ function syntheticHistory(seed: number, shift: (run: number, metric: number) => 
   const normal = seededNormal(seed);
   const columns: Record<string, number[]> = {};
   for (let j = 0; j < METRICS; j++) {
-    columns[`bench/m${String(j).padStart(2, '0')}`] = Array.from({ length: RUNS }, (_, i) => 1000 + 10 * normal() + shift(i, j));
+    columns[`bench/m${String(j).padStart(2, '0')}`] = Array.from(
+      { length: RUNS },
+      (_, i) => 1000 + 10 * normal() + shift(i, j),
+    );
   }
   return historyOf(columns);
 }

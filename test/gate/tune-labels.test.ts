@@ -16,7 +16,10 @@ function inputError(f: () => unknown): InputError {
 
 describe('labels file', () => {
   it('reads YAML and JSON, runs as strings or numbers, with positions', () => {
-    const yaml = parseLabels('# known regressions\nregressions:\n  - run: "12-1"\n  - run: 13\n    metric: latency/p95\n', 'labels.yml');
+    const yaml = parseLabels(
+      '# known regressions\nregressions:\n  - run: "12-1"\n  - run: 13\n    metric: latency/p95\n',
+      'labels.yml',
+    );
     expect(yaml).toEqual([
       { run: '12-1', where: 'labels.yml:3:5' },
       { run: '13', metric: 'latency/p95', where: 'labels.yml:4:5' },

@@ -7,7 +7,11 @@ import { buildTruth } from '../../src/gate/tune/truth.js';
 import { expectClose } from '../helpers/close.js';
 import { historyOf } from './helpers/scenario.js';
 
-function metric(name: string, r: number[], options: { tail?: number[]; side?: Side[]; runs?: number[] } = {}): MetricReplay {
+function metric(
+  name: string,
+  r: number[],
+  options: { tail?: number[]; side?: Side[]; runs?: number[] } = {},
+): MetricReplay {
   return {
     name,
     method: 'incremental',
@@ -51,7 +55,13 @@ describe('precision, recall and F1 against labels', () => {
   it('a metric label covers only that metric; a run label covers every metric of the run', () => {
     const two: Replay = { runCount: 3, metrics: [metric('a', [0.001, 0.5]), metric('b', [0.001, 0.001])] };
     const h = historyOf({ a: [1, 1, 1], b: [1, 1, 1] });
-    const labelled = buildTruth([{ run: 'run-2', metric: 'a', where: '' }, { run: 'run-3', where: '' }], h);
+    const labelled = buildTruth(
+      [
+        { run: 'run-2', metric: 'a', where: '' },
+        { run: 'run-3', where: '' },
+      ],
+      h,
+    );
     const [row] = scoreLadder(two, [0.01], 'none', labelled);
     // Alarms: a@run1 (labelled), b@run1 (not), b@run2 (run label) -> 2 true, 1 false; both labels caught.
     expect(row!.labelled).toEqual(labelScore(2, 2, 2, 1));
@@ -71,7 +81,8 @@ describe('family settings on the ladder', () => {
   };
 
   it('counts alarms per family as computed by hand', () => {
-    const count = (family: 'none' | 'bonferroni' | 'holm' | 'fdr'): number => scoreLadder(replay, [0.1], family)[0]!.falseAlarms;
+    const count = (family: 'none' | 'bonferroni' | 'holm' | 'fdr'): number =>
+      scoreLadder(replay, [0.1], family)[0]!.falseAlarms;
     const level = scoreLadder(replay, [0.1], 'none')[0]!.level;
     expect(level).toBeGreaterThan(0.0315);
     expect(level).toBeLessThan(0.0325);
@@ -79,7 +90,10 @@ describe('family settings on the ladder', () => {
   });
 
   it('a better-side or within-tolerance move never alarms', () => {
-    const quiet: Replay = { runCount: 2, metrics: [metric('a', [1e-9], { side: [-1] }), metric('b', [1e-9], { side: [0] })] };
+    const quiet: Replay = {
+      runCount: 2,
+      metrics: [metric('a', [1e-9], { side: [-1] }), metric('b', [1e-9], { side: [0] })],
+    };
     expect(scoreLadder(quiet, [0.1], 'none')[0]!.falseAlarms).toBe(0);
   });
 });
@@ -132,7 +146,10 @@ describe('per-metric rules and the family advice', () => {
   });
 
   it('keeps the configured family for few metrics a run, and suggests holm for many', () => {
-    const ladders = new Map([['none', rows], ['holm', scoreLadder(replay, [0.1, 0.01, 0.001], 'holm')]] as const);
+    const ladders = new Map([
+      ['none', rows],
+      ['holm', scoreLadder(replay, [0.1, 0.01, 0.001], 'holm')],
+    ] as const);
     expect(recommendFamily(3, ladders, 0.1, 'none', 1).family).toBe('none');
     expect(recommendFamily(3, ladders, 0.1, 'fdr', 1).family).toBe('fdr');
     const many = recommendFamily(30, ladders, 0.1, 'none', 1);

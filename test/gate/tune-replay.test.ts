@@ -11,9 +11,15 @@ import { configFrom, historyOf, runOf, settingsWith } from './helpers/scenario.j
 import { defaultConfig } from '../../src/config/load.js';
 
 /** Both replays of one history under one `defaults` block. */
-function bothReplays(history: History, defaults: Partial<MetricSettings>): { fast: MetricReplay[]; slow: MetricReplay[] } {
+function bothReplays(
+  history: History,
+  defaults: Partial<MetricSettings>,
+): { fast: MetricReplay[]; slow: MetricReplay[] } {
   const config = { ...defaultConfig(), defaults: settingsWith(defaults) };
-  return { fast: replayHistory(config, history).metrics, slow: replayHistory(config, history, { refit: true }).metrics };
+  return {
+    fast: replayHistory(config, history).metrics,
+    slow: replayHistory(config, history, { refit: true }).metrics,
+  };
 }
 
 /** log r and tails agree to 1e-9 (relative, or absolute near 0); sides and runs are equal. */
@@ -53,7 +59,10 @@ describe('replay: incremental sliding window equals the refit of every baseline'
     ['unbiased, plug-in', { fit: 'unbiased', uncertainty: 'plug-in', changePoints: false }],
     ['log transform, window 25', { transform: 'log', window: 25, changePoints: false }],
     ['resolution floor 0.5, both sides', { resolution: 0.5, worse: 'both', changePoints: false }],
-    ['relative-to a calibration metric', { relativeTo: 'calibrate', changePoints: false, tolerance: { kind: 'absolute', amount: 0 } }],
+    [
+      'relative-to a calibration metric',
+      { relativeTo: 'calibrate', changePoints: false, tolerance: { kind: 'absolute', amount: 0 } },
+    ],
     ['min-runs 2, window 3', { minRuns: 2, window: 3, changePoints: false }],
   ] as [string, Partial<MetricSettings>][])('%s', (_, defaults) => {
     const { fast, slow } = bothReplays(history, defaults);
@@ -90,7 +99,9 @@ describe('replay decides as the gate does', () => {
           columns: new Map([...history.columns].map(([name, c]) => [name, { values: c.values.slice(0, k) }])),
         };
         const run = runOf(Object.fromEntries([...history.columns].map(([name, c]) => [name, c.values[k]!])));
-        const result = runGate({ config, history: before, run, series: 'main' }).metrics.find((r) => r.name === m.name)!;
+        const result = runGate({ config, history: before, run, series: 'main' }).metrics.find(
+          (r) => r.name === m.name,
+        )!;
         expect(m.relativeDensity[p]).toBe(result.relativeDensity);
         expect(m.tail[p]).toBe(result.tail);
         expect(m.side[p] === 1 && m.relativeDensity[p]! < 0.01).toBe(result.status === 'regressed');

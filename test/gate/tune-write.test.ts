@@ -44,8 +44,13 @@ describe('writing the suggestion into a config', () => {
   });
 
   it('writes into an empty file, and into flow-style sections', () => {
-    const fresh = applyConfigEdit('', 'b.yml', { cutoff: 0.005, rules: [{ metric: 'a/b', cutoff: 1e-5, reason: 'x' }] });
-    expect(fresh).toBe('defaults:\n  cutoff: 0.005\nmetrics:\n  # suggested by bellgate tune: x\n  - match: "a/b"\n    cutoff: 0.00001\n');
+    const fresh = applyConfigEdit('', 'b.yml', {
+      cutoff: 0.005,
+      rules: [{ metric: 'a/b', cutoff: 1e-5, reason: 'x' }],
+    });
+    expect(fresh).toBe(
+      'defaults:\n  cutoff: 0.005\nmetrics:\n  # suggested by bellgate tune: x\n  - match: "a/b"\n    cutoff: 0.00001\n',
+    );
     const flow = applyConfigEdit('defaults: {window: 30} # short\n', 'b.yml', { cutoff: 0.005, rules: [] });
     expect(parseConfig(flow, 'b.yml').defaults).toMatchObject({ cutoff: 0.005, window: 30 });
     expect(flow).toContain('# short');

@@ -22,7 +22,8 @@ export interface Collected {
 
 export function collectingSink(): { sink: ActionSink; got: Collected } {
   const got: Collected = { lines: [], outputs: new Map(), secrets: [], failed: [], summary: [] };
-  const line = (kind: string) => (message: string, props?: AnnotationProps) => void got.lines.push({ kind, message, ...(props ? { props } : {}) });
+  const line = (kind: string) => (message: string, props?: AnnotationProps) =>
+    void got.lines.push({ kind, message, ...(props ? { props } : {}) });
   return {
     got,
     sink: {
@@ -44,13 +45,23 @@ export function baselineHistory(series: string, runs = 12): History {
   const noise = [0.3, -0.8, 1.1, -0.2, 0.6, -1.0, 0.1, 0.9, -0.5, 0.4, -0.7, 0.2, 0.8, -0.3];
   for (let i = 0; i < runs; i++) {
     const e = noise[i % noise.length] ?? 0;
-    h = appendRun(h, { id: `${100 + i}-1`, sha: `${i}`.padStart(40, 'a'), ref: 'refs/heads/main', event: 'push', time: new Date(Date.UTC(2026, 2, 1 + i)).toISOString() }, {
-      metrics: new Map([
-        ['route/match-static', { value: 412 + 4 * e, unit: 'ns', count: 1 }],
-        ['bundle/app.js.gz', { value: 40211 + Math.round(10 * e), unit: 'B', count: 1 }],
-      ]),
-      meta: new Map(),
-    });
+    h = appendRun(
+      h,
+      {
+        id: `${100 + i}-1`,
+        sha: `${i}`.padStart(40, 'a'),
+        ref: 'refs/heads/main',
+        event: 'push',
+        time: new Date(Date.UTC(2026, 2, 1 + i)).toISOString(),
+      },
+      {
+        metrics: new Map([
+          ['route/match-static', { value: 412 + 4 * e, unit: 'ns', count: 1 }],
+          ['bundle/app.js.gz', { value: 40211 + Math.round(10 * e), unit: 'B', count: 1 }],
+        ]),
+        meta: new Map(),
+      },
+    );
   }
   return h;
 }
@@ -79,14 +90,28 @@ export async function workspace(): Promise<Workspace> {
     dir,
     write,
     metrics: async (values) => {
-      await write('out/bench.json', JSON.stringify({ metrics: Object.entries(values).map(([name, value]) => ({ name, value, unit: name.startsWith('bundle') ? 'B' : 'ns' })) }));
+      await write(
+        'out/bench.json',
+        JSON.stringify({
+          metrics: Object.entries(values).map(([name, value]) => ({
+            name,
+            value,
+            unit: name.startsWith('bundle') ? 'B' : 'ns',
+          })),
+        }),
+      );
     },
     event: (payload) => write('event.json', JSON.stringify(payload)),
     remove: () => rm(dir, { recursive: true, force: true }),
   };
 }
 
-export function deps(ws: Workspace, env: Record<string, string>, sink: ActionSink, uploads: { name: string; text: string }[]): ActionDeps {
+export function deps(
+  ws: Workspace,
+  env: Record<string, string>,
+  sink: ActionSink,
+  uploads: { name: string; text: string }[],
+): ActionDeps {
   return {
     env,
     cwd: ws.dir,

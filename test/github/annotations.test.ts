@@ -23,7 +23,15 @@ describe('annotate', () => {
     const counts = annotate(
       report([
         // change (47.6 - 38.6) / 38.6 = 0.2332 -> "+23.3%" (computed by hand)
-        metric({ name: 'latency/p95', status: 'regressed', value: 47.6, unit: 'ms', change: (47.6 - 38.6) / 38.6, relativeDensity: 2.5e-6, baseline: { n: 60, mean: 38.6, sd: 1.2 } }),
+        metric({
+          name: 'latency/p95',
+          status: 'regressed',
+          value: 47.6,
+          unit: 'ms',
+          change: (47.6 - 38.6) / 38.6,
+          relativeDensity: 2.5e-6,
+          baseline: { n: 60, mean: 38.6, sd: 1.2 },
+        }),
         metric({ name: 'memory/peak', status: 'improved', value: 371, unit: 'MiB', change: -0.098 }),
         metric({ name: 'size/app', status: 'ok' }),
       ]),
@@ -40,8 +48,23 @@ describe('annotate', () => {
 
   it('never passes control or bidirectional-override characters of a name or unit through', () => {
     const seen: string[] = [];
-    const sink = { error: (text: string, p?: { title?: string }) => void seen.push(text, p?.title ?? ''), notice: () => undefined };
-    annotate(report([metric({ name: 'evil\u202Egnp.exe\u0007', status: 'regressed', value: 1, unit: 'ms\u2066', reason: 'moved\u001b[31m' })]), sink as never, 'se\u202Eries');
+    const sink = {
+      error: (text: string, p?: { title?: string }) => void seen.push(text, p?.title ?? ''),
+      notice: () => undefined,
+    };
+    annotate(
+      report([
+        metric({
+          name: 'evil\u202Egnp.exe\u0007',
+          status: 'regressed',
+          value: 1,
+          unit: 'ms\u2066',
+          reason: 'moved\u001b[31m',
+        }),
+      ]),
+      sink as never,
+      'se\u202Eries',
+    );
     for (const s of seen) expect(s).not.toMatch(/[\u0000-\u001f\u007f\u202a-\u202e\u2066-\u2069]/);
     expect(seen.join(' ')).toContain('evil');
   });

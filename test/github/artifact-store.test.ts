@@ -3,7 +3,12 @@
 // the "zip slip" rule (refuse entries with ../ or absolute paths) is common practice.
 import { describe, expect, it } from 'vitest';
 import { strToU8, zipSync } from 'fflate';
-import { artifactName, createArtifactStore, HISTORY_FILE, type ArtifactEntry } from '../../src/history/artifact-store.js';
+import {
+  artifactName,
+  createArtifactStore,
+  HISTORY_FILE,
+  type ArtifactEntry,
+} from '../../src/history/artifact-store.js';
 import { leavesFolder, readZipEntry, ZipRefusedError } from '../../src/history/artifact-zip.js';
 import { serializeHistory } from '../../src/history/document.js';
 import { emptyHistory, type History } from '../../src/history/history.js';
@@ -15,10 +20,14 @@ const SERIES = 'bench/linux';
 function historyOf(ids: string[], series = SERIES): History {
   let h = emptyHistory(series);
   ids.forEach((id, i) => {
-    h = appendRun(h, { id, time: new Date(Date.UTC(2026, 0, 1 + Number(id.split('-')[0]))).toISOString() }, {
-      metrics: new Map([['route/match', { value: 400 + i, unit: 'ns', count: 1 }]]),
-      meta: new Map(),
-    });
+    h = appendRun(
+      h,
+      { id, time: new Date(Date.UTC(2026, 0, 1 + Number(id.split('-')[0]))).toISOString() },
+      {
+        metrics: new Map([['route/match', { value: 400 + i, unit: 'ns', count: 1 }]]),
+        meta: new Map(),
+      },
+    );
   });
   return h;
 }
@@ -37,7 +46,18 @@ function fake(): Fake {
 let nextId = 1;
 function put(f: Fake, zip: Uint8Array, over: Partial<ArtifactEntry> = {}): void {
   const id = nextId++;
-  f.entries.push({ id, name: artifactName('bellgate-history', SERIES), expired: false, createdAt: `2026-02-01T00:00:${String(id).padStart(2, '0')}Z`, sizeInBytes: zip.length, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, zip, ...over });
+  f.entries.push({
+    id,
+    name: artifactName('bellgate-history', SERIES),
+    expired: false,
+    createdAt: `2026-02-01T00:00:${String(id).padStart(2, '0')}Z`,
+    sizeInBytes: zip.length,
+    headBranch: 'main',
+    headRepositoryId: 5,
+    repositoryId: 5,
+    zip,
+    ...over,
+  });
 }
 const zipOf = (h: History) => zipSync({ [HISTORY_FILE]: strToU8(serializeHistory(h)) });
 
@@ -85,14 +105,18 @@ describe('readZipEntry', () => {
     expect(leavesFolder('/etc/passwd')).toBe(true);
     expect(leavesFolder('C:\\x')).toBe(true);
     expect(leavesFolder('a/b..c/history.json')).toBe(false);
-    expect(() => readZipEntry(zipSync({ 'history.json': strToU8('{}'), '../evil.sh': strToU8('x') }), 'history.json')).toThrow(/leave its folder/);
+    expect(() =>
+      readZipEntry(zipSync({ 'history.json': strToU8('{}'), '../evil.sh': strToU8('x') }), 'history.json'),
+    ).toThrow(/leave its folder/);
   });
   it('refuses too many entries and too many unzipped bytes (a zip bomb)', () => {
     const many = Object.fromEntries(Array.from({ length: 20 }, (_, i) => [`f${i}`, strToU8('x')]));
     expect(() => readZipEntry(zipSync({ ...many, 'history.json': strToU8('{}') }), 'history.json')).toThrow(/entries/);
     const bomb = zipSync({ 'history.json': new Uint8Array(200_000) }, { level: 9 });
     expect(bomb.length).toBeLessThan(2_000);
-    expect(() => readZipEntry(bomb, 'history.json', { maxEntries: 4, maxUnzippedBytes: 100_000 })).toThrow(ZipRefusedError);
+    expect(() => readZipEntry(bomb, 'history.json', { maxEntries: 4, maxUnzippedBytes: 100_000 })).toThrow(
+      ZipRefusedError,
+    );
   });
   it('refuses bytes that are not a zip, and a zip without the file', () => {
     expect(() => readZipEntry(strToU8('definitely not a zip'), 'history.json')).toThrow(ZipRefusedError);
@@ -198,9 +222,15 @@ describe('createArtifactStore', () => {
     const s = createArtifactStore({
       api: { listArtifacts: async () => [], downloadArtifact: async () => new Uint8Array() },
       upload: async () => {
-        throw new Error('Failed request: (409) Conflict: an artifact with this name already exists on the workflow run');
+        throw new Error(
+          'Failed request: (409) Conflict: an artifact with this name already exists on the workflow run',
+        );
       },
-      history: 'h', series: SERIES, baselineBranch: 'main', retentionDays: 1, warn: () => undefined,
+      history: 'h',
+      series: SERIES,
+      baselineBranch: 'main',
+      retentionDays: 1,
+      warn: () => undefined,
     });
     await s.load();
     await expect(s.save(historyOf(['1-1']), 0)).rejects.toThrow(StoreError);

@@ -14,7 +14,8 @@ afterAll(async () => {
   await rest.close();
 });
 
-const api = () => createOctokitApi({ token: 't', baseUrl: rest.url, owner: 'acme', repo: 'router', retry: { retries: 1, unitMs: 1 } });
+const api = () =>
+  createOctokitApi({ token: 't', baseUrl: rest.url, owner: 'acme', repo: 'router', retry: { retries: 1, unitMs: 1 } });
 const marker = markerLine(commentMarker('bench/linux'));
 const body = (text: string) => `${marker}\n${text}`;
 
@@ -42,15 +43,25 @@ describe('upsertComment', () => {
   });
 
   it('ignores a comment that only quotes the marker, and keeps series apart', async () => {
-    rest.state.comments.set(3, [{ id: 50, body: `> ${marker}\nwhy is this failing?`, user: { login: 'dev', type: 'User' } }]);
+    rest.state.comments.set(3, [
+      { id: 50, body: `> ${marker}\nwhy is this failing?`, user: { login: 'dev', type: 'User' } },
+    ]);
     const other = markerLine(commentMarker('bench/mac'));
     expect(await upsertComment(api(), 3, other, `${other}\nmac`, 'always', false)).toBe('created');
     expect(await upsertComment(api(), 3, marker, body('linux'), 'always', false)).toBe('created');
-    expect(rest.state.comments.get(3)?.map((c) => c.body)).toEqual([`> ${marker}\nwhy is this failing?`, `${other}\nmac`, body('linux')]);
+    expect(rest.state.comments.get(3)?.map((c) => c.body)).toEqual([
+      `> ${marker}\nwhy is this failing?`,
+      `${other}\nmac`,
+      body('linux'),
+    ]);
   });
 
   it('finds its comment beyond the first page of a long thread', async () => {
-    const many = Array.from({ length: 150 }, (_, i) => ({ id: 5000 + i, body: `chat ${i}`, user: { login: 'dev', type: 'User' } }));
+    const many = Array.from({ length: 150 }, (_, i) => ({
+      id: 5000 + i,
+      body: `chat ${i}`,
+      user: { login: 'dev', type: 'User' },
+    }));
     many[120] = { id: 5120, body: body('old'), user: { login: 'github-actions[bot]', type: 'Bot' } };
     rest.state.comments.set(4, many);
     expect(await upsertComment(api(), 4, marker, body('new'), 'auto', true)).toBe('updated');

@@ -24,23 +24,39 @@ const read = (payload: unknown) => async () => JSON.stringify(payload);
 describe('readRunContext', () => {
   it('reads a fork pull_request: number, labels, fork flag, run id with attempt', async () => {
     const c = await readRunContext(env, read({ pull_request: pr, repository: { id: 5, default_branch: 'main' } }));
-    expect(c).toMatchObject({ owner: 'acme', repo: 'router', runId: '8123-2', repositoryId: 5, defaultBranch: 'main', workflow: 'bench', job: 'linux' });
+    expect(c).toMatchObject({
+      owner: 'acme',
+      repo: 'router',
+      runId: '8123-2',
+      repositoryId: 5,
+      defaultBranch: 'main',
+      workflow: 'bench',
+      job: 'linux',
+    });
     expect(c.pullRequest).toEqual({ number: 42, labels: ['bellgate:accept', 'perf'], fromFork: true });
   });
   it('reads a push without a pull request, defaulting the attempt to 1', async () => {
-    const c = await readRunContext({ ...env, GITHUB_EVENT_NAME: 'push', GITHUB_RUN_ATTEMPT: '' }, read({ repository: { default_branch: 'trunk' } }));
+    const c = await readRunContext(
+      { ...env, GITHUB_EVENT_NAME: 'push', GITHUB_RUN_ATTEMPT: '' },
+      read({ repository: { default_branch: 'trunk' } }),
+    );
     expect(c.pullRequest).toBeUndefined();
     expect(c.runId).toBe('8123-1');
     expect(c.defaultBranch).toBe('trunk');
   });
   it('names a missing variable', async () => {
-    await expect(readRunContext({ ...env, GITHUB_REPOSITORY: '' }, read({}))).rejects.toThrow(/GITHUB_REPOSITORY is not set/);
+    await expect(readRunContext({ ...env, GITHUB_REPOSITORY: '' }, read({}))).rejects.toThrow(
+      /GITHUB_REPOSITORY is not set/,
+    );
   });
   it('refuses an unreadable payload with an InputError', async () => {
     await expect(readRunContext(env, async () => '{not json')).rejects.toBeInstanceOf(InputError);
   });
   it('takes the default branch of a schedule run from its ref when the payload lacks it', async () => {
-    const c = await readRunContext({ ...env, GITHUB_EVENT_NAME: 'schedule', GITHUB_REF: 'refs/heads/trunk' }, read({ schedule: '17 3 * * *' }));
+    const c = await readRunContext(
+      { ...env, GITHUB_EVENT_NAME: 'schedule', GITHUB_REF: 'refs/heads/trunk' },
+      read({ schedule: '17 3 * * *' }),
+    );
     expect(c.defaultBranch).toBe('trunk');
   });
 });

@@ -10,19 +10,28 @@ describe('decideRecord', () => {
     expect(decideRecord('auto', { eventName, ref: main }, 'main').record).toBe(true);
   });
   it('does not record a push to another branch', () => {
-    expect(decideRecord('auto', { eventName: 'push', ref: 'refs/heads/feature' }, 'main')).toMatchObject({ record: false, notice: false });
+    expect(decideRecord('auto', { eventName: 'push', ref: 'refs/heads/feature' }, 'main')).toMatchObject({
+      record: false,
+      notice: false,
+    });
   });
   it.each(['pull_request', 'pull_request_target'])('checks %s only, even with a baseline-looking ref', (eventName) => {
     expect(decideRecord('auto', { eventName, ref: main }, 'main').record).toBe(false);
   });
   it('checks other events only, with a notice', () => {
-    expect(decideRecord('auto', { eventName: 'release', ref: main }, 'main')).toMatchObject({ record: false, notice: true });
+    expect(decideRecord('auto', { eventName: 'release', ref: main }, 'main')).toMatchObject({
+      record: false,
+      notice: true,
+    });
   });
   it('lets always and never override the event', () => {
     expect(decideRecord('always', { eventName: 'pull_request', ref: 'refs/pull/3/merge' }, 'main').record).toBe(true);
     expect(decideRecord('never', { eventName: 'push', ref: main }, 'main').record).toBe(false);
   });
   it('does not record when the baseline branch is unknown, and says so', () => {
-    expect(decideRecord('auto', { eventName: 'push', ref: main }, undefined)).toMatchObject({ record: false, notice: true });
+    expect(decideRecord('auto', { eventName: 'push', ref: main }, undefined)).toMatchObject({
+      record: false,
+      notice: true,
+    });
   });
 });

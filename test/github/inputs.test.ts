@@ -27,7 +27,17 @@ describe('action.yml and the input constants', () => {
       if (spec.default !== undefined && !spec.default.includes('${{')) env[inputVariable(name)] = spec.default;
     }
     const got = readActionInputs(env);
-    expect(got).toMatchObject({ store: 'artifact', history: 'bellgate-history', record: 'auto', block: true, comment: 'auto', acceptLabel: 'bellgate:accept', retentionDays: 90, historyFailure: 'warn', htmlReport: false });
+    expect(got).toMatchObject({
+      store: 'artifact',
+      history: 'bellgate-history',
+      record: 'auto',
+      block: true,
+      comment: 'auto',
+      acceptLabel: 'bellgate:accept',
+      retentionDays: 90,
+      historyFailure: 'warn',
+      htmlReport: false,
+    });
     expect(got.config).toBeUndefined();
   });
 });
@@ -48,7 +58,7 @@ describe('inputVariable', () => {
 });
 
 describe('readActionInputs', () => {
-  const base = { 'INPUT_METRICS': 'bench/a.json\n  # a comment\n\nbench/b.json  ' };
+  const base = { INPUT_METRICS: 'bench/a.json\n  # a comment\n\nbench/b.json  ' };
   const fails = (env: Record<string, string>, input: string, pattern: RegExp) => {
     try {
       readActionInputs({ ...base, ...env });
@@ -63,16 +73,16 @@ describe('readActionInputs', () => {
   it('splits metrics one a line, skipping blanks and # comments', () => {
     expect(readActionInputs(base).metrics).toEqual(['bench/a.json', 'bench/b.json']);
   });
-  it('refuses an empty metrics list', () => fails({ 'INPUT_METRICS': ' \n ' }, 'metrics', /empty/));
+  it('refuses an empty metrics list', () => fails({ INPUT_METRICS: ' \n ' }, 'metrics', /empty/));
   it('refuses unknown choices, naming the allowed ones', () => {
-    fails({ 'INPUT_STORE': 's3' }, 'store', /artifact, branch, file/);
-    fails({ 'INPUT_RECORD': 'sometimes' }, 'record', /auto, always, never/);
-    fails({ 'INPUT_COMMENT': 'yes' }, 'comment', /auto, always, never/);
+    fails({ INPUT_STORE: 's3' }, 'store', /artifact, branch, file/);
+    fails({ INPUT_RECORD: 'sometimes' }, 'record', /auto, always, never/);
+    fails({ INPUT_COMMENT: 'yes' }, 'comment', /auto, always, never/);
     fails({ 'INPUT_HISTORY-FAILURE': 'ignore' }, 'history-failure', /warn, fail/);
   });
   it('accepts only YAML booleans for block (as getBooleanInput does)', () => {
-    expect(readActionInputs({ ...base, 'INPUT_BLOCK': 'False' }).block).toBe(false);
-    fails({ 'INPUT_BLOCK': 'no' }, 'block', /true or false/);
+    expect(readActionInputs({ ...base, INPUT_BLOCK: 'False' }).block).toBe(false);
+    fails({ INPUT_BLOCK: 'no' }, 'block', /true or false/);
   });
   it('refuses a retention that is not a whole number of days', () => {
     fails({ 'INPUT_RETENTION-DAYS': '0' }, 'retention-days', /1 to 400/);
@@ -80,11 +90,11 @@ describe('readActionInputs', () => {
     expect(readActionInputs({ ...base, 'INPUT_RETENTION-DAYS': '14' }).retentionDays).toBe(14);
   });
   it('refuses artifact names the artifact service would refuse', () => {
-    fails({ 'INPUT_HISTORY': 'a/b' }, 'history', /artifact name/);
-    expect(readActionInputs({ ...base, 'INPUT_HISTORY': 'a/b.json', 'INPUT_STORE': 'file' }).history).toBe('a/b.json');
+    fails({ INPUT_HISTORY: 'a/b' }, 'history', /artifact name/);
+    expect(readActionInputs({ ...base, INPUT_HISTORY: 'a/b.json', INPUT_STORE: 'file' }).history).toBe('a/b.json');
   });
   it('treats an explicit non-default config path as explicit and strips refs/heads/ from the branch', () => {
-    const got = readActionInputs({ ...base, 'INPUT_CONFIG': 'ci/gate.yml', 'INPUT_BASELINE-BRANCH': 'refs/heads/trunk' });
+    const got = readActionInputs({ ...base, INPUT_CONFIG: 'ci/gate.yml', 'INPUT_BASELINE-BRANCH': 'refs/heads/trunk' });
     expect(got.config).toBe('ci/gate.yml');
     expect(got.baselineBranch).toBe('trunk');
   });

@@ -12,7 +12,8 @@ describe('loadActionConfig decides as readConfigFile does', () => {
     const cwd = folder(`action-${name}`, make);
     const mine = await outcome(() => loadActionConfig(undefined, cwd));
     expect(mine).toEqual(await outcome(() => readConfigFile(undefined, { cwd, required: false })));
-    if (name === 'yml') expect((mine as { config: { defaults: { cutoff: number } } }).config.defaults.cutoff).toBe(0.05);
+    if (name === 'yml')
+      expect((mine as { config: { defaults: { cutoff: number } } }).config.defaults.cutoff).toBe(0.05);
     if (name === 'invalid' || name === 'config-is-a-folder') expect(mine).toHaveProperty('error');
   });
 

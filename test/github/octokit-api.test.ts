@@ -15,12 +15,21 @@ afterAll(async () => {
 });
 
 const client = (unitMs = 1) =>
-  createOctokitApi({ token: 'ghs_test', baseUrl: api.url, owner: 'acme', repo: 'router', retry: { retries: 3, unitMs } });
+  createOctokitApi({
+    token: 'ghs_test',
+    baseUrl: api.url,
+    owner: 'acme',
+    repo: 'router',
+    retry: { retries: 3, unitMs },
+  });
 
 describe('createOctokitApi', () => {
   it('reads every page of comments (100 a page, the REST maximum) and stops at the short page', async () => {
     api.state.calls.length = 0;
-    api.state.comments.set(7, Array.from({ length: 250 }, (_, i) => ({ id: i + 1, body: `c${i}`, user: { login: 'dev', type: 'User' } })));
+    api.state.comments.set(
+      7,
+      Array.from({ length: 250 }, (_, i) => ({ id: i + 1, body: `c${i}`, user: { login: 'dev', type: 'User' } })),
+    );
     const comments = await client().listIssueComments(7);
     expect(comments).toHaveLength(250);
     expect(comments[249]?.body).toBe('c249');
@@ -79,16 +88,60 @@ describe('createOctokitApi', () => {
 
   it('lists artifacts by exact name and maps the workflow_run fields', async () => {
     api.state.artifacts = [
-      { id: 1, name: 'h-x', createdAt: '2026-01-01T00:00:00Z', expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 77, sizeInBytes: 10 },
-      { id: 2, name: 'h-x-other', createdAt: '2026-01-02T00:00:00Z', expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 78, sizeInBytes: 10 },
+      {
+        id: 1,
+        name: 'h-x',
+        createdAt: '2026-01-01T00:00:00Z',
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: 77,
+        sizeInBytes: 10,
+      },
+      {
+        id: 2,
+        name: 'h-x-other',
+        createdAt: '2026-01-02T00:00:00Z',
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: 78,
+        sizeInBytes: 10,
+      },
     ];
     const listed = await client().listArtifacts('h-x');
-    expect(listed).toEqual([{ id: 1, name: 'h-x', expired: false, createdAt: '2026-01-01T00:00:00Z', sizeInBytes: 10, headBranch: 'main', headRepositoryId: 5, repositoryId: 5 }]);
+    expect(listed).toEqual([
+      {
+        id: 1,
+        name: 'h-x',
+        expired: false,
+        createdAt: '2026-01-01T00:00:00Z',
+        sizeInBytes: 10,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+      },
+    ]);
   });
 
   it('follows the 302 of an artifact download to storage without sending the token there, and caps the size', async () => {
     const zip = zipSync({ 'history.json': strToU8('{"x":1}') });
-    api.state.artifacts = [{ id: 3, name: 'h', createdAt: '2026-01-01T00:00:00Z', expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 79, sizeInBytes: zip.length, zip }];
+    api.state.artifacts = [
+      {
+        id: 3,
+        name: 'h',
+        createdAt: '2026-01-01T00:00:00Z',
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: 79,
+        sizeInBytes: zip.length,
+        zip,
+      },
+    ];
     api.state.calls.length = 0;
     const got = await client().downloadArtifact(3, 1 << 20);
     expect(Buffer.from(got).equals(Buffer.from(zip))).toBe(true);
@@ -99,7 +152,13 @@ describe('createOctokitApi', () => {
 
   it('retries a plain 429 after the seconds its Retry-After header gives', async () => {
     api.state.calls.length = 0;
-    api.state.faults.push({ method: 'GET', path: '/repos/acme/router/issues/13/comments', status: 429, headers: { 'retry-after': '3' }, times: 1 });
+    api.state.faults.push({
+      method: 'GET',
+      path: '/repos/acme/router/issues/13/comments',
+      status: 429,
+      headers: { 'retry-after': '3' },
+      times: 1,
+    });
     const started = performance.now();
     expect(await client(20).listIssueComments(13)).toEqual([]);
     expect(countCalls(api.state, 'GET', '/repos/acme/router/issues/13/comments')).toBe(2);
@@ -116,7 +175,20 @@ describe('createOctokitApi', () => {
 
   it('retries a 503 from the storage a download redirects to', async () => {
     const zip = zipSync({ 'history.json': strToU8('{}') });
-    api.state.artifacts = [{ id: 4, name: 'h', createdAt: '2026-01-01T00:00:00Z', expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 80, sizeInBytes: zip.length, zip }];
+    api.state.artifacts = [
+      {
+        id: 4,
+        name: 'h',
+        createdAt: '2026-01-01T00:00:00Z',
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: 80,
+        sizeInBytes: zip.length,
+        zip,
+      },
+    ];
     api.state.calls.length = 0;
     api.state.faults.push({ method: 'GET', path: '/blob/4', status: 503, times: 1 });
     expect((await client().downloadArtifact(4, 1 << 20)).length).toBe(zip.length);

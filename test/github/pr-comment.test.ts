@@ -42,7 +42,9 @@ describe('postComment', () => {
   it('no pull request: undefined, whatever the mode', async () => {
     const { sink } = collectingSink();
     const { api, calls } = emptyTokenApi();
-    expect(await postComment(api, {} as RunContext, inputs('always'), '<!-- m -->', 'body', true, sink)).toBeUndefined();
+    expect(
+      await postComment(api, {} as RunContext, inputs('always'), '<!-- m -->', 'body', true, sink),
+    ).toBeUndefined();
     expect(calls()).toBe(0);
   });
 });

@@ -21,16 +21,31 @@ describe('fnv1a32', () => {
 
 describe('reportPath', () => {
   it('names one readable file per series under RUNNER_TEMP/bellgate', () => {
-    expect(reportPath('/tmp/runner', 'bench/linux')).toMatch(/^\/tmp\/runner\/bellgate\/report-bench-linux-[0-9a-f]{8}\.json$/);
+    expect(reportPath('/tmp/runner', 'bench/linux')).toMatch(
+      /^\/tmp\/runner\/bellgate\/report-bench-linux-[0-9a-f]{8}\.json$/,
+    );
     expect(reportPath('/tmp/runner', '///')).toMatch(/^\/tmp\/runner\/bellgate\/report-[0-9a-f]{8}\.json$/);
   });
 
   it('keeps series apart whose slugs coincide, and never leaves the folder', () => {
-    const hostile = ['bench/linux', 'bench linux', 'bench-linux', '__proto__', '../../etc/passwd', '', '.', '..', 'a/b', 'A/B'];
+    const hostile = [
+      'bench/linux',
+      'bench linux',
+      'bench-linux',
+      '__proto__',
+      '../../etc/passwd',
+      '',
+      '.',
+      '..',
+      'a/b',
+      'A/B',
+    ];
     expect(new Set(hostile.map((s) => reportPath('/r', s))).size).toBe(hostile.length);
     fc.assert(
       fc.property(fc.string({ maxLength: 200 }), (series) => {
-        expect(reportPath('/r', series)).toMatch(/^\/r\/bellgate\/report-([A-Za-z0-9_][A-Za-z0-9._-]*-)?[0-9a-f]{8}\.json$/);
+        expect(reportPath('/r', series)).toMatch(
+          /^\/r\/bellgate\/report-([A-Za-z0-9_][A-Za-z0-9._-]*-)?[0-9a-f]{8}\.json$/,
+        );
       }),
       { seed: 17, numRuns: 300 },
     );

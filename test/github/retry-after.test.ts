@@ -2,7 +2,11 @@
 import { describe, expect, it } from 'vitest';
 import { MAX_RETRY_AFTER, retryAfterSeconds } from '../../src/github/retry-after.js';
 
-const e429 = (headers: Record<string, string> = {}, message = 'Too Many Requests') => ({ status: 429, message, response: { headers } });
+const e429 = (headers: Record<string, string> = {}, message = 'Too Many Requests') => ({
+  status: 429,
+  message,
+  response: { headers },
+});
 const now = Date.parse('2026-04-01T12:00:00Z');
 
 describe('retryAfterSeconds', () => {
@@ -14,7 +18,9 @@ describe('retryAfterSeconds', () => {
     expect([0, 1, 2].map((a) => retryAfterSeconds(e429(), a, now))).toEqual([1, 4, 9]);
   });
   it('leaves GitHub rate-limit answers to plugin-throttling, and other statuses alone', () => {
-    expect(retryAfterSeconds(e429({ 'retry-after': '1' }, 'You have exceeded a secondary rate limit'), 0, now)).toBeUndefined();
+    expect(
+      retryAfterSeconds(e429({ 'retry-after': '1' }, 'You have exceeded a secondary rate limit'), 0, now),
+    ).toBeUndefined();
     expect(retryAfterSeconds(e429({ 'x-ratelimit-remaining': '0' }), 0, now)).toBeUndefined();
     expect(retryAfterSeconds({ status: 503 }, 0, now)).toBeUndefined();
   });

@@ -34,15 +34,30 @@ afterEach(async () => {
 
 function seedHistory(): void {
   const zip = zipHistory(baselineHistory(SERIES));
-  rest.state.artifacts.push({ id: 1, name: NAME, createdAt: '2026-03-20T00:00:00Z', expired: false, headBranch: 'main', headRepositoryId: 5, repositoryId: 5, workflowRunId: 111, sizeInBytes: zip.length, zip });
+  rest.state.artifacts.push({
+    id: 1,
+    name: NAME,
+    createdAt: '2026-03-20T00:00:00Z',
+    expired: false,
+    headBranch: 'main',
+    headRepositoryId: 5,
+    repositoryId: 5,
+    workflowRunId: 111,
+    sizeInBytes: zip.length,
+    zip,
+  });
 }
 
-async function env(event: string, payload: unknown, extra: Record<string, string> = {}): Promise<Record<string, string>> {
+async function env(
+  event: string,
+  payload: unknown,
+  extra: Record<string, string> = {},
+): Promise<Record<string, string>> {
   return {
-    'INPUT_METRICS': 'out/*.json',
-    'INPUT_SERIES': SERIES,
-    'INPUT_TOKEN': 'ghs_secret_token_value',
-    'INPUT_CONFIG': '.github/bellgate.yml',
+    INPUT_METRICS: 'out/*.json',
+    INPUT_SERIES: SERIES,
+    INPUT_TOKEN: 'ghs_secret_token_value',
+    INPUT_CONFIG: '.github/bellgate.yml',
     GITHUB_REPOSITORY: 'acme/router',
     GITHUB_EVENT_NAME: event,
     GITHUB_EVENT_PATH: await ws.event(payload),
@@ -57,7 +72,14 @@ async function env(event: string, payload: unknown, extra: Record<string, string
 }
 
 const repository = { id: 5, default_branch: 'main' };
-const pr = (labels: string[] = []) => ({ repository, pull_request: { number: 7, labels: labels.map((name) => ({ name })), head: { repo: { full_name: 'acme/router', fork: false } } } });
+const pr = (labels: string[] = []) => ({
+  repository,
+  pull_request: {
+    number: 7,
+    labels: labels.map((name) => ({ name })),
+    head: { repo: { full_name: 'acme/router', fork: false } },
+  },
+});
 
 describe('runAction', () => {
   it('push to main without history: learning, records the first run, never fails', async () => {
@@ -116,7 +138,7 @@ describe('runAction', () => {
     seedHistory();
     await ws.metrics({ 'route/match-static': 480, 'bundle/app.js.gz': 40212 });
     const { sink, got } = collectingSink();
-    await runAction(deps(ws, await env('pull_request', pr(), { 'INPUT_BLOCK': 'false' }), sink, []));
+    await runAction(deps(ws, await env('pull_request', pr(), { INPUT_BLOCK: 'false' }), sink, []));
     expect(got.outputs.get('verdict')).toBe('regressed');
     expect(got.failed).toEqual([]);
     expect(got.lines.some((l) => l.kind === 'warning' && /block is false/.test(l.message))).toBe(true);
@@ -127,8 +149,11 @@ describe('runAction', () => {
     rest.state.commentWriteStatus = 403;
     await ws.metrics({ 'route/match-static': 480, 'bundle/app.js.gz': 40212 });
     const { sink, got } = collectingSink();
-    const payload = { repository, pull_request: { number: 7, labels: [], head: { repo: { full_name: 'someone/router', fork: true } } } };
-    await runAction(deps(ws, await env('pull_request', payload, { 'INPUT_BLOCK': 'false' }), sink, []));
+    const payload = {
+      repository,
+      pull_request: { number: 7, labels: [], head: { repo: { full_name: 'someone/router', fork: true } } },
+    };
+    await runAction(deps(ws, await env('pull_request', payload, { INPUT_BLOCK: 'false' }), sink, []));
     const warnings = got.lines.filter((l) => l.kind === 'warning' && /comment/.test(l.message));
     expect(warnings).toHaveLength(1);
     expect(warnings[0]?.message).toMatch(/fork PR gets a read-only token/);
@@ -162,14 +187,14 @@ describe('runAction', () => {
   it('a bad input fails at once with a message naming it, before any API call', async () => {
     rest.state.calls.length = 0;
     const { sink, got } = collectingSink();
-    await runAction(deps(ws, await env('push', { repository }, { 'INPUT_COMMENT': 'loud' }), sink, []));
+    await runAction(deps(ws, await env('push', { repository }, { INPUT_COMMENT: 'loud' }), sink, []));
     expect(got.failed).toHaveLength(1);
     expect(got.failed[0]).toMatch(/^input comment: input `comment` is "loud"/);
     expect(got.failed[0]).not.toMatch(/\n\s+at /);
     expect(rest.state.calls).toEqual([]);
   });
 
-  it('a metric pattern that matches nothing fails with the reader\'s message, not a stack', async () => {
+  it("a metric pattern that matches nothing fails with the reader's message, not a stack", async () => {
     const { sink, got } = collectingSink();
     await runAction(deps(ws, await env('push', { repository }), sink, []));
     expect(got.failed).toHaveLength(1);
@@ -212,7 +237,7 @@ describe('runAction', () => {
   it('an empty token with the artifact store fails naming the token input', async () => {
     await ws.metrics({ 'route/match-static': 412 });
     const { sink, got } = collectingSink();
-    await runAction(deps(ws, await env('push', { repository }, { 'INPUT_TOKEN': '' }), sink, []));
+    await runAction(deps(ws, await env('push', { repository }, { INPUT_TOKEN: '' }), sink, []));
     expect(got.failed).toHaveLength(1);
     expect(got.failed[0]).toMatch(/^input token: input `token` is empty/);
   });

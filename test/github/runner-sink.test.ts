@@ -83,19 +83,32 @@ describe('createRunnerSink writes what @actions/core writes', () => {
     const mineFile = join(dir, 'output-ours');
     writeFileSync(theirs, '');
     writeFileSync(mineFile, '');
-    const values: [string, string][] = [['verdict', 'regressed'], ['report', '/tmp/a b/report.json'], ['multi', 'line one\nline two\n'], ['empty', '']];
+    const values: [string, string][] = [
+      ['verdict', 'regressed'],
+      ['report', '/tmp/a b/report.json'],
+      ['multi', 'line one\nline two\n'],
+      ['empty', ''],
+    ];
     process.env.GITHUB_OUTPUT = theirs;
     for (const [n, v] of values) core.setOutput(n, v);
     const mine = ours({ GITHUB_OUTPUT: mineFile });
     for (const [n, v] of values) mine.sink.setOutput(n, v);
-    const plain = (file: string): string => readFileSync(file, 'utf8').replace(/ghadelimiter_[0-9a-f-]{36}/g, 'DELIMITER');
+    const plain = (file: string): string =>
+      readFileSync(file, 'utf8').replace(/ghadelimiter_[0-9a-f-]{36}/g, 'DELIMITER');
     expect(plain(mineFile)).toBe(plain(theirs));
     expect(plain(mineFile)).toContain('multi<<DELIMITER\nline one\nline two\n\nDELIMITER\n');
   });
 
   it('each entry gets its own delimiter, of the shape @actions/core writes, and a value holding it is refused', () => {
-    const delimiters = Array.from({ length: 200 }, () => /<<(ghadelimiter_[0-9a-f-]{36})\n/.exec(keyValueEntry('a', 'b'))?.[1]);
-    expect(delimiters.every((d) => d !== undefined && /^ghadelimiter_[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/.test(d))).toBe(true);
+    const delimiters = Array.from(
+      { length: 200 },
+      () => /<<(ghadelimiter_[0-9a-f-]{36})\n/.exec(keyValueEntry('a', 'b'))?.[1],
+    );
+    expect(
+      delimiters.every(
+        (d) => d !== undefined && /^ghadelimiter_[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/.test(d),
+      ),
+    ).toBe(true);
     expect(new Set(delimiters).size).toBe(200);
     const spy = vi.spyOn(Math, 'random').mockReturnValue(0.5);
     const fixed = /<<(ghadelimiter_[0-9a-f-]{36})\n/.exec(keyValueEntry('a', 'b'))![1]!;
@@ -131,7 +144,9 @@ describe('createRunnerSink writes what @actions/core writes', () => {
   });
 
   it('a missing summary file or variable is an error (the action turns it into a warning)', async () => {
-    await expect(ours({ GITHUB_STEP_SUMMARY: join(dir, 'none') }).sink.appendSummary('x')).rejects.toThrow(/Unable to access summary file/);
+    await expect(ours({ GITHUB_STEP_SUMMARY: join(dir, 'none') }).sink.appendSummary('x')).rejects.toThrow(
+      /Unable to access summary file/,
+    );
     await expect(ours({}).sink.appendSummary('x')).rejects.toThrow(/GITHUB_STEP_SUMMARY/);
   });
 

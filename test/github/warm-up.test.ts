@@ -3,7 +3,10 @@ import { actionWarmUpPlan, warmUpAction } from '../../src/github/warm-up.js';
 
 // Inputs reach the action as INPUT_<NAME> variables (GitHub's runner convention, also what
 // inputVariable in src/github/inputs.ts builds); the plan must read the same variables.
-const present = (...paths: string[]) => (p: string) => paths.includes(p);
+const present =
+  (...paths: string[]) =>
+  (p: string) =>
+    paths.includes(p);
 
 describe('actionWarmUpPlan', () => {
   it('a named config that exists and JSON metric lines: both readers', () => {

@@ -8,11 +8,20 @@ import { afterAll } from 'vitest';
 /** The folder layouts: no config, .yml, .yaml, .github as a file, the config as a folder, an invalid config. */
 export const CONFIG_FOLDERS: [string, (dir: string) => void][] = [
   ['empty', () => undefined],
-  ['yml', (d) => (mkdirSync(join(d, '.github')), writeFileSync(join(d, '.github/bellgate.yml'), 'defaults:\n  cutoff: 0.05\n'))],
+  [
+    'yml',
+    (d) => (
+      mkdirSync(join(d, '.github')),
+      writeFileSync(join(d, '.github/bellgate.yml'), 'defaults:\n  cutoff: 0.05\n')
+    ),
+  ],
   ['yaml', (d) => (mkdirSync(join(d, '.github')), writeFileSync(join(d, '.github/bellgate.yaml'), 'keep: 40\n'))],
   ['github-is-a-file', (d) => writeFileSync(join(d, '.github'), 'not a folder')],
   ['config-is-a-folder', (d) => mkdirSync(join(d, '.github/bellgate.yml'), { recursive: true })],
-  ['invalid', (d) => (mkdirSync(join(d, '.github')), writeFileSync(join(d, '.github/bellgate.yml'), 'defaults:\n  cutoff: 7\n'))],
+  [
+    'invalid',
+    (d) => (mkdirSync(join(d, '.github')), writeFileSync(join(d, '.github/bellgate.yml'), 'defaults:\n  cutoff: 7\n')),
+  ],
 ];
 
 /** A temporary root, removed after the file's tests; `folder(name, make)` makes a folder in it. */

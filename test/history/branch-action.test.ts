@@ -25,10 +25,10 @@ afterEach(async () => {
 
 async function env(runId: number, extra: Record<string, string> = {}): Promise<Record<string, string>> {
   return {
-    'INPUT_METRICS': 'out/*.json',
-    'INPUT_SERIES': SERIES,
-    'INPUT_STORE': 'branch',
-    'INPUT_TOKEN': 'ghs_secret_token_value',
+    INPUT_METRICS: 'out/*.json',
+    INPUT_SERIES: SERIES,
+    INPUT_STORE: 'branch',
+    INPUT_TOKEN: 'ghs_secret_token_value',
     GITHUB_REPOSITORY: 'acme/router',
     GITHUB_EVENT_NAME: 'push',
     GITHUB_EVENT_PATH: await ws.event({ repository: { id: 5, default_branch: 'main' } }),
@@ -44,7 +44,10 @@ async function env(runId: number, extra: Record<string, string> = {}): Promise<R
 
 describe('store: branch in the action', () => {
   it('records pushes on the data branch bellgate-data and reads them back', async () => {
-    for (const [runId, value] of [[900, 412], [901, 413]] as const) {
+    for (const [runId, value] of [
+      [900, 412],
+      [901, 413],
+    ] as const) {
       await ws.metrics({ 'route/match-static': value });
       const { sink, got } = collectingSink();
       const result = await runAction(deps(ws, await env(runId), sink, []));
@@ -58,12 +61,12 @@ describe('store: branch in the action', () => {
   it('uses the branch the history input names, and refuses the baseline branch or a bad name', async () => {
     await ws.metrics({ 'route/match-static': 414 });
     const named = collectingSink();
-    await runAction(deps(ws, await env(902, { 'INPUT_HISTORY': 'perf/history' }), named.sink, []));
+    await runAction(deps(ws, await env(902, { INPUT_HISTORY: 'perf/history' }), named.sink, []));
     expect(named.got.failed).toEqual([]);
     expect(ids(onBranch(git, SERIES, 'perf/history'))).toEqual(['902-1']);
     for (const history of ['main', 'bad..name']) {
       const { sink, got } = collectingSink();
-      await runAction(deps(ws, await env(903, { 'INPUT_HISTORY': history }), sink, []));
+      await runAction(deps(ws, await env(903, { INPUT_HISTORY: history }), sink, []));
       expect(got.failed).toHaveLength(1);
       expect(got.failed[0]).toMatch(/input `history`/);
     }

@@ -47,6 +47,8 @@ describe('branch store under concurrent writers', () => {
     // Every successful save is one commit on a single first-parent chain (plus the branch creation).
     expect(git.history('bellgate-data').length).toBe(WRITERS * APPENDS);
     expect(conflicts).toBeGreaterThan(0);
-    console.log(`concurrency: ${WRITERS * APPENDS} appends, ${conflicts} refused ref updates resolved by re-read and merge`);
+    console.log(
+      `concurrency: ${WRITERS * APPENDS} appends, ${conflicts} refused ref updates resolved by re-read and merge`,
+    );
   }, 180_000);
 });

@@ -12,13 +12,35 @@ import type { GitDataStandin } from '../e2e/standins/git-data.js';
 
 export const TOKEN = 'ghs_standin-token';
 
-export const runOf = (value: number): Run => ({ metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]), meta: new Map() });
+export const runOf = (value: number): Run => ({
+  metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]),
+  meta: new Map(),
+});
 
 /** Run `n` of the scenario: a minute apart from 2026-03-01 10:00 UTC. */
-export const infoOf = (id: string, n: number) => ({ id, time: new Date(Date.UTC(2026, 2, 1, 10) + n * 60_000).toISOString(), ref: 'refs/heads/main', event: 'push' });
+export const infoOf = (id: string, n: number) => ({
+  id,
+  time: new Date(Date.UTC(2026, 2, 1, 10) + n * 60_000).toISOString(),
+  ref: 'refs/heads/main',
+  event: 'push',
+});
 
-export function branchStore(url: string, series: string, over: Partial<BranchStoreOptions> = {}, client: Partial<GitDataClientOptions> = {}) {
-  const api = createGitDataClient({ token: TOKEN, baseUrl: url, owner: 'acme', repo: 'router', timeoutMs: 2000, retries: 2, unitMs: 1, ...client });
+export function branchStore(
+  url: string,
+  series: string,
+  over: Partial<BranchStoreOptions> = {},
+  client: Partial<GitDataClientOptions> = {},
+) {
+  const api = createGitDataClient({
+    token: TOKEN,
+    baseUrl: url,
+    owner: 'acme',
+    repo: 'router',
+    timeoutMs: 2000,
+    retries: 2,
+    unitMs: 1,
+    ...client,
+  });
   return createBranchStore({ api, branch: 'bellgate-data', series, unitMs: 1, ...over });
 }
 
@@ -31,7 +53,10 @@ export function onBranch(git: GitDataStandin, series: string, branch = 'bellgate
 export const ids = (h: History | undefined): string[] => (h?.runs ?? []).map((r) => r.id);
 
 export async function storeRejection(promise: Promise<unknown>): Promise<StoreError> {
-  const error = await promise.then(() => undefined, (e: unknown) => e);
+  const error = await promise.then(
+    () => undefined,
+    (e: unknown) => e,
+  );
   expect(error).toBeInstanceOf(StoreError);
   return error as StoreError;
 }

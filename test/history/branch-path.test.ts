@@ -19,9 +19,30 @@ function gitAccepts(name: string): boolean {
 
 describe('dataBranchName', () => {
   const names = [
-    'bellgate-data', 'perf/history', 'a.b', 'x_y-z/1.2', 'ünïcode',
-    'a..b', 'a b', 'a~1', 'a^', 'a:b', 'a?', 'a*', 'a[b', 'a\\b', '-lead', 'a/.hidden', 'a.lock', 'a/b.lock/c',
-    'a//b', 'trail/', 'dot.', 'a@{1}', 'tab\there', 'del\u007f',
+    'bellgate-data',
+    'perf/history',
+    'a.b',
+    'x_y-z/1.2',
+    'ünïcode',
+    'a..b',
+    'a b',
+    'a~1',
+    'a^',
+    'a:b',
+    'a?',
+    'a*',
+    'a[b',
+    'a\\b',
+    '-lead',
+    'a/.hidden',
+    'a.lock',
+    'a/b.lock/c',
+    'a//b',
+    'trail/',
+    'dot.',
+    'a@{1}',
+    'tab\there',
+    'del\u007f',
   ];
   it.each(names)('agrees with git check-ref-format --branch on %j', (name) => {
     const ours = (() => {
@@ -61,7 +82,7 @@ describe('seriesFilePath', () => {
   });
 });
 
-describe('the stand-in\'s blob ids', () => {
+describe("the stand-in's blob ids", () => {
   it('match git hash-object (the real object id format)', () => {
     for (const text of ['hello\n', '', '{"schema":"bellgate.history/2"}']) {
       const git = execFileSync('git', ['hash-object', '--stdin'], { input: text }).toString().trim();

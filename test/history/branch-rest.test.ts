@@ -18,10 +18,14 @@ afterAll(async () => {
   await git.close();
 });
 
-const client = (url: string, retries = 2, timeoutMs = 2000) => createGitDataClient({ token: TOKEN, baseUrl: url, owner: 'acme', repo: 'router', retries, unitMs: 1, timeoutMs });
+const client = (url: string, retries = 2, timeoutMs = 2000) =>
+  createGitDataClient({ token: TOKEN, baseUrl: url, owner: 'acme', repo: 'router', retries, unitMs: 1, timeoutMs });
 
 async function failure(promise: Promise<unknown>): Promise<GitDataError> {
-  const e = await promise.then(() => undefined, (x: unknown) => x);
+  const e = await promise.then(
+    () => undefined,
+    (x: unknown) => x,
+  );
   expect(e).toBeInstanceOf(GitDataError);
   return e as GitDataError;
 }
@@ -42,7 +46,9 @@ describe('createGitDataClient', () => {
   it('reads a missing branch as undefined and a refused ref update as a conflict', async () => {
     const api = client(git.url);
     expect(await api.getBranchHead('nope')).toBeUndefined();
-    const tree = await api.createTree([{ path: 'bellgate/x.json', mode: '100644', type: 'blob', sha: await api.createBlob('{}') }]);
+    const tree = await api.createTree([
+      { path: 'bellgate/x.json', mode: '100644', type: 'blob', sha: await api.createBlob('{}') },
+    ]);
     const root = await api.createCommit('one', tree, []);
     await api.createBranch('data', root);
     expect(await api.getBranchHead('data')).toBe(root);
@@ -65,23 +71,42 @@ describe('createGitDataClient', () => {
     ['drop-before', /branch|fetch|socket|other side|terminated/i],
     ['truncate', /cut short|terminated|closed|fetch failed/i],
     ['slow', /no answer within 200 ms/],
-  ] as [FaultKind, RegExp][])('retries %s a bounded number of times, then reports it as transient', async (kind, message) => {
-    const proxy = await startFaultProxy({ target: git.url, rate: 1, seed: 3, kinds: [kind], slowMs: 1500, retryAfter: 0 });
-    try {
-      // Only the slow case may time out; the others get a generous timeout so a busy machine
-      // cannot turn their answer into a timeout.
-      const e = await failure(client(proxy.url, 2, kind === 'slow' ? 200 : 10_000).getBranchHead('data'));
-      expect(e.transient).toBe(true);
-      expect(e.message).toMatch(message);
-      expect(proxy.requests).toBe(3);
-    } finally {
-      await proxy.close();
-    }
-  });
+  ] as [FaultKind, RegExp][])(
+    'retries %s a bounded number of times, then reports it as transient',
+    async (kind, message) => {
+      const proxy = await startFaultProxy({
+        target: git.url,
+        rate: 1,
+        seed: 3,
+        kinds: [kind],
+        slowMs: 1500,
+        retryAfter: 0,
+      });
+      try {
+        // Only the slow case may time out; the others get a generous timeout so a busy machine
+        // cannot turn their answer into a timeout.
+        const e = await failure(client(proxy.url, 2, kind === 'slow' ? 200 : 10_000).getBranchHead('data'));
+        expect(e.transient).toBe(true);
+        expect(e.message).toMatch(message);
+        expect(proxy.requests).toBe(3);
+      } finally {
+        await proxy.close();
+      }
+    },
+  );
 
   it('gets through when half of all calls fail, with enough retries, and returns the right answers', async () => {
     const proxy = await startFaultProxy({ target: git.url, rate: 0.5, seed: 11, slowMs: 1000, retryAfter: 0 });
-    const api = createGitDataClient({ token: TOKEN, baseUrl: proxy.url, owner: 'acme', repo: 'router', retries: 12, unitMs: 1, timeoutMs: 250, random: seededRandom(5) });
+    const api = createGitDataClient({
+      token: TOKEN,
+      baseUrl: proxy.url,
+      owner: 'acme',
+      repo: 'router',
+      retries: 12,
+      unitMs: 1,
+      timeoutMs: 250,
+      random: seededRandom(5),
+    });
     try {
       for (let i = 0; i < 10; i++) {
         const text = `{"n":${i}}`;

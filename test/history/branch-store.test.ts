@@ -58,7 +58,7 @@ describe('createBranchStore', () => {
     expect(git.state.refs.get('refs/heads/bellgate-data')).toBe(head);
   });
 
-  it('on a refused ref update re-reads and keeps both writers\' runs, even one older than all of its own', async () => {
+  it("on a refused ref update re-reads and keeps both writers' runs, even one older than all of its own", async () => {
     const series = 'race';
     const first = branchStore(git.url, series);
     await first.save(appendRun(await first.load(), infoOf('5-1', 5), runOf(10)), 0);
@@ -73,7 +73,7 @@ describe('createBranchStore', () => {
     expect(ids(onBranch(git, series))).toEqual(['3-1', '5-1', '7-1']);
   });
 
-  it('keeps a trim on purpose while keeping a concurrent writer\'s new run', async () => {
+  it("keeps a trim on purpose while keeping a concurrent writer's new run", async () => {
     const series = 'trim';
     const seed = branchStore(git.url, series);
     let h = await seed.load();
@@ -92,7 +92,9 @@ describe('createBranchStore', () => {
     const store = branchStore(git.url, 'trim');
     const h = await store.load();
     const head = git.state.refs.get('refs/heads/bellgate-data');
-    const error = await storeRejection(store.save(appendRun(emptyHistory('trim'), infoOf('9-1', 9), runOf(1)), h.runs.length));
+    const error = await storeRejection(
+      store.save(appendRun(emptyHistory('trim'), infoOf('9-1', 9), runOf(1)), h.runs.length),
+    );
     expect(error.message).toMatch(/would be lost/);
     // A caller that passes 0 as readCount is still held to what this store loaded.
     await storeRejection(store.save(appendRun(emptyHistory('trim'), infoOf('9-1', 9), runOf(1)), 0));
@@ -106,18 +108,29 @@ describe('createBranchStore', () => {
     await store.save(appendRun(await store.load(), infoOf('1-1', 1), runOf(1)), 0);
     // Corrupt the file through the API itself: a commit with a blob that is not JSON.
     const api = await import('../../src/history/branch-rest.js');
-    const client = api.createGitDataClient({ token: TOKEN, baseUrl: git.url, owner: 'acme', repo: 'router', unitMs: 1 });
+    const client = api.createGitDataClient({
+      token: TOKEN,
+      baseUrl: git.url,
+      owner: 'acme',
+      repo: 'router',
+      unitMs: 1,
+    });
     const head = (await client.getBranchHead('bellgate-data')) as string;
-    const tree = await client.createTree([{ path, mode: '100644', type: 'blob', sha: await client.createBlob('{"schema": "bellgate.history/2", "ser') }], await client.getCommitTree(head));
+    const tree = await client.createTree(
+      [{ path, mode: '100644', type: 'blob', sha: await client.createBlob('{"schema": "bellgate.history/2", "ser') }],
+      await client.getCommitTree(head),
+    );
     await client.updateBranch('bellgate-data', await client.createCommit('corrupt', tree, [head]));
     const broken = git.state.refs.get('refs/heads/bellgate-data');
     const loadError = await storeRejection(branchStore(git.url, series).load());
     expect(loadError.message).toMatch(/not a readable history/);
-    await storeRejection(branchStore(git.url, series).save(appendRun(emptyHistory(series), infoOf('2-1', 2), runOf(2)), 0));
+    await storeRejection(
+      branchStore(git.url, series).save(appendRun(emptyHistory(series), infoOf('2-1', 2), runOf(2)), 0),
+    );
     expect(git.state.refs.get('refs/heads/bellgate-data')).toBe(broken);
   });
 
-  it('refuses to save the history of another series into this series\' file', async () => {
+  it("refuses to save the history of another series into this series' file", async () => {
     const store = branchStore(git.url, 'series-a');
     await storeRejection(store.save(appendRun(emptyHistory('series-b'), infoOf('1-1', 1), runOf(1)), 0));
   });
@@ -138,13 +151,17 @@ describe('createBranchStore', () => {
     const proxy = await startFaultProxy({ target: git.url, rate: 1, seed: 1, kinds: ['502'] });
     try {
       const store = branchStore(proxy.url, 'series-a', { attempts: 3 }, { retries: 2 });
-      const error = await storeRejection(store.save(appendRun(emptyHistory('series-a'), infoOf('4-1', 4), runOf(1)), 0));
+      const error = await storeRejection(
+        store.save(appendRun(emptyHistory('series-a'), infoOf('4-1', 4), runOf(1)), 0),
+      );
       expect(error.message).toMatch(/gave up after 3 tries/);
       // Each try stops at its first call (the branch head), which is tried 1 + 2 times.
       expect(proxy.requests).toBe(3 * 3);
       expect(proxy.injected.get('502')).toBe(9);
       // A load is retried the same way: 2 tries of 1 + 1 calls.
-      const loadError = await storeRejection(branchStore(proxy.url, 'series-a', { attempts: 2 }, { retries: 1 }).load());
+      const loadError = await storeRejection(
+        branchStore(proxy.url, 'series-a', { attempts: 2 }, { retries: 1 }).load(),
+      );
       expect(loadError.message).toMatch(/cannot read the data branch.*502/);
       expect(proxy.requests).toBe(9 + 2 * 2);
     } finally {

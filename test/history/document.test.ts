@@ -20,7 +20,13 @@ function inputError(fn: () => unknown): InputError {
 }
 
 const v2 = (body: Record<string, unknown>): string =>
-  JSON.stringify({ schema: 'bellgate.history/2', series: 's', runs: { id: ['1', '2'] }, metrics: { names: ['m'], values: [[1, 2]] }, ...body });
+  JSON.stringify({
+    schema: 'bellgate.history/2',
+    series: 's',
+    runs: { id: ['1', '2'] },
+    metrics: { names: ['m'], values: [[1, 2]] },
+    ...body,
+  });
 
 describe('parseHistory / serializeHistory', () => {
   it('reads the hand-written version-2 fixture as the layout documented in document.ts', () => {
@@ -56,7 +62,11 @@ describe('parseHistory / serializeHistory', () => {
 
   it('keeps IEEE-754 extremes exactly: Number.MAX_VALUE, the smallest subnormal 5e-324, -0 read as 0', () => {
     // ECMA-262 Number.MAX_VALUE = 1.7976931348623157e308, Number.MIN_VALUE = 5e-324 (IEEE 754 binary64).
-    const h: History = { series: 's', runs: [{ id: 'a' }, { id: 'b' }, { id: 'c' }], columns: new Map([['x', { values: [1.7976931348623157e308, 5e-324, 0.1] }]]) };
+    const h: History = {
+      series: 's',
+      runs: [{ id: 'a' }, { id: 'b' }, { id: 'c' }],
+      columns: new Map([['x', { values: [1.7976931348623157e308, 5e-324, 0.1] }]]),
+    };
     const back = parseHistory(serializeHistory(h), 'h.json');
     expect(back.columns.get('x')?.values).toEqual([Number.MAX_VALUE, Number.MIN_VALUE, 0.1]);
   });
@@ -65,19 +75,27 @@ describe('parseHistory / serializeHistory', () => {
     const h: History = {
       series: 's',
       runs: [{ id: '1' }],
-      columns: new Map([['__proto__', { unit: 'ms', values: [3] }], ['constructor', { values: [4] }], ['toString', { values: [NaN] }]]),
+      columns: new Map([
+        ['__proto__', { unit: 'ms', values: [3] }],
+        ['constructor', { values: [4] }],
+        ['toString', { values: [NaN] }],
+      ]),
     };
     const back = parseHistory(serializeHistory(h), 'h.json');
     expect([...back.columns.keys()]).toEqual(['__proto__', 'constructor', 'toString']);
     expect(back.columns.get('__proto__')).toEqual({ unit: 'ms', values: [3] });
-    const v1 = '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"1","values":{"__proto__":3,"constructor":4},"units":{"__proto__":"ms"}}]}';
+    const v1 =
+      '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"1","values":{"__proto__":3,"constructor":4},"units":{"__proto__":"ms"}}]}';
     const fromV1 = parseHistory(v1, 'v1.json');
     expect(fromV1.columns.get('__proto__')).toEqual({ unit: 'ms', values: [3] });
     expect(({} as Record<string, unknown>).polluted).toBeUndefined();
   });
 
   it('reads a document with a byte-order mark and without the optional columns', () => {
-    const h = parseHistory('\uFEFF{"schema":"bellgate.history/2","series":"s","runs":{"id":["1"]},"metrics":{"names":["m"],"values":[[null]]}}', 'h.json');
+    const h = parseHistory(
+      '\uFEFF{"schema":"bellgate.history/2","series":"s","runs":{"id":["1"]},"metrics":{"names":["m"],"values":[[null]]}}',
+      'h.json',
+    );
     expect(h).toEqual({ series: 's', runs: [{ id: '1' }], columns: new Map([['m', { values: [NaN] }]]) });
     expect(serializeHistory(emptyHistory('e'))).toContain('"runs":{"id":[],"sha":[],"ref":[],"event":[],"time":[]}');
   });
@@ -89,24 +107,82 @@ describe('parseHistory / serializeHistory', () => {
       ['truncated JSON', fixture('v2-small.json').slice(0, 200), /^h\.json:2:148$/, /not valid JSON/],
       ['empty file', '', /^h\.json:1:1$/, /not valid JSON/],
       ['newer version', v2({ schema: 'bellgate.history/3' }), /^h\.json at schema$/, /newer Bellgate/],
-      ['unknown version', v2({ schema: 'bellgate.history/0' }), /^h\.json at schema$/, /unknown history document version 0/],
+      [
+        'unknown version',
+        v2({ schema: 'bellgate.history/0' }),
+        /^h\.json at schema$/,
+        /unknown history document version 0/,
+      ],
       ['no schema', '{"series":"s"}', /^h\.json at schema$/, /not a Bellgate history document/],
       ['foreign schema', v2({ schema: 'other/2' }), /^h\.json at schema$/, /not a Bellgate history document/],
       ['not an object', '[1,2]', /^h\.json$/, /must be a JSON object/],
       ['duplicated run id', v2({ runs: { id: ['1', '1'] } }), /^h\.json at runs\.id\[1\]$/, /appears twice/],
-      ['NaN written as a string', v2({ metrics: { names: ['m'], values: [[1, 'NaN']] } }), /at metrics\.values\[0\]\[1\]$/, /number or null/],
-      ['Infinity written as a string', v2({ metrics: { names: ['m'], values: [['Infinity', 1]] } }), /at metrics\.values\[0\]\[0\]$/, /number or null/],
+      [
+        'NaN written as a string',
+        v2({ metrics: { names: ['m'], values: [[1, 'NaN']] } }),
+        /at metrics\.values\[0\]\[1\]$/,
+        /number or null/,
+      ],
+      [
+        'Infinity written as a string',
+        v2({ metrics: { names: ['m'], values: [['Infinity', 1]] } }),
+        /at metrics\.values\[0\]\[0\]$/,
+        /number or null/,
+      ],
       ['wrong type of series', v2({ series: 7 }), /at series$/, /series must be a string/],
-      ['ragged column', v2({ metrics: { names: ['m'], values: [[1]] } }), /at metrics\.values\[0\]$/, /one entry per run \(2\)/],
-      ['values not matching names', v2({ metrics: { names: ['m', 'n'], values: [[1, 2]] } }), /at metrics\.values$/, /one column per name/],
-      ['units too short', v2({ metrics: { names: ['m'], units: [], values: [[1, 2]] } }), /at metrics\.units$/, /as long as metrics\.names/],
-      ['number as unit', v2({ metrics: { names: ['m'], units: [5], values: [[1, 2]] } }), /at metrics\.units\[0\]$/, /unit must be a string/],
-      ['duplicated metric name', v2({ metrics: { names: ['m', 'm'], values: [[1, 2], [3, 4]] } }), /at metrics\.names\[1\]$/, /appears twice/],
+      [
+        'ragged column',
+        v2({ metrics: { names: ['m'], values: [[1]] } }),
+        /at metrics\.values\[0\]$/,
+        /one entry per run \(2\)/,
+      ],
+      [
+        'values not matching names',
+        v2({ metrics: { names: ['m', 'n'], values: [[1, 2]] } }),
+        /at metrics\.values$/,
+        /one column per name/,
+      ],
+      [
+        'units too short',
+        v2({ metrics: { names: ['m'], units: [], values: [[1, 2]] } }),
+        /at metrics\.units$/,
+        /as long as metrics\.names/,
+      ],
+      [
+        'number as unit',
+        v2({ metrics: { names: ['m'], units: [5], values: [[1, 2]] } }),
+        /at metrics\.units\[0\]$/,
+        /unit must be a string/,
+      ],
+      [
+        'duplicated metric name',
+        v2({
+          metrics: {
+            names: ['m', 'm'],
+            values: [
+              [1, 2],
+              [3, 4],
+            ],
+          },
+        }),
+        /at metrics\.names\[1\]$/,
+        /appears twice/,
+      ],
       ['sha column too short', v2({ runs: { id: ['1', '2'], sha: ['a'] } }), /at runs\.sha$/, /as long as runs\.id/],
       ['empty run id', v2({ runs: { id: ['1', ''] } }), /at runs\.id\[1\]$/, /non-empty string/],
       ['runs as an array in version 2', v2({ runs: [] }), /at runs$/, /object of columns/],
-      ['version-1 value as text', '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"1","values":{"a/b":"12"}}]}', /at runs\[0\]\.values\["a\/b"\]$/, /finite number or null/],
-      ['version-1 duplicated id', '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"1","values":{}},{"id":"1","values":{}}]}', /at runs\[1\]\.id$/, /appears twice/],
+      [
+        'version-1 value as text',
+        '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"1","values":{"a/b":"12"}}]}',
+        /at runs\[0\]\.values\["a\/b"\]$/,
+        /finite number or null/,
+      ],
+      [
+        'version-1 duplicated id',
+        '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"1","values":{}},{"id":"1","values":{}}]}',
+        /at runs\[1\]\.id$/,
+        /appears twice/,
+      ],
     ];
     for (const [title, text, where, message] of cases) {
       it(title, () => {
@@ -131,7 +207,15 @@ describe('parseHistory / serializeHistory', () => {
         v2({}).replace('[[1,2]]', '[[1,1e999]]'),
         v2({}).replace('[[1,2]]', '[[1,-1e999]]'),
         v2({ metrics: { names: ['a', 'b'], values: [[1, 2], [3]] } }),
-        v2({ metrics: { names: ['a', 'b'], values: [[1, 2], [3, 4, 5]] } }),
+        v2({
+          metrics: {
+            names: ['a', 'b'],
+            values: [
+              [1, 2],
+              [3, 4, 5],
+            ],
+          },
+        }),
         v2({ metrics: { names: ['a'], values: [[1, 1e308]] } }).replace('1e+308', '1e309'),
       ];
       for (const text of texts) {
@@ -143,13 +227,25 @@ describe('parseHistory / serializeHistory', () => {
 
     it('arbitrary text throws only InputError (fast-check)', () => {
       fc.assert(
-        fc.property(fc.oneof(fc.string(), fc.json(), fc.jsonValue().map((v) => JSON.stringify({ schema: 'bellgate.history/2', ...(typeof v === 'object' && v !== null && !Array.isArray(v) ? v : { runs: v }) }))), (text) => {
-          try {
-            parseHistory(text, 'h.json');
-          } catch (error) {
-            expect(error).toBeInstanceOf(InputError);
-          }
-        }),
+        fc.property(
+          fc.oneof(
+            fc.string(),
+            fc.json(),
+            fc.jsonValue().map((v) =>
+              JSON.stringify({
+                schema: 'bellgate.history/2',
+                ...(typeof v === 'object' && v !== null && !Array.isArray(v) ? v : { runs: v }),
+              }),
+            ),
+          ),
+          (text) => {
+            try {
+              parseHistory(text, 'h.json');
+            } catch (error) {
+              expect(error).toBeInstanceOf(InputError);
+            }
+          },
+        ),
         { numRuns: 500 },
       );
     });

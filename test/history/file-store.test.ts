@@ -8,8 +8,16 @@ import { createFileStore, HISTORY_FILE_LIMIT } from '../../src/history/file-stor
 import { appendRun, trimHistory } from '../../src/history/merge.js';
 import { StoreError } from '../../src/history/store.js';
 
-const run = (value: number): Run => ({ metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]), meta: new Map() });
-const info = (n: number) => ({ id: `${8100 + n}-1`, time: new Date(Date.UTC(2026, 2, n, 10)).toISOString(), ref: 'refs/heads/main', event: 'push' });
+const run = (value: number): Run => ({
+  metrics: new Map([['build/compile', { value, unit: 's', count: 1 }]]),
+  meta: new Map(),
+});
+const info = (n: number) => ({
+  id: `${8100 + n}-1`,
+  time: new Date(Date.UTC(2026, 2, n, 10)).toISOString(),
+  ref: 'refs/heads/main',
+  event: 'push',
+});
 
 let root: string;
 beforeAll(async () => {
@@ -20,7 +28,10 @@ afterAll(async () => {
 });
 
 async function rejection(promise: Promise<unknown>): Promise<StoreError> {
-  const error = await promise.then(() => undefined, (e: unknown) => e);
+  const error = await promise.then(
+    () => undefined,
+    (e: unknown) => e,
+  );
   expect(error).toBeInstanceOf(StoreError);
   return error as StoreError;
 }
@@ -53,7 +64,9 @@ describe('createFileStore', () => {
 
   it('a corrupt file is a StoreError on load and on save, and its bytes are kept', async () => {
     const path = join(root, 'corrupt.json');
-    const bad = serializeHistory(appendRun(await createFileStore(join(root, 'x.json'), 'linux-x64').load(), info(1), run(1))).slice(0, 120);
+    const bad = serializeHistory(
+      appendRun(await createFileStore(join(root, 'x.json'), 'linux-x64').load(), info(1), run(1)),
+    ).slice(0, 120);
     await writeFile(path, bad);
     const store = createFileStore(path, 'linux-x64');
     const onLoad = await rejection(store.load());
@@ -85,26 +98,34 @@ describe('createFileStore', () => {
     await rejection(createFileStore(path, 'windows').load());
     await rejection(store.save({ ...h, series: 'windows' }, 3));
     const loaded = await store.load();
-    const lost = await rejection(store.save({ ...loaded, runs: loaded.runs.slice(1), columns: new Map([['build/compile', { values: [2, 3] }]]) }, 3));
+    const lost = await rejection(
+      store.save(
+        { ...loaded, runs: loaded.runs.slice(1), columns: new Map([['build/compile', { values: [2, 3] }]]) },
+        3,
+      ),
+    );
     expect(lost.message).toMatch(/1 runs would be lost/);
     await store.save(trimHistory(loaded, 2), 3); // trimming explains the shrink
     expect((await store.load()).runs.map((r) => r.id)).toEqual(['8102-1', '8103-1']);
   });
 
   // root ignores folder permissions, so there is nothing to observe when the suite runs as root
-  it.skipIf(process.getuid?.() === 0)('a folder it cannot write to is a StoreError, and no temp file is left', async () => {
-    const folder = join(root, 'locked');
-    await mkdir(folder);
-    await chmod(folder, 0o500);
-    try {
-      const store = createFileStore(join(folder, 'history.json'), 's');
-      const error = await rejection(store.save(appendRun(await store.load(), info(1), run(1)), 0));
-      expect(error.message).toMatch(/cannot write/);
-      expect(await readdir(folder)).toEqual([]);
-    } finally {
-      await chmod(folder, 0o700);
-    }
-  });
+  it.skipIf(process.getuid?.() === 0)(
+    'a folder it cannot write to is a StoreError, and no temp file is left',
+    async () => {
+      const folder = join(root, 'locked');
+      await mkdir(folder);
+      await chmod(folder, 0o500);
+      try {
+        const store = createFileStore(join(folder, 'history.json'), 's');
+        const error = await rejection(store.save(appendRun(await store.load(), info(1), run(1)), 0));
+        expect(error.message).toMatch(/cannot write/);
+        expect(await readdir(folder)).toEqual([]);
+      } finally {
+        await chmod(folder, 0o700);
+      }
+    },
+  );
 
   it('a file name near the 255-byte limit still saves (the temp name stays short)', async () => {
     const path = join(root, `${'h'.repeat(250)}.json`);
@@ -115,7 +136,9 @@ describe('createFileStore', () => {
 
   it('a path that is a folder, or under a file, is a StoreError, not a crash', async () => {
     await writeFile(join(root, 'plain'), 'x');
-    expect((await rejection(createFileStore(join(root, 'plain', 'h.json'), 's').load())).message).toMatch(/cannot read/);
+    expect((await rejection(createFileStore(join(root, 'plain', 'h.json'), 's').load())).message).toMatch(
+      /cannot read/,
+    );
     const error = await rejection(createFileStore(root, 's').load());
     expect(error.message).toMatch(/cannot read/);
   });
@@ -135,7 +158,9 @@ describe('createFileStore', () => {
     expect(onLoad.message).toContain('limit of 500.0 MiB');
     expect(onLoad.message).not.toMatch(/Invalid string length/);
     expect(onLoad.fix).toMatch(/lower `keep`.*split the series/);
-    const onSave = await rejection(store.save(appendRun(await createFileStore(join(root, 'none.json'), 'linux-x64').load(), info(1), run(1)), 0));
+    const onSave = await rejection(
+      store.save(appendRun(await createFileStore(join(root, 'none.json'), 'linux-x64').load(), info(1), run(1)), 0),
+    );
     expect(onSave.message).toContain('629145600 bytes');
     expect((await stat(path)).size).toBe(size);
     await rm(path);
@@ -204,7 +229,10 @@ describe('createFileStore', () => {
 
   it('another writer (another process) saved between load and save: both runs are kept', async () => {
     const path = join(root, 'other-writer.json');
-    await createFileStore(path, 'linux-x64').save(appendRun({ series: 'linux-x64', runs: [], columns: new Map() }, info(1), run(1)), 0);
+    await createFileStore(path, 'linux-x64').save(
+      appendRun({ series: 'linux-x64', runs: [], columns: new Map() }, info(1), run(1)),
+      0,
+    );
     const mine = createFileStore(path, 'linux-x64');
     const theirs = createFileStore(path, 'linux-x64');
     const start = await mine.load();

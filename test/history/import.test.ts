@@ -25,7 +25,12 @@ describe('parseImportRuns: JSON Lines', () => {
     const { runs, skipped } = parseImportRuns(text, 'runs.jsonl');
     expect(runs.map((r) => r.info.id)).toEqual(['8101-1', '8102-1', '8105-1', '8107']);
     // RFC 3339 offsets are normalised to UTC: 10:00+01:00 is 09:00Z
-    expect(runs[1]?.info).toEqual({ id: '8102-1', time: '2026-03-02T09:00:00.000Z', sha: 'bbb', ref: 'refs/heads/main' });
+    expect(runs[1]?.info).toEqual({
+      id: '8102-1',
+      time: '2026-03-02T09:00:00.000Z',
+      sha: 'bbb',
+      ref: 'refs/heads/main',
+    });
     expect(runs[1]?.units.get('bundle/app.js.gz')).toBe('B');
     expect([...(runs[2]?.metrics ?? [])]).toEqual([['__proto__', 3]]);
     expect(runs[3]?.units.get('a')).toBe('ms');
@@ -51,7 +56,8 @@ describe('parseImportRuns: JSON Lines', () => {
   });
 
   it('a run id given twice: the later line is kept and the earlier one is noted', () => {
-    const twice = '{"id":"1","time":"2026-03-01","metrics":{"a":1}}\n{"id":"1","time":"2026-03-01","metrics":{"a":2}}\n';
+    const twice =
+      '{"id":"1","time":"2026-03-01","metrics":{"a":1}}\n{"id":"1","time":"2026-03-01","metrics":{"a":2}}\n';
     const parsed = parseImportRuns(twice, 'r.jsonl');
     expect(parsed.runs.map((r) => r.metrics.get('a'))).toEqual([2]);
     expect(parsed.skipped).toEqual([{ where: 'r.jsonl:1', reason: expect.stringMatching(/appears again on line 2/) }]);
@@ -73,9 +79,20 @@ describe('parseImportRuns: CSV', () => {
     ].join('\r\n');
     const parsed = parseImportRuns(csv, 'runs.csv');
     expect(parsed.runs.map((r) => r.info.id)).toEqual(['8101-1', '8102-1']);
-    expect([...(parsed.runs[1]?.metrics ?? [])]).toEqual([['build/compile', 40.5], ['bundle/app.js,gz', 40211]]);
+    expect([...(parsed.runs[1]?.metrics ?? [])]).toEqual([
+      ['build/compile', 40.5],
+      ['bundle/app.js,gz', 40211],
+    ]);
     expect(parsed.runs[1]?.units.get('bundle/app.js,gz')).toBe('B');
-    expect(parsed.skipped.map((s) => s.where)).toEqual(['runs.csv:5', 'runs.csv:6', 'runs.csv:7', 'runs.csv:8', 'runs.csv:9', 'runs.csv', 'runs.csv']);
+    expect(parsed.skipped.map((s) => s.where)).toEqual([
+      'runs.csv:5',
+      'runs.csv:6',
+      'runs.csv:7',
+      'runs.csv:8',
+      'runs.csv:9',
+      'runs.csv',
+      'runs.csv',
+    ]);
     expect(parsed.skipped.map((s) => s.reason)).toEqual([
       expect.stringMatching(/has time .* on an earlier row/),
       expect.stringMatching(/"NaN" is not a number/),
@@ -93,20 +110,47 @@ describe('parseImportRuns: CSV', () => {
   it('notes a metric given twice for one run (long form); the later row counts', () => {
     const parsed = parseImportRuns('id,time,name,value\n1,2026-03-01,a,1\n1,2026-03-01,a,2\n', 'd.csv');
     expect(parsed.runs[0]?.metrics.get('a')).toBe(2);
-    expect(parsed.skipped).toEqual([{ where: 'd.csv:3', reason: expect.stringMatching(/"a" of run "1" was given before/) }]);
+    expect(parsed.skipped).toEqual([
+      { where: 'd.csv:3', reason: expect.stringMatching(/"a" of run "1" was given before/) },
+    ]);
   });
 
   it('reads the wide form (one row per run), units from "name [unit]" headers, empty cells as missing', () => {
-    const csv = ['ID,Time,SHA,Ref,build/compile [s],route/match-static [ns],tiles', '8101-1,2026-03-01T10:00:00Z,aaa,,41.25,,3', '8102-1,2026-03-02 10:00,bbb,main,40.5,412.5,', '8103-1,2026-03-03,ccc,main,abc,1,2'].join('\n');
+    const csv = [
+      'ID,Time,SHA,Ref,build/compile [s],route/match-static [ns],tiles',
+      '8101-1,2026-03-01T10:00:00Z,aaa,,41.25,,3',
+      '8102-1,2026-03-02 10:00,bbb,main,40.5,412.5,',
+      '8103-1,2026-03-03,ccc,main,abc,1,2',
+    ].join('\n');
     const parsed = parseImportRuns(csv, 'wide.csv');
     expect(parsed.runs.map((r) => [r.info.id, [...r.metrics]])).toEqual([
-      ['8101-1', [['build/compile', 41.25], ['tiles', 3]]],
-      ['8102-1', [['build/compile', 40.5], ['route/match-static', 412.5]]],
-      ['8103-1', [['route/match-static', 1], ['tiles', 2]]],
+      [
+        '8101-1',
+        [
+          ['build/compile', 41.25],
+          ['tiles', 3],
+        ],
+      ],
+      [
+        '8102-1',
+        [
+          ['build/compile', 40.5],
+          ['route/match-static', 412.5],
+        ],
+      ],
+      [
+        '8103-1',
+        [
+          ['route/match-static', 1],
+          ['tiles', 2],
+        ],
+      ],
     ]);
     expect(parsed.runs[1]?.info).toEqual({ id: '8102-1', time: '2026-03-02T10:00:00.000Z', sha: 'bbb', ref: 'main' });
     expect(parsed.runs[0]?.units.get('build/compile')).toBe('s');
-    expect(parsed.skipped).toEqual([{ where: 'wide.csv:4', reason: expect.stringMatching(/"build\/compile".*"abc" is not a number/) }]);
+    expect(parsed.skipped).toEqual([
+      { where: 'wide.csv:4', reason: expect.stringMatching(/"build\/compile".*"abc" is not a number/) },
+    ]);
     const outcome = importRuns(stored(), parsed);
     expect(outcome).toMatchObject({ added: 2, updated: 1, unchanged: 0 });
     expect(outcome.history.columns.get('route/match-static')).toEqual({ unit: 'ns', values: [NaN, 412.5, 1] });
@@ -129,7 +173,11 @@ describe('parseImportRuns: CSV', () => {
 describe('importRuns', () => {
   it('accepts a bare list of runs, refuses non-finite values, the later of two copies counts', () => {
     const outcome = importRuns(stored(), [
-      { info: { id: '8101-1', time: '2026-03-01T10:00:00.000Z', sha: 'aaa' }, metrics: new Map([['build/compile', 39]]), units: new Map() },
+      {
+        info: { id: '8101-1', time: '2026-03-01T10:00:00.000Z', sha: 'aaa' },
+        metrics: new Map([['build/compile', 39]]),
+        units: new Map(),
+      },
       { info: { id: '9', time: '2026-03-09T10:00:00.000Z' }, metrics: new Map([['x', Infinity]]), units: new Map() },
       { info: { id: '10', time: '2026-03-10T10:00:00.000Z' }, metrics: new Map([['x', 1]]), units: new Map() },
       { info: { id: '10', time: '2026-03-10T10:00:00.000Z' }, metrics: new Map([['x', 2]]), units: new Map() },

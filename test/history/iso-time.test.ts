@@ -38,7 +38,16 @@ describe('parseIsoTime', () => {
     expect(parseIsoTime('2023-02-29')).toBeUndefined(); // 2023 is not
     expect(parseIsoTime('1900-02-29')).toBeUndefined(); // century not divisible by 400
     expect(parseIsoTime('2000-02-29')).toBe(Date.UTC(2000, 1, 29)); // divisible by 400
-    for (const bad of ['2026-13-01', '2026-04-31', '2026-03-01T24:00:00Z', '2026-03-01T10:61Z', 'March 1, 2026', '1772355600', '', '2026-03-01T10:00:00+25:00']) {
+    for (const bad of [
+      '2026-13-01',
+      '2026-04-31',
+      '2026-03-01T24:00:00Z',
+      '2026-03-01T10:61Z',
+      'March 1, 2026',
+      '1772355600',
+      '',
+      '2026-03-01T10:00:00+25:00',
+    ]) {
       expect(parseIsoTime(bad)).toBeUndefined();
     }
   });

@@ -23,19 +23,27 @@ const day = (d: number): string => new Date(Date.UTC(2026, 2, d, 10)).toISOStrin
 function base(): History {
   return {
     series: 'linux-x64',
-    runs: [{ id: '8101-1', time: day(1) }, { id: '8102-1', time: day(2) }],
+    runs: [
+      { id: '8101-1', time: day(1) },
+      { id: '8102-1', time: day(2) },
+    ],
     columns: new Map([['build/compile', { unit: 's', values: [41.25, 40.875] }]]),
   };
 }
 
 /** value of metric `name` in run `id`, NaN when absent. */
-const valueAt = (h: History, id: string, name: string): number => h.columns.get(name)?.values[h.runs.findIndex((r) => r.id === id)] ?? NaN;
+const valueAt = (h: History, id: string, name: string): number =>
+  h.columns.get(name)?.values[h.runs.findIndex((r) => r.id === id)] ?? NaN;
 
 describe('mergeHistories', () => {
   it('heals two concurrent writers: both appended runs kept, shared runs once', () => {
     const start = base();
     const writerA = appendRun(start, { id: '8103-1', time: day(3) }, run({ 'build/compile': 42 }));
-    const writerB = appendRun(start, { id: '8104-1', time: day(4) }, run({ 'build/compile': 43, 'bundle/app.js.gz': 40211 }, { 'build/compile': 's', 'bundle/app.js.gz': 'B' }));
+    const writerB = appendRun(
+      start,
+      { id: '8104-1', time: day(4) },
+      run({ 'build/compile': 43, 'bundle/app.js.gz': 40211 }, { 'build/compile': 's', 'bundle/app.js.gz': 'B' }),
+    );
     const healed = mergeHistories(writerA, writerB);
     expect(healed.runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8103-1', '8104-1']);
     expect(healed.columns.get('build/compile')?.values).toEqual([41.25, 40.875, 42, 43]);
@@ -50,20 +58,45 @@ describe('mergeHistories', () => {
 
   it('the later copy (b) of a duplicated run id wins, whole', () => {
     const a = base();
-    const b: History = { series: 'linux-x64', runs: [{ id: '8102-1', time: day(2), sha: 'fixed' }], columns: new Map([['route/match', { values: [7] }]]) };
+    const b: History = {
+      series: 'linux-x64',
+      runs: [{ id: '8102-1', time: day(2), sha: 'fixed' }],
+      columns: new Map([['route/match', { values: [7] }]]),
+    };
     const m = mergeHistories(a, b);
-    expect(m.runs).toEqual([{ id: '8101-1', time: day(1) }, { id: '8102-1', time: day(2), sha: 'fixed' }]);
+    expect(m.runs).toEqual([
+      { id: '8101-1', time: day(1) },
+      { id: '8102-1', time: day(2), sha: 'fixed' },
+    ]);
     expect(valueAt(m, '8102-1', 'build/compile')).toBeNaN();
     expect(valueAt(m, '8102-1', 'route/match')).toBe(7);
     expect(valueAt(m, '8101-1', 'build/compile')).toBe(41.25);
   });
 
   it('orders by time then by id, numerically (run 999 before run 1000), untimed runs first', () => {
-    const a: History = { series: 's', runs: [{ id: '1000-1', time: day(5) }, { id: 'late', time: day(9) }], columns: new Map() };
-    const b: History = { series: 's', runs: [{ id: '999-1', time: day(5) }, { id: 'old', time: day(1) }, { id: 'untimed' }], columns: new Map() };
+    const a: History = {
+      series: 's',
+      runs: [
+        { id: '1000-1', time: day(5) },
+        { id: 'late', time: day(9) },
+      ],
+      columns: new Map(),
+    };
+    const b: History = {
+      series: 's',
+      runs: [{ id: '999-1', time: day(5) }, { id: 'old', time: day(1) }, { id: 'untimed' }],
+      columns: new Map(),
+    };
     expect(mergeHistories(a, b).runs.map((r) => r.id)).toEqual(['untimed', 'old', '999-1', '1000-1', 'late']);
     // times in other offsets compare as instants (RFC 3339 5.8: 16:39:57-08:00 is 00:39:57Z the next day)
-    const c: History = { series: 's', runs: [{ id: 'x', time: '1996-12-20T00:39:58Z' }, { id: 'y', time: '1996-12-19T16:39:57-08:00' }], columns: new Map() };
+    const c: History = {
+      series: 's',
+      runs: [
+        { id: 'x', time: '1996-12-20T00:39:58Z' },
+        { id: 'y', time: '1996-12-19T16:39:57-08:00' },
+      ],
+      columns: new Map(),
+    };
     expect(mergeHistories(c, { series: 's', runs: [], columns: new Map() }).runs.map((r) => r.id)).toEqual(['y', 'x']);
   });
 
@@ -94,7 +127,11 @@ describe('mergeHistories', () => {
 describe('appendRun', () => {
   it('adds a column NaN-filled for older runs, records the unit, leaves the input alone', () => {
     const h = base();
-    const next = appendRun(h, { id: '8103-1', time: day(3), sha: 'c7d8' }, run({ 'build/compile': 42.5, 'tiles/render-p95': 0.0183 }, 's'));
+    const next = appendRun(
+      h,
+      { id: '8103-1', time: day(3), sha: 'c7d8' },
+      run({ 'build/compile': 42.5, 'tiles/render-p95': 0.0183 }, 's'),
+    );
     expect(next.runs.at(-1)).toEqual({ id: '8103-1', time: day(3), sha: 'c7d8' });
     expect(next.columns.get('tiles/render-p95')).toEqual({ unit: 's', values: [NaN, NaN, 0.0183] });
     expect(h.runs).toHaveLength(2);
@@ -148,12 +185,29 @@ describe('trimHistory', () => {
 // the merge with a one-run history, so every case must give exactly what that merge gives.
 describe('appendRun equals the merge with a one-run history', () => {
   const slow = (h: History, info: RunInfo, r: Run): History => {
-    const columns = new Map([...r.metrics].map(([name, m]) => [name, m.unit === undefined ? { values: [m.value] } : { unit: m.unit, values: [m.value] }]));
+    const columns = new Map(
+      [...r.metrics].map(([name, m]) => [
+        name,
+        m.unit === undefined ? { values: [m.value] } : { unit: m.unit, values: [m.value] },
+      ]),
+    );
     return mergeHistories(h, { series: h.series, runs: [{ ...info }], columns });
   };
   const runArbitrary = fc
-    .uniqueArray(fc.tuple(metricName(), cell().filter((v) => !Number.isNaN(v)), fc.option(fc.constantFrom('ms', 's', 'B'), { nil: undefined })), { selector: ([n]) => n, maxLength: 5 })
-    .map((entries): Run => ({ metrics: new Map(entries.map(([n, value, unit]) => [n, unit === undefined ? { value, count: 1 } : { value, unit, count: 1 }])), meta: new Map() }));
+    .uniqueArray(
+      fc.tuple(
+        metricName(),
+        cell().filter((v) => !Number.isNaN(v)),
+        fc.option(fc.constantFrom('ms', 's', 'B'), { nil: undefined }),
+      ),
+      { selector: ([n]) => n, maxLength: 5 },
+    )
+    .map((entries): Run => ({
+      metrics: new Map(
+        entries.map(([n, value, unit]) => [n, unit === undefined ? { value, count: 1 } : { value, unit, count: 1 }]),
+      ),
+      meta: new Map(),
+    }));
   // Ordered histories (the merge with an empty one sorts them), sometimes with a trimmed count,
   // and a run that is sometimes new and newest (fast path), sometimes not (merge).
   const cases = fc.record({
@@ -214,7 +268,11 @@ describe('appendRun equals the merge with a one-run history', () => {
   });
 
   it('leaves its input untouched (pure), on the fast path too', () => {
-    const h = appendRun(appendRun(emptyHistory('s'), { id: '1-1', time: '2026-03-01T10:00:00Z' }, run({ a: 1 })), { id: '2-1', time: '2026-03-02T10:00:00Z' }, run({ a: 2 }));
+    const h = appendRun(
+      appendRun(emptyHistory('s'), { id: '1-1', time: '2026-03-01T10:00:00Z' }, run({ a: 1 })),
+      { id: '2-1', time: '2026-03-02T10:00:00Z' },
+      run({ a: 2 }),
+    );
     const before = structuredClone(h);
     const next = appendRun(h, { id: '3-1', time: '2026-03-03T10:00:00Z' }, run({ a: 3, b: 4 }, 'ms'));
     expect(h).toEqual(before);

@@ -30,13 +30,21 @@ function oddText(h: History, noise: number[]): string {
     if (form === 2) return v === 0 ? '-0' : v.toPrecision(17);
     return String(v);
   };
-  const rows = [...h.columns.values()].map((c) => `[${ws()}${c.values.map((v) => `${ws()}${num(v)}${ws()}`).join(',')}]`);
+  const rows = [...h.columns.values()].map(
+    (c) => `[${ws()}${c.values.map((v) => `${ws()}${num(v)}${ws()}`).join(',')}]`,
+  );
   const runs: Record<string, unknown[]> = { id: h.runs.map((r) => r.id) };
-  for (const field of ['sha', 'ref', 'event', 'time'] as const) if (pick() % 3 > 0) runs[field] = h.runs.map((r) => r[field] ?? null);
+  for (const field of ['sha', 'ref', 'event', 'time'] as const)
+    if (pick() % 3 > 0) runs[field] = h.runs.map((r) => r[field] ?? null);
   const names = JSON.stringify([...h.columns.keys()], null, pick() % 3);
   const units = JSON.stringify([...h.columns.values()].map((c) => c.unit ?? null));
   const metrics = `{${ws()}"names"${ws()}:${names},"units":${ws()}${units},${ws()}"values"${ws()}:${ws()}[${ws()}${rows.join(`${ws()},${ws()}`)}${ws()}]${ws()}}`;
-  const parts = ['"schema":"bellgate.history/2"', `"series":${JSON.stringify(h.series)}`, `"runs":${JSON.stringify(runs, null, pick() % 3)}`, `"metrics"${ws()}:${metrics}`];
+  const parts = [
+    '"schema":"bellgate.history/2"',
+    `"series":${JSON.stringify(h.series)}`,
+    `"runs":${JSON.stringify(runs, null, pick() % 3)}`,
+    `"metrics"${ws()}:${metrics}`,
+  ];
   if (pick() % 2 === 1) parts.reverse();
   return `${ws()}{${ws()}${parts.join(`,${ws()}`)}${ws()}}${ws()}`;
 }
@@ -54,7 +62,11 @@ function plain(h: History): unknown {
   return {
     series: h.series,
     runs: h.runs,
-    columns: [...h.columns].map(([name, c]) => [name, c.unit ?? null, c.values.map((v) => (Object.is(v, -0) ? '-0' : String(v)))]),
+    columns: [...h.columns].map(([name, c]) => [
+      name,
+      c.unit ?? null,
+      c.values.map((v) => (Object.is(v, -0) ? '-0' : String(v))),
+    ]),
   };
 }
 
@@ -71,7 +83,9 @@ function agrees(h: History, written: WrittenHistory): boolean {
 }
 
 const runOf = (entries: [string, number, string | undefined][]): Run => ({
-  metrics: new Map(entries.map(([name, value, unit]) => [name, unit === undefined ? { value, count: 1 } : { value, unit, count: 1 }])),
+  metrics: new Map(
+    entries.map(([name, value, unit]) => [name, unit === undefined ? { value, count: 1 } : { value, unit, count: 1 }]),
+  ),
   meta: new Map(),
 });
 
@@ -87,7 +101,9 @@ describe('spliceHistory', () => {
       fc.property(
         historyArbitrary('series "x"'),
         fc.array(fc.nat(), { minLength: 1, maxLength: 40 }),
-        fc.array(fc.tuple(metricName(), finite, fc.option(fc.constantFrom('ms', 'B', 'é'), { nil: undefined })), { maxLength: 6 }),
+        fc.array(fc.tuple(metricName(), finite, fc.option(fc.constantFrom('ms', 'B', 'é'), { nil: undefined })), {
+          maxLength: 6,
+        }),
         fc.constantFrom('new', 'old-id', 'early'),
         fc.option(fc.integer({ min: 1, max: 10 }), { nil: undefined }),
         fc.boolean(),
@@ -95,7 +111,10 @@ describe('spliceHistory', () => {
           const written = readWritten(oddText(h0, noise));
           // appendRun refuses a blank id; any other id already present is replaced (the merge path).
           const id = (kind === 'old-id' ? h0.runs.find((r) => r.id.trim() !== '')?.id : undefined) ?? 'new-run';
-          const info: RunInfo = { id, time: kind === 'early' ? '2019-01-01T00:00:00.000Z' : '2031-01-01T00:00:00.000Z' };
+          const info: RunInfo = {
+            id,
+            time: kind === 'early' ? '2019-01-01T00:00:00.000Z' : '2031-01-01T00:00:00.000Z',
+          };
           // extendInPlace (as record does) pushes onto the very arrays the splice compares with.
           const appended = appendRun(written.history, info, runOf(entries), { extendInPlace });
           if (agrees(keep === undefined ? appended : trimHistory(appended, keep), written)) spliced += 1;
@@ -108,14 +127,21 @@ describe('spliceHistory', () => {
   });
 
   it('the usual record splices: a newest run appended, then trimmed by 0, 1 or 3 runs; values -0, 1e-300 and missing ones intact', () => {
-    const runs: RunInfo[] = Array.from({ length: 5 }, (_, i) => ({ id: `${80 + i}-1`, time: `2026-03-0${i + 1}T10:00:00.000Z` }));
+    const runs: RunInfo[] = Array.from({ length: 5 }, (_, i) => ({
+      id: `${80 + i}-1`,
+      time: `2026-03-0${i + 1}T10:00:00.000Z`,
+    }));
     const text =
       '{"schema":"bellgate.history/2","series":"linux-x64",\n"runs":' +
       JSON.stringify({ id: runs.map((r) => r.id), time: runs.map((r) => r.time) }) +
       ',\n"metrics":{"names":["__proto__","a/\\"b\\"","gone"],"units":["ms",null,null],"values":[\n' +
       '[ 1.5 , -0,1e-300,null,  2 ],\n[null,null,null,null,7E2],\n[9, null ,null,null,null]]}}\n';
     const written = readWritten(text);
-    const next = appendRun(written.history, { id: '90-1', time: '2026-03-09T10:00:00.000Z' }, runOf([['a/"b"', 4.25, undefined]]));
+    const next = appendRun(
+      written.history,
+      { id: '90-1', time: '2026-03-09T10:00:00.000Z' },
+      runOf([['a/"b"', 4.25, undefined]]),
+    );
     for (const keep of [Infinity, 5, 3]) expect(agrees(trimHistory(next, keep), written)).toBe(true);
     // The -0 row is written fresh (as 0, like the generic writer); the others keep their bytes.
     const kept = spliceHistory(next, written)!.toString('utf8');
@@ -131,7 +157,8 @@ describe('spliceHistory', () => {
   it('very long rows (3,000 runs) splice like the generic writer', () => {
     const n = 3000;
     const runs = Array.from({ length: n }, (_, i) => `${i}-1`);
-    const values = (seed: number) => Array.from({ length: n }, (_, i) => ((i * 7919 + seed) % 101 === 0 ? null : ((i * 7919 + seed) % 10007) / 7));
+    const values = (seed: number) =>
+      Array.from({ length: n }, (_, i) => ((i * 7919 + seed) % 101 === 0 ? null : ((i * 7919 + seed) % 10007) / 7));
     const text = `{"schema":"bellgate.history/2","series":"s","runs":{"id":${JSON.stringify(runs)}},"metrics":{"names":["x","y"],"values":[${JSON.stringify(values(1))},\n${JSON.stringify(values(2))}]}}`;
     const written = readWritten(text);
     const next = appendRun(written.history, { id: 'last' }, runOf([['x', 1, undefined]]));
@@ -140,7 +167,8 @@ describe('spliceHistory', () => {
   });
 
   it('declines what is not an append to the document read: runs reordered, the first run dropped from the middle', () => {
-    const text = '{"schema":"bellgate.history/2","series":"s","runs":{"id":["a","b","c"]},"metrics":{"names":["m"],"values":[[1,2,3]]}}';
+    const text =
+      '{"schema":"bellgate.history/2","series":"s","runs":{"id":["a","b","c"]},"metrics":{"names":["m"],"values":[[1,2,3]]}}';
     const written = readWritten(text);
     const h = written.history;
     const reordered: History = { ...h, runs: [h.runs[1]!, h.runs[0]!, h.runs[2]!] };
@@ -150,8 +178,14 @@ describe('spliceHistory', () => {
   });
 
   it('refuses to write a History that cannot be stored, as serializeHistory does', () => {
-    const written = readWritten('{"schema":"bellgate.history/2","series":"s","runs":{"id":["a"]},"metrics":{"names":["m"],"values":[[1]]}}');
-    const bad: History = { series: 's', runs: [{ id: 'a' }, { id: 'b' }], columns: new Map([['m', { values: [1, Infinity] }]]) };
+    const written = readWritten(
+      '{"schema":"bellgate.history/2","series":"s","runs":{"id":["a"]},"metrics":{"names":["m"],"values":[[1]]}}',
+    );
+    const bad: History = {
+      series: 's',
+      runs: [{ id: 'a' }, { id: 'b' }],
+      columns: new Map([['m', { values: [1, Infinity] }]]),
+    };
     expect(() => spliceHistory(bad, written)).toThrow(/holds Infinity, which cannot be stored/);
     expect(() => serializeHistory(bad)).toThrow(/holds Infinity, which cannot be stored/);
     const twice: History = { series: 's', runs: [{ id: 'a' }, { id: 'a' }], columns: new Map() };

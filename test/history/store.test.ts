@@ -11,7 +11,10 @@ const history = (runs: number, trimmed?: number): History => ({
 
 describe('StoreError', () => {
   it('carries the store, the reason and the fix', () => {
-    const e = new StoreError('the artifact list failed', { where: 'artifact bellgate-history', fix: 'grant actions: read' });
+    const e = new StoreError('the artifact list failed', {
+      where: 'artifact bellgate-history',
+      fix: 'grant actions: read',
+    });
     expect(e.name).toBe('StoreError');
     expect(e.store).toBe('artifact bellgate-history');
     expect(e.reason).toBe('the artifact list failed');

@@ -11,7 +11,8 @@ const bytesOf = (text: string): Uint8Array => new TextEncoder().encode(text);
 function reference(text: string): unknown {
   const root = JSON.parse(text.charCodeAt(0) === 0xfeff ? text.slice(1) : text) as { metrics?: { values?: unknown } };
   const values = root.metrics?.values;
-  if (Array.isArray(values)) root.metrics!.values = values.map((row) => (Array.isArray(row) ? row.map((v) => (v === null ? NaN : v)) : row));
+  if (Array.isArray(values))
+    root.metrics!.values = values.map((row) => (Array.isArray(row) ? row.map((v) => (v === null ? NaN : v)) : row));
   return root;
 }
 
@@ -36,12 +37,31 @@ const numberText = fc.oneof(
   fc.double({ noNaN: true, noDefaultInfinity: true, min: -1e6, max: 1e6 }).map((x) => x.toFixed(6)),
   fc.double({ noNaN: true, noDefaultInfinity: true }).map((x) => x.toPrecision(17)),
   fc.integer().map(String),
-  fc.constantFrom('0', '-0', '0.0', '-0.0', '1E5', '1e-300', '5e-324', '1.7976931348623157e308', '1e999', '-1e999',
-    '123456789012345678901234567890', '0.1000000000000000055511151231257827', '9007199254740993', '0.30000000000000004'),
+  fc.constantFrom(
+    '0',
+    '-0',
+    '0.0',
+    '-0.0',
+    '1E5',
+    '1e-300',
+    '5e-324',
+    '1.7976931348623157e308',
+    '1e999',
+    '-1e999',
+    '123456789012345678901234567890',
+    '0.1000000000000000055511151231257827',
+    '9007199254740993',
+    '0.30000000000000004',
+  ),
 );
 const cell = fc.oneof({ weight: 6, arbitrary: numberText }, { weight: 1, arbitrary: fc.constant('null') });
-const row = fc.array(fc.tuple(space, cell, space), { maxLength: 12 }).map((cells) => `[${cells.map(([a, c, b]) => a + c + b).join(',')}]`);
-const nameText = fc.oneof(fc.string(), fc.constantFrom('__proto__', 'values', 'metrics', '"values":[[1]]', 'é/ü', '\u2028', '\\'));
+const row = fc
+  .array(fc.tuple(space, cell, space), { maxLength: 12 })
+  .map((cells) => `[${cells.map(([a, c, b]) => a + c + b).join(',')}]`);
+const nameText = fc.oneof(
+  fc.string(),
+  fc.constantFrom('__proto__', 'values', 'metrics', '"values":[[1]]', 'é/ü', '\u2028', '\\'),
+);
 
 const documentText = fc
   .record({
@@ -60,7 +80,8 @@ const documentText = fc
 
 describe('scanHistoryBytes', () => {
   it('reads a document Bellgate writes the way JSON.parse does (rows of doubles, null as NaN)', () => {
-    const text = '{"schema":"bellgate.history/2","series":"s",\n"runs":{"id":["1","2"]},\n"metrics":{"names":["a","b"],"units":["ms",null],"values":[\n[12.5,null],\n[-0,1e-300]]}}\n';
+    const text =
+      '{"schema":"bellgate.history/2","series":"s",\n"runs":{"id":["1","2"]},\n"metrics":{"names":["a","b"],"units":["ms",null],"values":[\n[12.5,null],\n[-0,1e-300]]}}\n';
     const scanned = scanHistoryBytes(bytesOf(text))!;
     expect(scanned.root).toStrictEqual(reference(text));
     expect(Object.is((scanned.root as { metrics: { values: number[][] } }).metrics.values[1]![0], -0)).toBe(true);
@@ -77,7 +98,8 @@ describe('scanHistoryBytes', () => {
     fc.assert(
       fc.property(fc.array(numberText, { minLength: 1, maxLength: 40 }), (cells) => {
         const text = `{"metrics":{"values":[[${cells.join(',')}]]}}`;
-        const rowRead = (scanHistoryBytes(bytesOf(text))!.root as { metrics: { values: number[][] } }).metrics.values[0]!;
+        const rowRead = (scanHistoryBytes(bytesOf(text))!.root as { metrics: { values: number[][] } }).metrics
+          .values[0]!;
         cells.forEach((c, i) => expect(Object.is(rowRead[i], JSON.parse(c))).toBe(true));
       }),
       { numRuns: 3000 },
@@ -99,10 +121,15 @@ describe('scanHistoryBytes', () => {
 
   it('never accepts a text JSON.parse refuses, and never reads one differently (random damage)', () => {
     fc.assert(
-      fc.property(documentText, fc.nat(), fc.constantFrom('', '"', ',', '[', ']', '{', '}', '\\', 'x', '1', 'n', ':', '-', '.', 'e'), (text, at, insert) => {
-        const i = at % (text.length + 1);
-        parsesLikeJson(text.slice(0, i) + insert + text.slice(i + (at % 3 === 0 ? 1 : 0)));
-      }),
+      fc.property(
+        documentText,
+        fc.nat(),
+        fc.constantFrom('', '"', ',', '[', ']', '{', '}', '\\', 'x', '1', 'n', ':', '-', '.', 'e'),
+        (text, at, insert) => {
+          const i = at % (text.length + 1);
+          parsesLikeJson(text.slice(0, i) + insert + text.slice(i + (at % 3 === 0 ? 1 : 0)));
+        },
+      ),
       { numRuns: 4000 },
     );
   });
@@ -111,11 +138,34 @@ describe('scanHistoryBytes', () => {
     // Rows without spaces take the reader's short road (plainRow); broken tokens must still be refused.
     const token = fc.oneof(
       numberText,
-      fc.constantFrom('null', 'nul', 'nulll', '-', '--1', '01', '1.', '.5', '1e', '1e+', '+1', '0x1', '1.2.3', '', '-0', '0.000001', '999999999999999', '9999999999999999', 'true', '"1"'),
+      fc.constantFrom(
+        'null',
+        'nul',
+        'nulll',
+        '-',
+        '--1',
+        '01',
+        '1.',
+        '.5',
+        '1e',
+        '1e+',
+        '+1',
+        '0x1',
+        '1.2.3',
+        '',
+        '-0',
+        '0.000001',
+        '999999999999999',
+        '9999999999999999',
+        'true',
+        '"1"',
+      ),
     );
     fc.assert(
       fc.property(fc.array(token, { maxLength: 8 }), fc.boolean(), (cells, trailingComma) => {
-        parsesLikeJson(`{"metrics":{"values":[[${cells.join(',')}${trailingComma ? ',' : ''}],[${cells.slice().reverse().join(',')}]]}}`);
+        parsesLikeJson(
+          `{"metrics":{"values":[[${cells.join(',')}${trailingComma ? ',' : ''}],[${cells.slice().reverse().join(',')}]]}}`,
+        );
       }),
       { numRuns: 3000 },
     );

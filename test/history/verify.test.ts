@@ -5,8 +5,11 @@ import { verifyHistory } from '../../src/history/verify.js';
 
 const fixture = (name: string): string => readFileSync(new URL(`../fixtures/history/${name}`, import.meta.url), 'utf8');
 
-const doc = (runs: Record<string, unknown>, metrics: Record<string, unknown>, extra: Record<string, unknown> = {}): string =>
-  JSON.stringify({ schema: 'bellgate.history/2', series: 's', runs, metrics, ...extra });
+const doc = (
+  runs: Record<string, unknown>,
+  metrics: Record<string, unknown>,
+  extra: Record<string, unknown> = {},
+): string => JSON.stringify({ schema: 'bellgate.history/2', series: 's', runs, metrics, ...extra });
 
 describe('verifyHistory', () => {
   it('finds nothing wrong with the fixtures of both versions', () => {
@@ -17,7 +20,14 @@ describe('verifyHistory', () => {
   it('lists every problem of a document at once, each with its JSON path', () => {
     const text = doc(
       { id: ['1', '2', '1', 4], time: ['2026-03-02T00:00:00Z', '2026-03-01T00:00:00Z', 'soon', null] },
-      { names: ['a', 'b', 'a'], values: [[1, 'NaN', null, 2], [1, 2], [0, 0, 0, 0]] },
+      {
+        names: ['a', 'b', 'a'],
+        values: [
+          [1, 'NaN', null, 2],
+          [1, 2],
+          [0, 0, 0, 0],
+        ],
+      },
     ).replace('[1,"NaN",null,2]', '[1,"NaN",null,1e999]');
     const problems = verifyHistory(text, 'h.json');
     expect(problems).toEqual([
@@ -43,9 +53,15 @@ describe('verifyHistory', () => {
   });
 
   it('reports the version problems: missing, unknown, newer', () => {
-    expect(verifyHistory('{"series":"s"}', 'h.json')).toEqual([{ where: 'schema', problem: expect.stringMatching(/not a Bellgate history/) }]);
-    expect(verifyHistory('{"schema":"bellgate.history/0"}', 'h.json')).toEqual([{ where: 'schema', problem: expect.stringMatching(/unknown/) }]);
-    expect(verifyHistory('{"schema":"bellgate.history/12"}', 'h.json')).toEqual([{ where: 'schema', problem: expect.stringMatching(/newer Bellgate/) }]);
+    expect(verifyHistory('{"series":"s"}', 'h.json')).toEqual([
+      { where: 'schema', problem: expect.stringMatching(/not a Bellgate history/) },
+    ]);
+    expect(verifyHistory('{"schema":"bellgate.history/0"}', 'h.json')).toEqual([
+      { where: 'schema', problem: expect.stringMatching(/unknown/) },
+    ]);
+    expect(verifyHistory('{"schema":"bellgate.history/12"}', 'h.json')).toEqual([
+      { where: 'schema', problem: expect.stringMatching(/newer Bellgate/) },
+    ]);
   });
 
   it('reports malformed JSON with line:column', () => {
@@ -74,7 +90,10 @@ describe('verifyHistory', () => {
 
   it('caps a flood of problems with a count of the rest', () => {
     const values = Array.from({ length: 500 }, () => 'x');
-    const problems = verifyHistory(doc({ id: values.map((_, i) => String(i)) }, { names: ['m'], values: [values] }), 'h.json');
+    const problems = verifyHistory(
+      doc({ id: values.map((_, i) => String(i)) }, { names: ['m'], values: [values] }),
+      'h.json',
+    );
     expect(problems).toHaveLength(201);
     expect(problems.at(-1)).toEqual({ where: '', problem: '300 more problems not listed' });
   });
@@ -82,10 +101,19 @@ describe('verifyHistory', () => {
   it('never throws, whatever the text (fast-check)', () => {
     const base = fixture('v2-small.json');
     fc.assert(
-      fc.property(fc.oneof(fc.string(), fc.json(), fc.tuple(fc.nat(base.length), fc.string({ maxLength: 3 })).map(([i, s]) => base.slice(0, i) + s + base.slice(i + 1))), (text) => {
-        const problems = verifyHistory(text, 'h.json');
-        expect(Array.isArray(problems)).toBe(true);
-      }),
+      fc.property(
+        fc.oneof(
+          fc.string(),
+          fc.json(),
+          fc
+            .tuple(fc.nat(base.length), fc.string({ maxLength: 3 }))
+            .map(([i, s]) => base.slice(0, i) + s + base.slice(i + 1)),
+        ),
+        (text) => {
+          const problems = verifyHistory(text, 'h.json');
+          expect(Array.isArray(problems)).toBe(true);
+        },
+      ),
       { numRuns: 500 },
     );
   });

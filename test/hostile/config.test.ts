@@ -24,17 +24,30 @@ afterAll(() => {
 
 const laughs = (levels: number, fan: number): string => {
   const lines = ['a: &a ["lol"]'];
-  for (let i = 1; i <= levels; i++) lines.push(`${String.fromCharCode(97 + i)}: &${String.fromCharCode(97 + i)} [${Array(fan).fill(`*${String.fromCharCode(96 + i)}`).join(', ')}]`);
+  for (let i = 1; i <= levels; i++)
+    lines.push(
+      `${String.fromCharCode(97 + i)}: &${String.fromCharCode(97 + i)} [${Array(fan)
+        .fill(`*${String.fromCharCode(96 + i)}`)
+        .join(', ')}]`,
+    );
   return `${lines.join('\n')}\ndefaults:\n  cutoff: 0.01\n`;
 };
 
 /** [label, text, what the refusal must say (undefined: may be read)] */
 const HAND: Array<[string, string, RegExp | undefined]> = [
   ['billion laughs', laughs(9, 10), /alias|anchor|too many|limit/i],
-  ['alias fan-out as a rule list', `x: &x {match: "a/*", cutoff: 0.05}\nmetrics: [${Array(500).fill('*x').join(', ')}]\n`, /alias|too many|limit|unknown key/i],
+  [
+    'alias fan-out as a rule list',
+    `x: &x {match: "a/*", cutoff: 0.05}\nmetrics: [${Array(500).fill('*x').join(', ')}]\n`,
+    /alias|too many|limit|unknown key/i,
+  ],
   ['alias cycle via merge key', 'defaults: &d\n  <<: *d\n  cutoff: 0.01\n', undefined],
   ['10,000-deep flow nesting', `defaults: ${'['.repeat(10_000)}${']'.repeat(10_000)}\n`, /deep|nest/i],
-  ['100-deep block nesting', `${Array.from({ length: 100 }, (_, i) => `${' '.repeat(i)}k${i}:`).join('\n')} 1\n`, /deep|nest|indent/i],
+  [
+    '100-deep block nesting',
+    `${Array.from({ length: 100 }, (_, i) => `${' '.repeat(i)}k${i}:`).join('\n')} 1\n`,
+    /deep|nest|indent/i,
+  ],
   ['a 20,000-character scalar', `defaults:\n  worse: "${'x'.repeat(20_000)}"\n`, /long|characters|limit/i],
   ['a 2 MB file', `# ${'x'.repeat(2 * 1024 * 1024)}\n`, /MiB|large|limit|characters/i],
   ['cutoff a string', 'defaults:\n  cutoff: "0.01; rm -rf /"\n', /cutoff/],
@@ -53,7 +66,11 @@ const HAND: Array<[string, string, RegExp | undefined]> = [
   ['__proto__ top-level key', '__proto__:\n  polluted: 1\n', /__proto__/],
   ['__proto__ in defaults', 'defaults:\n  __proto__:\n    polluted: 1\n', /__proto__/],
   ['constructor.prototype', 'constructor:\n  prototype:\n    polluted: 1\n', /constructor/],
-  ['merge key bringing __proto__', 'base: &b {__proto__: {polluted: 1}}\ndefaults:\n  <<: *b\n', /__proto__|base|unknown/],
+  [
+    'merge key bringing __proto__',
+    'base: &b {__proto__: {polluted: 1}}\ndefaults:\n  <<: *b\n',
+    /__proto__|base|unknown/,
+  ],
   ['tabs for indentation', 'defaults:\n\tcutoff: 0.01\n', /tab|indent|YAML|syntax/i],
   ['two documents', 'defaults: {}\n---\ndefaults: {}\n', undefined],
   ['custom tag', 'defaults: !!js/function "function(){}"\n', undefined],
@@ -89,20 +106,23 @@ describe('parseConfig on hand-picked hostile files', () => {
 
 describe('config files through the CLI', () => {
   const metrics = work.write('m.json', '{"api/latency": 100}');
-  it.each(HAND.filter(([, , m]) => m !== undefined))('check --config refuses %s with exit 2 at file:line:col', async (_label, text, message) => {
-    const config = work.write(`c${counter.total() + 1}.yml`, text);
-    const r = await bellgate(work.dir, ['check', '--metrics', metrics, '--config', config]);
-    expect(r.code).toBe(2);
-    expect(r.stdout).toBe('');
-    // A file refused for its size before parsing is named without a line; every other refusal has one.
-    expect(r.stderr).toMatch(/\.yml(:\d+:\d+)?: /);
-    expect(r.stderr).toMatch(message!);
-    expect(r.stderr, 'every refusal says what to do').toMatch(/\n  fix: \S/);
-    expect(r.stderr).not.toMatch(STACK_LINE);
-    expect(r.stderr).not.toMatch(/internal error/);
-    assertNoPollution();
-    counter.add('check --config', 'refused');
-  });
+  it.each(HAND.filter(([, , m]) => m !== undefined))(
+    'check --config refuses %s with exit 2 at file:line:col',
+    async (_label, text, message) => {
+      const config = work.write(`c${counter.total() + 1}.yml`, text);
+      const r = await bellgate(work.dir, ['check', '--metrics', metrics, '--config', config]);
+      expect(r.code).toBe(2);
+      expect(r.stdout).toBe('');
+      // A file refused for its size before parsing is named without a line; every other refusal has one.
+      expect(r.stderr).toMatch(/\.yml(:\d+:\d+)?: /);
+      expect(r.stderr).toMatch(message!);
+      expect(r.stderr, 'every refusal says what to do').toMatch(/\n {2}fix: \S/);
+      expect(r.stderr).not.toMatch(STACK_LINE);
+      expect(r.stderr).not.toMatch(/internal error/);
+      assertNoPollution();
+      counter.add('check --config', 'refused');
+    },
+  );
 
   it('rules and groups keyed by hostile names match exactly and render inert', async () => {
     const names = ['__proto__', 'constructor', '<img src=x onerror=alert(1)>', '@team|#1'];
@@ -113,10 +133,13 @@ describe('config files through the CLI', () => {
       groups: [{ name: '<script>alert(1)</script> @team', match: names.map(glob) }],
     });
     const config = work.write('named.yml', yaml);
-    const parsed = resultOrInputError(() => parseConfig(yaml, 'named.yml'), (c: Config) => {
-      for (const n of names) expect(settingsFor(c, n).cutoff, n).toBe(0.02);
-      expect(settingsFor(c, 'other').cutoff).toBe(0.01);
-    });
+    const parsed = resultOrInputError(
+      () => parseConfig(yaml, 'named.yml'),
+      (c: Config) => {
+        for (const n of names) expect(settingsFor(c, n).cutoff, n).toBe(0.02);
+        expect(settingsFor(c, 'other').cutoff).toBe(0.01);
+      },
+    );
     counter.add('hostile names in rules', parsed);
     if (parsed === 'refused') return; // escaping a glob this way is not supported: refused cleanly is fine
     const steady = [100, 101, 99, 100, 102, 98, 100, 101, 99, 100];
@@ -125,14 +148,40 @@ describe('config files through the CLI', () => {
       names.forEach((n, k) => (values[n] = v + k));
       return { id: `r${i}`, values };
     });
-    const history = work.write('named-history.json', JSON.stringify({ schema: 'bellgate.history/1', series: 'default', runs }));
-    const run = work.write('named-run.json', JSON.stringify({ metrics: names.map((name, k) => ({ name, value: 100.5 + k })) }));
-    const md = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--config', config, '--format', 'markdown']);
+    const history = work.write(
+      'named-history.json',
+      JSON.stringify({ schema: 'bellgate.history/1', series: 'default', runs }),
+    );
+    const run = work.write(
+      'named-run.json',
+      JSON.stringify({ metrics: names.map((name, k) => ({ name, value: 100.5 + k })) }),
+    );
+    const md = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      run,
+      '--history',
+      history,
+      '--config',
+      config,
+      '--format',
+      'markdown',
+    ]);
     expect(md.stderr).not.toMatch(STACK_LINE);
     expect([0, 1]).toContain(md.code);
     assertInertMarkdown(md.stdout);
     const html = join(work.dir, 'named.html');
-    const rep = await bellgate(work.dir, ['report', '--metrics', run, '--history', history, '--config', config, '--html', html]);
+    const rep = await bellgate(work.dir, [
+      'report',
+      '--metrics',
+      run,
+      '--history',
+      history,
+      '--config',
+      config,
+      '--html',
+      html,
+    ]);
     expect(rep.code, rep.stderr).toBe(0);
     assertInertHtml(readFileSync(html, 'utf8'));
     assertNoPollution();
@@ -140,34 +189,97 @@ describe('config files through the CLI', () => {
 });
 
 describe('parseConfig on generated hostile files (fixed seed)', () => {
-  const key = fc.constantFrom('defaults', 'metrics', 'groups', 'keep', 'limits', 'cutoff', 'cuttoff', 'window', 'min-runs', 'match', 'name', '__proto__', 'constructor', 'prototype', 'toString', '<<');
+  const key = fc.constantFrom(
+    'defaults',
+    'metrics',
+    'groups',
+    'keep',
+    'limits',
+    'cutoff',
+    'cuttoff',
+    'window',
+    'min-runs',
+    'match',
+    'name',
+    '__proto__',
+    'constructor',
+    'prototype',
+    'toString',
+    '<<',
+  );
   const leaf = fc.oneof(
-    fc.constantFrom(0.01, -1, 0, 1, 1e400, '5%', '-5%', 'higher', 'sideways', true, null, '', '__proto__', '*', '**', '[', '{a,b}', 'x'.repeat(300)),
+    fc.constantFrom(
+      0.01,
+      -1,
+      0,
+      1,
+      1e400,
+      '5%',
+      '-5%',
+      'higher',
+      'sideways',
+      true,
+      null,
+      '',
+      '__proto__',
+      '*',
+      '**',
+      '[',
+      '{a,b}',
+      'x'.repeat(300),
+    ),
     fc.double(),
     fc.string({ maxLength: 12 }),
   );
   const tree = fc.letrec((tie) => ({
-    node: fc.oneof({ depthSize: 'small' }, leaf, fc.array(tie('node'), { maxLength: 4 }), fc.dictionary(key, tie('node'), { maxKeys: 4 })),
+    node: fc.oneof(
+      { depthSize: 'small' },
+      leaf,
+      fc.array(tie('node'), { maxLength: 4 }),
+      fc.dictionary(key, tie('node'), { maxKeys: 4 }),
+    ),
   })).node;
   it('config-shaped trees with hostile keys and values: a sound Config or an InputError at file:line:col', () => {
     fc.assert(
       fc.property(fc.dictionary(key, tree, { maxKeys: 5 }), (doc) => {
         // yaml stringify keeps "__proto__" as a key of a plain mapping, as a user could write it.
         const text = stringify(doc);
-        const outcome = resultOrInputError(() => parseConfig(text, 'gen.yml'), (c: Config) => {
-          expect(c.defaults.cutoff > 0 && c.defaults.cutoff < 1).toBe(true);
-          expect(Number.isInteger(c.defaults.window)).toBe(true);
-        });
+        const outcome = resultOrInputError(
+          () => parseConfig(text, 'gen.yml'),
+          (c: Config) => {
+            expect(c.defaults.cutoff > 0 && c.defaults.cutoff < 1).toBe(true);
+            expect(Number.isInteger(c.defaults.window)).toBe(true);
+          },
+        );
         counter.add('parseConfig generated', outcome);
       }),
       FC(300),
     );
   });
   it('anchors and aliases in random places never expand past the limits', () => {
-    const piece = fc.constantFrom('&a ', '*a', '&b [*a, *a, *a]', '*b', '<<: *a', 'defaults:', '  cutoff: 0.01', '- ', '[', ']', '{', '}', ', ', '\n', '  ');
+    const piece = fc.constantFrom(
+      '&a ',
+      '*a',
+      '&b [*a, *a, *a]',
+      '*b',
+      '<<: *a',
+      'defaults:',
+      '  cutoff: 0.01',
+      '- ',
+      '[',
+      ']',
+      '{',
+      '}',
+      ', ',
+      '\n',
+      '  ',
+    );
     fc.assert(
       fc.property(fc.array(piece, { maxLength: 40 }), (parts) => {
-        counter.add('parseConfig aliases', resultOrInputError(() => parseConfig(parts.join(''), 'alias.yml')));
+        counter.add(
+          'parseConfig aliases',
+          resultOrInputError(() => parseConfig(parts.join(''), 'alias.yml')),
+        );
       }),
       FC(300),
     );

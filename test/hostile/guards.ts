@@ -51,7 +51,9 @@ export function resultOrInputError<T>(
     value = parse();
   } catch (error) {
     if (!(error instanceof InputError)) {
-      throw new Error(`expected an InputError, got ${error instanceof Error ? `${error.name}: ${error.message}` : String(error)}`);
+      throw new Error(
+        `expected an InputError, got ${error instanceof Error ? `${error.name}: ${error.message}` : String(error)}`,
+      );
     }
     expect(error.message.length).toBeGreaterThan(0);
     expect(error.message).not.toMatch(/\[object Object\]|^undefined/);

@@ -74,7 +74,10 @@ const HAND: Array<[string, string]> = [
   ['v2 ragged column', v2({ id: ['a', 'b'] }, { names: ['m'], values: [[1]] })],
   ['v2 more names than columns', v2({ id: ['a'] }, { names: ['m', 'n'], values: [[1]] })],
   ['v2 value 1e400', v2({ id: ['a'] }, { names: ['m'], values: [[1e400]] }).replace('null', '1e400')],
-  ['v2 value -1e400', `{"schema":"bellgate.history/2","series":"s","runs":{"id":["a"]},"metrics":{"names":["m"],"values":[[-1e400]]}}`],
+  [
+    'v2 value -1e400',
+    `{"schema":"bellgate.history/2","series":"s","runs":{"id":["a"]},"metrics":{"names":["m"],"values":[[-1e400]]}}`,
+  ],
   ['v2 value "NaN"', v2({ id: ['a'] }, { names: ['m'], values: [['NaN']] })],
   ['v2 value true', v2({ id: ['a'] }, { names: ['m'], values: [[true]] })],
   ['v2 value an object', v2({ id: ['a'] }, { names: ['m'], values: [[{ valueOf: 1 }]] })],
@@ -83,22 +86,72 @@ const HAND: Array<[string, string]> = [
   ['v2 unit a number', v2({ id: ['a'] }, { names: ['m'], units: [5], values: [[1]] })],
   ['v2 sha column a string', v2({ id: ['a'], sha: 'abc' }, { names: [], values: [] })],
   ['v2 time column of numbers', v2({ id: ['a'], time: [1] }, { names: [], values: [] })],
-  ['v2 __proto__ names', v2({ id: ['a'] }, { names: ['__proto__', 'constructor', 'toString'], values: [[1], [2], [3]] })],
-  ['v2 __proto__ keys', '{"schema":"bellgate.history/2","series":"s","__proto__":{"polluted":1},"runs":{"id":["a"],"__proto__":{"polluted":1}},"metrics":{"names":["m"],"values":[[1]],"__proto__":{"polluted":1}}}'],
-  ['v2 series a number', JSON.stringify({ schema: 'bellgate.history/2', series: 5, runs: { id: [] }, metrics: { names: [], values: [] } })],
-  ['v1 duplicated runs', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', values: { m: 1 } }, { id: 'a', values: { m: 2 } }] })],
+  [
+    'v2 __proto__ names',
+    v2({ id: ['a'] }, { names: ['__proto__', 'constructor', 'toString'], values: [[1], [2], [3]] }),
+  ],
+  [
+    'v2 __proto__ keys',
+    '{"schema":"bellgate.history/2","series":"s","__proto__":{"polluted":1},"runs":{"id":["a"],"__proto__":{"polluted":1}},"metrics":{"names":["m"],"values":[[1]],"__proto__":{"polluted":1}}}',
+  ],
+  [
+    'v2 series a number',
+    JSON.stringify({ schema: 'bellgate.history/2', series: 5, runs: { id: [] }, metrics: { names: [], values: [] } }),
+  ],
+  [
+    'v1 duplicated runs',
+    JSON.stringify({
+      schema: 'bellgate.history/1',
+      series: 's',
+      runs: [
+        { id: 'a', values: { m: 1 } },
+        { id: 'a', values: { m: 2 } },
+      ],
+    }),
+  ],
   ['v1 runs an object', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: { a: { values: {} } } })],
-  ['v1 values a list', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', values: [1, 2] }] })],
-  ['v1 value a string', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', values: { m: '12' } }] })],
+  [
+    'v1 values a list',
+    JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', values: [1, 2] }] }),
+  ],
+  [
+    'v1 value a string',
+    JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', values: { m: '12' } }] }),
+  ],
   ['v1 value 1e400', '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"a","values":{"m":1e400}}]}'],
-  ['v1 __proto__ value key', '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"a","values":{"__proto__":5,"constructor":6}},{"id":"b","values":{"__proto__":{"polluted":1}}}]}'],
-  ['v1 __proto__ names, readable', '{"schema":"bellgate.history/1","series":"default","runs":[{"id":"a","values":{"__proto__":5,"constructor":6}},{"id":"b","values":{"__proto__":7,"toString":8}}]}'],
-  ['v1 __proto__ units', '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"a","values":{"m":1},"units":{"__proto__":"ms","m":{"polluted":1}}}]}'],
+  [
+    'v1 __proto__ value key',
+    '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"a","values":{"__proto__":5,"constructor":6}},{"id":"b","values":{"__proto__":{"polluted":1}}}]}',
+  ],
+  [
+    'v1 __proto__ names, readable',
+    '{"schema":"bellgate.history/1","series":"default","runs":[{"id":"a","values":{"__proto__":5,"constructor":6}},{"id":"b","values":{"__proto__":7,"toString":8}}]}',
+  ],
+  [
+    'v1 __proto__ units',
+    '{"schema":"bellgate.history/1","series":"s","runs":[{"id":"a","values":{"m":1},"units":{"__proto__":"ms","m":{"polluted":1}}}]}',
+  ],
   ['v1 id empty', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: '', values: {} }] })],
   ['v1 id a number', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 7, values: {} }] })],
-  ['v1 time not ISO', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', time: 'yesterday', values: {} }] })],
-  ['v1 runs out of order', JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', time: '2026-03-02T00:00:00Z', values: {} }, { id: 'b', time: '2026-03-01T00:00:00Z', values: {} }] })],
-  ['deep nesting', `{"schema":"bellgate.history/2","series":"s","runs":{"id":${'['.repeat(100_000)}${']'.repeat(100_000)}}}`],
+  [
+    'v1 time not ISO',
+    JSON.stringify({ schema: 'bellgate.history/1', series: 's', runs: [{ id: 'a', time: 'yesterday', values: {} }] }),
+  ],
+  [
+    'v1 runs out of order',
+    JSON.stringify({
+      schema: 'bellgate.history/1',
+      series: 's',
+      runs: [
+        { id: 'a', time: '2026-03-02T00:00:00Z', values: {} },
+        { id: 'b', time: '2026-03-01T00:00:00Z', values: {} },
+      ],
+    }),
+  ],
+  [
+    'deep nesting',
+    `{"schema":"bellgate.history/2","series":"s","runs":{"id":${'['.repeat(100_000)}${']'.repeat(100_000)}}}`,
+  ],
   ['a BOM first', `\uFEFF${V2}`],
   ['NUL inside', V2.replace('linux-x64', 'linux\\u0000x64')],
 ];
@@ -107,10 +160,17 @@ describe('parseHistory and verifyHistory on hand-picked documents', () => {
   it.each(HAND)('%s', (label, text) => both(text, 'hand-picked'));
 
   it('a value past the double range is never read as a number', () => {
-    for (const text of [HAND.find(([l]) => l === 'v2 value -1e400')![1], HAND.find(([l]) => l === 'v1 value 1e400')![1]]) {
-      const outcome = resultOrInputError(() => parseHistory(text, 'h.json'), (h) => {
-        for (const c of h.columns.values()) expect(c.values.every((v) => !Number.isFinite(v) ? Number.isNaN(v) : true)).toBe(true);
-      });
+    for (const text of [
+      HAND.find(([l]) => l === 'v2 value -1e400')![1],
+      HAND.find(([l]) => l === 'v1 value 1e400')![1],
+    ]) {
+      const outcome = resultOrInputError(
+        () => parseHistory(text, 'h.json'),
+        (h) => {
+          for (const c of h.columns.values())
+            expect(c.values.every((v) => (!Number.isFinite(v) ? Number.isNaN(v) : true))).toBe(true);
+        },
+      );
       counter.add('hand-picked', outcome);
     }
   });
@@ -137,7 +197,24 @@ describe('generated documents (fixed seed)', () => {
   });
 
   it('one byte replaced anywhere in v1 and v2 documents', () => {
-    const junk = fc.constantFrom('"', '{', '}', '[', ']', ',', ':', '0', '-', 'e', 'n', 'x', '\\', '\u0000', ' ', '1e400');
+    const junk = fc.constantFrom(
+      '"',
+      '{',
+      '}',
+      '[',
+      ']',
+      ',',
+      ':',
+      '0',
+      '-',
+      'e',
+      'n',
+      'x',
+      '\\',
+      '\u0000',
+      ' ',
+      '1e400',
+    );
     fc.assert(
       fc.property(fc.constantFrom(V1, V2), fc.nat(), junk, (doc, at, c) => {
         const i = at % doc.length;
@@ -148,11 +225,22 @@ describe('generated documents (fixed seed)', () => {
   });
 
   it('v2 documents with values of every JSON type', () => {
-    const value = fc.oneof(fc.double({ noNaN: true, noDefaultInfinity: true }), fc.constant(null), fc.string({ maxLength: 3 }), fc.boolean(), fc.constant([]), fc.constant({}));
+    const value = fc.oneof(
+      fc.double({ noNaN: true, noDefaultInfinity: true }),
+      fc.constant(null),
+      fc.string({ maxLength: 3 }),
+      fc.boolean(),
+      fc.constant([]),
+      fc.constant({}),
+    );
     fc.assert(
-      fc.property(fc.array(fc.array(value, { minLength: 2, maxLength: 2 }), { maxLength: 4 }), fc.array(fc.constantFrom('__proto__', 'constructor', 'm', 'n', '<b>', ''), { maxLength: 4 }), (values, names) => {
-        both(v2({ id: ['a', 'b'] }, { names, values }), 'v2 typed values');
-      }),
+      fc.property(
+        fc.array(fc.array(value, { minLength: 2, maxLength: 2 }), { maxLength: 4 }),
+        fc.array(fc.constantFrom('__proto__', 'constructor', 'm', 'n', '<b>', ''), { maxLength: 4 }),
+        (values, names) => {
+          both(v2({ id: ['a', 'b'] }, { names, values }), 'v2 typed values');
+        },
+      ),
       FC(300),
     );
   });
@@ -186,17 +274,25 @@ describe('hostile histories through the CLI', () => {
 
   it('a readable history with prototype names: check, verify and report --html work and stay inert', async () => {
     const text = HAND.find(([l]) => l === 'v1 __proto__ names, readable')![1];
-    const h = resultOrInputError(() => parseHistory(text, 'h.json'), (hist) => {
-      expect([...hist.columns.keys()].sort()).toEqual(['__proto__', 'constructor', 'toString']);
-      expect(hist.columns.get('__proto__')?.values).toEqual([5, 7]);
-    });
+    const h = resultOrInputError(
+      () => parseHistory(text, 'h.json'),
+      (hist) => {
+        expect([...hist.columns.keys()].sort()).toEqual(['__proto__', 'constructor', 'toString']);
+        expect(hist.columns.get('__proto__')?.values).toEqual([5, 7]);
+      },
+    );
     counter.add('cli readable', h);
     expect(h).toBe('ok');
     const path = work.write('proto.json', text);
     const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', path, '--format', 'json']);
     expect(r.stderr).not.toMatch(STACK_LINE);
     expect(r.code, r.stderr).toBe(0);
-    const byName = new Map((JSON.parse(r.stdout) as { metrics: Array<{ name: string; status: string }> }).metrics.map((m) => [m.name, m.status]));
+    const byName = new Map(
+      (JSON.parse(r.stdout) as { metrics: Array<{ name: string; status: string }> }).metrics.map((m) => [
+        m.name,
+        m.status,
+      ]),
+    );
     // Two runs are fewer than min-runs: learning; the run's own "__proto__" is kept, not dropped.
     expect(byName.get('__proto__')).toBe('learning');
     expect(byName.get('m')).toBe('new');
@@ -222,7 +318,11 @@ describe('import with hostile names', () => {
     const refused = ['a\u202Eb', 'esc\u001b[2J', 'x'.repeat(10 * 1024), ' '];
     const kept = ['__proto__', 'constructor', '<img src=x onerror=alert(1)>', '@team|#1'];
     const lines = [0, 1, 2].map((i) =>
-      JSON.stringify({ id: `r${i}`, time: `2026-03-0${i + 1}T00:00:00Z`, metrics: [...refused, ...kept].map((name, k) => ({ name, value: 10 + i + k })) }),
+      JSON.stringify({
+        id: `r${i}`,
+        time: `2026-03-0${i + 1}T00:00:00Z`,
+        metrics: [...refused, ...kept].map((name, k) => ({ name, value: 10 + i + k })),
+      }),
     );
     const runs = work.write('import/runs.jsonl', lines.join('\n'));
     const wide = work.write('import/runs.csv', `id,time,"a\u202Eb",__proto__\nw1,2026-03-05T00:00:00Z,1,2\n`);

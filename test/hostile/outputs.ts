@@ -61,9 +61,47 @@ export function assertInertMarkdown(md: string): void {
 
 /** Every element the HTML report writes itself; any other tag name came from a metric file. */
 const OWN_HTML_TAGS = new Set([
-  '!doctype', 'html', 'head', 'meta', 'title', 'style', 'body', 'header', 'h1', 'h2', 'p', 'strong', 'main', 'table',
-  'caption', 'thead', 'tbody', 'tr', 'th', 'td', 'button', 'a', 'ul', 'li', 'section', 'span', 'div', 'svg', 'g',
-  'circle', 'rect', 'line', 'path', 'polyline', 'polygon', 'text', 'footer', 'script', 'details', 'summary', 'em',
+  '!doctype',
+  'html',
+  'head',
+  'meta',
+  'title',
+  'style',
+  'body',
+  'header',
+  'h1',
+  'h2',
+  'p',
+  'strong',
+  'main',
+  'table',
+  'caption',
+  'thead',
+  'tbody',
+  'tr',
+  'th',
+  'td',
+  'button',
+  'a',
+  'ul',
+  'li',
+  'section',
+  'span',
+  'div',
+  'svg',
+  'g',
+  'circle',
+  'rect',
+  'line',
+  'path',
+  'polyline',
+  'polygon',
+  'text',
+  'footer',
+  'script',
+  'details',
+  'summary',
+  'em',
 ]);
 
 /**
@@ -79,7 +117,9 @@ export function assertInertHtml(html: string): void {
     const outside = attrs.replace(/"[^"]*"|'[^']*'/g, '""');
     expect(outside, `event handler in ${tag.slice(0, 80)}`).not.toMatch(/\son[a-z]+\s*=/i);
     expect(outside, `unquoted value in ${tag.slice(0, 80)}`).not.toMatch(/=\s*[^"\s]/);
-    expect(attrs, `script URL in ${tag.slice(0, 80)}`).not.toMatch(/(?:href|src|action|xlink:href)\s*=\s*["']?\s*javascript:/i);
+    expect(attrs, `script URL in ${tag.slice(0, 80)}`).not.toMatch(
+      /(?:href|src|action|xlink:href)\s*=\s*["']?\s*javascript:/i,
+    );
   }
   expect((html.match(/<script\b/gi) ?? []).length).toBe(1);
   expect((html.match(/<\/script/gi) ?? []).length).toBe(1);

@@ -82,7 +82,12 @@ function historyWith(series: string, names: readonly string[], unit?: string): s
       values[n] = v;
       if (unit !== undefined) units[n] = unit;
     }
-    return { id: `r${i + 1}`, time: new Date(Date.UTC(2026, 0, 1 + i)).toISOString(), values, ...(unit === undefined ? {} : { units }) };
+    return {
+      id: `r${i + 1}`,
+      time: new Date(Date.UTC(2026, 0, 1 + i)).toISOString(),
+      values,
+      ...(unit === undefined ? {} : { units }),
+    };
   });
   // JSON.stringify writes "__proto__" as an own key of a null-prototype object, as a tool would.
   return JSON.stringify({ schema: 'bellgate.history/1', series, runs });
@@ -105,7 +110,10 @@ interface Outputs {
 let caseNo = 0;
 
 /** Runs check in three formats and report --html on one history + run; asserts exit codes and no stack. */
-async function everyOutput(names: readonly string[], options: { unit?: string; series?: string; title?: string } = {}): Promise<Outputs> {
+async function everyOutput(
+  names: readonly string[],
+  options: { unit?: string; series?: string; title?: string } = {},
+): Promise<Outputs> {
   const dir = `c${++caseNo}`;
   const series = options.series ?? 'default';
   const history = work.write(`${dir}/history.json`, historyWith(series, names, options.unit));
@@ -127,7 +135,12 @@ async function everyOutput(names: readonly string[], options: { unit?: string; s
   expect(r.stderr).not.toMatch(STACK_LINE);
   expect(r.code, r.stderr).toBe(0);
   assertNoPollution();
-  return { markdown: got.markdown ?? '', json: JSON.parse(got.json ?? '{}') as Outputs['json'], text: got.text ?? '', html: readFileSync(htmlPath, 'utf8') };
+  return {
+    markdown: got.markdown ?? '',
+    json: JSON.parse(got.json ?? '{}') as Outputs['json'],
+    text: got.text ?? '',
+    html: readFileSync(htmlPath, 'utf8'),
+  };
 }
 
 function assertAllInert(out: Outputs, names: readonly string[]): void {
@@ -136,7 +149,8 @@ function assertAllInert(out: Outputs, names: readonly string[]): void {
   assertInertText(out.text);
   // Nothing is lost: the JSON report keeps every name exactly, judged.
   const byName = new Map(out.json.metrics.map((m) => [m.name, m]));
-  for (const [i, n] of names.entries()) expect(byName.get(n)?.status, n.slice(0, 60)).toBe(i === 0 ? 'regressed' : 'ok');
+  for (const [i, n] of names.entries())
+    expect(byName.get(n)?.status, n.slice(0, 60)).toBe(i === 0 ? 'regressed' : 'ok');
   expect(out.json.verdict).toBe('regressed');
 }
 
@@ -172,34 +186,43 @@ describe('hostile metric names through check (markdown, json, text) and report -
 });
 
 describe('names every reader refuses, with exit 2 and a clear message', () => {
-  it.each(REFUSED.map(([n, m]) => [JSON.stringify(n.slice(0, 24)), n, m] as const))('refuses %s', async (_label, name, message) => {
-    const dir = `refused${++caseNo}`;
-    const run = work.write(`${dir}/run.json`, runWith(['ok/one', name]));
-    const history = work.write(`${dir}/history.json`, historyWith('default', ['ok/one']));
-    for (const format of ['markdown', 'json', 'text'] as const) {
-      const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--format', format]);
+  it.each(REFUSED.map(([n, m]) => [JSON.stringify(n.slice(0, 24)), n, m] as const))(
+    'refuses %s',
+    async (_label, name, message) => {
+      const dir = `refused${++caseNo}`;
+      const run = work.write(`${dir}/run.json`, runWith(['ok/one', name]));
+      const history = work.write(`${dir}/history.json`, historyWith('default', ['ok/one']));
+      for (const format of ['markdown', 'json', 'text'] as const) {
+        const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--format', format]);
+        expect(r.code).toBe(2);
+        expect(r.stdout).toBe('');
+        expect(r.stderr).toMatch(message);
+        expect(r.stderr).toContain('run.json');
+        expect(r.stderr).toMatch(/fix: /);
+        expect(r.stderr).not.toMatch(STACK_LINE);
+        // The refusal quotes the name through JSON.stringify or a short prefix, never raw.
+        expect(r.stderr).not.toMatch(/[\u0000-\u0009\u000B-\u001F\u007F-\u009F\u202A-\u202E\u2066-\u2069]/u);
+        expect(r.stderr.length).toBeLessThan(2000);
+      }
+      const html = join(work.dir, dir, 'r.html');
+      const r = await bellgate(work.dir, ['report', '--history', history, '--metrics', run, '--html', html]);
       expect(r.code).toBe(2);
-      expect(r.stdout).toBe('');
       expect(r.stderr).toMatch(message);
-      expect(r.stderr).toContain('run.json');
-      expect(r.stderr).toMatch(/fix: /);
-      expect(r.stderr).not.toMatch(STACK_LINE);
-      // The refusal quotes the name through JSON.stringify or a short prefix, never raw.
-      expect(r.stderr).not.toMatch(/[\u0000-\u0009\u000B-\u001F\u007F-\u009F\u202A-\u202E\u2066-\u2069]/u);
-      expect(r.stderr.length).toBeLessThan(2000);
-    }
-    const html = join(work.dir, dir, 'r.html');
-    const r = await bellgate(work.dir, ['report', '--history', history, '--metrics', run, '--html', html]);
-    expect(r.code).toBe(2);
-    expect(r.stderr).toMatch(message);
-    assertNoPollution();
-    counter.add('names refused', 'refused');
-  });
+      assertNoPollution();
+      counter.add('names refused', 'refused');
+    },
+  );
 });
 
 describe('names that reached a history by hand (not through a reader) are still shown inert', () => {
   // A history document is data too: an edited or imported one may hold names no reader accepts.
-  const odd = ['a\u202Ereversed\u202C', 'esc\u001b[2J\u001b[31mred', 'tab\there\nnewline', 'x'.repeat(10 * 1024), 'nul\u0000'];
+  const odd = [
+    'a\u202Ereversed\u202C',
+    'esc\u001b[2J\u001b[31mred',
+    'tab\there\nnewline',
+    'x'.repeat(10 * 1024),
+    'nul\u0000',
+  ];
   it('check (missing metrics) and report --html (newest run) clean them', async () => {
     const dir = `byhand${++caseNo}`;
     const history = work.write(`${dir}/history.json`, historyWith('default', ['ok/one', ...odd]));
@@ -244,11 +267,23 @@ describe('explain and --out with hostile names', () => {
     assertInertText(unknown.stderr.replace(/\n/g, ' '));
     counter.add('explain', 'refused');
     const out = join(work.dir, dir, 'out');
-    const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--config', work.write(`${dir}/c.yml`, CONFIG), '--out', out]);
+    const r = await bellgate(work.dir, [
+      'check',
+      '--metrics',
+      run,
+      '--history',
+      history,
+      '--config',
+      work.write(`${dir}/c.yml`, CONFIG),
+      '--out',
+      out,
+    ]);
     expect([0, 1], r.stderr).toContain(r.code);
     assertInertMarkdown(readFileSync(join(out, 'report.md'), 'utf8'));
     assertInertText(readFileSync(join(out, 'report.txt'), 'utf8'));
-    expect((JSON.parse(readFileSync(join(out, 'report.json'), 'utf8')) as Outputs['json']).metrics.map((m) => m.name)).toEqual(expect.arrayContaining(names));
+    expect(
+      (JSON.parse(readFileSync(join(out, 'report.json'), 'utf8')) as Outputs['json']).metrics.map((m) => m.name),
+    ).toEqual(expect.arrayContaining(names));
     assertNoPollution();
     counter.add('check --out', 'ok');
   });
@@ -278,12 +313,28 @@ describe('the output checks themselves can fail', () => {
   it('flags raw tags, links, mentions, references, broken rows and script URLs', () => {
     const head = '| status | metric | baseline (mean ± sd) | this run | change | sigma | rel. density vs cutoff |';
     const row = (name: string) => `${head}\n| ok | ${name} | 1 | 1 | 0% | 0 | 1 |`;
-    for (const name of ['<img src=x onerror=alert(1)>', '[a](javascript:alert(1))', '@team', 'fixes #12', 'a|b', 'x`y', 'https://evil.example', 'a\u202Eb']) {
+    for (const name of [
+      '<img src=x onerror=alert(1)>',
+      '[a](javascript:alert(1))',
+      '@team',
+      'fixes #12',
+      'a|b',
+      'x`y',
+      'https://evil.example',
+      'a\u202Eb',
+    ]) {
       expect(() => assertInertMarkdown(row(name)), name).toThrow();
     }
     expect(() => assertInertMarkdown(row('a\\|b @\u200Bx \\#\u200B1'))).not.toThrow();
-    const page = (body: string) => `<html><head><meta http-equiv="Content-Security-Policy" content="default-src 'none'"></head><body>${body}<script></script></body></html>`;
-    for (const body of ['<img src=x>', '<a href="javascript:alert(1)">x</a>', '<p title="" onclick="x">', '<p title=x>', '<script>x</script>']) {
+    const page = (body: string) =>
+      `<html><head><meta http-equiv="Content-Security-Policy" content="default-src 'none'"></head><body>${body}<script></script></body></html>`;
+    for (const body of [
+      '<img src=x>',
+      '<a href="javascript:alert(1)">x</a>',
+      '<p title="" onclick="x">',
+      '<p title=x>',
+      '<script>x</script>',
+    ]) {
       expect(() => assertInertHtml(page(body)), body).toThrow();
     }
     expect(() => assertInertHtml(page('<p title="&quot; onclick=&quot;x">&lt;img&gt;</p>'))).not.toThrow();
@@ -291,11 +342,16 @@ describe('the output checks themselves can fail', () => {
   });
   it('InputError.describe shows quoted controls and bidi overrides as code points', async () => {
     const { InputError } = await import('../../src/model/input-error.js');
-    const text = new InputError('metric name "a\u202Eb\u001b[2J\u009bc" is bad', { where: 'run.json:1:2', fix: 'rename it' }).describe();
+    const text = new InputError('metric name "a\u202Eb\u001b[2J\u009bc" is bad', {
+      where: 'run.json:1:2',
+      fix: 'rename it',
+    }).describe();
     expect(text).toBe('run.json:1:2: metric name "a\\u{202E}b\\u{001B}[2J\\u{009B}c" is bad\n  fix: rename it');
     // Prose between two short quotes is never taken for a long quote; a long quote is cut.
     const prose = `"a" ${'word '.repeat(60)}"b"`;
     expect(new InputError(prose).describe()).toBe(prose);
-    expect(new InputError(`name "${'z'.repeat(500)}" bad`).describe()).toBe(`name "${'z'.repeat(60)}…" (500 characters) bad`);
+    expect(new InputError(`name "${'z'.repeat(500)}" bad`).describe()).toBe(
+      `name "${'z'.repeat(60)}…" (500 characters) bad`,
+    );
   });
 });

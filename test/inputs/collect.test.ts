@@ -10,7 +10,17 @@ function result(readings: Reading[], meta: [string, string][] = [], notFitted: [
 describe('collectRun', () => {
   it('aggregates the samples of a name across files by the rule for that name, keeping the count', () => {
     const run = collectRun(
-      [result([{ name: 'a', value: 1 }, { name: 'b', value: 10 }, { name: 'a', value: 7 }]), result([{ name: 'a', value: 4 }, { name: 'b', value: 30 }])],
+      [
+        result([
+          { name: 'a', value: 1 },
+          { name: 'b', value: 10 },
+          { name: 'a', value: 7 },
+        ]),
+        result([
+          { name: 'a', value: 4 },
+          { name: 'b', value: 30 },
+        ]),
+      ],
       (name) => (name === 'a' ? 'max' : 'mean'),
     );
     expect(run.metrics.get('a')).toEqual({ value: 7, count: 3 });
@@ -24,7 +34,10 @@ describe('collectRun', () => {
 
   it('converts later samples to the first-seen unit (1500 ms joins 2 s as 1.5 s)', () => {
     const run = collectRun(
-      [result([{ name: 't', value: 2, unit: 's', where: 'a.json:1' }]), result([{ name: 't', value: 1500, unit: 'ms', where: 'b.csv:2' }])],
+      [
+        result([{ name: 't', value: 2, unit: 's', where: 'a.json:1' }]),
+        result([{ name: 't', value: 1500, unit: 'ms', where: 'b.csv:2' }]),
+      ],
       () => 'mean',
     );
     expect(run.metrics.get('t')).toEqual({ value: 1.75, unit: 's', count: 2 });
@@ -32,26 +45,64 @@ describe('collectRun', () => {
 
   it('refuses incompatible units, naming both sources', () => {
     const error = inputErrorOf(() =>
-      collectRun([result([{ name: 't', value: 2, unit: 'ms', where: 'a.json:1' }]), result([{ name: 't', value: 3, unit: 'B', where: 'b.csv:2' }])], () => 'mean'),
+      collectRun(
+        [
+          result([{ name: 't', value: 2, unit: 'ms', where: 'a.json:1' }]),
+          result([{ name: 't', value: 3, unit: 'B', where: 'b.csv:2' }]),
+        ],
+        () => 'mean',
+      ),
     );
-    expect(error.message).toBe('metric "t" has unit "ms" at a.json:1 but unit "B" at b.csv:2, which cannot be converted');
+    expect(error.message).toBe(
+      'metric "t" has unit "ms" at a.json:1 but unit "B" at b.csv:2, which cannot be converted',
+    );
     const missing = inputErrorOf(() =>
-      collectRun([result([{ name: 't', value: 2, unit: 'ms', where: 'a.json:1' }, { name: 't', value: 2, where: 'a.json:2' }])], () => 'mean'),
+      collectRun(
+        [
+          result([
+            { name: 't', value: 2, unit: 'ms', where: 'a.json:1' },
+            { name: 't', value: 2, where: 'a.json:2' },
+          ]),
+        ],
+        () => 'mean',
+      ),
     );
     expect(missing.message).toMatch(/unit "ms" at a.json:1 but no unit at a.json:2/);
   });
 
   it('refuses a mean that overflows instead of returning Infinity', () => {
-    const error = inputErrorOf(() => collectRun([result([{ name: 'big', value: 1.7e308 }, { name: 'big', value: 1.7e308 }])], () => 'mean'));
+    const error = inputErrorOf(() =>
+      collectRun(
+        [
+          result([
+            { name: 'big', value: 1.7e308 },
+            { name: 'big', value: 1.7e308 },
+          ]),
+        ],
+        () => 'mean',
+      ),
+    );
     expect(error.message).toMatch(/overflows/);
   });
 
   it('merges meta (first value wins) and notFitted, and keeps hostile names as Map keys', () => {
     const run = collectRun(
-      [result([{ name: '__proto__', value: 1 }], [['goos', 'linux']], [['t/skip', 'skipped']]), result([], [['goos', 'darwin'], ['pkg', 'p']])],
+      [
+        result([{ name: '__proto__', value: 1 }], [['goos', 'linux']], [['t/skip', 'skipped']]),
+        result(
+          [],
+          [
+            ['goos', 'darwin'],
+            ['pkg', 'p'],
+          ],
+        ),
+      ],
       () => 'median',
     );
-    expect([...run.meta]).toEqual([['goos', 'linux'], ['pkg', 'p']]);
+    expect([...run.meta]).toEqual([
+      ['goos', 'linux'],
+      ['pkg', 'p'],
+    ]);
     expect(run.notFitted?.get('t/skip')).toBe('skipped');
     expect(run.metrics.get('__proto__')).toEqual({ value: 1, count: 1 });
     expect(Object.getPrototypeOf(run.metrics)).toBe(Map.prototype);

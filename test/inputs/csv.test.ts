@@ -33,7 +33,9 @@ describe('readCsvMetrics', () => {
   it('refuses an empty name in either form, and a metric column twice', () => {
     expect(inputErrorOf(() => readCsvMetrics('name,value\n,1\n', 'm.csv')).message).toBe('metric name is empty');
     expect(inputErrorOf(() => readCsvMetrics('a,,b\n1,2,3\n', 'm.csv')).message).toBe('metric name is empty');
-    expect(inputErrorOf(() => readCsvMetrics('a [ms],a [s]\n1,2\n', 'm.csv')).message).toMatch(/names metric "a" twice/);
+    expect(inputErrorOf(() => readCsvMetrics('a [ms],a [s]\n1,2\n', 'm.csv')).message).toMatch(
+      /names metric "a" twice/,
+    );
   });
 
   it('reads a bracketed unit only at the end of a wide header cell', () => {

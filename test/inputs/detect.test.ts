@@ -42,7 +42,9 @@ describe('parseMetricText', () => {
   it('accepts format names case-insensitively, with aliases, and refuses unknown ones', () => {
     expect(metricFormat('Prometheus')).toBe('openmetrics');
     expect(metricFormat('NDJSON')).toBe('jsonl');
-    expect(inputErrorOf(() => parseMetricText('a 1', 'x', 'yaml')).fix).toMatch(/json, jsonl, csv, openmetrics, gobench, junit/);
+    expect(inputErrorOf(() => parseMetricText('a 1', 'x', 'yaml')).fix).toMatch(
+      /json, jsonl, csv, openmetrics, gobench, junit/,
+    );
   });
 
   it('refuses a file that yields no metric at all', () => {
@@ -61,10 +63,19 @@ describe('parseMetricText', () => {
 
   it('applies the line limit to line-oriented formats only (one-line JSON is bounded by file size)', () => {
     const limits = { ...DEFAULT_LIMITS, maxLineLength: 20 };
-    const oneLine = JSON.stringify({ metrics: [{ name: 'a', value: 1 }, { name: 'b', value: 2 }] });
+    const oneLine = JSON.stringify({
+      metrics: [
+        { name: 'a', value: 1 },
+        { name: 'b', value: 2 },
+      ],
+    });
     expect(parseMetricText(oneLine, 'm.json', undefined, limits).readings).toHaveLength(2);
-    expect(inputErrorOf(() => parseMetricText('{"name": "a", "value": 1}', 'm.jsonl', 'jsonl', limits)).message).toMatch(/limits\.max-line-length/);
-    expect(inputErrorOf(() => parseMetricText('name,value\nabcdefghijklmnopqrstuvwxyz,1', 'm.csv', 'csv', limits)).where).toBe('m.csv:2');
+    expect(
+      inputErrorOf(() => parseMetricText('{"name": "a", "value": 1}', 'm.jsonl', 'jsonl', limits)).message,
+    ).toMatch(/limits\.max-line-length/);
+    expect(
+      inputErrorOf(() => parseMetricText('name,value\nabcdefghijklmnopqrstuvwxyz,1', 'm.csv', 'csv', limits)).where,
+    ).toBe('m.csv:2');
   });
 
   it('refuses more than limits.max-metrics distinct metrics while parsing', () => {

@@ -27,7 +27,9 @@ interface Expected {
 
 describe.each(fixtures)('fixture %s', (file, format) => {
   const text = readFileSync(new URL(file, dir), 'utf8');
-  const expected = JSON.parse(readFileSync(new URL(file.replace(/\.[^.]+$/, '.expected.json'), dir), 'utf8')) as Expected;
+  const expected = JSON.parse(
+    readFileSync(new URL(file.replace(/\.[^.]+$/, '.expected.json'), dir), 'utf8'),
+  ) as Expected;
 
   it(`is detected as ${format} by content`, () => {
     // Renamed so the extension cannot help: detection must work from the content alone.

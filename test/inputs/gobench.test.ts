@@ -27,7 +27,8 @@ describe('readGoBench', () => {
   });
 
   it('ignores lines that are not result or configuration lines (proposal 14313)', () => {
-    const text = 'BenchmarkA\nBenchmarkA 10 5\nBenchmarkA x 5 ns/op\nUpper: case key\nkey with space: x\nBenchmarkA 10 5 ns/op\n';
+    const text =
+      'BenchmarkA\nBenchmarkA 10 5\nBenchmarkA x 5 ns/op\nUpper: case key\nkey with space: x\nBenchmarkA 10 5 ns/op\n';
     const result = readGoBench(text, 'b.txt');
     expect(result.readings.map((r) => r.where)).toEqual(['b.txt:6']);
     expect([...result.meta.keys()]).toEqual([]);

@@ -50,16 +50,22 @@ describe('readJsonMetrics', () => {
   });
 
   it('refuses entries without value or samples, or with both', () => {
-    expect(inputErrorOf(() => readJsonMetrics('{"metrics": [{"name": "a"}]}', 'm.json')).message).toMatch(/neither "value" nor "samples"/);
-    expect(inputErrorOf(() => readJsonMetrics('{"metrics": [{"name": "a", "value": 1, "samples": [1]}]}', 'm.json')).message).toMatch(
-      /both "value" and "samples"/,
+    expect(inputErrorOf(() => readJsonMetrics('{"metrics": [{"name": "a"}]}', 'm.json')).message).toMatch(
+      /neither "value" nor "samples"/,
     );
-    expect(inputErrorOf(() => readJsonMetrics('{"metrics": [{"name": "a", "samples": []}]}', 'm.json')).message).toMatch(/non-empty array/);
+    expect(
+      inputErrorOf(() => readJsonMetrics('{"metrics": [{"name": "a", "value": 1, "samples": [1]}]}', 'm.json')).message,
+    ).toMatch(/both "value" and "samples"/);
+    expect(
+      inputErrorOf(() => readJsonMetrics('{"metrics": [{"name": "a", "samples": []}]}', 'm.json')).message,
+    ).toMatch(/non-empty array/);
     expect(inputErrorOf(() => readJsonMetrics('{"metrics": [{"value": 1}]}', 'm.json')).message).toMatch(/no "name"/);
   });
 
   it('refuses documents that are not objects, and non-numbers of every JSON type', () => {
-    expect(inputErrorOf(() => readJsonMetrics('[1, 2]', 'm.json')).message).toMatch(/must hold a JSON object, found an array/);
+    expect(inputErrorOf(() => readJsonMetrics('[1, 2]', 'm.json')).message).toMatch(
+      /must hold a JSON object, found an array/,
+    );
     for (const bad of ['null', 'true', '{}', '[[1]]', '"1"']) {
       expect(inputErrorOf(() => readJsonMetrics(`{"a": ${bad}}`, 'm.json')).message).toMatch(/not a number/);
     }
@@ -86,7 +92,9 @@ describe('readJsonLines', () => {
 
   it('names file:line:col of malformed JSON on a later line', () => {
     // Line 2: the stray x after "value": 1 is at col 26 (counted by hand).
-    const error = inputErrorOf(() => readJsonLines('{"name": "a", "value": 1}\n{"name": "b", "value": 1 x}', 'm.jsonl'));
+    const error = inputErrorOf(() =>
+      readJsonLines('{"name": "a", "value": 1}\n{"name": "b", "value": 1 x}', 'm.jsonl'),
+    );
     expect(error.where).toBe('m.jsonl:2:26');
   });
 

@@ -5,7 +5,10 @@ import { inputErrorOf } from './helpers.js';
 
 describe('readJunit', () => {
   it('reads a single root <testsuite> and drops a classname equal to the suite name', () => {
-    const result = readJunit('<testsuite name="s" time="2"><testcase classname="s" name="t" time="1.5"/></testsuite>', 'j.xml');
+    const result = readJunit(
+      '<testsuite name="s" time="2"><testcase classname="s" name="t" time="1.5"/></testsuite>',
+      'j.xml',
+    );
     expect(result.readings).toEqual([
       { name: 's', value: 2, unit: 's', where: 'j.xml:/testsuite' },
       { name: 's/t', value: 1.5, unit: 's', where: 'j.xml:/testsuite/testcase' },
@@ -24,19 +27,31 @@ describe('readJunit', () => {
   });
 
   it('names the element path of a bad time', () => {
-    const text = '<testsuites><testsuite name="a"><testcase name="x" time="1"/><testcase name="y" time="1,5"/></testsuite></testsuites>';
+    const text =
+      '<testsuites><testsuite name="a"><testcase name="x" time="1"/><testcase name="y" time="1,5"/></testsuite></testsuites>';
     const error = inputErrorOf(() => readJunit(text, 'j.xml'));
     expect(error.where).toBe('j.xml:/testsuites/testsuite/testcase[2]@time');
-    expect(inputErrorOf(() => readJunit('<testsuite name="a"><testcase name="x" time="-1"/></testsuite>', 'j.xml')).message).toMatch(/negative/);
+    expect(
+      inputErrorOf(() => readJunit('<testsuite name="a"><testcase name="x" time="-1"/></testsuite>', 'j.xml')).message,
+    ).toMatch(/negative/);
   });
 
   it('refuses a test case without a name and XML that is not a JUnit report', () => {
-    expect(inputErrorOf(() => readJunit('<testsuite name="a"><testcase time="1"/></testsuite>', 'j.xml')).where).toBe('j.xml:/testsuite/testcase');
-    expect(inputErrorOf(() => readJunit('<html><body/></html>', 'j.xml')).message).toMatch(/no <testsuites> or <testsuite>/);
+    expect(inputErrorOf(() => readJunit('<testsuite name="a"><testcase time="1"/></testsuite>', 'j.xml')).where).toBe(
+      'j.xml:/testsuite/testcase',
+    );
+    expect(inputErrorOf(() => readJunit('<html><body/></html>', 'j.xml')).message).toMatch(
+      /no <testsuites> or <testsuite>/,
+    );
   });
 
   it('limits entity expansion (a "billion laughs" document is refused, not expanded)', () => {
-    const lol = '<!DOCTYPE t [<!ENTITY a "aaaaaaaaaa">' + Array.from({ length: 8 }, (_, i) => `<!ENTITY b${i} "${`&${i === 0 ? 'a' : `b${i - 1}`};`.repeat(10)}">`).join('') + ']>';
+    const lol =
+      '<!DOCTYPE t [<!ENTITY a "aaaaaaaaaa">' +
+      Array.from({ length: 8 }, (_, i) => `<!ENTITY b${i} "${`&${i === 0 ? 'a' : `b${i - 1}`};`.repeat(10)}">`).join(
+        '',
+      ) +
+      ']>';
     const text = `${lol}<testsuite name="&b7;" time="1"/>`;
     // Expanded, the name would be 10^9 characters; it must come back short or as an InputError.
     let length = -1;

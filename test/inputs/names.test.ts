@@ -32,7 +32,9 @@ describe('checkMetricName', () => {
 
   it('refuses the bidirectional overrides and isolates U+202A-202E and U+2066-2069 (Unicode TR9)', () => {
     for (let code = 0x202a; code <= 0x202e; code++) {
-      expect(inputErrorOf(() => checkMetricName(`a${String.fromCodePoint(code)}b`)).message).toMatch(/bidirectional override/);
+      expect(inputErrorOf(() => checkMetricName(`a${String.fromCodePoint(code)}b`)).message).toMatch(
+        /bidirectional override/,
+      );
     }
     for (let code = 0x2066; code <= 0x2069; code++) {
       expect(inputErrorOf(() => checkMetricName(`a${String.fromCodePoint(code)}b`)).message).toMatch(/U\+206[6-9]/);

@@ -5,14 +5,27 @@ import { inputErrorOf } from './helpers.js';
 
 describe('foldLabels', () => {
   it('sorts labels by key and escapes the characters that would make the name ambiguous', () => {
-    expect(foldLabels('q', [['b', '2'], ['a', '1']])).toBe('q/a=1,b=2');
-    expect(foldLabels('q', [['path', '/a,b=c'], ['pct', '50%']])).toBe('q/path=/a%2Cb=c,pct=50%25');
+    expect(
+      foldLabels('q', [
+        ['b', '2'],
+        ['a', '1'],
+      ]),
+    ).toBe('q/a=1,b=2');
+    expect(
+      foldLabels('q', [
+        ['path', '/a,b=c'],
+        ['pct', '50%'],
+      ]),
+    ).toBe('q/path=/a%2Cb=c,pct=50%25');
     expect(foldLabels('q', [['v', 'x\u202Ey\n']])).toBe('q/v=x%E2%80%AEy%0A');
     expect(foldLabels('q', [])).toBe('q');
   });
 
   it('can be undone: decoding each value gives back the labels (property over a few cases)', () => {
-    const labels: [string, string][] = [['a', 'x,y=z/%w'], ['b', '\n']];
+    const labels: [string, string][] = [
+      ['a', 'x,y=z/%w'],
+      ['b', '\n'],
+    ];
     const folded = foldLabels('m', labels);
     const [, pairs] = folded.split(/\/(.*)/s);
     const back = pairs!.split(',').map((pair) => {
@@ -65,7 +78,9 @@ describe('readOpenMetrics', () => {
   });
 
   it('refuses an unknown TYPE', () => {
-    expect(inputErrorOf(() => readOpenMetrics('# TYPE a thing\na 1\n', 'm.prom')).message).toMatch(/unknown metric type "thing"/);
+    expect(inputErrorOf(() => readOpenMetrics('# TYPE a thing\na 1\n', 'm.prom')).message).toMatch(
+      /unknown metric type "thing"/,
+    );
   });
 
   it('keeps unknown escapes and reads trailing commas in label sets (Prometheus text format 0.0.4)', () => {

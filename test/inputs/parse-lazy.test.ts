@@ -21,7 +21,12 @@ describe('parseMetricTextLazily', () => {
   });
 
   it('refuses what the eager parser refuses, with the same InputError', async () => {
-    for (const [text, format] of [['', undefined], ['{"a": "x"}', 'json'], ['<testsuites/>', 'junit'], ['x', 'nonsense']] as const) {
+    for (const [text, format] of [
+      ['', undefined],
+      ['{"a": "x"}', 'json'],
+      ['<testsuites/>', 'junit'],
+      ['x', 'nonsense'],
+    ] as const) {
       let eager: unknown;
       try {
         parseMetricText(text, 'f', format);

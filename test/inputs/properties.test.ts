@@ -25,10 +25,57 @@ const readers: [string, (text: string) => ReadResult][] = [
 
 // Pieces of every format, so random texts get past the first check of each reader.
 const tokens = fc.constantFrom(
-  '{', '}', '[', ']', '"', ',', ':', ' ', '\t', '\n', '\r\n', '=', '#', '# TYPE ', '# UNIT ', '# EOF', '<', '>', '/', '\\',
-  '"name"', '"value"', '"samples"', '"metrics"', '"unit"', 'name', 'value', 'unit', '__proto__', 'constructor',
-  '1', '-2.5', '1e999', 'NaN', '+Inf', '0x1F', 'ns/op', 'Benchmark', 'BenchmarkA-8', ' 100 ', 'goos: x', 'a_total', 'le="1"',
-  '<testsuite name="s" time="1">', '<testcase name="t" time="x"/>', '</testsuite>', '<skipped/>', '&amp;', '\u202e', '\u0000', 'é',
+  '{',
+  '}',
+  '[',
+  ']',
+  '"',
+  ',',
+  ':',
+  ' ',
+  '\t',
+  '\n',
+  '\r\n',
+  '=',
+  '#',
+  '# TYPE ',
+  '# UNIT ',
+  '# EOF',
+  '<',
+  '>',
+  '/',
+  '\\',
+  '"name"',
+  '"value"',
+  '"samples"',
+  '"metrics"',
+  '"unit"',
+  'name',
+  'value',
+  'unit',
+  '__proto__',
+  'constructor',
+  '1',
+  '-2.5',
+  '1e999',
+  'NaN',
+  '+Inf',
+  '0x1F',
+  'ns/op',
+  'Benchmark',
+  'BenchmarkA-8',
+  ' 100 ',
+  'goos: x',
+  'a_total',
+  'le="1"',
+  '<testsuite name="s" time="1">',
+  '<testcase name="t" time="x"/>',
+  '</testsuite>',
+  '<skipped/>',
+  '&amp;',
+  '\u202e',
+  '\u0000',
+  'é',
 );
 const soup = fc.array(tokens, { maxLength: 60 }).map((parts) => parts.join(''));
 const bytes = fc.uint8Array({ maxLength: 300 }).map((b) => new TextDecoder('utf-8').decode(b));
@@ -52,7 +99,10 @@ function readOrInputError(read: (text: string) => ReadResult, text: string): voi
 
 describe.each(readers)('reader %s on arbitrary text', (_format, read) => {
   it('returns sound readings or throws InputError, never anything else', () => {
-    fc.assert(fc.property(anyText, (text) => readOrInputError(read, text)), { numRuns: RUNS });
+    fc.assert(
+      fc.property(anyText, (text) => readOrInputError(read, text)),
+      { numRuns: RUNS },
+    );
   });
 });
 
@@ -60,13 +110,20 @@ describe.each(readers)('reader %s on arbitrary text', (_format, read) => {
 const nameArb = fc
   .string({ unit: 'grapheme', minLength: 1, maxLength: 30 })
   .filter((s) => s.trim() !== '' && !/[\u0000-\u001f\u007f-\u009f\u202a-\u202e\u2066-\u2069]/u.test(s));
-const unitArb = fc.option(fc.constantFrom('ns', 'ms', 's', 'B', 'KiB', 'ns/op', 'allocs/op', '%', 'req/s', 'µs'), { nil: undefined });
+const unitArb = fc.option(fc.constantFrom('ns', 'ms', 's', 'B', 'KiB', 'ns/op', 'allocs/op', '%', 'req/s', 'µs'), {
+  nil: undefined,
+});
 // -0 is written "0" by every text format; its sign is not a measurement.
 const valueArb = fc.double({ noNaN: true, noDefaultInfinity: true }).map((v) => (v === 0 ? 0 : v));
-const runArb = fc.uniqueArray(fc.record({ name: nameArb, value: valueArb, unit: unitArb }), { selector: (m) => m.name, minLength: 1, maxLength: 20 });
+const runArb = fc.uniqueArray(fc.record({ name: nameArb, value: valueArb, unit: unitArb }), {
+  selector: (m) => m.name,
+  minLength: 1,
+  maxLength: 20,
+});
 
 type Metric = { name: string; value: number; unit?: string };
-const asRun = (result: ReadResult) => [...collectRun([result], () => 'median').metrics].map(([name, m]) => ({ name, value: m.value, unit: m.unit }));
+const asRun = (result: ReadResult) =>
+  [...collectRun([result], () => 'median').metrics].map(([name, m]) => ({ name, value: m.value, unit: m.unit }));
 const expected = (metrics: Metric[]) => metrics.map(({ name, value, unit }) => ({ name, value, unit }));
 
 function csvCell(text: string): string {
@@ -77,7 +134,11 @@ describe('round trips: write a run in the format, read it back, same names, valu
   it('own JSON, list form', () => {
     fc.assert(
       fc.property(runArb, (metrics) => {
-        const text = JSON.stringify({ metrics: metrics.map(({ name, value, unit }) => ({ name, value, unit })) }, null, 2);
+        const text = JSON.stringify(
+          { metrics: metrics.map(({ name, value, unit }) => ({ name, value, unit })) },
+          null,
+          2,
+        );
         expect(asRun(parseMetricText(text, 'm.json'))).toEqual(expected(metrics));
       }),
       { numRuns: RUNS },
@@ -92,7 +153,9 @@ describe('round trips: write a run in the format, read it back, same names, valu
         const written = metrics;
         // Objects list integer-like keys ("7") first, so compare in name order.
         const byName = (a: Metric, b: Metric) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0);
-        expect(asRun(readJsonMetrics(text, 'm.json')).sort(byName)).toEqual(written.map(({ name, value }) => ({ name, value, unit: undefined })).sort(byName));
+        expect(asRun(readJsonMetrics(text, 'm.json')).sort(byName)).toEqual(
+          written.map(({ name, value }) => ({ name, value, unit: undefined })).sort(byName),
+        );
       }),
       { numRuns: RUNS },
     );
@@ -111,7 +174,9 @@ describe('round trips: write a run in the format, read it back, same names, valu
   it('CSV, long form with RFC 4180 quoting', () => {
     fc.assert(
       fc.property(runArb, (metrics) => {
-        const rows = metrics.map(({ name, value, unit }) => [csvCell(name), String(value), csvCell(unit ?? '')].join(','));
+        const rows = metrics.map(({ name, value, unit }) =>
+          [csvCell(name), String(value), csvCell(unit ?? '')].join(','),
+        );
         const text = ['name,value,unit', ...rows].join('\r\n');
         expect(asRun(parseMetricText(text, 'm.csv', 'csv'))).toEqual(expected(metrics));
       }),

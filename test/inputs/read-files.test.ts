@@ -9,16 +9,27 @@ import { InputError } from '../../src/model/input-error.js';
 import { inputErrorOf } from './helpers.js';
 
 let dir = '';
-const options = (extra: object = {}) => ({ limits: DEFAULT_LIMITS, aggregateFor: () => 'median' as const, cwd: dir, ...extra });
+const options = (extra: object = {}) => ({
+  limits: DEFAULT_LIMITS,
+  aggregateFor: () => 'median' as const,
+  cwd: dir,
+  ...extra,
+});
 
 beforeAll(async () => {
   dir = await mkdtemp(path.join(tmpdir(), 'bellgate-inputs-'));
   await mkdir(path.join(dir, 'bench'));
-  await writeFile(path.join(dir, 'bench', 'a.txt'), 'goos: linux\nBenchmarkRoute-8 100 400 ns/op\nBenchmarkRoute-8 100 420 ns/op\n');
+  await writeFile(
+    path.join(dir, 'bench', 'a.txt'),
+    'goos: linux\nBenchmarkRoute-8 100 400 ns/op\nBenchmarkRoute-8 100 420 ns/op\n',
+  );
   await writeFile(path.join(dir, 'bench', 'b.txt'), 'BenchmarkRoute-8 100 410 ns/op\n');
   await writeFile(path.join(dir, 'size.json'), '{"metrics": [{"name": "bundle", "value": 2, "unit": "KiB"}]}');
   await writeFile(path.join(dir, 'size2.csv'), 'name,value,unit\nbundle,1024,B\n');
-  await writeFile(path.join(dir, 'latin1.csv'), Buffer.from([0x6e, 0x61, 0x6d, 0x65, 0x2c, 0x76, 0x61, 0x6c, 0x75, 0x65, 0x0a, 0xe9, 0x2c, 0x31, 0x0a]));
+  await writeFile(
+    path.join(dir, 'latin1.csv'),
+    Buffer.from([0x6e, 0x61, 0x6d, 0x65, 0x2c, 0x76, 0x61, 0x6c, 0x75, 0x65, 0x0a, 0xe9, 0x2c, 0x31, 0x0a]),
+  );
   await writeFile(path.join(dir, '[odd].json'), '{"odd": 1}');
 });
 
@@ -49,7 +60,10 @@ describe('readMetricFiles', () => {
   });
 
   it('prefixes names with "=> prefix" or the prefixes option, joined with /', async () => {
-    const run = await readMetricFiles(['bench/b.txt => server', 'size.json'], options({ prefixes: new Map([['size.json', 'web/']]) }));
+    const run = await readMetricFiles(
+      ['bench/b.txt => server', 'size.json'],
+      options({ prefixes: new Map([['size.json', 'web/']]) }),
+    );
     expect([...run.metrics.keys()].sort()).toEqual(['server/BenchmarkRoute/ns/op', 'web/bundle']);
   });
 
@@ -71,7 +85,9 @@ describe('readMetricFiles', () => {
   });
 
   it('refuses a pattern with no match, a directory, and an empty list', async () => {
-    await expect(readMetricFiles(['nothing/*.json'], options())).rejects.toThrow(/no metric file matches "nothing\/\*\.json"/);
+    await expect(readMetricFiles(['nothing/*.json'], options())).rejects.toThrow(
+      /no metric file matches "nothing\/\*\.json"/,
+    );
     await expect(readMetricFiles(['bench'], options())).rejects.toThrow(/is a directory/);
     await expect(readMetricFiles([], options())).rejects.toBeInstanceOf(InputError);
   });
@@ -93,10 +109,14 @@ describe('readMetricFiles', () => {
 
   it('refuses more than limits.max-metrics metrics over all files', async () => {
     const limits = { ...DEFAULT_LIMITS, maxMetrics: 1 };
-    await expect(readMetricFiles(['bench/b.txt', 'size.json'], options({ limits }))).rejects.toThrow(/limits\.max-metrics = 1/);
+    await expect(readMetricFiles(['bench/b.txt', 'size.json'], options({ limits }))).rejects.toThrow(
+      /limits\.max-metrics = 1/,
+    );
   });
 
   it('refuses a prefixed name that grows past 512 characters', async () => {
-    await expect(readMetricFiles([`size.json => ${'p'.repeat(510)}`], options())).rejects.toThrow(/more than the 512 allowed/);
+    await expect(readMetricFiles([`size.json => ${'p'.repeat(510)}`], options())).rejects.toThrow(
+      /more than the 512 allowed/,
+    );
   });
 });

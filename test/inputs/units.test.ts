@@ -6,7 +6,10 @@ import { createRequire } from 'node:module';
 import fc from 'fast-check';
 
 // jStat, a reference statistics library from the npm registry (dev dependency; ships no types).
-const jStat = createRequire(import.meta.url)('jstat') as Record<'median' | 'mean' | 'min' | 'max', (values: number[]) => number>;
+const jStat = createRequire(import.meta.url)('jstat') as Record<
+  'median' | 'mean' | 'min' | 'max',
+  (values: number[]) => number
+>;
 
 describe('convertUnit', () => {
   it('converts time units by the SI definitions (SI Brochure, 9th ed., tables 7 and 8)', () => {
@@ -47,9 +50,14 @@ describe('convertUnit', () => {
   it('round-trips: converting there and back returns the value (property)', () => {
     const units = ['ns', 'us', 'ms', 's', 'min', 'h'];
     fc.assert(
-      fc.property(fc.double({ min: -1e12, max: 1e12, noNaN: true }), fc.constantFrom(...units), fc.constantFrom(...units), (v, a, b) => {
-        expectClose(convertUnit(convertUnit(v, a, b)!, b, a)!, v, 1e-15, 1e-290); // subnormals may underflow
-      }),
+      fc.property(
+        fc.double({ min: -1e12, max: 1e12, noNaN: true }),
+        fc.constantFrom(...units),
+        fc.constantFrom(...units),
+        (v, a, b) => {
+          expectClose(convertUnit(convertUnit(v, a, b)!, b, a)!, v, 1e-15, 1e-290); // subnormals may underflow
+        },
+      ),
       { numRuns: 200 },
     );
   });
@@ -59,12 +67,18 @@ describe('aggregateSamples', () => {
   it('agrees with jstat (a reference library) for median, mean, min and max', () => {
     fc.assert(
       // -0 and 0 are the same measurement; jStat and Math.min may return either.
-      fc.property(fc.array(fc.double({ min: -1e6, max: 1e6, noNaN: true }).map((v) => (v === 0 ? 0 : v)), { minLength: 1, maxLength: 50 }), (values) => {
-        expectClose(aggregateSamples(values, 'median'), jStat.median(values), 1e-12, 1e-9);
-        expectClose(aggregateSamples(values, 'mean'), jStat.mean(values), 1e-9, 1e-6);
-        expect(aggregateSamples(values, 'min')).toBe(jStat.min(values));
-        expect(aggregateSamples(values, 'max')).toBe(jStat.max(values));
-      }),
+      fc.property(
+        fc.array(
+          fc.double({ min: -1e6, max: 1e6, noNaN: true }).map((v) => (v === 0 ? 0 : v)),
+          { minLength: 1, maxLength: 50 },
+        ),
+        (values) => {
+          expectClose(aggregateSamples(values, 'median'), jStat.median(values), 1e-12, 1e-9);
+          expectClose(aggregateSamples(values, 'mean'), jStat.mean(values), 1e-9, 1e-6);
+          expect(aggregateSamples(values, 'min')).toBe(jStat.min(values));
+          expect(aggregateSamples(values, 'max')).toBe(jStat.max(values));
+        },
+      ),
       { numRuns: 200 },
     );
   });

@@ -77,12 +77,31 @@ function steps(levels: [number, number][], sd: number, seed: number): number[] {
 describe('detectChangePoints', () => {
   it('finds one clear step: 40 runs at 100 ± 1, then 30 at 110 ± 1 -> [40]', () => {
     for (const seed of [1, 2, 3, 4, 5]) {
-      expect(detectChangePoints(steps([[40, 100], [30, 110]], 1, seed))).toEqual([40]);
+      expect(
+        detectChangePoints(
+          steps(
+            [
+              [40, 100],
+              [30, 110],
+            ],
+            1,
+            seed,
+          ),
+        ),
+      ).toEqual([40]);
     }
   });
 
   it('finds injected steps up and down, on a large offset', () => {
-    const values = steps([[25, 1e9], [20, 1e9 + 8], [30, 1e9 + 3]], 1, 8);
+    const values = steps(
+      [
+        [25, 1e9],
+        [20, 1e9 + 8],
+        [30, 1e9 + 3],
+      ],
+      1,
+      8,
+    );
     expect(detectChangePoints(values)).toEqual([25, 45]);
   });
 
@@ -97,9 +116,24 @@ describe('detectChangePoints', () => {
 
   it('returns exactly the optimal partition (PELT pruning loses nothing)', () => {
     for (const seed of [11, 12, 13, 14, 15, 16]) {
-      const values = steps([[15, 0], [12, 2.5], [20, 1], [10, -1.5]], 1, seed);
-      for (const [penalty, minSegment] of [[3 * Math.log(values.length), 5], [4, 2], [1, 1]] as const) {
-        expect(detectChangePoints(values, { penalty, minSegment })).toEqual(optimalPartition(values, penalty, minSegment));
+      const values = steps(
+        [
+          [15, 0],
+          [12, 2.5],
+          [20, 1],
+          [10, -1.5],
+        ],
+        1,
+        seed,
+      );
+      for (const [penalty, minSegment] of [
+        [3 * Math.log(values.length), 5],
+        [4, 2],
+        [1, 1],
+      ] as const) {
+        expect(detectChangePoints(values, { penalty, minSegment })).toEqual(
+          optimalPartition(values, penalty, minSegment),
+        );
       }
     }
   });
@@ -108,7 +142,10 @@ describe('detectChangePoints', () => {
     // Segments of random length and level, Gaussian noise; some series quantised to whole units so
     // the MAD of differences is often 0 (the RMS fallback) and costs tie. A long series first, so
     // the scratch buffers shared between calls are larger than the series and hold stale values.
-    const segment = fc.record({ length: fc.integer({ min: 1, max: 40 }), level: fc.double({ min: -6, max: 6, noNaN: true }) });
+    const segment = fc.record({
+      length: fc.integer({ min: 1, max: 40 }),
+      level: fc.double({ min: -6, max: 6, noNaN: true }),
+    });
     const series = fc.record({
       segments: fc.array(segment, { minLength: 1, maxLength: 5 }),
       seed: fc.integer({ min: 1, max: 1e6 }),
@@ -119,8 +156,21 @@ describe('detectChangePoints', () => {
     });
     fc.assert(
       fc.property(series, ({ segments, seed, offset, quantised, minSegment, penaltyScale }) => {
-        detectChangePoints(steps([[300, 0], [200, 3]], 1, seed));
-        const raw = steps(segments.map((s) => [s.length, s.level] as [number, number]), 1, seed);
+        detectChangePoints(
+          steps(
+            [
+              [300, 0],
+              [200, 3],
+            ],
+            1,
+            seed,
+          ),
+        );
+        const raw = steps(
+          segments.map((s) => [s.length, s.level] as [number, number]),
+          1,
+          seed,
+        );
         const values = raw.map((x) => offset + (quantised ? Math.round(x) : x));
         const penalty = penaltyScale * Math.log(Math.max(values.length, 2));
         const found = detectChangePoints(values, { penalty, minSegment });
@@ -164,7 +214,10 @@ describe('detectChangePoints', () => {
         const b = Math.max(1, Math.min(n - 1, Math.round(cut * n)));
         const d = factor * Math.sqrt((3 * Math.log(n) * n) / (b * (n - b)));
         const c = Math.max(b, Math.min(n - 1, b + Math.round(second * (n - b))));
-        const values = Array.from({ length: n }, (_, i) => offset + normal() + (i >= b ? d : 0) - (count === 2 && i >= c ? d : 0));
+        const values = Array.from(
+          { length: n },
+          (_, i) => offset + normal() + (i >= b ? d : 0) - (count === 2 && i >= c ? d : 0),
+        );
         expect(detectChangePoints(values)).toEqual(optimalPartition(values, 3 * Math.log(n), 5));
       }),
       { numRuns: 600, seed: 2718 },

@@ -10,7 +10,9 @@ describe('adjustTails', () => {
   // Benjamini & Hochberg (1995), "Controlling the false discovery rate", section 4: the 15
   // p-values of their example (from memory). At q = 0.05 the step-up procedure rejects four;
   // Bonferroni (0.05/15 = 0.0033) rejects three, and so does Holm's step-down.
-  const bh1995 = [0.0001, 0.0004, 0.0019, 0.0095, 0.0201, 0.0278, 0.0298, 0.0344, 0.0459, 0.324, 0.4262, 0.5719, 0.6528, 0.759, 1];
+  const bh1995 = [
+    0.0001, 0.0004, 0.0019, 0.0095, 0.0201, 0.0278, 0.0298, 0.0344, 0.0459, 0.324, 0.4262, 0.5719, 0.6528, 0.759, 1,
+  ];
 
   it('BH 1995 example: fdr rejects 4 at 0.05, Bonferroni and Holm 3', () => {
     expect(rejected(adjustTails(bh1995, 'fdr'), 0.05)).toBe(4);

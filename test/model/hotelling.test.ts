@@ -50,7 +50,11 @@ describe('far tails (computed directly, not as 1 - cdf)', () => {
   });
 
   it('hotellingTail with p = 2 follows the closed form of F(2, m): (1 + 2F/m)^(-m/2) (from memory)', () => {
-    for (const [d2, n] of [[40, 30], [400, 1000], [3000, 5000]] as const) {
+    for (const [d2, n] of [
+      [40, 30],
+      [400, 1000],
+      [3000, 5000],
+    ] as const) {
       const t2 = (d2 * n) / (n + 1);
       const f = (t2 * (n - 2)) / (2 * (n - 1));
       const m = n - 2;

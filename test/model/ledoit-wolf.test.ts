@@ -96,7 +96,12 @@ describe('shrunkCovariance', () => {
 
   it('rejects ragged rows, non-finite values and too few runs with an InputError', () => {
     expect(() => shrunkCovariance([[1, 2], [3]])).toThrow(/run 2/);
-    expect(() => shrunkCovariance([[1, 2], [3, Number.NaN]])).toThrow(InputError);
+    expect(() =>
+      shrunkCovariance([
+        [1, 2],
+        [3, Number.NaN],
+      ]),
+    ).toThrow(InputError);
     expect(() => shrunkCovariance([[1, 2]])).toThrow(InputError);
     expect(() => shrunkCovariance([[], []])).toThrow(InputError);
   });

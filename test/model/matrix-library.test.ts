@@ -8,7 +8,10 @@ describe('loadMatrixLibrary / prepareGate', () => {
     expect(() => lib.matrixLibrary()).toThrow(/loadMatrixLibrary/);
     await lib.loadMatrixLibrary();
     // Reference: the 2 x 2 identity (ml-matrix's Matrix.eye), checked by its definition.
-    expect(lib.matrixLibrary().Matrix.eye(2).to2DArray()).toEqual([[1, 0], [0, 1]]);
+    expect(lib.matrixLibrary().Matrix.eye(2).to2DArray()).toEqual([
+      [1, 0],
+      [0, 1],
+    ]);
   });
 
   it('prepareGate loads it (and the group judge) for a config with groups and not without', async () => {
@@ -26,6 +29,8 @@ describe('loadMatrixLibrary / prepareGate', () => {
     expect(() => lib.matrixLibrary()).toThrow(/not loaded/);
     await prepareGate(grouped);
     expect(lib.matrixLibrary().Matrix.eye(1).get(0, 0)).toBe(1);
-    expect(runGate({ config: grouped, history: emptyHistory('s'), run, series: 's' }).metrics.map((m) => m.status)).toEqual(['new']);
+    expect(
+      runGate({ config: grouped, history: emptyHistory('s'), run, series: 's' }).metrics.map((m) => m.status),
+    ).toEqual(['new']);
   });
 });

@@ -58,7 +58,7 @@ describe('andersonDarling', () => {
     }
   });
 
-  it('p-values at the published critical values of A*^2 (D\'Agostino & Stephens 1986)', () => {
+  it("p-values at the published critical values of A*^2 (D'Agostino & Stephens 1986)", () => {
     // Critical values for the normal case with both parameters estimated (from memory):
     // 0.631 at 10%, 0.752 at 5%, 0.873 at 2.5%, 1.035 at 1%. Table 4.9's formulas reproduce
     // them to about 2 digits.

@@ -9,7 +9,14 @@ import { studentTail } from '../../src/model/tails.js';
 describe('seriesTwoSidedTail (A&S 26.7.3-4)', () => {
   it('matches the two-sided critical values of the standard t table', () => {
     // Standard t table (e.g. NIST/SEMATECH e-Handbook 1.3.6.7.2; 3 decimals, from memory).
-    for (const [nu, alpha, t] of [[1, 0.05, 12.706], [2, 0.05, 4.303], [3, 0.01, 5.841], [10, 0.05, 2.228], [29, 0.01, 2.756], [59, 0.05, 2.001]] as const) {
+    for (const [nu, alpha, t] of [
+      [1, 0.05, 12.706],
+      [2, 0.05, 4.303],
+      [3, 0.01, 5.841],
+      [10, 0.05, 2.228],
+      [29, 0.01, 2.756],
+      [59, 0.05, 2.001],
+    ] as const) {
       expectClose(seriesTwoSidedTail(t, nu) ?? NaN, alpha, 2e-3);
     }
   });

@@ -67,7 +67,9 @@ describe('escapeMarkdown', () => {
 
 describe('escapeHtml', () => {
   it('escapes the five HTML-significant characters (HTML Living Standard, "escaping a string")', () => {
-    expect(escapeHtml(`<a href="x" title='y'>&</a>`)).toBe('&lt;a href=&quot;x&quot; title=&#39;y&#39;&gt;&amp;&lt;/a&gt;');
+    expect(escapeHtml(`<a href="x" title='y'>&</a>`)).toBe(
+      '&lt;a href=&quot;x&quot; title=&#39;y&#39;&gt;&amp;&lt;/a&gt;',
+    );
     expect(escapeHtml(HOSTILE.img)).toBe('&lt;img src=x onerror=alert(1)&gt;');
   });
 

@@ -39,7 +39,11 @@ describe('renderExplain', () => {
   });
 
   it('puts one dot per baseline run under the curve', () => {
-    const dots = lines.filter((l) => /^[ •+]+$/.test(l)).join('').match(/[•+]/g) ?? [];
+    const dots =
+      lines
+        .filter((l) => /^[ •+]+$/.test(l))
+        .join('')
+        .match(/[•+]/g) ?? [];
     // '+' stands for "more than three" in a column, so there are at most as many marks as runs.
     expect(dots.length).toBeGreaterThan(10);
     expect(dots.length).toBeLessThanOrEqual(values.length);
@@ -71,18 +75,32 @@ describe('renderExplain', () => {
     const r = jStat.studentt.pdf(t, n - 1) / jStat.studentt.pdf(0, n - 1);
     expect(r).toBeGreaterThan(Math.exp(-0.5 * z * z));
     const predictive = { ...result, status: 'ok' as const, z, relativeDensity: r, baseline: { n, mean: 10, sd } };
-    expect(renderExplain({ result: predictive, baselineValues: values, cutoff: 0.01, color: false })).toContain('predictive Student-t');
+    expect(renderExplain({ result: predictive, baselineValues: values, cutoff: 0.01, color: false })).toContain(
+      'predictive Student-t',
+    );
     const plugIn = { ...predictive, relativeDensity: Math.exp(-0.5 * z * z) };
-    expect(renderExplain({ result: plugIn, baselineValues: values, cutoff: 0.01, color: false })).not.toContain('predictive Student-t');
+    expect(renderExplain({ result: plugIn, baselineValues: values, cutoff: 0.01, color: false })).not.toContain(
+      'predictive Student-t',
+    );
   });
 
   it('says so in words when there is no fit', () => {
-    const text = renderExplain({ result: { ...result, status: 'learning', baseline: undefined, reason: '3 of 8 runs' }, baselineValues: [1, 2], cutoff: 0.01, color: false });
+    const text = renderExplain({
+      result: { ...result, status: 'learning', baseline: undefined, reason: '3 of 8 runs' },
+      baselineValues: [1, 2],
+      cutoff: 0.01,
+      color: false,
+    });
     expect(text).toContain('no fitted baseline: 3 of 8 runs');
   });
 
   it('labels a log-scale fit by its geometric mean', () => {
-    const text = renderExplain({ result: { ...result, baseline: { n: 20, mean: Math.log(10), sd: 0.1, scale: 'log' } }, baselineValues: values, cutoff: 0.01, color: true });
+    const text = renderExplain({
+      result: { ...result, baseline: { n: 20, mean: Math.log(10), sd: 0.1, scale: 'log' } },
+      baselineValues: values,
+      cutoff: 0.01,
+      color: true,
+    });
     expect(text).toContain('geometric mean 10 s');
     expect(text).toContain('\u001b');
   });

@@ -60,11 +60,14 @@ export function makeFixture(extra: Spec[] = []): { report: Report; history: Hist
   const history: History = { series: 'linux-x64', runs, columns: new Map() };
   const metrics: MetricResult[] = specs.map((s, k) => {
     const rnd = noise(k + 1);
-    const values = runs.map((_, i) => (s.status === 'new' ? NaN : s.status === 'learning' && i < 26 ? NaN : s.centre + s.spread * rnd() * 1.7));
+    const values = runs.map((_, i) =>
+      s.status === 'new' ? NaN : s.status === 'learning' && i < 26 ? NaN : s.centre + s.spread * rnd() * 1.7,
+    );
     if (s.status !== 'new') history.columns.set(s.name, { unit: s.unit, values });
     const cutoff = 0.01;
     const base = values.filter((v) => Number.isFinite(v));
-    const judged = s.status === 'regressed' || s.status === 'improved' || s.status === 'ok' || (s.status === 'ignored' && false);
+    const judged =
+      s.status === 'regressed' || s.status === 'improved' || s.status === 'ok' || (s.status === 'ignored' && false);
     const fitVals = s.scale === 'log' ? base.map(Math.log) : base;
     const mu = judged || s.status === 'missing' ? mean(fitVals) : undefined;
     const sd = judged || s.status === 'missing' ? standardDeviation(fitVals) : undefined;

@@ -1,6 +1,12 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatAgainstCutoff, formatChange, formatDensity, formatNumber, formatSigma } from '../../src/report/format.js';
+import {
+  formatAgainstCutoff,
+  formatChange,
+  formatDensity,
+  formatNumber,
+  formatSigma,
+} from '../../src/report/format.js';
 
 // Reference: ECMA-402 Intl.NumberFormat with maximumSignificantDigits (the platform's own
 // implementation of significant-digit rounding), grouping off.

@@ -22,7 +22,14 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
   let dir = '';
 
   beforeAll(async () => {
-    const hostile = Object.values(HOSTILE).map((name, k) => ({ name, unit: '<b>u</b>', centre: 10 + k, spread: 0.5, now: 10 + k, status: 'ok' as const }));
+    const hostile = Object.values(HOSTILE).map((name, k) => ({
+      name,
+      unit: '<b>u</b>',
+      centre: 10 + k,
+      spread: 0.5,
+      now: 10 + k,
+      status: 'ok' as const,
+    }));
     const { report, history } = makeFixture(hostile);
     const html = renderHtmlReport({ report, history, generatedAt: '2026-12-01T12:00:00Z' });
     dir = join(tmpdir(), `bellgate-report-${process.pid}`);
@@ -32,7 +39,14 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
     url = pathToFileURL(file).href;
     browser = await chromium.launch({
       executablePath: CHROMIUM,
-      args: ['--no-sandbox', '--disable-gpu', '--disable-background-networking', '--disable-component-update', '--no-first-run', '--disable-sync'],
+      args: [
+        '--no-sandbox',
+        '--disable-gpu',
+        '--disable-background-networking',
+        '--disable-component-update',
+        '--no-first-run',
+        '--disable-sync',
+      ],
     });
     page = await browser.newPage({ viewport: { width: 1100, height: 900 } });
     page.on('console', (msg) => {
@@ -72,7 +86,9 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
   it('draws every SVG with sized shapes', async () => {
     const sizes = await page.$$eval('svg.chart', (svgs) =>
       svgs.map((svg) => {
-        const shapes = Array.from(svg.querySelectorAll('path, circle, rect')).map((el) => (el as unknown as { getBBox(): { width: number; height: number } }).getBBox());
+        const shapes = Array.from(svg.querySelectorAll('path, circle, rect')).map((el) =>
+          (el as unknown as { getBBox(): { width: number; height: number } }).getBBox(),
+        );
         const box = svg.getBoundingClientRect();
         return { w: box.width, h: box.height, shapes: shapes.filter((b) => b.width > 0 || b.height > 0).length };
       }),
@@ -86,7 +102,8 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
   });
 
   it('re-sorts the summary table when a header is clicked', async () => {
-    const names = (): Promise<string[]> => page.$$eval('#summary tbody tr td:nth-child(2)', (tds) => tds.map((td) => td.textContent ?? ''));
+    const names = (): Promise<string[]> =>
+      page.$$eval('#summary tbody tr td:nth-child(2)', (tds) => tds.map((td) => td.textContent ?? ''));
     const before = await names();
     // Markup order: by status, regressions first.
     expect(before[0]).toBe('build/time');
@@ -94,7 +111,10 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
     const asc = await names();
     expect(asc).not.toEqual(before);
     // Sorted ascending by the browser's own collation (localeCompare), the same the page uses.
-    const expected = await page.evaluate((xs) => [...xs].sort((a, b) => a.toLowerCase().localeCompare(b.toLowerCase())), before);
+    const expected = await page.evaluate(
+      (xs) => [...xs].sort((a, b) => a.toLowerCase().localeCompare(b.toLowerCase())),
+      before,
+    );
     expect(asc).toEqual(expected);
     await page.click('#summary thead th:nth-child(2) button');
     expect(await names()).toEqual([...expected].reverse());

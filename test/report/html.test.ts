@@ -8,10 +8,17 @@ import { jStat } from '../model/jstat.js';
 import { expectClose } from '../helpers/close.js';
 import { HOSTILE, makeFixture } from './fixture.js';
 
-const base: MetricResult = { name: 'm', status: 'ok', cutoff: 0.01, worse: 'higher', reason: 'r', baseline: { n: 30, mean: 10, sd: 2 } };
+const base: MetricResult = {
+  name: 'm',
+  status: 'ok',
+  cutoff: 0.01,
+  worse: 'higher',
+  reason: 'r',
+  baseline: { n: 30, mean: 10, sd: 2 },
+};
 
 describe('cutoffBand', () => {
-  it('has edges where the fitted Gaussian\'s relative density equals the cutoff (jstat second opinion)', () => {
+  it("has edges where the fitted Gaussian's relative density equals the cutoff (jstat second opinion)", () => {
     for (const cutoff of [0.1, 0.01, 0.001]) {
       const band = cutoffBand(base, cutoff);
       if (!band) throw new Error('no band');
@@ -23,7 +30,7 @@ describe('cutoffBand', () => {
     expectClose(cutoffBand(base, 0.01)?.high ?? 0, 10 + 2 * 3.0349, 1e-4);
   });
 
-  it('is asymmetric on the metric\'s own scale when the fit is on the log scale', () => {
+  it("is asymmetric on the metric's own scale when the fit is on the log scale", () => {
     const band = cutoffBand({ ...base, baseline: { n: 30, mean: Math.log(100), sd: 0.1, scale: 'log' } }, 0.01);
     if (!band) throw new Error('no band');
     expectClose(band.mean, 100, 1e-12);
@@ -40,7 +47,14 @@ describe('cutoffBand', () => {
   });
 
   it('charts ratios to the reference metric for relative-to fits', () => {
-    const history = { series: 's', runs: [{ id: 'a' }, { id: 'b' }, { id: 'c' }], columns: new Map([['m', { values: [10, 12, NaN] }], ['calib', { values: [2, 0, 4] }]]) };
+    const history = {
+      series: 's',
+      runs: [{ id: 'a' }, { id: 'b' }, { id: 'c' }],
+      columns: new Map([
+        ['m', { values: [10, 12, NaN] }],
+        ['calib', { values: [2, 0, 4] }],
+      ]),
+    };
     const col = chartColumn(history, { ...base, baseline: { n: 3, mean: 5, sd: 1, relativeTo: 'calib' } });
     expect(col?.values[0]).toBe(5);
     expect(col?.values.slice(1).every((v) => Number.isNaN(v))).toBe(true);
@@ -49,7 +63,14 @@ describe('cutoffBand', () => {
 });
 
 describe('renderHtmlReport', () => {
-  const hostile = Object.values(HOSTILE).map((name, k) => ({ name, unit: '<b>u</b>', centre: 10 + k, spread: 0.5, now: 30, status: 'regressed' as const }));
+  const hostile = Object.values(HOSTILE).map((name, k) => ({
+    name,
+    unit: '<b>u</b>',
+    centre: 10 + k,
+    spread: 0.5,
+    now: 30,
+    status: 'regressed' as const,
+  }));
   const { report, history } = makeFixture(hostile);
   const html = renderHtmlReport({ report, history, title: '<i>t</i>', generatedAt: '2026-12-01T12:00:00Z' });
 
@@ -68,7 +89,12 @@ describe('renderHtmlReport', () => {
     expect(html).toContain('&lt;img src=x onerror=alert(1)&gt;');
     expect(html).not.toContain('href="javascript');
     // Anchors are by position, never by (untrusted) name.
-    expect([...html.matchAll(/id="([^"]*)"/g)].map((m) => m[1]).filter((id) => id !== 'summary').every((id) => /^m\d+$/.test(id ?? ''))).toBe(true);
+    expect(
+      [...html.matchAll(/id="([^"]*)"/g)]
+        .map((m) => m[1])
+        .filter((id) => id !== 'summary')
+        .every((id) => /^m\d+$/.test(id ?? '')),
+    ).toBe(true);
   });
 
   it('lists every metric once in the summary, regressions first in the markup', () => {
@@ -79,7 +105,7 @@ describe('renderHtmlReport', () => {
     expect(html.indexOf('s-ok"><td')).toBeGreaterThan(html.lastIndexOf('s-regressed"><td'));
   });
 
-  it('labels every tick of a log axis narrower than a decade, with the tick\'s own value', () => {
+  it("labels every tick of a log axis narrower than a decade, with the tick's own value", () => {
     // d3's log tickFormat alone labels only "36" and "38" of this domain's ticks 36..48.
     const y = scaleLog().domain([35.4, 48.3]).range([200, 0]);
     const axis = leftAxis(y, 72, 'ms');

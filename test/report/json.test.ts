@@ -27,7 +27,7 @@ describe('renderJson', () => {
   const { report } = makeFixture();
   const doc = JSON.parse(renderJson(report)) as { metrics: Record<string, unknown>[] } & Record<string, unknown>;
 
-  it('uses DESIGN.md\'s field names in its order, extras after', () => {
+  it("uses DESIGN.md's field names in its order, extras after", () => {
     expect(Object.keys(doc).slice(0, 3)).toEqual(Object.keys(DESIGN_EXAMPLE).slice(0, 3));
     expect(Object.keys(doc)).toContain('metrics');
     const designKeys = Object.keys(DESIGN_EXAMPLE.metrics[0] ?? {});
@@ -41,7 +41,10 @@ describe('renderJson', () => {
   it('writes numbers that are not finite as null, keeps 2-space indent and a final newline', () => {
     const m0 = report.metrics[0];
     if (!m0) throw new Error('fixture');
-    const text = renderJson({ ...report, metrics: [{ ...m0, z: Infinity, density: NaN, recent: [1, NaN, -Infinity] }] });
+    const text = renderJson({
+      ...report,
+      metrics: [{ ...m0, z: Infinity, density: NaN, recent: [1, NaN, -Infinity] }],
+    });
     const parsed = JSON.parse(text) as { metrics: { z: unknown; density: unknown; recent: unknown[] }[] };
     expect(parsed.metrics[0]?.z).toBeNull();
     expect(parsed.metrics[0]?.density).toBeNull();
@@ -62,7 +65,9 @@ describe('renderJson', () => {
   it('keeps a metric named __proto__ as plain data', () => {
     const m0 = report.metrics[0];
     if (!m0) throw new Error('fixture');
-    const parsed = JSON.parse(renderJson({ ...report, metrics: [{ ...m0, name: '__proto__' }] })) as { metrics: { name: string }[] };
+    const parsed = JSON.parse(renderJson({ ...report, metrics: [{ ...m0, name: '__proto__' }] })) as {
+      metrics: { name: string }[];
+    };
     expect(parsed.metrics[0]?.name).toBe('__proto__');
   });
 });

@@ -16,7 +16,10 @@ describe('renderMarkdown', () => {
   const { report } = makeFixture();
 
   it('starts with the hidden marker and a verdict line, and ends with the footer', () => {
-    const md = renderMarkdown(report, { marker: commentMarker('linux-x64'), runUrl: 'https://github.com/o/r/actions/runs/7' });
+    const md = renderMarkdown(report, {
+      marker: commentMarker('linux-x64'),
+      runUrl: 'https://github.com/o/r/actions/runs/7',
+    });
     const lines = md.split('\n');
     expect(lines[0]).toBe('<!-- bellgate:series=linux-x64 -->');
     expect(lines[1]).toContain('**regressed**');
@@ -46,7 +49,14 @@ describe('renderMarkdown', () => {
   });
 
   it('keeps hostile names inert in table cells and text', () => {
-    const hostile = Object.values(HOSTILE).map((name) => ({ name, unit: '<b>', centre: 5, spread: 1, now: 9, status: 'regressed' as const }));
+    const hostile = Object.values(HOSTILE).map((name) => ({
+      name,
+      unit: '<b>',
+      centre: 5,
+      spread: 1,
+      now: 9,
+      status: 'regressed' as const,
+    }));
     const { report: bad } = makeFixture(hostile);
     const md = renderMarkdown(bad, { runUrl: 'javascript:alert(1)' });
     expect(md).not.toMatch(/<img|<b>/i);
@@ -59,7 +69,7 @@ describe('renderMarkdown', () => {
     expect(tableRows(md).length).toBe(bad.metrics.length);
   });
 
-  it('stays under GitHub\'s 65,536-character comment limit, with a note on what was cut', () => {
+  it("stays under GitHub's 65,536-character comment limit, with a note on what was cut", () => {
     const base = makeFixture().report;
     const many: MetricResult[] = Array.from({ length: 3000 }, (_, i) => ({
       ...(base.metrics[1] as MetricResult),
@@ -74,7 +84,12 @@ describe('renderMarkdown', () => {
   });
 
   it('puts everything in <details> when nothing is flagged', () => {
-    const quiet = { ...report, verdict: 'pass' as const, metrics: report.metrics.filter((m) => m.status === 'ok'), groups: [] };
+    const quiet = {
+      ...report,
+      verdict: 'pass' as const,
+      metrics: report.metrics.filter((m) => m.status === 'ok'),
+      groups: [],
+    };
     const md = renderMarkdown(quiet);
     const [open, closed = ''] = md.split('<details>');
     expect(open).toContain('**pass**');

@@ -6,7 +6,9 @@ import { BLOCKS, sparkline } from '../../src/report/sparkline.js';
 // BLOCK (Unicode Standard, code chart 2580-259F).
 describe('sparkline', () => {
   it('uses the Unicode lower-eighth blocks in height order', () => {
-    expect(BLOCKS.map((b) => b.codePointAt(0))).toEqual([0x2581, 0x2582, 0x2583, 0x2584, 0x2585, 0x2586, 0x2587, 0x2588]);
+    expect(BLOCKS.map((b) => b.codePointAt(0))).toEqual([
+      0x2581, 0x2582, 0x2583, 0x2584, 0x2585, 0x2586, 0x2587, 0x2588,
+    ]);
     expect(sparkline([1, 2, 3, 4, 5, 6, 7, 8])).toBe('▁▂▃▄▅▆▇█');
     expect(sparkline([8, 1])).toBe('█▁');
   });

@@ -15,7 +15,15 @@ describe('renderText', () => {
     expect(out).not.toContain(ESC);
     expect(out.split('\n')[0]).toContain('REGRESSED');
     expect(out).toContain('1 regressed, 1 improved, 1 missing, 2 ok, 1 learning, 1 new, 1 ignored');
-    for (const word of ['▲ regressed', '▼ improved', '● ok', '✕ missing (1): search/index-size', '◌ learning (1): parse/front-matter', '✚ new (1): image/resize', '– ignored (1): legacy/old-bench']) {
+    for (const word of [
+      '▲ regressed',
+      '▼ improved',
+      '● ok',
+      '✕ missing (1): search/index-size',
+      '◌ learning (1): parse/front-matter',
+      '✚ new (1): image/resize',
+      '– ignored (1): legacy/old-bench',
+    ]) {
       expect(out).toContain(word);
     }
     expect(out).toContain('group timings: regressed');
@@ -25,14 +33,24 @@ describe('renderText', () => {
     // The fixture holds 2 ok metrics; extra ok ones take the count to the limit and one past it.
     const okRows = (out: string): number => out.split('\n').filter((l) => /^● ok {2,}/.test(l)).length;
     const withOk = (count: number) =>
-      makeFixture(Array.from({ length: count - 2 }, (_, i) => ({ name: `extra/m${i}`, centre: 5, spread: 1, now: 5, status: 'ok' as const }))).report;
+      makeFixture(
+        Array.from({ length: count - 2 }, (_, i) => ({
+          name: `extra/m${i}`,
+          centre: 5,
+          spread: 1,
+          now: 5,
+          status: 'ok' as const,
+        })),
+      ).report;
     const atLimit = renderText(withOk(OK_ROWS_LISTED), { color: false });
     expect(okRows(atLimit)).toBe(OK_ROWS_LISTED);
     expect(atLimit).not.toContain('not listed');
     const past = withOk(OK_ROWS_LISTED + 1);
     const folded = renderText(past, { color: false });
     expect(okRows(folded)).toBe(0);
-    expect(folded).toContain(`● ok (${OK_ROWS_LISTED + 1}): within their baselines, not listed (--all lists every metric)`);
+    expect(folded).toContain(
+      `● ok (${OK_ROWS_LISTED + 1}): within their baselines, not listed (--all lists every metric)`,
+    );
     for (const word of ['▲ regressed', '▼ improved', 'build/time']) expect(folded).toContain(word);
     expect(okRows(renderText(past, { color: false, all: true }))).toBe(OK_ROWS_LISTED + 1);
   });
@@ -53,7 +71,14 @@ describe('renderText', () => {
   });
 
   it('keeps escape sequences, bidi overrides and line breaks of metric names out of the terminal', () => {
-    const hostile = Object.values(HOSTILE).map((name) => ({ name: `${name}\nsecond line`, unit: 'u\u001b[2J', centre: 5, spread: 1, now: 5, status: 'ok' as const }));
+    const hostile = Object.values(HOSTILE).map((name) => ({
+      name: `${name}\nsecond line`,
+      unit: 'u\u001b[2J',
+      centre: 5,
+      spread: 1,
+      now: 5,
+      status: 'ok' as const,
+    }));
     const out = renderText(makeFixture(hostile).report, { color: false });
     expect(out).not.toContain(ESC);
     expect(out).not.toMatch(/[\u0000-\u0009\u000B-\u001F\u202A-\u202E\u2066-\u2069]/);
@@ -65,7 +90,14 @@ describe('renderText', () => {
   it('aligns every column by code points, whatever the names hold (accents, CJK, astral emoji, long names)', () => {
     // Reference: the column start is where the header word starts, counted in code points as
     // Array.from counts them (so a surrogate pair is one), after the cells before it and 2 spaces.
-    const names = ['plain/name', 'accent/é-ü', 'cjk/名前', 'emoji/\u{1F680}\u{1F680}-x', 'lone/\uD800-surrogate', `long/${'n'.repeat(120)}`];
+    const names = [
+      'plain/name',
+      'accent/é-ü',
+      'cjk/名前',
+      'emoji/\u{1F680}\u{1F680}-x',
+      'lone/\uD800-surrogate',
+      `long/${'n'.repeat(120)}`,
+    ];
     const extra = names.map((name) => ({ name, unit: 'µs', centre: 5, spread: 1, now: 5, status: 'ok' as const }));
     const lines = renderText(makeFixture(extra).report, { color: false }).split('\n');
     const header = lines.find((l) => l.startsWith('status'))!;
@@ -93,13 +125,23 @@ describe('renderText', () => {
     const extra = [
       { name: 'unitless/a', centre: 5, spread: 1, now: 5.2, status: 'ok' as const },
       { name: 'astral/\u{1F680}', unit: '\u{1D4C8}/op', centre: 12, spread: 1, now: 19, status: 'regressed' as const },
-      { name: 'astral/unit', unit: '\u{1F552}', centre: 1200, spread: 10, now: 1150, status: 'improved' as const, worse: 'higher' as const },
+      {
+        name: 'astral/unit',
+        unit: '\u{1F552}',
+        centre: 1200,
+        spread: 10,
+        now: 1150,
+        status: 'improved' as const,
+        worse: 'higher' as const,
+      },
       { name: 'unitless/\u{1F680}\u{1F680}', centre: 0.004, spread: 0.0001, now: 0.0041, status: 'ok' as const },
     ];
     const lines = renderText(makeFixture(extra).report, { color: false }).split('\n');
     const header = lines.find((l) => l.startsWith('status'))!;
     const start = (line: string, text: string): number => Array.from(line.slice(0, line.indexOf(text))).length;
-    const columns = ['metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density'].map((word) => start(header, word));
+    const columns = ['metric', 'this run', 'baseline', 'change', 'sigma', 'rel. density'].map((word) =>
+      start(header, word),
+    );
     const rows = lines.filter((l) => /^[▲▼●] /.test(l));
     expect(rows.length).toBe(4 + extra.length);
     for (const row of rows) {

@@ -3,7 +3,16 @@ import { OK_ROWS_LISTED } from '../../report/ok-rows.js';
 import type { CommandContext } from '../context.js';
 import type { CheckOptions } from '../check-flow.js';
 import { importCheckFlow } from '../warm-up.js';
-import { configOption, examples, historyOption, inputOptions, metricsOption, REPORT_FORMATS, runInfoOptions, seriesOption } from '../options.js';
+import {
+  configOption,
+  examples,
+  historyOption,
+  inputOptions,
+  metricsOption,
+  REPORT_FORMATS,
+  runInfoOptions,
+  seriesOption,
+} from '../options.js';
 
 /**
  * `bellgate check`: judges this run's metrics against the history and prints the report.
@@ -16,8 +25,13 @@ export function checkCommand(ctx: CommandContext): Command {
   configOption(cmd);
   seriesOption(cmd);
   cmd
-    .addOption(new Option('--format <format>', 'how to print the report on stdout').choices(REPORT_FORMATS).default('text'))
-    .option('--all', `list every metric in the text report, ok ones too (by default more than ${OK_ROWS_LISTED} ok metrics are counted, not listed)`)
+    .addOption(
+      new Option('--format <format>', 'how to print the report on stdout').choices(REPORT_FORMATS).default('text'),
+    )
+    .option(
+      '--all',
+      `list every metric in the text report, ok ones too (by default more than ${OK_ROWS_LISTED} ok metrics are counted, not listed)`,
+    )
     .option('--out <dir>', 'also write report.md, report.json and report.txt (every metric) into this folder')
     .option('--record', 'append this run to the history after checking it (needs --history)');
   inputOptions(cmd);
@@ -28,7 +42,10 @@ export function checkCommand(ctx: CommandContext): Command {
     'bellgate check --metrics results.txt --input-format gobench --history h.json --out bellgate-out',
     'bellgate check --metrics bench.json --history h.json --record --sha "$(git rev-parse HEAD)"',
   ]);
-  cmd.addHelpText('after', '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\n');
+  cmd.addHelpText(
+    'after',
+    '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\n',
+  );
   return cmd.action(async (options: CheckOptions) => {
     // Imported when the command runs, so `--help` and the other commands never load the gate.
     const { performCheck, verdictExitCode } = await importCheckFlow();

@@ -21,7 +21,10 @@ export function demoCommand(ctx: CommandContext): Command {
   examples(cmd, ['bellgate demo', 'bellgate demo --out /tmp/bellgate-demo']);
   return cmd.action(async (options: { out: string }) => {
     // Imported when the command runs, so `--help` and the other commands never load the gate.
-    const [{ performCheck, verdictExitCode }, { DEMO_FILES, locateDemo }] = await Promise.all([importCheckFlow(), import('../demo-data.js')]);
+    const [{ performCheck, verdictExitCode }, { DEMO_FILES, locateDemo }] = await Promise.all([
+      importCheckFlow(),
+      import('../demo-data.js'),
+    ]);
     const dir = locateDemo(ctx.io.cwd, process.argv[1]);
     ctx.io.stdout(`Demo: the Kestrel Post geocoding service — 120 trusted runs on main, and one pull request.\n\n`);
     const report = await performCheck(ctx, {

@@ -12,7 +12,10 @@ export function explainCommand(ctx: CommandContext): Command {
     .description('show how one metric is judged: fitted curve, baseline runs, cutoff band, this run')
     .argument('<metric>', 'metric name, exactly as in the report');
   historyOption(cmd, true);
-  cmd.option('--metrics <file...>', 'metric files of this run (default: the newest run in the history, judged against the runs before it)');
+  cmd.option(
+    '--metrics <file...>',
+    'metric files of this run (default: the newest run in the history, judged against the runs before it)',
+  );
   configOption(cmd);
   seriesOption(cmd);
   inputOptions(cmd);
@@ -21,5 +24,7 @@ export function explainCommand(ctx: CommandContext): Command {
     'bellgate explain size/web-bundle.js.gz --history h.json --metrics bench.json',
   ]);
   // The work is imported when the command runs, so `--help` and the other commands never load it.
-  return cmd.action(async (metric: string, options: ExplainOptions) => (await import('../run/explain.js')).runExplain(ctx, metric, options));
+  return cmd.action(async (metric: string, options: ExplainOptions) =>
+    (await import('../run/explain.js')).runExplain(ctx, metric, options),
+  );
 }

@@ -2,7 +2,15 @@ import { Command } from 'commander';
 import type { CommandContext } from '../context.js';
 import type { RecordOptions } from '../run/record.js';
 import { importRecord } from '../warm-up.js';
-import { configOption, examples, historyOption, inputOptions, metricsOption, runInfoOptions, seriesOption } from '../options.js';
+import {
+  configOption,
+  examples,
+  historyOption,
+  inputOptions,
+  metricsOption,
+  runInfoOptions,
+  seriesOption,
+} from '../options.js';
 
 /** `bellgate record`: appends a trusted run (a baseline-branch build) to the history file, without judging it. */
 export function recordCommand(ctx: CommandContext): Command {

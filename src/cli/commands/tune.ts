@@ -11,11 +11,16 @@ import type { TuneOptions } from '../run/tune.js';
  * Exit 0, or 2 for bad input (a labels problem names file:line:col).
  */
 export function tuneCommand(ctx: CommandContext): Command {
-  const cmd = new Command('tune').description('suggest cutoffs from evidence: replay the gate over the history and score a ladder of cutoffs');
+  const cmd = new Command('tune').description(
+    'suggest cutoffs from evidence: replay the gate over the history and score a ladder of cutoffs',
+  );
   historyOption(cmd, true, 'history file of trusted runs to replay (JSON)');
   configOption(cmd);
   cmd
-    .option('--labels <file>', 'YAML or JSON list of known regressions: `regressions: [{run: "1234-1"}, {run: "1240-1", metric: "latency/p95"}]`')
+    .option(
+      '--labels <file>',
+      'YAML or JSON list of known regressions: `regressions: [{run: "1234-1"}, {run: "1240-1", metric: "latency/p95"}]`',
+    )
     .option('--target <n>', 'false alarms per 100 runs to stay at or under (default 1)', parseTarget)
     .option('--write <file>', 'write the suggested cutoffs and transforms into this config file and print the diff')
     .addOption(new Option('--format <format>', 'output format').choices(['text', 'json']).default('text'));

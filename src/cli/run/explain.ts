@@ -7,8 +7,7 @@ import type { CommandContext } from '../context.js';
 import { judgeRequestedRun, type RequestedRunOptions } from '../judge-requested-run.js';
 import { closeNames } from '../close-names.js';
 
-export interface ExplainOptions extends RequestedRunOptions {
-}
+export type ExplainOptions = RequestedRunOptions;
 
 /**
  * The work of `bellgate explain METRIC` (loaded only when that command runs): judges the run and
@@ -24,7 +23,10 @@ export async function runExplain(ctx: CommandContext, metric: string, options: E
     const near = closeNames(metric, known);
     throw new InputError(`no metric named "${metric}" in the history or this run`, {
       where: options.history,
-      fix: near.length > 0 ? `did you mean ${near.map((n) => `"${n}"`).join(' or ')}?` : 'run bellgate check to list the metric names',
+      fix:
+        near.length > 0
+          ? `did you mean ${near.map((n) => `"${n}"`).join(' or ')}?`
+          : 'run bellgate check to list the metric names',
     });
   }
   const settings = settingsFor(config, metric);

@@ -28,8 +28,10 @@ export async function runImport(ctx: CommandContext, options: ImportOptions): Pr
   const result = importRuns(history, parsed);
   const skipped = result.skipped;
   // Reasons quote names from the file: no control or bidi character reaches the terminal.
-  for (const skip of skipped.slice(0, SHOWN_SKIPS)) ctx.io.stderr(visibleText(`bellgate: skipped ${skip.where}: ${skip.reason}`) + '\n');
-  if (skipped.length > SHOWN_SKIPS) ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
+  for (const skip of skipped.slice(0, SHOWN_SKIPS))
+    ctx.io.stderr(visibleText(`bellgate: skipped ${skip.where}: ${skip.reason}`) + '\n');
+  if (skipped.length > SHOWN_SKIPS)
+    ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
   if (store) await store.save(result.history, history.runs.length);
   ctx.io.stdout(
     `imported ${options.runs}: ${result.added} runs added, ${result.updated} updated, ${result.unchanged} unchanged, ${skipped.length} skipped; ` +

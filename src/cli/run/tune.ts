@@ -33,10 +33,14 @@ export async function runTune(ctx: CommandContext, options: TuneOptions): Promis
   const historyText = await readUserText(resolvePath(ctx, options.history), '--history');
   const history = parseHistory(historyText, options.history);
   if (history.runs.length === 0) {
-    throw new InputError('the history holds no runs, so there is nothing to replay', { where: options.history, fix: 'record runs first (bellgate record / import)' });
+    throw new InputError('the history holds no runs, so there is nothing to replay', {
+      where: options.history,
+      fix: 'record runs first (bellgate record / import)',
+    });
   }
   let labels: RegressionLabel[] | undefined;
-  if (options.labels !== undefined) labels = parseLabels(await readUserText(resolvePath(ctx, options.labels), '--labels'), options.labels);
+  if (options.labels !== undefined)
+    labels = parseLabels(await readUserText(resolvePath(ctx, options.labels), '--labels'), options.labels);
   const progress = progressBar(ctx.io);
   const result = tuneHistory({
     config,
@@ -46,19 +50,28 @@ export async function runTune(ctx: CommandContext, options: TuneOptions): Promis
     onProgress: progress.update,
   });
   progress.done();
-  const written = options.write === undefined ? undefined : await writeSuggestion(ctx, options.write, result.suggestion);
+  const written =
+    options.write === undefined ? undefined : await writeSuggestion(ctx, options.write, result.suggestion);
   if (options.format === 'json') {
     ctx.io.stdout(renderTuneJson(result, written === undefined ? {} : { written }));
     return;
   }
   ctx.io.stdout(renderTuneText(result));
   if (written !== undefined) {
-    ctx.io.stdout(written.diff === '' ? `\n${options.write}: already as suggested, not changed\n` : `\nwrote ${options.write}:\n${written.diff}`);
+    ctx.io.stdout(
+      written.diff === ''
+        ? `\n${options.write}: already as suggested, not changed\n`
+        : `\nwrote ${options.write}:\n${written.diff}`,
+    );
   }
 }
 
 /** Applies the suggestion to the file (missing: a new config), atomically; returns the unified diff ('' when unchanged). */
-async function writeSuggestion(ctx: CommandContext, path: string, suggestion: Parameters<typeof applyConfigEdit>[2]): Promise<{ file: string; diff: string }> {
+async function writeSuggestion(
+  ctx: CommandContext,
+  path: string,
+  suggestion: Parameters<typeof applyConfigEdit>[2],
+): Promise<{ file: string; diff: string }> {
   const full = resolvePath(ctx, path);
   let before = '';
   try {

@@ -70,7 +70,14 @@ function sideOf(direction: 'worse' | 'better' | 'none', beyond: boolean): Side {
 }
 
 /** fitGaussian's mle/unbiased result from running moments, floored like judgeMetric's fitWithFloor. */
-function slidingFit(moments: RunningMoments, shift: number, values: number[], start: number, end: number, settings: MetricSettings): GaussianFit {
+function slidingFit(
+  moments: RunningMoments,
+  shift: number,
+  values: number[],
+  start: number,
+  end: number,
+  settings: MetricSettings,
+): GaussianFit {
   const { n, squares } = moments;
   const mean = shift + moments.mean;
   // A spread within rounding of the offset is a constant window (or nearly): refit exactly, since
@@ -79,7 +86,13 @@ function slidingFit(moments: RunningMoments, shift: number, values: number[], st
   const sampleVariance = n > 1 ? squares / (n - 1) : 0;
   const spread = Math.sqrt(settings.fit === 'mle' ? squares / n : sampleVariance);
   const floor = fitScaleFloor(settings.resolution, settings.transform, mean);
-  return { n, mean, sd: Math.max(spread, floor), sampleSd: Math.max(Math.sqrt(sampleVariance), floor), method: settings.fit };
+  return {
+    n,
+    mean,
+    sd: Math.max(spread, floor),
+    sampleSd: Math.max(Math.sqrt(sampleVariance), floor),
+    method: settings.fit,
+  };
 }
 
 function floored(window: number[], settings: MetricSettings): GaussianFit {
@@ -89,7 +102,11 @@ function floored(window: number[], settings: MetricSettings): GaussianFit {
 }
 
 /** Relative density and two-sided tail, as judgeMetric computes them for a fit (zero spread: 0 or 1). */
-export function decisionFigures(x: number, fit: GaussianFit, settings: MetricSettings): { relativeDensity: number; tail: number } {
+export function decisionFigures(
+  x: number,
+  fit: GaussianFit,
+  settings: MetricSettings,
+): { relativeDensity: number; tail: number } {
   const deviation = x - fit.mean;
   const predictive = settings.uncertainty === 'predictive' && fit.n >= 2;
   if (fit.sd === 0 || (predictive && fit.sampleSd === 0)) {
@@ -97,7 +114,10 @@ export function decisionFigures(x: number, fit: GaussianFit, settings: MetricSet
     return { relativeDensity: moved ? 0 : 1, tail: moved ? 0 : 1 };
   }
   if (!predictive) {
-    return { relativeDensity: plugInRelativeDensity(x, fit.mean, fit.sd), tail: normalTail(deviation / fit.sd, 'both') };
+    return {
+      relativeDensity: plugInRelativeDensity(x, fit.mean, fit.sd),
+      tail: normalTail(deviation / fit.sd, 'both'),
+    };
   }
   return {
     relativeDensity: predictiveRelativeDensity(x, fit.mean, fit.sampleSd, fit.n),

@@ -35,10 +35,14 @@ export function parseLabels(text: string, source: string): RegressionLabel[] {
   };
   const error = doc.errors[0];
   if (error !== undefined) {
-    throw new InputError(`the labels file is not valid YAML or JSON: ${error.message.split('\n')[0]}`, { where: at(null, error.pos[0]), fix: FIX });
+    throw new InputError(`the labels file is not valid YAML or JSON: ${error.message.split('\n')[0]}`, {
+      where: at(null, error.pos[0]),
+      fix: FIX,
+    });
   }
   const root = doc.contents;
-  if (!isMap(root)) throw new InputError('the labels file must be a mapping with a `regressions:` list', { where: at(root), fix: FIX });
+  if (!isMap(root))
+    throw new InputError('the labels file must be a mapping with a `regressions:` list', { where: at(root), fix: FIX });
   const labels: RegressionLabel[] = [];
   for (const pair of root.items) {
     const key = isScalar(pair.key) ? String(pair.key.value) : '';
@@ -46,9 +50,13 @@ export function parseLabels(text: string, source: string): RegressionLabel[] {
       throw new InputError(`unknown key "${key}" in the labels file`, { where: at(pair.key as Node), fix: FIX });
     }
     const list = pair.value as Node | null;
-    if (!isSeq(list)) throw new InputError('`regressions` must be a list', { where: at(list ?? (pair.key as Node)), fix: FIX });
+    if (!isSeq(list))
+      throw new InputError('`regressions` must be a list', { where: at(list ?? (pair.key as Node)), fix: FIX });
     if (list.items.length > MAX_LABELS) {
-      throw new InputError(`the labels file has ${list.items.length} entries, over the limit of ${MAX_LABELS}`, { where: at(list), fix: 'label fewer runs' });
+      throw new InputError(`the labels file has ${list.items.length} entries, over the limit of ${MAX_LABELS}`, {
+        where: at(list),
+        fix: 'label fewer runs',
+      });
     }
     for (const item of list.items) labels.push(entry(item as Node, at));
   }
@@ -56,18 +64,26 @@ export function parseLabels(text: string, source: string): RegressionLabel[] {
 }
 
 function entry(item: Node, at: (node: Node | null | undefined) => string): RegressionLabel {
-  if (!isMap(item)) throw new InputError('each regression must be a mapping with a `run` key', { where: at(item), fix: FIX });
+  if (!isMap(item))
+    throw new InputError('each regression must be a mapping with a `run` key', { where: at(item), fix: FIX });
   const found: { run?: string; metric?: string } = {};
   for (const pair of item.items) {
     const key = isScalar(pair.key) ? String(pair.key.value) : '';
     if (key !== 'run' && key !== 'metric') {
-      throw new InputError(`unknown key "${key}" in a regression entry`, { where: at(pair.key as Node), fix: 'use `run` and, optionally, `metric`' });
+      throw new InputError(`unknown key "${key}" in a regression entry`, {
+        where: at(pair.key as Node),
+        fix: 'use `run` and, optionally, `metric`',
+      });
     }
     const value = pair.value as Node | null;
     const raw = isScalar(value) ? value.value : undefined;
-    const ok = typeof raw === 'string' ? raw !== '' : key === 'run' && typeof raw === 'number' && Number.isSafeInteger(raw);
+    const ok =
+      typeof raw === 'string' ? raw !== '' : key === 'run' && typeof raw === 'number' && Number.isSafeInteger(raw);
     if (!ok) {
-      throw new InputError(`\`${key}\` must be a non-empty ${key === 'run' ? 'run id' : 'metric name'} string`, { where: at(value ?? (pair.key as Node)), fix: FIX });
+      throw new InputError(`\`${key}\` must be a non-empty ${key === 'run' ? 'run id' : 'metric name'} string`, {
+        where: at(value ?? (pair.key as Node)),
+        fix: FIX,
+      });
     }
     found[key] = String(raw);
   }
@@ -85,10 +101,16 @@ export function checkLabels(labels: readonly RegressionLabel[], history: History
   const runs = new Set(history.runs.map((r) => r.id));
   for (const label of labels) {
     if (!runs.has(label.run)) {
-      throw new InputError(`no run "${label.run}" in the history`, { where: label.where, fix: 'use a run id as the history stores it ("run id-attempt", e.g. "1234-1")' });
+      throw new InputError(`no run "${label.run}" in the history`, {
+        where: label.where,
+        fix: 'use a run id as the history stores it ("run id-attempt", e.g. "1234-1")',
+      });
     }
     if (label.metric !== undefined && !history.columns.has(label.metric)) {
-      throw new InputError(`no metric "${label.metric}" in the history`, { where: label.where, fix: 'use the metric name exactly as the report shows it' });
+      throw new InputError(`no metric "${label.metric}" in the history`, {
+        where: label.where,
+        fix: 'use the metric name exactly as the report shows it',
+      });
     }
   }
 }

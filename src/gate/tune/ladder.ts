@@ -115,7 +115,10 @@ function adjustedTails(replay: Replay, family: Exclude<Family, 'none'>): number[
     });
   });
   for (const members of byRun.values()) {
-    const adjusted = adjustTails(members.map(([j, p]) => replay.metrics[j]!.tail[p]!), family);
+    const adjusted = adjustTails(
+      members.map(([j, p]) => replay.metrics[j]!.tail[p]!),
+      family,
+    );
     members.forEach(([j, p], i) => (out[j]![p] = adjusted[i]!));
   }
   return out;

@@ -27,7 +27,12 @@ export interface MetricSequence {
  * Throws InputError when a history value cannot take the transform (as the gate would).
  * @example metricSequence(history, 'build/time', settings).values.length // runs holding build/time
  */
-export function metricSequence(history: History, name: string, settings: MetricSettings, indexOf: ReadonlyMap<string, number>): MetricSequence {
+export function metricSequence(
+  history: History,
+  name: string,
+  settings: MetricSettings,
+  indexOf: ReadonlyMap<string, number>,
+): MetricSequence {
   const all = selectBaseline(history, name, { ...settings, window: Number.MAX_SAFE_INTEGER, changePoints: false });
   const column = history.columns.get(name)?.values ?? [];
   const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo)?.values;

@@ -38,11 +38,16 @@ export function normalityCheck(values: readonly number[]): NormalityCheck | unde
   const logValues = positive ? values.map(Math.log) : undefined;
   const log = logValues !== undefined && !logValues.every((v) => v === logValues[0]) ? shape(logValues) : undefined;
   const rejectsRaw = raw.andersonDarling > AD_CRITICAL_5;
-  const suggestLog = log !== undefined && rejectsRaw && log.andersonDarling <= raw.andersonDarling / 2 && log.andersonDarling <= AD_CRITICAL_5;
+  const suggestLog =
+    log !== undefined &&
+    rejectsRaw &&
+    log.andersonDarling <= raw.andersonDarling / 2 &&
+    log.andersonDarling <= AD_CRITICAL_5;
   let note: string;
   if (!positive) note = 'values <= 0: no log scale';
   else if (!rejectsRaw) note = 'raw scale looks Gaussian (A*² ≤ 0.752)';
-  else if (suggestLog) note = `log scale fits clearly better (A*² ${fmt(log.andersonDarling)} vs ${fmt(raw.andersonDarling)})`;
+  else if (suggestLog)
+    note = `log scale fits clearly better (A*² ${fmt(log.andersonDarling)} vs ${fmt(raw.andersonDarling)})`;
   else note = 'not Gaussian on either scale (a level change or outliers?)';
   return { n: values.length, raw, ...(log === undefined ? {} : { log }), suggestLog, note };
 }

@@ -26,7 +26,9 @@ export function refitReplay(sequence: MetricSequence): MetricReplay {
     replay.run.push(runIndex[k]!);
     replay.relativeDensity.push(score.result.relativeDensity ?? 1);
     replay.tail.push(score.result.tail ?? 1);
-    replay.side.push(!score.beyondTolerance ? 0 : score.direction === 'worse' ? 1 : score.direction === 'better' ? -1 : 0);
+    replay.side.push(
+      !score.beyondTolerance ? 0 : score.direction === 'worse' ? 1 : score.direction === 'better' ? -1 : 0,
+    );
   }
   return replay;
 }

@@ -40,7 +40,8 @@ export function bestF1(rows: readonly LadderRow[]): LadderRow | undefined {
   for (const row of rows) {
     if (row.labelled === undefined) continue;
     const f1 = row.labelled.f1;
-    if (best === undefined || f1 > best.labelled!.f1 || (f1 === best.labelled!.f1 && row.cutoff < best.cutoff)) best = row;
+    if (best === undefined || f1 > best.labelled!.f1 || (f1 === best.labelled!.f1 && row.cutoff < best.cutoff))
+      best = row;
   }
   return best;
 }
@@ -54,14 +55,23 @@ export function chooseCutoff(rows: readonly LadderRow[], target: number, labelle
   const best = labelled ? bestF1(rows) : undefined;
   if (best?.labelled !== undefined && best.labelled.f1 > 0) {
     const l = best.labelled;
-    return { cutoff: best.cutoff, reason: `best F1 ${l.f1.toFixed(3)} against the labels (precision ${l.precision.toFixed(3)}, recall ${l.recall.toFixed(3)})` };
+    return {
+      cutoff: best.cutoff,
+      reason: `best F1 ${l.f1.toFixed(3)} against the labels (precision ${l.precision.toFixed(3)}, recall ${l.recall.toFixed(3)})`,
+    };
   }
   const under = loosestUnder(rows, target);
   if (under !== undefined) {
-    return { cutoff: under.cutoff, reason: `loosest cutoff with at most ${target} run${target === 1 ? '' : 's'} per 100 falsely flagged (${under.runsFlaggedPer100.toFixed(1)} replayed)` };
+    return {
+      cutoff: under.cutoff,
+      reason: `loosest cutoff with at most ${target} run${target === 1 ? '' : 's'} per 100 falsely flagged (${under.runsFlaggedPer100.toFixed(1)} replayed)`,
+    };
   }
   const strictest = [...rows].sort((a, b) => a.cutoff - b.cutoff)[0]!;
-  return { cutoff: strictest.cutoff, reason: `no cutoff keeps false alarms at ${target} per 100 runs; the strictest tried flags ${strictest.runsFlaggedPer100.toFixed(1)} (consider groups, relative-to or change points)` };
+  return {
+    cutoff: strictest.cutoff,
+    reason: `no cutoff keeps false alarms at ${target} per 100 runs; the strictest tried flags ${strictest.runsFlaggedPer100.toFixed(1)} (consider groups, relative-to or change points)`,
+  };
 }
 
 /**
@@ -70,7 +80,11 @@ export function chooseCutoff(rows: readonly LadderRow[], target: number, labelle
  * loosest stricter cutoff at which its own false alarms drop to the mean, or the strictest tried.
  * @example noisyMetricRules(rows, names, 0.01) // [{ metric: 'latency/p99', cutoff: 1e-4, reason: ... }]
  */
-export function noisyMetricRules(rows: readonly LadderRow[], names: readonly string[], chosen: number): SuggestedRule[] {
+export function noisyMetricRules(
+  rows: readonly LadderRow[],
+  names: readonly string[],
+  chosen: number,
+): SuggestedRule[] {
   const sorted = [...rows].sort((a, b) => b.cutoff - a.cutoff);
   const at = sorted.find((row) => row.cutoff === chosen);
   if (at === undefined || names.length === 0) return [];
@@ -82,7 +96,11 @@ export function noisyMetricRules(rows: readonly LadderRow[], names: readonly str
     const stricter = sorted.filter((row) => row.cutoff < chosen);
     const fit = stricter.find((row) => row.perMetric[j]! <= mean) ?? stricter.at(-1);
     if (fit === undefined) return;
-    rules.push({ metric, cutoff: fit.cutoff, reason: `${own} false alarms at ${chosen} (mean ${mean.toFixed(1)} a metric); ${fit.perMetric[j]} at ${fit.cutoff}` });
+    rules.push({
+      metric,
+      cutoff: fit.cutoff,
+      reason: `${own} false alarms at ${chosen} (mean ${mean.toFixed(1)} a metric); ${fit.perMetric[j]} at ${fit.cutoff}`,
+    });
   });
   return rules;
 }
@@ -106,7 +124,10 @@ export function recommendFamily(
     return row === undefined ? '?' : row.runsFlaggedPer100.toFixed(1);
   };
   if (metricsPerRun < MANY_METRICS) {
-    return { family: current, reason: `${metricsPerRun} metrics a typical run: few enough that per-metric cutoffs suffice` };
+    return {
+      family: current,
+      reason: `${metricsPerRun} metrics a typical run: few enough that per-metric cutoffs suffice`,
+    };
   }
   const preference: Family[] = ['holm', 'fdr', 'bonferroni', 'none'];
   const f1 = (f: Family): number => bestF1(ladders.get(f) ?? [])?.labelled?.f1 ?? -1;
@@ -119,6 +140,8 @@ export function recommendFamily(
   const reason =
     `${metricsPerRun} metrics a typical run: at cutoff ${cutoff}, family none flags ${share('none')} runs per 100 falsely, ` +
     `${family} ${share(family)}; loosest cutoff meeting ${target} per 100: none ${loosest('none')}, ${family} ${loosest(family)}` +
-    (f1(family) >= 0 ? ` (best F1 ${f1(family).toFixed(3)})` : '; holm bounds the chance of any false alarm in a run and is never less powerful than bonferroni (Holm 1979)');
+    (f1(family) >= 0
+      ? ` (best F1 ${f1(family).toFixed(3)})`
+      : '; holm bounds the chance of any false alarm in a run and is never less powerful than bonferroni (Holm 1979)');
   return { family, reason };
 }

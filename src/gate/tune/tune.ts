@@ -8,7 +8,15 @@ import { DEFAULT_LADDER, scoreLadder, type LadderRow } from './ladder.js';
 import { metricSequence } from './metric-sequence.js';
 import { normalityCheck, type NormalityCheck } from './normality-check.js';
 import { replayHistory } from './replay.js';
-import { chooseCutoff, DEFAULT_TARGET, loosestUnder, noisyMetricRules, recommendFamily, bestF1, type SuggestedRule } from './suggest.js';
+import {
+  chooseCutoff,
+  DEFAULT_TARGET,
+  loosestUnder,
+  noisyMetricRules,
+  recommendFamily,
+  bestF1,
+  type SuggestedRule,
+} from './suggest.js';
 import { buildTruth } from './truth.js';
 
 export const FAMILIES: readonly Family[] = ['none', 'bonferroni', 'holm', 'fdr'];
@@ -68,11 +76,17 @@ export interface TuneResult {
 export function tuneHistory(input: TuneInput): TuneResult {
   const { config, history } = input;
   const target = input.target ?? DEFAULT_TARGET;
-  if (!(target >= 0 && target <= 100)) throw new InputError(`--target must be a number of false alarms per 100 runs from 0 to 100, got ${target}`, { fix: 'e.g. --target 1' });
+  if (!(target >= 0 && target <= 100))
+    throw new InputError(`--target must be a number of false alarms per 100 runs from 0 to 100, got ${target}`, {
+      fix: 'e.g. --target 1',
+    });
   const cutoffs = [...new Set([...(input.cutoffs ?? DEFAULT_LADDER), config.defaults.cutoff])].sort((a, b) => b - a);
   if (input.labels !== undefined) checkLabels(input.labels, history);
   const truth = input.labels === undefined ? undefined : buildTruth(input.labels, history);
-  const replay = replayHistory(config, history, { ...(input.refit ? { refit: true } : {}), ...(input.onProgress ? { onProgress: input.onProgress } : {}) });
+  const replay = replayHistory(config, history, {
+    ...(input.refit ? { refit: true } : {}),
+    ...(input.onProgress ? { onProgress: input.onProgress } : {}),
+  });
   const ladders = new Map(FAMILIES.map((f) => [f, scoreLadder(replay, cutoffs, f, truth)] as const));
   const perRun = new Map<number, number>();
   for (const m of replay.metrics) for (const r of m.run) perRun.set(r, (perRun.get(r) ?? 0) + 1);
@@ -81,7 +95,11 @@ export function tuneHistory(input: TuneInput): TuneResult {
   // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
   const choice =
     perRun.size === 0
-      ? { cutoff: config.defaults.cutoff, reason: 'no run had enough baseline runs to be judged (min-runs), so there is no evidence yet; keeping the configured cutoff' }
+      ? {
+          cutoff: config.defaults.cutoff,
+          reason:
+            'no run had enough baseline runs to be judged (min-runs), so there is no evidence yet; keeping the configured cutoff',
+        }
       : chooseCutoff(rows, target, truth !== undefined);
   const names = replay.metrics.map((m) => m.name);
   const rules = perRun.size === 0 ? [] : noisyMetricRules(rows, names, choice.cutoff);
@@ -95,7 +113,13 @@ export function tuneHistory(input: TuneInput): TuneResult {
       if (rule !== undefined) Object.assign(rule, { transform: 'log', reason: `${rule.reason}; ${normality.note}` });
       else rules.push({ metric: m.name, transform: 'log', reason: normality.note });
     }
-    return { name: m.name, method: m.method, judged: m.run.length, transform: settings.transform, ...(normality ? { normality } : {}) };
+    return {
+      name: m.name,
+      method: m.method,
+      judged: m.run.length,
+      transform: settings.transform,
+      ...(normality ? { normality } : {}),
+    };
   });
   const family = recommendFamily(metricsPerRun, ladders, choice.cutoff, config.family, target);
   const best = bestF1(rows);
@@ -113,7 +137,26 @@ export function tuneHistory(input: TuneInput): TuneResult {
     target: { per100: target, ...(targetRow ? { cutoff: targetRow.cutoff } : {}) },
     ...(truth === undefined
       ? {}
-      : { labels: { count: truth.count, ...(best?.labelled ? { best: { cutoff: best.cutoff, precision: best.labelled.precision, recall: best.labelled.recall, f1: best.labelled.f1 } } : {}) } }),
-    suggestion: { ...choice, family: family.family, familyReason: family.reason, rules: rules.sort((a, b) => (a.metric < b.metric ? -1 : 1)) },
+      : {
+          labels: {
+            count: truth.count,
+            ...(best?.labelled
+              ? {
+                  best: {
+                    cutoff: best.cutoff,
+                    precision: best.labelled.precision,
+                    recall: best.labelled.recall,
+                    f1: best.labelled.f1,
+                  },
+                }
+              : {}),
+          },
+        }),
+    suggestion: {
+      ...choice,
+      family: family.family,
+      familyReason: family.reason,
+      rules: rules.sort((a, b) => (a.metric < b.metric ? -1 : 1)),
+    },
   };
 }

@@ -41,10 +41,13 @@ export function applyConfigEdit(text: string, source: string, edit: ConfigEdit):
   const out = spliceEdit(text, edit.cutoff, rules) ?? documentEdit(text, edit.cutoff, rules);
   const config = parseConfig(out, source);
   if (!readsBack(config, edit.cutoff, rules)) {
-    throw new InputError('could not write the suggestion so that it reads back as suggested; the config was not changed', {
-      where: source,
-      fix: 'edit the config by hand with the suggestion printed above',
-    });
+    throw new InputError(
+      'could not write the suggestion so that it reads back as suggested; the config was not changed',
+      {
+        where: source,
+        fix: 'edit the config by hand with the suggestion printed above',
+      },
+    );
   }
   return out;
 }
@@ -53,7 +56,10 @@ function readsBack(config: Config, cutoff: number, rules: readonly SuggestedRule
   if (config.defaults.cutoff !== cutoff) return false;
   return rules.every((rule) => {
     const s = settingsFor(config, rule.metric);
-    return (rule.cutoff === undefined || s.cutoff === rule.cutoff) && (rule.transform === undefined || s.transform === rule.transform);
+    return (
+      (rule.cutoff === undefined || s.cutoff === rule.cutoff) &&
+      (rule.transform === undefined || s.transform === rule.transform)
+    );
   });
 }
 
@@ -69,12 +75,17 @@ function spliceEdit(text: string, cutoff: number, rules: readonly SuggestedRule[
   else if (!isMap(defaults) || defaults.flow || defaults.items.length === 0) return undefined;
   else {
     const value = defaults.get('cutoff', true);
-    if (isScalar(value) && value.range) splices.push({ start: value.range[0], end: value.range[1], text: String(cutoff) });
+    if (isScalar(value) && value.range)
+      splices.push({ start: value.range[0], end: value.range[1], text: String(cutoff) });
     else if (value !== undefined) return undefined;
     else {
       const first = defaults.items[0]!.key as Node;
       const lineStart = text.lastIndexOf('\n', first.range![0] - 1) + 1;
-      splices.push({ start: lineStart, end: lineStart, text: `${' '.repeat(first.range![0] - lineStart)}cutoff: ${cutoff}\n` });
+      splices.push({
+        start: lineStart,
+        end: lineStart,
+        text: `${' '.repeat(first.range![0] - lineStart)}cutoff: ${cutoff}\n`,
+      });
     }
   }
   const metrics = root?.get('metrics', true) as Node | undefined;
@@ -93,7 +104,12 @@ function spliceEdit(text: string, cutoff: number, rules: readonly SuggestedRule[
       const indent = /^ */.exec(text.slice(dashLine))![0];
       const end = metrics.range![1];
       const at = end > 0 && text[end - 1] === '\n' ? end : lineEnd(text, end);
-      splices.push({ start: at, end: at, text: (at === text.length && !text.endsWith('\n') ? '\n' : '') + appended.map((r) => ruleText(r, indent)).join('') });
+      splices.push({
+        start: at,
+        end: at,
+        text:
+          (at === text.length && !text.endsWith('\n') ? '\n' : '') + appended.map((r) => ruleText(r, indent)).join(''),
+      });
     }
   }
   let out = text;
@@ -114,7 +130,10 @@ function editInPlace(metrics: YAMLSeq, rule: SuggestedRule): Splice[] | undefine
   if (own < 0) return undefined;
   const map = metrics.items[own] as YAMLMap;
   const splices: Splice[] = [];
-  for (const [key, value] of [['cutoff', rule.cutoff], ['transform', rule.transform]] as const) {
+  for (const [key, value] of [
+    ['cutoff', rule.cutoff],
+    ['transform', rule.transform],
+  ] as const) {
     if (value === undefined) continue;
     const node = map.get(key, true);
     if (!isScalar(node) || !node.range) return undefined;
@@ -146,21 +165,24 @@ function ownRuleIndex(metrics: YAMLSeq, rule: SuggestedRule): number {
 
 /** A new rule as block YAML at the given dash indent, with a comment saying why. */
 function ruleText(rule: SuggestedRule, indent: string): string {
-  const lines = [`${indent}# suggested by bellgate tune: ${oneLine(rule.reason)}`, `${indent}- match: ${JSON.stringify(literalGlob(rule.metric))}`];
+  const lines = [
+    `${indent}# suggested by bellgate tune: ${oneLine(rule.reason)}`,
+    `${indent}- match: ${JSON.stringify(literalGlob(rule.metric))}`,
+  ];
   if (rule.cutoff !== undefined) lines.push(`${indent}  cutoff: ${rule.cutoff}`);
   if (rule.transform !== undefined) lines.push(`${indent}  transform: ${rule.transform}`);
   return `${lines.join('\n')}\n`;
 }
 
 function oneLine(s: string): string {
-  // eslint-disable-next-line no-control-regex
   return s.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ');
 }
 
 /** The Document fallback for flow-style or empty sections: nodes edited, comments and order kept. */
 function documentEdit(text: string, cutoff: number, rules: readonly SuggestedRule[]): string {
   const doc = parseDocument(text);
-  if (doc.contents === null || (isScalar(doc.contents) && doc.contents.value === null)) doc.contents = doc.createNode({}) as unknown as typeof doc.contents;
+  if (doc.contents === null || (isScalar(doc.contents) && doc.contents.value === null))
+    doc.contents = doc.createNode({}) as unknown as typeof doc.contents;
   setScalar(doc, ['defaults', 'cutoff'], cutoff);
   for (const rule of rules) {
     let seq = doc.get('metrics', true);

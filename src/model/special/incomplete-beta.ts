@@ -100,7 +100,11 @@ function betaFraction(a: number, b: number, p: BetaPoint): number {
     const am = a + 2 * m;
     const alpha = ((a + m - 1) * (s + m - 1) * m * (b - m) * x * x) / ((am - 2) * (am - 1) * (am - 1) * am);
     const beta =
-      (a * a * (2 * m + 1) + a * b * (4 * m + 1) + 2 * m * m * (a + 2 * b) - a - b +
+      (a * a * (2 * m + 1) +
+        a * b * (4 * m + 1) +
+        2 * m * m * (a + 2 * b) -
+        a -
+        b +
         lambda * (a * a + a * b + 2 * a * m + 2 * m * m - a - b)) /
       (s * (am - 1) * (am + 1));
     d = beta + alpha * d;

@@ -19,7 +19,10 @@ export const STIRLING_FROM = 10;
 export function stirlingCorrection(x: number): number {
   const r = 1 / x;
   const r2 = r * r;
-  return r * (1 / 12 + r2 * (-1 / 360 + r2 * (1 / 1260 + r2 * (-1 / 1680 + r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 / 156))))));
+  return (
+    r *
+    (1 / 12 + r2 * (-1 / 360 + r2 * (1 / 1260 + r2 * (-1 / 1680 + r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 / 156))))))
+  );
 }
 
 /**

@@ -30,7 +30,11 @@ export async function bellgate(
 }
 
 /** A scratch folder with helpers to write files into it; `remove()` in afterAll. */
-export function scratch(prefix = 'bellgate-cli-'): { dir: string; write: (path: string, text: string) => string; remove: () => void } {
+export function scratch(prefix = 'bellgate-cli-'): {
+  dir: string;
+  write: (path: string, text: string) => string;
+  remove: () => void;
+} {
   const dir = mkdtempSync(join(tmpdir(), prefix));
   return {
     dir,
@@ -78,7 +82,10 @@ export function steadyFixture() {
   return {
     work,
     steady,
-    history: work.write('h/history.json', handHistoryV1('default', { 'api/latency': steady, 'api/size': steady.map((v) => v * 1000) })),
+    history: work.write(
+      'h/history.json',
+      handHistoryV1('default', { 'api/latency': steady, 'api/size': steady.map((v) => v * 1000) }),
+    ),
     calm: work.write('calm.json', JSON.stringify({ 'api/latency': 100.5, 'api/size': 100_200 })),
     slow: work.write('slow.json', JSON.stringify({ 'api/latency': 130, 'api/size': 100_200 })),
     config: work.write('bellgate.yml', 'defaults:\n  change-points: false\n'),

@@ -44,9 +44,23 @@ export async function startAzurite(root: string): Promise<Azurite> {
   const location = await mkdtemp(join(tmpdir(), 'bellgate-azurite-'));
   const port = await freePort();
   const bin = join(root, 'node_modules', '.bin', 'azurite-blob');
-  const child: ChildProcess = spawn(bin, ['--blobHost', '127.0.0.1', '--blobPort', String(port), '--location', location, '--silent', '--skipApiVersionCheck', '--disableTelemetry'], {
-    stdio: 'ignore',
-  });
+  const child: ChildProcess = spawn(
+    bin,
+    [
+      '--blobHost',
+      '127.0.0.1',
+      '--blobPort',
+      String(port),
+      '--location',
+      location,
+      '--silent',
+      '--skipApiVersionCheck',
+      '--disableTelemetry',
+    ],
+    {
+      stdio: 'ignore',
+    },
+  );
   let exited = false;
   child.once('exit', () => {
     exited = true;

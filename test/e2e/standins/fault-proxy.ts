@@ -45,7 +45,10 @@ export async function startFaultProxy(options: FaultProxyOptions): Promise<Fault
   const timers = new Set<NodeJS.Timeout>();
   let closed = false;
 
-  async function forward(req: IncomingMessage, body: Buffer): Promise<{ status: number; headers: Record<string, string>; bytes: Buffer }> {
+  async function forward(
+    req: IncomingMessage,
+    body: Buffer,
+  ): Promise<{ status: number; headers: Record<string, string>; bytes: Buffer }> {
     const headers: Record<string, string> = {};
     for (const name of ['authorization', 'content-type', 'accept', 'x-github-api-version', 'user-agent']) {
       const v = req.headers[name];
@@ -91,7 +94,9 @@ export async function startFaultProxy(options: FaultProxyOptions): Promise<Fault
       const headers: Record<string, string> = { 'content-type': 'application/json' };
       if (kind === '429') headers['retry-after'] = String(options.retryAfter ?? 1);
       res.writeHead(Number(kind), headers);
-      res.end(JSON.stringify({ message: kind === '429' ? 'You have exceeded a secondary rate limit' : 'Server Error' }));
+      res.end(
+        JSON.stringify({ message: kind === '429' ? 'You have exceeded a secondary rate limit' : 'Server Error' }),
+      );
       return;
     }
     if (kind === 'drop-before') {

@@ -53,9 +53,11 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
   const state: GitDataState = { objects: new Map(), refs: new Map(), calls: [] };
   const put = (o: GitObject): string => {
     const id =
-      o.kind === 'blob' ? gitBlobId(o.bytes)
-      : o.kind === 'tree' ? sha1(`tree ${JSON.stringify([...o.entries].sort(([a], [b]) => (a < b ? -1 : 1)))}`)
-      : sha1(`commit ${JSON.stringify([o.tree, o.parents, o.message])}`);
+      o.kind === 'blob'
+        ? gitBlobId(o.bytes)
+        : o.kind === 'tree'
+          ? sha1(`tree ${JSON.stringify([...o.entries].sort(([a], [b]) => (a < b ? -1 : 1)))}`)
+          : sha1(`commit ${JSON.stringify([o.tree, o.parents, o.message])}`);
     state.objects.set(id, o);
     return id;
   };
@@ -70,13 +72,18 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
     if (rest.length === 0) entries.set(head, entry);
     else {
       const sub = entries.get(head);
-      entries.set(head, { mode: '040000', type: 'tree', sha: plant(sub?.type === 'tree' ? sub.sha : undefined, rest, entry) });
+      entries.set(head, {
+        mode: '040000',
+        type: 'tree',
+        sha: plant(sub?.type === 'tree' ? sub.sha : undefined, rest, entry),
+      });
     }
     return put({ kind: 'tree', entries });
   };
   const lookup = (tree: string | undefined, path: string): Entry | undefined => {
     let entry: Entry | undefined = tree ? { mode: '040000', type: 'tree', sha: tree } : undefined;
-    for (const part of path.split('/')) entry = entry?.type === 'tree' ? get(entry.sha, 'tree')?.entries.get(part) : undefined;
+    for (const part of path.split('/'))
+      entry = entry?.type === 'tree' ? get(entry.sha, 'tree')?.entries.get(part) : undefined;
     return entry;
   };
   const descends = (from: string, ancestor: string): boolean => {
@@ -103,8 +110,10 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
     } catch {
       return send(res, 400, { message: 'Problems parsing JSON' });
     }
-    if (!req.headers.authorization?.startsWith('Bearer ')) return send(res, 401, { message: 'Requires authentication' });
-    if (state.readOnly && method !== 'GET') return send(res, 403, { message: 'Resource not accessible by integration' });
+    if (!req.headers.authorization?.startsWith('Bearer '))
+      return send(res, 401, { message: 'Requires authentication' });
+    if (state.readOnly && method !== 'GET')
+      return send(res, 403, { message: 'Resource not accessible by integration' });
     const m = /^\/repos\/[^/]+\/[^/]+(\/.*)$/.exec(url.pathname);
     const rest = m?.[1] ?? '';
     const tail = (prefix: string) => decodeURIComponent(rest.slice(prefix.length));
@@ -127,7 +136,8 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
       const current = state.refs.get(ref);
       if (!current) return send(res, 422, { message: 'Reference does not exist' });
       if (!get(body.sha, 'commit')) return send(res, 422, { message: 'Object does not exist' });
-      if (body.force !== true && !descends(body.sha as string, current)) return send(res, 422, { message: 'Update is not a fast forward' });
+      if (body.force !== true && !descends(body.sha as string, current))
+        return send(res, 422, { message: 'Update is not a fast forward' });
       state.refs.set(ref, body.sha as string);
       return send(res, 200, { ref, object: { sha: body.sha, type: 'commit' } });
     }
@@ -144,11 +154,13 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
       return send(res, 200, { sha: gitBlobId(blob.bytes), size: blob.bytes.length, encoding: 'base64', content });
     }
     if (method === 'POST' && rest === '/git/trees') {
-      if (body.base_tree !== undefined && !get(body.base_tree, 'tree')) return send(res, 422, { message: 'base_tree is not a valid tree' });
+      if (body.base_tree !== undefined && !get(body.base_tree, 'tree'))
+        return send(res, 422, { message: 'base_tree is not a valid tree' });
       let tree = body.base_tree as string | undefined;
       for (const raw of Array.isArray(body.tree) ? (body.tree as Record<string, unknown>[]) : []) {
         const path = String(raw.path ?? '');
-        if (path === '' || path.split('/').some((p) => p === '' || p === '.' || p === '..')) return send(res, 422, { message: `invalid tree path ${path}` });
+        if (path === '' || path.split('/').some((p) => p === '' || p === '.' || p === '..'))
+          return send(res, 422, { message: `invalid tree path ${path}` });
         if (!get(raw.sha, 'blob')) return send(res, 422, { message: 'tree.sha is not a valid blob' });
         tree = plant(tree, path.split('/'), { mode: String(raw.mode), type: 'blob', sha: raw.sha as string });
       }
@@ -157,14 +169,27 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
     }
     if (method === 'POST' && rest === '/git/commits') {
       const parents = Array.isArray(body.parents) ? (body.parents as unknown[]) : [];
-      if (!get(body.tree, 'tree') || parents.some((p) => !get(p, 'commit'))) return send(res, 422, { message: 'Tree or parent does not exist' });
-      const sha = put({ kind: 'commit', tree: body.tree as string, parents: parents as string[], message: String(body.message ?? '') });
+      if (!get(body.tree, 'tree') || parents.some((p) => !get(p, 'commit')))
+        return send(res, 422, { message: 'Tree or parent does not exist' });
+      const sha = put({
+        kind: 'commit',
+        tree: body.tree as string,
+        parents: parents as string[],
+        message: String(body.message ?? ''),
+      });
       return send(res, 201, { sha, tree: { sha: body.tree }, parents: parents.map((p) => ({ sha: p })) });
     }
     if (method === 'GET' && rest.startsWith('/git/commits/')) {
       const sha = tail('/git/commits/');
       const c = get(sha, 'commit');
-      return c ? send(res, 200, { sha, tree: { sha: c.tree }, parents: c.parents.map((p) => ({ sha: p })), message: c.message }) : send(res, 404, { message: 'Not Found' });
+      return c
+        ? send(res, 200, {
+            sha,
+            tree: { sha: c.tree },
+            parents: c.parents.map((p) => ({ sha: p })),
+            message: c.message,
+          })
+        : send(res, 404, { message: 'Not Found' });
     }
     if (method === 'GET' && rest.startsWith('/contents/')) {
       const path = tail('/contents/');
@@ -176,7 +201,15 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
       const bytes = get(entry.sha, 'blob')?.bytes ?? Buffer.alloc(0);
       // Over 1 MB the contents API leaves content empty (encoding "none"); the blob API serves it.
       const small = bytes.length <= 1024 * 1024;
-      return send(res, 200, { type: 'file', path, name: path.split('/').pop(), sha: entry.sha, size: bytes.length, encoding: small ? 'base64' : 'none', content: small ? bytes.toString('base64') : '' });
+      return send(res, 200, {
+        type: 'file',
+        path,
+        name: path.split('/').pop(),
+        sha: entry.sha,
+        size: bytes.length,
+        encoding: small ? 'base64' : 'none',
+        content: small ? bytes.toString('base64') : '',
+      });
     }
     return send(res, 404, { message: 'Not Found' });
   }
@@ -184,7 +217,13 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
   const server = createServer((req, res) => {
     const url = new URL(req.url ?? '/', 'http://127.0.0.1');
     handle(req, res, url).then(
-      (status) => state.calls.push({ method: req.method ?? 'GET', path: url.pathname + url.search, status, auth: req.headers.authorization }),
+      (status) =>
+        state.calls.push({
+          method: req.method ?? 'GET',
+          path: url.pathname + url.search,
+          status,
+          auth: req.headers.authorization,
+        }),
       (e: unknown) => send(res, 500, { message: String(e) }),
     );
   });

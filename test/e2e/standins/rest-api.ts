@@ -146,7 +146,10 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
       const all = state.artifacts
         .filter((a) => name === null || a.name === name)
         .sort((a, b) => (a.createdAt === b.createdAt ? b.id - a.id : a.createdAt < b.createdAt ? 1 : -1));
-      return send(res, 200, { total_count: all.length, artifacts: slice(all).map((a) => artifactJson(a, base, owner, repo)) });
+      return send(res, 200, {
+        total_count: all.length,
+        artifacts: slice(all).map((a) => artifactJson(a, base, owner, repo)),
+      });
     }
     let d = /^\/actions\/artifacts\/(\d+)\/zip$/.exec(rest);
     if (method === 'GET' && d) {
@@ -164,8 +167,13 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
       if (method === 'GET') return send(res, 200, slice(list));
       if (method === 'POST') {
         const body = (await readBody(req)) as { body?: string };
-        if (state.commentWriteStatus) return send(res, state.commentWriteStatus, { message: 'Resource not accessible by integration' });
-        const c: StoredComment = { id: state.nextId++, body: String(body?.body ?? ''), user: { login: 'github-actions[bot]', type: 'Bot' } };
+        if (state.commentWriteStatus)
+          return send(res, state.commentWriteStatus, { message: 'Resource not accessible by integration' });
+        const c: StoredComment = {
+          id: state.nextId++,
+          body: String(body?.body ?? ''),
+          user: { login: 'github-actions[bot]', type: 'Bot' },
+        };
         state.comments.set(issue, [...list, c]);
         return send(res, 201, c);
       }
@@ -173,7 +181,8 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
     d = /^\/issues\/comments\/(\d+)$/.exec(rest);
     if (d && method === 'PATCH') {
       const body = (await readBody(req)) as { body?: string };
-      if (state.commentWriteStatus) return send(res, state.commentWriteStatus, { message: 'Resource not accessible by integration' });
+      if (state.commentWriteStatus)
+        return send(res, state.commentWriteStatus, { message: 'Resource not accessible by integration' });
       for (const list of state.comments.values()) {
         const c = list.find((x) => x.id === Number(d?.[1]));
         if (c) {

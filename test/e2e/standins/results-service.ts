@@ -48,22 +48,35 @@ export async function startResultsStandin(azurite: Azurite, rest: RestStandin): 
 
   const sas = (blob: string, permissions: string) =>
     `${container.getBlockBlobClient(blob).url}?${generateBlobSASQueryParameters(
-      { containerName: CONTAINER, blobName: blob, permissions: BlobSASPermissions.parse(permissions), expiresOn: new Date(Date.now() + 3_600_000), protocol: SASProtocol.HttpsAndHttp },
+      {
+        containerName: CONTAINER,
+        blobName: blob,
+        permissions: BlobSASPermissions.parse(permissions),
+        expiresOn: new Date(Date.now() + 3_600_000),
+        protocol: SASProtocol.HttpsAndHttp,
+      },
       azurite.credential,
     ).toString()}`;
 
   async function handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
+    // eslint-disable-next-line prefer-const -- set once the body has arrived; reply() may run before that
     let body: Record<string, string> | undefined;
     const reply = (status: number, answer: unknown, name?: string) => {
       const expiresAt = body?.expires_at;
-      calls.push({ method: (req.url ?? '').slice(SERVICE.length), status, ...(name === undefined ? {} : { name }), ...(expiresAt ? { expiresAt } : {}) });
+      calls.push({
+        method: (req.url ?? '').slice(SERVICE.length),
+        status,
+        ...(name === undefined ? {} : { name }),
+        ...(expiresAt ? { expiresAt } : {}),
+      });
       res.writeHead(status, { 'content-type': 'application/json' });
       res.end(JSON.stringify(answer));
     };
     const chunks: Buffer[] = [];
     for await (const c of req) chunks.push(c as Buffer);
     const auth = req.headers.authorization ?? '';
-    if (!tokens.has(auth.replace(/^Bearer /, ''))) return reply(401, { code: 'unauthenticated', msg: 'bad runtime token' });
+    if (!tokens.has(auth.replace(/^Bearer /, '')))
+      return reply(401, { code: 'unauthenticated', msg: 'bad runtime token' });
     body = JSON.parse(Buffer.concat(chunks).toString('utf8') || '{}') as Record<string, string>;
     const runId = body.workflow_run_backend_id ?? '';
     const run = runs.get(runId);
@@ -71,7 +84,12 @@ export async function startResultsStandin(azurite: Azurite, rest: RestStandin): 
     if (!run) return reply(404, { code: 'not_found', msg: 'unknown workflow run' }, name);
     const key = `${runId}/${name}`;
     if (req.url === `${SERVICE}CreateArtifact`) {
-      if (created.has(key)) return reply(409, { code: 'already_exists', msg: 'an artifact with this name already exists on the workflow run' }, name);
+      if (created.has(key))
+        return reply(
+          409,
+          { code: 'already_exists', msg: 'an artifact with this name already exists on the workflow run' },
+          name,
+        );
       const blob = `${runId}/${encodeURIComponent(name)}.zip`;
       created.set(key, blob);
       return reply(200, { ok: true, signed_upload_url: sas(blob, 'cw') }, name);

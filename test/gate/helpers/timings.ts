@@ -16,7 +16,13 @@ export interface TimingSeries {
   bases: number[];
 }
 
-export function timingSeries(seed: number, metrics: number, runs: number, runnerSd: number, ownSd: number): TimingSeries {
+export function timingSeries(
+  seed: number,
+  metrics: number,
+  runs: number,
+  runnerSd: number,
+  ownSd: number,
+): TimingSeries {
   const normal = seededNormal(seed);
   const names = Array.from({ length: metrics }, (_, j) => `time/bench-${String(j).padStart(2, '0')}`);
   const bases = names.map((_, j) => 20 + 7 * j);
@@ -42,7 +48,10 @@ export function historySlice(series: TimingSeries, from: number, to: number): Hi
 /** Run k of a series as a Run, with optional factors applied to some metrics. */
 export function runAt(series: TimingSeries, k: number, factors: ReadonlyMap<string, number> = new Map()): Run {
   const metrics = new Map(
-    series.names.map((name, j) => [name, { value: series.values[k]![j]! * (factors.get(name) ?? 1), unit: 'ms', count: 1 }]),
+    series.names.map((name, j) => [
+      name,
+      { value: series.values[k]![j]! * (factors.get(name) ?? 1), unit: 'ms', count: 1 },
+    ]),
   );
   return { metrics, meta: new Map() };
 }

@@ -35,12 +35,16 @@ describe('chiSquareUpperTail and chiSquareCdf', () => {
   // against mpmath) and not beyond (off by up to 3e-3 for k in the thousands).
   it('agrees with @stdlib/stats-base-dists-chisquare-cdf to 1e-12 for k in [1, 200], both tails', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: Math.log(200), noNaN: true }).map(Math.exp), fc.double({ min: -4, max: 1.3, noNaN: true }), (k, e) => {
-        const q = k * Math.pow(10, e);
-        const cdf = chisquareCdf(q, k);
-        if (cdf > 1e-290) expectClose(chiSquareCdf(q, k), cdf, 1e-12);
-        if (cdf < 0.5) expectClose(chiSquareUpperTail(q, k), 1 - cdf, 1e-14);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: Math.log(200), noNaN: true }).map(Math.exp),
+        fc.double({ min: -4, max: 1.3, noNaN: true }),
+        (k, e) => {
+          const q = k * Math.pow(10, e);
+          const cdf = chisquareCdf(q, k);
+          if (cdf > 1e-290) expectClose(chiSquareCdf(q, k), cdf, 1e-12);
+          if (cdf < 0.5) expectClose(chiSquareUpperTail(q, k), 1 - cdf, 1e-14);
+        },
+      ),
       { numRuns: 3000, seed: 131 },
     );
   });

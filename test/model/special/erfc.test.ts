@@ -9,7 +9,13 @@ describe('erfc (Cody 1969)', () => {
   it('matches A&S Table 7.1 (erf to 10 decimals, from memory)', () => {
     // Abramowitz & Stegun Table 7.1: erf(0.1) = 0.1124629160, erf(0.5) = 0.5204998778,
     // erf(1) = 0.8427007929, erf(1.5) = 0.9661051465, erf(2) = 0.9953222650.
-    for (const [x, erf] of [[0.1, 0.112462916], [0.5, 0.5204998778], [1, 0.8427007929], [1.5, 0.9661051465], [2, 0.995322265]] as const) {
+    for (const [x, erf] of [
+      [0.1, 0.112462916],
+      [0.5, 0.5204998778],
+      [1, 0.8427007929],
+      [1.5, 0.9661051465],
+      [2, 0.995322265],
+    ] as const) {
       expectClose(erfc(x), 1 - erf, 0, 6e-11);
       expectClose(erfc(-x), 1 + erf, 0, 6e-11);
     }
@@ -37,10 +43,14 @@ describe('erfc (Cody 1969)', () => {
 
   it('agrees with @stdlib/math-base-special-erfcx (scaled) to 1e-14 relative on [0, 1e6]', () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 1e6, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }), (big, small) => {
-        expectClose(erfcScaled(big), stdlibErfcx(big), 1e-14);
-        expectClose(erfcScaled(small), stdlibErfcx(small), 1e-14);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 1e6, noNaN: true }),
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        (big, small) => {
+          expectClose(erfcScaled(big), stdlibErfcx(big), 1e-14);
+          expectClose(erfcScaled(small), stdlibErfcx(small), 1e-14);
+        },
+      ),
       { numRuns: 2000, seed: 72 },
     );
   });

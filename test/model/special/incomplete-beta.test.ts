@@ -13,7 +13,12 @@ const shape = (max: number) => fc.double({ min: Math.log(0.5), max: Math.log(max
 
 describe('regularizedBeta', () => {
   it('matches closed forms (from memory): x^a, 1 - y^b, (2/pi) asin sqrt x, I_1/2(a, a) = 1/2', () => {
-    for (const [x, a] of [[0.3, 2.5], [0.9, 40], [0.999, 1e5], [1e-5, 3]] as const) {
+    for (const [x, a] of [
+      [0.3, 2.5],
+      [0.9, 40],
+      [0.999, 1e5],
+      [1e-5, 3],
+    ] as const) {
       expectClose(lower(x, a, 1), Math.pow(x, a), 1e-13); // I_x(a, 1) = x^a
       expectClose(upper(x, 1, a), Math.pow(1 - x, a), 1e-13); // 1 - I_x(1, b) = (1 - x)^b
     }

@@ -7,7 +7,8 @@ import { erfc } from '../../../src/model/special/erfc.js';
 import { regularizedGamma } from '../../../src/model/special/incomplete-gamma.js';
 
 /** log-uniform in [lo, hi]. */
-const logUniform = (lo: number, hi: number) => fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map(Math.exp);
+const logUniform = (lo: number, hi: number) =>
+  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map(Math.exp);
 
 describe('regularizedGamma', () => {
   it('matches closed forms: Q(1, x) = e^-x, Q(1/2, x) = erfc(sqrt x), Q(n, x) = e^-x sum x^k/k! (from memory)', () => {
@@ -17,7 +18,12 @@ describe('regularizedGamma', () => {
       expectClose(regularizedGamma(0.5, x, true), erfc(Math.sqrt(x)), 2e-13);
       expectClose(regularizedGamma(1, x, false), -Math.expm1(-x), 1e-14);
     }
-    for (const [n, x] of [[3, 0.5], [5, 5], [12, 30], [40, 10]] as const) {
+    for (const [n, x] of [
+      [3, 0.5],
+      [5, 5],
+      [12, 30],
+      [40, 10],
+    ] as const) {
       let term = 1;
       let sum = 1;
       for (let k = 1; k < n; k++) {

@@ -14,7 +14,10 @@ import { studentUpperTail } from '../../../src/model/special/student-t.js';
  * 1e-12 plus a few ulp times that condition number (it matters only for F and beta with both
  * parameters near 1e6, where one ulp of the argument moves a far tail by ~1e-12).
  */
-const values = JSON.parse(readFileSync(new URL('./mpmath-values.json', import.meta.url), 'utf8')) as Record<string, number[][]>;
+const values = JSON.parse(readFileSync(new URL('./mpmath-values.json', import.meta.url), 'utf8')) as Record<
+  string,
+  number[][]
+>;
 
 const allowance = (condition: number) => 1e-12 + 4 * Number.EPSILON * condition;
 

@@ -7,7 +7,8 @@ import { normalUpperTail } from '../../../src/model/special/normal.js';
 import { studentTwoSidedTail, studentUpperTail } from '../../../src/model/special/student-t.js';
 
 /** log-uniform in [lo, hi]. */
-const logUniform = (lo: number, hi: number) => fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map(Math.exp);
+const logUniform = (lo: number, hi: number) =>
+  fc.double({ min: Math.log(lo), max: Math.log(hi), noNaN: true }).map(Math.exp);
 
 describe('studentUpperTail and studentTwoSidedTail', () => {
   it('matches the percentage points of the t table (standard t table, as in A&S chapter 26; 3-4 digits, from memory)', () => {
