@@ -3,7 +3,7 @@ import type { Report } from '../gate/report.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { renderText } from '../report/text.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { CommandContext } from './context.js';
 import { EXIT } from './exit-codes.js';
 import { loadConfig } from './load-config.js';

@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { fileURLToPath } from 'node:url';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** The files of the demo scenario, all in examples/demo. */
 export const DEMO_FILES = { history: 'history.json', run: 'pr-run.json', config: 'bellgate.yml' } as const;

@@ -1,5 +1,5 @@
 import { CommanderError } from 'commander';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { StoreError } from '../history/store.js';
 import { EXIT } from './exit-codes.js';
 

@@ -2,7 +2,7 @@ import { readMetricFiles } from '../inputs/read-files.js';
 import { settingsFor } from '../config/rules.js';
 import type { Config } from '../config/types.js';
 import type { Run } from '../inputs/run.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { CommandContext } from './context.js';
 
 /** The metric-file flags shared by check, record, explain and report. */

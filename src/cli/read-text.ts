@@ -1,5 +1,5 @@
 import { readFile, stat } from 'node:fs/promises';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** Files the CLI reads whole (history, import runs) are refused above this size (256 MiB). */
 export const MAX_TEXT_BYTES = 256 * 1024 * 1024;

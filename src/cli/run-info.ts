@@ -1,5 +1,5 @@
 import type { RunInfo } from '../history/history.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { CommandContext } from './context.js';
 
 /** The flags that describe a recorded run; all optional. */

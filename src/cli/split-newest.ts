@@ -1,6 +1,6 @@
 import type { History } from '../history/history.js';
 import type { Measurement, Run } from '../inputs/run.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * For `explain` and `report` without `--metrics`: the newest recorded run becomes "this run" and

@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** One thing wrong with a config file, at a 1-based line and column. */
 export interface ConfigProblem {

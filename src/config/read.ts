@@ -1,6 +1,6 @@
 import { readFile, stat } from 'node:fs/promises';
 import { resolve } from 'node:path';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { defaultConfig } from './defaults.js';
 import { parseConfigLazily } from './parse-lazily.js';
 import type { Config } from './types.js';

@@ -1,7 +1,7 @@
 import type { MetricSettings } from '../config/types.js';
 import type { History } from '../history/history.js';
 import { detectChangePoints } from '../model/change-points.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { toFitScale } from '../model/transform.js';
 
 /** The baseline of one metric: the values the fit will see, oldest first, and the runs behind them. */

@@ -1,5 +1,5 @@
 import type { Config } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { cutoffLevel } from '../model/tails.js';
 import { analyseGroup, type GroupAnalysis } from './analyse-group.js';
 import type { Test } from './decide-metric.js';

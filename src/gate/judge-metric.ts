@@ -6,7 +6,7 @@ import {
   predictiveScale,
 } from '../model/density.js';
 import { fitGaussian, type GaussianFit } from '../model/fit.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { normalTail, studentTail } from '../model/tails.js';
 import { fromFitScale, toFitScale } from '../model/transform.js';
 import type { BaselineSummary, MetricResult } from './report.js';

@@ -3,7 +3,7 @@
  * Read through small getters whose errors name the variable, never from @actions/github's
  * module-level context, so tests can pass any environment.
  */
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 export interface RunContext {
   eventName: string;

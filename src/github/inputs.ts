@@ -2,7 +2,7 @@
  * The action's inputs: names that mirror action.yml, and one reader that validates them all up front
  * so a typo fails the step at once with a message naming the input, before any file or API is touched.
  */
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** Input names exactly as action.yml declares them. */
 export const INPUT = {

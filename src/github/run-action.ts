@@ -20,7 +20,7 @@ import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { commentMarker, markerLine } from '../report/marker.js';

@@ -5,7 +5,7 @@
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import { createFileStore } from '../history/file-store.js';
 import type { HistoryStore } from '../history/store.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { GitHubApi } from './api.js';
 import { DEFAULT_HISTORY, type StoreKind } from './inputs.js';
 import { isAbsolute, resolve } from 'node:path';

@@ -3,7 +3,7 @@
  * input error, not a 422 from the API) and the file of one series, `bellgate/<slug>-<hash>.json`.
  */
 import { createHash } from 'node:crypto';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { seriesSlug } from './series-slug.js';
 
 /** The data branch used when the `history` input is left at its default. */

@@ -14,7 +14,7 @@
  *   orphan commit holding only the history folder (no code, no need to read the default branch).
  * - Needs `permissions: contents: write` to record (`contents: read` to check).
  */
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { GitDataError, type GitDataApi } from './branch-api.js';
 import { backoffMs } from './branch-backoff.js';
 import { combineWithStored } from './branch-combine.js';

@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { decodeV1 } from './decode-v1.js';
 import { decodeV2, RUN_FIELDS } from './decode-v2.js';
 import type { History } from './history.js';

@@ -1,6 +1,6 @@
 import { mkdir, open, readFile, rename, stat, unlink } from 'node:fs/promises';
 import { basename, dirname, join } from 'node:path';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { parseHistoryBytes, serializeHistory } from './document.js';
 import { emptyHistory, type History, type RunInfo } from './history.js';
 import { spliceHistory, writtenHistory, type WrittenHistory } from './splice-append.js';

@@ -1,5 +1,5 @@
 import { parse } from 'csv-parse/sync';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { nameProblem, runInfoFrom, valueFrom, type ImportedRun, type ImportParse } from './import-run.js';
 
 const RUN_COLUMNS = ['id', 'time', 'sha', 'ref', 'event'] as const;

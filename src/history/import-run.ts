@@ -1,5 +1,5 @@
 import { checkMetricName } from '../inputs/names.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { RunInfo } from './history.js';
 import { normalizeIsoTime } from './iso-time.js';
 

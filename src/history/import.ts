@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { History, MetricColumn, RunInfo } from './history.js';
 import { parseCsvRuns } from './import-csv.js';
 import { parseJsonLines } from './import-jsonl.js';

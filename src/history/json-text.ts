@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * Parses JSON text, turning a syntax error into an InputError that points at "source:line:col".

@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { Run } from '../inputs/run.js';
 import { appendNewest } from './append-newest.js';
 import type { History, MetricColumn, RunInfo } from './history.js';

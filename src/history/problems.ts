@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * Where decoding a history document reports a problem: a JSON path ("metrics.values[3][17]"), what

@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { decodeHistoryDocument, HISTORY_SCHEMA_V1 } from './document.js';
 import { parseJsonText } from './json-text.js';
 import { collectingSink, isObject, type HistoryProblem } from './problems.js';

@@ -1,5 +1,5 @@
 import type { Aggregate } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { aggregateSamples } from './aggregate.js';
 import type { ReadResult, Run } from './run.js';
 import { convertUnit } from './units.js';

@@ -1,6 +1,6 @@
 import { parse } from 'csv-parse/sync';
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
 import { parseDecimal } from './numbers.js';
 import { ReadingSink } from './reading-sink.js';

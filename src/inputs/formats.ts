@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** The metric file formats Bellgate reads; the names `--input-format` and `input-format` accept. */
 export const METRIC_FORMATS = ['json', 'jsonl', 'csv', 'openmetrics', 'gobench', 'junit'] as const;

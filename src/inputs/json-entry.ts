@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import type { ReadingSink } from './reading-sink.js';
 
 /** A plain object (not an array, not null). */

@@ -1,5 +1,5 @@
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { isRecord, readEntry, readNumbers, describeJson } from './json-entry.js';
 import { parseJsonText, whereInJson } from './json-text.js';
 import { DEFAULT_LIMITS } from './limits.js';

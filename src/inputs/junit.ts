@@ -1,6 +1,6 @@
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { DEFAULT_LIMITS } from './limits.js';
 import { parseDecimal } from './numbers.js';
 import { ReadingSink } from './reading-sink.js';

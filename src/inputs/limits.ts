@@ -1,5 +1,5 @@
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** Limits used when the config gives none: 64 MiB per file, 1 MiB per line, 100000 metrics. */
 export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({

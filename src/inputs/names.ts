@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** Longest metric name accepted, in characters (code points). */
 export const MAX_NAME_LENGTH = 512;

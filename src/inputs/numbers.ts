@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 // A plain decimal number: optional sign, digits with an optional fraction, optional exponent.
 // Stricter than Number(): no hex, no "", no surrounding spaces, no "Infinity".

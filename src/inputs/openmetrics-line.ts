@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { truncate } from './numbers.js';
 
 /** One sample line, split but not interpreted: name, labels in written order, value text. */

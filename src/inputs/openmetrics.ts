@@ -1,5 +1,5 @@
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
 import { parseDecimal, truncate } from './numbers.js';
 import { foldLabels } from './openmetrics-labels.js';

@@ -1,5 +1,5 @@
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { detectFormat } from './detect.js';
 import { metricFormat, type MetricFormat } from './formats.js';
 import type { ReadResult } from './run.js';

@@ -1,4 +1,4 @@
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { checkMetricName } from './names.js';
 
 /** A metric file pattern and the name prefix its metrics get. */

@@ -1,7 +1,7 @@
 import { readFile, stat } from 'node:fs/promises';
 import path from 'node:path';
 import type { Aggregate, InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { collectRun } from './collect.js';
 import { DEFAULT_LIMITS, limitError } from './limits.js';
 import { parseMetricTextLazily } from './parse-lazy.js';

@@ -1,5 +1,5 @@
 import type { InputLimits } from '../config/types.js';
-import { InputError } from '../model/input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { limitError } from './limits.js';
 import { checkMetricName, checkUnit } from './names.js';
 import type { ReadResult } from './run.js';

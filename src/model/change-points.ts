@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { MAD_TO_SIGMA } from './fit.js';
 import { medianInPlace } from './median.js';
 

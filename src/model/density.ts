@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { normalDensity, normalLogDensity } from './special/normal.js';
 
 /** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */

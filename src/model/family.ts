@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** How the tail probabilities of many metrics are adjusted for being tested together. */
 export type FamilyMethod = 'bonferroni' | 'holm' | 'fdr';

@@ -1,5 +1,5 @@
 import type { FitMethod } from '../config/types.js';
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { meanAndSquares } from './moments.js';
 import { median, medianAbsoluteDeviation } from './median.js';
 

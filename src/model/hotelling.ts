@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { chiSquareUpperTail } from './special/chi-square.js';
 import { fisherUpperTail } from './special/fisher-f.js';
 

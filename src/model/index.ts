@@ -1,4 +1,4 @@
-export { InputError } from './input-error.js';
+export { InputError } from '../errors/input-error.js';
 export { meanAndSquares, mean, variance } from './moments.js';
 export { RunningMoments } from './running-moments.js';
 export { median, medianAbsoluteDeviation } from './median.js';

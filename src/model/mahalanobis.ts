@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { matrixLibrary } from './matrix-library.js';
 
 /**

@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * Checks a table of runs x metrics: at least `minRows` rows, all of one length >= 1, all finite.

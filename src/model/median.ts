@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /** Rejects what has no median: an empty set or a non-finite value (1-based position in the message). */
 function checkFinite(values: ArrayLike<number>): void {

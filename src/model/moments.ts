@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * Mean and sum of squared deviations by the corrected two-pass algorithm (Chan, Golub & LeVeque,

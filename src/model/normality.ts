@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { meanAndSquares } from './moments.js';
 import { normalLogCdf } from './special/normal.js';
 

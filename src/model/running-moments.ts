@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * Mean and sum of squared deviations of a changing set of values, updated in O(1) per value by

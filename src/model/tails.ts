@@ -1,4 +1,4 @@
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 import { normalUpperTail } from './special/normal.js';
 import { studentTwoSidedTail, studentUpperTail } from './special/student-t.js';
 import { seriesTwoSidedTail } from './student-tail-series.js';

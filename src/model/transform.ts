@@ -1,5 +1,5 @@
 import type { Transform } from '../config/types.js';
-import { InputError } from './input-error.js';
+import { InputError } from '../errors/input-error.js';
 
 /**
  * The scale a metric is fitted on. `log` suits right-skewed timings and sizes: a multiplicative

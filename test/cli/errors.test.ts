@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { toFailure } from '../../src/cli/errors.js';
 import { closeNames, editDistance } from '../../src/cli/close-names.js';
 import { parsePrefixes } from '../../src/cli/load-run.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { StoreError } from '../../src/history/store.js';
 
 describe('toFailure: one message and DESIGN.md exit code for anything thrown', () => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { createContext, type CliIo } from '../../src/cli/context.js';
 import { runInfoFrom } from '../../src/cli/run-info.js';
 import { splitNewest } from '../../src/cli/split-newest.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const io = (env: Record<string, string | undefined> = {}, isTTY = false): CliIo => ({
   stdout: () => {},

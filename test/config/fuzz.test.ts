@@ -3,7 +3,7 @@ import { stringify } from 'yaml';
 import { describe, expect, it } from 'vitest';
 import { parseConfig } from '../../src/config/load.js';
 import type { Config } from '../../src/config/types.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 /** parseConfig's contract: a config that keeps its invariants, or an InputError at file:line:col. */
 function holdsContract(text: string): void {

@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 export interface Reported {
   line: number;

@@ -6,7 +6,7 @@ import { parseConfig } from '../../src/config/load.js';
 import { parseConfigLazily } from '../../src/config/parse-lazily.js';
 import { groupFor, settingsFor } from '../../src/config/rules.js';
 import type { Config } from '../../src/config/types.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 // The reference is the synchronous reader (parseConfig, picomatch always loaded), whose glob
 // answers rules.test.ts checks against picomatch's documented syntax. The lazy reader must give

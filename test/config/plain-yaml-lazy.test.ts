@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { parseConfig } from '../../src/config/load.js';
 import { parseConfigLazily } from '../../src/config/parse-lazily.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 // Counts how often the YAML reader (yaml-tree.ts and the `yaml` library behind it) is used. The
 // lazy path must read plain configs without it; parseConfig (load.ts) calls it for every text.

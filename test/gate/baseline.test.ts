@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { selectBaseline } from '../../src/gate/baseline.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { expectClose } from '../helpers/close.js';
 import { historyOf, settingsWith } from './helpers/scenario.js';
 

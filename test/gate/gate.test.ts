@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { defaultConfig } from '../../src/config/load.js';
 import { runGate } from '../../src/gate/gate.js';
 import { REPORT_SCHEMA } from '../../src/gate/report.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { expectClose } from '../helpers/close.js';
 import { configFrom, historyOf, runOf } from './helpers/scenario.js';
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { judgeMetric } from '../../src/gate/judge-metric.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from '../model/jstat.js';
 import { settingsWith } from './helpers/scenario.js';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { checkLabels, parseLabels } from '../../src/gate/tune/labels.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { historyOf } from './helpers/scenario.js';
 
 /** The InputError a call throws (fails the test when it does not throw one). */

@@ -4,7 +4,7 @@ import { parseConfig } from '../../src/config/load.js';
 import { settingsFor } from '../../src/config/rules.js';
 import { literalGlob } from '../../src/gate/tune/escape-glob.js';
 import { applyConfigEdit } from '../../src/gate/tune/write-config.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const original = readFileSync(new URL('../fixtures/tune/bellgate.yml', import.meta.url), 'utf8');
 

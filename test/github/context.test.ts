@@ -2,7 +2,7 @@
 // GitHub webhook reference (docs.github.com, "Webhook events and payloads": push and pull_request).
 import { describe, expect, it } from 'vitest';
 import { readRunContext } from '../../src/github/context.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const env = {
   GITHUB_REPOSITORY: 'acme/router',

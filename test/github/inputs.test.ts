@@ -5,7 +5,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { parse } from 'yaml';
 import * as core from '@actions/core';
 import { INPUT, OUTPUT, inputVariable, readActionInputs } from '../../src/github/inputs.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const actionYml = parse(readFileSync(new URL('../../action.yml', import.meta.url), 'utf8')) as {
   inputs: Record<string, { default?: string; description: string }>;

@@ -5,7 +5,7 @@ import { tmpdir } from 'node:os';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { dataBranchName, seriesFilePath } from '../../src/history/branch-path.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { gitBlobId } from '../e2e/standins/git-data.js';
 
 function gitAccepts(name: string): boolean {

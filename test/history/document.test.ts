@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { parseHistory, parseHistoryBytes, serializeHistory } from '../../src/history/document.js';
 import { emptyHistory, type History } from '../../src/history/history.js';
 import { historyArbitrary } from './arbitraries.js';

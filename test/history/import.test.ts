@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import type { History } from '../../src/history/history.js';
 import { importRuns, parseImportRuns } from '../../src/history/import.js';
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { lineColumn, parseJsonText, syntaxErrorOffset } from '../../src/history/json-text.js';
 
 function whereOf(text: string): string | undefined {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import type { History, MetricColumn, RunInfo } from '../../src/history/history.js';
 import { emptyHistory } from '../../src/history/history.js';
 import { appendRun, mergeHistories, trimHistory } from '../../src/history/merge.js';

@@ -10,7 +10,7 @@ import { join } from 'node:path';
 import { parseConfig } from '../../src/config/load.js';
 import { settingsFor } from '../../src/config/rules.js';
 import type { Config } from '../../src/config/types.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { bellgate, scratch } from '../cli/helpers/cli-harness.js';
 import { assertNoPollution, CaseCounter, FC, resultOrInputError, STACK_LINE } from './guards.js';
 import { assertInertHtml, assertInertMarkdown } from './outputs.js';

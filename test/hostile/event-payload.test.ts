@@ -19,7 +19,7 @@ import {
 import { artifactName } from '../../src/history/artifact-store.js';
 import { assertNoPollution, CaseCounter, FC, STACK_LINE } from './guards.js';
 import { assertInertMarkdown } from './outputs.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const counter = new CaseCounter('event payloads');
 afterAll(() => counter.print());

@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 /**
  * Shared checks of the hostile-input suites: the prototype of every object stays as it was, a

@@ -341,7 +341,7 @@ describe('the output checks themselves can fail', () => {
     expect(() => assertInertText('\u001b[31mred')).toThrow();
   });
   it('InputError.describe shows quoted controls and bidi overrides as code points', async () => {
-    const { InputError } = await import('../../src/model/input-error.js');
+    const { InputError } = await import('../../src/errors/input-error.js');
     const text = new InputError('metric name "a\u202Eb\u001b[2J\u009bc" is bad', {
       where: 'run.json:1:2',
       fix: 'rename it',

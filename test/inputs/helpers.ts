@@ -1,5 +1,5 @@
 import { expect } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 /** Runs `fn`, expects an InputError, and returns it so a test can check its message and place. */
 export function inputErrorOf(fn: () => unknown): InputError {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readJunit } from '../../src/inputs/junit.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { inputErrorOf } from './helpers.js';
 
 describe('readJunit', () => {

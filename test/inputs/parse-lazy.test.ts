@@ -3,7 +3,7 @@
 import { readdirSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { parseMetricText } from '../../src/inputs/parse.js';
 import { parseMetricTextLazily } from '../../src/inputs/parse-lazy.js';
 

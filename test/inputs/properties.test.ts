@@ -9,7 +9,7 @@ import { readJunit } from '../../src/inputs/junit.js';
 import { readOpenMetrics } from '../../src/inputs/openmetrics.js';
 import { parseMetricText } from '../../src/inputs/parse.js';
 import type { ReadResult } from '../../src/inputs/run.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const RUNS = 200;
 

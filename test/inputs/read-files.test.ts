@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEFAULT_LIMITS } from '../../src/inputs/limits.js';
 import { splitPattern } from '../../src/inputs/pattern.js';
 import { readMetricFiles } from '../../src/inputs/read-files.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { inputErrorOf } from './helpers.js';
 
 let dir = '';

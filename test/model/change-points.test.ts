@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { seededNormal } from './random.js';
 import { detectChangePoints } from '../../src/model/change-points.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 /** Plain median, written here so the reference below shares no code with the module. */
 function plainMedian(values: number[]): number {

@@ -9,7 +9,7 @@ import {
   predictiveRelativeDensity,
   predictiveScale,
 } from '../../src/model/density.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 describe('gaussianDensity', () => {
   // Abramowitz & Stegun, Handbook of Mathematical Functions, table 26.1, Z(x) column

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { adjustTails } from '../../src/model/family.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 
 const rejected = (adjusted: number[], alpha: number): number => adjusted.filter((p) => p <= alpha).length;
 

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { expectClose } from '../helpers/close.js';
 import { seededNormal } from './random.js';
 import { fitGaussian, MAD_TO_SIGMA } from '../../src/model/fit.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { median, medianAbsoluteDeviation } from '../../src/model/median.js';
 
 describe('fitGaussian', () => {

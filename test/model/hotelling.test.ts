@@ -4,7 +4,7 @@ import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
 import { seededNormal } from './random.js';
 import { chiSquareTail, hotellingTail } from '../../src/model/hotelling.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { mahalanobisSquared } from '../../src/model/mahalanobis.js';
 import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
 

@@ -1,7 +1,7 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { expectClose } from '../helpers/close.js';
 import { seededNormal } from './random.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { shrunkCovariance } from '../../src/model/ledoit-wolf.js';
 import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
 

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { mahalanobisContributions, mahalanobisSquared } from '../../src/model/mahalanobis.js';
 import { loadMatrixLibrary } from '../../src/model/matrix-library.js';
 

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { median as referenceMedian, medianAbsoluteDeviation as referenceMad } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { median, medianAbsoluteDeviation, medianInPlace } from '../../src/model/median.js';
 
 // Values that stress a selection algorithm: heavy ties (few distinct values), runs already sorted

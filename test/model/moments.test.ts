@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { expectClose } from '../helpers/close.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { mean, meanAndSquares, variance } from '../../src/model/moments.js';
 
 /**

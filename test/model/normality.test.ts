@@ -4,7 +4,7 @@ import normal from '@stdlib/stats-base-dists-normal';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
 import { seededNormal, seededUniform } from './random.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { andersonDarling, andersonDarlingPValue, skewness } from '../../src/model/normality.js';
 
 /** A^2 written plainly from the textbook formula with Phi and 1 - Phi (no log-space care). */

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { seededNormal } from './random.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { meanAndSquares } from '../../src/model/moments.js';
 import { RunningMoments } from '../../src/model/running-moments.js';
 

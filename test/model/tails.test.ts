@@ -3,7 +3,7 @@ import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
 import { plugInRelativeDensity } from '../../src/model/density.js';
-import { InputError } from '../../src/model/input-error.js';
+import { InputError } from '../../src/errors/input-error.js';
 import { cutoffLevel, cutoffSigma, normalTail, studentTail } from '../../src/model/tails.js';
 
 describe('normalTail', () => {

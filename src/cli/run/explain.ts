@@ -1,6 +1,6 @@
 import { settingsFor } from '../../config/rules.js';
 import { selectBaseline } from '../../gate/baseline.js';
-import { InputError } from '../../model/input-error.js';
+import { InputError } from '../../errors/input-error.js';
 import { fromFitScale } from '../../model/transform.js';
 import { renderExplain } from '../../report/explain.js';
 import type { CommandContext } from '../context.js';

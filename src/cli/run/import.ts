@@ -1,5 +1,5 @@
 import { importRuns, parseImportRuns } from '../../history/import.js';
-import { visibleText } from '../../model/visible-text.js';
+import { visibleText } from '../../errors/visible-text.js';
 import type { CommandContext } from '../context.js';
 import { openHistory } from '../open-history.js';
 import { resolvePath } from '../paths.js';

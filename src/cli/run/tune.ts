@@ -4,7 +4,7 @@ import { parseLabels, type RegressionLabel } from '../../gate/tune/labels.js';
 import { tuneHistory } from '../../gate/tune/tune.js';
 import { applyConfigEdit } from '../../gate/tune/write-config.js';
 import { parseHistory } from '../../history/document.js';
-import { InputError } from '../../model/input-error.js';
+import { InputError } from '../../errors/input-error.js';
 import { renderTuneJson } from '../../report/tune-json.js';
 import { renderTuneText } from '../../report/tune-text.js';
 import type { CliIo, CommandContext } from '../context.js';

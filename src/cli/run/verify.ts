@@ -1,5 +1,5 @@
 import { verifyHistory } from '../../history/verify.js';
-import { visibleText } from '../../model/visible-text.js';
+import { visibleText } from '../../errors/visible-text.js';
 import type { CommandContext } from '../context.js';
 import { EXIT } from '../exit-codes.js';
 import { resolvePath } from '../paths.js';

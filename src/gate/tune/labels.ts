@@ -1,6 +1,6 @@
 import { LineCounter, isMap, isScalar, isSeq, parseDocument, type Node } from 'yaml';
 import type { History } from '../../history/history.js';
-import { InputError } from '../../model/input-error.js';
+import { InputError } from '../../errors/input-error.js';
 
 /** One known regression: a whole run (every metric of it may alarm), or one metric of a run. */
 export interface RegressionLabel {

@@ -1,7 +1,7 @@
 import { settingsFor } from '../../config/rules.js';
 import type { Config, Family } from '../../config/types.js';
 import type { History } from '../../history/history.js';
-import { InputError } from '../../model/input-error.js';
+import { InputError } from '../../errors/input-error.js';
 import { median } from '../../model/median.js';
 import { checkLabels, type RegressionLabel } from './labels.js';
 import { DEFAULT_LADDER, scoreLadder, type LadderRow } from './ladder.js';

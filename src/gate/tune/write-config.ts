@@ -3,7 +3,7 @@ import { compileGlobs } from '../../config/glob-matcher.js';
 import { parseConfig } from '../../config/load.js';
 import { settingsFor } from '../../config/rules.js';
 import type { Config } from '../../config/types.js';
-import { InputError } from '../../model/input-error.js';
+import { InputError } from '../../errors/input-error.js';
 import { literalGlob } from './escape-glob.js';
 import type { SuggestedRule } from './suggest.js';
 
