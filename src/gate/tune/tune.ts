@@ -8,6 +8,7 @@ import { DEFAULT_LADDER, scoreLadder, type LadderRow } from './ladder.js';
 import { metricSequence } from './metric-sequence.js';
 import { normalityCheck, type NormalityCheck } from './normality-check.js';
 import { replayHistory } from './replay.js';
+import { replaySettings } from './score-alone.js';
 import {
   chooseCutoff,
   DEFAULT_TARGET,
@@ -105,7 +106,7 @@ export function tuneHistory(input: TuneInput): TuneResult {
   const rules = perRun.size === 0 ? [] : noisyMetricRules(rows, names, choice.cutoff);
   const indexOf = new Map(history.runs.map((run, i) => [run.id, i] as const));
   const metrics = replay.metrics.map((m): MetricTune => {
-    const settings = settingsFor(config, m.name);
+    const settings = replaySettings(settingsFor(config, m.name), history.columns.get(m.name)?.unit);
     const own = metricSequence(history, m.name, settings, indexOf).own.slice(-settings.window);
     const normality = normalityCheck(own);
     if (normality?.suggestLog && settings.transform === 'none') {
@@ -117,7 +118,7 @@ export function tuneHistory(input: TuneInput): TuneResult {
       name: m.name,
       method: m.method,
       judged: m.run.length,
-      transform: settings.transform,
+      transform: settings.transform === 'log' ? 'log' : 'none',
       ...(normality ? { normality } : {}),
     };
   });

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { precisionText } from '../../src/gate/precision-text.js';
+import { precisionText } from '../../src/report/precision-text.js';
 
 /** The reference: the JavaScript built-ins themselves (ECMA-262 toPrecision, Number, String). */
 const roundTrip = (x: number, digits: number): string => String(Number(x.toPrecision(digits)));

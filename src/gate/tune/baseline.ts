@@ -1,8 +1,8 @@
-import type { MetricSettings } from '../config/types.js';
-import type { History } from '../history/history.js';
-import { detectChangePoints } from '../model/change-points.js';
-import { InputError } from '../errors/input-error.js';
-import { toFitScale } from '../model/transform.js';
+import type { MetricSettings } from '../../config/types.js';
+import type { History } from '../../history/history.js';
+import { detectChangePoints } from '../../model/change-points.js';
+import { InputError } from '../../errors/input-error.js';
+import { toFitScale, type Scale } from '../../model/transform.js';
 
 /** The baseline of one metric: the values the fit will see, oldest first, and the runs behind them. */
 export interface SelectedBaseline {
@@ -24,7 +24,9 @@ export interface SelectedBaseline {
 }
 
 /**
- * Selects a metric's baseline from the history (DESIGN.md "Statistics"):
+ * Selects a metric's baseline for tune's per-metric replay (the gate itself takes a run apart in
+ * moves.ts; tune is to replay the gate whole, issue 13 item 7), with `transform` already resolved
+ * to none or log (replaySettings):
  * 1. the runs that hold the metric (with `relative-to`: that also hold a non-zero reference, and
  *    the value becomes metric / reference of the same run, cancelling a runner's common speed);
  * 2. the newest `window` of them, moved to the fit scale (`transform`);
@@ -184,9 +186,9 @@ function sinceLastChange(baseline: SelectedBaseline, minRuns: number): SelectedB
 
 function toHistoryFitScale(x: number, settings: MetricSettings, name: string, runId: string): number {
   try {
-    return toFitScale(x, settings.transform, name);
+    return toFitScale(x, settings.transform as Scale);
   } catch (error) {
-    if (!(error instanceof InputError)) throw error;
+    if (!(error instanceof RangeError)) throw error;
     throw new InputError(`history run ${runId} has value ${x} for ${name}, which cannot be log-transformed`, {
       where: name,
       fix: 'use `transform: none` for this metric, or remove the bad run from the history',
