@@ -241,7 +241,8 @@ interface Polished {
   shared?: GroupMoves;
 }
 
-const POLISH_ROUNDS = 3;
+/** Rounds of the median polish: the centres settle in two (Tukey's usual stopping point is a few). */
+const POLISH_ROUNDS = 2;
 
 function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
   const n = group.members.length;
@@ -256,10 +257,11 @@ function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
   // Fill a level without runs (a mark on the newest run) from the level before: it is learning anyway.
   for (const c of centres) for (let k = 1; k < c.length; k++) if (!Number.isFinite(c[k]!)) c[k] = c[k - 1]!;
   const rowIndex = [...new Set(frames.flatMap((f) => f.rows))].sort((a, b) => a - b);
+  const held = frames.map((f) => new Set(f.rows));
   const dev = (j: number, i: number): number => {
     const f = frames[j]!;
     const x = f.candidate.values[i]!;
-    if (!Number.isFinite(x) || !f.rows.includes(i)) return Number.NaN;
+    if (!Number.isFinite(x) || !held[j]!.has(i)) return Number.NaN;
     return deviation(f.candidate, x, centres[j]![levelOf(f.levels, i)]!);
   };
   const devNow = (j: number): number => {
@@ -306,13 +308,14 @@ function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
     });
   }
   const own: number[][] = frames.map((f) => f.rows.map(() => Number.NaN));
+  const position = frames.map((f) => new Map(f.rows.map((i, k) => [i, k] as const)));
   const history_: number[] = [];
   for (const i of rowIndex) {
     const devs = frames.map((_, j) => dev(j, i));
     const others = medianOfOthers(devs);
     frames.forEach((f, j) => {
-      const k = f.rows.indexOf(i);
-      if (k >= 0) own[j]![k] = devs[j]! - others[j]!;
+      const k = position[j]!.get(i);
+      if (k !== undefined) own[j]![k] = devs[j]! - others[j]!;
     });
     const present = devs.filter((d) => Number.isFinite(d));
     if (present.length >= 2) history_.push(median(present));
