@@ -49,6 +49,9 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
     throw new RangeError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
   }
   const clip = options.clip ?? 3;
+  if (options.penalty !== undefined && !(options.penalty >= 0 && Number.isFinite(options.penalty))) {
+    throw new RangeError(`penalty must be a finite number, 0 or more, got ${options.penalty}`);
+  }
   values.forEach((x, i) => {
     if (!Number.isFinite(x)) throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
   });
@@ -61,9 +64,6 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
   for (let i = 1; i < n; i++) noise += Math.min(clip * clip, (z[i]! - z[i - 1]!) ** 2 / 2);
   noise = Math.max(noise / (n - 1), 1e-12);
   const penalty = (options.penalty ?? 3 * Math.log(n)) * noise;
-  if (!(penalty >= 0) || !Number.isFinite(penalty)) {
-    throw new RangeError(`penalty must be a finite number, 0 or more, got ${options.penalty}`);
-  }
   const s1 = [0];
   const s2 = [0];
   for (let i = 0; i < n; i++) {
