@@ -282,7 +282,11 @@ function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
     const refNow = devNow(r) * frames[r]!.candidate.sign;
     return {
       centres,
-      own: frames.slice(0, n).map((f, j) => f.rows.map((i) => dev(j, i) - f.candidate.sign * refDev(i))),
+      // The reference itself comes last, with its plain deviations (for its lasting-change check).
+      own: [
+        ...frames.slice(0, n).map((f, j) => f.rows.map((i) => dev(j, i) - f.candidate.sign * refDev(i))),
+        frames[r]!.rows.map((i) => dev(r, i)),
+      ],
       ownNow: frames.slice(0, n).map((f, j) => devNow(j) - f.candidate.sign * refNow),
       sharedNow: frames.slice(0, n).map((f) => f.candidate.sign * refNow),
     };
