@@ -13,7 +13,7 @@ export interface ExplainInput {
   baselineValues: number[];
   cutoff: number;
   /** The report's family control, for the reason's wording. */
-  report: Pick<Report, 'family' | 'budget'>;
+  report?: Pick<Report, 'family' | 'budget'>;
   color: boolean;
   /** Columns of the picture (default 72, at least 24). */
   width?: number;
@@ -41,6 +41,7 @@ function place(line: string[], label: string, at: number, align: 'left' | 'centr
  */
 export function renderExplain(input: ExplainInput): string {
   const { result: m, cutoff } = input;
+  const context = input.report ?? { family: 'none', budget: 0.01 };
   const c = pc.createColors(input.color);
   const width = Math.max(24, Math.floor(input.width ?? 72));
   const name = cleanText(m.name);
@@ -48,7 +49,7 @@ export function renderExplain(input: ExplainInput): string {
   const out: string[] = [`${name} — ${STATUS_GLYPH[m.status]} ${m.status}`];
   const b = m.baseline;
   if (!b || !(b.sd > 0 && Number.isFinite(b.sd)) || !Number.isFinite(b.mean)) {
-    out.push(`no fitted baseline: ${cleanText(fullReason(m, input.report), 600)}`);
+    out.push(`no fitted baseline: ${cleanText(fullReason(m, context), 600)}`);
     if (m.value !== undefined) out.push(`this run: ${formatValue(m.value, unit)}`);
     return out.join('\n') + '\n';
   }
@@ -135,6 +136,6 @@ export function renderExplain(input: ExplainInput): string {
     );
   for (const extra of [sinceText(m), runnerText(m), detectableText(m)])
     if (extra !== '') out.push(cleanText(extra, 600));
-  out.push(`verdict for this metric: ${paintRun(m.status)} — ${cleanText(metricReason(m, input.report), 600)}`);
+  out.push(`verdict for this metric: ${paintRun(m.status)} — ${cleanText(metricReason(m, context), 600)}`);
   return out.join('\n') + '\n';
 }
