@@ -90,7 +90,7 @@ export function cutoffT(cutoff: number, nu: number): number {
  * @example studentLogDensity(0, Infinity) // -0.9189385332046727
  */
 export function studentLogDensity(t: number, nu: number): number {
-  if (nu === Infinity) return -0.5 * t * t - 0.91893853320467274178;
+  if (nu === Infinity) return -0.5 * t * t - 0.9189385332046727;
   return (
     logGamma((nu + 1) / 2) - logGamma(nu / 2) - 0.5 * Math.log(nu * Math.PI) - ((nu + 1) / 2) * Math.log1p((t * t) / nu)
   );

@@ -28,7 +28,8 @@ export const STATUS_GLYPH: Readonly<Record<Status, string>> = {
 };
 
 /** The legend of the status glyphs, shown under every table. */
-export const GLYPH_LEGEND = '▲ worse side (regressed) · ▼ better side (improved), whichever way the number moved';
+export const GLYPH_LEGEND =
+  'legend: ▲ the worse side (regressed) · ▼ the better side (improved), whichever way the number moved';
 
 /** What each verdict means, in a sentence that follows the verdict word in every headline. */
 export const VERDICT_HEADLINE: Readonly<Record<Verdict, string>> = {

@@ -69,7 +69,7 @@ describe('the shipped JSON Schema', () => {
     const config = parseConfig(text, 'examples/bellgate.yml');
     expect(config.family).toBe('holm');
     expect(config.rules.length).toBeGreaterThanOrEqual(5);
-    expect(config.groups.map((g) => g.name)).toEqual(['timings', 'throughput']);
+    expect(config.groups.map((g) => g.name)).toEqual(['throughput']);
   });
 
   it('refuses what the loader refuses, for an editor user', () => {

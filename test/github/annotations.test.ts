@@ -10,7 +10,17 @@ function metric(over: Partial<MetricResult>): MetricResult {
 }
 
 function report(metrics: MetricResult[]): Report {
-  return { schema: REPORT_SCHEMA, verdict: 'regressed', series: 'bench', blocks: true, family: 'none', budget: 0.01, unsettled: 'pass', metrics, shared: [] };
+  return {
+    schema: REPORT_SCHEMA,
+    verdict: 'regressed',
+    series: 'bench',
+    blocks: true,
+    family: 'none',
+    budget: 0.01,
+    unsettled: 'pass',
+    metrics,
+    shared: [],
+  };
 }
 
 describe('annotate', () => {

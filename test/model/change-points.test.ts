@@ -1,4 +1,3 @@
-import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { seededNormal } from './random.js';
 import { detectChangePoints } from '../../src/model/change-points.js';

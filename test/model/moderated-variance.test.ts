@@ -13,10 +13,13 @@ function chiSquare(normal: () => number, d: number): number {
 }
 
 describe('variancePrior: Smyth (2004) section 6.2, the trigamma method', () => {
-  it('meets the paper\'s moment equations, checked with @stdlib digamma and trigamma', () => {
+  it("meets the paper's moment equations, checked with @stdlib digamma and trigamma", () => {
     const variances = [0.8, 2.5, 1.1, 0.3, 4.2, 1.9, 0.7, 1.4];
     const d = 9;
-    const prior = variancePrior(variances, variances.map(() => d))!;
+    const prior = variancePrior(
+      variances,
+      variances.map(() => d),
+    )!;
     const e = variances.map((s2) => Math.log(s2) - stdlibDigamma(d / 2) + Math.log(d / 2));
     const mean = e.reduce((a, b) => a + b) / e.length;
     const varE = e.reduce((a, x) => a + (x - mean) ** 2, 0) / (e.length - 1);
@@ -25,7 +28,7 @@ describe('variancePrior: Smyth (2004) section 6.2, the trigamma method', () => {
     expectClose(Math.log(prior.s0Squared) - stdlibDigamma(prior.d0 / 2) + Math.log(prior.d0 / 2), mean, 1e-9);
   });
 
-  it('recovers d0 and s0^2 from variances drawn as the paper\'s model says (s0^2 F(d, d0), 4000 metrics)', () => {
+  it("recovers d0 and s0^2 from variances drawn as the paper's model says (s0^2 F(d, d0), 4000 metrics)", () => {
     const normal = seededNormal(2004);
     const d0 = 8;
     const s0Squared = 2;
@@ -34,7 +37,10 @@ describe('variancePrior: Smyth (2004) section 6.2, the trigamma method', () => {
       const sigma2 = s0Squared / (chiSquare(normal, d0) / d0); // scaled inverse chi-square prior
       return (sigma2 * chiSquare(normal, d)) / d;
     });
-    const prior = variancePrior(variances, variances.map(() => d))!;
+    const prior = variancePrior(
+      variances,
+      variances.map(() => d),
+    )!;
     expect(prior.d0).toBeGreaterThan(6.5);
     expect(prior.d0).toBeLessThan(9.8);
     expectClose(prior.s0Squared, s0Squared, 0.06);
@@ -43,7 +49,12 @@ describe('variancePrior: Smyth (2004) section 6.2, the trigamma method', () => {
   it('variances no more scattered than sampling alone gives d0 = Infinity; fewer than 2 positive, none', () => {
     const normal = seededNormal(7);
     const variances = Array.from({ length: 500 }, () => chiSquare(normal, 30) / 30);
-    expect(variancePrior(variances, variances.map(() => 30))!.d0).toBeGreaterThan(200);
+    expect(
+      variancePrior(
+        variances,
+        variances.map(() => 30),
+      )!.d0,
+    ).toBeGreaterThan(200);
     expect(variancePrior([1, 1, 1, 1], [10, 10, 10, 10])).toEqual({ d0: Infinity, s0Squared: expect.any(Number) });
     expect(variancePrior([0, 2], [5, 5])).toBeUndefined();
   });

@@ -42,6 +42,10 @@ describe('detectableShift', () => {
   it('Gaussian noise and a Bonferroni level 0.01 / 50: 3.540 + 0.8416 sd (A&S table 26.1)', () => {
     const threshold = studentUpperQuantile(0.01 / 50, Infinity);
     expectClose(threshold, 3.5401, 5e-5);
-    expectClose(detectableShift(threshold, { scale: 1, nu: Infinity }, 0.8, studentUpperQuantile), 3.5401 + 0.8416, 5e-5);
+    expectClose(
+      detectableShift(threshold, { scale: 1, nu: Infinity }, 0.8, studentUpperQuantile),
+      3.5401 + 0.8416,
+      5e-5,
+    );
   });
 });

@@ -92,7 +92,9 @@ export function tuneHistory(input: TuneInput): TuneResult {
   const perRun = new Map<number, number>();
   for (const m of replay.metrics) for (const r of m.run) perRun.set(r, (perRun.get(r) ?? 0) + 1);
   const metricsPerRun = perRun.size === 0 ? 0 : median([...perRun.values()]);
-  const rows = ladders.get(config.family)!;
+  // A cutoff decides only with family: none (under a family the run's budget does), so the
+  // cutoff is chosen on that ladder until tune replays the whole gate (issue 13 item 7).
+  const rows = ladders.get('none')!;
   // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
   const choice =
     perRun.size === 0

@@ -7,7 +7,7 @@ import { expectClose } from '../../helpers/close.js';
 const POINTS = [1e-3, 0.05, 0.3, 0.5, 1, 1.5, 2.7, 5, 5.99, 6, 9.5, 20, 123.4, 1e4, 1e7];
 
 describe('digamma, trigamma and tetragamma (A&S 6.3.18, 6.4.12 with the recurrence)', () => {
-  it('exact values: psi(1) = -Euler gamma, psi(1/2) = -gamma - 2 ln 2, psi\'(1) = pi^2/6, psi\'(1/2) = pi^2/2, psi\'\'(1) = -2 zeta(3) (A&S 6.3.2, 6.3.3, 6.4.2, 6.4.4; from memory)', () => {
+  it("exact values: psi(1) = -Euler gamma, psi(1/2) = -gamma - 2 ln 2, psi'(1) = pi^2/6, psi'(1/2) = pi^2/2, psi''(1) = -2 zeta(3) (A&S 6.3.2, 6.3.3, 6.4.2, 6.4.4; from memory)", () => {
     const gamma = 0.5772156649015329;
     expectClose(digamma(1), -gamma, 1e-14);
     expectClose(digamma(0.5), -gamma - 2 * Math.LN2, 1e-14);
