@@ -1,4 +1,6 @@
+import { existsSync, readdirSync } from 'node:fs';
 import { afterAll, describe, expect, it } from 'vitest';
+import { CORPUS_DIR, corpusScenarios, readCorpus } from './corpus.js';
 import { evaluate, formatTable, type Evaluation, type TableRow } from './evaluate.js';
 import { bimodal, heavyTails, regimes, sharedRunner, simulatedProject, type Scenario } from './simulate.js';
 
@@ -106,4 +108,22 @@ describe('the gate on simulated noise', () => {
       expect(result.falseAlarmsPer100).toBeGreaterThan(80);
     }
   }, 600_000);
+});
+
+// The recorded corpus (test/fixtures/noise/), when it is there: at defaults, at most 3 false alarms
+// per 100 clean runs in every regime and timing source, and slowdowns of at least 1.25 x the
+// reported `detectable` caught at least 80% of the time wherever 10 or more were that large.
+const recorded =
+  existsSync(CORPUS_DIR) && readdirSync(CORPUS_DIR).some((f) => f.endsWith('.jsonl'))
+    ? corpusScenarios(readCorpus())
+    : [];
+describe.skipIf(recorded.length === 0)('the gate on the recorded corpus, at defaults', () => {
+  for (const scenario of recorded)
+    it(`${scenario.name}: <= 3 false alarms per 100 clean runs; detectable honest`, async () => {
+      const result = await evaluate('', scenario);
+      rows.push({ scenario: `corpus: ${scenario.name}`, setting: 'defaults', result });
+      countsAddUp(result, [scenario]);
+      expect(result.falseAlarmsPer100).toBeLessThanOrEqual(3);
+      if (result.detectableCheck.eligible >= 10) expect(result.detectableCheck.share).toBeGreaterThanOrEqual(0.8);
+    }, 600_000);
 });
