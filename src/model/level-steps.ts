@@ -50,6 +50,15 @@ export function levelSteps(values: ArrayLike<number>, options: LevelStepOptions 
     if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${i + 1} is not a finite number`);
     return x;
   });
+  const starts = splitSearch(series, minSegment, level);
+  return holding(series, starts, level);
+}
+
+/**
+ * The search of levelSteps alone (step 1, no hold check): where binary segmentation with
+ * rankSplit at `level` cuts the series, ascending. Every cut is a candidate, not a finding.
+ */
+export function splitSearch(series: Float64Array, minSegment: number, level: number): number[] {
   const starts: number[] = [];
   // An explicit stack of parts to search (each split shortens a part by at least minSegment).
   const parts: [number, number][] = [[0, series.length]];
@@ -60,8 +69,7 @@ export function levelSteps(values: ArrayLike<number>, options: LevelStepOptions 
     starts.push(from + split.at);
     parts.push([from, from + split.at], [from + split.at, to]);
   }
-  starts.sort((a, b) => a - b);
-  return holding(series, starts, level);
+  return starts.sort((a, b) => a - b);
 }
 
 /** Drops the weakest step until every step left holds; returns the survivors with their p. */

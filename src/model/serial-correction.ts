@@ -6,8 +6,8 @@ import { midranks } from './ranks.js';
  * (Hamed & Rao 1998, "A modified Mann-Kendall trend test for autocorrelated data", Journal of
  * Hydrology 204): with rho_k the lag-k autocorrelation of the ranks of the detrended values,
  *   n / n* = 1 + 2 / (n(n-1)(n-2)) x sum over k = 1..n-1 of (n-k)(n-k-1)(n-k-2) rho_k,
- * taking only the lags whose rho_k is significant at 5% (|rho_k| > 1.96 / sqrt n), and Var(S)
- * is multiplied by it. CI timings come in load regimes that last a few runs; such runs are not
+ * and Var(S) multiplied by it. Hamed & Rao add every lag significant at 5% (|rho_k| > 1.96 /
+ * sqrt n); here the sum stops at the first lag that is not (as longRunFactor, which says why). CI timings come in load regimes that last a few runs; such runs are not
  * independent, and the plain test would call their drift a trend. The factor is kept at 1 or more
  * (a negative correlation does not make the test bolder). O(n^2). Throws InputError for
  * non-finite values; 1 for fewer than 3 values.
@@ -33,7 +33,8 @@ export function serialCorrection(detrended: ArrayLike<number>): number {
     let cross = 0;
     for (let i = 0; i + k < n; i++) cross += (ranks[i]! - centre) * (ranks[i + k]! - centre);
     const rho = cross / squares;
-    if (Math.abs(rho) > bound) sum += (n - k) * (n - k - 1) * (n - k - 2) * rho;
+    if (!(Math.abs(rho) > bound)) break;
+    sum += (n - k) * (n - k - 1) * (n - k - 2) * rho;
   }
   return Math.max(1, 1 + (2 * sum) / (n * (n - 1) * (n - 2)));
 }
@@ -42,7 +43,11 @@ export function serialCorrection(detrended: ArrayLike<number>): number {
  * The variance factor of a mean of serially correlated values: 1 + 2 sum over k of (1 - k/n) rho_k
  * (the long-run variance over the variance; e.g. Box, Jenkins & Reinsel, "Time Series Analysis",
  * on the variance of a sample mean), with rho_k the lag-k autocorrelation of the ranks of the
- * residuals, taking the lags up to n / 4 whose rho_k is significant at 5% (|rho_k| > 1.96 / sqrt n).
+ * residuals, summed over the lags before the first one that is not significant at 5%
+ * (|rho_k| <= 1.96 / sqrt n; at most n / 4). Stopping there, rather than adding every significant
+ * lag, keeps the long lags out: their sample autocorrelations sum to about -1/2 whatever the
+ * process, and would cancel the short ones (the truncation of Geyer 1992, "Practical Markov chain
+ * Monte Carlo", in its simplest form).
  * A rank test of two long segments of such values has its variance widened by about this factor.
  * Kept at 1 or more. O(n^2 / 4). Throws InputError for non-finite values; 1 for fewer than 8 values.
  * @example longRunFactor([1, 1, 1, 0, 0, 0, 1, 1, 1, 0, 0, 0, 1, 1, 1, 0, 0, 0]) // > 1
@@ -61,7 +66,8 @@ export function longRunFactor(residuals: ArrayLike<number>): number {
     let cross = 0;
     for (let i = 0; i + k < n; i++) cross += (ranks[i]! - centre) * (ranks[i + k]! - centre);
     const rho = cross / squares;
-    if (Math.abs(rho) > bound) sum += (1 - k / n) * rho;
+    if (!(Math.abs(rho) > bound)) break;
+    sum += (1 - k / n) * rho;
   }
   return Math.max(1, 1 + 2 * sum);
 }

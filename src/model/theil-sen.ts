@@ -37,7 +37,8 @@ export const MAX_SLOPE_PAIRS = 20_000_000;
  * t_i != t_j. With several blocks, only pairs within one block are taken (the seasonal Kendall
  * slope of Hirsch, Slack & Smith 1982), so a level step between blocks does not bend the slope.
  * The interval is Sen's: with N slopes in order and C = z_(1-a/2) sqrt(Var S), the bounds are
- * the ((N - C) / 2)-th and ((N + C) / 2 + 1)-th slopes (Gilbert 1987, section 16.5), Var S the
+ * the ((N - C) / 2)-th and ((N + C) / 2 + 1)-th slopes, ranks rounded to the nearest (Gilbert
+ * 1987, section 16.5, interpolates between them instead), Var S the
  * Mann-Kendall variance of the same blocks without tie correction (`variance` overrides it).
  * `maxLag` keeps only pairs close in the series: a step then touches few of the slopes, and their
  * median stays near the local trend (the interval is not meant for that case).
@@ -92,9 +93,9 @@ export function theilSen(blocks: readonly TrendBlock[], options: TheilSenOptions
   const half = count >> 1;
   const slope = count % 2 === 1 ? sorted[half]! : (sorted[half - 1]! + sorted[half]!) / 2;
   const c = normalQuantile(1 - (1 - confidence) / 2) * Math.sqrt(options.variance ?? varianceSum);
-  // 1-based ranks (N - C) / 2 and (N + C) / 2 + 1, rounded outwards so the interval is not narrower.
-  const low = Math.floor((count - c) / 2);
-  const high = Math.ceil((count + c) / 2) + 1;
+  // 1-based ranks (N - C) / 2 and (N + C) / 2 + 1, each rounded to the nearest rank.
+  const low = Math.round((count - c) / 2);
+  const high = Math.round((count + c) / 2) + 1;
   return {
     slope,
     lower: low >= 1 ? sorted[low - 1]! : Number.NaN,

@@ -1,5 +1,5 @@
 import { hampelOutliers } from '../../model/hampel.js';
-import { levelSteps } from '../../model/level-steps.js';
+import { levelSteps, splitSearch } from '../../model/level-steps.js';
 import { mannKendall, type MannKendall } from '../../model/mann-kendall.js';
 import { median } from '../../model/median.js';
 import { serialCorrection } from '../../model/serial-correction.js';
@@ -54,14 +54,16 @@ interface Round {
  * Since each hides the other: a slope fitted across a step is bent by
  * it, and a creep looks like steps to a level test. So they are found in turns, from a start b:
  * 1. the series, with the creep taken out after the reference (y - b (t - t_ref)), is searched
- *    for steps (levelSteps: binary segmentation with a rank split test, then the hold check);
+ *    for steps (levelSteps: binary segmentation with a rank split test, then the hold check),
+ *    and steps that the slope explains are pruned (prune, by the BIC below);
  * 2. within the segments between those steps, the Theil-Sen slope and the Mann-Kendall test
  *    (Hirsch, Slack & Smith 1982: segments as blocks; Hamed & Rao 1998: variance widened for
  *    serial correlation); b becomes the slope when the test is below creepLevel, else 0;
  * until the steps and b repeat (a fixed point; at most MAX_ROUNDS rounds). The turns can settle
- * on a wrong pair (a slope bent by a step it then hides), so they start from b = 0 and from the
+ * on a wrong pair (a slope bent by a step it then hides), so they start from b = 0, from the
  * local slope (Theil-Sen over pairs at most 2 x minSegment runs apart, which a step barely
- * bends; taken when Mann-Kendall finds a trend), and the fixed point with the smallest Laplace
+ * bends) and from the slope within the cuts of the step search alone (cutSlope), each taken
+ * when Mann-Kendall finds a trend, and the fixed point with the smallest Laplace
  * BIC, m ln(mean |residual|) + (2 steps + slope) ln m, is kept (Schwarz 1978; the Laplace
  * likelihood keeps a few wild runs from deciding). Runs at or before the reference (the window
  * of the level then) take part in the step search, so a step on the first run after the
@@ -73,9 +75,7 @@ export function stepsAndCreep(all: Series, reference: number, options: StepOptio
   const kept = all.values.map((_, i) => i).filter((i) => !outlying[i]);
   const series: Series = { at: kept.map((i) => all.at[i]!), values: kept.map((i) => all.values[i]!) };
   const after = firstAfter(series, reference);
-  const starts = [0];
-  const local = localSlope(series, after, options);
-  if (local !== 0) starts.push(local);
+  const starts = new Set([0, localSlope(series, after, options), cutSlope(series, after, options)]);
   let best: { round: Round; cost: number } | undefined;
   for (const start of starts) {
     const round = settle(series, after, reference, start, options);
@@ -103,12 +103,35 @@ function settle(series: Series, after: number, reference: number, start: number,
     const steps = levelSteps(detrended, { minSegment: options.minSegment, level: options.stepLevel })
       .filter((s) => s.at >= after)
       .map((s) => ({ index: s.at, p: s.p }));
-    round = measureCreep(series, after, steps, options);
+    round = prune(series, after, reference, measureCreep(series, after, steps, options), options);
     const key = `${steps.map((s) => s.index).join(',')}|${round.taken}`;
     if (seen.has(key)) break;
     seen.add(key);
   }
   return round;
+}
+
+/**
+ * Backward elimination by the same BIC: while leaving one step out (and refitting the slope within
+ * the wider segment) lowers the BIC, the step whose removal lowers it most goes. A creep seen
+ * without its slope taken out looks like a staircase; once the slope explains it, its steps go.
+ */
+function prune(series: Series, after: number, reference: number, round: Round, options: StepOptions): Round {
+  let current = round;
+  let cost = bic(series, after, reference, current);
+  while (current.steps.length > 0) {
+    let best: { round: Round; cost: number } | undefined;
+    for (let k = 0; k < current.steps.length; k++) {
+      const fewer = current.steps.filter((_, i) => i !== k);
+      const candidate = measureCreep(series, after, fewer, options);
+      const c = bic(series, after, reference, candidate);
+      if (best === undefined || c < best.cost) best = { round: candidate, cost: c };
+    }
+    if (!(best!.cost < cost)) break;
+    current = best!.round;
+    cost = best!.cost;
+  }
+  return current;
 }
 
 /** The local slope after the reference when Mann-Kendall finds a trend there, else 0. */
@@ -117,6 +140,18 @@ function localSlope(series: Series, after: number, options: StepOptions): number
   if (values.length < 2 * options.minSegment) return 0;
   if (!(mannKendall([values]).p < options.creepLevel)) return 0;
   return theilSen([{ at: series.at.slice(after), values }], { maxLag: 2 * options.minSegment }).slope;
+}
+
+/**
+ * The slope within the segments that the step search alone (no hold check) cuts the raw series
+ * into, when Mann-Kendall finds a trend there, else 0: cuts in a creep only shorten its
+ * segments, and a cut at a step keeps the step out of the slope.
+ */
+function cutSlope(series: Series, after: number, options: StepOptions): number {
+  const cuts = splitSearch(Float64Array.from(series.values), options.minSegment, options.stepLevel)
+    .filter((at) => at >= after)
+    .map((index) => ({ index, p: 0 }));
+  return measureCreep(series, after, cuts, options).taken;
 }
 
 /** Laplace BIC of a fixed point: each segment at its median, the slope taken out after the reference. */
