@@ -108,6 +108,7 @@ export function scoreMember(m: MemberMoves, noise: MemberNoise, level: number | 
   const centreFactor = Math.sqrt(1 + 1 / noise.levelRuns);
   const worse = side(noise.worse, noise, centreFactor);
   const better = side(noise.better, noise, centreFactor);
+  if (Number.isFinite(worse.nu)) baseline.dof = worse.nu;
   if (!(noise.sd > 0)) {
     // A constant history: any move is infinitely unlikely, and the tolerance decides.
     result.relativeDensity = move === 0 ? 1 : 0;

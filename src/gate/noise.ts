@@ -36,6 +36,9 @@ const GAUSSIAN_SIDE: TailShape = { nu: Infinity, scale: 1, n: 0 };
  *   assumed away, and pooled because 60 runs cannot pin one metric's tail.
  * The sample variance rather than a robust scale: the MAD measures only the fast floor of a
  * bimodal metric (issue 13: `fit: robust` raised false alarms); the t's scale carries the shape.
+ * No rank (conformal) check: with a window of 60 runs the smallest rank p-value is 1/61 = 0.016,
+ * above every level the run's budget gives a metric (0.01 / m at the worst), so it could never flag
+ * anything; it would need thousands of runs per metric.
  */
 export function noiseModel(members: readonly MemberMoves[]): Map<MemberMoves, MemberNoise> {
   const classes = new Map<string, MemberMoves[]>();
