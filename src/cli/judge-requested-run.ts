@@ -3,6 +3,7 @@ import type { Report } from '../gate/report.js';
 import type { Config } from '../config/types.js';
 import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
+import { alignRunUnits } from '../inputs/units.js';
 import type { CommandContext } from './context.js';
 import { loadConfig } from './load-config.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
@@ -30,7 +31,13 @@ export async function judgeRequestedRun(
   const { history, run } =
     options.metrics === undefined
       ? splitNewest(opened.history, options.history)
-      : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
+      : {
+          history: opened.history,
+          run: alignRunUnits(
+            await loadRun(ctx, config, { ...options, metrics: options.metrics }),
+            (name) => opened.history.columns.get(name)?.unit,
+          ),
+        };
   await prepareGate(config);
   return { config, history, run, report: runGate({ config, history, run, series: options.series }) };
 }

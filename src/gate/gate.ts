@@ -10,6 +10,7 @@ import type { GroupMemberInput } from './group-frame.js';
 import type { judgeGroups, PendingGroup } from './judge-groups.js';
 import type { MetricScore } from './judge-metric.js';
 import { judgeName, metricNames } from './judge-name.js';
+import { missingMetrics } from './missing-metrics.js';
 import { REPORT_SCHEMA, type GroupResult, type MetricResult, type Report } from './report.js';
 import { decideVerdict, orderMetrics } from './verdict.js';
 
@@ -86,7 +87,7 @@ export function runGate(input: GateInput): Report {
     groups.push(decided.group);
     metrics.push(...decided.members);
   });
-  return {
+  const report: Report = {
     schema: REPORT_SCHEMA,
     verdict: decideVerdict(metrics, groups, input.accepted === true),
     series: input.series,
@@ -94,6 +95,13 @@ export function runGate(input: GateInput): Report {
     metrics: orderMetrics(metrics),
     groups: groups.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
   };
+  const missing = missingMetrics(config, history, run);
+  if (missing.of > 0) report.missing = missing;
+  if (run.notFitted !== undefined && run.notFitted.size > 0)
+    report.notJudged = [...run.notFitted]
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+      .map(([name, reason]) => ({ name, reason }));
+  return report;
 }
 
 function decideLone(score: MetricScore, family: { adjusted: number; test: Test } | undefined): MetricResult {

@@ -56,11 +56,15 @@ export function judgeName(
   const baseline = selectBaseline(history, name, settings);
   if (measurement === undefined) {
     const runs = `${baseline.available} run${baseline.available === 1 ? '' : 's'}`;
+    const notFitted = run.notFitted?.get(name);
     return {
       result: {
         ...plain(name, settings),
         status: 'missing',
-        reason: `in the history (${runs}) but absent from this run`,
+        reason:
+          notFitted === undefined
+            ? `in the history (${runs}) but absent from this run`
+            : `in the history (${runs}) but not judged in this run: ${notFitted}`,
       },
     };
   }

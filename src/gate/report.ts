@@ -76,6 +76,12 @@ export interface GroupResult {
   reason: string;
 }
 
+/** A metric value this run holds but never judged nor records (a NaN sample, a failed test). */
+export interface NotJudged {
+  name: string;
+  reason: string;
+}
+
 export interface Report {
   schema: typeof REPORT_SCHEMA;
   verdict: Verdict;
@@ -83,4 +89,13 @@ export interface Report {
   family: Family;
   metrics: MetricResult[];
   groups: GroupResult[];
+  /**
+   * Lines every rendering opens with, before the verdict: set by the adapters for what the gate
+   * cannot know (the history was not used, this run was not recorded, and why).
+   */
+  notes?: string[];
+  /** Baseline metrics this run lacks (missing-metrics.ts); absent when the history is empty. */
+  missing?: { count: number; of: number };
+  /** Values of this run that were never judged (Run.notFitted), by name. */
+  notJudged?: NotJudged[];
 }

@@ -1,7 +1,7 @@
 import type { Aggregate } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
 import { aggregateSamples } from './aggregate.js';
-import type { ReadResult, Run } from './run.js';
+import type { Measurement, ReadResult, Run } from './run.js';
 import { convertUnit } from './units.js';
 
 interface Samples {
@@ -49,7 +49,10 @@ export function collectRun(results: ReadResult[], aggregateFor: (name: string) =
         },
       );
     }
-    metrics.set(name, unit === undefined ? { value, count: values.length } : { value, unit, count: values.length });
+    const measurement: Measurement = { value, count: values.length };
+    if (unit !== undefined) measurement.unit = unit;
+    if (where !== undefined) measurement.where = where;
+    metrics.set(name, measurement);
   }
   return notFitted.size > 0 ? { metrics, meta, notFitted } : { metrics, meta };
 }

@@ -25,6 +25,8 @@ export interface Measurement {
   value: number;
   unit?: string;
   count: number;
+  /** Where its first sample came from ("file:line"), for messages. */
+  where?: string;
 }
 
 /** One CI run's metrics, name -> measurement. Maps, never plain objects: names are untrusted. */

@@ -73,7 +73,8 @@ function group(g: GroupResult): Json {
 
 /**
  * The JSON report (`--format json`, the action's `report` output) with DESIGN.md's field names in
- * a stable order: schema, verdict, series, family, metrics[], groups[]. Non-finite numbers become
+ * a stable order: schema, verdict, series, family, metrics[], groups[], then when present notes[]
+ * (what the history could not give), missing (baseline metrics absent) and notJudged[]. Non-finite numbers become
  * null; 2-space indent; ends with a newline. Names are values, never keys, so an untrusted name
  * such as `__proto__` cannot reach an object's prototype.
  * @example JSON.parse(renderJson(report)).schema // 'bellgate.report/1'
@@ -86,6 +87,11 @@ export function renderJson(report: Report): string {
     family: report.family,
     metrics: report.metrics.map(metric),
     groups: report.groups.map(group),
+    ...extras([
+      ['notes', report.notes],
+      ['missing', report.missing === undefined ? undefined : { count: report.missing.count, of: report.missing.of }],
+      ['notJudged', report.notJudged?.map((n) => ({ name: n.name, reason: n.reason }))],
+    ]),
   };
   return JSON.stringify(doc, null, 2) + '\n';
 }

@@ -4,6 +4,7 @@ import { cleanText } from './clean.js';
 import { metricCells } from './cells.js';
 import { OK_ROWS_LISTED } from './ok-rows.js';
 import { formatSigma } from './format.js';
+import { reportNotes } from './notes.js';
 import { STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
 
 type Colors = ReturnType<typeof pc.createColors>;
@@ -58,6 +59,7 @@ function groupLine(g: GroupResult): string {
 export function renderText(report: Report, options: { color: boolean; all?: boolean }): string {
   const c = pc.createColors(options.color);
   const lines: string[] = [];
+  for (const note of reportNotes(report, (t) => cleanText(t, 2000))) lines.push(c.yellow(`note: ${note}`));
   const verdictWord =
     report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
   lines.push(`Bellgate — series "${clean(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);

@@ -7,6 +7,7 @@ import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from
 import { artifactName } from '../../src/history/artifact-store.js';
 import { parseHistory } from '../../src/history/document.js';
 import { runAction } from '../../src/github/run-action.js';
+import { commentMarker, markerLine } from '../../src/report/marker.js';
 import { startRestStandin, type RestStandin } from '../e2e/standins/rest-api.js';
 import { baselineHistory, collectingSink, deps, workspace, zipHistory, type Workspace } from './action-harness.js';
 
@@ -117,7 +118,8 @@ describe('runAction', () => {
     expect(got.summary).toHaveLength(1);
     const comments = rest.state.comments.get(7) ?? [];
     expect(comments).toHaveLength(1);
-    expect(comments[0]?.body).toBe(got.summary[0]);
+    // The comment is the summary behind its hidden marker line.
+    expect(comments[0]?.body).toBe(`${markerLine(commentMarker(SERIES))}\n${got.summary[0]}`);
     const errors = got.lines.filter((l) => l.kind === 'error');
     expect(errors).toHaveLength(1);
     expect(errors[0]?.props?.title).toMatch(/route\/match-static regressed/);
@@ -172,7 +174,10 @@ describe('runAction', () => {
     expect(got.outputs.get('verdict')).toBe('learning');
     expect(result.recorded).toBe(false);
     expect(uploads).toEqual([]);
-    expect(got.lines.some((l) => l.kind === 'warning' && /could not be fetched/.test(l.message))).toBe(true);
+    expect(got.lines.some((l) => l.kind === 'warning' && /cannot list the history artifacts/.test(l.message))).toBe(
+      true,
+    );
+    expect(got.summary[0]?.split('\n')[0]).toMatch(/^> \*\*Note:\*\* Bellgate: the history was not used: /);
   });
 
   it('history-failure: fail turns an unreachable history into a failed step', async () => {

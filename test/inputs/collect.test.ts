@@ -40,7 +40,7 @@ describe('collectRun', () => {
       ],
       () => 'mean',
     );
-    expect(run.metrics.get('t')).toEqual({ value: 1.75, unit: 's', count: 2 });
+    expect(run.metrics.get('t')).toMatchObject({ value: 1.75, unit: 's', count: 2 });
   });
 
   it('refuses incompatible units, naming both sources', () => {
