@@ -33,6 +33,7 @@ export interface ApiCheck {
 }
 
 const require = createRequire(import.meta.url);
+const GENERIC_ERRORS = new Set([401, 403, 429, 500, 502, 503]);
 const DOC = 'https://api.github.com/openapi.json';
 let shared: ApiCheck | undefined;
 
@@ -165,6 +166,10 @@ function build(doc: Json): ApiCheck {
       const where = `${operation.method} ${operation.template} answered ${status}`;
       const responses = operation.spec.responses as Json;
       const raw = responses[String(status)] as Json | undefined;
+      // Any operation may be refused for a token's permissions or rate limit, or fail on the
+      // server (GitHub's REST docs, "Troubleshooting the REST API"), with a basic-error body.
+      if (raw === undefined && GENERIC_ERRORS.has(status))
+        return check('/components/schemas/basic-error', body, `${where}: body`);
       if (raw === undefined) return [`${where}, which the description does not document`];
       const response = resolve(raw);
       const content = (response.content as Json | undefined)?.['application/json'] as Json | undefined;
