@@ -13,7 +13,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
 import { BUNDLE, runStep, type StepResult } from './action-runner.js';
-import { startGitDataStandin, type GitDataStandin } from './standins/git-data.js';
+import { startGitDataStandin, takeGitViolations, type GitDataStandin } from './standins/git-data.js';
 import { startRestStandin, takeViolations, type RestStandin } from './standins/rest-api.js';
 import { examplePayload } from './webhook-payloads.js';
 
@@ -45,6 +45,7 @@ afterAll(async () => {
 afterEach(() => {
   // Every request the bundle made, and every answer it got, fits GitHub's REST description.
   expect(takeViolations(rest.state)).toEqual([]);
+  expect(takeGitViolations(git.state)).toEqual([]);
 });
 
 interface Metric {
