@@ -5,6 +5,7 @@ import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { renderText } from '../report/text.js';
 import { InputError } from '../errors/input-error.js';
+import { withExactPlace } from '../inputs/exact-place.js';
 import { alignRunUnits } from '../inputs/units.js';
 import type { CommandContext } from './context.js';
 import { EXIT } from './exit-codes.js';
@@ -54,7 +55,7 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   const read = await loadRun(ctx, config, options);
   const { history, store } = await opening;
   // Values in the units the history stores (0.121 s against ms becomes 121 ms), or a refusal.
-  const run = alignRunUnits(read, (name) => history.columns.get(name)?.unit);
+  const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), ctx.io.cwd);
   if (options.history !== undefined && history.runs.length === 0) {
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);

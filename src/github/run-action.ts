@@ -26,6 +26,7 @@ import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
+import { withExactPlace } from '../inputs/exact-place.js';
 import { alignRunUnits } from '../inputs/units.js';
 import { InputError } from '../errors/input-error.js';
 import { renderJson } from '../report/json.js';
@@ -147,7 +148,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const loaded = await loadHistory(store, series, setting, sink);
   const { history } = loaded;
   // Values in the units the history stores them in, or a refusal naming file, line and units.
-  const run = alignRunUnits(read, (name) => history.columns.get(name)?.unit);
+  const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), deps.cwd);
   await prepareGate(config);
   let report = runGate({ config, history, run, series, accepted: false });
   if (report.verdict === 'regressed') {
