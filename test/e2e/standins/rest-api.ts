@@ -77,6 +77,11 @@ export interface RestState {
   labels: Map<number, string[]>;
   /** Requests and answers that do not match GitHub's REST description (should stay empty). */
   violations: string[];
+  /**
+   * The permissions each token was given (a job's `permissions:`); a token listed here is refused
+   * (403) what they do not grant, as GITHUB_TOKEN is. Tokens not listed may do anything.
+   */
+  tokenPermissions: Map<string, Record<string, string>>;
   faults: Fault[];
   calls: { method: string; path: string; auth?: string }[];
   /** Status answered to comment writes (e.g. 403 for a fork PR's read-only token). */
@@ -127,6 +132,25 @@ function artifactJson(a: StoredArtifact, base: string, owner: string, repo: stri
   };
 }
 
+/**
+ * What GITHUB_TOKEN needs for the calls the action makes, any one of the pairs (GitHub docs,
+ * "Permissions required for GitHub Apps": artifacts under `actions`, issue labels and comments
+ * under `issues` or, for pull requests, `pull_requests`).
+ */
+function neededPermission(method: string, template: string): [string, 'read' | 'write'][] | undefined {
+  const level = method === 'GET' ? 'read' : 'write';
+  if (template.startsWith('/repos/{owner}/{repo}/actions/artifacts')) return [['actions', level]];
+  if (template.startsWith('/repos/{owner}/{repo}/issues/'))
+    return [
+      ['issues', level],
+      ['pull-requests', level],
+    ];
+  return undefined;
+}
+
+const allows = (granted: string | undefined, level: 'read' | 'write'): boolean =>
+  granted === 'write' || (granted === 'read' && level === 'read');
+
 /** Starts the stand-in on an ephemeral loopback port. */
 function commentJson(c: StoredComment, base: string, owner: string, repo: string, issue: number): unknown {
   return {
@@ -163,6 +187,7 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
     comments: new Map(),
     labels: new Map(),
     violations: [],
+    tokenPermissions: new Map(),
     faults: [],
     calls: [],
     nextId: 1000,
@@ -206,6 +231,17 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
       state.violations.push(...api.response(operation, status, body));
       sendRaw(r, status, body, headers);
     };
+    const granted = state.tokenPermissions.get((req.headers.authorization ?? '').replace(/^(token|bearer) /i, ''));
+    const needed = neededPermission(method, operation.template);
+    if (
+      granted !== undefined &&
+      needed !== undefined &&
+      !needed.some(([scope, level]) => allows(granted[scope], level))
+    )
+      return send(res, 403, {
+        message: 'Resource not accessible by integration',
+        documentation_url: 'https://docs.github.com/rest',
+      });
     const m = OWNER_REPO.exec(url.pathname);
     if (!m) return send(res, 404, { message: 'Not Found' });
     const [, owner = '', repo = '', rest = ''] = m;
