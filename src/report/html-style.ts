@@ -34,7 +34,7 @@ svg .bin { fill: var(--band); stroke: var(--mean); stroke-width: .5; } svg .curv
 svg .cutoff { stroke: var(--warn); stroke-dasharray: 4 3; stroke-width: 1.5; } svg .now { stroke: var(--fg); stroke-dasharray: 2 2; }
 svg .run-mark { fill: var(--fg); stroke: var(--bg); stroke-width: 1; }
 svg .run-mark.s-regressed { fill: var(--bad); } svg .run-mark.s-improved { fill: var(--good); }
-svg .note { font-size: 11px; }
+svg .note { font-size: 11px; paint-order: stroke; stroke: var(--bg); stroke-width: 3px; }
 .legend { color: var(--muted); font-size: 12px; margin: .25rem 0 0; }
 footer { color: var(--muted); font-size: 12px; margin-top: 2rem; }
 @media print {
