@@ -123,7 +123,6 @@ async function runJob(
   run.steps = [];
   for (const [i, raw] of (spec.steps as Json[]).entries()) {
     const step = raw as Json;
-    const name = String(step.id ?? step.name ?? `step ${i + 1}`);
     const wanted = step.if === undefined ? !failed : truthy(evaluate(condition(step.if), context(), failed));
     if (!wanted) continue;
     const uses = typeof step.uses === 'string' ? step.uses : undefined;

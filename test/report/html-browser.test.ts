@@ -112,9 +112,18 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
 
   it('keeps each axis name off its tick labels and the "this run" note off the cutoff lines', async () => {
     // Measured by the browser's own layout (getBoundingClientRect of each drawn element).
-    const found = await page.$$eval('svg.chart', (svgs) => {
+    const found = await page.$$eval('svg.chart', (charts) => {
+      // The few DOM members used, typed here (the project's TypeScript has no DOM library).
       type Box = { left: number; right: number; top: number; bottom: number };
-      const box = (el: Element): Box => el.getBoundingClientRect();
+      interface El {
+        getBoundingClientRect(): Box;
+        querySelector(selector: string): El | null;
+        querySelectorAll(selector: string): ArrayLike<El>;
+        getAttribute(name: string): string | null;
+        textContent: string | null;
+      }
+      const svgs = charts as unknown as El[];
+      const box = (el: El): Box => el.getBoundingClientRect();
       const meets = (a: Box, b: Box) =>
         a.left <= b.right && b.left <= a.right && a.top <= b.bottom && b.top <= a.bottom;
       const clashes: string[] = [];
