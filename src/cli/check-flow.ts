@@ -1,9 +1,12 @@
 import { runGate } from '../gate/gate.js';
+import { mostlyMissing } from '../gate/missing-metrics.js';
 import type { Report } from '../gate/report.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { renderText } from '../report/text.js';
 import { InputError } from '../errors/input-error.js';
+import { withExactPlace } from '../inputs/exact-place.js';
+import { alignRunUnits } from '../inputs/units.js';
 import type { CommandContext } from './context.js';
 import { EXIT } from './exit-codes.js';
 import { loadConfig } from './load-config.js';
@@ -28,7 +31,11 @@ export interface CheckOptions extends MetricFileOptions, RunInfoOptions {
   record?: boolean;
   /** List every ok metric in the text report (by default more than OK_ROWS_LISTED are counted). */
   all?: boolean;
+  /** A run lacking more than half of its baseline metrics: `warn` (default) or `fail` (exit 2). */
+  missingMetrics?: MissingMetricsPolicy;
 }
+
+export type MissingMetricsPolicy = 'warn' | 'fail';
 
 /**
  * read -> load -> (gate: select, fit, score, decide) -> render -> record. Prints the report in the
@@ -45,8 +52,10 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   }
   const opening = openEarly(ctx, options.history, options.series);
   const config = await loadConfig(ctx, options.config);
-  const run = await loadRun(ctx, config, options);
+  const read = await loadRun(ctx, config, options);
   const { history, store } = await opening;
+  // Values in the units the history stores (0.121 s against ms becomes 121 ms), or a refusal.
+  const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), ctx.io.cwd);
   if (options.history !== undefined && history.runs.length === 0) {
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
@@ -54,6 +63,15 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   const report = runGate({ config, history, run, series: options.series });
 
   ctx.io.stdout(ensureNewline(render(ctx, report, options.format, options.all)));
+  if (mostlyMissing(report.missing)) {
+    const { count, of } = report.missing!;
+    ctx.io.stderr(
+      `bellgate: ${options.missingMetrics === 'fail' ? 'error' : 'warning'}: ${count} of ${of} baseline metrics are missing from this run` +
+        (options.missingMetrics === 'fail'
+          ? ' (--missing-metrics fail)\n'
+          : '; --missing-metrics fail makes this exit 2\n'),
+    );
+  }
   if (options.out !== undefined) {
     const written = await writeReports(resolvePath(ctx, options.out), report);
     ctx.io.stderr(`bellgate: wrote ${written.join(', ')}\n`);
@@ -66,8 +84,13 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   return report;
 }
 
-/** The exit code a verdict stands for: `regressed` fails, and `unsettled` with `unsettled: block` (report.blocks); the rest do not. */
-export function verdictExitCode(report: Report): number {
+/**
+ * The exit code a verdict stands for: `regressed` fails, and `unsettled` with `unsettled: block`
+ * (report.blocks); with `--missing-metrics fail`, a run lacking most of its baseline metrics is bad
+ * input (2).
+ */
+export function verdictExitCode(report: Report, missing: MissingMetricsPolicy = 'warn'): number {
+  if (missing === 'fail' && mostlyMissing(report.missing)) return EXIT.input;
   return report.blocks ? EXIT.regressed : EXIT.ok;
 }
 

@@ -3,6 +3,8 @@ import type { Report } from '../gate/report.js';
 import type { Config } from '../config/types.js';
 import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
+import { withExactPlace } from '../inputs/exact-place.js';
+import { alignRunUnits } from '../inputs/units.js';
 import type { CommandContext } from './context.js';
 import { loadConfig } from './load-config.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
@@ -27,9 +29,21 @@ export async function judgeRequestedRun(
 ): Promise<{ config: Config; history: History; run: Run; report: Report }> {
   const config = await loadConfig(ctx, options.config);
   const opened = await openHistory(ctx, options.history, options.series);
+  const metrics = options.metrics;
   const { history, run } =
-    options.metrics === undefined
+    metrics === undefined
       ? splitNewest(opened.history, options.history)
-      : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
+      : {
+          history: opened.history,
+          // In the units the history stores, or a refusal naming the file's line and both units.
+          run: await withExactPlace(
+            async () =>
+              alignRunUnits(
+                await loadRun(ctx, config, { ...options, metrics }),
+                (name) => opened.history.columns.get(name)?.unit,
+              ),
+            ctx.io.cwd,
+          ),
+        };
   return { config, history, run, report: runGate({ config, history, run, series: options.series }) };
 }

@@ -29,8 +29,8 @@ export async function loadRun(ctx: CommandContext, config: Config, options: Metr
 }
 
 /**
- * `--prefix PATTERN=PREFIX` pairs into the map readMetricFiles takes: the metrics read from files
- * matched by PATTERN get `PREFIX/` in front of their names. Split at the last '=' (globs rarely
+ * `--prefix PATTERN=PREFIX` pairs into the map readMetricFiles takes: the metrics read from each
+ * file found whose own path PATTERN matches get `PREFIX/` in front of their names. Split at the last '=' (globs rarely
  * hold one; prefixes never should).
  * @example parsePrefixes(['bench/*.json=api']) // Map { 'bench/*.json' => 'api' }
  * @throws InputError when a value has no '=' or an empty side.

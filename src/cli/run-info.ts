@@ -26,10 +26,19 @@ export function runInfoFrom(ctx: CommandContext, options: RunInfoOptions): RunIn
   if (options.time !== undefined) {
     const ms = Date.parse(options.time);
     if (!ISO_TIME.test(options.time) || !Number.isFinite(ms)) {
-      throw new InputError(`--time "${options.time}" is not an ISO-8601 date-time`, {
-        where: '--time',
-        fix: 'write it like 2026-05-04T10:20:30Z (a zone, Z or +hh:mm, is required)',
-      });
+      // A time without a zone means another instant on every machine: refused, never guessed.
+      const zoneless = ISO_TIME.test(`${options.time}Z`) && Number.isFinite(Date.parse(`${options.time}Z`));
+      throw new InputError(
+        zoneless
+          ? `--time "${options.time}" has no time zone, so it names a different instant on every machine`
+          : `--time "${options.time}" is not an ISO-8601 date-time`,
+        {
+          where: '--time',
+          fix: zoneless
+            ? `add the zone it was measured in: "${options.time}Z" for UTC, or e.g. "${options.time}+02:00"`
+            : 'write it like 2026-05-04T10:20:30Z (a zone, Z or +hh:mm, is required)',
+        },
+      );
     }
     time = new Date(ms).toISOString();
   } else {

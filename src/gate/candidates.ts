@@ -4,7 +4,7 @@ import { InputError } from '../errors/input-error.js';
 import type { History } from '../history/history.js';
 import type { Measurement, Run } from '../inputs/run.js';
 import { unitScale } from '../inputs/units.js';
-import type { MetricResult } from './report.js';
+import type { MetricResult, Note } from './report.js';
 import { levelMark, type LevelStart } from './level-marks.js';
 
 /** A metric this run can judge: its settings, scale and whole column on that scale. */
@@ -64,7 +64,10 @@ export function sortMetrics(
     }
     const held = column === undefined ? 0 : column.values.filter((v) => Number.isFinite(v)).length;
     if (measurement === undefined) {
-      finished.push({ ...plain, status: 'missing', note: { kind: 'missing', runs: held } });
+      const notJudged = run.notFitted?.get(name);
+      const note: Note =
+        notJudged === undefined ? { kind: 'missing', runs: held } : { kind: 'missing', runs: held, notJudged };
+      finished.push({ ...plain, status: 'missing', note });
       continue;
     }
     if (!Number.isFinite(measurement.value)) {

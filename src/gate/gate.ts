@@ -9,6 +9,7 @@ import { noiseModel } from './noise.js';
 import { isLearning, scoreMember, type Scored } from './judge.js';
 import { REPORT_SCHEMA, type MetricResult, type Report, type SharedMoveResult } from './report.js';
 import { judgeSharedMove } from './shared-verdict.js';
+import { missingMetrics } from './missing-metrics.js';
 import { decideVerdict, orderMetrics } from './verdict.js';
 
 export interface GateInput {
@@ -73,7 +74,7 @@ export function runGate(input: GateInput): Report {
     for (const s of scored) metrics.push(decide(s, undefined));
   }
   const verdict = decideVerdict(metrics, shared, input.accepted === true);
-  return {
+  const report: Report = {
     schema: REPORT_SCHEMA,
     verdict,
     blocks: verdict === 'regressed' || (verdict === 'unsettled' && config.unsettled === 'block'),
@@ -85,6 +86,13 @@ export function runGate(input: GateInput): Report {
     metrics: orderMetrics(metrics),
     shared: shared.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
   };
+  const missing = missingMetrics(config, history, run);
+  if (missing.of > 0) report.missing = missing;
+  if (run.notFitted !== undefined && run.notFitted.size > 0)
+    report.notJudged = [...run.notFitted]
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+      .map(([name, reason]) => ({ name, reason }));
+  return report;
 }
 
 /** Benjamini-Hochberg's level of each tail at its rank i (ascending, from 1): i alpha / m. */

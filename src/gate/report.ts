@@ -52,7 +52,7 @@ export interface NoiseNote {
 /** Why a result has the status it has, where the numbers alone do not say. */
 export type Note =
   | { kind: 'ignored' }
-  | { kind: 'missing'; runs: number }
+  | { kind: 'missing'; runs: number; notJudged?: string }
   | { kind: 'new' }
   | { kind: 'learning'; runs: number; minRuns: number; levelRuns?: number }
   | { kind: 'no-reference'; reference: string; value?: number }
@@ -114,6 +114,12 @@ export interface SharedMoveResult {
   largest?: number;
 }
 
+/** A metric value this run holds but never judged nor records (a NaN sample, a failed test). */
+export interface NotJudged {
+  name: string;
+  reason: string;
+}
+
 export interface Report {
   schema: typeof REPORT_SCHEMA;
   verdict: Verdict;
@@ -128,4 +134,13 @@ export interface Report {
   runner?: string;
   metrics: MetricResult[];
   shared: SharedMoveResult[];
+  /**
+   * Lines every rendering opens with, before the verdict: set by the adapters for what the gate
+   * cannot know (the history was not used, this run was not recorded, and why).
+   */
+  notes?: string[];
+  /** Baseline metrics this run lacks (missing-metrics.ts); absent when the history is empty. */
+  missing?: { count: number; of: number };
+  /** Values of this run that were never judged (Run.notFitted), by name. */
+  notJudged?: NotJudged[];
 }

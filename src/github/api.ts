@@ -1,6 +1,6 @@
 /**
  * The GitHub REST calls the action makes, as one small interface: the artifact store's listing and
- * download, and the issue comments of a pull request. The real implementation is octokit-api.ts;
+ * download, the labels and issue comments of a pull request. The real implementation is octokit-api.ts;
  * tests point it at a loopback server.
  */
 import type { ArtifactApi } from '../history/artifact-store.js';
@@ -14,6 +14,8 @@ export interface IssueComment {
 }
 
 export interface GitHubApi extends ArtifactApi {
+  /** The names of the labels a pull request (an issue) carries now (paginated, bounded). */
+  listIssueLabels(issue: number): Promise<string[]>;
   /** Every comment of the issue or pull request, oldest first (paginated, bounded). */
   listIssueComments(issue: number): Promise<IssueComment[]>;
   createIssueComment(issue: number, body: string): Promise<IssueComment>;

@@ -23,6 +23,8 @@ export interface RunContext {
   defaultBranch?: string;
   /** Set for pull_request and pull_request_target events. */
   pullRequest?: { number: number; labels: string[]; fromFork: boolean };
+  /** A merge_group run: the pull request it tests, read from its queue branch, when it names one. */
+  queuedPullRequest?: number;
   apiUrl: string;
   serverUrl: string;
   runnerTemp: string;
@@ -90,6 +92,8 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
     pullRequest = { number: pr.number, labels, fromFork };
   }
   const runnerTemp = env.RUNNER_TEMP || env.TMPDIR || '/tmp';
+  const queuedPullRequest =
+    eventName === 'merge_group' ? queuedNumber(record(payload.merge_group)?.head_ref) : undefined;
   return {
     eventName,
     owner,
@@ -107,6 +111,7 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
         ? repository.default_branch
         : scheduledBranch(eventName, env.GITHUB_REF),
     pullRequest,
+    ...(queuedPullRequest === undefined ? {} : { queuedPullRequest }),
     apiUrl: env.GITHUB_API_URL || 'https://api.github.com',
     serverUrl: env.GITHUB_SERVER_URL || 'https://github.com',
     runnerTemp,
@@ -117,4 +122,15 @@ export async function readRunContext(env: Env, readText: (path: string) => Promi
 /** Scheduled runs always run on the default branch, so their ref names it when the payload does not. */
 function scheduledBranch(eventName: string, ref: string | undefined): string | undefined {
   return eventName === 'schedule' && ref?.startsWith('refs/heads/') ? ref.slice('refs/heads/'.length) : undefined;
+}
+
+/**
+ * The pull request a merge queue branch tests: GitHub names it
+ * `refs/heads/gh-readonly-queue/<base>/pr-<number>-<head sha>` (docs: "Managing a merge queue").
+ */
+function queuedNumber(headRef: unknown): number | undefined {
+  if (typeof headRef !== 'string') return undefined;
+  const m = /\/pr-(\d{1,15})-[0-9a-f]{7,64}$/.exec(headRef);
+  const n = m ? Number(m[1]) : NaN;
+  return Number.isSafeInteger(n) && n > 0 ? n : undefined;
 }

@@ -1,49 +1,39 @@
 /**
- * The two store steps of a run, with the action's failure policy: a StoreError on load or save is
- * reported (warning, or error when `history-failure: fail`) and the run goes on; anything else is
- * a bug or bad input and propagates. Load failures give an empty history marked unreadable, so
- * the caller records nothing over a history it could not read.
+ * The two store steps of a run. A StoreError on load or save becomes a StoreProblem (a
+ * configuration fault or an outage, store-fault.ts) for the caller's failure policy; anything else
+ * is a bug or bad input and propagates. A failed load gives an empty history, and the caller
+ * records nothing over a history it could not read.
  */
 import { emptyHistory, type History, type RunInfo } from '../history/history.js';
 import type { HistoryStore } from '../history/store.js';
 import type { Run } from '../inputs/run.js';
 import type { RunContext } from './context.js';
-import { describeError } from './describe-error.js';
-import type { ActionInputs } from './inputs.js';
 import type { ActionSink } from './sink.js';
-
-function isStoreError(error: unknown): boolean {
-  return error instanceof Error && error.name === 'StoreError';
-}
+import { classifyStoreError, isStoreError, type StoreProblem, type StoreSetting } from './store-fault.js';
+import { logText } from './log-text.js';
 
 /**
- * @example (await loadHistory(store, 'ci', inputs, sink)).readable // false when the store failed
+ * @example (await loadHistory(store, 'ci', setting, sink)).problem // undefined when the store answered
  */
 export async function loadHistory(
   store: HistoryStore,
   series: string,
-  inputs: ActionInputs,
+  setting: Omit<StoreSetting, 'step'>,
   sink: ActionSink,
-): Promise<{ history: History; readable: boolean }> {
+): Promise<{ history: History; problem?: StoreProblem }> {
   try {
     const history = await store.load();
-    sink.info(`bellgate: read ${history.runs.length} baseline runs from ${store.describe()}`);
-    return { history, readable: true };
+    sink.info(`bellgate: read ${history.runs.length} baseline runs from ${logText(store.describe())}`);
+    return { history };
   } catch (error) {
     if (!isStoreError(error)) throw error;
-    const message = `bellgate: the history could not be fetched from ${store.describe()}: ${describeError(error)}`;
-    if (inputs.historyFailure === 'fail') sink.error(message);
-    else
-      sink.warning(
-        `${message}\nGoing on without history (every metric is new); set \`history-failure: fail\` to fail instead.`,
-      );
-    return { history: emptyHistory(series), readable: false };
+    return { history: emptyHistory(series), problem: classifyStoreError(error, { ...setting, step: 'load' }) };
   }
 }
 
 /**
- * Appends the run, trims to `keep` newest runs and saves. Returns whether it was saved.
- * @example await recordRun(store, history, info, run, 500, inputs, sink) // true
+ * Appends the run, trims to `keep` newest runs and saves.
+ * @example (await recordRun(store, history, info, run, 500, setting, sink)).problem // undefined when saved
  */
 export async function recordRun(
   store: HistoryStore,
@@ -51,22 +41,19 @@ export async function recordRun(
   info: RunInfo,
   run: Run,
   keep: number,
-  inputs: ActionInputs,
+  setting: Omit<StoreSetting, 'step'>,
   sink: ActionSink,
-): Promise<boolean> {
+): Promise<{ problem?: StoreProblem }> {
   try {
     // Loaded here: a check that records nothing (every pull request) never needs the merge code.
     const { appendRun, trimHistory } = await import('../history/merge.js');
     const next = trimHistory(appendRun(history, info, run), keep);
     await store.save(next, history.runs.length);
-    sink.info(`bellgate: recorded run ${info.id} in ${store.describe()} (${next.runs.length} runs)`);
-    return true;
+    sink.info(`bellgate: recorded run ${logText(info.id)} in ${logText(store.describe())} (${next.runs.length} runs)`);
+    return {};
   } catch (error) {
     if (!isStoreError(error)) throw error;
-    const message = `bellgate: could not record run ${info.id} in ${store.describe()}: ${describeError(error)}`;
-    if (inputs.historyFailure === 'fail') sink.error(message);
-    else sink.warning(message);
-    return false;
+    return { problem: classifyStoreError(error, { ...setting, step: 'save' }) };
   }
 }
 

@@ -20,6 +20,7 @@ export const INPUT = {
   retentionDays: 'retention-days',
   inputFormat: 'input-format',
   historyFailure: 'history-failure',
+  missingMetrics: 'missing-metrics',
   htmlReport: 'html-report',
 } as const;
 
@@ -50,16 +51,13 @@ export interface ActionInputs {
   inputFormat?: string;
   /** What an unreachable history does: `warn` goes on as learning, `fail` fails the step. */
   historyFailure: 'warn' | 'fail';
+  /** A run lacking more than half of its baseline metrics: `warn` (annotation) or `fail` (the step). */
+  missingMetrics: 'warn' | 'fail';
   htmlReport: boolean;
 }
 
-/**
- * The runner passes input `retention-days` as INPUT_RETENTION-DAYS: upper-cased, spaces to
- * underscores, hyphens kept (the same rule @actions/core's getInput applies).
- */
-export function inputVariable(name: string): string {
-  return `INPUT_${name.replace(/ /g, '_').toUpperCase()}`;
-}
+/** Reads one input by its action.yml name, trimmed: @actions/core's getInput in the action. */
+export type InputReader = (name: string) => string;
 
 function choice<T extends string>(name: string, raw: string, allowed: readonly T[], fallback: T): T {
   if (raw === '') return fallback;
@@ -83,12 +81,13 @@ function flag(name: string, raw: string, fallback: boolean): boolean {
 }
 
 /**
- * Reads and validates every input from the environment the runner prepared.
+ * Reads and validates every input through `read` (the runner's INPUT_* variables, by
+ * @actions/core's getInput).
  * @throws InputError naming the input and how to fix it.
- * @example readActionInputs({ 'INPUT_METRICS': 'out/bench.json' }).store // 'artifact'
+ * @example readActionInputs((name) => core.getInput(name)).store // 'artifact'
  */
-export function readActionInputs(env: Record<string, string | undefined>): ActionInputs {
-  const get = (name: string): string => (env[inputVariable(name)] ?? '').trim();
+export function readActionInputs(read: InputReader): ActionInputs {
+  const get = (name: string): string => read(name).trim();
   const metrics = get(INPUT.metrics)
     .split(/\r?\n/)
     .map((l) => l.trim())
@@ -135,6 +134,7 @@ export function readActionInputs(env: Record<string, string | undefined>): Actio
     retentionDays,
     inputFormat: inputFormat === '' ? undefined : inputFormat,
     historyFailure: choice(INPUT.historyFailure, get(INPUT.historyFailure), ['warn', 'fail'] as const, 'warn'),
+    missingMetrics: choice(INPUT.missingMetrics, get(INPUT.missingMetrics), ['warn', 'fail'] as const, 'warn'),
     htmlReport: flag(INPUT.htmlReport, get(INPUT.htmlReport), false),
   };
 }

@@ -159,6 +159,13 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
       }
       throw new Error(`download of artifact #${id} answered ${res.status} without a location`);
     },
+    listIssueLabels: (issue) =>
+      pages(
+        'GET /repos/{owner}/{repo}/issues/{issue_number}/labels',
+        { issue_number: issue },
+        (d) => (Array.isArray(d) ? d : []),
+        (raw) => String(obj(raw).name ?? ''),
+      ),
     listIssueComments: (issue) =>
       pages(
         'GET /repos/{owner}/{repo}/issues/{issue_number}/comments',

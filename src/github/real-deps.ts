@@ -1,5 +1,5 @@
 /**
- * The real collaborators of runAction: the runner's environment, the workflow-command sink, the
+ * The real collaborators of runAction: the runner's environment and inputs (@actions/core), the
  * file system, the clock, and the lazily loaded GitHub client and artifact uploader.
  */
 import { mkdirSync, writeFileSync } from 'node:fs';
@@ -7,7 +7,8 @@ import { readFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { createArtifactUploader } from '../history/artifact-upload.js';
 import type { ActionDeps } from './run-action.js';
-import { createRunnerSink } from './runner-sink.js';
+import * as core from '@actions/core';
+import { createCoreSink } from './core-sink.js';
 
 /**
  * @example await runAction(createRealDeps(process.env))
@@ -16,7 +17,8 @@ export function createRealDeps(env: Record<string, string | undefined> = process
   return {
     env,
     cwd: env.GITHUB_WORKSPACE || process.cwd(),
-    sink: createRunnerSink(),
+    sink: createCoreSink(),
+    getInput: (name) => core.getInput(name),
     readText: (path) => readFile(path, 'utf8'),
     // Synchronous: the report is written when the run has nothing left to overlap with, and an
     // await there gives the event loop a turn in which V8's queued tasks run (~5 ms measured).

@@ -1,29 +1,39 @@
 /**
  * The action, end to end: inputs -> context -> config -> metric files -> history -> gate ->
- * outputs, summary, annotations, PR comment -> record. Effects go through `deps` only.
+ * record -> outputs, summary, job log, annotations, PR comment. Effects go through `deps` only.
  *
  * Failure policy (what fails the step, what only warns):
  * - FAILS: a bad input or config, unreadable metric files, a missing GITHUB_* variable (message
- *   names the input/file and the fix); a regression when `block: true` and the PR does not carry
- *   the accept label; a history that cannot be fetched or saved when `history-failure: fail`.
- * - WARNS: a history that cannot be fetched (default `history-failure: warn`: the run goes on as
- *   if there were no history, every metric `new`, and nothing is recorded so nothing is buried);
- *   a history that cannot be saved (same input); a corrupt history artifact (skipped, the others
- *   are merged); a PR comment the token may not write (fork PRs: summary only); a job summary
- *   that cannot be written.
- * - NOTICE only: an event that is checked but never recorded (e.g. `release`).
- * Nothing prints a stack trace or the token (it is masked first).
+ *   names the input/file and the fix); a regression when `block: true` and the pull request does
+ *   not carry the accept label (read from the API at run time); a history store configuration
+ *   fault (the history belongs to another series, is not a history, or needs a permission the job
+ *   lacks: `actions: read`, `contents: write`); a store that cannot be reached when
+ *   `history-failure: fail`; a run lacking most of its baseline metrics when `missing-metrics: fail`.
+ * - WARNS: a store that cannot be reached (default `history-failure: warn`: the run goes on as if
+ *   there were no history, every metric `new`, and nothing is recorded so nothing is buried); a
+ *   run lacking most of its baseline metrics (default `missing-metrics: warn`); a corrupt history
+ *   artifact among good ones (skipped); a PR comment the token may not write (a fork's pull request
+ *   cannot be given `pull-requests: write`); labels that cannot be read; a job summary that cannot
+ *   be written.
+ * - NOTICE only: an event that is checked but never recorded (e.g. `release`), an accepted run.
+ * Whenever the history was not used or the run not recorded, the summary, the PR comment and the
+ * job log open with a line that says so and why. Nothing prints a stack trace or the token.
  */
 import { settingsFor } from '../config/rules.js';
 import { runGate } from '../gate/gate.js';
+import { mostlyMissing } from '../gate/missing-metrics.js';
 import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
+import { withExactPlace } from '../inputs/exact-place.js';
+import { alignRunUnits } from '../inputs/units.js';
 import { InputError } from '../errors/input-error.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
 import { commentMarker, markerLine } from '../report/marker.js';
+import { renderText } from '../report/text.js';
+import { acceptLabelSource } from './accept-label.js';
 import { annotate } from './annotations.js';
 import type { GitHubApi, GitHubApiFactory, RetryTuning } from './api.js';
 import { readRunContext } from './context.js';
@@ -32,14 +42,19 @@ import { loadActionConfig } from './load-config.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
 import { loadHistory, recordRun, runInfo } from './history-step.js';
 import { uploadHtml } from './html-report.js';
-import { OUTPUT, readActionInputs } from './inputs.js';
+import { OUTPUT, readActionInputs, type ActionInputs, type InputReader } from './inputs.js';
+import { logText } from './log-text.js';
 import { postComment } from './pr-comment.js';
 import { reportPath } from './report-path.js';
 import type { ActionSink } from './sink.js';
 import { createHistoryStore, type StoreSpec } from './store-factory.js';
+import type { StoreProblem } from './store-fault.js';
 
 export interface ActionDeps {
+  /** The runner's GITHUB_* and RUNNER_* variables. */
   env: Record<string, string | undefined>;
+  /** The step's inputs by their action.yml names (@actions/core's getInput in the action). */
+  getInput: InputReader;
   /** Working directory: the checkout (GITHUB_WORKSPACE); metric globs and config resolve here. */
   cwd: string;
   sink: ActionSink;
@@ -77,23 +92,26 @@ export async function runAction(deps: ActionDeps): Promise<ActionResult> {
 
 async function perform(deps: ActionDeps): Promise<ActionResult> {
   const { sink } = deps;
-  const inputs = readActionInputs(deps.env);
+  const inputs = readActionInputs(deps.getInput);
   if (inputs.token !== '') sink.setSecret(inputs.token);
   const context = await readRunContext(deps.env, deps.readText);
   // A missing file at the default path means default settings; a missing named file is an error.
   const config = await loadActionConfig(inputs.config, deps.cwd);
-  const run = await readMetricFiles(inputs.metrics, {
+  const read = await readMetricFiles(inputs.metrics, {
     ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
     limits: config.limits,
     aggregateFor: (name) => settingsFor(config, name).aggregate,
     cwd: deps.cwd,
   });
   const series = inputs.series ?? `${context.workflow}/${context.job}`;
+  const shownSeries = logText(series);
   const baselineBranch = inputs.baselineBranch ?? context.defaultBranch;
   const decision = decideRecord(inputs.record, context, baselineBranch);
   if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
   else
-    sink.info(`bellgate: series "${series}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`);
+    sink.info(
+      `bellgate: series "${shownSeries}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`,
+    );
 
   let api: GitHubApi | Promise<GitHubApi> | undefined;
   const apiOnce = (): GitHubApi | Promise<GitHubApi> => {
@@ -109,7 +127,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
       owner: context.owner,
       repo: context.repo,
       ...(deps.retry ? { retry: deps.retry } : {}),
-      log: (m) => sink.info(`bellgate: ${m}`),
+      log: (m) => sink.info(`bellgate: ${logText(m)}`),
     });
     return api;
   };
@@ -125,60 +143,143 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     upload: deps.upload,
     warn: (m) => sink.warning(`bellgate: ${m}`),
   });
+  const setting = { store: inputs.store, history: inputs.history };
 
-  const { history, readable } = await loadHistory(store, series, inputs, sink);
-  const accepted = context.pullRequest?.labels.includes(inputs.acceptLabel) ?? false;
-  const report = runGate({ config, history, run, series, accepted });
+  const loaded = await loadHistory(store, series, setting, sink);
+  const { history } = loaded;
+  // Values in the units the history stores them in, or a refusal naming file, line and units.
+  const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), deps.cwd);
+  let report = runGate({ config, history, run, series, accepted: false });
+  if (report.verdict === 'regressed') {
+    // Labels matter only now; the payload's may be stale (a label added after the push, a re-run).
+    const source = await acceptLabelSource(apiOnce, context, inputs.acceptLabel, sink);
+    if (source !== undefined) report = runGate({ config, history, run, series, accepted: true });
+  }
+
+  let recorded = false;
+  let saveProblem: StoreProblem | undefined;
+  if (decision.record && loaded.problem === undefined) {
+    saveProblem = (await recordRun(store, history, runInfo(context, deps.now()), run, config.keep, setting, sink))
+      .problem;
+    recorded = saveProblem === undefined;
+  }
+  const notes = [
+    ...(loaded.problem ? [problemNote('the history was not used', loaded.problem, inputs)] : []),
+    ...(saveProblem ? [problemNote('this run was not recorded', saveProblem, inputs)] : []),
+    ...(loaded.problem && decision.record
+      ? ['this run was not recorded: a history that could not be read is never overwritten']
+      : []),
+  ];
+  if (notes.length > 0) report = { ...report, notes };
+
   const regressed = report.metrics.filter((m) => m.status === 'regressed').length;
   const flagged = report.metrics.some((m) => m.status === 'regressed' || m.status === 'improved');
-
   const runUrl = `${context.serverUrl}/${context.owner}/${context.repo}/actions/runs/${context.runNumericId}`;
   const marker = commentMarker(series);
-  const markdown = renderMarkdown(report, { marker, runUrl });
   const reportAt = reportPath(context.runnerTemp, series);
   await deps.writeText(reportAt, renderJson(report));
   sink.setOutput(OUTPUT.verdict, report.verdict);
   sink.setOutput(OUTPUT.regressed, String(regressed));
   sink.setOutput(OUTPUT.report, reportAt);
   try {
-    await sink.appendSummary(markdown);
+    await sink.appendSummary(renderMarkdown(report, { runUrl }));
   } catch (error) {
     sink.warning(`bellgate: could not write the job summary: ${describeError(error)}`);
   }
-  annotate(report, sink, series);
+  // The verdict table in the job log, opening with the same notes as the summary.
+  sink.info(renderText(report, { color: false }).trimEnd());
+
+  // The step's own annotations come first, so GitHub's per-step limit never hides them.
+  const failures = stepFailures(report, regressed, loaded.problem, saveProblem, inputs, series, context);
+  const used = { error: 0, notice: 0 };
+  if (failures.length > 0) {
+    sink.setFailed(failures.join('\n'));
+    used.error += 1;
+  }
+  for (const problem of [loaded.problem, saveProblem]) {
+    if (problem?.fault === 'outage' && inputs.historyFailure === 'warn')
+      sink.warning(`bellgate: ${problem.reason}\nfix: ${problem.fix}; the run went on without the history store`);
+  }
+  if (mostlyMissing(report.missing) && inputs.missingMetrics === 'warn') {
+    sink.warning(
+      `bellgate: ${report.missing!.count} of ${report.missing!.of} baseline metrics are missing from this run in series "${shownSeries}"; set \`missing-metrics: fail\` to fail the step instead`,
+    );
+  }
+  if (report.verdict === 'regressed' && !inputs.block)
+    sink.warning(`bellgate: ${regressed} metric(s) regressed; not failing because block is false`);
+  if (report.verdict === 'accepted') {
+    sink.notice(
+      `bellgate: ${regressed} regression${regressed === 1 ? '' : 's'} accepted by the label "${logText(inputs.acceptLabel)}"`,
+    );
+    used.notice += 1;
+  }
+  annotate(report, sink, series, used);
   if (inputs.htmlReport) await uploadHtml(deps, context, series, report, history, inputs.retentionDays);
 
   let comment: string | undefined;
   if (PULL_REQUEST_EVENTS.includes(context.eventName) && context.pullRequest) {
-    comment = await postComment(apiOnce, context, inputs, markerLine(marker), markdown, flagged, sink);
+    const markdown = renderMarkdown(report, { marker, runUrl });
+    comment = await postComment(
+      apiOnce,
+      context,
+      inputs,
+      markerLine(marker),
+      markdown,
+      flagged || notes.length > 0,
+      sink,
+    );
   }
+  return { failed: failures.length > 0, report, recorded, ...(comment ? { comment } : {}) };
+}
 
-  let recorded = false;
-  let failed = false;
-  if (decision.record && !readable) {
-    sink.warning('bellgate: not recording this run, because the history could not be read (it is never overwritten)');
-  } else if (decision.record) {
-    recorded = await recordRun(store, history, runInfo(context, deps.now()), run, config.keep, inputs, sink);
-    if (!recorded && inputs.historyFailure === 'fail') failed = true;
-  }
-  if (!readable && inputs.historyFailure === 'fail') failed = true;
+/** The note a report opens with when the store failed: what did not happen, why, and the fix. */
+function problemNote(what: string, problem: StoreProblem, inputs: ActionInputs): string {
+  const policy =
+    problem.fault === 'configuration'
+      ? 'this fails the step'
+      : inputs.historyFailure === 'fail'
+        ? 'the store could not be reached and `history-failure: fail` is set'
+        : 'the store could not be reached; the run went on without it (`history-failure: warn`)';
+  return `Bellgate: ${what}: ${problem.reason} (${policy}). Fix: ${problem.fix}`;
+}
 
+/** Every reason the step fails, most important first; empty when it passes. */
+function stepFailures(
+  report: Report,
+  regressed: number,
+  load: StoreProblem | undefined,
+  save: StoreProblem | undefined,
+  inputs: ActionInputs,
+  series: string,
+  context: { pullRequest?: unknown; queuedPullRequest?: number },
+): string[] {
+  const out: string[] = [];
+  const shown = logText(series);
   if (report.verdict === 'regressed' && inputs.block) {
-    sink.setFailed(
-      `bellgate: ${regressed} metric${regressed === 1 ? '' : 's'} regressed in series "${series}" (see the job summary)` +
-        (context.pullRequest ? `; add the label "${inputs.acceptLabel}" to the pull request to accept` : ''),
+    out.push(
+      `bellgate: ${regressed} metric${regressed === 1 ? '' : 's'} regressed in series "${shown}" (see the job summary)` +
+        (context.pullRequest || context.queuedPullRequest
+          ? `; add the label "${logText(inputs.acceptLabel)}" to the pull request and re-run this job to accept`
+          : ''),
     );
-    failed = true;
-  } else if (report.verdict === 'unsettled' && report.blocks && inputs.block) {
-    sink.setFailed(
-      `bellgate: every timing moved together beyond what the history has shown in series "${series}"; re-run the check, or record a baseline run on the same runner (\`unsettled: block\` is set)`,
-    );
-    failed = true;
-  } else if (report.verdict === 'regressed') {
-    sink.warning(`bellgate: ${regressed} metric(s) regressed; not failing because block is false`);
-  } else if (failed) {
-    sink.setFailed('bellgate: the history store failed and `history-failure: fail` is set');
   }
-  if (report.verdict === 'accepted') sink.notice(`bellgate: regressions accepted by the label "${inputs.acceptLabel}"`);
-  return { failed, report, recorded, ...(comment ? { comment } : {}) };
+  if (report.verdict === 'unsettled' && report.blocks && inputs.block) {
+    out.push(
+      `bellgate: every timing moved together beyond what the history has shown in series "${shown}"; re-run the check, or record a baseline run on the same runner (\`unsettled: block\` is set)`,
+    );
+  }
+  for (const [what, problem] of [
+    ['the history was not used', load],
+    ['this run was not recorded', save],
+  ] as const) {
+    if (problem === undefined) continue;
+    if (problem.fault === 'configuration' || inputs.historyFailure === 'fail')
+      out.push(`bellgate: ${what} in series "${shown}": ${problem.reason}\nfix: ${problem.fix}`);
+  }
+  if (mostlyMissing(report.missing) && inputs.missingMetrics === 'fail') {
+    out.push(
+      `bellgate: ${report.missing!.count} of ${report.missing!.of} baseline metrics are missing from this run in series "${shown}" (\`missing-metrics: fail\`)`,
+    );
+  }
+  return out;
 }

@@ -1,7 +1,7 @@
 /**
  * The one door through which the action talks to the runner: log lines, annotations, outputs, the
- * job summary, masking and the step's failure. The real sink is runner-sink.ts's
- * (the runner's workflow-command protocol); tests collect.
+ * job summary, masking and the step's failure. The real sink is core-sink.ts's (@actions/core);
+ * tests collect.
  */
 export interface AnnotationProps {
   title?: string;

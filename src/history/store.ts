@@ -16,6 +16,15 @@ export interface HistoryStore {
 }
 
 /**
+ * What kind of failure a StoreError is, for callers that must tell a configuration fault (the
+ * action fails the step) from a passing outage (it warns): `other-series` (the stored history
+ * belongs to another series), `not-a-history` (what is stored is not a readable history),
+ * `denied` (the token or the file system refuses access), `unreachable` (the store did not answer
+ * in time or answered with a server error; trying again may work).
+ */
+export type StoreErrorKind = 'other-series' | 'not-a-history' | 'denied' | 'unreachable';
+
+/**
  * A store could not be reached, read or written. The CLI maps it to exit 3 and the action fails
  * the step; the stored history is left as it was. `message` is the reason; `where` describes the
  * store (also as `store`); `fix` says what to do.
@@ -28,11 +37,14 @@ export class StoreError extends Error {
   readonly where?: string;
   /** What to do about it, in one sentence. */
   readonly fix?: string;
+  /** The kind of failure, where the store knows it (StoreErrorKind). */
+  readonly kind?: StoreErrorKind;
 
-  constructor(reason: string, options: { where?: string; fix?: string; cause?: unknown } = {}) {
+  constructor(reason: string, options: { where?: string; fix?: string; kind?: StoreErrorKind; cause?: unknown } = {}) {
     super(reason, options.cause === undefined ? undefined : { cause: options.cause });
     this.where = options.where;
     this.fix = options.fix;
+    this.kind = options.kind;
   }
 
   /** The store's description, for callers that prefer the name. */

@@ -50,8 +50,9 @@ export function collectRun(results: ReadResult[], aggregateFor: (name: string) =
         },
       );
     }
-    const measurement: Measurement =
-      unit === undefined ? { value, count: values.length } : { value, unit, count: values.length };
+    const measurement: Measurement = { value, count: values.length };
+    if (unit !== undefined) measurement.unit = unit;
+    if (where !== undefined) measurement.where = where;
     const spread = sampleSpread(values);
     if (spread !== undefined) measurement.spread = spread;
     metrics.set(name, measurement);

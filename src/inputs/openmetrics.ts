@@ -55,7 +55,7 @@ export function readOpenMetrics(text: string, file: string, limits: InputLimits 
       return;
     }
     if (NON_FINITE.test(sample.value)) {
-      sink.skip(name, `value is ${sample.value}`, where);
+      sink.skip(name, `value is ${sample.value} at ${where}`, where);
       return;
     }
     const value = parseDecimal(sample.value, where, `value of ${truncate(name)}`);

@@ -1,3 +1,4 @@
+import { existsSync } from 'node:fs';
 import { readFile, stat } from 'node:fs/promises';
 import path from 'node:path';
 import type { Aggregate, InputLimits } from '../config/types.js';
@@ -13,7 +14,11 @@ export interface ReadFilesOptions {
   format?: string;
   limits: InputLimits;
   aggregateFor: (name: string) => Aggregate;
-  /** Name prefix per pattern (as written, without "=> prefix"); `pattern => prefix` also works. */
+  /**
+   * Name prefix per file pattern (`--prefix PATTERN=PREFIX`): each metric file found whose path
+   * (relative to cwd, with `/`) the glob PATTERN matches gets PREFIX. `pattern => prefix` in a
+   * metrics line also works, for every file that line finds.
+   */
   prefixes?: Map<string, string>;
   cwd?: string;
 }
@@ -26,8 +31,13 @@ export interface ReadFilesOptions {
  * - Each file's size is checked against `limits.maxFileBytes` before it is read; line length and
  *   the number of metrics are checked while parsing, and the total number of metrics after.
  * - A file matched by two patterns with the same prefix is read once.
+ * - Backslashes are path separators, as a Windows runner writes paths: `out\bench\*.json` is
+ *   `out/bench/*.json` (a literal `*` in a file name is matched by `[*]`).
+ * - A `prefixes` pattern is matched against each file found, not the metrics text: so
+ *   `pkgs/{a,b}/bench.json` with `--prefix pkgs/a/*=pkg-a` prefixes only package a's metrics.
  * @throws InputError for no match, a limit passed (naming `limits.max-file-bytes` etc.), a file
- *   that is not UTF-8 text, or any problem in a file.
+ *   that is not UTF-8 text, a file two `prefixes` patterns with different prefixes match, a
+ *   `prefixes` pattern that matches none of the files, or any problem in a file.
  * @example await readMetricFiles(['bench/*.txt'], { limits: DEFAULT_LIMITS, aggregateFor: () => 'median' })
  */
 export async function readMetricFiles(patterns: string[], options: ReadFilesOptions): Promise<Run> {
@@ -38,11 +48,11 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
   }
   const done = new Set<string>();
   const results: ReadResult[] = [];
+  const prefixFor = await filePrefixes(options.prefixes, cwd);
   for (const text of patterns) {
     const { pattern, prefix: arrowPrefix } = splitPattern(text);
-    const given = options.prefixes?.get(pattern) ?? options.prefixes?.get(text);
-    const prefix = arrowPrefix ?? (given === undefined ? undefined : normalizePrefix(given, `prefix for ${pattern}`));
     for (const file of await expand(pattern, cwd)) {
+      const prefix = arrowPrefix ?? prefixFor.of(file);
       const key = `${prefix ?? ''}\u0000${file}`;
       if (done.has(key)) continue;
       done.add(key);
@@ -51,6 +61,7 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
       results.push(prefix === undefined ? result : withPrefix(result, prefix));
     }
   }
+  prefixFor.checkAllUsed();
   const run = collectRun(results, options.aggregateFor);
   if (run.metrics.size > limits.maxMetrics) {
     throw limitError(
@@ -63,7 +74,70 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
   return run;
 }
 
-async function expand(pattern: string, cwd: string): Promise<string[]> {
+/** A path or glob with Windows separators written as `/`, the only separator globs know. */
+export function slashes(pattern: string): string {
+  return pattern.replace(/\\/g, '/');
+}
+
+/** A file's path relative to cwd with `/` separators, as `prefixes` patterns see it. */
+function relativeWithSlashes(cwd: string, file: string): string {
+  return slashes(path.relative(cwd, file));
+}
+
+/**
+ * The prefix each file gets from `--prefix PATTERN=PREFIX` pairs, by matching every pattern
+ * against the file's own path (picomatch loads only when there are pairs).
+ */
+async function filePrefixes(
+  pairs: Map<string, string> | undefined,
+  cwd: string,
+): Promise<{ of(file: string): string | undefined; checkAllUsed(): void }> {
+  if (pairs === undefined || pairs.size === 0) return { of: () => undefined, checkAllUsed: () => undefined };
+  const { default: picomatch } = await import('picomatch');
+  const rules = [...pairs].map(([pattern, prefix]) => {
+    const glob = slashes(pattern).replace(/^\.\//, '');
+    return {
+      pattern,
+      prefix: normalizePrefix(prefix, `--prefix ${pattern}=${prefix}`),
+      matches: picomatch(glob, { dot: true }),
+      literal: path.resolve(cwd, slashes(pattern)),
+      used: false,
+    };
+  });
+  const seen: string[] = [];
+  return {
+    of(file) {
+      const relative = relativeWithSlashes(cwd, file);
+      seen.push(relative);
+      const hits = rules.filter((r) => r.literal === file || r.matches(relative));
+      for (const r of hits) r.used = true;
+      const distinct = new Set(hits.map((r) => r.prefix));
+      if (distinct.size > 1) {
+        throw new InputError(
+          `${relative} is matched by --prefix patterns with different prefixes: ${hits.map((r) => `${r.pattern}=${r.prefix}`).join(', ')}`,
+          { where: '--prefix', fix: 'make the patterns match different files' },
+        );
+      }
+      return hits[0]?.prefix;
+    },
+    checkAllUsed() {
+      const unused = rules.filter((r) => !r.used);
+      if (unused.length === 0) return;
+      const shown = seen.slice(0, 5).join(', ') + (seen.length > 5 ? ', ...' : '');
+      throw new InputError(
+        `--prefix ${unused.map((r) => JSON.stringify(r.pattern)).join(', ')} matches none of the metric files found (${shown})`,
+        {
+          where: '--prefix',
+          fix: 'write PATTERN as a path or glob of the files themselves, relative to the working directory (e.g. "pkgs/a/*.json=pkg-a")',
+        },
+      );
+    },
+  };
+}
+
+async function expand(given: string, cwd: string): Promise<string[]> {
+  // A file whose name holds a backslash is taken as it is; otherwise a backslash separates.
+  const pattern = existsSync(path.resolve(cwd, given)) ? given : slashes(given);
   const literal = path.resolve(cwd, pattern);
   const info = await stat(literal).catch(() => undefined);
   if (info?.isFile()) return [literal];

@@ -27,6 +27,8 @@ export interface Measurement {
   count: number;
   /** The relative spread of the samples behind the value (see collectRun), when there were 2 or more. */
   spread?: number;
+  /** Where its first sample came from ("file:line"), for messages. */
+  where?: string;
 }
 
 /** One CI run's metrics, name -> measurement. Maps, never plain objects: names are untrusted. */

@@ -1,5 +1,9 @@
+import { InputError } from '../errors/input-error.js';
+import type { Run } from './run.js';
+
 /**
- * The units Bellgate can convert between, each as an exact integer multiple of a base unit
+ * The unit algebra, in one place for every reader, `check` and the history: the units Bellgate
+ * can convert between, each as an exact integer multiple of a base unit
  * (time: nanosecond; size: byte), so conversions multiply or divide by an exact integer and
  * round once (412 ms -> 412 / 1000 s = 0.412 exactly as printed).
  * Time: ns, us, µs (U+00B5), μs (U+03BC), ms, s, sec, min, h and the spelled-out forms
@@ -91,4 +95,49 @@ export function convertUnit(value: number, from: string, to: string): number | u
 
 function rescale(value: number, from: number, to: number): number {
   return from >= to ? value * (from / to) : value / (to / from);
+}
+
+/**
+ * Why a value in unit `from` cannot join a column in unit `to`, or undefined when it can (same
+ * unit, convertible units, or a side without a unit, which gives nothing to check).
+ * @example unitMismatch('s', 'ms') // undefined
+ * @example unitMismatch('kB', 'ms') // 'kB (size) cannot be converted to ms (time)'
+ */
+export function unitMismatch(from: string | undefined, to: string | undefined): string | undefined {
+  if (from === undefined || to === undefined || from === to) return undefined;
+  if (convertUnit(1, from, to) !== undefined) return undefined;
+  const kind = (u: string): string => {
+    const scale = unitScale(u);
+    return scale === undefined ? 'a unit Bellgate does not convert' : scale.map((p) => p.dimension).join(' per ');
+  };
+  return `${from} (${kind(from)}) cannot be converted to ${to} (${kind(to)})`;
+}
+
+/**
+ * This run's values in the units the history stores them in (the unit the history first saw for
+ * each metric): 0.121 s against a history in ms becomes 121 ms. `unitOf(name)` is the stored
+ * unit, undefined for a metric the history lacks or stores without a unit. Pure: the run is not
+ * changed, a new one is returned when anything converts.
+ * @throws InputError naming the file and line, the metric and both units when they do not convert.
+ * @example alignRunUnits(run, (name) => history.columns.get(name)?.unit)
+ */
+export function alignRunUnits(run: Run, unitOf: (name: string) => string | undefined): Run {
+  let metrics: Run['metrics'] | undefined;
+  for (const [name, m] of run.metrics) {
+    const stored = unitOf(name);
+    if (m.unit === undefined || stored === undefined || m.unit === stored) continue;
+    const value = convertUnit(m.value, m.unit, stored);
+    if (value === undefined || !Number.isFinite(value)) {
+      throw new InputError(
+        `metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`,
+        {
+          where: m.where,
+          fix: `write ${JSON.stringify(name)} in ${JSON.stringify(stored)} or a unit that converts to it, or give the metric another name to start a new history`,
+        },
+      );
+    }
+    metrics ??= new Map(run.metrics);
+    metrics.set(name, { ...m, value, unit: stored });
+  }
+  return metrics === undefined ? run : { ...run, metrics };
 }

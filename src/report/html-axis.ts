@@ -42,6 +42,12 @@ export function bottomAxis(scale: AxisScale, y: number, label: string, count = 6
   return `<g class="axis">${rule}${ticks}${name}</g>`;
 }
 
+/**
+ * Width of one tick-label character at the charts' 11px: an upper bound for digits, separators and
+ * the letters of SI prefixes in common sans-serif faces (about 0.6 em).
+ */
+const TICK_CHAR_WIDTH = 6.6;
+
 /** A vertical axis at `x`, ticks to the left, label rotated along it. `label` must be escaped. */
 export function leftAxis(scale: AxisScale, x: number, label: string, count = 5): string {
   const [y0 = 0, y1 = 0] = scale.range();
@@ -56,7 +62,10 @@ export function leftAxis(scale: AxisScale, x: number, label: string, count = 5):
     })
     .join('');
   const rule = svgElement('line', { x1: x, x2: x, y1: y0, y2: y1 });
-  const turn = `translate(${px(x - 52)},${px((y0 + y1) / 2)}) rotate(-90)`;
+  // The rotated label stands left of the widest tick label, never on it (its 12px line is about
+  // 12px wide once turned; half of that, plus a gap, past the labels' left edge).
+  const widest = Math.max(0, ...labels.map((l) => l.length * TICK_CHAR_WIDTH));
+  const turn = `translate(${px(Math.max(8, x - 8 - widest - 9))},${px((y0 + y1) / 2)}) rotate(-90)`;
   const name = textElement({ class: 'axis-label', transform: turn, 'text-anchor': 'middle' }, label);
   return `<g class="axis">${rule}${ticks}${name}</g>`;
 }

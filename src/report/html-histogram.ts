@@ -11,7 +11,8 @@ import { formatDensity, formatValue } from './format.js';
 
 const W = 420;
 const H = 220;
-const M = { top: 14, right: 18, bottom: 42, left: 72 };
+// A taller top margin than the history chart's: the note of a run drawn off the chart sits there.
+const M = { top: 26, right: 18, bottom: 42, left: 72 };
 const CURVE_POINTS = 160;
 const OFF_CHART_SD = 8;
 
@@ -96,7 +97,8 @@ export function baselineHistogram(m: MetricResult, values: readonly number[], cu
     const shown = `${escapeHtml(formatValue(given))} ${unit}`;
     const tip = `this run: ${shown} (${m.status}), beyond ${OFF_CHART_SD} sd: off the chart ${right ? 'to the right' : 'to the left'}`;
     parts.push(statusSymbol(m.status, px(edgeX), px(y(0) - 9), tip));
-    const noteAttrs = { class: 'note', x: edgeX, y: M.top + 10, 'text-anchor': right ? 'end' : 'start' };
+    // Above the plot, where no cutoff or run line reaches (they stop at M.top).
+    const noteAttrs = { class: 'note', x: edgeX, y: M.top - 10, 'text-anchor': right ? 'end' : 'start' };
     parts.push(textElement(noteAttrs, `this run ${right ? '→' : '←'} ${shown}`));
   }
   const axes =

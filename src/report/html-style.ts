@@ -13,6 +13,7 @@ body { font: 14px/1.45 system-ui, -apple-system, "Segoe UI", sans-serif; color: 
 h1 { font-size: 1.5rem; margin: 0 0 .25rem; } h2 { font-size: 1.15rem; margin: 0 0 .25rem; overflow-wrap: anywhere; }
 .meta, .reason, .note-text { color: var(--muted); }
 .verdict { font-size: 1.1rem; margin: .5rem 0 1rem; }
+.report-note { border-left: 4px solid #d29922; padding: .25rem .75rem; margin: .5rem 0; }
 table { border-collapse: collapse; width: 100%; margin-bottom: 1.5rem; }
 th, td { text-align: left; padding: .3rem .5rem; border-bottom: 1px solid var(--line); vertical-align: top; }
 td.num, th.num { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
@@ -33,7 +34,7 @@ svg .bin { fill: var(--band); stroke: var(--mean); stroke-width: .5; } svg .curv
 svg .cutoff { stroke: var(--warn); stroke-dasharray: 4 3; stroke-width: 1.5; } svg .now { stroke: var(--fg); stroke-dasharray: 2 2; }
 svg .run-mark { fill: var(--fg); stroke: var(--bg); stroke-width: 1; }
 svg .run-mark.s-regressed { fill: var(--bad); } svg .run-mark.s-improved { fill: var(--good); }
-svg .note { font-size: 11px; }
+svg .note { font-size: 11px; paint-order: stroke; stroke: var(--bg); stroke-width: 3px; }
 .legend { color: var(--muted); font-size: 12px; margin: .25rem 0 0; }
 footer { color: var(--muted); font-size: 12px; margin-top: 2rem; }
 @media print {

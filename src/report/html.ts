@@ -1,6 +1,7 @@
 import type { MetricResult, Report } from '../gate/report.js';
 import type { History } from '../history/history.js';
 import { metricCells } from './cells.js';
+import { reportNotes } from './notes.js';
 import { escapeHtml } from './escape.js';
 import { familyLine } from './family-line.js';
 import { baselinePoints, chartColumn, columnPoints } from './html-data.js';
@@ -116,6 +117,7 @@ export function renderHtmlReport(input: HtmlReportInput): string {
     `<title>${title}</title><style>${HTML_STYLE}</style></head><body>`,
     `<header><h1>${title}</h1><p class="meta">series ${escapeHtml(report.series, 300)} · ` +
       `${history.runs.length} runs in the history · ${escapeHtml(familyLine(report))}</p>`,
+    ...reportNotes(report, (t) => t).map((note) => `<p class="report-note">${escapeHtml(note, 2000)}</p>`),
     `<p class="verdict"><strong class="s-${verdictClass}">${report.verdict}</strong> — ` +
       `${escapeHtml(VERDICT_HEADLINE[report.verdict])}. ${counts}.</p></header>`,
     '<main><table id="summary"><caption class="meta">All metrics, regressions first. Click a header to sort.</caption>',

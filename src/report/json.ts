@@ -94,7 +94,8 @@ function shared(s: SharedMoveResult): Json {
 /**
  * The JSON report (`--format json`, the action's `report` output) with DESIGN.md's field names in
  * a stable order: schema, verdict, series, blocks, family, budget, unsettled, runner, metrics[],
- * shared[] (each group's shared move). Non-finite numbers become
+ * shared[] (each group's shared move), then when present notes[] (what the history could not give),
+ * missing (baseline metrics absent) and notJudged[]. Non-finite numbers become
  * null; 2-space indent; ends with a newline. Names are values, never keys, so an untrusted name
  * such as `__proto__` cannot reach an object's prototype.
  * @example JSON.parse(renderJson(report)).schema // 'bellgate.report/1'
@@ -111,6 +112,11 @@ export function renderJson(report: Report): string {
     ...extras([['runner', report.runner]]),
     metrics: report.metrics.map((m) => metric(m, report)),
     shared: report.shared.map(shared),
+    ...extras([
+      ['notes', report.notes],
+      ['missing', report.missing === undefined ? undefined : { count: report.missing.count, of: report.missing.of }],
+      ['notJudged', report.notJudged?.map((n) => ({ name: n.name, reason: n.reason }))],
+    ]),
   };
   return JSON.stringify(doc, null, 2) + '\n';
 }

@@ -4,6 +4,7 @@ import { escapeMarkdown } from './escape.js';
 import { familyLine } from './family-line.js';
 import { formatValue } from './format.js';
 import { markerLine } from './marker.js';
+import { reportNotes } from './notes.js';
 import { sparkline } from './sparkline.js';
 import { fullReason, sharedReason } from './reason.js';
 import { GLYPH_LEGEND, STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
@@ -75,6 +76,8 @@ const isWebUrl = (u: string | undefined): u is string => u !== undefined && /^ht
 export function renderMarkdown(report: Report, options: MarkdownOptions = {}): string {
   const out: string[] = [];
   if (options.marker !== undefined) out.push(markerLine(options.marker));
+  // What the reader must know before the verdict (the history was not used, metrics missing).
+  for (const note of reportNotes(report, (t) => t)) out.push(`> **Note:** ${escapeMarkdown(note, 2000)}`, '');
   const counts = statusCounts(report.metrics.map((m) => m.status)) || 'no metrics';
   out.push(`### Bellgate: **${report.verdict}** — ${counts}`);
   out.push(`Verdict ${report.verdict}: ${VERDICT_HEADLINE[report.verdict]} (series ${escapeMarkdown(report.series)}).`);

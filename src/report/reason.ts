@@ -34,7 +34,10 @@ export function metricReason(m: MetricResult, report: Pick<Report, 'family' | 'b
     if (note?.kind === 'no-reference')
       return `cannot be judged beside ${note.reference} (relative-to): this run lacks that metric`;
     const runs = note?.kind === 'missing' ? note.runs : 0;
-    return `in the history (${runs} run${runs === 1 ? '' : 's'}) but absent from this run`;
+    const held = `in the history (${runs} run${runs === 1 ? '' : 's'})`;
+    if (note?.kind === 'missing' && note.notJudged !== undefined)
+      return `${held} but not judged in this run: ${note.notJudged}`;
+    return `${held} but absent from this run`;
   }
   if (m.status === 'learning' && note?.kind === 'learning') {
     if (note.levelRuns !== undefined && note.runs >= note.minRuns)

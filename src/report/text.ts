@@ -6,6 +6,7 @@ import { OK_ROWS_LISTED } from './ok-rows.js';
 import { familyLine } from './family-line.js';
 import { fullReason, sharedReason } from './reason.js';
 import { GLYPH_LEGEND, STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
+import { reportNotes } from './notes.js';
 
 type Colors = ReturnType<typeof pc.createColors>;
 
@@ -56,6 +57,7 @@ function sharedLine(s: SharedMoveResult): string {
 export function renderText(report: Report, options: { color: boolean; all?: boolean }): string {
   const c = pc.createColors(options.color);
   const lines: string[] = [];
+  for (const note of reportNotes(report, (t) => cleanText(t, 2000))) lines.push(c.yellow(`note: ${note}`));
   const verdictWord =
     report.verdict === 'regressed'
       ? c.red(c.bold('REGRESSED'))

@@ -12,6 +12,15 @@ import { createOctokitApi } from '../../src/github/octokit-api.js';
 import type { ActionDeps } from '../../src/github/run-action.js';
 import type { ActionSink, AnnotationProps } from '../../src/github/sink.js';
 
+/**
+ * The step's inputs as the runner passes them: INPUT_ + the name upper-cased, spaces to
+ * underscores, hyphens kept, trimmed (test/github/inputs.test.ts checks this against
+ * @actions/core's own getInput, which the action uses).
+ */
+export function runnerInputs(env: Record<string, string | undefined>): (name: string) => string {
+  return (name) => (env[`INPUT_${name.replace(/ /g, '_').toUpperCase()}`] ?? '').trim();
+}
+
 export interface Collected {
   lines: { kind: string; message: string; props?: AnnotationProps }[];
   outputs: Map<string, string>;
@@ -114,6 +123,7 @@ export function deps(
 ): ActionDeps {
   return {
     env,
+    getInput: runnerInputs(env),
     cwd: ws.dir,
     sink,
     readText: (p) => readFile(p, 'utf8'),

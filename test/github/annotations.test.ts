@@ -79,3 +79,44 @@ describe('annotate', () => {
     expect(seen.join(' ')).toContain('evil');
   });
 });
+
+describe('annotate within GitHub limits', () => {
+  const collect = () => {
+    const seen: { kind: string; text: string; title?: string }[] = [];
+    const sink = {
+      error: (text: string, p?: { title?: string }) => void seen.push({ kind: 'error', text, title: p?.title }),
+      notice: (text: string, p?: { title?: string }) => void seen.push({ kind: 'notice', text, title: p?.title }),
+    };
+    return { seen, sink };
+  };
+  const many = (n: number) =>
+    Array.from({ length: n }, (_, i) =>
+      metric({
+        name: `time/step-${String(i).padStart(2, '0')}`,
+        status: 'regressed',
+      }),
+    );
+
+  it('after the verdict annotation, 12 regressions take the 9 slots left: 8 metrics and "and 4 more"', () => {
+    const { seen, sink } = collect();
+    annotate(report(many(12)), sink, 'bench', { error: 1, notice: 0 });
+    expect(seen).toHaveLength(9);
+    expect(seen.slice(0, 8).map((s) => s.title)).toEqual(many(8).map((m) => `bellgate [bench]: ${m.name} regressed`));
+    expect(seen[8]?.title).toBe('bellgate [bench]: and 4 more metrics regressed');
+    expect(seen[8]?.text).toMatch(/^time\/step-08, time\/step-09, time\/step-10, time\/step-11: see the job summary/);
+  });
+
+  it('nine regressions after the verdict annotation all fit: 10 errors in all', () => {
+    const { seen, sink } = collect();
+    annotate(report(many(9)), sink, 'bench', { error: 1, notice: 0 });
+    expect(seen.filter((s) => s.kind === 'error')).toHaveLength(9);
+    expect(seen.every((s) => !/more metrics/.test(s.title ?? ''))).toBe(true);
+  });
+
+  it('an accepted run writes its regressions as notices, never errors', () => {
+    const { seen, sink } = collect();
+    annotate({ ...report(many(2)), verdict: 'accepted' }, sink, 'bench', { error: 0, notice: 1 });
+    expect(seen.map((s) => s.kind)).toEqual(['notice', 'notice']);
+    expect(seen[0]?.title).toBe('bellgate [bench]: time/step-00 regressed (accepted)');
+  });
+});

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { readRunContext } from '../../src/github/context.js';
 import { InputError } from '../../src/errors/input-error.js';
+import { examplePayload } from '../e2e/webhook-payloads.js';
 
 const env = {
   GITHUB_REPOSITORY: 'acme/router',
@@ -43,6 +44,16 @@ describe('readRunContext', () => {
     expect(c.pullRequest).toBeUndefined();
     expect(c.runId).toBe('8123-1');
     expect(c.defaultBranch).toBe('trunk');
+  });
+  it("reads the pull request a merge queue run tests from its queue branch (GitHub's example payload)", async () => {
+    const payload = examplePayload('merge_group', 'checks_requested');
+    const c = await readRunContext({ ...env, GITHUB_EVENT_NAME: 'merge_group' }, read(payload));
+    expect(c.queuedPullRequest).toBe(104);
+    expect(c.pullRequest).toBeUndefined();
+  });
+  it('reads the labels of a labeled event from its payload (a snapshot, not the labels now)', async () => {
+    const c = await readRunContext(env, read(examplePayload('pull_request', 'labeled')));
+    expect(c.pullRequest).toMatchObject({ number: 2, labels: ['bug'] });
   });
   it('names a missing variable', async () => {
     await expect(readRunContext({ ...env, GITHUB_REPOSITORY: '' }, read({}))).rejects.toThrow(

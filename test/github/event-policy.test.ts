@@ -15,6 +15,13 @@ describe('decideRecord', () => {
       notice: false,
     });
   });
+  it('checks a merge queue run like a pull request: never recorded, no notice', () => {
+    const ref = 'refs/heads/gh-readonly-queue/main/pr-104-929f8209d40f77f4abc622a499c93a83babdbe64';
+    expect(decideRecord('auto', { eventName: 'merge_group', ref }, 'main')).toMatchObject({
+      record: false,
+      notice: false,
+    });
+  });
   it.each(['pull_request', 'pull_request_target'])('checks %s only, even with a baseline-looking ref', (eventName) => {
     expect(decideRecord('auto', { eventName, ref: main }, 'main').record).toBe(false);
   });

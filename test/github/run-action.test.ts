@@ -7,7 +7,8 @@ import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it } from
 import { artifactName } from '../../src/history/artifact-store.js';
 import { parseHistory } from '../../src/history/document.js';
 import { runAction } from '../../src/github/run-action.js';
-import { startRestStandin, type RestStandin } from '../e2e/standins/rest-api.js';
+import { commentMarker, markerLine } from '../../src/report/marker.js';
+import { startRestStandin, takeViolations, type RestStandin } from '../e2e/standins/rest-api.js';
 import { baselineHistory, collectingSink, deps, workspace, zipHistory, type Workspace } from './action-harness.js';
 
 const SERIES = 'bench/linux';
@@ -25,11 +26,14 @@ beforeEach(async () => {
   ws = await workspace();
   rest.state.artifacts = [];
   rest.state.comments.clear();
+  rest.state.labels.clear();
   rest.state.faults = [];
   rest.state.commentWriteStatus = undefined;
 });
 afterEach(async () => {
   await ws.remove();
+  // Every request the action made, and every answer, fits GitHub's published REST description.
+  expect(takeViolations(rest.state)).toEqual([]);
 });
 
 function seedHistory(): void {
@@ -117,7 +121,8 @@ describe('runAction', () => {
     expect(got.summary).toHaveLength(1);
     const comments = rest.state.comments.get(7) ?? [];
     expect(comments).toHaveLength(1);
-    expect(comments[0]?.body).toBe(got.summary[0]);
+    // The comment is the summary behind its hidden marker line.
+    expect(comments[0]?.body).toBe(`${markerLine(commentMarker(SERIES))}\n${got.summary[0]}`);
     const errors = got.lines.filter((l) => l.kind === 'error');
     expect(errors).toHaveLength(1);
     expect(errors[0]?.props?.title).toMatch(/route\/match-static regressed/);
@@ -132,6 +137,35 @@ describe('runAction', () => {
     await runAction(deps(ws, await env('pull_request', pr(['perf', 'bellgate:accept'])), sink, []));
     expect(got.outputs.get('verdict')).toBe('accepted');
     expect(got.failed).toEqual([]);
+  });
+
+  it('a label added after the push is read from the API: accepted, notices instead of errors', async () => {
+    seedHistory();
+    await ws.metrics({ 'route/match-static': 480, 'bundle/app.js.gz': 40212 });
+    // The payload is the push's snapshot, without the label; the pull request carries it now.
+    rest.state.labels.set(7, ['perf', 'bellgate:accept']);
+    rest.state.calls.length = 0;
+    const { sink, got } = collectingSink();
+    await runAction(deps(ws, await env('pull_request', pr(['perf'])), sink, []));
+    expect(got.outputs.get('verdict')).toBe('accepted');
+    expect(got.failed).toEqual([]);
+    expect(
+      rest.state.calls.some((c) => c.method === 'GET' && c.path.startsWith('/repos/acme/router/issues/7/labels')),
+    ).toBe(true);
+    expect(got.lines.filter((l) => l.kind === 'error')).toEqual([]);
+    const notices = got.lines.filter((l) => l.kind === 'notice');
+    expect(notices[0]?.message).toMatch(/1 regression accepted by the label "bellgate:accept"/);
+    expect(notices.some((n) => /route\/match-static regressed \(accepted\)/.test(n.props?.title ?? ''))).toBe(true);
+  });
+
+  it('without the label anywhere the regression fails and the message says to add it and re-run', async () => {
+    seedHistory();
+    await ws.metrics({ 'route/match-static': 480, 'bundle/app.js.gz': 40212 });
+    rest.state.labels.set(7, ['perf']);
+    const { sink, got } = collectingSink();
+    await runAction(deps(ws, await env('pull_request', pr(['perf'])), sink, []));
+    expect(got.outputs.get('verdict')).toBe('regressed');
+    expect(got.failed[0]).toMatch(/add the label "bellgate:accept" to the pull request and re-run this job/);
   });
 
   it('block: false reports the regression but does not fail', async () => {
@@ -172,7 +206,10 @@ describe('runAction', () => {
     expect(got.outputs.get('verdict')).toBe('learning');
     expect(result.recorded).toBe(false);
     expect(uploads).toEqual([]);
-    expect(got.lines.some((l) => l.kind === 'warning' && /could not be fetched/.test(l.message))).toBe(true);
+    expect(got.lines.some((l) => l.kind === 'warning' && /cannot list the history artifacts/.test(l.message))).toBe(
+      true,
+    );
+    expect(got.summary[0]?.split('\n')[0]).toMatch(/^> \*\*Note:\*\* Bellgate: the history was not used: /);
   });
 
   it('history-failure: fail turns an unreachable history into a failed step', async () => {

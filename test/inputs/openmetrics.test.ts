@@ -49,7 +49,7 @@ describe('readOpenMetrics', () => {
 
   it('reads NaN samples into notFitted and ignores timestamps', () => {
     const result = readOpenMetrics('a NaN\nb 1 1700000000\n', 'm.prom');
-    expect(result.notFitted.get('a')).toBe('value is NaN');
+    expect(result.notFitted.get('a')).toBe('value is NaN at m.prom:1');
     expect(result.readings).toEqual([{ name: 'b', value: 1, where: 'm.prom:2' }]);
   });
 

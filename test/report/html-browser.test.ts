@@ -30,7 +30,16 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
       now: 10 + k,
       status: 'ok' as const,
     }));
-    const { report, history } = makeFixture(hostile);
+    // Six-digit sizes give the widest tick labels ("142,306"), which the y axis name must clear.
+    const wide = {
+      name: 'size/web-bundle.js.gz',
+      unit: 'B',
+      centre: 142311,
+      spread: 3,
+      now: 142312,
+      status: 'ok' as const,
+    };
+    const { report, history } = makeFixture([...hostile, wide]);
     const html = renderHtmlReport({ report, history, generatedAt: '2026-12-01T12:00:00Z' });
     dir = join(tmpdir(), `bellgate-report-${process.pid}`);
     mkdirSync(dir, { recursive: true });
@@ -99,6 +108,50 @@ describe.skipIf(!present)('HTML report in headless Chromium', () => {
       expect(s.h).toBeGreaterThan(100);
       expect(s.shapes).toBeGreaterThan(0);
     }
+  });
+
+  it('keeps each axis name off its tick labels and the "this run" note off the cutoff lines', async () => {
+    // Measured by the browser's own layout (getBoundingClientRect of each drawn element).
+    const found = await page.$$eval('svg.chart', (charts) => {
+      // The few DOM members used, typed here (the project's TypeScript has no DOM library).
+      type Box = { left: number; right: number; top: number; bottom: number };
+      interface El {
+        getBoundingClientRect(): Box;
+        querySelector(selector: string): El | null;
+        querySelectorAll(selector: string): ArrayLike<El>;
+        getAttribute(name: string): string | null;
+        textContent: string | null;
+      }
+      const svgs = charts as unknown as El[];
+      const box = (el: El): Box => el.getBoundingClientRect();
+      const meets = (a: Box, b: Box) =>
+        a.left <= b.right && b.left <= a.right && a.top <= b.bottom && b.top <= a.bottom;
+      const clashes: string[] = [];
+      let notes = 0;
+      let axes = 0;
+      for (const svg of svgs) {
+        const title = svg.getAttribute('aria-label') ?? '';
+        for (const axis of Array.from(svg.querySelectorAll('g.axis'))) {
+          const name = axis.querySelector('.axis-label');
+          if (!name) continue;
+          axes += 1;
+          for (const tick of Array.from(axis.querySelectorAll('text:not(.axis-label)')))
+            if (meets(box(name), box(tick)))
+              clashes.push(`${title}: axis name "${name.textContent}" on tick "${tick.textContent}"`);
+        }
+        for (const note of Array.from(svg.querySelectorAll('text.note'))) {
+          notes += 1;
+          for (const line of Array.from(svg.querySelectorAll('line.cutoff, line.now')))
+            if (meets(box(note), box(line)))
+              clashes.push(`${title}: "${note.textContent}" crossed by a ${line.getAttribute('class')} line`);
+        }
+      }
+      return { clashes, notes, axes };
+    });
+    expect(found.axes).toBeGreaterThan(8);
+    // build/time's run is 8.4 sd out (47.9 against 41.2 +- 0.8): drawn at the edge with its note.
+    expect(found.notes).toBeGreaterThan(0);
+    expect(found.clashes).toEqual([]);
   });
 
   it('re-sorts the summary table when a header is clicked', async () => {

@@ -33,7 +33,15 @@ export function checkCommand(ctx: CommandContext): Command {
       `list every metric in the text report, ok ones too (by default more than ${OK_ROWS_LISTED} ok metrics are counted, not listed)`,
     )
     .option('--out <dir>', 'also write report.md, report.json and report.txt (every metric) into this folder')
-    .option('--record', 'append this run to the history after checking it (needs --history)');
+    .option('--record', 'append this run to the history after checking it (needs --history)')
+    .addOption(
+      new Option(
+        '--missing-metrics <policy>',
+        'when this run lacks more than half of the baseline metrics: warn, or fail with exit 2',
+      )
+        .choices(['warn', 'fail'])
+        .default('warn'),
+    );
   inputOptions(cmd);
   runInfoOptions(cmd);
   examples(cmd, [
@@ -44,12 +52,12 @@ export function checkCommand(ctx: CommandContext): Command {
   ]);
   cmd.addHelpText(
     'after',
-    '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\n',
+    '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage (and --missing-metrics fail); 3 history store unreachable.\n',
   );
   return cmd.action(async (options: CheckOptions) => {
     // Imported when the command runs, so `--help` and the other commands never load the gate.
     const { performCheck, verdictExitCode } = await importCheckFlow();
     const report = await performCheck(ctx, options);
-    ctx.exitCode = verdictExitCode(report);
+    ctx.exitCode = verdictExitCode(report, options.missingMetrics);
   });
 }

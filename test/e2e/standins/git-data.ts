@@ -5,11 +5,14 @@
  * relies on: objects addressed by content, trees built on a base_tree with nested paths, commits
  * with parents, and a non-forced ref update that is refused (422 "Update is not a fast forward")
  * unless the new commit descends from the current head. Blob shas are real git object ids
- * (SHA-1 of "blob <size>\0<bytes>"); tree and commit ids hash a canonical form. 127.0.0.1 only.
+ * (SHA-1 of "blob <size>\0<bytes>"); tree and commit ids hash a canonical form. Every request is
+ * held to GitHub's published REST description and every answer to its documented response schema
+ * (openapi.ts), recorded in `state.violations`. 127.0.0.1 only.
  */
 import { createHash } from 'node:crypto';
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { githubApiCheck } from './openapi.js';
 
 type Entry = { mode: string; type: 'blob' | 'tree'; sha: string };
 export type GitObject =
@@ -24,6 +27,8 @@ export interface GitDataState {
   calls: { method: string; path: string; status: number; auth?: string }[];
   /** When set, writes answer 403 like a token with `contents: read` only. */
   readOnly?: boolean;
+  /** Requests and answers that do not match GitHub's REST description (should stay empty). */
+  violations: string[];
 }
 
 export interface GitDataStandin {
@@ -49,8 +54,14 @@ function send(res: ServerResponse, status: number, body: unknown): number {
   return status;
 }
 
+/** Every recorded violation of GitHub's REST description, and forgets them. */
+export function takeGitViolations(state: GitDataState): string[] {
+  return state.violations.splice(0, state.violations.length);
+}
+
 export async function startGitDataStandin(): Promise<GitDataStandin> {
-  const state: GitDataState = { objects: new Map(), refs: new Map(), calls: [] };
+  const state: GitDataState = { objects: new Map(), refs: new Map(), calls: [], violations: [] };
+  const api = githubApiCheck();
   const put = (o: GitObject): string => {
     const id =
       o.kind === 'blob'
@@ -110,10 +121,47 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
     } catch {
       return send(res, 400, { message: 'Problems parsing JSON' });
     }
-    if (!req.headers.authorization?.startsWith('Bearer '))
-      return send(res, 401, { message: 'Requires authentication' });
-    if (state.readOnly && method !== 'GET')
-      return send(res, 403, { message: 'Resource not accessible by integration' });
+    const checked = api.request(method, url, text === '' ? undefined : body);
+    state.violations.push(...checked.problems);
+    const operation = checked.operation;
+    if (operation === undefined) return send(res, 404, { message: 'Not Found' });
+    // Every answer is held to the documented response of its status.
+    const reply = (status: number, answer: unknown): number => {
+      state.violations.push(...api.response(operation, status, answer));
+      return send(res, status, answer);
+    };
+    const base = `${url.origin}${/^\/repos\/[^/]+\/[^/]+/.exec(url.pathname)?.[0] ?? ''}`;
+    const refJson = (ref: string, sha: unknown) => ({
+      ref,
+      node_id: `REF_${ref}`,
+      url: `${base}/git/${ref}`,
+      object: { type: 'commit', sha, url: `${base}/git/commits/${String(sha)}` },
+    });
+    const commitJson = (sha: string, c: { tree: string; parents: string[]; message: string }) => {
+      const who = {
+        name: 'github-actions[bot]',
+        email: '41898282+github-actions[bot]@users.noreply.github.com',
+        date: '2026-04-01T12:00:00Z',
+      };
+      return {
+        sha,
+        node_id: `C_${sha}`,
+        url: `${base}/git/commits/${sha}`,
+        html_url: `https://github.com/${base.split('/repos/')[1] ?? ''}/commit/${sha}`,
+        author: who,
+        committer: who,
+        tree: { sha: c.tree, url: `${base}/git/trees/${c.tree}` },
+        message: c.message,
+        parents: c.parents.map((p) => ({
+          sha: p,
+          url: `${base}/git/commits/${p}`,
+          html_url: `https://github.com/commit/${p}`,
+        })),
+        verification: { verified: false, reason: 'unsigned', signature: null, payload: null, verified_at: null },
+      };
+    };
+    if (!req.headers.authorization?.startsWith('Bearer ')) return reply(401, { message: 'Requires authentication' });
+    if (state.readOnly && method !== 'GET') return reply(403, { message: 'Resource not accessible by integration' });
     const m = /^\/repos\/[^/]+\/[^/]+(\/.*)$/.exec(url.pathname);
     const rest = m?.[1] ?? '';
     const tail = (prefix: string) => decodeURIComponent(rest.slice(prefix.length));
@@ -121,87 +169,104 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
     if (method === 'GET' && rest.startsWith('/git/ref/heads/')) {
       const ref = `refs/heads/${tail('/git/ref/heads/')}`;
       const sha = state.refs.get(ref);
-      return sha ? send(res, 200, { ref, object: { sha, type: 'commit' } }) : send(res, 404, { message: 'Not Found' });
+      return sha ? reply(200, refJson(ref, sha)) : reply(404, { message: 'Not Found' });
     }
     if (method === 'POST' && rest === '/git/refs') {
       const ref = String(body.ref ?? '');
-      if (!/^refs\/heads\/./.test(ref)) return send(res, 422, { message: 'Reference name is not valid' });
-      if (!get(body.sha, 'commit')) return send(res, 422, { message: 'Object does not exist' });
-      if (state.refs.has(ref)) return send(res, 422, { message: 'Reference already exists' });
+      if (!/^refs\/heads\/./.test(ref)) return reply(422, { message: 'Reference name is not valid' });
+      if (!get(body.sha, 'commit')) return reply(422, { message: 'Object does not exist' });
+      if (state.refs.has(ref)) return reply(422, { message: 'Reference already exists' });
       state.refs.set(ref, body.sha as string);
-      return send(res, 201, { ref, object: { sha: body.sha, type: 'commit' } });
+      return reply(201, refJson(ref, body.sha));
     }
     if (method === 'PATCH' && rest.startsWith('/git/refs/heads/')) {
       const ref = `refs/heads/${tail('/git/refs/heads/')}`;
       const current = state.refs.get(ref);
-      if (!current) return send(res, 422, { message: 'Reference does not exist' });
-      if (!get(body.sha, 'commit')) return send(res, 422, { message: 'Object does not exist' });
+      if (!current) return reply(422, { message: 'Reference does not exist' });
+      if (!get(body.sha, 'commit')) return reply(422, { message: 'Object does not exist' });
       if (body.force !== true && !descends(body.sha as string, current))
-        return send(res, 422, { message: 'Update is not a fast forward' });
+        return reply(422, { message: 'Update is not a fast forward' });
       state.refs.set(ref, body.sha as string);
-      return send(res, 200, { ref, object: { sha: body.sha, type: 'commit' } });
+      return reply(200, refJson(ref, body.sha));
     }
     if (method === 'POST' && rest === '/git/blobs') {
-      if (typeof body.content !== 'string') return send(res, 422, { message: 'content is required' });
+      if (typeof body.content !== 'string') return reply(422, { message: 'content is required' });
       const bytes = Buffer.from(body.content, body.encoding === 'base64' ? 'base64' : 'utf8');
-      return send(res, 201, { sha: put({ kind: 'blob', bytes }) });
+      const sha = put({ kind: 'blob', bytes });
+      return reply(201, { sha, url: `${base}/git/blobs/${sha}` });
     }
     if (method === 'GET' && rest.startsWith('/git/blobs/')) {
       const blob = get(tail('/git/blobs/'), 'blob');
-      if (!blob) return send(res, 404, { message: 'Not Found' });
+      if (!blob) return reply(404, { message: 'Not Found' });
       // GitHub wraps base64 content at 60 characters.
       const content = blob.bytes.toString('base64').replace(/.{60}/g, '$&\n');
-      return send(res, 200, { sha: gitBlobId(blob.bytes), size: blob.bytes.length, encoding: 'base64', content });
+      const sha = gitBlobId(blob.bytes);
+      return reply(200, {
+        sha,
+        node_id: `B_${sha}`,
+        url: `${base}/git/blobs/${sha}`,
+        size: blob.bytes.length,
+        encoding: 'base64',
+        content,
+      });
     }
     if (method === 'POST' && rest === '/git/trees') {
       if (body.base_tree !== undefined && !get(body.base_tree, 'tree'))
-        return send(res, 422, { message: 'base_tree is not a valid tree' });
+        return reply(422, { message: 'base_tree is not a valid tree' });
       let tree = body.base_tree as string | undefined;
       for (const raw of Array.isArray(body.tree) ? (body.tree as Record<string, unknown>[]) : []) {
         const path = String(raw.path ?? '');
         if (path === '' || path.split('/').some((p) => p === '' || p === '.' || p === '..'))
-          return send(res, 422, { message: `invalid tree path ${path}` });
-        if (!get(raw.sha, 'blob')) return send(res, 422, { message: 'tree.sha is not a valid blob' });
+          return reply(422, { message: `invalid tree path ${path}` });
+        if (!get(raw.sha, 'blob')) return reply(422, { message: 'tree.sha is not a valid blob' });
         tree = plant(tree, path.split('/'), { mode: String(raw.mode), type: 'blob', sha: raw.sha as string });
       }
       tree ??= put({ kind: 'tree', entries: new Map() });
-      return send(res, 201, { sha: tree });
+      const entries = [...(get(tree, 'tree')?.entries ?? [])].map(([path, e]) => ({
+        path,
+        ...e,
+        url: `${base}/git/${e.type}s/${e.sha}`,
+      }));
+      return reply(201, { sha: tree, url: `${base}/git/trees/${tree}`, truncated: false, tree: entries });
     }
     if (method === 'POST' && rest === '/git/commits') {
       const parents = Array.isArray(body.parents) ? (body.parents as unknown[]) : [];
       if (!get(body.tree, 'tree') || parents.some((p) => !get(p, 'commit')))
-        return send(res, 422, { message: 'Tree or parent does not exist' });
+        return reply(422, { message: 'Tree or parent does not exist' });
       const sha = put({
         kind: 'commit',
         tree: body.tree as string,
         parents: parents as string[],
         message: String(body.message ?? ''),
       });
-      return send(res, 201, { sha, tree: { sha: body.tree }, parents: parents.map((p) => ({ sha: p })) });
+      return reply(
+        201,
+        commitJson(sha, {
+          tree: body.tree as string,
+          parents: parents as string[],
+          message: String(body.message ?? ''),
+        }),
+      );
     }
     if (method === 'GET' && rest.startsWith('/git/commits/')) {
       const sha = tail('/git/commits/');
       const c = get(sha, 'commit');
-      return c
-        ? send(res, 200, {
-            sha,
-            tree: { sha: c.tree },
-            parents: c.parents.map((p) => ({ sha: p })),
-            message: c.message,
-          })
-        : send(res, 404, { message: 'Not Found' });
+      return c ? reply(200, commitJson(sha, c)) : reply(404, { message: 'Not Found' });
     }
     if (method === 'GET' && rest.startsWith('/contents/')) {
       const path = tail('/contents/');
       const at = url.searchParams.get('ref') ?? '';
       const commit = get(state.refs.get(`refs/heads/${at}`) ?? at, 'commit');
       const entry = lookup(commit?.tree, path);
-      if (!entry) return send(res, 404, { message: 'Not Found' });
-      if (entry.type === 'tree') return send(res, 200, [] as unknown[]);
+      if (!entry) return reply(404, { message: 'Not Found' });
+      if (entry.type === 'tree') return reply(200, [] as unknown[]);
       const bytes = get(entry.sha, 'blob')?.bytes ?? Buffer.alloc(0);
       // Over 1 MB the contents API leaves content empty (encoding "none"); the blob API serves it.
       const small = bytes.length <= 1024 * 1024;
-      return send(res, 200, {
+      const self = `${base}/contents/${path}?ref=${encodeURIComponent(at)}`;
+      const gitUrl = `${base}/git/blobs/${entry.sha}`;
+      const htmlUrl = `https://github.com/blob/${encodeURIComponent(at)}/${path}`;
+      return reply(200, {
         type: 'file',
         path,
         name: path.split('/').pop(),
@@ -209,9 +274,14 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
         size: bytes.length,
         encoding: small ? 'base64' : 'none',
         content: small ? bytes.toString('base64') : '',
+        url: self,
+        git_url: gitUrl,
+        html_url: htmlUrl,
+        download_url: null,
+        _links: { self, git: gitUrl, html: htmlUrl },
       });
     }
-    return send(res, 404, { message: 'Not Found' });
+    return reply(404, { message: 'Not Found' });
   }
 
   const server = createServer((req, res) => {

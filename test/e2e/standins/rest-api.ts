@@ -1,12 +1,15 @@
 /**
- * A loopback stand-in for the parts of the GitHub REST API the action calls, shaped after the
- * public REST reference (docs.github.com/rest: "List artifacts for a repository", "Download an
- * artifact" answering 302 with a storage Location, "List/Create/Update issue comment"):
- * exact-name artifact filter, newest-first listing, per_page/page pagination, and fault injection
- * (status, headers, times) so retries can be counted. Binds 127.0.0.1 only.
+ * A loopback stand-in for the parts of the GitHub REST API the action calls ("List artifacts for
+ * a repository", "Download an artifact" answering 302 with a storage Location, "List labels for an
+ * issue", "List/Create/Update issue comment"): exact-name artifact filter, newest-first listing,
+ * per_page/page pagination, and fault injection (status, headers, times) so retries can be
+ * counted. Every request is held to GitHub's published REST description and every answer to its
+ * documented response schema (openapi.ts); a mismatch, or a request the description does not
+ * know, is recorded in `state.violations` (and the latter answered 404). Binds 127.0.0.1 only.
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
+import { githubApiCheck } from './openapi.js';
 
 export interface StoredArtifact {
   id: number;
@@ -30,6 +33,31 @@ export interface StoredComment {
   user: { login: string; type: string };
 }
 
+/** A user object as the REST description requires one (simple-user). */
+export function simpleUser(login: string, type: string, id = 41898282): Record<string, unknown> {
+  const url = `https://api.github.com/users/${encodeURIComponent(login)}`;
+  return {
+    login,
+    id,
+    node_id: `U_${id}`,
+    avatar_url: `https://avatars.githubusercontent.com/u/${id}?v=4`,
+    gravatar_id: '',
+    url,
+    html_url: `https://github.com/${encodeURIComponent(login)}`,
+    followers_url: `${url}/followers`,
+    following_url: `${url}/following{/other_user}`,
+    gists_url: `${url}/gists{/gist_id}`,
+    starred_url: `${url}/starred{/owner}{/repo}`,
+    subscriptions_url: `${url}/subscriptions`,
+    organizations_url: `${url}/orgs`,
+    repos_url: `${url}/repos`,
+    events_url: `${url}/events{/privacy}`,
+    received_events_url: `${url}/received_events`,
+    type,
+    site_admin: false,
+  };
+}
+
 export interface Fault {
   method: string;
   /** Path prefix (without query) the fault applies to. */
@@ -45,6 +73,15 @@ export interface Fault {
 export interface RestState {
   artifacts: StoredArtifact[];
   comments: Map<number, StoredComment[]>;
+  /** Labels each issue or pull request carries now, by number. */
+  labels: Map<number, string[]>;
+  /** Requests and answers that do not match GitHub's REST description (should stay empty). */
+  violations: string[];
+  /**
+   * The permissions each token was given (a job's `permissions:`); a token listed here is refused
+   * (403) what they do not grant, as GITHUB_TOKEN is. Tokens not listed may do anything.
+   */
+  tokenPermissions: Map<string, Record<string, string>>;
   faults: Fault[];
   calls: { method: string; path: string; auth?: string }[];
   /** Status answered to comment writes (e.g. 403 for a fork PR's read-only token). */
@@ -60,7 +97,7 @@ export interface RestStandin {
 
 const OWNER_REPO = /^\/repos\/([^/]+)\/([^/]+)(\/.*)$/;
 
-function send(res: ServerResponse, status: number, body?: unknown, headers: Record<string, string> = {}): void {
+function sendRaw(res: ServerResponse, status: number, body?: unknown, headers: Record<string, string> = {}): void {
   const text = body === undefined ? '' : JSON.stringify(body);
   res.writeHead(status, { 'content-type': 'application/json; charset=utf-8', ...headers });
   res.end(text);
@@ -84,7 +121,7 @@ function artifactJson(a: StoredArtifact, base: string, owner: string, repo: stri
     expired: a.expired,
     created_at: a.createdAt,
     updated_at: a.createdAt,
-    expires_at: null,
+    expires_at: new Date(Date.parse(a.createdAt) + 90 * 86_400_000).toISOString(),
     workflow_run: {
       id: a.workflowRunId,
       repository_id: a.repositoryId,
@@ -95,11 +132,62 @@ function artifactJson(a: StoredArtifact, base: string, owner: string, repo: stri
   };
 }
 
+/**
+ * What GITHUB_TOKEN needs for the calls the action makes, any one of the pairs (GitHub docs,
+ * "Permissions required for GitHub Apps": artifacts under `actions`, issue labels and comments
+ * under `issues` or, for pull requests, `pull_requests`).
+ */
+function neededPermission(method: string, template: string): [string, 'read' | 'write'][] | undefined {
+  const level = method === 'GET' ? 'read' : 'write';
+  if (template.startsWith('/repos/{owner}/{repo}/actions/artifacts')) return [['actions', level]];
+  if (template.startsWith('/repos/{owner}/{repo}/issues/'))
+    return [
+      ['issues', level],
+      ['pull-requests', level],
+    ];
+  return undefined;
+}
+
+const allows = (granted: string | undefined, level: 'read' | 'write'): boolean =>
+  granted === 'write' || (granted === 'read' && level === 'read');
+
 /** Starts the stand-in on an ephemeral loopback port. */
+function commentJson(c: StoredComment, base: string, owner: string, repo: string, issue: number): unknown {
+  return {
+    id: c.id,
+    node_id: `IC_${c.id}`,
+    url: `${base}/repos/${owner}/${repo}/issues/comments/${c.id}`,
+    html_url: `https://github.com/${owner}/${repo}/pull/${issue}#issuecomment-${c.id}`,
+    issue_url: `${base}/repos/${owner}/${repo}/issues/${issue}`,
+    body: c.body,
+    user: simpleUser(c.user.login, c.user.type),
+    created_at: '2026-04-01T12:00:00Z',
+    updated_at: '2026-04-01T12:00:00Z',
+    author_association: 'NONE',
+    performed_via_github_app: null,
+  };
+}
+
+function labelJson(name: string, i: number, base: string, owner: string, repo: string): unknown {
+  return {
+    id: 208045946 + i,
+    node_id: `LA_${i}`,
+    url: `${base}/repos/${owner}/${repo}/labels/${encodeURIComponent(name)}`,
+    name,
+    description: null,
+    color: 'f29513',
+    default: false,
+  };
+}
+
 export async function startRestStandin(initial: Partial<RestState> = {}): Promise<RestStandin> {
+  const api = githubApiCheck();
   const state: RestState = {
     artifacts: [],
     comments: new Map(),
+    labels: new Map(),
+    violations: [],
+    tokenPermissions: new Map(),
     faults: [],
     calls: [],
     nextId: 1000,
@@ -107,32 +195,53 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
   };
   let base = '';
   const server = createServer((req, res) => {
-    handle(req, res).catch((e: unknown) => send(res, 500, { message: String(e) }));
+    handle(req, res).catch((e: unknown) => sendRaw(res, 500, { message: String(e) }));
   });
   async function handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
     const url = new URL(req.url ?? '/', base);
     const method = req.method ?? 'GET';
     state.calls.push({ method, path: url.pathname + url.search, auth: req.headers.authorization });
+    const requestBody = await readBody(req).catch(() => undefined);
+    // The storage the download redirects to is not part of the REST API; everything else is.
+    const checked = url.pathname.startsWith('/blob/') ? undefined : api.request(method, url, requestBody);
+    state.violations.push(...(checked?.problems ?? []));
+    const operation = checked?.operation;
     const fault = state.faults.find((f) => f.method === method && url.pathname.startsWith(f.path) && f.times > 0);
     if (fault) {
       fault.times -= 1;
       if (fault.times === 0) state.faults.splice(state.faults.indexOf(fault), 1);
-      await readBody(req).catch(() => undefined);
       // Status 0 stands for a network error: the connection is dropped without an answer.
       if (fault.status === 0) {
         req.socket.destroy();
         return;
       }
-      send(res, fault.status, fault.body ?? { message: `stand-in fault ${fault.status}` }, fault.headers);
+      sendRaw(res, fault.status, fault.body ?? { message: `stand-in fault ${fault.status}` }, fault.headers);
       return;
     }
     if (method === 'GET' && url.pathname.startsWith('/blob/')) {
       const a = state.artifacts.find((x) => String(x.id) === url.pathname.slice('/blob/'.length));
-      if (!a?.zip) return send(res, 404, { message: 'Not Found' });
+      if (!a?.zip) return sendRaw(res, 404, { message: 'Not Found' });
       res.writeHead(200, { 'content-type': 'application/zip', 'content-length': String(a.zip.length) });
       res.end(Buffer.from(a.zip));
       return;
     }
+    if (operation === undefined) return sendRaw(res, 404, { message: 'Not Found' });
+    // Every answer from here on is held to the documented response of its status.
+    const send = (r: ServerResponse, status: number, body?: unknown, headers: Record<string, string> = {}): void => {
+      state.violations.push(...api.response(operation, status, body));
+      sendRaw(r, status, body, headers);
+    };
+    const granted = state.tokenPermissions.get((req.headers.authorization ?? '').replace(/^(token|bearer) /i, ''));
+    const needed = neededPermission(method, operation.template);
+    if (
+      granted !== undefined &&
+      needed !== undefined &&
+      !needed.some(([scope, level]) => allows(granted[scope], level))
+    )
+      return send(res, 403, {
+        message: 'Resource not accessible by integration',
+        documentation_url: 'https://docs.github.com/rest',
+      });
     const m = OWNER_REPO.exec(url.pathname);
     if (!m) return send(res, 404, { message: 'Not Found' });
     const [, owner = '', repo = '', rest = ''] = m;
@@ -156,17 +265,28 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
       const a = state.artifacts.find((x) => x.id === Number(d?.[1]));
       if (!a) return send(res, 404, { message: 'Not Found' });
       if (a.expired) return send(res, 410, { message: 'Artifact has expired' });
+      state.violations.push(...api.response(operation, 302, undefined));
       res.writeHead(302, { location: a.location ?? `${base}/blob/${a.id}?sig=standin` });
       res.end();
       return;
+    }
+    d = /^\/issues\/(\d+)\/labels$/.exec(rest);
+    if (d && method === 'GET') {
+      const names = state.labels.get(Number(d[1])) ?? [];
+      return send(res, 200, slice(names.map((n, i) => labelJson(n, i, base, owner, repo))));
     }
     d = /^\/issues\/(\d+)\/comments$/.exec(rest);
     if (d) {
       const issue = Number(d[1]);
       const list = state.comments.get(issue) ?? [];
-      if (method === 'GET') return send(res, 200, slice(list));
+      if (method === 'GET')
+        return send(
+          res,
+          200,
+          slice(list).map((c) => commentJson(c, base, owner, repo, issue)),
+        );
       if (method === 'POST') {
-        const body = (await readBody(req)) as { body?: string };
+        const body = requestBody as { body?: string };
         if (state.commentWriteStatus)
           return send(res, state.commentWriteStatus, { message: 'Resource not accessible by integration' });
         const c: StoredComment = {
@@ -175,19 +295,19 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
           user: { login: 'github-actions[bot]', type: 'Bot' },
         };
         state.comments.set(issue, [...list, c]);
-        return send(res, 201, c);
+        return send(res, 201, commentJson(c, base, owner, repo, issue));
       }
     }
     d = /^\/issues\/comments\/(\d+)$/.exec(rest);
     if (d && method === 'PATCH') {
-      const body = (await readBody(req)) as { body?: string };
+      const body = requestBody as { body?: string };
       if (state.commentWriteStatus)
         return send(res, state.commentWriteStatus, { message: 'Resource not accessible by integration' });
-      for (const list of state.comments.values()) {
+      for (const [issue, list] of state.comments) {
         const c = list.find((x) => x.id === Number(d?.[1]));
         if (c) {
           c.body = String(body?.body ?? '');
-          return send(res, 200, c);
+          return send(res, 200, commentJson(c, base, owner, repo, issue));
         }
       }
       return send(res, 404, { message: 'Not Found' });
@@ -205,6 +325,11 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
         server.close(() => resolve());
       }),
   };
+}
+
+/** Fails with every recorded violation of GitHub's REST description, and forgets them. */
+export function takeViolations(state: RestState): string[] {
+  return state.violations.splice(0, state.violations.length);
 }
 
 /** Counts the stand-in's calls matching a method and path prefix. */
