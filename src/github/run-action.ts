@@ -18,6 +18,8 @@ import { settingsFor } from '../config/rules.js';
 import { prepareGate, runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
+import { runsToRead } from '../history/read-window.js';
+import { machineFacts, runnerFingerprint, type MachineFacts } from '../history/runner-fingerprint.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
 import { InputError } from '../errors/input-error.js';
@@ -51,6 +53,8 @@ export interface ActionDeps {
   upload: ArtifactUploader;
   createStore?: (spec: StoreSpec) => HistoryStore | Promise<HistoryStore>;
   retry?: RetryTuning;
+  /** The machine, for the runner fingerprint of a recorded run (default: node:os of this process). */
+  machine?: MachineFacts;
 }
 
 /** The result, for callers and tests; the step's failure itself goes through sink.setFailed. */
@@ -124,9 +128,10 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     api: apiOnce,
     upload: deps.upload,
     warn: (m) => sink.warning(`bellgate: ${m}`),
+    info: (m) => sink.info(`bellgate: ${m}`),
   });
 
-  const { history, readable } = await loadHistory(store, series, inputs, sink);
+  const { history, readable } = await loadHistory(store, series, inputs, sink, runsToRead(config));
   const accepted = context.pullRequest?.labels.includes(inputs.acceptLabel) ?? false;
   await prepareGate(config);
   const report = runGate({ config, history, run, series, accepted });
@@ -159,7 +164,8 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (decision.record && !readable) {
     sink.warning('bellgate: not recording this run, because the history could not be read (it is never overwritten)');
   } else if (decision.record) {
-    recorded = await recordRun(store, history, runInfo(context, deps.now()), run, config.keep, inputs, sink);
+    const runner = runnerFingerprint(deps.env, deps.machine ?? machineFacts());
+    recorded = await recordRun(store, runInfo(context, deps.now(), runner), run, config.keep, inputs, sink);
     if (!recorded && inputs.historyFailure === 'fail') failed = true;
   }
   if (!readable && inputs.historyFailure === 'fail') failed = true;
