@@ -173,7 +173,7 @@ function decodeHeader(value: unknown, report: ProblemSink): Header | undefined {
     return undefined;
   }
   const schema = value.schema;
-  const version = typeof schema === 'string' ? /^bellgate\.history\/(\d{1,9})$/.exec(schema)?.[1] : undefined;
+  const version = typeof schema === 'string' ? /^bellgate\.history\/([1-9]\d{0,8})$/.exec(schema)?.[1] : undefined;
   if (version === undefined) {
     report(
       '1',

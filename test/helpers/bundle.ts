@@ -1,21 +1,28 @@
+import { basename, join } from 'node:path';
 import { rolldown } from 'rolldown';
 
 /**
- * Bundles a TypeScript entry (and what it imports from src/) into one ES module file that plain
- * `node` runs, so a test can start real processes of the project's own code. rolldown comes with
- * vite (a devDependency); node: modules and npm packages stay imports of the bundle.
- * @example await bundleScript('test/history/workers/file-writer.ts', '/tmp/x/file-writer.mjs')
+ * Bundles a TypeScript entry, with what it imports from src/ and node_modules, into `outDir`, so
+ * a test can start real processes of the project's own code with plain `node`. rolldown comes with
+ * vite (a devDependency). Returns the path of the entry file (`<entry name>.mjs`).
+ * @example const script = await bundleScript('test/history/workers/file-writer.ts', '/tmp/x')
  */
-export async function bundleScript(entry: string, outFile: string): Promise<void> {
+export async function bundleScript(entry: string, outDir: string): Promise<string> {
   const bundle = await rolldown({
     input: entry,
     platform: 'node',
-    external: (id) => id.startsWith('node:') || !/^[./]/.test(id),
+    external: (id) => id.startsWith('node:'),
     logLevel: 'silent',
   });
   try {
-    await bundle.write({ file: outFile, format: 'esm' });
+    await bundle.write({
+      dir: outDir,
+      format: 'esm',
+      entryFileNames: '[name].mjs',
+      chunkFileNames: '[name]-[hash].mjs',
+    });
   } finally {
     await bundle.close();
   }
+  return join(outDir, `${basename(entry).replace(/\.ts$/, '')}.mjs`);
 }

@@ -34,8 +34,7 @@ let root: string;
 let writer: string;
 beforeAll(async () => {
   root = await mkdtemp(join(tmpdir(), 'bellgate-file-store-'));
-  writer = join(root, 'file-writer.mjs');
-  await bundleScript(new URL('./workers/file-writer.ts', import.meta.url).pathname, writer);
+  writer = await bundleScript(new URL('./workers/file-writer.ts', import.meta.url).pathname, join(root, 'bundle'));
 });
 afterAll(async () => {
   await rm(root, { recursive: true, force: true });
