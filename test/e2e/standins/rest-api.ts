@@ -2,7 +2,8 @@
  * A loopback stand-in for the parts of the GitHub REST API the action calls, shaped after the
  * public REST reference (docs.github.com/rest: "List artifacts for a repository", "Download an
  * artifact" answering 302 with a storage Location, "List/Create/Update issue comment"):
- * exact-name artifact filter, newest-first listing, per_page/page pagination, and fault injection
+ * exact-name artifact filter, newest-first listing, per_page/page pagination, "Delete an artifact",
+ * and fault injection
  * (status, headers, times) so retries can be counted. Binds 127.0.0.1 only.
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
@@ -49,6 +50,8 @@ export interface RestState {
   calls: { method: string; path: string; auth?: string }[];
   /** Status answered to comment writes (e.g. 403 for a fork PR's read-only token). */
   commentWriteStatus?: number;
+  /** Status answered to artifact deletes instead of deleting (e.g. 403 without `actions: write`). */
+  artifactDeleteStatus?: number;
   nextId: number;
 }
 
@@ -150,6 +153,18 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
         total_count: all.length,
         artifacts: slice(all).map((a) => artifactJson(a, base, owner, repo)),
       });
+    }
+    const del = /^\/actions\/artifacts\/(\d+)$/.exec(rest);
+    if (method === 'DELETE' && del) {
+      // "Delete an artifact": 204, 404 when it is not there, 403 for a token without actions: write.
+      if (state.artifactDeleteStatus)
+        return send(res, state.artifactDeleteStatus, { message: 'Resource not accessible by integration' });
+      const at = state.artifacts.findIndex((x) => x.id === Number(del[1]));
+      if (at < 0) return send(res, 404, { message: 'Not Found' });
+      state.artifacts.splice(at, 1);
+      res.writeHead(204);
+      res.end();
+      return;
     }
     let d = /^\/actions\/artifacts\/(\d+)\/zip$/.exec(rest);
     if (method === 'GET' && d) {
