@@ -97,7 +97,8 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
           retry: {
             retries: tuning.retries,
             retryAfterBaseValue: tuning.unitMs,
-            doNotRetry: [400, 401, 403, 404, 410, 422, 429, 451],
+            // 409 (a merge conflict) and 422 mean the branch moved: the store re-reads, not the client.
+            doNotRetry: [400, 401, 403, 404, 409, 410, 422, 429, 451],
           },
           throttle: {
             onRateLimit: noRetry,
