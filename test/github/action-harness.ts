@@ -61,7 +61,7 @@ export function baselineHistory(series: string, runs = 12): History {
         ]),
         meta: new Map(),
       },
-    );
+    ).history;
   }
   return h;
 }
@@ -123,7 +123,10 @@ export function deps(
     },
     now: () => new Date('2026-04-01T12:00:00Z'),
     createApi: createOctokitApi,
-    upload: async (name, _file, text) => void uploads.push({ name, text }),
+    upload: async (name, files) => {
+      for (const f of files) uploads.push({ name, text: f.text });
+      return {};
+    },
     retry: { retries: 2, unitMs: 1 },
   };
 }
