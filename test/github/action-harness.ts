@@ -123,8 +123,9 @@ export function deps(
     },
     now: () => new Date('2026-04-01T12:00:00Z'),
     createApi: createOctokitApi,
+    // One entry per artifact, with the text of its first file (the history, or the HTML report).
     upload: async (name, files) => {
-      for (const f of files) uploads.push({ name, text: f.text });
+      uploads.push({ name, text: files[0]?.text ?? '' });
       return {};
     },
     retry: { retries: 2, unitMs: 1 },
