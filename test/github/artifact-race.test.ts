@@ -64,10 +64,14 @@ describe('K racing recording runs on the artifact store, 10% API faults', () => 
       let racing = false;
       let arrived = 0;
       const released = new Promise<void>((resolve) => {
+        const done = () => {
+          clearInterval(check);
+          resolve();
+        };
         const check = setInterval(() => {
-          if (arrived >= k) (clearInterval(check), resolve());
+          if (arrived >= k) done();
         }, 5);
-        setTimeout(() => (clearInterval(check), resolve()), 3000);
+        setTimeout(done, 3000);
       });
       // Stands in for @actions/artifact (the results service): a tenth of uploads fail outright.
       const upload: ArtifactUploader = async (name, files) => {
