@@ -26,7 +26,7 @@ describe('parseConfig: accepted keys', () => {
         changePoints: true,
       });
       expect(config.family).toBe('none');
-      expect(config.keep).toBe(500);
+      expect(config.keep).toBe(4000); // six months at 20 recorded runs a day (README, "Config file")
       expect(config.limits).toEqual({
         maxFileBytes: 64 * 1024 * 1024,
         maxLineLength: 1024 * 1024,
