@@ -89,8 +89,11 @@ export function parseHistory(text: string, source: string, options: DecodeOption
  * cannot be read.
  */
 export function decodeHistory(src: LineSource, report: ProblemSink, options: DecodeOptions = {}): Decoded | undefined {
+  // Line numbers are counted only for a message: reading from the end, counting means reading
+  // the file before the line.
+  const number = (line: RawLine): number => line.number ?? src.lineNumber(line.offset);
   const at = (line: RawLine, column?: number): string =>
-    column === undefined ? String(src.lineNumber(line.offset)) : `${src.lineNumber(line.offset)}:${column}`;
+    column === undefined ? String(number(line)) : `${number(line)}:${column}`;
   const forward = src.forward()[Symbol.iterator]();
   const first = forward.next();
   if (first.done) {
@@ -104,7 +107,7 @@ export function decodeHistory(src: LineSource, report: ProblemSink, options: Dec
   const take = (line: RawLine): Entry | undefined => {
     const value = parseLine(line, at, report, options.warn);
     if (value === undefined) return undefined;
-    const entry = decodeEntry(value, header.metrics.length, at(line), report);
+    const entry = decodeEntry(value, header.metrics.length, () => at(line), report);
     if (entry !== undefined) entries.push(entry);
     return entry;
   };
@@ -230,14 +233,16 @@ function decodeHeader(value: unknown, report: ProblemSink): Header | undefined {
 const NOT_OURS = 'point the history option at a file that Bellgate wrote';
 
 type Entry =
-  | { kind: 'run'; info: RunInfo; values: readonly unknown[]; n?: number; at: string }
+  | { kind: 'run'; info: RunInfo; values: readonly unknown[]; n?: number }
   | { kind: 'drop'; tombstone: Tombstone }
   | { kind: 'mark'; id: string; mark: LevelMark };
 
 /** One line after the header: a run, a tombstone or a mark; undefined (reported) when unusable. */
-function decodeEntry(value: unknown, metricCount: number, at: string, report: ProblemSink): Entry | undefined {
+function decodeEntry(value: unknown, metricCount: number, where: () => string, report: ProblemSink): Entry | undefined {
+  // The line's place is worked out only when there is a problem to report.
+  const at = where;
   if (!isObject(value)) {
-    report(at, `a line must be a JSON object, found ${typeName(value)}`);
+    report(at(), `a line must be a JSON object, found ${typeName(value)}`);
     return undefined;
   }
   if ('drop' in value) {
@@ -250,11 +255,11 @@ function decodeEntry(value: unknown, metricCount: number, at: string, report: Pr
   }
   if ('mark' in value) {
     const id = idOf(value.mark, '"mark"', at, report);
-    const mark = decodeMark(value, `${at}`, report);
+    const mark = decodeMark(value, at, report);
     return id === undefined || mark === undefined ? undefined : { kind: 'mark', id, mark };
   }
   if (!('id' in value)) {
-    report(at, 'a line must be a run (with "id"), a tombstone ("drop") or a mark ("mark")');
+    report(at(), 'a line must be a run (with "id"), a tombstone ("drop") or a mark ("mark")');
     return undefined;
   }
   const id = idOf(value.id, '"id"', at, report);
@@ -266,30 +271,30 @@ function decodeEntry(value: unknown, metricCount: number, at: string, report: Pr
   }
   if (value.pr !== undefined) {
     if (!isPullNumber(value.pr)) {
-      report(at, `${named}: "pr" must be a pull request number, found ${typeName(value.pr)}`);
+      report(at(), `${named}: "pr" must be a pull request number, found ${typeName(value.pr)}`);
       return undefined;
     }
     info.pr = value.pr;
   }
   const values = value.values ?? [];
   if (!Array.isArray(values)) {
-    report(at, `${named}: "values" must be an array, found ${typeName(values)}`);
+    report(at(), `${named}: "values" must be an array, found ${typeName(values)}`);
     return undefined;
   }
   if (values.length > metricCount) {
-    report(at, `${named} has ${values.length} values, but the header lists ${metricCount} metrics`);
+    report(at(), `${named} has ${values.length} values, but the header lists ${metricCount} metrics`);
     return undefined;
   }
   for (let i = 0; i < values.length; i++) {
     const v: unknown = values[i];
     if (v !== null && !(typeof v === 'number' && Number.isFinite(v))) {
-      report(at, `${named}: values[${i}] is ${typeName(v)}, not a finite number or null`);
+      report(at(), `${named}: values[${i}] is ${typeName(v)}, not a finite number or null`);
       return undefined;
     }
   }
   if (value.marks !== undefined) {
     if (!Array.isArray(value.marks)) {
-      report(at, `${named}: "marks" must be an array, found ${typeName(value.marks)}`);
+      report(at(), `${named}: "marks" must be an array, found ${typeName(value.marks)}`);
       return undefined;
     }
     const marks: LevelMark[] = [];
@@ -301,13 +306,13 @@ function decodeEntry(value: unknown, metricCount: number, at: string, report: Pr
     if (marks.length > 0) info.marks = marks;
   }
   const n = typeof value.n === 'number' && Number.isSafeInteger(value.n) && value.n >= 0 ? value.n : undefined;
-  return n === undefined ? { kind: 'run', info, values, at } : { kind: 'run', info, values, n, at };
+  return n === undefined ? { kind: 'run', info, values } : { kind: 'run', info, values, n };
 }
 
-function idOf(raw: unknown, field: string, at: string, report: ProblemSink): string | undefined {
+function idOf(raw: unknown, field: string, at: () => string, report: ProblemSink): string | undefined {
   if (typeof raw !== 'string' || raw === '' || raw.length > MAX_ID) {
     report(
-      at,
+      at(),
       `${field} must be a run id (a non-empty string of at most ${MAX_ID} characters), found ${typeName(raw)}`,
     );
     return undefined;
@@ -319,14 +324,14 @@ function optionalText<K extends string>(
   value: Record<string, unknown>,
   field: K,
   into: Partial<Record<K, string>>,
-  at: string,
+  at: () => string,
   report: ProblemSink,
   named = 'the line',
 ): boolean {
   const raw = value[field];
   if (raw === undefined || raw === null) return true;
   if (typeof raw !== 'string' || raw.length > MAX_TEXT) {
-    report(at, `${named}: "${field}" must be a string of at most ${MAX_TEXT} characters, found ${typeName(raw)}`);
+    report(at(), `${named}: "${field}" must be a string of at most ${MAX_TEXT} characters, found ${typeName(raw)}`);
     return false;
   }
   into[field] = raw;
@@ -338,14 +343,14 @@ function isPullNumber(v: unknown): v is number {
 }
 
 /** A level mark as a run line or mark line holds it. */
-function decodeMark(raw: unknown, at: string, report: ProblemSink, named = 'the mark'): LevelMark | undefined {
+function decodeMark(raw: unknown, at: () => string, report: ProblemSink, named = 'the mark'): LevelMark | undefined {
   if (!isObject(raw)) {
-    report(at, `${named}: a mark must be an object, found ${typeName(raw)}`);
+    report(at(), `${named}: a mark must be an object, found ${typeName(raw)}`);
     return undefined;
   }
   if (raw.reason !== 'accepted' && raw.reason !== 'manual') {
     report(
-      at,
+      at(),
       `${named}: a mark's "reason" must be "accepted" or "manual", found ${JSON.stringify(raw.reason) ?? 'nothing'}`,
     );
     return undefined;
@@ -353,21 +358,21 @@ function decodeMark(raw: unknown, at: string, report: ProblemSink, named = 'the 
   const mark: LevelMark = { reason: raw.reason };
   if (raw.metrics !== undefined) {
     if (!Array.isArray(raw.metrics) || !raw.metrics.every((g) => typeof g === 'string' && g !== '')) {
-      report(at, `${named}: a mark's "metrics" must be a list of metric name patterns`);
+      report(at(), `${named}: a mark's "metrics" must be a list of metric name patterns`);
       return undefined;
     }
     mark.metrics = raw.metrics as string[];
   }
   if (raw.pr !== undefined) {
     if (!isPullNumber(raw.pr)) {
-      report(at, `${named}: a mark's "pr" must be a pull request number, found ${typeName(raw.pr)}`);
+      report(at(), `${named}: a mark's "pr" must be a pull request number, found ${typeName(raw.pr)}`);
       return undefined;
     }
     mark.pr = raw.pr;
   }
   if (raw.note !== undefined) {
     if (typeof raw.note !== 'string' || raw.note.length > MAX_TEXT) {
-      report(at, `${named}: a mark's "note" must be a string of at most ${MAX_TEXT} characters`);
+      report(at(), `${named}: a mark's "note" must be a string of at most ${MAX_TEXT} characters`);
       return undefined;
     }
     mark.note = raw.note;

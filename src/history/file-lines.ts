@@ -41,6 +41,7 @@ export function fileLines(fd: number, size: number): LineSource {
       let pending: Buffer[] = [];
       let pendingBytes = 0;
       let lineStart = 0;
+      let number = 1;
       let block = FIRST_BLOCK;
       for (let position = 0; position < size;) {
         const chunk = readAt(fd, position, Math.min(block, size - position));
@@ -49,7 +50,7 @@ export function fileLines(fd: number, size: number): LineSource {
         for (let nl = chunk.indexOf(NEWLINE, from); nl >= 0; nl = chunk.indexOf(NEWLINE, from)) {
           const bytes =
             pendingBytes === 0 ? chunk.subarray(from, nl) : Buffer.concat([...pending, chunk.subarray(from, nl)]);
-          yield { text: bytes.toString('utf8'), offset: lineStart, complete: true } satisfies RawLine;
+          yield { text: bytes.toString('utf8'), offset: lineStart, complete: true, number: number++ } satisfies RawLine;
           pending = [];
           pendingBytes = 0;
           lineStart = position + nl + 1;
@@ -64,7 +65,8 @@ export function fileLines(fd: number, size: number): LineSource {
         position += chunk.length;
         block = Math.min(LARGEST_BLOCK, block * 2);
       }
-      if (pendingBytes > 0) yield { text: Buffer.concat(pending).toString('utf8'), offset: lineStart, complete: false };
+      if (pendingBytes > 0)
+        yield { text: Buffer.concat(pending).toString('utf8'), offset: lineStart, complete: false, number };
     },
     *backward(stop) {
       if (stop >= size) return;

@@ -11,6 +11,8 @@ export interface RawLine {
   /** Offset of the line's first character (string) or byte (file). */
   offset: number;
   complete: boolean;
+  /** Its 1-based line number, when the source knows it without counting (reading forward). */
+  number?: number;
 }
 
 export interface LineSource {
@@ -37,10 +39,10 @@ export function textLines(text: string): LineSource {
   return {
     *forward() {
       let from = start;
-      while (from < text.length) {
+      for (let number = 1; from < text.length; number++) {
         const nl = text.indexOf('\n', from);
         const to = nl < 0 ? text.length : nl;
-        yield line(from, to);
+        yield { ...line(from, to), number };
         from = to + 1;
       }
     },
