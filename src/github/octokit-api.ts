@@ -1,21 +1,24 @@
 /**
- * The real GitHubApi over octokit — the action's one HTTP client: @actions/github's client (which
- * sends every request, the artifact download's redirect to storage included, through the runner's
- * proxy: HTTPS_PROXY, HTTP_PROXY, NO_PROXY), with honourRetryAfter (rate-limit waits as GitHub
- * documents them, and a time limit on every try), @octokit/plugin-retry (5xx, network errors and
- * timeouts, growing backoff) and @octokit/plugin-throttling (content-creating requests spaced
- * apart). The branch store's Git Data calls (git-data.ts) and the artifact calls go through it.
- * Intervals are tunable so tests can run the same code with millisecond waits.
+ * The real GitHubApi over octokit — the action's one HTTP client: @octokit/core with
+ * honourRetryAfter (rate-limit waits as GitHub documents them, and a time limit on every try),
+ * @octokit/plugin-retry (5xx, network errors and timeouts, growing backoff) and
+ * @octokit/plugin-throttling (content-creating requests spaced apart). The branch store's Git
+ * Data calls (git-data.ts), the artifact calls and the PR comment go through it. Behind the
+ * runner's proxy (HTTPS_PROXY, HTTP_PROXY, NO_PROXY, read as @actions/http-client reads them)
+ * every request, the download's redirect to storage included, goes through that proxy
+ * (proxy-fetch.ts); without one, through Node's own fetch, which starts far faster than the
+ * proxy-capable client. Intervals are tunable so tests can run the same code with millisecond waits.
  */
 import { ArtifactGoneError, type ArtifactEntry } from '../history/artifact-store.js';
 import { DEFAULT_RETRY, statusOf, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
 import { readCapped } from './fetch-capped.js';
 import { createGitData } from './git-data.js';
+import { proxyFetch } from './proxy-fetch.js';
 import { honourRetryAfter } from './retry-after.js';
 
 const PER_PAGE = 100;
 
-type Octokit = ReturnType<typeof import('@actions/github').getOctokit>;
+type Octokit = InstanceType<typeof import('@octokit/core').Octokit>;
 
 type Json = Record<string, unknown>;
 const obj = (v: unknown): Json => (typeof v === 'object' && v !== null ? (v as Json) : {});
@@ -79,41 +82,39 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     log(`GitHub API rate limit on ${options.method ?? ''} ${options.url ?? ''} (asked to wait ${after} s)`);
     return false;
   };
-  // @actions/github parses the event payload when it is first imported; importing it (and the
-  // plugins, with Bottleneck) on first use keeps a run that never calls the API from loading any
-  // of it, and any failure there becomes a plain message instead of a crash at start-up.
+  // octokit and its plugins (with Bottleneck) load on the first call: a run that never calls the
+  // API loads none of it, and a failure there becomes a plain message instead of a crash at start-up.
   let client: Promise<Octokit> | undefined;
   const octokit = (): Promise<Octokit> =>
     (client ??= Promise.all([
-      import('@actions/github'),
+      import('@octokit/core'),
       import('@octokit/plugin-retry'),
       import('@octokit/plugin-throttling'),
-    ]).then(([{ getOctokit }, { retry }, { throttling }]) =>
-      getOctokit(
-        target.token,
-        {
-          baseUrl: target.baseUrl.replace(/\/+$/, ''),
-          // 403 and 429 rate limits are waited out by honourRetryAfter, not by plugin-retry.
-          retry: {
-            retries: tuning.retries,
-            retryAfterBaseValue: tuning.unitMs,
-            // 409 (a merge conflict) and 422 mean the branch moved: the store re-reads, not the client.
-            doNotRetry: [400, 401, 403, 404, 409, 410, 422, 429, 451],
-          },
-          throttle: {
-            onRateLimit: noRetry,
-            write: spacedGroup(tuning.unitMs) as never,
-            notifications: spacedGroup(3 * tuning.unitMs) as never,
-            onSecondaryRateLimit: noRetry,
-            retryAfterBaseValue: tuning.unitMs,
-          },
-          log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
+      proxyFetch(target.baseUrl),
+    ]).then(([{ Octokit }, { retry }, { throttling }, fetch]) => {
+      const Client = Octokit.plugin(honourRetryAfter(tuning, log) as never, retry, throttling);
+      return new Client({
+        auth: target.token,
+        baseUrl: target.baseUrl.replace(/\/+$/, ''),
+        userAgent: 'bellgate',
+        ...(fetch === undefined ? {} : { request: { fetch } }),
+        // 403 and 429 rate limits are waited out by honourRetryAfter, not by plugin-retry.
+        retry: {
+          retries: tuning.retries,
+          retryAfterBaseValue: tuning.unitMs,
+          // 409 (a merge conflict) and 422 mean the branch moved: the store re-reads, not the client.
+          doNotRetry: [400, 401, 403, 404, 409, 410, 422, 429, 451],
         },
-        honourRetryAfter(tuning, log) as never,
-        retry,
-        throttling,
-      ),
-    ));
+        throttle: {
+          onRateLimit: noRetry,
+          write: spacedGroup(tuning.unitMs) as never,
+          notifications: spacedGroup(3 * tuning.unitMs) as never,
+          onSecondaryRateLimit: noRetry,
+          retryAfterBaseValue: tuning.unitMs,
+        },
+        log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
+      } as never) as Octokit;
+    }));
   const repo = { owner: target.owner, repo: target.repo };
 
   async function pages<T>(

@@ -51,7 +51,8 @@ export function generate(dir, runs, metrics, seed = 7) {
   closeSync(floor);
   // The new run: the same distributions, so nothing should move (a quiet pull request).
   const run = Object.create(null);
-  for (let m = 0; m < metrics; m++) run[metricName(m)] = Number((levels[m] * (1 + 0.02 * gaussian(random))).toPrecision(5));
+  for (let m = 0; m < metrics; m++)
+    run[metricName(m)] = Number((levels[m] * (1 + 0.02 * gaussian(random))).toPrecision(5));
   writeFileSync(join(dir, 'run.json'), JSON.stringify(run));
   // keep well above the run count, so `record` appends instead of trimming; everything else default.
   writeFileSync(join(dir, 'bellgate.yml'), `keep: ${Math.max(2 * runs, 4000)}\n`);
