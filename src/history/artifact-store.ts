@@ -122,6 +122,11 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
       .sort((a, b) => (a.createdAt === b.createdAt ? b.id - a.id : a.createdAt < b.createdAt ? 1 : -1));
   }
 
+  // What this store downloaded already: an update after a read lists again (another run may have
+  // uploaded meanwhile) but does not download the same artifact twice, nor warn about it twice.
+  const downloaded = new Map<number, Uint8Array>();
+  const warned = new Set<number>();
+
   /** The artifact's history and the ids it covers; undefined when it is gone since the listing. */
   async function readOne(
     entry: ArtifactEntry,
@@ -129,9 +134,25 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
   ): Promise<{ history: History; covers: number[] } | undefined> {
     if (entry.sizeInBytes > maxDownload)
       throw new ZipRefusedError(`${entry.sizeInBytes} bytes, over the ${maxDownload} byte cap`);
-    let zip: Uint8Array;
+    let zip = downloaded.get(entry.id);
+    if (zip === undefined) {
+      zip = await download(entry);
+      if (zip === undefined) return undefined;
+      downloaded.set(entry.id, zip);
+    }
+    const files = readZipEntries(zip, [HISTORY_FILE, MERGED_FILE], zipLimits);
+    const text = files.get(HISTORY_FILE);
+    if (text === undefined) throw new ZipRefusedError(`no ${HISTORY_FILE} in the zip`);
+    const history = parseHistory(text, `${where} #${entry.id}/${HISTORY_FILE}`, newest === undefined ? {} : { newest });
+    if (history.series !== options.series)
+      throw new ZipRefusedError(`it holds series "${history.series}", not "${options.series}"`);
+    return { history, covers: coveredIds(files.get(MERGED_FILE)) };
+  }
+
+  /** The artifact's zip; undefined when it is gone since the listing. */
+  async function download(entry: ArtifactEntry): Promise<Uint8Array | undefined> {
     try {
-      zip = await options.api.downloadArtifact(entry.id, maxDownload);
+      return await options.api.downloadArtifact(entry.id, maxDownload);
     } catch (cause) {
       if (cause instanceof ArtifactGoneError) return undefined;
       // Only an artifact too large to take is the artifact's own fault. Anything else (5xx after
@@ -144,13 +165,6 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
         cause,
       });
     }
-    const files = readZipEntries(zip, [HISTORY_FILE, MERGED_FILE], zipLimits);
-    const text = files.get(HISTORY_FILE);
-    if (text === undefined) throw new ZipRefusedError(`no ${HISTORY_FILE} in the zip`);
-    const history = parseHistory(text, `${where} #${entry.id}/${HISTORY_FILE}`, newest === undefined ? {} : { newest });
-    if (history.series !== options.series)
-      throw new ZipRefusedError(`it holds series "${history.series}", not "${options.series}"`);
-    return { history, covers: coveredIds(files.get(MERGED_FILE)) };
   }
 
   /** Every artifact not covered by a newer one, merged; and the ids the result covers. */
@@ -189,7 +203,9 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
         bad += 1;
         // Covered from now on: its runs cannot be read, and the next upload need not look at it again.
         covered.add(entry.id);
-        options.warn(`skipped history artifact #${entry.id} (${entry.createdAt}): ${messageOf(cause)}`);
+        if (!warned.has(entry.id))
+          options.warn(`skipped history artifact #${entry.id} (${entry.createdAt}): ${messageOf(cause)}`);
+        warned.add(entry.id);
       }
     }
     if (good === 0 && bad > 0) {
@@ -244,7 +260,9 @@ export function createArtifactStore(options: ArtifactStoreOptions): HistoryStore
       } catch (cause) {
         throw new StoreError(`cannot upload the history artifact "${name}": ${messageOf(cause)}`, {
           where,
-          fix: 'check that the job may upload artifacts (ACTIONS_RUNTIME_TOKEN is set by the runner)',
+          fix: /409|already exists/i.test(messageOf(cause))
+            ? 'an earlier attempt of this workflow run already recorded it, and its artifact could not be replaced; nothing is lost'
+            : 'check that the job may upload artifacts (ACTIONS_RUNTIME_TOKEN is set by the runner)',
           cause,
         });
       }

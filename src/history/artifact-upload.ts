@@ -30,7 +30,13 @@ export function createArtifactUploader(tempRoot: string): ArtifactUploader {
         return await client.uploadArtifact(name, paths, dir, { retentionDays });
       } catch (error) {
         if (!/409|already exists/i.test(error instanceof Error ? error.message : String(error))) throw error;
-        await client.deleteArtifact(name);
+        // Replaced only when the earlier attempt's artifact can be found and deleted; otherwise the
+        // 409 stands (the store says the earlier attempt's numbers are kept).
+        const deleted = await client.deleteArtifact(name).then(
+          () => true,
+          () => false,
+        );
+        if (!deleted) throw error;
         return await client.uploadArtifact(name, paths, dir, { retentionDays });
       }
     } finally {

@@ -6,10 +6,12 @@
 // - the action's PR check, against a loopback stand-in of the GitHub API, under 0.3 s.
 //
 //   node test/bench/run.mjs [--runs 100,1000,10000] [--metrics 1000] [--repeat 5] [--dist dist]
-//                           [--only floor,check,record,action] [--keep-files] [--profile DIR]
+//                           [--only floor,check,record,action] [--keep-files] [--profile DIR] [--trace]
 //
 // --dist names the folder the bundles were built into (node test/build-dist.mjs DIR).
 // --profile DIR writes a CPU profile of every timed process into DIR (node --cpu-prof).
+// --trace prints every output line of the timed processes, and every call the API stand-in gets,
+// with the time it came (for finding where a process waits).
 // Every timed process is a fresh `node`; the processes of one table are run interleaved (one run
 // of each per round, the order turning each round), so a change in the machine's load falls on
 // every side of a ratio alike. Each line carries the 1-minute load average at its start.
@@ -101,6 +103,7 @@ async function runOnce(t) {
   rmSync(peakFile, { force: true });
   const profile = flags.profile ? ['--cpu-prof', '--cpu-prof-dir', resolve(flags.profile)] : [];
   const t0 = process.hrtime.bigint();
+  if (flags.trace) console.log(`  ${t.label} started at ${performance.now().toFixed(0)} ms`);
   const { code, out } = await new Promise((done) => {
     const child = spawn(process.execPath, [...profile, ...t.args], {
       cwd: t.cwd,
@@ -108,7 +111,7 @@ async function runOnce(t) {
         PATH: process.env.PATH,
         HOME: process.env.HOME,
         ...t.env,
-        NODE_OPTIONS: `--require ${peakPreload}${process.env.BENCH_EXTRA_REQUIRE ? ` --require ${process.env.BENCH_EXTRA_REQUIRE}` : ''}`,
+        NODE_OPTIONS: `--require ${peakPreload}`,
         BENCH_PEAK_FILE: peakFile,
       },
       stdio: ['ignore', 'pipe', 'pipe'],
@@ -215,6 +218,7 @@ function sizeTasks(runs) {
 async function apiStandin(zip, name) {
   const server = createServer((req, res) => {
     const url = new URL(req.url, 'http://127.0.0.1');
+    if (flags.trace) console.log(`  api at ${performance.now().toFixed(0)} ms: ${req.method} ${url.pathname}`);
     const json = (status, body) => {
       res.writeHead(status, { 'content-type': 'application/json' });
       res.end(JSON.stringify(body));
