@@ -4,8 +4,8 @@
 //
 // Usage: node examples/demo/generate.mjs
 // Writes runs.jsonl (the past runs, in the import format), pr-run.json (the pull request's metric
-// file), bellgate.yml (the config), and then history.json through the CLI's own import path:
-// `bellgate import --history history.json --runs runs.jsonl --series kestrel-post/ci`
+// file), bellgate.yml (the config), and then history.jsonl through the CLI's own import path:
+// `bellgate import --history history.jsonl --runs runs.jsonl --series kestrel-post/ci`
 // (needs the built CLI, dist/cli/index.js — run `npm run build` first).
 import { execFileSync } from 'node:child_process';
 import { existsSync, rmSync, writeFileSync } from 'node:fs';
@@ -183,12 +183,12 @@ function main() {
   const cli = resolve(here, '..', '..', 'dist', 'cli', 'index.js');
   if (!existsSync(cli)) {
     console.error(
-      `wrote runs.jsonl, pr-run.json, bellgate.yml; build the CLI (npm run build) and run again to write history.json`,
+      `wrote runs.jsonl, pr-run.json, bellgate.yml; build the CLI (npm run build) and run again to write history.jsonl`,
     );
     process.exitCode = 2;
     return;
   }
-  const history = join(here, 'history.json');
+  const history = join(here, 'history.jsonl');
   rmSync(history, { force: true });
   execFileSync(
     process.execPath,

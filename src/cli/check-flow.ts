@@ -11,7 +11,8 @@ import type { CommandContext } from './context.js';
 import { EXIT } from './exit-codes.js';
 import { loadConfig } from './load-config.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
-import { openEarly } from './open-history.js';
+import { runsToRead } from '../history/read-window.js';
+import { openHistory } from './open-history.js';
 import { resolvePath } from './paths.js';
 import { recordRun } from './record-run.js';
 import { runInfoFrom, type RunInfoOptions } from './run-info.js';
@@ -50,10 +51,11 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
       fix: 'name the history file to append this run to',
     });
   }
-  const opening = openEarly(ctx, options.history, options.series);
   const config = await loadConfig(ctx, options.config);
   const read = await loadRun(ctx, config, options);
-  const { history, store } = await opening;
+  // Read after the config and metric files, so their problems are reported first; only the
+  // newest runs the gate can use are read (from the end of the file).
+  const { history, store } = await openHistory(ctx, options.history, options.series, runsToRead(config));
   // Values in the units the history stores (0.121 s against ms becomes 121 ms), or a refusal.
   const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), ctx.io.cwd);
   if (options.history !== undefined && history.runs.length === 0) {
@@ -78,8 +80,8 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   }
   if (options.record && store) {
     const info = runInfoFrom(ctx, options);
-    const saved = await recordRun(store, history, info, run, config.keep);
-    ctx.io.stderr(`bellgate: recorded run ${info.id} in ${store.describe()} (${saved.runs.length} runs)\n`);
+    const saved = await recordRun(store, info, run, config.keep);
+    ctx.io.stderr(`bellgate: recorded run ${info.id} in ${store.describe()} (${saved.runs} runs)\n`);
   }
   return report;
 }

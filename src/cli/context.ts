@@ -1,3 +1,5 @@
+import type { MachineFacts } from '../history/runner-fingerprint.js';
+
 /**
  * What every command receives: the outside world as plain values and callbacks, so tests run the
  * whole CLI in-process with a fake terminal, environment and working folder.
@@ -14,6 +16,8 @@ export interface CliIo {
   isTTY: boolean;
   /** Whether stderr is a terminal (progress lines are drawn only then). */
   stderrIsTTY?: boolean;
+  /** The machine, for the runner fingerprint of recorded runs (default: node:os of this process). */
+  machine?: MachineFacts;
 }
 
 /** Passed to every command factory. A command's action sets `exitCode` (0 unless it says otherwise). */

@@ -4,7 +4,7 @@ import { fileURLToPath } from 'node:url';
 import { InputError } from '../errors/input-error.js';
 
 /** The files of the demo scenario, all in examples/demo. */
-export const DEMO_FILES = { history: 'history.json', run: 'pr-run.json', config: 'bellgate.yml' } as const;
+export const DEMO_FILES = { history: 'history.jsonl', run: 'pr-run.json', config: 'bellgate.yml' } as const;
 
 /**
  * Finds examples/demo. The same code runs from src/cli/ (tests), from the bundle dist/cli/index.js
@@ -32,7 +32,7 @@ export function locateDemo(cwd: string, script: string | undefined, moduleUrl: s
   if (found === undefined) {
     throw new InputError('cannot find the demo data (examples/demo)', {
       where: unique.join(', '),
-      fix: 'run the demo from a Bellgate checkout (npm run demo), where examples/demo holds history.json, pr-run.json and bellgate.yml',
+      fix: 'run the demo from a Bellgate checkout (npm run demo), where examples/demo holds history.jsonl, pr-run.json and bellgate.yml',
     });
   }
   return found;

@@ -1,26 +1,14 @@
-import type { History, RunInfo } from '../history/history.js';
-import { appendRun, trimHistory } from '../history/merge.js';
-import type { HistoryStore } from '../history/store.js';
+import type { RunInfo } from '../history/history.js';
+import type { HistoryStore, UpdateOutcome } from '../history/store.js';
 import type { Run } from '../inputs/run.js';
 
 /**
- * Appends one run to the history (a run with the same id is replaced), trims to the newest `keep`
- * runs — the only deletion — and saves through the store, which refuses to lose runs otherwise.
- * Takes `history` over: afterwards only its runs and series may be read (its value arrays may
- * have been extended by the new run's values; see appendRun's extendInPlace).
- * @returns the history as saved.
- * @throws StoreError when the store cannot write.
+ * Records one run in the store: appended (a run with the same id, or an earlier attempt of the
+ * same CI run, is replaced), the history trimmed to about the newest `keep` runs — besides a drop,
+ * the only deletion. The store applies it to what is stored when it writes, under its lock.
+ * @returns what the store did (runs kept, the run replaced).
+ * @throws StoreError when the store cannot write; InputError when the run cannot be recorded.
  */
-export async function recordRun(
-  store: HistoryStore,
-  history: History,
-  info: RunInfo,
-  run: Run,
-  keep: number,
-): Promise<History> {
-  // The loaded history is not read again (callers use only its runs), so its columns are extended
-  // in place rather than copied.
-  const next = trimHistory(appendRun(history, info, run, { extendInPlace: true }), keep);
-  await store.save(next, history.runs.length);
-  return next;
+export async function recordRun(store: HistoryStore, info: RunInfo, run: Run, keep: number): Promise<UpdateOutcome> {
+  return store.update({ kind: 'record', info, run, keep });
 }

@@ -1,4 +1,5 @@
 import type { RunInfo } from '../history/history.js';
+import { machineFacts, runnerFingerprint } from '../history/runner-fingerprint.js';
 import { InputError } from '../errors/input-error.js';
 import type { CommandContext } from './context.js';
 
@@ -16,7 +17,7 @@ const ISO_TIME = /^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2}(\.\d+)?)?(Z|[+-]\d{2}:\d
 /**
  * Describes the run being recorded. Flags win; in GitHub Actions the standard variables fill the
  * gaps (id = GITHUB_RUN_ID-GITHUB_RUN_ATTEMPT, so a re-run replaces rather than doubles); else the
- * id is "local-" plus the time, and the time is now.
+ * id is "local-" plus the time, and the time is now. The runner fingerprint describes the machine.
  * @throws InputError when --time is not an ISO-8601 date-time with a zone, or --id is empty.
  * @example runInfoFrom(ctx, { id: '77-1', time: '2026-05-04T10:20:30Z' }) // { id: '77-1', time: '2026-05-04T10:20:30.000Z', ... }
  */
@@ -59,5 +60,6 @@ export function runInfoFrom(ctx: CommandContext, options: RunInfoOptions): RunIn
   if (sha !== undefined) info.sha = sha;
   if (ref !== undefined) info.ref = ref;
   if (event !== undefined) info.event = event;
+  info.runner = runnerFingerprint(env, ctx.io.machine ?? machineFacts());
   return info;
 }

@@ -28,8 +28,12 @@ export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({
 /** The chance of any false alarm in a run that family control holds to by default (DESIGN.md). */
 export const DEFAULT_BUDGET = 0.01;
 
-/** Newest runs kept in a history document. */
-export const DEFAULT_KEEP = 500;
+/**
+ * Newest runs kept in a history document: six months of a busy repository (20 recorded runs a
+ * day is 3,660 runs in 183 days). A record appends one line whatever the length, so only the
+ * file's size (about 4,000 x 100 values) speaks against more.
+ */
+export const DEFAULT_KEEP = 4000;
 
 /**
  * The configuration used when there is no file (or it is empty): a fresh, mutable copy each call.

@@ -29,6 +29,8 @@ export interface RetryTuning {
   retries: number;
   /** Multiplies plugin-retry's backoff steps (1, 4, 9 ... units) and Retry-After seconds. */
   unitMs: number;
+  /** Time limit of one try of a request (default 30 s). */
+  timeoutMs?: number;
 }
 
 export const DEFAULT_RETRY: RetryTuning = { retries: 3, unitMs: 1000 };

@@ -20,9 +20,11 @@ export async function loadHistory(
   series: string,
   setting: Omit<StoreSetting, 'step'>,
   sink: ActionSink,
+  newest?: number,
 ): Promise<{ history: History; problem?: StoreProblem }> {
   try {
-    const history = await store.load();
+    // Only the newest runs a check can use (the file store reads them from the end of the file).
+    const history = await store.read(newest === undefined ? {} : { newest });
     sink.info(`bellgate: read ${history.runs.length} baseline runs from ${logText(store.describe())}`);
     return { history };
   } catch (error) {
@@ -32,12 +34,12 @@ export async function loadHistory(
 }
 
 /**
- * Appends the run, trims to `keep` newest runs and saves.
- * @example (await recordRun(store, history, info, run, 500, setting, sink)).problem // undefined when saved
+ * Records the run (the store appends it to what it holds when it writes, and trims to about the
+ * `keep` newest runs).
+ * @example (await recordRun(store, info, run, 4000, setting, sink)).problem // undefined when saved
  */
 export async function recordRun(
   store: HistoryStore,
-  history: History,
   info: RunInfo,
   run: Run,
   keep: number,
@@ -45,11 +47,8 @@ export async function recordRun(
   sink: ActionSink,
 ): Promise<{ problem?: StoreProblem }> {
   try {
-    // Loaded here: a check that records nothing (every pull request) never needs the merge code.
-    const { appendRun, trimHistory } = await import('../history/merge.js');
-    const next = trimHistory(appendRun(history, info, run), keep);
-    await store.save(next, history.runs.length);
-    sink.info(`bellgate: recorded run ${logText(info.id)} in ${logText(store.describe())} (${next.runs.length} runs)`);
+    const saved = await store.update({ kind: 'record', info, run, keep });
+    sink.info(`bellgate: recorded run ${logText(info.id)} in ${logText(store.describe())} (${saved.runs} runs)`);
     return {};
   } catch (error) {
     if (!isStoreError(error)) throw error;
@@ -58,12 +57,14 @@ export async function recordRun(
 }
 
 /**
- * The history entry of this run: id `${GITHUB_RUN_ID}-${GITHUB_RUN_ATTEMPT}`, sha, ref, event, time.
- * @example runInfo(context, new Date()).id // '8123-1'
+ * The history entry of this run: id `${GITHUB_RUN_ID}-${GITHUB_RUN_ATTEMPT}`, sha, ref, event,
+ * time, and the runner fingerprint (when given).
+ * @example runInfo(context, new Date(), 'Linux X64 | ubuntu24 20261110.1 | ... | node 24.11.0').id // '8123-1'
  */
-export function runInfo(context: RunContext, now: Date): RunInfo {
+export function runInfo(context: RunContext, now: Date, runner?: string): RunInfo {
   const info: RunInfo = { id: context.runId, event: context.eventName, time: now.toISOString() };
   if (context.sha) info.sha = context.sha;
   if (context.ref) info.ref = context.ref;
+  if (runner) info.runner = runner;
   return info;
 }

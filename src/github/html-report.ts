@@ -27,7 +27,7 @@ export async function uploadHtml(
     const { renderHtmlReport } = await import('../report/html.js');
     const html = renderHtmlReport({ report, history, generatedAt: deps.now().toISOString() });
     await deps.writeText(join(context.runnerTemp, 'bellgate', `${name}.html`), html);
-    await deps.upload(name, 'report.html', html, retentionDays);
+    await deps.upload(name, [{ name: 'report.html', text: html }], retentionDays);
     deps.sink.info(`bellgate: uploaded the HTML report as artifact ${name}`);
   } catch (error) {
     deps.sink.warning(`bellgate: could not upload the HTML report: ${describeError(error)}`);

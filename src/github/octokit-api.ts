@@ -1,18 +1,24 @@
 /**
- * The real GitHubApi over octokit (@actions/github's client, which honours the runner's proxy),
- * with @octokit/plugin-retry (5xx and network errors, growing backoff), honourRetryAfter (429,
- * waiting as Retry-After says) and @octokit/plugin-throttling (GitHub's rate-limit answers).
- * Intervals are tunable so tests can run the same code with millisecond waits.
+ * The real GitHubApi over octokit — the action's one HTTP client: @octokit/core with
+ * honourRetryAfter (rate-limit waits as GitHub documents them, and a time limit on every try),
+ * @octokit/plugin-retry (5xx, network errors and timeouts, growing backoff) and
+ * @octokit/plugin-throttling (content-creating requests spaced apart). The branch store's Git
+ * Data calls (git-data.ts), the artifact calls and the PR comment go through it. Behind the
+ * runner's proxy (HTTPS_PROXY, HTTP_PROXY, NO_PROXY, read as @actions/http-client reads them)
+ * every request, the download's redirect to storage included, goes through that proxy
+ * (proxy-fetch.ts); without one, through Node's own fetch, which starts far faster than the
+ * proxy-capable client. Intervals are tunable so tests can run the same code with millisecond waits.
  */
-import type { ArtifactEntry } from '../history/artifact-store.js';
-import { createGitDataClient } from '../history/branch-rest.js';
-import { DEFAULT_RETRY, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
-import { fetchCapped, readCapped } from './fetch-capped.js';
+import { ArtifactGoneError, type ArtifactEntry } from '../history/artifact-store.js';
+import { DEFAULT_RETRY, statusOf, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
+import { readCapped } from './fetch-capped.js';
+import { createGitData } from './git-data.js';
+import { proxyFetch } from './proxy-fetch.js';
 import { honourRetryAfter } from './retry-after.js';
 
 const PER_PAGE = 100;
 
-type Octokit = ReturnType<typeof import('@actions/github').getOctokit>;
+type Octokit = InstanceType<typeof import('@octokit/core').Octokit>;
 
 type Json = Record<string, unknown>;
 const obj = (v: unknown): Json => (typeof v === 'object' && v !== null ? (v as Json) : {});
@@ -70,51 +76,45 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
   const tuning = target.retry ?? DEFAULT_RETRY;
   const maxPages = target.maxPages ?? 10;
   const log = target.log ?? (() => undefined);
-  const retryLimit = (
-    after: number,
-    options: { method?: string; url?: string },
-    _o: unknown,
-    count: number,
-  ): boolean => {
-    log(
-      `GitHub API asked to wait ${after} s before ${options.method ?? ''} ${options.url ?? ''} (retry ${count + 1} of ${tuning.retries})`,
-    );
-    return count < tuning.retries;
+  // Rate limits are waited out in honourRetryAfter, once; the throttling plugin only spaces
+  // writes and logs what reaches it.
+  const noRetry = (after: number, options: { method?: string; url?: string }): boolean => {
+    log(`GitHub API rate limit on ${options.method ?? ''} ${options.url ?? ''} (asked to wait ${after} s)`);
+    return false;
   };
-  // @actions/github parses the event payload when it is first imported; importing it (and the
-  // plugins, with Bottleneck) on first use keeps a run that never calls the API from loading any
-  // of it, and any failure there becomes a plain message instead of a crash at start-up.
+  // octokit and its plugins (with Bottleneck) load on the first call: a run that never calls the
+  // API loads none of it, and a failure there becomes a plain message instead of a crash at start-up.
   let client: Promise<Octokit> | undefined;
   const octokit = (): Promise<Octokit> =>
     (client ??= Promise.all([
-      import('@actions/github'),
+      import('@octokit/core'),
       import('@octokit/plugin-retry'),
       import('@octokit/plugin-throttling'),
-    ]).then(([{ getOctokit }, { retry }, { throttling }]) =>
-      getOctokit(
-        target.token,
-        {
-          baseUrl: target.baseUrl.replace(/\/+$/, ''),
-          // 429 is retried by honourRetryAfter (which reads Retry-After), not by plugin-retry.
-          retry: {
-            retries: tuning.retries,
-            retryAfterBaseValue: tuning.unitMs,
-            doNotRetry: [400, 401, 403, 404, 410, 422, 429, 451],
-          },
-          throttle: {
-            onRateLimit: retryLimit,
-            write: spacedGroup(tuning.unitMs) as never,
-            notifications: spacedGroup(3 * tuning.unitMs) as never,
-            onSecondaryRateLimit: retryLimit,
-            retryAfterBaseValue: tuning.unitMs,
-          },
-          log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
+      proxyFetch(target.baseUrl),
+    ]).then(([{ Octokit }, { retry }, { throttling }, fetch]) => {
+      const Client = Octokit.plugin(honourRetryAfter(tuning, log) as never, retry, throttling);
+      return new Client({
+        auth: target.token,
+        baseUrl: target.baseUrl.replace(/\/+$/, ''),
+        userAgent: 'bellgate',
+        ...(fetch === undefined ? {} : { request: { fetch } }),
+        // 403 and 429 rate limits are waited out by honourRetryAfter, not by plugin-retry.
+        retry: {
+          retries: tuning.retries,
+          retryAfterBaseValue: tuning.unitMs,
+          // 409 (a merge conflict) and 422 mean the branch moved: the store re-reads, not the client.
+          doNotRetry: [400, 401, 403, 404, 409, 410, 422, 429, 451],
         },
-        honourRetryAfter(tuning) as never,
-        retry,
-        throttling,
-      ),
-    ));
+        throttle: {
+          onRateLimit: noRetry,
+          write: spacedGroup(tuning.unitMs) as never,
+          notifications: spacedGroup(3 * tuning.unitMs) as never,
+          onSecondaryRateLimit: noRetry,
+          retryAfterBaseValue: tuning.unitMs,
+        },
+        log: { debug: () => undefined, info: () => undefined, warn: log, error: log },
+      } as never) as Octokit;
+    }));
   const repo = { owner: target.owner, repo: target.repo };
 
   async function pages<T>(
@@ -142,22 +142,45 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
         toArtifact,
       ),
     async downloadArtifact(id, maxBytes) {
-      // The API answers 302 with a short-lived storage URL; following it by hand keeps the token
-      // off the storage request and lets the download stop at the size cap.
-      const res = await (
-        await octokit()
-      ).request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
-        ...repo,
-        artifact_id: id,
-        archive_format: 'zip',
-        request: { redirect: 'manual', parseSuccessResponseBody: false },
-      });
-      const location = (res.headers as Record<string, string | undefined>).location;
-      if (res.status >= 300 && res.status < 400 && location) return fetchCapped(location, maxBytes, tuning);
-      if ((res.status as number) === 200 && res.data && typeof (res.data as ReadableStream).getReader === 'function') {
-        return readCapped(res.data as ReadableStream<Uint8Array>, maxBytes);
+      // The API answers 302 with a short-lived storage URL, which fetch follows through the same
+      // client (proxy, retries of 5xx from storage); a redirect to another origin drops the
+      // Authorization header (Fetch standard, "HTTP-redirect fetch"), so the token stays here.
+      let res: { status: number; headers: Record<string, unknown>; data: unknown };
+      try {
+        res = await (
+          await octokit()
+        ).request('GET /repos/{owner}/{repo}/actions/artifacts/{artifact_id}/{archive_format}', {
+          ...repo,
+          artifact_id: id,
+          archive_format: 'zip',
+          request: { parseSuccessResponseBody: false },
+        });
+      } catch (error) {
+        const status = statusOf(error);
+        if (status === 404 || status === 410) throw new ArtifactGoneError(`artifact #${id} answered ${status}`);
+        throw error;
       }
-      throw new Error(`download of artifact #${id} answered ${res.status} without a location`);
+      const declared = Number(res.headers['content-length'] ?? 0);
+      if (declared > maxBytes) {
+        await (res.data as ReadableStream | undefined)?.cancel?.();
+        throw new Error(`artifact is ${declared} bytes, over the ${maxBytes} byte cap`);
+      }
+      if (res.data && typeof (res.data as ReadableStream).getReader === 'function')
+        return readCapped(res.data as ReadableStream<Uint8Array>, maxBytes);
+      throw new Error(`download of artifact #${id} answered ${res.status} without a body`);
+    },
+    async deleteArtifact(id) {
+      try {
+        await (
+          await octokit()
+        ).request('DELETE /repos/{owner}/{repo}/actions/artifacts/{artifact_id}', { ...repo, artifact_id: id });
+        return 'deleted';
+      } catch (error) {
+        const status = statusOf(error);
+        if (status === 403) return 'denied';
+        if (status === 404 || status === 410) return 'gone';
+        throw error;
+      }
     },
     listIssueLabels: (issue) =>
       pages(
@@ -184,13 +207,7 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
         await octokit()
       ).request('PATCH /repos/{owner}/{repo}/issues/comments/{comment_id}', { ...repo, comment_id: id, body });
     },
-    // The branch store's client: fetch-based, with its own timeout and the same retry tuning.
-    gitData: createGitDataClient({
-      ...repo,
-      token: target.token,
-      baseUrl: target.baseUrl,
-      retries: tuning.retries,
-      unitMs: tuning.unitMs,
-    }),
+    // The branch store's calls, through this same client.
+    gitData: createGitData(octokit, repo),
   };
 }

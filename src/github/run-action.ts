@@ -24,6 +24,8 @@ import { runGate } from '../gate/gate.js';
 import { mostlyMissing } from '../gate/missing-metrics.js';
 import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
+import { runsToRead } from '../history/read-window.js';
+import { machineFacts, runnerFingerprint, type MachineFacts } from '../history/runner-fingerprint.js';
 import type { HistoryStore } from '../history/store.js';
 import { readMetricFiles } from '../inputs/read-files.js';
 import { withExactPlace } from '../inputs/exact-place.js';
@@ -66,6 +68,8 @@ export interface ActionDeps {
   upload: ArtifactUploader;
   createStore?: (spec: StoreSpec) => HistoryStore | Promise<HistoryStore>;
   retry?: RetryTuning;
+  /** The machine, for the runner fingerprint of a recorded run (default: node:os of this process). */
+  machine?: MachineFacts;
 }
 
 /** The result, for callers and tests; the step's failure itself goes through sink.setFailed. */
@@ -142,24 +146,26 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     api: apiOnce,
     upload: deps.upload,
     warn: (m) => sink.warning(`bellgate: ${m}`),
+    info: (m) => sink.info(`bellgate: ${m}`),
   });
   const setting = { store: inputs.store, history: inputs.history };
 
-  const loaded = await loadHistory(store, series, setting, sink);
+  const loaded = await loadHistory(store, series, setting, sink, runsToRead(config));
   const { history } = loaded;
   // Values in the units the history stores them in, or a refusal naming file, line and units.
   const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), deps.cwd);
-  let report = runGate({ config, history, run, series, accepted: false });
+  const runner = runnerFingerprint(deps.env, deps.machine ?? machineFacts());
+  let report = runGate({ config, history, run, series, runner, accepted: false });
   if (report.verdict === 'regressed') {
     // Labels matter only now; the payload's may be stale (a label added after the push, a re-run).
     const source = await acceptLabelSource(apiOnce, context, inputs.acceptLabel, sink);
-    if (source !== undefined) report = runGate({ config, history, run, series, accepted: true });
+    if (source !== undefined) report = runGate({ config, history, run, series, runner, accepted: true });
   }
 
   let recorded = false;
   let saveProblem: StoreProblem | undefined;
   if (decision.record && loaded.problem === undefined) {
-    saveProblem = (await recordRun(store, history, runInfo(context, deps.now()), run, config.keep, setting, sink))
+    saveProblem = (await recordRun(store, runInfo(context, deps.now(), runner), run, config.keep, setting, sink))
       .problem;
     recorded = saveProblem === undefined;
   }

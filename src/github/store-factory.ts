@@ -23,6 +23,8 @@ export interface StoreSpec {
   api: () => GitHubApi | Promise<GitHubApi>;
   upload: ArtifactUploader;
   warn: (message: string) => void;
+  /** Routine news worth a log line (superseded artifacts that could not be deleted). */
+  info?: (message: string) => void;
 }
 
 /** Builds one kind of store. The artifact and branch stores load on use: a file store (and the
@@ -40,6 +42,7 @@ export const STORE_BUILDERS: Record<StoreKind, StoreBuilder> = {
       repositoryId: s.repositoryId,
       retentionDays: s.retentionDays,
       warn: s.warn,
+      ...(s.info ? { info: s.info } : {}),
     }),
   file: (s) => createFileStore(isAbsolute(s.history) ? s.history : resolve(s.workspace || '.', s.history), s.series),
   branch: buildBranchStore,

@@ -1,15 +1,14 @@
 /**
  * The Git Data calls the branch store makes (shaped after the public REST reference,
- * docs.github.com/rest/git: refs, commits, trees, blobs, and "Get repository content"), and the
- * error they throw. branch-rest.ts implements them over fetch; tests point it at a loopback server.
+ * docs.github.com/rest/git: refs, commits, trees, blobs; "Get repository content"; "Merge a
+ * branch"), the error they throw, and how a failure answer is classified. src/github/git-data.ts
+ * implements them over octokit; tests point it at a loopback stand-in.
  */
 
-/** One tree entry to write: a file (mode 100644) whose blob was created before. */
-export interface TreeEntryInput {
+/** A file to write into a tree: its path (may hold "/") and text (the server writes the blob). */
+export interface TreeFile {
   path: string;
-  mode: '100644';
-  type: 'blob';
-  sha: string;
+  text: string;
 }
 
 export interface GitDataApi {
@@ -21,38 +20,83 @@ export interface GitDataApi {
   findFile(path: string, commit: string): Promise<{ sha: string; size: number } | undefined>;
   /** A blob's bytes decoded as UTF-8. */
   getBlobText(sha: string): Promise<string>;
-  createBlob(text: string): Promise<string>;
-  /** A new tree: `baseTree` (when given) with `entries` added or replaced (paths may hold "/"). */
-  createTree(entries: TreeEntryInput[], baseTree?: string): Promise<string>;
+  /** A new tree: `baseTree` (when given) with `files` added or replaced; one request, no blob calls. */
+  createTree(files: TreeFile[], baseTree?: string): Promise<string>;
   /** A new commit; no parents makes an orphan (the first commit of a new branch). */
   createCommit(message: string, tree: string, parents: string[]): Promise<string>;
-  /** Creates refs/heads/<branch> at sha; a branch that exists already is a GitDataError with conflict. */
+  /** Creates refs/heads/<branch> at sha; a branch that exists already is a GitDataError 'conflict'. */
   createBranch(branch: string, sha: string): Promise<void>;
-  /** Moves the branch to sha with force false; a non-fast-forward is a GitDataError with conflict. */
-  updateBranch(branch: string, sha: string): Promise<void>;
+  /**
+   * Merges commit `sha` into the branch on the server ("Merge a branch"): 'merged', or 'contained'
+   * when the branch holds it already (a retried request). Files both sides changed are a
+   * GitDataError 'conflict'; a missing branch is 'missing'.
+   */
+  mergeIntoBranch(branch: string, sha: string, message: string): Promise<'merged' | 'contained'>;
 }
 
 /**
- * A Git Data call failed. `status` is the HTTP status (undefined for a network error, timeout or
- * truncated answer); `transient` says a retry may succeed (5xx, 429, network); `conflict` says the
- * branch moved under us (409, or 422 on a ref write) and the store should re-read and merge.
+ * What a failed Git Data call means for the store:
+ * - conflict: the branch moved under us (the same file changed; the branch appeared) — re-read, retry;
+ * - protected: a branch protection rule or a ruleset refuses the write — retrying cannot help;
+ * - rate-limited: a secondary or primary rate limit — wait as long as GitHub asked (`retryAfter`);
+ * - transient: a server error, a dropped connection or a timeout — retry;
+ * - denied: the token may not (401, 403) — fix the permissions;
+ * - missing: the branch or an object is not there (404);
+ * - other: anything else (a 422 that is none of the above): fail.
  */
+export type GitDataFailure = 'conflict' | 'protected' | 'rate-limited' | 'transient' | 'denied' | 'missing' | 'other';
+
+/** A Git Data call failed; `kind` says what that means (classifyGitDataFailure). */
 export class GitDataError extends Error {
   override name = 'GitDataError';
   readonly status?: number;
-  readonly transient: boolean;
-  readonly conflict: boolean;
-  /** Seconds the server asked to wait (Retry-After), if it did. */
+  readonly kind: GitDataFailure;
+  /** Seconds GitHub asked to wait, for a rate limit. */
   readonly retryAfter?: number;
 
   constructor(
     message: string,
-    options: { status?: number; transient?: boolean; conflict?: boolean; retryAfter?: number; cause?: unknown } = {},
+    options: { status?: number; kind: GitDataFailure; retryAfter?: number; cause?: unknown },
   ) {
     super(message, options.cause === undefined ? undefined : { cause: options.cause });
     this.status = options.status;
-    this.transient = options.transient ?? false;
-    this.conflict = options.conflict ?? false;
-    this.retryAfter = options.retryAfter;
+    this.kind = options.kind;
+    if (options.retryAfter !== undefined) this.retryAfter = options.retryAfter;
   }
+
+  /** True when trying again (after a wait) may succeed. */
+  get transient(): boolean {
+    return this.kind === 'transient' || this.kind === 'rate-limited';
+  }
+}
+
+const PROTECTION =
+  /repository rule|rule violation|protected branch|protected ref|branch protection|ruleset|required status check|status checks? .*expected|changes must be made through a pull request|cannot (update|create) (this )?(protected )?ref/i;
+
+/**
+ * The meaning of a failure answer: HTTP `status` (undefined for a network error or a timeout),
+ * GitHub's `message`, and `rateWait`, the seconds a rate-limit answer asks to wait (undefined when
+ * the answer is not a rate limit; see src/github/retry-after.ts for how it is read).
+ * Refs and merges: 422 "Update is not a fast forward", "Reference already exists" and "Reference
+ * does not exist", and 409 "Merge conflict", mean the branch moved; a 422 or 409 that speaks of a
+ * repository rule, a protected branch or a required status check is a protection that refuses us.
+ *
+ * @example classifyGitDataFailure(422, 'Repository rule violations found\n\nCannot update this protected ref.', undefined) // { kind: 'protected' }
+ */
+export function classifyGitDataFailure(
+  status: number | undefined,
+  message: string,
+  rateWait: number | undefined,
+): { kind: GitDataFailure; retryAfter?: number } {
+  if (rateWait !== undefined) return { kind: 'rate-limited', retryAfter: rateWait };
+  if (status === undefined || status >= 500) return { kind: 'transient' };
+  if ((status === 422 || status === 409 || status === 403) && PROTECTION.test(message)) return { kind: 'protected' };
+  if (status === 409) return { kind: 'conflict' };
+  if (status === 422)
+    return /not a fast[- ]?forward|reference already exists|reference does not exist|merge conflict/i.test(message)
+      ? { kind: 'conflict' }
+      : { kind: 'other' };
+  if (status === 401 || status === 403) return { kind: 'denied' };
+  if (status === 404) return { kind: 'missing' };
+  return { kind: 'other' };
 }

@@ -16,12 +16,12 @@ export const BRANCH_FOLDER = 'bellgate';
  * The file of a series on the data branch: a readable slug (letters, digits, `.`, `_`, `-`; no
  * leading dot, so never `..` or a hidden file) plus 8 hex of SHA-256 of the exact series name, so
  * series whose slugs coincide ("a/b", "a b") still get different files. Any string is safe.
- * @example seriesFilePath('bench/linux') // 'bellgate/bench-linux-<8 hex>.json'
+ * @example seriesFilePath('bench/linux') // 'bellgate/bench-linux-<8 hex>.jsonl'
  */
 export function seriesFilePath(series: string): string {
   const slug = seriesSlug(series);
   const hash = createHash('sha256').update(series, 'utf8').digest('hex').slice(0, 8);
-  return `${BRANCH_FOLDER}/${slug === '' ? hash : `${slug}-${hash}`}.json`;
+  return `${BRANCH_FOLDER}/${slug === '' ? hash : `${slug}-${hash}`}.jsonl`;
 }
 
 /**

@@ -1,16 +1,18 @@
 /**
  * The in-memory history of one series: run descriptions oldest first, and one value column per
- * metric aligned with them (NaN where a run lacks the metric). Columnar because the gate reads a
- * metric's whole past at once, and because the stored document is columnar too (names once).
- * This module is pure; reading and writing documents lives beside it (document.ts, stores).
- * A History is never changed in place: appendRun, trimHistory and merges return new ones, and may
- * share unchanged value arrays with their input; the file store relies on that when it splices an
- * append into the text it read (splice-append.ts compares values with the arrays it decoded).
- * The one exception adds and never changes: appendRun's `extendInPlace`, for a caller that gives
- * the old History up, pushes the new run's values onto its arrays.
+ * metric aligned with them (NaN where a run lacks the metric), plus the tombstones of runs dropped
+ * on purpose. Columnar because the gate reads a metric's past at once. This module is pure; the
+ * stored form (JSON Lines, one line per run) lives in document.ts, the stores beside it.
+ * A History is never changed in place: appendRun, trimHistory, merges and the maintenance
+ * functions return new ones, and may share unchanged value arrays with their input.
+ * A check may hold only the newest runs of the stored history (a read from the end): everything
+ * that takes a History must work on whatever tail it is given.
  */
 
-/** Who produced a run. `id` is the CI run id and attempt ("1234-1"), unique within a series. */
+/**
+ * Who produced a run. `id` is unique within a series; a CI run is "RUN-ATTEMPT" ("1234-1"), and a
+ * higher attempt of the same CI run replaces a lower one (see attemptOf).
+ */
 export interface RunInfo {
   id: string;
   sha?: string;
@@ -20,7 +22,7 @@ export interface RunInfo {
   time?: string;
   /** Pull request number when known (the merged PR of a push). */
   pr?: number;
-  /** Runner fingerprint text, e.g. "Linux X64 | ubuntu-24.04 20261110.1 | AMD EPYC 7763 64-Core Processor | 4 cpu | node 24.11.0". */
+  /** Runner fingerprint text, e.g. "Linux X64 | ubuntu24 20261110.1 | AMD EPYC 7763 64-Core Processor | 4 cpu | node 24.11.0". */
   runner?: string;
   /** Level changes that START at this run. */
   marks?: LevelMark[];
@@ -39,7 +41,16 @@ export interface LevelMark {
   note?: string;
 }
 
+/** A run dropped on purpose (`bellgate drop`): kept so that a merge never brings the run back. */
+export interface Tombstone {
+  id: string;
+  /** When it was dropped (ISO-8601). */
+  time?: string;
+  reason?: string;
+}
+
 export interface MetricColumn {
+  /** The unit the history first saw for the metric; values are stored in it, never relabelled. */
   unit?: string;
   /** One entry per run in History.runs order; NaN where the run has no value. */
   values: number[];
@@ -47,16 +58,34 @@ export interface MetricColumn {
 
 export interface History {
   series: string;
+  /** Oldest first (by time, then id); dropped runs are never among them. */
   runs: RunInfo[];
   columns: Map<string, MetricColumn>;
   /**
-   * Runs deleted on purpose by trimHistory since this history was loaded (in memory only, never
-   * stored). A store's save compares runs + trimmed with the runs it read, so a shrink that no
-   * trim explains is refused instead of losing data.
+   * Tombstones by run id. A read from the end holds those the document keeps up front (every
+   * tombstone a Bellgate store wrote); absent means none.
    */
-  trimmed?: number;
+  dropped?: Map<string, Tombstone>;
 }
 
 export function emptyHistory(series: string): History {
-  return { series, runs: [], columns: new Map() };
+  return { series, runs: [], columns: new Map(), dropped: new Map() };
+}
+
+/**
+ * The CI run and attempt an id names, when it has the form "RUN-ATTEMPT" with both parts whole
+ * numbers (the action's `${GITHUB_RUN_ID}-${GITHUB_RUN_ATTEMPT}`); undefined for any other id.
+ * Two ids of one run are attempts of it: the higher attempt replaces the lower.
+ *
+ * @example attemptOf('8123-2') // { run: '8123', attempt: 2 }
+ */
+export function attemptOf(id: string): { run: string; attempt: number } | undefined {
+  const m = /^(\d{1,20})-(\d{1,9})$/.exec(id);
+  return m ? { run: m[1] as string, attempt: Number(m[2]) } : undefined;
+}
+
+/** The key under which runs replace each other: the CI run of an attempt id, else the id itself. */
+export function replacementKey(id: string): string {
+  const a = attemptOf(id);
+  return a === undefined ? `id:${id}` : `run:${a.run}`;
 }

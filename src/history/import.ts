@@ -10,6 +10,8 @@ export type { ImportedRun, ImportParse, SkippedEntry } from './import-run.js';
 /** What `bellgate import` did: the new history and how many runs were added, replaced, the same. */
 export interface ImportOutcome {
   history: History;
+  /** The usable imported runs alone, as a History: what a store merges into what it holds. */
+  incoming: History;
   added: number;
   updated: number;
   /** Runs already stored with exactly these values and fields (re-importing a file is harmless). */
@@ -65,6 +67,8 @@ export function importRuns(h: History, input: ImportedRun[] | ImportParse): Impo
         where: `run ${run.info.id}`,
         reason: `metric ${JSON.stringify(bad[0])}: value ${bad[1]} is not a finite number`,
       });
+    else if (h.dropped?.has(run.info.id))
+      skipped.push({ where: `run ${run.info.id}`, reason: 'this run was dropped from the history (bellgate drop)' });
     else byId.set(run.info.id, run);
   });
   const incoming = [...byId.values()];
@@ -76,8 +80,17 @@ export function importRuns(h: History, input: ImportedRun[] | ImportParse): Impo
         column = { values: new Array<number>(incoming.length).fill(NaN) };
         columns.set(name, column);
       }
-      column.values[r] = value;
       const unit = run.units.get(name);
+      const stored = h.columns.get(name)?.unit ?? column.unit;
+      if (unit !== undefined && stored !== undefined && unit !== stored) {
+        // The stored unit is authoritative: a value in another unit would relabel the column.
+        skipped.push({
+          where: `run ${run.info.id}`,
+          reason: `metric ${JSON.stringify(name)} is in ${JSON.stringify(unit)}, but the history holds it in ${JSON.stringify(stored)}`,
+        });
+        continue;
+      }
+      column.values[r] = value;
       if (unit !== undefined) column.unit = unit;
     }
   });
@@ -91,8 +104,9 @@ export function importRuns(h: History, input: ImportedRun[] | ImportParse): Impo
     else if (sameRun(h, index, run)) unchanged += 1;
     else updated += 1;
   }
-  const history = mergeHistories(h, { series: h.series, runs: incoming.map((r) => ({ ...r.info })), columns });
-  return { history, added, updated, unchanged, skipped };
+  for (const [name, column] of columns) if (!column.values.some((v) => !Number.isNaN(v))) columns.delete(name);
+  const theirs: History = { series: h.series, runs: incoming.map((r) => ({ ...r.info })), columns, dropped: new Map() };
+  return { history: mergeHistories(h, theirs), incoming: theirs, added, updated, unchanged, skipped };
 }
 
 function sameRun(h: History, index: number, run: ImportedRun): boolean {

@@ -1,41 +1,42 @@
 import { InputError } from '../errors/input-error.js';
 
 /**
- * Where decoding a history document reports a problem: a JSON path ("metrics.values[3][17]"), what
- * is wrong, and optionally how to fix it. parseHistory passes a sink that throws on the first
- * problem; verifyHistory passes one that collects them all and lets decoding carry on.
+ * Where decoding a history document reports a problem: the place ("12" for line 12, "12:5" for a
+ * column of it), what is wrong, and optionally how to fix it. parseHistory passes a sink that
+ * throws on the first problem; verifyHistory passes one that collects them all and goes on.
  */
-export type ProblemSink = (path: string, problem: string, fix?: string) => void;
+export type ProblemSink = (where: string, problem: string, fix?: string) => void;
 
-/** One finding of verifyHistory. `where` is a JSON path, or "line:col" for a syntax error. */
+/** One finding of verifyHistory: `where` is "LINE" or "LINE:COL" of the document. */
 export interface HistoryProblem {
   where: string;
   problem: string;
 }
 
+/** The fix a reader of a broken document is given. */
+export const REPAIR_FIX =
+  'repair that line (run `bellgate verify --history FILE` to list every problem) or restore the file from a backup';
+
 /**
- * A sink that throws InputError at the first problem, located as "source at path".
+ * A sink that throws InputError at the first problem, located as "source:LINE[:COL]".
  *
- * @example throwingSink('h.json')('runs.id[2]', 'run id "7-1" appears twice') // throws InputError
+ * @example throwingSink('h.jsonl')('3', 'run "7-1": "time" is a number') // throws InputError at h.jsonl:3
  */
 export function throwingSink(source: string): ProblemSink {
-  return (path, problem, fix) => {
-    throw new InputError(problem, {
-      where: path === '' ? source : `${source} at ${path}`,
-      fix: fix ?? 'repair the document (run `bellgate verify` to list every problem) or restore it from a backup',
-    });
+  return (where, problem, fix) => {
+    throw new InputError(problem, { where: where === '' ? source : `${source}:${where}`, fix: fix ?? REPAIR_FIX });
   };
 }
 
 /**
  * A sink that collects problems into `into`, keeping at most `limit` of them and then one line
- * saying how many more there were — a document with a million bad values stays readable.
+ * saying how many more there were: a document with a million bad values stays readable.
  */
 export function collectingSink(into: HistoryProblem[], limit = 200): { sink: ProblemSink; finish(): void } {
   let extra = 0;
   return {
-    sink: (path, problem) => {
-      if (into.length < limit) into.push({ where: path, problem });
+    sink: (where, problem) => {
+      if (into.length < limit) into.push({ where, problem });
       else extra += 1;
     },
     finish: () => {
@@ -43,12 +44,6 @@ export function collectingSink(into: HistoryProblem[], limit = 200): { sink: Pro
     },
   };
 }
-
-/** `metrics.values[3]`-style path step for an array index. */
-export const at = (path: string, index: number): string => `${path}[${index}]`;
-
-/** Path step for an object key; quoted because metric names hold dots, slashes and brackets. */
-export const key = (path: string, name: string): string => `${path}[${JSON.stringify(name)}]`;
 
 /** A JSON object (not null, not an array). */
 export function isObject(value: unknown): value is Record<string, unknown> {

@@ -1,18 +1,39 @@
+import type { HistoryChange } from './changes.js';
 import type { History } from './history.js';
 
+/** What a read asks for. */
+export interface ReadOptions {
+  /**
+   * Only the newest this-many runs (a check: its window and the change-point margin). The file
+   * store then reads the file from its end; absent, the whole history is read.
+   */
+  newest?: number;
+}
+
+/** What an update did. */
+export interface UpdateOutcome {
+  /** Runs the stored history holds afterwards (after an append: the count the writer keeps, see document.ts). */
+  runs: number;
+  /** For a record: the id of the run it replaced (the same id, or an earlier attempt of the CI run). */
+  replaced?: string;
+  /** One line added at the end of the stored document, or the document written whole. */
+  wrote: 'appended' | 'rewritten';
+}
+
 /**
- * Where a series' history lives between CI runs: a local file, an artifact, a data branch.
- * `load` returns an empty history when there is none yet, and throws StoreError when there is one
- * that cannot be read. `save(h, readCount)` writes `h`; `readCount` is the number of runs `load`
- * returned, and a store refuses (StoreError) to write fewer runs than that unless trimHistory
- * explains the difference (`h.trimmed`, see guardAgainstLoss) — so a caller that accidentally
- * starts from an empty history cannot wipe the real one.
+ * Where a series' history lives between CI runs: a local file, artifacts, a data branch.
+ * - `read` returns an empty history when there is none yet, and throws StoreError when there is
+ *   one that cannot be read (it is then never written over).
+ * - `update` applies a change to what is stored at the moment of writing — under the file lock,
+ *   on the branch's newest head, over every artifact not yet merged — so a writer never loses what
+ *   another added since it read. It throws StoreError when the store cannot be written, and
+ *   InputError when the change does not apply (see applyChange).
  */
 export interface HistoryStore {
-  /** For messages: "file .bellgate/history.json", "artifact bellgate-history (branch main)". */
+  /** For messages: "file .bellgate/history.jsonl", "artifact bellgate-history-... (branch main)". */
   describe(): string;
-  load(): Promise<History>;
-  save(h: History, readCount: number): Promise<void>;
+  read(options?: ReadOptions): Promise<History>;
+  update(change: HistoryChange): Promise<UpdateOutcome>;
 }
 
 /**
@@ -29,7 +50,7 @@ export type StoreErrorKind = 'other-series' | 'not-a-history' | 'denied' | 'unre
  * the step; the stored history is left as it was. `message` is the reason; `where` describes the
  * store (also as `store`); `fix` says what to do.
  *
- * @example new StoreError('the file is not a history document', { where: 'file h.json', fix: 'restore it' })
+ * @example new StoreError('the file is not a history document', { where: 'file h.jsonl', fix: 'restore it' })
  */
 export class StoreError extends Error {
   override name = 'StoreError';
@@ -65,24 +86,11 @@ export class StoreError extends Error {
 }
 
 /**
- * The shrink rule every store's save applies: writing `h` is refused when it holds fewer runs
- * than were read, unless runs deleted on purpose by trimHistory (`h.trimmed`) make up the gap.
- * Throws StoreError naming the store; also rejects a readCount that is not a count.
- *
- * @example guardAgainstLoss('file h.json', history, 120) // throws when history has 100 runs, 0 trimmed
+ * How many runs past `keep` an append-only store lets a history grow before it trims (rewrites
+ * the whole document): a tenth of keep, at least 1. Trimming then costs one rewrite per that many
+ * records instead of one per record.
+ * @example trimSlack(4000) // 400
  */
-export function guardAgainstLoss(store: string, h: History, readCount: number): void {
-  if (!Number.isInteger(readCount) || readCount < 0) {
-    throw new StoreError(`readCount must be the number of runs load returned, got ${readCount}`, { where: store });
-  }
-  const accounted = h.runs.length + (h.trimmed ?? 0);
-  if (accounted < readCount) {
-    throw new StoreError(
-      `refusing to save ${h.runs.length} runs over the ${readCount} that were read: ${readCount - accounted} runs would be lost`,
-      {
-        where: store,
-        fix: 'append to the history that load returned; delete runs only with trimHistory (the `keep` setting)',
-      },
-    );
-  }
+export function trimSlack(keep: number): number {
+  return keep === Infinity ? 0 : Math.max(1, Math.ceil(keep / 10));
 }

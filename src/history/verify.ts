@@ -1,62 +1,61 @@
-import { InputError } from '../errors/input-error.js';
-import { decodeHistoryDocument, HISTORY_SCHEMA_V1 } from './document.js';
-import { parseJsonText } from './json-text.js';
-import { collectingSink, isObject, type HistoryProblem } from './problems.js';
-import { parseIsoTime } from './iso-time.js';
+import { decodeHistory } from './document.js';
 import { nameProblem } from './import-run.js';
+import { parseIsoTime } from './iso-time.js';
+import { textLines } from './lines.js';
+import { collectingSink, isObject, type HistoryProblem } from './problems.js';
+
+const FIELDS = {
+  run: new Set(['id', 'time', 'sha', 'ref', 'event', 'pr', 'runner', 'values', 'marks', 'n']),
+  drop: new Set(['drop', 'time', 'reason']),
+  mark: new Set(['mark', 'metrics', 'reason', 'pr', 'note']),
+};
 
 /**
- * Checks the integrity of a history document without throwing, for `bellgate verify` (exit 0
- * when the list is empty, 2 otherwise). Finds: malformed JSON ("line:col"), a missing, unknown or
- * newer version, wrong types, duplicated run ids, duplicated metric names, non-finite values,
- * ragged columns, unreadable times, runs out of time order and metric names every metric reader
- * would refuse (control or bidirectional-override characters, over 512 characters) — each located by a JSON path in
- * the document's own layout ("metrics.values[3][17]", "runs[4].values[\"build/compile\"]").
- * At most 200 problems are listed, then a count of the rest.
+ * Checks a history document without throwing, for `bellgate verify` (exit 0 when the list is
+ * empty, 2 otherwise). Each problem names its line ("12", or "12:5" for a JSON syntax error):
+ * a missing, unknown or newer format; a header that is not one; a line that is not JSON, not an
+ * object, or not a run, tombstone or mark; wrong types; more values than metrics; non-finite
+ * values; a field this format does not have; a time that is not ISO-8601; a mark for a run the
+ * document does not hold; metric names every metric reader would refuse (control or
+ * bidirectional-override characters, over 512 characters); a torn last line. At most 200 problems
+ * are listed, then a count of the rest.
  *
- * @example verifyHistory('{"schema":"bellgate.history/9"}', 'h.json')
- * // [{ where: 'schema', problem: 'the history was written by a newer Bellgate (...)' }]
+ * @example verifyHistory('{"schema":"bellgate.history/9"}\n')
+ * // [{ where: '1', problem: 'the history was written by a newer Bellgate (...)' }]
  */
-export function verifyHistory(text: string, source: string): HistoryProblem[] {
+export function verifyHistory(text: string): HistoryProblem[] {
   const problems: HistoryProblem[] = [];
-  let root: unknown;
-  try {
-    root = parseJsonText(text, source);
-  } catch (error) {
-    if (!(error instanceof InputError)) throw error;
-    const where = error.where?.startsWith(`${source}:`) ? error.where.slice(source.length + 1) : (error.where ?? '');
-    return [{ where, problem: error.message }];
-  }
   const { sink, finish } = collectingSink(problems);
-  const history = decodeHistoryDocument(root, sink);
-  if (history) {
-    const v1 = isObject(root) && root.schema === HISTORY_SCHEMA_V1;
-    const timePath = (i: number): string => (v1 ? `runs[${i}].time` : `runs.time[${i}]`);
-    let previous = -Infinity;
-    let previousIndex = -1;
-    history.runs.forEach((run, i) => {
-      if (run.time === undefined) return;
-      const ms = parseIsoTime(run.time);
-      if (ms === undefined) {
-        sink(timePath(i), `time ${JSON.stringify(run.time)} is not an ISO-8601 date-time`);
-        return;
-      }
-      if (ms < previous) {
-        sink(
-          timePath(i),
-          `run ${JSON.stringify(run.id)} (${run.time}) is older than the run before it (runs are stored oldest first; see ${timePath(previousIndex)})`,
-        );
-      } else {
-        previous = ms;
-        previousIndex = i;
-      }
+  const lines = textLines(text);
+  const decoded = decodeHistory(lines, sink, { warn: (problem, where) => sink(where, problem) });
+  if (decoded) {
+    decoded.header.metrics.forEach((m, i) => {
+      const problem = nameProblem(m.name);
+      if (problem) sink('1', `metrics[${i}]: ${problem}`);
     });
-    // A hand-edited or imported history may hold names no reader lets in; the renderers clean
-    // them, but the document should be mended.
-    [...history.columns.keys()].forEach((name, i) => {
-      const problem = nameProblem(name);
-      if (problem) sink(v1 ? 'runs[].values' : `metrics.names[${i}]`, problem);
-    });
+    const runIds = new Set(decoded.history.runs.map((r) => r.id));
+    let number = 0;
+    for (const line of lines.forward()) {
+      number += 1;
+      if (number === 1) continue;
+      let value: unknown;
+      try {
+        value = JSON.parse(line.text);
+      } catch {
+        continue; // reported by the decode
+      }
+      if (!isObject(value)) continue;
+      const kind = 'drop' in value ? 'drop' : 'mark' in value ? 'mark' : 'id' in value ? 'run' : undefined;
+      if (kind === undefined) continue;
+      for (const field of Object.keys(value)) {
+        if (!FIELDS[kind].has(field))
+          sink(String(number), `field ${JSON.stringify(field)} is not part of a ${kind} line`);
+      }
+      if (typeof value.time === 'string' && parseIsoTime(value.time) === undefined)
+        sink(String(number), `time ${JSON.stringify(value.time)} is not an ISO-8601 date-time`);
+      if (kind === 'mark' && typeof value.mark === 'string' && !runIds.has(value.mark))
+        sink(String(number), `the mark is for run ${JSON.stringify(value.mark)}, which the history does not hold`);
+    }
   }
   finish();
   return problems;

@@ -1,6 +1,6 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { expectClose } from '../helpers/close.js';
-import { bellgate, handHistoryV1, scratch } from './helpers/cli-harness.js';
+import { bellgate, handHistory, scratch } from './helpers/cli-harness.js';
 
 // A tiny history written by hand, and the numbers the gate must report for a run at 15, worked out
 // by hand with a calculator (nothing here comes from Bellgate's own code). On its own scale
@@ -17,7 +17,7 @@ const baseline = [10, 12, 11, 13, 9, 11, 10, 12];
 const work = scratch();
 afterAll(() => work.remove());
 
-const history = work.write('history.json', handHistoryV1('default', { 'api/latency': baseline }, 'ms'));
+const history = work.write('history.json', handHistory('default', { 'api/latency': baseline }, 'ms'));
 const run = work.write('run.json', JSON.stringify({ metrics: [{ name: 'api/latency', value: 15, unit: 'ms' }] }));
 // change-points off: 8 values are too few for segmentation to mean anything, and the hand
 // calculation above uses all of them.

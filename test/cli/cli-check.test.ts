@@ -1,7 +1,7 @@
 import { existsSync, readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { bellgate, handHistoryV1, noStack, steadyFixture } from './helpers/cli-harness.js';
+import { bellgate, handHistory, noStack, steadyFixture } from './helpers/cli-harness.js';
 
 // Exit codes are DESIGN.md's: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
 // 3 store unreachable. Every failure must be one readable message, never a stack trace.
@@ -50,7 +50,7 @@ describe('check', () => {
     const names = Array.from({ length: 40 }, (_, i) => `suite/m${i}`);
     const values = Object.fromEntries(names.map((n) => [n, [100, 101, 99, 100, 102, 98, 100, 101, 99, 100]]));
     values['suite/m0'] = values['suite/m0']!.map((v) => v * 10);
-    const wide = work.write('wide/history.json', handHistoryV1('default', values));
+    const wide = work.write('wide/history.json', handHistory('default', values));
     const run = work.write(
       'wide/run.json',
       JSON.stringify(Object.fromEntries(names.map((n) => [n, n === 'suite/m0' ? 1300 : 100.5]))),
@@ -197,7 +197,7 @@ describe('check', () => {
   });
 
   it('--record appends the checked run to the history', async () => {
-    const h = work.write('rec/history.json', handHistoryV1('default', { 'api/latency': steady }));
+    const h = work.write('rec/history.json', handHistory('default', { 'api/latency': steady }));
     const r = await bellgate(work.dir, [
       'check',
       '--metrics',
@@ -215,8 +215,15 @@ describe('check', () => {
     expect(r.code).toBe(0);
     expect(r.stderr).toContain('recorded run pr-9');
     const doc = readFileSync(h, 'utf8');
-    expect(doc).toContain('pr-9');
-    expect(doc).toContain('bellgate.history/2'); // rewritten in the current version
+    // appended as one line after the ten it had; the calm run has no api/size, so its values stop at 1
+    const lines = doc.trimEnd().split('\n');
+    expect(lines).toHaveLength(12);
+    expect(JSON.parse(lines[11]!)).toMatchObject({
+      id: 'pr-9',
+      time: '2026-02-01T00:00:00.000Z',
+      values: [100.5, 100200],
+      n: 11,
+    });
   });
 });
 

@@ -1,6 +1,6 @@
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { bellgate, handHistoryV1, steadyFixture } from './helpers/cli-harness.js';
+import { bellgate, handHistory, steadyFixture } from './helpers/cli-harness.js';
 
 // Exit codes are DESIGN.md's: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
 // 3 store unreachable. Every failure must be one readable message, never a stack trace.
@@ -42,14 +42,13 @@ describe('import and verify', () => {
     expect(r.stderr).toContain('missing.jsonl');
   });
 
-  it('verify lists the problems of a damaged history and exits 2', async () => {
-    const doc = JSON.parse(handHistoryV1('default', { m: [1, 2, 3] })) as { runs: Array<{ id: string }> };
-    const second = doc.runs[1];
-    if (second) second.id = 'r1'; // a duplicated run id
-    const bad = work.write('dup.json', JSON.stringify(doc));
+  it('verify lists the problems of a damaged history, each with its line, and exits 2', async () => {
+    const lines = handHistory('default', { m: [1, 2, 3] }).split('\n');
+    lines[2] = lines[2]!.replace('"values":[2]', '"values":["2"]'); // a value that is text
+    const bad = work.write('dup.jsonl', lines.join('\n'));
     const r = await bellgate(work.dir, ['verify', '--history', bad]);
     expect(r.code).toBe(2);
-    expect(r.stdout).toContain('r1');
+    expect(r.stdout).toBe(`${bad}:3: run "r2": values[0] is a string, not a finite number or null\n`);
     expect(r.stderr).toContain('1 problem');
   });
 

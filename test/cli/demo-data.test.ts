@@ -34,8 +34,8 @@ describe('demo data', () => {
     expect(committed('bellgate.yml')).toBe(gen.renderConfig());
   });
 
-  it('history.json equals what `bellgate import` makes of runs.jsonl', async () => {
-    const out = join(work.dir, 'history.json');
+  it('history.jsonl equals what `bellgate import` makes of runs.jsonl', async () => {
+    const out = join(work.dir, 'history.jsonl');
     const r = await bellgate(work.dir, [
       'import',
       '--history',
@@ -46,7 +46,7 @@ describe('demo data', () => {
       gen.SERIES,
     ]);
     expect(r.code, r.stderr).toBe(0);
-    expect(readFileSync(out, 'utf8')).toBe(committed('history.json'));
+    expect(readFileSync(out, 'utf8')).toBe(committed('history.jsonl'));
   });
 });
 

@@ -4,12 +4,21 @@ import { runInfoFrom } from '../../src/cli/run-info.js';
 import { splitNewest } from '../../src/cli/split-newest.js';
 import { InputError } from '../../src/errors/input-error.js';
 
+// A fixed machine, so the runner fingerprint of a recorded run is known.
+const machine = {
+  platform: 'linux',
+  arch: 'x64',
+  cpuModel: 'AMD EPYC 7763 64-Core Processor',
+  cpuCount: 4,
+  nodeVersion: 'v24.11.0',
+};
 const io = (env: Record<string, string | undefined> = {}, isTTY = false): CliIo => ({
   stdout: () => {},
   stderr: () => {},
   cwd: '/',
   env,
   isTTY,
+  machine,
 });
 const clock = () => new Date(Date.UTC(2026, 4, 4, 10, 20, 30));
 
@@ -28,6 +37,7 @@ describe('runInfoFrom', () => {
     expect(runInfoFrom(createContext(io(), clock), {})).toEqual({
       id: 'local-2026-05-04T10:20:30.000Z',
       time: '2026-05-04T10:20:30.000Z',
+      runner: 'Linux X64 | AMD EPYC 7763 64-Core Processor | 4 cpu | node 24.11.0',
     });
   });
 
@@ -42,6 +52,7 @@ describe('runInfoFrom', () => {
       sha: 'abc',
       ref: 'refs/heads/main',
       event: 'push',
+      runner: 'Linux X64 | AMD EPYC 7763 64-Core Processor | 4 cpu | node 24.11.0',
     });
     expect(runInfoFrom(ctx, { id: 'x', sha: 'def' })).toMatchObject({ id: 'x', sha: 'def' });
   });

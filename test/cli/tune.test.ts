@@ -4,7 +4,7 @@ import { runCli } from '../../src/cli/main.js';
 import { bellgate, scratch } from './helpers/cli-harness.js';
 
 const root = new URL('../..', import.meta.url).pathname;
-const demoHistory = `${root}examples/demo/history.json`;
+const demoHistory = `${root}examples/demo/history.jsonl`;
 const demoConfig = `${root}examples/demo/bellgate.yml`;
 const dir = scratch('bellgate-tune-');
 afterAll(() => dir.remove());
@@ -177,7 +177,7 @@ describe('bellgate tune', () => {
     const missing = await bellgate(dir.dir, ['tune', '--history', 'nope.json']);
     expect(missing.code).toBe(2);
     expect(missing.stderr).toMatch(/nope\.json/);
-    dir.write('empty.json', JSON.stringify({ schema: 'bellgate.history/1', series: 'x', runs: [] }));
+    dir.write('empty.json', '{"schema":"bellgate.history/3","series":"x","metrics":[]}\n');
     const empty = await bellgate(dir.dir, ['tune', '--history', 'empty.json']);
     expect(empty.code).toBe(2);
     expect(empty.stderr).toMatch(/holds no runs/);
@@ -203,19 +203,14 @@ describe('bellgate tune', () => {
 describe('bellgate tune with hostile metric names and groups', () => {
   it('prints names cleaned of terminal escapes and line breaks, and says groups are replayed per member', async () => {
     const values = (base: number) => Array.from({ length: 30 }, (_, i) => base + ((i * 7) % 5));
-    const history = {
-      schema: 'bellgate.history/1',
-      series: 'x',
-      runs: values(0).map((_, i) => ({
-        id: `r${i + 1}`,
-        values: {
-          'evil/\u001b[31mred\u001b[0m\nname': values(100)[i],
-          ['__proto__']: values(50)[i],
-          'timing/a': values(10)[i],
-        },
-      })),
-    };
-    dir.write('hostile.json', JSON.stringify(history));
+    const names = ['evil/\u001b[31mred\u001b[0m\nname', '__proto__', 'timing/a'];
+    const history = [
+      JSON.stringify({ schema: 'bellgate.history/3', series: 'x', metrics: names.map((name) => ({ name })) }),
+      ...values(0).map((_, i) =>
+        JSON.stringify({ id: `r${i + 1}`, values: [values(100)[i], values(50)[i], values(10)[i]] }),
+      ),
+    ].join('\n');
+    dir.write('hostile.json', `${history}\n`);
     dir.write('groups.yml', 'groups:\n  - name: timing\n    match: "timing/*"\n');
     const r = await bellgate(dir.dir, ['tune', '--history', 'hostile.json', '--config', 'groups.yml']);
     expect(r.code).toBe(0);

@@ -27,7 +27,7 @@ describe('parseConfig: accepted keys', () => {
       expect(config.family).toBe('holm');
       expect(config.budget).toBe(0.01);
       expect(config.unsettled).toBe('pass');
-      expect(config.keep).toBe(500);
+      expect(config.keep).toBe(4000); // six months at 20 recorded runs a day (README, "Config file")
       expect(config.limits).toEqual({
         maxFileBytes: 64 * 1024 * 1024,
         maxLineLength: 1024 * 1024,

@@ -140,7 +140,8 @@ describe('the action bundle, as the runner runs it', () => {
       expect(r.code, explain(r)).toBe(0);
       expect(r.outputs.get('verdict')).toBe(run - 1001 >= 8 ? 'pass' : 'learning');
     }
-    expect(rest.state.artifacts.filter((a) => a.name === NAME)).toHaveLength(12);
+    // Each upload covers the one before, which it deletes (the stand-in's token may): one is left.
+    expect(rest.state.artifacts.filter((a) => a.name === NAME)).toHaveLength(1);
     expect(rest.state.artifacts.every((a) => a.location?.startsWith(azurite.endpoint))).toBe(true);
     const h = await newestHistory();
     expect(h.series).toBe(SERIES);
@@ -165,7 +166,7 @@ describe('the action bundle, as the runner runs it', () => {
     expect(comments[0]?.body.startsWith(markerLine(commentMarker(SERIES)))).toBe(true);
     expect(r.summary).toContain(comments[0]?.body.split('\n')[1]);
     expect(r.annotations.filter((a) => a.kind === 'error' && /route\/match-static/.test(a.text))).toHaveLength(1);
-    expect(rest.state.artifacts.filter((a) => a.name === NAME)).toHaveLength(12);
+    expect(rest.state.artifacts.filter((a) => a.name === NAME)).toHaveLength(1); // a pull request uploads nothing
     // The token appears only in the mask command the runner consumes.
     expect(r.stdout.split('\n').filter((l) => l.includes(TOKEN))).toEqual([`::add-mask::${TOKEN}`]);
   });
@@ -207,7 +208,8 @@ describe('the action bundle, as the runner runs it', () => {
     rest.state.faults.push({ method: 'GET', path: `/repos/${REPO}/actions/artifacts`, status: 500, times: 2 });
     const r = await push(1016);
     expect(r.code, explain(r)).toBe(0);
-    expect(countCalls(rest.state, 'GET', `/repos/${REPO}/actions/artifacts?name=${NAME}`)).toBe(3);
+    // the read for the check (two 500s, then the answer), then the record lists again
+    expect(countCalls(rest.state, 'GET', `/repos/${REPO}/actions/artifacts?name=${NAME}`)).toBe(4);
     expect(r.annotations.filter((a) => a.kind === 'warning')).toEqual([]);
     expect((await newestHistory()).runs).toHaveLength(16);
   });
@@ -239,16 +241,15 @@ describe('the action bundle, as the runner runs it', () => {
     expect(new Set(ids).size).toBe(ids.length);
   });
 
-  it('a re-run attempt of a recorded run warns that the first attempt kept its numbers, and passes', async () => {
+  it('a re-run attempt of a recorded run replaces the first attempt: its artifact is deleted through the runtime token and uploaded again', async () => {
     const r = await runStepAttempt(1017, 2);
     expect(r.code, explain(r)).toBe(0);
-    expect(
-      r.annotations.some(
-        (a) => a.kind === 'warning' && /earlier attempt of this workflow run already recorded it/.test(a.text),
-      ),
-    ).toBe(true);
     expect(results.calls.filter((c) => c.method === 'CreateArtifact' && c.status === 409)).toHaveLength(1);
-    expect((await newestHistory()).runs).toHaveLength(17);
+    expect(results.calls.filter((c) => c.method === 'DeleteArtifact' && c.status === 200)).toHaveLength(1);
+    const ids = (await newestHistory()).runs.map((x) => x.id);
+    expect(ids).toHaveLength(17);
+    expect(ids).toContain('1017-2');
+    expect(ids).not.toContain('1017-1');
   });
 
   it('a bad input fails the step with one plain message naming it, no stack trace', async () => {

@@ -1,12 +1,12 @@
 // Fault injection: the stores run against loopback stand-ins behind a proxy that makes a fixed,
 // seeded share of API calls fail (500, 502, 429 with Retry-After, connections dropped before or
 // after the server acted, bodies cut short, answers slower than the client's timeout). The rule
-// under test is the store contract (src/history/store.ts): every append ends with its run recorded
+// under test is the store contract (src/history/store.ts): every update ends with its run recorded
 // or with a StoreError, the stored history always parses, and no run that was stored is ever lost.
 import { strToU8, zipSync } from 'fflate';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { artifactName, createArtifactStore, HISTORY_FILE } from '../../src/history/artifact-store.js';
-import { appendRun } from '../../src/history/merge.js';
+import { artifactName, createArtifactStore, type ArtifactUploader } from '../../src/history/artifact-store.js';
+import type { HistoryChange } from '../../src/history/changes.js';
 import { StoreError } from '../../src/history/store.js';
 import { createOctokitApi } from '../../src/github/octokit-api.js';
 import { branchStore, ids, infoOf, onBranch, runOf } from '../history/branch-helpers.js';
@@ -30,6 +30,12 @@ interface Tally {
 }
 const tally = (): Tally => ({ tried: 0, recorded: 0, failed: 0, failedButStored: 0, lost: 0 });
 const missing = (before: string[], after: string[]) => before.filter((id) => !after.includes(id)).length;
+const record = (id: string, n: number, value: number): HistoryChange => ({
+  kind: 'record',
+  info: infoOf(id, n),
+  run: runOf(value),
+  keep: 4000,
+});
 
 describe('branch store with faults', () => {
   let git: GitDataStandin;
@@ -51,14 +57,13 @@ describe('branch store with faults', () => {
     const recorded: string[] = [];
     const reasons = new Map<string, number>();
     for (let i = 0; i < 60; i++) {
-      const id = `${i}-1`;
+      const id = `${100 + i}-1`;
       const before = ids(onBranch(git, series));
-      const store = branchStore(proxy.url, series, { random }, { timeoutMs: TIMEOUT_MS, retries: 2, random });
+      const store = branchStore(proxy.url, series, { random }, { timeoutMs: TIMEOUT_MS, retries: 2 });
       t.tried += 1;
       let ok = false;
       try {
-        const h = await store.load();
-        await store.save(appendRun(h, infoOf(id, i), runOf(60 + i)), h.runs.length);
+        await store.update(record(id, i, 60 + i));
         ok = true;
       } catch (error) {
         expect(error).toBeInstanceOf(StoreError);
@@ -92,19 +97,13 @@ describe('branch store with faults', () => {
     async function writer(w: number): Promise<void> {
       const random = seededRandom(7 + w);
       for (let i = 0; i < 30; i++) {
-        const id = `${i}-${w}`;
+        const id = `${(w + 1) * 1000 + i}-1`;
         const before = ids(onBranch(git, series));
-        const store = branchStore(
-          proxy.url,
-          series,
-          { attempts: 5, random },
-          { timeoutMs: TIMEOUT_MS, retries: 2, random },
-        );
+        const store = branchStore(proxy.url, series, { attempts: 5, random }, { timeoutMs: TIMEOUT_MS, retries: 2 });
         t.tried += 1;
         let ok = false;
         try {
-          const h = await store.load();
-          await store.save(appendRun(h, infoOf(id, i * 3 + w), runOf(50 + i)), h.runs.length);
+          await store.update(record(id, i * 3 + w, 50 + i));
           ok = true;
         } catch (error) {
           // A clear failure, never a stack trace from somewhere else.
@@ -162,19 +161,20 @@ describe('artifact store with faults', () => {
     let run = 500;
     // The uploader stands in for @actions/artifact: a fifth of uploads fail, half of those after
     // leaving a broken artifact behind (a zip cut short), the rest before anything is stored.
-    const upload = async (artifact: string, _file: string, text: string): Promise<void> => {
-      const zip = zipSync({ [HISTORY_FILE]: strToU8(text) });
+    const upload: ArtifactUploader = async (artifact, files) => {
+      const zip = zipSync(Object.fromEntries(files.map((f) => [f.name, strToU8(f.text)])));
       const roll = random();
       if (roll < 0.2) {
         if (roll < 0.1) register(artifact, zip.subarray(0, zip.length >> 1));
         throw new Error('upload failed: stand-in fault');
       }
-      register(artifact, zip);
+      return { id: register(artifact, zip) };
     };
-    function register(artifact: string, zip: Uint8Array): void {
+    function register(artifact: string, zip: Uint8Array): number {
       clock += 60_000;
+      const id = rest.state.nextId++;
       rest.state.artifacts.push({
-        id: rest.state.nextId++,
+        id,
         name: artifact,
         createdAt: new Date(clock).toISOString(),
         expired: false,
@@ -185,6 +185,7 @@ describe('artifact store with faults', () => {
         sizeInBytes: zip.length,
         zip,
       });
+      return id;
     }
     const storeVia = (url: string) =>
       createArtifactStore({
@@ -207,24 +208,24 @@ describe('artifact store with faults', () => {
     let incompleteLoads = 0;
     const recorded: string[] = [];
     for (let i = 0; i < 40; i++) {
-      const id = `${i}-1`;
-      const before = ids(await storeVia(rest.url).load()); // no faults: the truth
+      const id = `${500 + i}-1`;
+      const before = ids(await storeVia(rest.url).read()); // no faults: the truth
       t.tried += 1;
       let ok = false;
       try {
         const store = storeVia(proxy.url);
         const seen = warnings.length;
-        const h = await store.load();
+        const h = await store.read();
         if (missing(before, ids(h)) > 0) {
           incompleteLoads += 1;
           console.log(`artifact load ${i} missed ${missing(before, ids(h))} runs: ${warnings.slice(seen).join(' | ')}`);
         }
-        await store.save(appendRun(h, infoOf(id, i), runOf(70 + i)), h.runs.length);
+        await store.update(record(id, i, 70 + i));
         ok = true;
       } catch (error) {
         expect(error).toBeInstanceOf(StoreError);
       }
-      const after = ids(await storeVia(rest.url).load());
+      const after = ids(await storeVia(rest.url).read());
       t.lost += missing(before, after);
       if (ok) {
         t.recorded += 1;
@@ -235,7 +236,7 @@ describe('artifact store with faults', () => {
         if (after.includes(id)) t.failedButStored += 1;
       }
     }
-    const final = ids(await storeVia(rest.url).load());
+    const final = ids(await storeVia(rest.url).read());
     t.lost += missing(recorded, final);
     const artifacts = rest.state.artifacts.filter((a) => a.name === name).length;
     console.log(

@@ -2,7 +2,6 @@
 // refuse what GitHub does not document (so a passing test means something), and the branch
 // store's real request sequence must fit it end to end.
 import { describe, expect, it } from 'vitest';
-import { appendRun } from '../../src/history/merge.js';
 import { branchStore, infoOf, runOf } from '../history/branch-helpers.js';
 import { githubApiCheck } from './standins/openapi.js';
 import { startGitDataStandin, takeGitViolations } from './standins/git-data.js';
@@ -56,8 +55,7 @@ describe("GitHub's REST description as the stand-ins' contract", () => {
     try {
       for (let i = 0; i < 3; i++) {
         const store = branchStore(git.url, 'bench/described');
-        const h = await store.load();
-        await store.save(appendRun(h, infoOf(`${i}-1`, i), runOf(50 + i)), h.runs.length);
+        await store.update({ kind: 'record', info: infoOf(`${i}-1`, i), run: runOf(50 + i), keep: 100 });
       }
       expect(git.state.calls.length).toBeGreaterThan(10);
       expect(takeGitViolations(git.state)).toEqual([]);

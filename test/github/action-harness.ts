@@ -70,7 +70,7 @@ export function baselineHistory(series: string, runs = 12): History {
         ]),
         meta: new Map(),
       },
-    );
+    ).history;
   }
   return h;
 }
@@ -133,7 +133,11 @@ export function deps(
     },
     now: () => new Date('2026-04-01T12:00:00Z'),
     createApi: createOctokitApi,
-    upload: async (name, _file, text) => void uploads.push({ name, text }),
+    // One entry per artifact, with the text of its first file (the history, or the HTML report).
+    upload: async (name, files) => {
+      uploads.push({ name, text: files[0]?.text ?? '' });
+      return {};
+    },
     retry: { retries: 2, unitMs: 1 },
   };
 }

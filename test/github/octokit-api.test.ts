@@ -126,10 +126,13 @@ describe('createOctokitApi', () => {
     ]);
   });
 
-  it('follows the 302 of an artifact download to storage without sending the token there, and caps the size', async () => {
-    const zip = zipSync({ 'history.json': strToU8('{"x":1}') });
-    api.state.artifacts = [
-      {
+  it('follows the 302 of an artifact download to storage on another origin without sending the token there, and caps the size', async () => {
+    // Storage is another origin (as the real signed storage URLs are): fetch drops Authorization on
+    // a cross-origin redirect (Fetch standard, "HTTP-redirect fetch", step on CORS-unsafe headers).
+    const storage = await startRestStandin();
+    try {
+      const zip = zipSync({ 'history.jsonl': strToU8('{"x":1}') });
+      const entry = {
         id: 3,
         name: 'h',
         createdAt: '2026-01-01T00:00:00Z',
@@ -140,14 +143,47 @@ describe('createOctokitApi', () => {
         workflowRunId: 79,
         sizeInBytes: zip.length,
         zip,
+      };
+      storage.state.artifacts = [entry];
+      api.state.artifacts = [{ ...entry, location: `${storage.url}/blob/3?sig=standin` }];
+      api.state.calls.length = 0;
+      const got = await client().downloadArtifact(3, 1 << 20);
+      expect(Buffer.from(got).equals(Buffer.from(zip))).toBe(true);
+      const blobCall = storage.state.calls.find((c) => c.path.startsWith('/blob/3'));
+      expect(blobCall).toBeDefined();
+      expect(blobCall?.auth).toBeUndefined();
+      expect(api.state.calls[0]?.auth).toMatch(/ghs_test/);
+      await expect(client().downloadArtifact(3, 10)).rejects.toThrow(/cap/);
+      // a listed artifact deleted meanwhile (404) or expired (410) is gone, not a fault
+      await expect(client().downloadArtifact(99, 1 << 20)).rejects.toMatchObject({ name: 'ArtifactGoneError' });
+    } finally {
+      await storage.close();
+    }
+  });
+
+  it('deletes an artifact; a token without actions: write is "denied", one already gone is "gone"', async () => {
+    api.state.artifacts = [
+      {
+        id: 41,
+        name: 'h',
+        createdAt: '2026-01-01T00:00:00Z',
+        expired: false,
+        headBranch: 'main',
+        headRepositoryId: 5,
+        repositoryId: 5,
+        workflowRunId: 1,
+        sizeInBytes: 1,
       },
     ];
-    api.state.calls.length = 0;
-    const got = await client().downloadArtifact(3, 1 << 20);
-    expect(Buffer.from(got).equals(Buffer.from(zip))).toBe(true);
-    const blobCall = api.state.calls.find((c) => c.path.startsWith('/blob/3'));
-    expect(blobCall?.auth).toBeUndefined();
-    await expect(client().downloadArtifact(3, 10)).rejects.toThrow(/cap/);
+    expect(await client().deleteArtifact?.(41)).toBe('deleted');
+    expect(api.state.artifacts).toEqual([]);
+    expect(await client().deleteArtifact?.(41)).toBe('gone');
+    api.state.artifactDeleteStatus = 403;
+    try {
+      expect(await client().deleteArtifact?.(42)).toBe('denied');
+    } finally {
+      api.state.artifactDeleteStatus = undefined;
+    }
   });
 
   it('retries a plain 429 after the seconds its Retry-After header gives', async () => {
@@ -174,7 +210,7 @@ describe('createOctokitApi', () => {
   });
 
   it('retries a 503 from the storage a download redirects to', async () => {
-    const zip = zipSync({ 'history.json': strToU8('{}') });
+    const zip = zipSync({ 'history.jsonl': strToU8('{}') });
     api.state.artifacts = [
       {
         id: 4,

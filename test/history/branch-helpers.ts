@@ -2,7 +2,8 @@
 // router service), a store pointed at the loopback Git Data stand-in, and a direct reader.
 import { expect } from 'vitest';
 import { createBranchStore, type BranchStoreOptions } from '../../src/history/branch-store.js';
-import { createGitDataClient, type GitDataClientOptions } from '../../src/history/branch-rest.js';
+import type { RetryTuning } from '../../src/github/api.js';
+import { createOctokitApi } from '../../src/github/octokit-api.js';
 import { seriesFilePath } from '../../src/history/branch-path.js';
 import { parseHistory } from '../../src/history/document.js';
 import type { History } from '../../src/history/history.js';
@@ -25,23 +26,23 @@ export const infoOf = (id: string, n: number) => ({
   event: 'push',
 });
 
+/** The branch store over the action's own client (octokit with its plugins), pointed at `url`. */
 export function branchStore(
   url: string,
   series: string,
   over: Partial<BranchStoreOptions> = {},
-  client: Partial<GitDataClientOptions> = {},
+  retry: Partial<RetryTuning> = {},
+  token = TOKEN,
 ) {
-  const api = createGitDataClient({
-    token: TOKEN,
+  const client = createOctokitApi({
+    token,
     baseUrl: url,
     owner: 'acme',
     repo: 'router',
-    timeoutMs: 2000,
-    retries: 2,
-    unitMs: 1,
-    ...client,
+    retry: { retries: 2, unitMs: 1, timeoutMs: 2000, ...retry },
   });
-  return createBranchStore({ api, branch: 'bellgate-data', series, unitMs: 1, ...over });
+  if (!client.gitData) throw new Error('the octokit client has no Git Data calls');
+  return createBranchStore({ api: client.gitData, branch: 'bellgate-data', series, unitMs: 1, ...over });
 }
 
 /** The history on the branch as the stand-in holds it (no API, no faults), or undefined. */

@@ -69,7 +69,7 @@ describe('seriesFilePath', () => {
     fc.assert(
       fc.property(fc.string({ maxLength: 300 }), (series) => {
         const path = seriesFilePath(series);
-        expect(path).toMatch(/^bellgate\/[A-Za-z0-9_][A-Za-z0-9._-]*\.json$/);
+        expect(path).toMatch(/^bellgate\/[A-Za-z0-9_][A-Za-z0-9._-]*\.jsonl$/);
         expect(path.length).toBeLessThan(90);
         expect(path.split('/').slice(1).join('/')).not.toContain('..');
       }),
@@ -78,7 +78,7 @@ describe('seriesFilePath', () => {
     const hostile = ['__proto__', '../../etc/passwd', '', '.', '..', 'constructor', 'a/b', 'a b', 'A/B'];
     const paths = hostile.map(seriesFilePath);
     expect(new Set(paths).size).toBe(hostile.length);
-    expect(seriesFilePath('bench/linux')).toMatch(/^bellgate\/bench-linux-[0-9a-f]{8}\.json$/);
+    expect(seriesFilePath('bench/linux')).toMatch(/^bellgate\/bench-linux-[0-9a-f]{8}\.jsonl$/);
   });
 });
 

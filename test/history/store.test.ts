@@ -1,13 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { History } from '../../src/history/history.js';
-import { guardAgainstLoss, StoreError } from '../../src/history/store.js';
-
-const history = (runs: number, trimmed?: number): History => ({
-  series: 's',
-  runs: Array.from({ length: runs }, (_, i) => ({ id: String(i) })),
-  columns: new Map(),
-  ...(trimmed === undefined ? {} : { trimmed }),
-});
+import { trimSlack, StoreError } from '../../src/history/store.js';
 
 describe('StoreError', () => {
   it('carries the store, the reason and the fix', () => {
@@ -23,16 +15,9 @@ describe('StoreError', () => {
   });
 });
 
-describe('guardAgainstLoss', () => {
-  it('allows growth and equal size, refuses a shrink unless trimming explains it', () => {
-    expect(() => guardAgainstLoss('file h', history(5), 5)).not.toThrow();
-    expect(() => guardAgainstLoss('file h', history(6), 5)).not.toThrow();
-    expect(() => guardAgainstLoss('file h', history(3), 5)).toThrow(/2 runs would be lost/);
-    expect(() => guardAgainstLoss('file h', history(3, 2), 5)).not.toThrow();
-    expect(() => guardAgainstLoss('file h', history(3, 1), 5)).toThrow(StoreError);
-  });
-
-  it('refuses a readCount that is not a count', () => {
-    for (const n of [-1, 1.5, NaN]) expect(() => guardAgainstLoss('file h', history(1), n)).toThrow(StoreError);
+describe('trimSlack', () => {
+  it('lets an append-only history grow a tenth past keep (at least one run) before one rewrite trims it', () => {
+    expect([1, 9, 10, 11, 500, 4000].map(trimSlack)).toEqual([1, 1, 1, 2, 50, 400]);
+    expect(trimSlack(Infinity)).toBe(0);
   });
 });

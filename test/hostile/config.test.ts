@@ -143,15 +143,11 @@ describe('config files through the CLI', () => {
     counter.add('hostile names in rules', parsed);
     if (parsed === 'refused') return; // escaping a glob this way is not supported: refused cleanly is fine
     const steady = [100, 101, 99, 100, 102, 98, 100, 101, 99, 100];
-    const runs = steady.map((v, i) => {
-      const values = Object.create(null) as Record<string, number>;
-      names.forEach((n, k) => (values[n] = v + k));
-      return { id: `r${i}`, values };
-    });
-    const history = work.write(
-      'named-history.json',
-      JSON.stringify({ schema: 'bellgate.history/1', series: 'default', runs }),
-    );
+    const lines = [
+      JSON.stringify({ schema: 'bellgate.history/3', series: 'default', metrics: names.map((name) => ({ name })) }),
+      ...steady.map((v, i) => JSON.stringify({ id: `r${i}`, values: names.map((_, k) => v + k) })),
+    ];
+    const history = work.write('named-history.jsonl', `${lines.join('\n')}\n`);
     const run = work.write(
       'named-run.json',
       JSON.stringify({ metrics: names.map((name, k) => ({ name, value: 100.5 + k })) }),

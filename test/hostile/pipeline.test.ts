@@ -73,24 +73,21 @@ const REFUSED: ReadonlyArray<readonly [string, RegExp]> = [
 const STEADY = [100, 101, 99, 100, 102, 98, 100, 101, 99, 100];
 const CONFIG = 'defaults:\n  change-points: false\n';
 
-/** A version-1 history (the hand-writable form) with these names, ten steady runs each. */
+/** A history in the stored layout (a header line, a line per run) with these names, ten steady runs each. */
 function historyWith(series: string, names: readonly string[], unit?: string): string {
-  const runs = STEADY.map((v, i) => {
-    const values = Object.create(null) as Record<string, number>;
-    const units = Object.create(null) as Record<string, string>;
-    for (const n of names) {
-      values[n] = v;
-      if (unit !== undefined) units[n] = unit;
-    }
-    return {
+  const header = {
+    schema: 'bellgate.history/3',
+    series,
+    metrics: names.map((name) => (unit === undefined ? { name } : { name, unit })),
+  };
+  const runs = STEADY.map((v, i) =>
+    JSON.stringify({
       id: `r${i + 1}`,
       time: new Date(Date.UTC(2026, 0, 1 + i)).toISOString(),
-      values,
-      ...(unit === undefined ? {} : { units }),
-    };
-  });
-  // JSON.stringify writes "__proto__" as an own key of a null-prototype object, as a tool would.
-  return JSON.stringify({ schema: 'bellgate.history/1', series, runs });
+      values: names.map(() => v),
+    }),
+  );
+  return `${[JSON.stringify(header), ...runs].join('\n')}\n`;
 }
 
 /** The run's file in the own JSON list form: the first name regresses, the others stay calm. */
@@ -116,7 +113,7 @@ async function everyOutput(
 ): Promise<Outputs> {
   const dir = `c${++caseNo}`;
   const series = options.series ?? 'default';
-  const history = work.write(`${dir}/history.json`, historyWith(series, names, options.unit));
+  const history = work.write(`${dir}/history.jsonl`, historyWith(series, names, options.unit));
   const run = work.write(`${dir}/run.json`, runWith(names, options.unit));
   const config = work.write(`${dir}/bellgate.yml`, CONFIG);
   const base = ['--history', history, '--metrics', run, '--config', config, '--series', series];
@@ -191,7 +188,7 @@ describe('names every reader refuses, with exit 2 and a clear message', () => {
     async (_label, name, message) => {
       const dir = `refused${++caseNo}`;
       const run = work.write(`${dir}/run.json`, runWith(['ok/one', name]));
-      const history = work.write(`${dir}/history.json`, historyWith('default', ['ok/one']));
+      const history = work.write(`${dir}/history.jsonl`, historyWith('default', ['ok/one']));
       for (const format of ['markdown', 'json', 'text'] as const) {
         const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--format', format]);
         expect(r.code).toBe(2);
@@ -225,7 +222,7 @@ describe('names that reached a history by hand (not through a reader) are still 
   ];
   it('check (missing metrics) and report --html (newest run) clean them', async () => {
     const dir = `byhand${++caseNo}`;
-    const history = work.write(`${dir}/history.json`, historyWith('default', ['ok/one', ...odd]));
+    const history = work.write(`${dir}/history.jsonl`, historyWith('default', ['ok/one', ...odd]));
     const run = work.write(`${dir}/run.json`, runWith(['ok/one']));
     for (const format of ['markdown', 'text'] as const) {
       const r = await bellgate(work.dir, ['check', '--metrics', run, '--history', history, '--format', format]);
@@ -253,7 +250,7 @@ describe('explain and --out with hostile names', () => {
   it('explain prints a hostile name (from the history or the argument) without escapes; --out files are inert', async () => {
     const names = ['<img src=x onerror=alert(1)>', 'esc\u001b[2J\u001b[31mred', 'a\u202Ereversed', '__proto__'];
     const dir = `explain${++caseNo}`;
-    const history = work.write(`${dir}/history.json`, historyWith('default', names));
+    const history = work.write(`${dir}/history.jsonl`, historyWith('default', names));
     const run = work.write(`${dir}/run.json`, runWith(['<img src=x onerror=alert(1)>', '__proto__']));
     for (const name of names) {
       const r = await bellgate(work.dir, ['explain', name, '--history', history]);

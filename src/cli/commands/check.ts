@@ -45,7 +45,7 @@ export function checkCommand(ctx: CommandContext): Command {
   inputOptions(cmd);
   runInfoOptions(cmd);
   examples(cmd, [
-    'bellgate check --metrics bench.json --history .bellgate/history.json',
+    'bellgate check --metrics bench.json --history .bellgate/history.jsonl',
     'bellgate check --metrics "out/*.json" --history h.json --format json > report.json',
     'bellgate check --metrics results.txt --input-format gobench --history h.json --out bellgate-out',
     'bellgate check --metrics bench.json --history h.json --record --sha "$(git rev-parse HEAD)"',

@@ -5,7 +5,7 @@ import { EXIT } from '../exit-codes.js';
 import { examples } from '../options.js';
 import { importCheckFlow } from '../warm-up.js';
 
-/** The demo's series name, as written in examples/demo/history.json. */
+/** The demo's series name, as written in examples/demo/history.jsonl. */
 export const DEMO_SERIES = 'kestrel-post/ci';
 
 /**

@@ -20,7 +20,7 @@ export function explainCommand(ctx: CommandContext): Command {
   seriesOption(cmd);
   inputOptions(cmd);
   examples(cmd, [
-    'bellgate explain latency/geocode-p95 --history .bellgate/history.json',
+    'bellgate explain latency/geocode-p95 --history .bellgate/history.jsonl',
     'bellgate explain size/web-bundle.js.gz --history h.json --metrics bench.json',
   ]);
   // The work is imported when the command runs, so `--help` and the other commands never load it.

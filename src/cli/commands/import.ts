@@ -14,7 +14,7 @@ export function importCommand(ctx: CommandContext): Command {
   cmd.requiredOption('--runs <file>', 'past runs: JSON Lines (one run a line) or CSV');
   seriesOption(cmd);
   examples(cmd, [
-    'bellgate import --history .bellgate/history.json --runs past-runs.jsonl',
+    'bellgate import --history .bellgate/history.jsonl --runs past-runs.jsonl',
     'bellgate import --history h.json --runs nightly.csv --series nightly',
   ]);
   cmd.addHelpText(

@@ -22,7 +22,7 @@ export function recordCommand(ctx: CommandContext): Command {
   runInfoOptions(cmd);
   inputOptions(cmd);
   examples(cmd, [
-    'bellgate record --metrics bench.json --history .bellgate/history.json',
+    'bellgate record --metrics bench.json --history .bellgate/history.jsonl',
     'bellgate record --metrics bench.json --history h.json --id 8812-1 --sha 3f2a9c1 --ref refs/heads/main --time 2026-05-04T10:20:30Z',
   ]);
   // The work is imported when the command runs, so `--help` and the other commands never load it.

@@ -17,7 +17,7 @@ export function reportCommand(ctx: CommandContext): Command {
   seriesOption(cmd);
   inputOptions(cmd);
   examples(cmd, [
-    'bellgate report --history .bellgate/history.json --html bellgate-report.html',
+    'bellgate report --history .bellgate/history.jsonl --html bellgate-report.html',
     'bellgate report --history h.json --metrics bench.json --html out/report.html --title "Nightly"',
   ]);
   // The work (with d3 and the HTML code) is imported when the command runs, so the others never load it.

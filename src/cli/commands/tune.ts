@@ -25,7 +25,7 @@ export function tuneCommand(ctx: CommandContext): Command {
     .option('--write <file>', 'write the suggested cutoffs and transforms into this config file and print the diff')
     .addOption(new Option('--format <format>', 'output format').choices(['text', 'json']).default('text'));
   examples(cmd, [
-    'bellgate tune --history .bellgate/history.json --config .github/bellgate.yml',
+    'bellgate tune --history .bellgate/history.jsonl --config .github/bellgate.yml',
     'bellgate tune --history h.json --labels known-regressions.yml --format json',
     'bellgate tune --history h.json --target 0.5 --write .github/bellgate.yml',
   ]);

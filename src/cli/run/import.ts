@@ -32,9 +32,12 @@ export async function runImport(ctx: CommandContext, options: ImportOptions): Pr
     ctx.io.stderr(visibleText(`bellgate: skipped ${skip.where}: ${skip.reason}`) + '\n');
   if (skipped.length > SHOWN_SKIPS)
     ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
-  if (store) await store.save(result.history, history.runs.length);
+  // The store merges what it holds at the moment of writing (under its lock) with these runs.
+  const runs = store
+    ? (await store.update({ kind: 'merge', history: result.incoming })).runs
+    : result.history.runs.length;
   ctx.io.stdout(
     `imported ${options.runs}: ${result.added} runs added, ${result.updated} updated, ${result.unchanged} unchanged, ${skipped.length} skipped; ` +
-      `${result.history.runs.length} runs in ${store?.describe() ?? options.history}\n`,
+      `${runs} runs in ${store?.describe() ?? options.history}\n`,
   );
 }

@@ -27,7 +27,7 @@ export interface SinceCliOptions {
  * @throws StoreError when the file exists but cannot be read (exit 3); InputError when it is missing.
  */
 export async function readSinceHistory(ctx: CommandContext, path: string, series: string): Promise<SinceHistory> {
-  const history = await createFileStore(resolvePath(ctx, path), series).load();
+  const history = await createFileStore(resolvePath(ctx, path), series).read();
   if (history.runs.length === 0) {
     throw new InputError('the history has no runs to review', {
       where: path,

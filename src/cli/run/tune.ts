@@ -3,12 +3,12 @@ import { createTwoFilesPatch } from 'diff';
 import { parseLabels, type RegressionLabel } from '../../gate/tune/labels.js';
 import { tuneHistory } from '../../gate/tune/tune.js';
 import { applyConfigEdit } from '../../gate/tune/write-config.js';
-import { parseHistory } from '../../history/document.js';
 import { InputError } from '../../errors/input-error.js';
 import { renderTuneJson } from '../../report/tune-json.js';
 import { renderTuneText } from '../../report/tune-text.js';
 import type { CliIo, CommandContext } from '../context.js';
 import { loadConfig } from '../load-config.js';
+import { openHistory } from '../open-history.js';
 import { resolvePath } from '../paths.js';
 import { readUserText } from '../read-text.js';
 
@@ -30,8 +30,8 @@ export interface TuneOptions {
  */
 export async function runTune(ctx: CommandContext, options: TuneOptions): Promise<void> {
   const config = await loadConfig(ctx, options.config);
-  const historyText = await readUserText(resolvePath(ctx, options.history), '--history');
-  const history = parseHistory(historyText, options.history);
+  // Whatever series the file holds: tune replays the document it is given.
+  const { history } = await openHistory(ctx, options.history, undefined);
   if (history.runs.length === 0) {
     throw new InputError('the history holds no runs, so there is nothing to replay', {
       where: options.history,

@@ -49,20 +49,26 @@ export function scratch(prefix = 'bellgate-cli-'): {
 }
 
 /**
- * A version-1 history document written by hand (the simple per-run form every version of
- * Bellgate reads): one run per value, ids r1.., a day apart.
+ * A history document written by hand in the stored layout (bellgate.history/3: a header line, then
+ * one line per run): one run per value, ids r1.., a day apart.
  */
-export function handHistoryV1(series: string, values: Record<string, number[]>, unit?: string): string {
+export function handHistory(series: string, values: Record<string, number[]>, unit?: string): string {
   const names = Object.keys(values);
   const length = Math.max(...names.map((n) => values[n]?.length ?? 0));
-  const runs = Array.from({ length }, (_, i) => ({
-    id: `r${i + 1}`,
-    time: new Date(Date.UTC(2026, 0, 1 + i)).toISOString(),
-    ref: 'refs/heads/main',
-    values: Object.fromEntries(names.map((n) => [n, values[n]?.[i] ?? null])),
-    ...(unit === undefined ? {} : { units: Object.fromEntries(names.map((n) => [n, unit])) }),
-  }));
-  return JSON.stringify({ schema: 'bellgate.history/1', series, runs });
+  const header = {
+    schema: 'bellgate.history/3',
+    series,
+    metrics: names.map((name) => (unit === undefined ? { name } : { name, unit })),
+  };
+  const runs = Array.from({ length }, (_, i) =>
+    JSON.stringify({
+      id: `r${i + 1}`,
+      time: new Date(Date.UTC(2026, 0, 1 + i)).toISOString(),
+      ref: 'refs/heads/main',
+      values: names.map((n) => values[n]?.[i] ?? null),
+    }),
+  );
+  return `${[JSON.stringify(header), ...runs].join('\n')}\n`;
 }
 
 /** A stack-trace line ("    at f (file:1:2)"): never allowed in what a user sees. */
@@ -83,8 +89,8 @@ export function steadyFixture() {
     work,
     steady,
     history: work.write(
-      'h/history.json',
-      handHistoryV1('default', { 'api/latency': steady, 'api/size': steady.map((v) => v * 1000) }),
+      'h/history.jsonl',
+      handHistory('default', { 'api/latency': steady, 'api/size': steady.map((v) => v * 1000) }),
     ),
     calm: work.write('calm.json', JSON.stringify({ 'api/latency': 100.5, 'api/size': 100_200 })),
     slow: work.write('slow.json', JSON.stringify({ 'api/latency': 130, 'api/size': 100_200 })),

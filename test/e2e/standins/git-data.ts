@@ -1,13 +1,20 @@
 /**
  * A loopback stand-in for the Git Data part of the GitHub REST API (docs.github.com/rest/git:
  * "Get a reference", "Create a reference", "Update a reference", "Get/Create a commit", "Create a
- * tree", "Get/Create a blob"; and "Get repository content"), with the semantics the branch store
- * relies on: objects addressed by content, trees built on a base_tree with nested paths, commits
- * with parents, and a non-forced ref update that is refused (422 "Update is not a fast forward")
- * unless the new commit descends from the current head. Blob shas are real git object ids
- * (SHA-1 of "blob <size>\0<bytes>"); tree and commit ids hash a canonical form. Every request is
- * held to GitHub's published REST description and every answer to its documented response schema
- * (openapi.ts), recorded in `state.violations`. 127.0.0.1 only.
+ * tree", "Get/Create a blob"; "Get repository content"; and "Merge a branch"), with the semantics
+ * the branch store relies on: objects addressed by content, trees built on a base_tree with nested
+ * paths and inline `content` (the server writes the blob), commits with parents, a non-forced ref
+ * update that is refused (422 "Update is not a fast forward") unless the new commit descends from
+ * the current head, and a server-side merge (201 with the merge commit, 204 when the branch holds
+ * the commit already, 409 "Merge conflict" when both sides changed a file). Merges are
+ * three-way by file (stricter than git's line-wise merge: any file both sides changed conflicts).
+ * Optionally it enforces GitHub's documented secondary limit on content-creating requests (80 a
+ * minute, "Rate limits for the REST API"), answering over it as documented: 403 with "You have
+ * exceeded a secondary rate limit" and a retry-after header; and it counts requests that came back
+ * before the wait it asked for (which GitHub warns may get an integration banned).
+ * Blob shas are real git object ids (SHA-1 of "blob <size>\0<bytes>"); tree and commit ids hash a
+ * canonical form. Every request is held to GitHub's published REST description and every answer to
+ * its documented response schema (openapi.ts), recorded in `state.violations`. 127.0.0.1 only.
  */
 import { createHash } from 'node:crypto';
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
@@ -29,6 +36,15 @@ export interface GitDataState {
   readOnly?: boolean;
   /** Requests and answers that do not match GitHub's REST description (should stay empty). */
   violations: string[];
+  /** When set, ref writes and merges on this branch answer 422 as a ruleset would. */
+  rulesetOn?: string;
+  /** Content-creating requests (POST, PATCH, PUT, DELETE) allowed per `minuteMs`; unlimited when unset. */
+  writeLimit?: { perMinute: number; minuteMs: number; secondMs: number };
+  /** Times (ms) of the content-creating requests accepted, for the sliding window. */
+  writes: number[];
+  /** Content-creating requests refused for the limit, and those that came back too early. */
+  limited: number;
+  early: number;
 }
 
 export interface GitDataStandin {
@@ -60,8 +76,18 @@ export function takeGitViolations(state: GitDataState): string[] {
 }
 
 export async function startGitDataStandin(): Promise<GitDataStandin> {
-  const state: GitDataState = { objects: new Map(), refs: new Map(), calls: [], violations: [] };
+  const state: GitDataState = {
+    objects: new Map(),
+    refs: new Map(),
+    calls: [],
+    violations: [],
+    writes: [],
+    limited: 0,
+    early: 0,
+  };
   const api = githubApiCheck();
+  // When each client (by its X-Bellgate-Leg header, else its token) may come back after a refusal.
+  const notBefore = new Map<string, number>();
   const put = (o: GitObject): string => {
     const id =
       o.kind === 'blob'
@@ -108,6 +134,28 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
       todo.push(...(get(sha, 'commit')?.parents ?? []));
     }
     return false;
+  };
+
+  /** The nearest commit reachable from both (breadth first from `a`, checked against `b`'s ancestry). */
+  const mergeBase = (a: string, b: string): string | undefined => {
+    const queue = [a];
+    const seen = new Set<string>();
+    while (queue.length > 0) {
+      const sha = queue.shift() as string;
+      if (seen.has(sha)) continue;
+      seen.add(sha);
+      if (descends(b, sha)) return sha;
+      queue.push(...(get(sha, 'commit')?.parents ?? []));
+    }
+    return undefined;
+  };
+  /** Every file of a tree, by slash path. */
+  const flatten = (tree: string | undefined, prefix = '', out = new Map<string, Entry>()): Map<string, Entry> => {
+    for (const [name, entry] of get(tree, 'tree')?.entries ?? []) {
+      if (entry.type === 'tree') flatten(entry.sha, `${prefix}${name}/`, out);
+      else out.set(`${prefix}${name}`, entry);
+    }
+    return out;
   };
 
   async function handle(req: IncomingMessage, res: ServerResponse, url: URL): Promise<number> {
@@ -160,12 +208,42 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
         verification: { verified: false, reason: 'unsigned', signature: null, payload: null, verified_at: null },
       };
     };
-    if (!req.headers.authorization?.startsWith('Bearer ')) return reply(401, { message: 'Requires authentication' });
+    if (!/^(Bearer|token) /.test(req.headers.authorization ?? ''))
+      return reply(401, { message: 'Requires authentication' });
     if (state.readOnly && method !== 'GET') return reply(403, { message: 'Resource not accessible by integration' });
+    if (method !== 'GET' && state.writeLimit) {
+      const { perMinute, minuteMs, secondMs } = state.writeLimit;
+      const now = Date.now();
+      const client = String(req.headers['x-bellgate-leg'] ?? req.headers.authorization);
+      if (now < (notBefore.get(client) ?? 0)) state.early += 1;
+      state.writes = state.writes.filter((t) => t > now - minuteMs);
+      if (state.writes.length >= perMinute) {
+        state.limited += 1;
+        // Seconds until the oldest write in the window leaves it, at least one.
+        const wait = Math.max(1, Math.ceil(((state.writes[0] as number) + minuteMs - now) / secondMs));
+        notBefore.set(client, now + wait * secondMs);
+        res.writeHead(403, { 'content-type': 'application/json; charset=utf-8', 'retry-after': String(wait) });
+        res.end(
+          JSON.stringify({
+            message: 'You have exceeded a secondary rate limit. Please wait a few minutes before you try again.',
+            documentation_url: 'https://docs.github.com/rest/using-the-rest-api/rate-limits-for-the-rest-api',
+          }),
+        );
+        return 403;
+      }
+      state.writes.push(now);
+    }
     const m = /^\/repos\/[^/]+\/[^/]+(\/.*)$/.exec(url.pathname);
     const rest = m?.[1] ?? '';
     const tail = (prefix: string) => decodeURIComponent(rest.slice(prefix.length));
 
+    const refused = (branch: string) =>
+      state.rulesetOn === branch
+        ? reply(422, {
+            message: 'Repository rule violations found\n\nChanges must be made through a pull request.\n\n',
+            documentation_url: 'https://docs.github.com/rest/git/refs#update-a-reference',
+          })
+        : undefined;
     if (method === 'GET' && rest.startsWith('/git/ref/heads/')) {
       const ref = `refs/heads/${tail('/git/ref/heads/')}`;
       const sha = state.refs.get(ref);
@@ -173,14 +251,75 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
     }
     if (method === 'POST' && rest === '/git/refs') {
       const ref = String(body.ref ?? '');
+      const stop = refused(ref.replace(/^refs\/heads\//, ''));
+      if (stop !== undefined) return stop;
       if (!/^refs\/heads\/./.test(ref)) return reply(422, { message: 'Reference name is not valid' });
       if (!get(body.sha, 'commit')) return reply(422, { message: 'Object does not exist' });
       if (state.refs.has(ref)) return reply(422, { message: 'Reference already exists' });
       state.refs.set(ref, body.sha as string);
       return reply(201, refJson(ref, body.sha));
     }
+    if (method === 'POST' && rest === '/merges') {
+      const baseRef = `refs/heads/${String(body.base ?? '')}`;
+      const stop = refused(String(body.base ?? ''));
+      if (stop !== undefined) return stop;
+      const ours = state.refs.get(baseRef);
+      if (!ours) return reply(404, { message: 'Base does not exist' });
+      const theirs = typeof body.head === 'string' ? (state.refs.get(`refs/heads/${body.head}`) ?? body.head) : '';
+      if (!get(theirs, 'commit')) return reply(404, { message: 'Head does not exist' });
+      if (descends(ours, theirs)) {
+        state.violations.push(...api.response(operation, 204, undefined));
+        res.writeHead(204);
+        res.end();
+        return 204;
+      }
+      const baseCommit = mergeBase(ours, theirs);
+      const files = (c: string | undefined) => flatten(get(c, 'commit')?.tree);
+      const [b, o, t] = [files(baseCommit), files(ours), files(theirs)];
+      const merged = new Map<string, Entry>();
+      for (const path of new Set([...b.keys(), ...o.keys(), ...t.keys()])) {
+        const [eb, eo, et] = [b.get(path)?.sha, o.get(path)?.sha, t.get(path)?.sha];
+        let pick: string | undefined;
+        if (eo === et) pick = eo;
+        else if (eo === eb) pick = et;
+        else if (et === eb) pick = eo;
+        else return reply(409, { message: 'Merge conflict' });
+        if (pick !== undefined) merged.set(path, { mode: '100644', type: 'blob', sha: pick });
+      }
+      let tree = put({ kind: 'tree', entries: new Map() });
+      for (const [path, entry] of merged) tree = plant(tree, path.split('/'), entry);
+      const sha = put({
+        kind: 'commit',
+        tree,
+        parents: [ours, theirs],
+        message: String(body.commit_message ?? 'Merge'),
+      });
+      state.refs.set(baseRef, sha);
+      const made = commitJson(sha, { tree, parents: [ours, theirs], message: String(body.commit_message ?? 'Merge') });
+      return reply(201, {
+        url: `${base}/commits/${sha}`,
+        sha,
+        node_id: made.node_id,
+        html_url: made.html_url,
+        comments_url: `${base}/commits/${sha}/comments`,
+        commit: {
+          url: made.url,
+          author: made.author,
+          committer: made.committer,
+          message: made.message,
+          comment_count: 0,
+          tree: made.tree,
+          verification: made.verification,
+        },
+        author: null,
+        committer: null,
+        parents: made.parents,
+      });
+    }
     if (method === 'PATCH' && rest.startsWith('/git/refs/heads/')) {
       const ref = `refs/heads/${tail('/git/refs/heads/')}`;
+      const stop = refused(tail('/git/refs/heads/'));
+      if (stop !== undefined) return stop;
       const current = state.refs.get(ref);
       if (!current) return reply(422, { message: 'Reference does not exist' });
       if (!get(body.sha, 'commit')) return reply(422, { message: 'Object does not exist' });
@@ -218,8 +357,11 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
         const path = String(raw.path ?? '');
         if (path === '' || path.split('/').some((p) => p === '' || p === '.' || p === '..'))
           return reply(422, { message: `invalid tree path ${path}` });
-        if (!get(raw.sha, 'blob')) return reply(422, { message: 'tree.sha is not a valid blob' });
-        tree = plant(tree, path.split('/'), { mode: String(raw.mode), type: 'blob', sha: raw.sha as string });
+        // `content` instead of `sha`: "GitHub will write this blob out and use that SHA for this entry".
+        const sha =
+          typeof raw.content === 'string' ? put({ kind: 'blob', bytes: Buffer.from(raw.content, 'utf8') }) : raw.sha;
+        if (!get(sha, 'blob')) return reply(422, { message: 'tree.sha is not a valid blob' });
+        tree = plant(tree, path.split('/'), { mode: String(raw.mode), type: 'blob', sha: sha as string });
       }
       tree ??= put({ kind: 'tree', entries: new Map() });
       const entries = [...(get(tree, 'tree')?.entries ?? [])].map(([path, e]) => ({
@@ -294,7 +436,11 @@ export async function startGitDataStandin(): Promise<GitDataStandin> {
           status,
           auth: req.headers.authorization,
         }),
-      (e: unknown) => send(res, 500, { message: String(e) }),
+      (e: unknown) => {
+        // A fault of the stand-in itself must fail the test, not pass as a retried 500.
+        state.violations.push(`the stand-in failed on ${req.method} ${url.pathname}: ${String(e)}`);
+        return send(res, 500, { message: String(e) });
+      },
     );
   });
   await new Promise<void>((r) => server.listen(0, '127.0.0.1', r));

@@ -6,7 +6,8 @@
  * its JSON body against the operation's request body schema; every answer a stand-in serves is
  * checked against the documented response of that status. A request the description does not
  * know is a violation. Schemas are compiled by ajv on first use, with the description added whole
- * so its `$ref`s resolve; OpenAPI's `nullable` is read by ajv itself.
+ * so its `$ref`s resolve; OpenAPI's `nullable` is read by ajv itself where the schema has a `type`,
+ * and rewritten as `anyOf [schema, null]` where it has none (ajv refuses `nullable` alone).
  */
 import { readFileSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -33,7 +34,7 @@ export interface ApiCheck {
 }
 
 const require = createRequire(import.meta.url);
-const GENERIC_ERRORS = new Set([401, 403, 429, 500, 502, 503]);
+const GENERIC_ERRORS = new Set([401, 403, 404, 429, 500, 502, 503]);
 const DOC = 'https://api.github.com/openapi.json';
 let shared: ApiCheck | undefined;
 
@@ -47,7 +48,19 @@ export function githubApiCheck(): ApiCheck {
 
 const escapePointer = (s: string): string => s.replace(/~/g, '~0').replace(/\//g, '~1');
 
-function build(doc: Json): ApiCheck {
+/** OpenAPI 3.0 allows `nullable` beside `allOf`/`anyOf`/`$ref` without a `type`; JSON Schema says it as anyOf. */
+function nullableWithoutType(node: unknown): unknown {
+  if (Array.isArray(node)) return node.map(nullableWithoutType);
+  if (node === null || typeof node !== 'object') return node;
+  const out: Json = {};
+  for (const [key, value] of Object.entries(node as Json)) out[key] = nullableWithoutType(value);
+  if (out.nullable !== true || 'type' in out) return out;
+  const { nullable: _nullable, description, ...rest } = out;
+  return { ...(description === undefined ? {} : { description }), anyOf: [rest, { type: 'null' }] };
+}
+
+function build(original: Json): ApiCheck {
+  const doc = nullableWithoutType(original) as Json;
   const ajv = new Ajv({ strict: false, validateSchema: false, validateFormats: false, allErrors: true });
   ajv.addSchema({ ...doc, $id: DOC });
   const compiled = new Map<string, ValidateFunction>();
@@ -166,8 +179,9 @@ function build(doc: Json): ApiCheck {
       const where = `${operation.method} ${operation.template} answered ${status}`;
       const responses = operation.spec.responses as Json;
       const raw = responses[String(status)] as Json | undefined;
-      // Any operation may be refused for a token's permissions or rate limit, or fail on the
-      // server (GitHub's REST docs, "Troubleshooting the REST API"), with a basic-error body.
+      // Any operation may be refused for a token's permissions or rate limit, answer 404 for a
+      // resource that is gone (or hidden from the token), or fail on the server (GitHub's REST
+      // docs, "Troubleshooting the REST API"), with a basic-error body.
       if (raw === undefined && GENERIC_ERRORS.has(status))
         return check('/components/schemas/basic-error', body, `${where}: body`);
       if (raw === undefined) return [`${where}, which the description does not document`];

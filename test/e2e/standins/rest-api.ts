@@ -1,7 +1,7 @@
 /**
  * A loopback stand-in for the parts of the GitHub REST API the action calls ("List artifacts for
  * a repository", "Download an artifact" answering 302 with a storage Location, "List labels for an
- * issue", "List/Create/Update issue comment"): exact-name artifact filter, newest-first listing,
+ * issue", "List/Create/Update issue comment", "Delete an artifact"): exact-name artifact filter, newest-first listing,
  * per_page/page pagination, and fault injection (status, headers, times) so retries can be
  * counted. Every request is held to GitHub's published REST description and every answer to its
  * documented response schema (openapi.ts); a mismatch, or a request the description does not
@@ -86,6 +86,8 @@ export interface RestState {
   calls: { method: string; path: string; auth?: string }[];
   /** Status answered to comment writes (e.g. 403 for a fork PR's read-only token). */
   commentWriteStatus?: number;
+  /** Status answered to artifact deletes instead of deleting (e.g. 403 without `actions: write`). */
+  artifactDeleteStatus?: number;
   nextId: number;
 }
 
@@ -195,7 +197,11 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
   };
   let base = '';
   const server = createServer((req, res) => {
-    handle(req, res).catch((e: unknown) => sendRaw(res, 500, { message: String(e) }));
+    handle(req, res).catch((e: unknown) => {
+      // A fault of the stand-in itself must fail the test, not pass as a retried 500.
+      state.violations.push(`the stand-in failed on ${req.method} ${req.url}: ${String(e)}`);
+      sendRaw(res, 500, { message: String(e) });
+    });
   });
   async function handle(req: IncomingMessage, res: ServerResponse): Promise<void> {
     const url = new URL(req.url ?? '/', base);
@@ -259,6 +265,18 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
         total_count: all.length,
         artifacts: slice(all).map((a) => artifactJson(a, base, owner, repo)),
       });
+    }
+    const del = /^\/actions\/artifacts\/(\d+)$/.exec(rest);
+    if (method === 'DELETE' && del) {
+      // "Delete an artifact": 204, 404 when it is not there, 403 for a token without actions: write.
+      if (state.artifactDeleteStatus)
+        return send(res, state.artifactDeleteStatus, { message: 'Resource not accessible by integration' });
+      const at = state.artifacts.findIndex((x) => x.id === Number(del[1]));
+      if (at < 0) return send(res, 404, { message: 'Not Found' });
+      state.artifacts.splice(at, 1);
+      res.writeHead(204);
+      res.end();
+      return;
     }
     let d = /^\/actions\/artifacts\/(\d+)\/zip$/.exec(rest);
     if (method === 'GET' && d) {

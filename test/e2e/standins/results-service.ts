@@ -5,7 +5,9 @@
  * defines them: snake_case fields, `signed_upload_url`, `artifact_id`). CreateArtifact answers a
  * signed Azurite blob URL the client uploads to for real; FinalizeArtifact registers the blob in
  * the REST stand-in, whose download then redirects to a read-signed URL of that same blob.
- * Names are unique per workflow run, as on GitHub (a second CreateArtifact of a name is a 409).
+ * Names are unique per workflow run, as on GitHub (a second CreateArtifact of a name is a 409);
+ * ListArtifacts and DeleteArtifact (what @actions/artifact's deleteArtifact calls with the runtime
+ * token) find and remove an artifact of the run by name.
  */
 import { createServer, type IncomingMessage, type ServerResponse } from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -44,6 +46,7 @@ export async function startResultsStandin(azurite: Azurite, rest: RestStandin): 
   const runs = new Map<string, RunRecord>();
   const tokens = new Set<string>();
   const created = new Map<string, string>(); // `${run}/${name}` -> blob name
+  const finalized = new Map<string, { id: number; size: number; at: string }>(); // `${run}/${name}` -> artifact
   const calls: ResultsStandin['calls'] = [];
 
   const sas = (blob: string, permissions: string) =>
@@ -111,7 +114,30 @@ export async function startResultsStandin(azurite: Azurite, rest: RestStandin): 
         sizeInBytes: props.contentLength ?? Number(body.size ?? 0),
         location: sas(blob, 'r'),
       });
+      finalized.set(key, { id, size: props.contentLength ?? Number(body.size ?? 0), at: new Date().toISOString() });
       return reply(200, { ok: true, artifact_id: String(id) }, name);
+    }
+    if (req.url === `${SERVICE}ListArtifacts`) {
+      const filter = (body as Record<string, unknown>).name_filter;
+      const artifacts = [...finalized]
+        .filter(([k]) => k.startsWith(`${runId}/`) && (filter === undefined || k === `${runId}/${String(filter)}`))
+        .map(([k, a]) => ({
+          workflow_run_backend_id: runId,
+          workflow_job_run_backend_id: body?.workflow_job_run_backend_id ?? '',
+          database_id: String(a.id),
+          name: k.slice(runId.length + 1),
+          size: String(a.size),
+          created_at: a.at,
+        }));
+      return reply(200, { artifacts }, typeof filter === 'string' ? filter : undefined);
+    }
+    if (req.url === `${SERVICE}DeleteArtifact`) {
+      const a = finalized.get(key);
+      if (!a) return reply(404, { code: 'not_found', msg: 'artifact not found' }, name);
+      finalized.delete(key);
+      created.delete(key);
+      rest.state.artifacts = rest.state.artifacts.filter((x) => x.id !== a.id);
+      return reply(200, { ok: true, artifact_id: String(a.id) }, name);
     }
     reply(404, { code: 'bad_route', msg: `no handler for ${req.url}` });
   }
