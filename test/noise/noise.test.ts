@@ -1,5 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
+import { corpusScenarios, readCorpus } from './corpus.js';
 import { evaluate, formatTable, type Evaluation, type TableRow } from './evaluate.js';
+import { formatFigures, regimeFigures } from './figures.js';
 import { bimodal, heavyTails, regimes, sharedRunner, simulatedProject, type Scenario } from './simulate.js';
 
 // Issue 13 item 8: the gate measured on simulated noise (and the recorded corpus), at today's
@@ -25,9 +27,21 @@ const SIMULATIONS: readonly (readonly [string, readonly Scenario[]])[] = [
   ['sim: project (issue 13)', SEEDS.map((seed) => simulatedProject({ seed }))],
 ];
 
+/** The recorded corpus (test/fixtures/noise/README.md): each regime, cross-regime and mixed, by CPU and wall time. */
+const REGIMES = readCorpus();
+const CORPUS = corpusScenarios(REGIMES);
+
 const rows: TableRow[] = [];
+const corpusRows: TableRow[] = [];
 
 afterAll(() => {
+  const figures = REGIMES.flatMap((r) => (['cpu', 'wall'] as const).map((source) => regimeFigures(r, source)));
+  console.log(
+    `\nThe recorded corpus: noise figures over the timings (history and clean runs)\n${formatFigures(figures)}\n`,
+  );
+  console.log(
+    `\nBellgate on the recorded corpus (false alarms per 100 clean runs; share of slowdowns caught)\n${formatTable(corpusRows)}\n`,
+  );
   console.log(
     `\nBellgate on simulated noise (false alarms per 100 clean runs; share of slowdowns caught)\n${formatTable(rows)}\n`,
   );
@@ -43,6 +57,52 @@ function countsAddUp(result: Evaluation, scenarios: readonly Scenario[]): void {
   expect(result.falseAlarms).toBeLessThanOrEqual(result.clean);
   expect(result.detectableCheck.caught).toBeLessThanOrEqual(result.detectableCheck.eligible);
 }
+
+describe('the gate on the recorded corpus', () => {
+  it('holds every load regime with history, clean and slowed runs', () => {
+    expect(REGIMES.map((r) => r.name)).toEqual(expect.arrayContaining(['quiet', 'loaded']));
+    for (const r of REGIMES) {
+      const kinds = (kind: string) => r.runs.filter((x) => x.kind === kind).length;
+      expect(kinds('history')).toBeGreaterThanOrEqual(60);
+      expect(kinds('clean')).toBeGreaterThanOrEqual(100);
+      expect(kinds('slowed')).toBeGreaterThanOrEqual(60);
+      // the workload's byte counts come from seeded data: one value each in every run; the
+      // memory peak is the one size that varies
+      r.header.sizes.forEach((size, j) => {
+        const distinct = new Set(r.runs.map((x) => x.sizes[j])).size;
+        if (size.unit === 'B') expect(distinct, size.name).toBe(1);
+        else expect(distinct, size.name).toBeGreaterThan(1);
+      });
+      // a slowed run names a timing of the header, with one of the planned factors
+      for (const x of r.runs.filter((x) => x.kind === 'slowed')) {
+        expect(r.header.timings).toContain(x.metric);
+        expect(r.header.plan.factors).toContain(x.factor);
+      }
+    }
+  });
+
+  for (const scenario of CORPUS)
+    for (const [setting, yaml] of SETTINGS)
+      it(`${scenario.name}, ${setting}: counts add up`, async () => {
+        const result = await evaluate(yaml, scenario);
+        corpusRows.push({ scenario: scenario.name, setting, result });
+        countsAddUp(result, [scenario]);
+      });
+
+  it('a cutoff of 1e-300 never alarms and never catches (only timings are slowed, and they all vary)', async () => {
+    const result = await evaluate('defaults:\n  cutoff: 1e-300\n', CORPUS);
+    expect(result.falseAlarms).toBe(0);
+    expect(result.caught).toBe(0);
+  });
+
+  it('an absurdly loose gate (cutoff 0.999, no tolerance, both sides worse) alarms on most clean runs', async () => {
+    const result = await evaluate(
+      'defaults:\n  cutoff: 0.999\n  tolerance: 0\n  worse: both\n  change-points: false\n',
+      CORPUS,
+    );
+    expect(result.falseAlarmsPer100).toBeGreaterThan(80);
+  });
+});
 
 describe('the gate on simulated noise', () => {
   for (const [name, scenarios] of SIMULATIONS)
