@@ -9,6 +9,7 @@ import { verifyCommand } from './commands/verify.js';
 import { reportCommand } from './commands/report.js';
 import { demoCommand } from './commands/demo.js';
 import { tuneCommand } from './commands/tune.js';
+import { sinceCommand } from './commands/since.js';
 
 export type { CliIo } from './context.js';
 
@@ -22,6 +23,7 @@ export const COMMANDS: readonly CommandFactory[] = [
   explainCommand,
   tuneCommand,
   reportCommand,
+  sinceCommand,
   importCommand,
   verifyCommand,
   demoCommand,

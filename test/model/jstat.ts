@@ -2,7 +2,11 @@ import { createRequire } from 'node:module';
 
 /** The few jStat functions used as a second opinion (jstat ships no type declarations). */
 export interface JStatSubset {
-  normal: { pdf(x: number, mean: number, sd: number): number; cdf(x: number, mean: number, sd: number): number };
+  normal: {
+    pdf(x: number, mean: number, sd: number): number;
+    cdf(x: number, mean: number, sd: number): number;
+    inv(p: number, mean: number, sd: number): number;
+  };
   studentt: { pdf(x: number, nu: number): number; cdf(x: number, nu: number): number };
   chisquare: { cdf(x: number, k: number): number };
   centralF: { cdf(x: number, d1: number, d2: number): number };

@@ -1,0 +1,59 @@
+import { settingsFor } from '../../config/rules.js';
+import { InputError } from '../../errors/input-error.js';
+import { referenceFromText } from '../../gate/since/reference.js';
+import { reviewSince } from '../../gate/since/review-since.js';
+import type { SinceHistory } from '../../gate/since/since-history.js';
+import { createFileStore } from '../../history/file-store.js';
+import { renderSinceJson } from '../../report/since-json.js';
+import { renderSinceMarkdown } from '../../report/since-markdown.js';
+import { renderSinceText } from '../../report/since-text.js';
+import type { CommandContext } from '../context.js';
+import { loadConfig } from '../load-config.js';
+import type { ReportFormat } from '../options.js';
+import { resolvePath } from '../paths.js';
+
+export interface SinceCliOptions {
+  history: string;
+  config?: string;
+  series: string;
+  format: ReportFormat;
+  at?: string;
+  all?: boolean;
+}
+
+/**
+ * The history the review reads: today the file store's document. The one place that knows where
+ * the history comes from, so other stores plug in here.
+ * @throws StoreError when the file exists but cannot be read (exit 3); InputError when it is missing.
+ */
+export async function readSinceHistory(ctx: CommandContext, path: string, series: string): Promise<SinceHistory> {
+  const history = await createFileStore(resolvePath(ctx, path), series).load();
+  if (history.runs.length === 0) {
+    throw new InputError('the history has no runs to review', {
+      where: path,
+      fix: 'point --history at a history that bellgate record or the action has written',
+    });
+  }
+  return history;
+}
+
+/**
+ * The work of `bellgate since REF` (loaded only when that command runs): resolves REF in the
+ * history, reviews every metric and prints the review in the chosen format.
+ * @throws InputError for a REF the history cannot resolve or a bad config; StoreError for an unreadable history.
+ * @example await runSince(ctx, 'v2.3.0-sha', { history: 'h.json', series: 'default', format: 'text' })
+ */
+export async function runSince(ctx: CommandContext, ref: string, options: SinceCliOptions): Promise<void> {
+  const config = await loadConfig(ctx, options.config);
+  const history = await readSinceHistory(ctx, options.history, options.series);
+  const reference = referenceFromText(ref, history.runs);
+  if (options.at !== undefined) reference.time = options.at;
+  const report = reviewSince(history, reference, { worse: (name) => settingsFor(config, name).worse });
+  const text =
+    options.format === 'json'
+      ? renderSinceJson(report)
+      : options.format === 'markdown'
+        ? renderSinceMarkdown(report)
+        : renderSinceText(report, { all: options.all === true });
+  ctx.io.stdout(text);
+}
