@@ -1,4 +1,4 @@
-import { prepareGate, runGate } from '../gate/gate.js';
+import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import { renderJson } from '../report/json.js';
 import { renderMarkdown } from '../report/markdown.js';
@@ -51,7 +51,6 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
   }
-  await prepareGate(config);
   const report = runGate({ config, history, run, series: options.series });
 
   ctx.io.stdout(ensureNewline(render(ctx, report, options.format, options.all)));
@@ -67,9 +66,9 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   return report;
 }
 
-/** The exit code a verdict stands for: only `regressed` fails (accepted, learning and pass do not). */
+/** The exit code a verdict stands for: `regressed` fails, and `unsettled` with `unsettled: block` (report.blocks); the rest do not. */
 export function verdictExitCode(report: Report): number {
-  return report.verdict === 'regressed' ? EXIT.regressed : EXIT.ok;
+  return report.blocks ? EXIT.regressed : EXIT.ok;
 }
 
 function render(ctx: CommandContext, report: Report, format: ReportFormat, all = false): string {

@@ -1,4 +1,4 @@
-import { prepareGate, runGate } from '../gate/gate.js';
+import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import type { Config } from '../config/types.js';
 import type { History } from '../history/history.js';
@@ -31,6 +31,5 @@ export async function judgeRequestedRun(
     options.metrics === undefined
       ? splitNewest(opened.history, options.history)
       : { history: opened.history, run: await loadRun(ctx, config, { ...options, metrics: options.metrics }) };
-  await prepareGate(config);
   return { config, history, run, report: runGate({ config, history, run, series: options.series }) };
 }

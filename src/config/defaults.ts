@@ -11,12 +11,11 @@ export const DEFAULT_SETTINGS: Readonly<MetricSettings> = Object.freeze({
   resolution: 0,
   window: 60,
   minRuns: 8,
-  transform: 'none',
-  fit: 'mle',
-  uncertainty: 'predictive',
+  transform: 'auto',
   ignore: false,
   aggregate: 'median',
   changePoints: true,
+  sharedMove: true,
 } satisfies MetricSettings);
 
 /** Limits that fit ordinary CI output: 64 MiB files, 1 MiB lines, 100,000 metrics a run. */
@@ -25,6 +24,9 @@ export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({
   maxLineLength: 1024 * 1024,
   maxMetrics: 100_000,
 });
+
+/** The chance of any false alarm in a run that family control holds to by default (DESIGN.md). */
+export const DEFAULT_BUDGET = 0.01;
 
 /** Newest runs kept in a history document. */
 export const DEFAULT_KEEP = 500;
@@ -38,7 +40,9 @@ export function defaultConfig(): Config {
     defaults: { ...DEFAULT_SETTINGS, tolerance: { ...DEFAULT_SETTINGS.tolerance } },
     rules: [],
     groups: [],
-    family: 'none',
+    family: 'holm',
+    budget: DEFAULT_BUDGET,
+    unsettled: 'pass',
     keep: DEFAULT_KEEP,
     limits: { ...DEFAULT_LIMITS },
     source: '<defaults>',

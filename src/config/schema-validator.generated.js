@@ -5,9 +5,9 @@
 /* eslint-disable */
 export const validate = validate21;
 export default validate21;
-const schema6 = {"$schema":"http://json-schema.org/draft-07/schema#","title":"Bellgate configuration (.github/bellgate.yml)","description":"All keys are optional. Rules under metrics apply in order; a later match overrides an earlier one.","type":["object","null"],"additionalProperties":false,"properties":{"defaults":{"$ref":"#/definitions/settings"},"metrics":{"description":"Rules over metric names, applied in order.","type":["array","null"],"items":{"$ref":"#/definitions/rule"}},"groups":{"description":"Metrics that share a common move (for example the runner's speed).","type":["array","null"],"items":{"$ref":"#/definitions/group"}},"family":{"description":"Correction for judging many metrics at once.","enum":["none","bonferroni","holm","fdr"],"default":"none","examples":["holm"]},"keep":{"description":"Newest runs kept in the history; trimming is the only deletion.","type":"integer","minimum":1,"default":500,"examples":[500]},"input-format":{"description":"Force the metric file format instead of detecting it from content.","enum":["json","jsonl","csv","openmetrics","gobench","junit"],"examples":["json"]},"limits":{"$ref":"#/definitions/limits"}},"definitions":{"settings":{"description":"Settings for every metric, before rules apply.","type":["object","null"],"additionalProperties":false,"properties":{"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.01,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"default":"higher","examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","default":"1%","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"default":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"default":60,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"default":8,"examples":[8]},"transform":{"description":"Scale the Gaussian is fitted on.","enum":["none","log"],"default":"none","examples":["log"]},"fit":{"description":"How the centre and spread are estimated.","enum":["mle","unbiased","robust"],"default":"mle","examples":["robust"]},"uncertainty":{"description":"predictive: Student-t predictive density for a new run; plug-in: the fitted Gaussian as is.","enum":["predictive","plug-in"],"default":"predictive","examples":["plug-in"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"default":"median","examples":["min"]},"change-points":{"description":"Fit only the runs since the last detected level change.","type":"boolean","default":true,"examples":[false]}}},"rule":{"type":"object","additionalProperties":false,"required":["match"],"properties":{"match":{"anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"items":{"type":"string","minLength":1}}],"description":"a glob over metric names, or a list of them; '*' stays within one '/' segment, '**' crosses them; a leading '!' excludes","examples":["size/**"]},"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"examples":[8]},"transform":{"description":"Scale the Gaussian is fitted on.","enum":["none","log"],"examples":["log"]},"fit":{"description":"How the centre and spread are estimated.","enum":["mle","unbiased","robust"],"examples":["robust"]},"uncertainty":{"description":"predictive: Student-t predictive density for a new run; plug-in: the fitted Gaussian as is.","enum":["predictive","plug-in"],"examples":["plug-in"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"examples":["min"]},"change-points":{"description":"Fit only the runs since the last detected level change.","type":"boolean","examples":[false]},"ignore":{"description":"Report matching metrics as ignored and never judge them.","type":"boolean","examples":[true]},"relative-to":{"description":"Divide matching metrics by this metric of the same run before fitting (a calibration benchmark).","type":"string","minLength":1,"examples":["latency/calibrate"]}}},"group":{"type":"object","additionalProperties":false,"required":["name"],"properties":{"name":{"description":"Name of the group, unique in the file.","type":"string","minLength":1,"maxLength":200,"examples":["latency"]},"match":{"anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"items":{"type":"string","minLength":1}}],"description":"Members of the group (default: the name followed by /**). a glob over metric names, or a list of them; '*' stays within one '/' segment, '**' crosses them; a leading '!' excludes","examples":["latency/*"]}}},"limits":{"description":"Size limits for metric files.","type":["object","null"],"additionalProperties":false,"properties":{"max-file-bytes":{"description":"Largest metric file read, in bytes.","type":"integer","minimum":1,"default":67108864,"examples":[67108864]},"max-line-length":{"description":"Longest line in a metric file, in characters.","type":"integer","minimum":1,"default":1048576,"examples":[1048576]},"max-metrics":{"description":"Most metrics in one run.","type":"integer","minimum":1,"default":100000,"examples":[100000]}}}}};
-const schema7 = {"description":"Settings for every metric, before rules apply.","type":["object","null"],"additionalProperties":false,"properties":{"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.01,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"default":"higher","examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","default":"1%","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"default":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"default":60,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"default":8,"examples":[8]},"transform":{"description":"Scale the Gaussian is fitted on.","enum":["none","log"],"default":"none","examples":["log"]},"fit":{"description":"How the centre and spread are estimated.","enum":["mle","unbiased","robust"],"default":"mle","examples":["robust"]},"uncertainty":{"description":"predictive: Student-t predictive density for a new run; plug-in: the fitted Gaussian as is.","enum":["predictive","plug-in"],"default":"predictive","examples":["plug-in"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"default":"median","examples":["min"]},"change-points":{"description":"Fit only the runs since the last detected level change.","type":"boolean","default":true,"examples":[false]}}};
+const schema6 = {"$schema":"http://json-schema.org/draft-07/schema#","title":"Bellgate configuration (.github/bellgate.yml)","description":"All keys are optional. Rules under metrics apply in order; a later match overrides an earlier one.","type":["object","null"],"additionalProperties":false,"properties":{"defaults":{"$ref":"#/definitions/settings"},"metrics":{"description":"Rules over metric names, applied in order.","type":["array","null"],"items":{"$ref":"#/definitions/rule"}},"groups":{"description":"Metrics that share a move of their own (instead of the timings' shared move): each member is judged on its own move beside the others'.","type":["array","null"],"items":{"$ref":"#/definitions/group"}},"family":{"description":"Control of the false alarms across the metrics of a run: holm (default) holds the chance of any false alarm in a run at the budget; none judges each metric by its cutoff.","enum":["none","bonferroni","holm","fdr"],"default":"holm","examples":["none"]},"budget":{"description":"The chance of any false alarm in a run that family control holds to, as a percent.","type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","default":"1%","examples":["1%"]},"unsettled":{"description":"What a run whose shared move is beyond what the history has shown does: pass (reported, asks for a re-run) or block (fails like a regression).","enum":["pass","block"],"default":"pass","examples":["block"]},"keep":{"description":"Newest runs kept in the history; trimming is the only deletion.","type":"integer","minimum":1,"default":500,"examples":[500]},"input-format":{"description":"Force the metric file format instead of detecting it from content.","enum":["json","jsonl","csv","openmetrics","gobench","junit"],"examples":["json"]},"limits":{"$ref":"#/definitions/limits"}},"definitions":{"settings":{"description":"Settings for every metric, before rules apply.","type":["object","null"],"additionalProperties":false,"properties":{"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.01,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"default":"higher","examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","default":"1%","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"default":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"default":60,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"default":8,"examples":[8]},"transform":{"description":"Scale the metric is judged on: auto (the log scale for metrics with a time unit, none for the rest), none or log.","enum":["auto","none","log"],"default":"auto","examples":["log"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"default":"median","examples":["min"]},"change-points":{"description":"Restart the baseline at a detected change of the metric's own level that lasts (a regime that comes and goes is not one).","type":"boolean","default":true,"examples":[false]},"shared-move":{"description":"A timing takes part in the run's shared move of the timings, and is judged on its own move beside it.","type":"boolean","default":true,"examples":[false]}}},"rule":{"type":"object","additionalProperties":false,"required":["match"],"properties":{"match":{"anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"items":{"type":"string","minLength":1}}],"description":"a glob over metric names, or a list of them; '*' stays within one '/' segment, '**' crosses them; a leading '!' excludes","examples":["size/**"]},"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"examples":[8]},"transform":{"description":"Scale the metric is judged on: auto (the log scale for metrics with a time unit, none for the rest), none or log.","enum":["auto","none","log"],"examples":["log"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"examples":["min"]},"change-points":{"description":"Restart the baseline at a detected change of the metric's own level that lasts (a regime that comes and goes is not one).","type":"boolean","examples":[false]},"shared-move":{"description":"A timing takes part in the run's shared move of the timings, and is judged on its own move beside it.","type":"boolean","examples":[false]},"ignore":{"description":"Report matching metrics as ignored and never judge them.","type":"boolean","examples":[true]},"relative-to":{"description":"A metric of the same run (a calibration benchmark) whose move is the shared move of the matching metrics: they are judged on their own move beside it.","type":"string","minLength":1,"examples":["latency/calibrate"]}}},"group":{"type":"object","additionalProperties":false,"required":["name"],"properties":{"name":{"description":"Name of the group, unique in the file.","type":"string","minLength":1,"maxLength":200,"examples":["latency"]},"match":{"anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"items":{"type":"string","minLength":1}}],"description":"Members of the group (default: the name followed by /**). a glob over metric names, or a list of them; '*' stays within one '/' segment, '**' crosses them; a leading '!' excludes","examples":["latency/*"]}}},"limits":{"description":"Size limits for metric files.","type":["object","null"],"additionalProperties":false,"properties":{"max-file-bytes":{"description":"Largest metric file read, in bytes.","type":"integer","minimum":1,"default":67108864,"examples":[67108864]},"max-line-length":{"description":"Longest line in a metric file, in characters.","type":"integer","minimum":1,"default":1048576,"examples":[1048576]},"max-metrics":{"description":"Most metrics in one run.","type":"integer","minimum":1,"default":100000,"examples":[100000]}}}}};
 const func2 = Object.prototype.hasOwnProperty;
+const schema7 = {"description":"Settings for every metric, before rules apply.","type":["object","null"],"additionalProperties":false,"properties":{"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"default":0.01,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"default":"higher","examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","default":"1%","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"default":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"default":60,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"default":8,"examples":[8]},"transform":{"description":"Scale the metric is judged on: auto (the log scale for metrics with a time unit, none for the rest), none or log.","enum":["auto","none","log"],"default":"auto","examples":["log"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"default":"median","examples":["min"]},"change-points":{"description":"Restart the baseline at a detected change of the metric's own level that lasts (a regime that comes and goes is not one).","type":"boolean","default":true,"examples":[false]},"shared-move":{"description":"A timing takes part in the run's shared move of the timings, and is judged on its own move beside it.","type":"boolean","default":true,"examples":[false]}}};
 const pattern0 = new RegExp("^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$", "u");
 
 function validate22(data, {instancePath="", parentData, parentDataProperty, rootData=data}={}){
@@ -239,7 +239,7 @@ errors++;
 }
 if(data.transform !== undefined){
 let data6 = data.transform;
-if(!((data6 === "none") || (data6 === "log"))){
+if(!(((data6 === "auto") || (data6 === "none")) || (data6 === "log"))){
 const err17 = {instancePath:instancePath+"/transform",schemaPath:"#/properties/transform/enum",keyword:"enum",params:{allowedValues: schema7.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema7.properties.transform.enum,parentSchema:schema7.properties.transform,data:data6};
 if(vErrors === null){
 vErrors = [err17];
@@ -250,10 +250,10 @@ vErrors.push(err17);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data7 = data.fit;
-if(!(((data7 === "mle") || (data7 === "unbiased")) || (data7 === "robust"))){
-const err18 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/enum",keyword:"enum",params:{allowedValues: schema7.properties.fit.enum},message:"must be equal to one of the allowed values",schema:schema7.properties.fit.enum,parentSchema:schema7.properties.fit,data:data7};
+if(data.aggregate !== undefined){
+let data7 = data.aggregate;
+if(!((((data7 === "median") || (data7 === "mean")) || (data7 === "min")) || (data7 === "max"))){
+const err18 = {instancePath:instancePath+"/aggregate",schemaPath:"#/properties/aggregate/enum",keyword:"enum",params:{allowedValues: schema7.properties.aggregate.enum},message:"must be equal to one of the allowed values",schema:schema7.properties.aggregate.enum,parentSchema:schema7.properties.aggregate,data:data7};
 if(vErrors === null){
 vErrors = [err18];
 }
@@ -263,10 +263,10 @@ vErrors.push(err18);
 errors++;
 }
 }
-if(data.uncertainty !== undefined){
-let data8 = data.uncertainty;
-if(!((data8 === "predictive") || (data8 === "plug-in"))){
-const err19 = {instancePath:instancePath+"/uncertainty",schemaPath:"#/properties/uncertainty/enum",keyword:"enum",params:{allowedValues: schema7.properties.uncertainty.enum},message:"must be equal to one of the allowed values",schema:schema7.properties.uncertainty.enum,parentSchema:schema7.properties.uncertainty,data:data8};
+if(data["change-points"] !== undefined){
+let data8 = data["change-points"];
+if(typeof data8 !== "boolean"){
+const err19 = {instancePath:instancePath+"/change-points",schemaPath:"#/properties/change-points/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema7.properties["change-points"].type,parentSchema:schema7.properties["change-points"],data:data8};
 if(vErrors === null){
 vErrors = [err19];
 }
@@ -276,10 +276,10 @@ vErrors.push(err19);
 errors++;
 }
 }
-if(data.aggregate !== undefined){
-let data9 = data.aggregate;
-if(!((((data9 === "median") || (data9 === "mean")) || (data9 === "min")) || (data9 === "max"))){
-const err20 = {instancePath:instancePath+"/aggregate",schemaPath:"#/properties/aggregate/enum",keyword:"enum",params:{allowedValues: schema7.properties.aggregate.enum},message:"must be equal to one of the allowed values",schema:schema7.properties.aggregate.enum,parentSchema:schema7.properties.aggregate,data:data9};
+if(data["shared-move"] !== undefined){
+let data9 = data["shared-move"];
+if(typeof data9 !== "boolean"){
+const err20 = {instancePath:instancePath+"/shared-move",schemaPath:"#/properties/shared-move/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema7.properties["shared-move"].type,parentSchema:schema7.properties["shared-move"],data:data9};
 if(vErrors === null){
 vErrors = [err20];
 }
@@ -289,26 +289,13 @@ vErrors.push(err20);
 errors++;
 }
 }
-if(data["change-points"] !== undefined){
-let data10 = data["change-points"];
-if(typeof data10 !== "boolean"){
-const err21 = {instancePath:instancePath+"/change-points",schemaPath:"#/properties/change-points/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema7.properties["change-points"].type,parentSchema:schema7.properties["change-points"],data:data10};
-if(vErrors === null){
-vErrors = [err21];
-}
-else {
-vErrors.push(err21);
-}
-errors++;
-}
-}
 }
 validate22.errors = vErrors;
 return errors === 0;
 }
 
-const schema8 = {"type":"object","additionalProperties":false,"required":["match"],"properties":{"match":{"anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"items":{"type":"string","minLength":1}}],"description":"a glob over metric names, or a list of them; '*' stays within one '/' segment, '**' crosses them; a leading '!' excludes","examples":["size/**"]},"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"examples":[8]},"transform":{"description":"Scale the Gaussian is fitted on.","enum":["none","log"],"examples":["log"]},"fit":{"description":"How the centre and spread are estimated.","enum":["mle","unbiased","robust"],"examples":["robust"]},"uncertainty":{"description":"predictive: Student-t predictive density for a new run; plug-in: the fitted Gaussian as is.","enum":["predictive","plug-in"],"examples":["plug-in"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"examples":["min"]},"change-points":{"description":"Fit only the runs since the last detected level change.","type":"boolean","examples":[false]},"ignore":{"description":"Report matching metrics as ignored and never judge them.","type":"boolean","examples":[true]},"relative-to":{"description":"Divide matching metrics by this metric of the same run before fitting (a calibration benchmark).","type":"string","minLength":1,"examples":["latency/calibrate"]}}};
-const func4 = (function ucs2length(str) {
+const schema8 = {"type":"object","additionalProperties":false,"required":["match"],"properties":{"match":{"anyOf":[{"type":"string","minLength":1},{"type":"array","minItems":1,"items":{"type":"string","minLength":1}}],"description":"a glob over metric names, or a list of them; '*' stays within one '/' segment, '**' crosses them; a leading '!' excludes","examples":["size/**"]},"cutoff":{"description":"Relative density below which a metric on its worse side is flagged.","type":"number","exclusiveMinimum":0,"exclusiveMaximum":1,"examples":[0.01]},"worse":{"description":"Which direction is bad for the metric.","enum":["higher","lower","both"],"examples":["lower"]},"tolerance":{"description":"Smallest change worth flagging: a number in the metric's unit, or a percent of the baseline mean.","examples":["1%",512],"anyOf":[{"type":"number","minimum":0},{"type":"string","pattern":"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$","description":"a percent such as \"1%\""}]},"resolution":{"description":"Smallest meaningful step of the metric; the fitted spread is never below it.","type":"number","minimum":0,"examples":[1]},"window":{"description":"Newest baseline runs used for the fit.","type":"integer","minimum":2,"examples":[60]},"min-runs":{"description":"Baseline runs needed before the metric is judged (fewer: learning).","type":"integer","minimum":2,"examples":[8]},"transform":{"description":"Scale the metric is judged on: auto (the log scale for metrics with a time unit, none for the rest), none or log.","enum":["auto","none","log"],"examples":["log"]},"aggregate":{"description":"How repeated samples of a metric in one run become one value.","enum":["median","mean","min","max"],"examples":["min"]},"change-points":{"description":"Restart the baseline at a detected change of the metric's own level that lasts (a regime that comes and goes is not one).","type":"boolean","examples":[false]},"shared-move":{"description":"A timing takes part in the run's shared move of the timings, and is judged on its own move beside it.","type":"boolean","examples":[false]},"ignore":{"description":"Report matching metrics as ignored and never judge them.","type":"boolean","examples":[true]},"relative-to":{"description":"A metric of the same run (a calibration benchmark) whose move is the shared move of the matching metrics: they are judged on their own move beside it.","type":"string","minLength":1,"examples":["latency/calibrate"]}}};
+const func5 = (function ucs2length(str) {
     const len = str.length;
     let length = 0;
     let pos = 0;
@@ -358,7 +345,7 @@ const _errs3 = errors;
 let valid1 = false;
 const _errs4 = errors;
 if(typeof data0 === "string"){
-if(func4(data0) < 1){
+if(func5(data0) < 1){
 const err2 = {instancePath:instancePath+"/match",schemaPath:"#/properties/match/anyOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema8.properties.match.anyOf[0],data:data0};
 if(vErrors === null){
 vErrors = [err2];
@@ -398,7 +385,7 @@ const len0 = data0.length;
 for(let i0=0; i0<len0; i0++){
 let data1 = data0[i0];
 if(typeof data1 === "string"){
-if(func4(data1) < 1){
+if(func5(data1) < 1){
 const err5 = {instancePath:instancePath+"/match/" + i0,schemaPath:"#/properties/match/anyOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema8.properties.match.anyOf[1].items,data:data1};
 if(vErrors === null){
 vErrors = [err5];
@@ -659,7 +646,7 @@ errors++;
 }
 if(data.transform !== undefined){
 let data8 = data.transform;
-if(!((data8 === "none") || (data8 === "log"))){
+if(!(((data8 === "auto") || (data8 === "none")) || (data8 === "log"))){
 const err24 = {instancePath:instancePath+"/transform",schemaPath:"#/properties/transform/enum",keyword:"enum",params:{allowedValues: schema8.properties.transform.enum},message:"must be equal to one of the allowed values",schema:schema8.properties.transform.enum,parentSchema:schema8.properties.transform,data:data8};
 if(vErrors === null){
 vErrors = [err24];
@@ -670,10 +657,10 @@ vErrors.push(err24);
 errors++;
 }
 }
-if(data.fit !== undefined){
-let data9 = data.fit;
-if(!(((data9 === "mle") || (data9 === "unbiased")) || (data9 === "robust"))){
-const err25 = {instancePath:instancePath+"/fit",schemaPath:"#/properties/fit/enum",keyword:"enum",params:{allowedValues: schema8.properties.fit.enum},message:"must be equal to one of the allowed values",schema:schema8.properties.fit.enum,parentSchema:schema8.properties.fit,data:data9};
+if(data.aggregate !== undefined){
+let data9 = data.aggregate;
+if(!((((data9 === "median") || (data9 === "mean")) || (data9 === "min")) || (data9 === "max"))){
+const err25 = {instancePath:instancePath+"/aggregate",schemaPath:"#/properties/aggregate/enum",keyword:"enum",params:{allowedValues: schema8.properties.aggregate.enum},message:"must be equal to one of the allowed values",schema:schema8.properties.aggregate.enum,parentSchema:schema8.properties.aggregate,data:data9};
 if(vErrors === null){
 vErrors = [err25];
 }
@@ -683,10 +670,10 @@ vErrors.push(err25);
 errors++;
 }
 }
-if(data.uncertainty !== undefined){
-let data10 = data.uncertainty;
-if(!((data10 === "predictive") || (data10 === "plug-in"))){
-const err26 = {instancePath:instancePath+"/uncertainty",schemaPath:"#/properties/uncertainty/enum",keyword:"enum",params:{allowedValues: schema8.properties.uncertainty.enum},message:"must be equal to one of the allowed values",schema:schema8.properties.uncertainty.enum,parentSchema:schema8.properties.uncertainty,data:data10};
+if(data["change-points"] !== undefined){
+let data10 = data["change-points"];
+if(typeof data10 !== "boolean"){
+const err26 = {instancePath:instancePath+"/change-points",schemaPath:"#/properties/change-points/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema8.properties["change-points"].type,parentSchema:schema8.properties["change-points"],data:data10};
 if(vErrors === null){
 vErrors = [err26];
 }
@@ -696,10 +683,10 @@ vErrors.push(err26);
 errors++;
 }
 }
-if(data.aggregate !== undefined){
-let data11 = data.aggregate;
-if(!((((data11 === "median") || (data11 === "mean")) || (data11 === "min")) || (data11 === "max"))){
-const err27 = {instancePath:instancePath+"/aggregate",schemaPath:"#/properties/aggregate/enum",keyword:"enum",params:{allowedValues: schema8.properties.aggregate.enum},message:"must be equal to one of the allowed values",schema:schema8.properties.aggregate.enum,parentSchema:schema8.properties.aggregate,data:data11};
+if(data["shared-move"] !== undefined){
+let data11 = data["shared-move"];
+if(typeof data11 !== "boolean"){
+const err27 = {instancePath:instancePath+"/shared-move",schemaPath:"#/properties/shared-move/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema8.properties["shared-move"].type,parentSchema:schema8.properties["shared-move"],data:data11};
 if(vErrors === null){
 vErrors = [err27];
 }
@@ -709,10 +696,10 @@ vErrors.push(err27);
 errors++;
 }
 }
-if(data["change-points"] !== undefined){
-let data12 = data["change-points"];
+if(data.ignore !== undefined){
+let data12 = data.ignore;
 if(typeof data12 !== "boolean"){
-const err28 = {instancePath:instancePath+"/change-points",schemaPath:"#/properties/change-points/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema8.properties["change-points"].type,parentSchema:schema8.properties["change-points"],data:data12};
+const err28 = {instancePath:instancePath+"/ignore",schemaPath:"#/properties/ignore/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema8.properties.ignore.type,parentSchema:schema8.properties.ignore,data:data12};
 if(vErrors === null){
 vErrors = [err28];
 }
@@ -722,10 +709,11 @@ vErrors.push(err28);
 errors++;
 }
 }
-if(data.ignore !== undefined){
-let data13 = data.ignore;
-if(typeof data13 !== "boolean"){
-const err29 = {instancePath:instancePath+"/ignore",schemaPath:"#/properties/ignore/type",keyword:"type",params:{type: "boolean"},message:"must be boolean",schema:schema8.properties.ignore.type,parentSchema:schema8.properties.ignore,data:data13};
+if(data["relative-to"] !== undefined){
+let data13 = data["relative-to"];
+if(typeof data13 === "string"){
+if(func5(data13) < 1){
+const err29 = {instancePath:instancePath+"/relative-to",schemaPath:"#/properties/relative-to/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema8.properties["relative-to"],data:data13};
 if(vErrors === null){
 vErrors = [err29];
 }
@@ -735,11 +723,8 @@ vErrors.push(err29);
 errors++;
 }
 }
-if(data["relative-to"] !== undefined){
-let data14 = data["relative-to"];
-if(typeof data14 === "string"){
-if(func4(data14) < 1){
-const err30 = {instancePath:instancePath+"/relative-to",schemaPath:"#/properties/relative-to/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema8.properties["relative-to"],data:data14};
+else {
+const err30 = {instancePath:instancePath+"/relative-to",schemaPath:"#/properties/relative-to/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema8.properties["relative-to"].type,parentSchema:schema8.properties["relative-to"],data:data13};
 if(vErrors === null){
 vErrors = [err30];
 }
@@ -749,25 +734,14 @@ vErrors.push(err30);
 errors++;
 }
 }
+}
 else {
-const err31 = {instancePath:instancePath+"/relative-to",schemaPath:"#/properties/relative-to/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema8.properties["relative-to"].type,parentSchema:schema8.properties["relative-to"],data:data14};
+const err31 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema8.type,parentSchema:schema8,data};
 if(vErrors === null){
 vErrors = [err31];
 }
 else {
 vErrors.push(err31);
-}
-errors++;
-}
-}
-}
-else {
-const err32 = {instancePath,schemaPath:"#/type",keyword:"type",params:{type: "object"},message:"must be object",schema:schema8.type,parentSchema:schema8,data};
-if(vErrors === null){
-vErrors = [err32];
-}
-else {
-vErrors.push(err32);
 }
 errors++;
 }
@@ -806,7 +780,7 @@ errors++;
 if(data.name !== undefined){
 let data0 = data.name;
 if(typeof data0 === "string"){
-if(func4(data0) > 200){
+if(func5(data0) > 200){
 const err2 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/maxLength",keyword:"maxLength",params:{limit: 200},message:"must NOT have more than 200 characters",schema:200,parentSchema:schema9.properties.name,data:data0};
 if(vErrors === null){
 vErrors = [err2];
@@ -816,7 +790,7 @@ vErrors.push(err2);
 }
 errors++;
 }
-if(func4(data0) < 1){
+if(func5(data0) < 1){
 const err3 = {instancePath:instancePath+"/name",schemaPath:"#/properties/name/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema9.properties.name,data:data0};
 if(vErrors === null){
 vErrors = [err3];
@@ -844,7 +818,7 @@ const _errs5 = errors;
 let valid1 = false;
 const _errs6 = errors;
 if(typeof data1 === "string"){
-if(func4(data1) < 1){
+if(func5(data1) < 1){
 const err5 = {instancePath:instancePath+"/match",schemaPath:"#/properties/match/anyOf/0/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema9.properties.match.anyOf[0],data:data1};
 if(vErrors === null){
 vErrors = [err5];
@@ -884,7 +858,7 @@ const len0 = data1.length;
 for(let i0=0; i0<len0; i0++){
 let data2 = data1[i0];
 if(typeof data2 === "string"){
-if(func4(data2) < 1){
+if(func5(data2) < 1){
 const err8 = {instancePath:instancePath+"/match/" + i0,schemaPath:"#/properties/match/anyOf/1/items/minLength",keyword:"minLength",params:{limit: 1},message:"must NOT have fewer than 1 characters",schema:1,parentSchema:schema9.properties.match.anyOf[1].items,data:data2};
 if(vErrors === null){
 vErrors = [err8];
@@ -1081,7 +1055,7 @@ errors++;
 }
 if(data && typeof data == "object" && !Array.isArray(data)){
 for(const key0 in data){
-if(!(((((((key0 === "defaults") || (key0 === "metrics")) || (key0 === "groups")) || (key0 === "family")) || (key0 === "keep")) || (key0 === "input-format")) || (key0 === "limits"))){
+if(!(func2.call(schema6.properties, key0))){
 const err1 = {instancePath,schemaPath:"#/additionalProperties",keyword:"additionalProperties",params:{additionalProperty: key0},message:"must NOT have additional properties",schema:false,parentSchema:schema6,data};
 if(vErrors === null){
 vErrors = [err1];
@@ -1155,10 +1129,11 @@ vErrors.push(err4);
 errors++;
 }
 }
-if(data.keep !== undefined){
-let data6 = data.keep;
-if(!(((typeof data6 == "number") && (!(data6 % 1) && !isNaN(data6))) && (isFinite(data6)))){
-const err5 = {instancePath:instancePath+"/keep",schemaPath:"#/properties/keep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema6.properties.keep.type,parentSchema:schema6.properties.keep,data:data6};
+if(data.budget !== undefined){
+let data6 = data.budget;
+if(typeof data6 === "string"){
+if(!pattern0.test(data6)){
+const err5 = {instancePath:instancePath+"/budget",schemaPath:"#/properties/budget/pattern",keyword:"pattern",params:{pattern: "^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$"},message:"must match pattern \""+"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$"+"\"",schema:"^(?:[0-9]+(?:\\.[0-9]*)?|\\.[0-9]+) ?%$",parentSchema:schema6.properties.budget,data:data6};
 if(vErrors === null){
 vErrors = [err5];
 }
@@ -1167,9 +1142,9 @@ vErrors.push(err5);
 }
 errors++;
 }
-if((typeof data6 == "number") && (isFinite(data6))){
-if(data6 < 1 || isNaN(data6)){
-const err6 = {instancePath:instancePath+"/keep",schemaPath:"#/properties/keep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema6.properties.keep,data:data6};
+}
+else {
+const err6 = {instancePath:instancePath+"/budget",schemaPath:"#/properties/budget/type",keyword:"type",params:{type: "string"},message:"must be string",schema:schema6.properties.budget.type,parentSchema:schema6.properties.budget,data:data6};
 if(vErrors === null){
 vErrors = [err6];
 }
@@ -1179,16 +1154,53 @@ vErrors.push(err6);
 errors++;
 }
 }
-}
-if(data["input-format"] !== undefined){
-let data7 = data["input-format"];
-if(!((((((data7 === "json") || (data7 === "jsonl")) || (data7 === "csv")) || (data7 === "openmetrics")) || (data7 === "gobench")) || (data7 === "junit"))){
-const err7 = {instancePath:instancePath+"/input-format",schemaPath:"#/properties/input-format/enum",keyword:"enum",params:{allowedValues: schema6.properties["input-format"].enum},message:"must be equal to one of the allowed values",schema:schema6.properties["input-format"].enum,parentSchema:schema6.properties["input-format"],data:data7};
+if(data.unsettled !== undefined){
+let data7 = data.unsettled;
+if(!((data7 === "pass") || (data7 === "block"))){
+const err7 = {instancePath:instancePath+"/unsettled",schemaPath:"#/properties/unsettled/enum",keyword:"enum",params:{allowedValues: schema6.properties.unsettled.enum},message:"must be equal to one of the allowed values",schema:schema6.properties.unsettled.enum,parentSchema:schema6.properties.unsettled,data:data7};
 if(vErrors === null){
 vErrors = [err7];
 }
 else {
 vErrors.push(err7);
+}
+errors++;
+}
+}
+if(data.keep !== undefined){
+let data8 = data.keep;
+if(!(((typeof data8 == "number") && (!(data8 % 1) && !isNaN(data8))) && (isFinite(data8)))){
+const err8 = {instancePath:instancePath+"/keep",schemaPath:"#/properties/keep/type",keyword:"type",params:{type: "integer"},message:"must be integer",schema:schema6.properties.keep.type,parentSchema:schema6.properties.keep,data:data8};
+if(vErrors === null){
+vErrors = [err8];
+}
+else {
+vErrors.push(err8);
+}
+errors++;
+}
+if((typeof data8 == "number") && (isFinite(data8))){
+if(data8 < 1 || isNaN(data8)){
+const err9 = {instancePath:instancePath+"/keep",schemaPath:"#/properties/keep/minimum",keyword:"minimum",params:{comparison: ">=", limit: 1},message:"must be >= 1",schema:1,parentSchema:schema6.properties.keep,data:data8};
+if(vErrors === null){
+vErrors = [err9];
+}
+else {
+vErrors.push(err9);
+}
+errors++;
+}
+}
+}
+if(data["input-format"] !== undefined){
+let data9 = data["input-format"];
+if(!((((((data9 === "json") || (data9 === "jsonl")) || (data9 === "csv")) || (data9 === "openmetrics")) || (data9 === "gobench")) || (data9 === "junit"))){
+const err10 = {instancePath:instancePath+"/input-format",schemaPath:"#/properties/input-format/enum",keyword:"enum",params:{allowedValues: schema6.properties["input-format"].enum},message:"must be equal to one of the allowed values",schema:schema6.properties["input-format"].enum,parentSchema:schema6.properties["input-format"],data:data9};
+if(vErrors === null){
+vErrors = [err10];
+}
+else {
+vErrors.push(err10);
 }
 errors++;
 }

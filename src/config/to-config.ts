@@ -16,12 +16,11 @@ const FIELDS: ReadonlyArray<[string, keyof MetricSettings]> = [
   ['window', 'window'],
   ['min-runs', 'minRuns'],
   ['transform', 'transform'],
-  ['fit', 'fit'],
-  ['uncertainty', 'uncertainty'],
   ['aggregate', 'aggregate'],
   ['change-points', 'changePoints'],
   ['ignore', 'ignore'],
   ['relative-to', 'relativeTo'],
+  ['shared-move', 'sharedMove'],
 ];
 
 function settingsOf(data: Data): Partial<MetricSettings> {
@@ -65,6 +64,8 @@ export function toConfig(
 
   Object.assign(config.defaults, settingsOf((root.defaults ?? {}) as Data));
   if (root.family !== undefined) config.family = root.family as Family;
+  if (root.budget !== undefined) config.budget = parseTolerance(root.budget)?.amount ?? config.budget;
+  if (root.unsettled !== undefined) config.unsettled = root.unsettled as Config['unsettled'];
   if (root.keep !== undefined) config.keep = root.keep as number;
   if (root['input-format'] !== undefined) config.inputFormat = root['input-format'] as string;
   const limits = (root.limits ?? {}) as Data;

@@ -1,16 +1,14 @@
 import type { Config } from '../config/types.js';
-import { groupFor } from '../config/rules.js';
 import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
-import { loadMatrixLibrary } from '../model/matrix-library.js';
-import { cutoffLevel } from '../model/tails.js';
-import { decideMetric, type Test } from './decide-metric.js';
-import { familyTests } from './family-test.js';
-import type { GroupMemberInput } from './group-frame.js';
-import type { judgeGroups, PendingGroup } from './judge-groups.js';
-import type { MetricScore } from './judge-metric.js';
-import { judgeName, metricNames } from './judge-name.js';
-import { REPORT_SCHEMA, type GroupResult, type MetricResult, type Report } from './report.js';
+import { adjustTails, holmLevels } from '../model/family.js';
+import { sortMetrics } from './candidates.js';
+import { decide } from './decide.js';
+import { formGroups, takeApart, type MemberMoves } from './moves.js';
+import { noiseModel } from './noise.js';
+import { isLearning, scoreMember, type Scored } from './judge.js';
+import { REPORT_SCHEMA, type MetricResult, type Report, type SharedMoveResult } from './report.js';
+import { judgeSharedMove } from './shared-verdict.js';
 import { decideVerdict, orderMetrics } from './verdict.js';
 
 export interface GateInput {
@@ -20,90 +18,79 @@ export interface GateInput {
   series: string;
   /** The pull request carries the accept label: a regression gives `accepted`. */
   accepted?: boolean;
-}
-
-/** The group judge (judge-groups.ts and the joint check under it), once prepareGate loaded it. */
-let groupJudge: typeof judgeGroups | undefined;
-
-/**
- * Loads what runGate needs beyond its own code for this config: when the config names groups,
- * their judge and ml-matrix (their joint check); nothing otherwise, so a run without groups does
- * not compile that code at all. Await it before runGate.
- * @example await prepareGate(config); const report = runGate({ config, history, run, series });
- */
-export async function prepareGate(config: Config): Promise<void> {
-  if (config.groups.length === 0) return;
-  const [judge] = await Promise.all([import('./judge-groups.js'), loadMatrixLibrary()]);
-  groupJudge = judge.judgeGroups;
-}
-
-/** The group judge; a caller that skipped prepareGate is told so. */
-function loadedGroupJudge(): typeof judgeGroups {
-  if (groupJudge === undefined)
-    throw new Error('the group judge is not loaded: await prepareGate(config) before runGate');
-  return groupJudge;
+  /** This run's runner fingerprint (PLAN.md "The runner fingerprint"), when the adapter knows it. */
+  runner?: string;
 }
 
 /**
- * The decision (DESIGN.md "Statistics", issue 6): every metric of the run and of the history is
- * scored against its baseline (selectBaseline, scoreMetric); metrics in a configured group are
- * judged together (judgeGroups); with `family` set, the tails of all remaining decisions are
- * adjusted together (familyTests); then the verdict. Pure: no I/O, no clock.
- * Throws InputError for values the settings cannot take (e.g. <= 0 on the log scale). With groups,
- * prepareGate must have run.
+ * The decision (DESIGN.md "Statistics" and "Real CI noise", issue 13): every metric of the run and
+ * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
+ * the run's shared move and its own move (takeApart); the own moves get a noise model that borrows
+ * strength across metrics of one noise shape (noiseModel) and are scored against their predictive
+ * Student-t (scoreMember); family control holds the chance of any false alarm in the run at the
+ * budget (Holm by default) and each metric is decided (decide); each group's shared move is judged
+ * against the history's (judgeSharedMove); then the verdict. Pure: no I/O, no clock, no state.
+ * Throws InputError for values the settings cannot take (e.g. <= 0 with `transform: log`).
  * @example runGate({ config: defaultConfig(), history, run, series: 'main' }).verdict // 'pass'
  */
 export function runGate(input: GateInput): Report {
   const { config, history, run } = input;
-  const finished: MetricResult[] = [];
-  const scored: GroupMemberInput[] = [];
-  for (const name of metricNames(history, run)) {
-    const entry = judgeName(config, history, run, name);
-    if ('score' in entry) scored.push(entry);
-    else finished.push(entry.result);
+  const sorted = sortMetrics(config, history, run);
+  const formed = formGroups(config, sorted.candidates);
+  const metrics: MetricResult[] = [...sorted.finished, ...formed.finished];
+  const shared: SharedMoveResult[] = [];
+  const members: MemberMoves[] = [];
+  for (const group of formed.groups) {
+    const parts = takeApart(group, history, input.runner);
+    members.push(...parts.members);
+    if (parts.shared !== undefined && group.kind !== 'reference') shared.push(judgeSharedMove(parts.shared, config));
   }
-  // Without groups or family control (the defaults) nothing below changes a lone score, so the
-  // per-metric group lookups and cutoff levels are skipped.
-  const groupOutcome =
-    config.groups.length === 0 ? NO_GROUPS : loadedGroupJudge()(config, scored, (name) => groupFor(config, name)?.name);
-  const lone =
-    groupOutcome.judged.size === 0 ? scored : scored.filter((e) => !groupOutcome.judged.has(e.score.result.name));
-  const tests =
-    config.family === 'none'
-      ? []
-      : familyTests(
-          [
-            ...lone.map((e) => ({ tail: e.score.result.tail ?? 1, level: cutoffLevel(e.score.settings.cutoff) })),
-            ...groupOutcome.pending.map((g) => ({ tail: g.analysis.tail, level: g.level })),
-          ],
-          config.family,
-        );
-  const metrics = [...finished];
-  lone.forEach((e, i) => metrics.push(decideLone(e.score, tests[i])));
-  const groups: GroupResult[] = [...groupOutcome.learning];
-  groupOutcome.pending.forEach((g, i) => {
-    const decided = g.decide(tests[lone.length + i]);
-    groups.push(decided.group);
-    metrics.push(...decided.members);
-  });
+  const noise = noiseModel(members);
+  const family = config.family !== 'none';
+  // The Bonferroni share of the budget bounds every metric's Holm level from below, so the
+  // detectable computed at it holds whatever rank the metric takes.
+  const judged = members.filter((m) => !isLearning(m, noise.get(m)!)).length;
+  const share = family ? config.budget / Math.max(1, judged) : undefined;
+  const scored: Scored[] = [];
+  for (const m of members) {
+    const s = scoreMember(m, noise.get(m)!, share);
+    if ('result' in s) scored.push(s);
+    else metrics.push(s);
+  }
+  if (config.family !== 'none' && share !== undefined) {
+    const tails = scored.map((s) => s.worseTail);
+    const adjusted = adjustTails(tails, config.family);
+    const levels =
+      config.family === 'holm'
+        ? holmLevels(tails, config.budget)
+        : config.family === 'bonferroni'
+          ? tails.map(() => share)
+          : fdrLevels(tails, config.budget);
+    scored.forEach((s, i) =>
+      metrics.push(decide(s, { adjusted: adjusted[i]!, level: levels[i]!, budget: config.budget, share })),
+    );
+  } else {
+    for (const s of scored) metrics.push(decide(s, undefined));
+  }
+  const verdict = decideVerdict(metrics, shared, input.accepted === true);
   return {
     schema: REPORT_SCHEMA,
-    verdict: decideVerdict(metrics, groups, input.accepted === true),
+    verdict,
+    blocks: verdict === 'regressed' || (verdict === 'unsettled' && config.unsettled === 'block'),
     series: input.series,
     family: config.family,
+    budget: config.budget,
+    unsettled: config.unsettled,
+    ...(input.runner === undefined ? {} : { runner: input.runner }),
     metrics: orderMetrics(metrics),
-    groups: groups.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
+    shared: shared.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
   };
 }
 
-function decideLone(score: MetricScore, family: { adjusted: number; test: Test } | undefined): MetricResult {
-  if (family === undefined || !score.scored) return score.result;
-  return { ...decideMetric(score, family.test), adjusted: family.adjusted };
+/** Benjamini-Hochberg's level of each tail at its rank i (ascending, from 1): i alpha / m. */
+function fdrLevels(tails: readonly number[], alpha: number): number[] {
+  const order = tails.map((_, i) => i).sort((a, b) => tails[a]! - tails[b]! || a - b);
+  const levels = new Array<number>(tails.length);
+  order.forEach((index, rank) => (levels[index] = ((rank + 1) * alpha) / tails.length));
+  return levels;
 }
-
-/** What judgeGroups returns when the config names no groups. */
-const NO_GROUPS: { judged: ReadonlySet<string>; pending: readonly PendingGroup[]; learning: readonly GroupResult[] } = {
-  judged: new Set(),
-  pending: [],
-  learning: [],
-};

@@ -1,20 +1,20 @@
-import type { GroupResult, MetricResult, Status, Verdict } from './report.js';
+import type { MetricResult, SharedMoveResult, Status, Verdict } from './report.js';
 
 /**
- * The run's verdict (DESIGN.md): `regressed` when any metric or group regressed (`accepted`
- * instead when the pull request carries the accept label); `learning` when no metric had enough
- * history to be judged; otherwise `pass`.
+ * The run's verdict (DESIGN.md, issue 13 item 3): `regressed` when any metric regressed
+ * (`accepted` instead when the pull request carries the accept label); else `unsettled` when a
+ * shared move is beyond what the history has shown; `learning` when no metric had enough history
+ * to be judged; otherwise `pass`.
  * @example decideVerdict([{ status: 'ok' }], [], false) // 'pass'
  */
 export function decideVerdict(
   metrics: readonly Pick<MetricResult, 'status'>[],
-  groups: readonly Pick<GroupResult, 'status'>[],
+  shared: readonly Pick<SharedMoveResult, 'status'>[],
   accepted: boolean,
 ): Verdict {
-  const regressed = metrics.some((m) => m.status === 'regressed') || groups.some((g) => g.status === 'regressed');
-  if (regressed) return accepted ? 'accepted' : 'regressed';
-  const judged = metrics.some((m) => JUDGED.has(m.status)) || groups.some((g) => g.status !== 'learning');
-  return judged ? 'pass' : 'learning';
+  if (metrics.some((m) => m.status === 'regressed')) return accepted ? 'accepted' : 'regressed';
+  if (shared.some((s) => s.status === 'unsettled')) return 'unsettled';
+  return metrics.some((m) => JUDGED.has(m.status)) ? 'pass' : 'learning';
 }
 
 /** Statuses that mean the metric had enough history to be judged. */

@@ -15,7 +15,7 @@
  * Nothing prints a stack trace or the token (it is masked first).
  */
 import { settingsFor } from '../config/rules.js';
-import { prepareGate, runGate } from '../gate/gate.js';
+import { runGate } from '../gate/gate.js';
 import type { Report } from '../gate/report.js';
 import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { HistoryStore } from '../history/store.js';
@@ -128,7 +128,6 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
 
   const { history, readable } = await loadHistory(store, series, inputs, sink);
   const accepted = context.pullRequest?.labels.includes(inputs.acceptLabel) ?? false;
-  await prepareGate(config);
   const report = runGate({ config, history, run, series, accepted });
   const regressed = report.metrics.filter((m) => m.status === 'regressed').length;
   const flagged = report.metrics.some((m) => m.status === 'regressed' || m.status === 'improved');
@@ -168,6 +167,11 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     sink.setFailed(
       `bellgate: ${regressed} metric${regressed === 1 ? '' : 's'} regressed in series "${series}" (see the job summary)` +
         (context.pullRequest ? `; add the label "${inputs.acceptLabel}" to the pull request to accept` : ''),
+    );
+    failed = true;
+  } else if (report.verdict === 'unsettled' && report.blocks && inputs.block) {
+    sink.setFailed(
+      `bellgate: every timing moved together beyond what the history has shown in series "${series}"; re-run the check, or record a baseline run on the same runner (\`unsettled: block\` is set)`,
     );
     failed = true;
   } else if (report.verdict === 'regressed') {

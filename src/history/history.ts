@@ -18,6 +18,25 @@ export interface RunInfo {
   event?: string;
   /** ISO-8601 time of the run. */
   time?: string;
+  /** Pull request number when known (the merged PR of a push). */
+  pr?: number;
+  /** Runner fingerprint text, e.g. "Linux X64 | ubuntu-24.04 20261110.1 | AMD EPYC 7763 64-Core Processor | 4 cpu | node 24.11.0". */
+  runner?: string;
+  /** Level changes that START at this run. */
+  marks?: LevelMark[];
+}
+
+/**
+ * A level change: for the metrics it matches, runs before it are another level, and a check fits
+ * (the centre of) such a metric only on runs since the newest matching mark.
+ */
+export interface LevelMark {
+  /** Globs over metric names; absent = every metric. */
+  metrics?: string[];
+  reason: 'accepted' | 'manual';
+  /** For 'accepted': the pull request that carried the accept label. */
+  pr?: number;
+  note?: string;
 }
 
 export interface MetricColumn {

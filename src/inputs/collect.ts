@@ -1,7 +1,8 @@
 import type { Aggregate } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
 import { aggregateSamples } from './aggregate.js';
-import type { ReadResult, Run } from './run.js';
+import { meanAndSquares } from '../model/moments.js';
+import type { Measurement, ReadResult, Run } from './run.js';
 import { convertUnit } from './units.js';
 
 interface Samples {
@@ -49,7 +50,11 @@ export function collectRun(results: ReadResult[], aggregateFor: (name: string) =
         },
       );
     }
-    metrics.set(name, unit === undefined ? { value, count: values.length } : { value, unit, count: values.length });
+    const measurement: Measurement =
+      unit === undefined ? { value, count: values.length } : { value, unit, count: values.length };
+    const spread = sampleSpread(values);
+    if (spread !== undefined) measurement.spread = spread;
+    metrics.set(name, measurement);
   }
   return notFitted.size > 0 ? { metrics, meta, notFitted } : { metrics, meta };
 }
@@ -69,4 +74,19 @@ function converted(
     `metric ${JSON.stringify(name)} has ${show(seen.unit)} at ${seen.where ?? 'its first source'} but ${show(unit)} at ${where ?? 'another source'}, which cannot be converted`,
     { where, fix: 'write the metric in one unit everywhere, or in convertible units (ms and s, kB and MiB)' },
   );
+}
+
+/**
+ * The relative spread of one run's samples: the sd of their logarithms when all are above 0,
+ * else sd / |mean|; undefined for one sample or a mean of 0. The gate compares it with the noise
+ * between runs to say whether more samples per run would help.
+ */
+function sampleSpread(values: readonly number[]): number | undefined {
+  if (values.length < 2) return undefined;
+  const positive = values.every((v) => v > 0);
+  const xs = positive ? values.map(Math.log) : values;
+  const { mean, squares } = meanAndSquares(xs);
+  const sd = Math.sqrt(squares / (xs.length - 1));
+  if (positive) return sd;
+  return mean === 0 ? undefined : sd / Math.abs(mean);
 }

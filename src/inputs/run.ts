@@ -25,6 +25,8 @@ export interface Measurement {
   value: number;
   unit?: string;
   count: number;
+  /** The relative spread of the samples behind the value (see collectRun), when there were 2 or more. */
+  spread?: number;
 }
 
 /** One CI run's metrics, name -> measurement. Maps, never plain objects: names are untrusted. */

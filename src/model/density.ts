@@ -1,17 +1,16 @@
-import { InputError } from '../errors/input-error.js';
 import { normalDensity, normalLogDensity } from './special/normal.js';
 
 /** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */
 function checkSpread(sd: number): void {
   if (!(sd >= 0) || !Number.isFinite(sd)) {
-    throw new InputError(`a standard deviation must be a finite number, 0 or more, got ${sd}`);
+    throw new RangeError(`a standard deviation must be a finite number, 0 or more, got ${sd}`);
   }
 }
 
 /**
  * Gaussian density p(x) = exp(-(x - mu)^2 / (2 sigma^2)) / (sqrt(2 pi) sigma).
  * A zero sigma is the degenerate distribution: Infinity at the mean, 0 elsewhere.
- * Throws InputError on a negative or non-finite sd.
+ * Throws RangeError on a negative or non-finite sd.
  * @example gaussianDensity(0, 0, 1) // 0.3989422804014327
  */
 export function gaussianDensity(x: number, mean: number, sd: number): number {
@@ -57,14 +56,12 @@ export function predictiveScale(sampleSd: number, n: number): number {
  * Heavier tails than the Gaussian, so a short history needs a larger move to fall below a cutoff;
  * as n grows it approaches plugInRelativeDensity. Computed in log space (log1p) so far tails do
  * not underflow early. A zero sampleSd gives 1 at the mean, 0 elsewhere.
- * Throws InputError when n < 2 (no degrees of freedom) or sampleSd is negative or not finite.
+ * Throws RangeError when n < 2 (no degrees of freedom) or sampleSd is negative or not finite.
  * @example predictiveRelativeDensity(3, 0, 1, 1e9) // ≈ 0.011109 (large n: the Gaussian)
  */
 export function predictiveRelativeDensity(x: number, mean: number, sampleSd: number, n: number): number {
   if (!(n >= 2)) {
-    throw new InputError(`the predictive distribution needs at least 2 runs, got ${n}`, {
-      fix: 'raise `min-runs` to 2 or more, or use `uncertainty: plug-in`',
-    });
+    throw new RangeError(`the predictive distribution needs at least 2 runs, got ${n}`);
   }
   checkSpread(sampleSd);
   if (sampleSd === 0) return x === mean ? 1 : 0;

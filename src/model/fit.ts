@@ -1,5 +1,3 @@
-import type { FitMethod } from '../config/types.js';
-import { InputError } from '../errors/input-error.js';
 import { meanAndSquares } from './moments.js';
 import { median, medianAbsoluteDeviation } from './median.js';
 
@@ -8,6 +6,9 @@ export const MAD_TO_SIGMA = 1.4826;
 
 /** sqrt(pi / 2): makes the mean absolute deviation a consistent estimate of a Gaussian's sigma. */
 export const MEAN_AD_TO_SIGMA = Math.sqrt(Math.PI / 2);
+
+/** How a Gaussian's centre and spread are estimated: divide by n, by n - 1, or median and MAD. */
+export type FitMethod = 'mle' | 'unbiased' | 'robust';
 
 /** A fitted Gaussian and what the predictive form needs. */
 export interface GaussianFit {
@@ -34,7 +35,7 @@ export interface GaussianFit {
  * The spread is never below `resolution` (the smallest meaningful step). It is 0 only for a
  * constant history (or a single run) with resolution 0; the relative densities treat a zero
  * spread as "any other value is infinitely unlikely" instead of returning NaN.
- * O(n) (robust: O(n) expected, the medians by selection). Throws InputError on an empty input,
+ * O(n) (robust: O(n) expected, the medians by selection). Throws RangeError on an empty input,
  * a non-finite value or a negative or non-finite resolution.
  *
  * @example fitGaussian([9, 10, 11], 'mle') // { n: 3, mean: 10, sd: 0.8165, sampleSd: 1, ... }
@@ -42,9 +43,7 @@ export interface GaussianFit {
 export function fitGaussian(values: ArrayLike<number>, method: FitMethod = 'mle', resolution = 0): GaussianFit {
   const { n, mean, squares } = meanAndSquares(values);
   if (!(resolution >= 0) || !Number.isFinite(resolution)) {
-    throw new InputError(`resolution must be a finite number, 0 or more, got ${resolution}`, {
-      fix: 'set `resolution` to the smallest meaningful step of the metric, or 0',
-    });
+    throw new RangeError(`resolution must be a finite number, 0 or more, got ${resolution}`);
   }
   const sampleVariance = n > 1 ? squares / (n - 1) : 0;
   let centre: number;

@@ -1,8 +1,8 @@
-export { InputError } from '../errors/input-error.js';
 export { meanAndSquares, mean, variance } from './moments.js';
 export { RunningMoments } from './running-moments.js';
 export { median, medianAbsoluteDeviation } from './median.js';
-export { fitGaussian, MAD_TO_SIGMA, MEAN_AD_TO_SIGMA, type GaussianFit } from './fit.js';
+export { medianOfOthers } from './median-of-others.js';
+export { fitGaussian, MAD_TO_SIGMA, MEAN_AD_TO_SIGMA, type GaussianFit, type FitMethod } from './fit.js';
 export {
   gaussianDensity,
   gaussianLogDensity,
@@ -10,12 +10,21 @@ export {
   predictiveRelativeDensity,
   predictiveScale,
 } from './density.js';
-export { normalTail, studentTail, cutoffSigma, cutoffLevel, type Side } from './tails.js';
-export { toFitScale, fromFitScale } from './transform.js';
-export { adjustTails, type FamilyMethod } from './family.js';
-export { checkRows } from './matrix-input.js';
-export { shrunkCovariance, type ShrunkCovariance } from './ledoit-wolf.js';
-export { mahalanobisSquared, mahalanobisContributions } from './mahalanobis.js';
-export { chiSquareTail, hotellingTail } from './hotelling.js';
-export { detectChangePoints, type ChangePointOptions } from './change-points.js';
+export {
+  normalTail,
+  studentTail,
+  studentUpperQuantile,
+  studentRelativeDensity,
+  studentLogDensity,
+  cutoffT,
+  cutoffSigma,
+  cutoffLevel,
+  type Side,
+} from './tails.js';
+export { halfTailShape, DOF_GRID, type TailShape } from './tail-shape.js';
+export { variancePrior, moderatedVariance, type VariancePrior } from './moderated-variance.js';
+export { detectableShift } from './detectable.js';
+export { toFitScale, fromFitScale, type Scale } from './transform.js';
+export { adjustTails, holmLevels, type FamilyMethod } from './family.js';
+export { detectChangePoints, differenceSigma, type ChangePointOptions } from './change-points.js';
 export { skewness, andersonDarling, andersonDarlingPValue, type AndersonDarling } from './normality.js';

@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { meanAndSquares } from './moments.js';
 import { normalLogCdf } from './special/normal.js';
 
@@ -7,13 +6,13 @@ import { normalLogCdf } from './special/normal.js';
  * measures of sample skewness and kurtosis"; also NIST/SEMATECH e-Handbook 1.3.5.11):
  *   g1 = m3 / m2^(3/2),  m_k = (1/n) sum (x - mean)^k,   G1 = g1 sqrt(n (n - 1)) / (n - 2).
  * Positive for a long right tail (timings often are; `transform: log` may suit them). A constant
- * sample has no asymmetry to report: 0. O(n). Throws InputError on fewer than 3 values or
+ * sample has no asymmetry to report: 0. O(n). Throws RangeError on fewer than 3 values or
  * non-finite values.
  * @example skewness([1, 2, 3, 10]) // ≈ 1.7636
  */
 export function skewness(values: ArrayLike<number>): number {
   const { n, mean, squares } = meanAndSquares(values);
-  if (n < 3) throw new InputError(`skewness needs at least 3 values, got ${n}`);
+  if (n < 3) throw new RangeError(`skewness needs at least 3 values, got ${n}`);
   if (squares === 0) return 0;
   let cubes = 0;
   for (let i = 0; i < n; i++) {
@@ -37,11 +36,11 @@ export interface AndersonDarling {
 /**
  * p-value of A*^2 for the composite normal case (mean and variance estimated), the piecewise
  * formulas of D'Agostino & Stephens (1986), "Goodness-of-Fit Techniques", Table 4.9.
- * Throws InputError on a negative or NaN A*^2.
+ * Throws RangeError on a negative or NaN A*^2.
  * @example andersonDarlingPValue(0.752) // ≈ 0.05
  */
 export function andersonDarlingPValue(a: number): number {
-  if (!(a >= 0)) throw new InputError(`an Anderson-Darling statistic must be 0 or more, got ${a}`);
+  if (!(a >= 0)) throw new RangeError(`an Anderson-Darling statistic must be 0 or more, got ${a}`);
   let p: number;
   if (a >= 0.6) p = Math.exp(1.2937 - 5.709 * a + 0.0186 * a * a);
   else if (a >= 0.34) p = Math.exp(0.9177 - 4.279 * a - 1.38 * a * a);
@@ -56,17 +55,15 @@ export function andersonDarlingPValue(a: number): number {
  *   A^2 = -n - (1/n) sum_i (2i - 1) [ln Phi(w_i) + ln(1 - Phi(w_{n+1-i}))].
  * ln(1 - Phi(w)) is taken as ln Phi(-w), so an extreme value gives a large finite A^2 instead of
  * ln 0. Critical values of A*^2 (D'Agostino & Stephens): 0.631 at 10%, 0.752 at 5%, 1.035 at 1%.
- * O(n log n). Throws InputError on fewer than 8 values (the p-value formulas are not meant for
+ * O(n log n). Throws RangeError on fewer than 8 values (the p-value formulas are not meant for
  * less), non-finite values, or a constant sample (no spread to standardise by).
  * @example andersonDarling(values).pValue < 0.05 // the values do not look Gaussian
  */
 export function andersonDarling(values: ArrayLike<number>): AndersonDarling {
   const { n, mean, squares } = meanAndSquares(values);
-  if (n < 8) throw new InputError(`the normality test needs at least 8 values, got ${n}`);
+  if (n < 8) throw new RangeError(`the normality test needs at least 8 values, got ${n}`);
   if (squares === 0) {
-    throw new InputError('the normality test needs values that vary; all values are equal', {
-      fix: 'skip the test for a constant metric',
-    });
+    throw new RangeError('the normality test needs values that vary; all values are equal');
   }
   const sd = Math.sqrt(squares / (n - 1));
   const w = Float64Array.from(values, (x) => (x - mean) / sd).sort();

@@ -1,5 +1,3 @@
-import { InputError } from '../errors/input-error.js';
-
 /**
  * Mean and sum of squared deviations of a changing set of values, updated in O(1) per value by
  * Welford's method (Welford 1962; Knuth, TAOCP vol. 2, 4.2.2): with d = x - mean,
@@ -11,7 +9,7 @@ import { InputError } from '../errors/input-error.js';
  * Numerical care: rounding accumulates slowly over add/remove pairs (about one ulp of the offset
  * per step); squares is clamped at 0 so cancellation never makes a variance negative, and a
  * caller replaying many thousands of steps can rebuild with `RunningMoments.of(window)`.
- * Throws InputError on a non-finite value or removing from an empty set.
+ * Throws RangeError on a non-finite value or removing from an empty set.
  *
  * @example const m = RunningMoments.of([1, 2, 3]); m.remove(1); m.add(4); m.mean // 3
  */
@@ -42,7 +40,7 @@ export class RunningMoments {
   }
 
   add(x: number): void {
-    if (!Number.isFinite(x)) throw new InputError(`value ${x} is not a finite number`);
+    if (!Number.isFinite(x)) throw new RangeError(`value ${x} is not a finite number`);
     this.#n += 1;
     const d = x - this.#mean;
     this.#mean += d / this.#n;
@@ -51,8 +49,8 @@ export class RunningMoments {
 
   /** Removes a value that was added before (the caller keeps the window). */
   remove(x: number): void {
-    if (!Number.isFinite(x)) throw new InputError(`value ${x} is not a finite number`);
-    if (this.#n === 0) throw new InputError('cannot remove a value from an empty set');
+    if (!Number.isFinite(x)) throw new RangeError(`value ${x} is not a finite number`);
+    if (this.#n === 0) throw new RangeError('cannot remove a value from an empty set');
     if (this.#n === 1) {
       this.#n = 0;
       this.#mean = 0;
@@ -67,14 +65,14 @@ export class RunningMoments {
 
   /**
    * squares / n ("mle") or squares / (n - 1) ("unbiased").
-   * Throws InputError when empty, or with fewer than 2 values for "unbiased".
+   * Throws RangeError when empty, or with fewer than 2 values for "unbiased".
    */
   variance(divisor: 'mle' | 'unbiased'): number {
     if (divisor === 'unbiased') {
-      if (this.#n < 2) throw new InputError('the unbiased variance needs at least 2 values');
+      if (this.#n < 2) throw new RangeError('the unbiased variance needs at least 2 values');
       return this.#squares / (this.#n - 1);
     }
-    if (this.#n === 0) throw new InputError('the variance of an empty set is undefined');
+    if (this.#n === 0) throw new RangeError('the variance of an empty set is undefined');
     return this.#squares / this.#n;
   }
 }

@@ -8,10 +8,12 @@ export interface MetricCells {
   change: string;
   sigma: string;
   density: string;
+  own: string;
+  detectable: string;
 }
 
 /**
- * "10.1 ± 0.4 ms (n=60)". On the log scale the fitted centre is shown as the geometric mean
+ * "10.1 ± 0.4 ms (n=60)"; sd is the spread of the metric's own moves (the shared move taken out). On the log scale the fitted centre is shown as the geometric mean
  * exp(mean) and the spread as the factor exp(sd) ("×/÷ 1.03"), which is what a log-normal fit means
  * on the metric's own scale. `unit` must already be escaped for the target format.
  * @example formatBaseline({ n: 60, mean: 10.1, sd: 0.4 }, 'ms') // '10.1 ± 0.4 ms (n=60)'
@@ -33,6 +35,8 @@ export function metricCells(m: MetricResult, unit?: string): MetricCells {
     baseline: formatBaseline(m.baseline, unit),
     change: formatChange(m.change),
     sigma: formatSigma(m.z),
-    density: formatAgainstCutoff(m.relativeDensity, m.cutoff),
+    density: formatAgainstCutoff(m.relativeDensity, m.effectiveCutoff ?? m.cutoff),
+    own: formatChange(m.own),
+    detectable: m.detectable === undefined ? NOT_AVAILABLE : formatChange(m.detectable).replace(/^\+/, '≥ '),
   };
 }

@@ -3,8 +3,7 @@
  * read everywhere; a decimal comma would break copy-paste into other tools). Non-finite numbers
  * print as "n/a", never "NaN".
  */
-import { precisionText } from '../gate/precision-text.js';
-import { rememberLast } from '../gate/remember-last.js';
+import { precisionText } from './precision-text.js';
 
 export const NOT_AVAILABLE = 'n/a';
 
@@ -79,8 +78,5 @@ export function formatDensity(r: number | undefined): string {
 /** "2.6e-7 < 0.01": the relative density against the cutoff, the comparison the gate made. */
 export function formatAgainstCutoff(r: number | undefined, cutoff: number): string {
   if (r === undefined || !Number.isFinite(r)) return NOT_AVAILABLE;
-  return `${formatDensity(r)} ${r < cutoff ? '<' : '≥'} ${cutoffDensity(cutoff)}`;
+  return `${formatDensity(r)} ${r < cutoff ? '<' : '≥'} ${formatDensity(cutoff)}`;
 }
-
-/** formatDensity(cutoff), computed once for the cutoff the metrics share. */
-const cutoffDensity = rememberLast(formatDensity);

@@ -2,13 +2,13 @@ import type { MetricResult, Report } from '../gate/report.js';
 import type { History } from '../history/history.js';
 import { metricCells } from './cells.js';
 import { escapeHtml } from './escape.js';
-import { formatSigma } from './format.js';
+import { familyLine } from './family-line.js';
 import { baselinePoints, chartColumn, columnPoints } from './html-data.js';
 import { baselineHistogram } from './html-histogram.js';
 import { historyChart } from './html-history-chart.js';
 import { HTML_SCRIPT } from './html-script.js';
 import { HTML_STYLE } from './html-style.js';
-import { usesPredictive } from './predictive.js';
+import { fullReason, sharedReason } from './reason.js';
 import { STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
 
 export interface HtmlReportInput {
@@ -21,11 +21,20 @@ export interface HtmlReportInput {
 
 // No network at all: the page may only use its own inline style and script, and data: images.
 const CSP = "default-src 'none'; style-src 'unsafe-inline'; script-src 'unsafe-inline'; img-src data:";
-const COLUMNS = ['status', 'metric', 'this run', 'baseline (mean ± sd)', 'change', 'sigma', 'rel. density vs cutoff'];
-const NUMERIC = new Set([2, 4, 5, 6]);
+const COLUMNS = [
+  'status',
+  'metric',
+  'this run',
+  'baseline (mean ± sd)',
+  'change',
+  'sigma',
+  'rel. density vs cutoff',
+  'detectable',
+];
+const NUMERIC = new Set([2, 4, 5, 6, 7]);
 const LEGEND =
   '<p class="legend">Charts: dots are baseline-branch runs; the shaded band is where the fitted density stays above ' +
-  'the cutoff; the dashed line is the fitted mean; this run is the large mark (▲ regressed, ▼ improved, ● ok). ' +
+  'the cutoff; the dashed line is the fitted mean; this run is the large mark (▲ the worse side, regressed; ▼ the better side, improved; ● ok). ' +
   'Histograms show the baseline runs, the fitted density and the cutoff (dashed).</p>';
 
 const sortAttr = (x: number | undefined): string => (x !== undefined && Number.isFinite(x) ? ` data-sort="${x}"` : '');
@@ -37,28 +46,31 @@ function summaryRow(m: MetricResult, i: number): string {
     `<td class="name"><a href="#m${i}">${escapeHtml(m.name, 300)}</a></td>` +
     `<td class="num"${sortAttr(m.value)}>${c.value}</td><td class="num">${c.baseline}</td>` +
     `<td class="num"${sortAttr(m.change)}>${c.change}</td><td class="num"${sortAttr(m.z)}>${c.sigma}</td>` +
-    `<td class="num"${sortAttr(m.relativeDensity)}>${escapeHtml(c.density)}</td></tr>`
+    `<td class="num"${sortAttr(m.relativeDensity)}>${escapeHtml(c.density)}</td>` +
+    `<td class="num"${sortAttr(m.detectable)}>${escapeHtml(c.detectable)}</td></tr>`
   );
 }
 
-function metricSection(m: MetricResult, i: number, history: History): string {
+function metricSection(m: MetricResult, i: number, history: History, report: Report): string {
   const column = chartColumn(history, m);
   const baseValues = baselinePoints(columnPoints(column, history.runs), m).map((p) => p.value);
   // A chart whose coordinates overflowed (values near the largest double) is left out, not drawn wrong.
-  const charts = [historyChart(m, column, history.runs, m.cutoff), baselineHistogram(m, baseValues, m.cutoff)]
+  const cutoff = m.effectiveCutoff ?? m.cutoff;
+  const charts = [historyChart(m, column, history.runs, cutoff), baselineHistogram(m, baseValues, cutoff)]
     .filter((s) => s !== '')
     .map((s) =>
       /\bNaN\b|Infinity/.test(s) ? '<p class="note-text">This chart cannot be drawn for these values.</p>' : s,
     );
   const unit = m.unit === undefined ? '' : ` <span class="meta">(${escapeHtml(m.unit, 40)})</span>`;
-  const reason = escapeHtml(m.reason, 1000).replace(/([^.!?])$/, '$1.');
+  const reason = escapeHtml(fullReason(m, report), 1500).replace(/([^.!?])$/, '$1.');
   const scale = m.baseline?.scale === 'log' ? ' Fitted on the log scale.' : '';
-  const judged = usesPredictive(m)
-    ? ` Judged by the predictive Student-t (${(m.baseline?.n ?? 0) - 1} degrees of freedom), whose tails are heavier than the Gaussian band drawn.`
-    : '';
+  const judged =
+    m.z === undefined
+      ? ''
+      : ' Judged on its own move by the predictive Student-t of its own moves, whose tails are fitted to the history (heavier than the Gaussian band drawn).';
   const ratio =
     m.baseline?.relativeTo !== undefined
-      ? ` Fitted and drawn as ratios to ${escapeHtml(m.baseline.relativeTo, 300)} in the same run.`
+      ? ` Judged beside the move of ${escapeHtml(m.baseline.relativeTo, 300)} in the same run.`
       : '';
   return (
     `<section class="metric" id="m${i}"><h2><span class="s-${m.status}">${STATUS_GLYPH[m.status]} ${m.status}</span> ${escapeHtml(m.name, 300)}${unit}</h2>` +
@@ -89,14 +101,11 @@ export function renderHtmlReport(input: HtmlReportInput): string {
   const head = COLUMNS.map(
     (c, k) => `<th scope="col"${NUMERIC.has(k) ? ' class="num"' : ''}><button type="button">${c}</button></th>`,
   );
-  const groups = report.groups.map((g) => {
-    const top = [...g.members].sort((a, b) => b.share - a.share).slice(0, 3);
-    const names = top.map((mm) => `${escapeHtml(mm.name, 300)} ${Math.round(mm.share * 100)}%`).join(', ');
-    return (
-      `<li><span class="s-${g.status}">${g.status}</span> group <strong>${escapeHtml(g.name, 300)}</strong>: ` +
-      `common move ${formatSigma(g.common.z)} (${g.common.status}); main contributors: ${names}. ${escapeHtml(g.reason, 1000)}</li>`
-    );
-  });
+  const shared = report.shared.map(
+    (g) =>
+      `<li><span class="s-${g.status === 'unsettled' ? 'regressed' : 'ok'}">${g.status}</span> shared move of ` +
+      `<strong>${escapeHtml(g.name, 300)}</strong>: ${escapeHtml(sharedReason(g), 1500)}</li>`,
+  );
   const verdictClass = report.verdict === 'regressed' ? 'regressed' : 'ok';
   const counts = statusCounts(report.metrics.map((m) => m.status)) || 'no metrics';
   return [
@@ -106,14 +115,14 @@ export function renderHtmlReport(input: HtmlReportInput): string {
     '<meta name="viewport" content="width=device-width, initial-scale=1">',
     `<title>${title}</title><style>${HTML_STYLE}</style></head><body>`,
     `<header><h1>${title}</h1><p class="meta">series ${escapeHtml(report.series, 300)} · ` +
-      `${history.runs.length} runs in the history · family control: ${report.family}</p>`,
+      `${history.runs.length} runs in the history · ${escapeHtml(familyLine(report))}</p>`,
     `<p class="verdict"><strong class="s-${verdictClass}">${report.verdict}</strong> — ` +
       `${escapeHtml(VERDICT_HEADLINE[report.verdict])}. ${counts}.</p></header>`,
     '<main><table id="summary"><caption class="meta">All metrics, regressions first. Click a header to sort.</caption>',
     `<thead><tr>${head.join('')}</tr></thead><tbody>${order.map(({ m, i }) => summaryRow(m, i)).join('')}</tbody></table>`,
-    groups.length > 0 ? `<h2>Groups</h2><ul>${groups.join('')}</ul>` : '',
+    shared.length > 0 ? `<h2>Shared moves</h2><ul>${shared.join('')}</ul>` : '',
     LEGEND,
-    order.map(({ m, i }) => metricSection(m, i, history)).join(''),
+    order.map(({ m, i }) => metricSection(m, i, history, report)).join(''),
     `</main><footer>Generated by Bellgate${input.generatedAt ? ` at ${escapeHtml(input.generatedAt, 100)}` : ''}. ` +
       `Schema ${escapeHtml(report.schema)}.</footer>`,
     `<script>${HTML_SCRIPT}</script></body></html>`,

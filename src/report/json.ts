@@ -1,4 +1,5 @@
-import type { BaselineSummary, GroupResult, MetricResult, Report } from '../gate/report.js';
+import type { BaselineSummary, MetricResult, Report, SharedMoveResult } from '../gate/report.js';
+import { fullReason, sharedReason } from './reason.js';
 
 type Json = null | boolean | number | string | Json[] | { [key: string]: Json };
 
@@ -21,12 +22,17 @@ function baseline(b: BaselineSummary | undefined): Json {
     ...extras([
       ['scale', b.scale],
       ['since', b.since],
+      ['sinceReason', b.sinceReason],
+      ['sincePr', b.sincePr],
+      ['levelRuns', b.levelRuns],
       ['relativeTo', b.relativeTo],
+      ['runner', b.runner],
+      ['dof', b.dof === undefined ? undefined : num(b.dof)],
     ]),
   };
 }
 
-function metric(m: MetricResult): Json {
+function metric(m: MetricResult, report: Report): Json {
   // DESIGN.md's fields first and always present (null when not known), then the extras.
   return {
     name: m.name,
@@ -39,41 +45,56 @@ function metric(m: MetricResult): Json {
     density: num(m.density),
     relativeDensity: num(m.relativeDensity),
     cutoff: num(m.cutoff),
+    detectable: num(m.detectable),
     ...extras([
       ['worse', m.worse],
       ['count', m.count === undefined ? undefined : num(m.count)],
+      ['shared', m.shared === undefined ? undefined : num(m.shared)],
+      ['own', m.own === undefined ? undefined : num(m.own)],
       ['tail', m.tail === undefined ? undefined : num(m.tail)],
       ['adjusted', m.adjusted === undefined ? undefined : num(m.adjusted)],
+      ['level', m.level === undefined ? undefined : num(m.level)],
+      ['effectiveCutoff', m.effectiveCutoff === undefined ? undefined : num(m.effectiveCutoff)],
+      ['noise', m.noise === undefined ? undefined : noise(m.noise)],
       ['group', m.group],
       ['recent', m.recent?.map(num)],
-      ['reason', m.reason],
+      ['reason', fullReason(m, report)],
     ]),
   };
 }
 
-function group(g: GroupResult): Json {
+function noise(n: NonNullable<MetricResult['noise']>): Json {
   return {
-    name: g.name,
-    status: g.status,
-    members: g.members.map((m) => ({ name: m.name, share: num(m.share), ownZ: num(m.ownZ) })),
-    n: num(g.n),
-    distance: num(g.distance),
-    tail: num(g.tail),
-    level: num(g.level),
-    common: { z: num(g.common.z), tail: num(g.common.tail), status: g.common.status },
-    shrinkage: num(g.shrinkage),
+    betweenRuns: num(n.betweenRuns),
     ...extras([
-      ['distanceTail', g.distanceTail === undefined ? undefined : num(g.distanceTail)],
-      ['ownTail', g.ownTail === undefined ? undefined : num(g.ownTail)],
-      ['adjusted', g.adjusted === undefined ? undefined : num(g.adjusted)],
+      ['insideRun', n.insideRun === undefined ? undefined : num(n.insideRun)],
+      [
+        'moreRuns',
+        n.moreRuns === undefined ? undefined : { runs: num(n.moreRuns.runs), detectable: num(n.moreRuns.detectable) },
+      ],
     ]),
-    reason: g.reason,
+  };
+}
+
+function shared(s: SharedMoveResult): Json {
+  return {
+    name: s.name,
+    status: s.status,
+    members: num(s.members),
+    move: num(s.move),
+    n: num(s.n),
+    ...extras([
+      ['tail', s.tail === undefined ? undefined : num(s.tail)],
+      ['largest', s.largest === undefined ? undefined : num(s.largest)],
+    ]),
+    reason: sharedReason(s),
   };
 }
 
 /**
  * The JSON report (`--format json`, the action's `report` output) with DESIGN.md's field names in
- * a stable order: schema, verdict, series, family, metrics[], groups[]. Non-finite numbers become
+ * a stable order: schema, verdict, series, blocks, family, budget, unsettled, runner, metrics[],
+ * shared[] (each group's shared move). Non-finite numbers become
  * null; 2-space indent; ends with a newline. Names are values, never keys, so an untrusted name
  * such as `__proto__` cannot reach an object's prototype.
  * @example JSON.parse(renderJson(report)).schema // 'bellgate.report/1'
@@ -83,9 +104,13 @@ export function renderJson(report: Report): string {
     schema: report.schema,
     verdict: report.verdict,
     series: report.series,
+    blocks: report.blocks,
     family: report.family,
-    metrics: report.metrics.map(metric),
-    groups: report.groups.map(group),
+    budget: num(report.budget),
+    unsettled: report.unsettled,
+    ...extras([['runner', report.runner]]),
+    metrics: report.metrics.map((m) => metric(m, report)),
+    shared: report.shared.map(shared),
   };
   return JSON.stringify(doc, null, 2) + '\n';
 }

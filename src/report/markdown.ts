@@ -1,17 +1,19 @@
-import type { GroupResult, MetricResult, Report, Status } from '../gate/report.js';
+import type { MetricResult, Report, SharedMoveResult, Status } from '../gate/report.js';
 import { metricCells } from './cells.js';
 import { escapeMarkdown } from './escape.js';
-import { formatSigma, formatValue } from './format.js';
+import { familyLine } from './family-line.js';
+import { formatValue } from './format.js';
 import { markerLine } from './marker.js';
 import { sparkline } from './sparkline.js';
-import { STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
+import { fullReason, sharedReason } from './reason.js';
+import { GLYPH_LEGEND, STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
 
 /** GitHub rejects comment bodies over 65,536 characters; stay well under with room for the footer. */
 export const MARKDOWN_LIMIT = 65_536;
 const BUDGET = MARKDOWN_LIMIT - 2_000;
 const FLAGGED: ReadonlySet<Status> = new Set<Status>(['regressed', 'improved']);
 const HEAD =
-  '| status | metric | baseline (mean ± sd) | this run | change | sigma | rel. density vs cutoff |\n|---|---|---|---|---|---|---|';
+  '| status | metric | baseline (mean ± sd) | this run | change | own move | sigma | rel. density vs cutoff | detectable |\n|---|---|---|---|---|---|---|---|---|';
 
 export interface MarkdownOptions {
   /** Hidden marker put in an HTML comment on the first line (see commentMarker). */
@@ -26,25 +28,22 @@ function row(m: MetricResult): string {
   const status = FLAGGED.has(m.status)
     ? `${STATUS_GLYPH[m.status]} **${m.status}**`
     : `${STATUS_GLYPH[m.status]} ${m.status}`;
-  return `| ${status} | ${escapeMarkdown(m.name)} | ${c.baseline} | ${c.value} | ${c.change} | ${c.sigma} | ${c.density.replace('<', '&lt;')} |`;
+  return `| ${status} | ${escapeMarkdown(m.name)} | ${c.baseline} | ${c.value} | ${c.change} | ${c.own} | ${c.sigma} | ${c.density.replace('<', '&lt;')} | ${c.detectable} |`;
 }
 
-function picture(m: MetricResult): string {
+function picture(m: MetricResult, report: Report): string {
   const recent = m.recent ?? [];
   const line = sparkline(recent, m.value);
   const unit = m.unit === undefined ? undefined : escapeMarkdown(m.unit, 20);
   const shown = line
     ? `\`${line}\` ${recent.length} baseline runs → this run ${formatValue(m.value, unit)}`
     : `this run ${formatValue(m.value, unit)}`;
-  return `- **${escapeMarkdown(m.name)}** ${shown}. ${escapeMarkdown(m.reason, 500)}`;
+  return `- **${escapeMarkdown(m.name)}** ${shown}. ${escapeMarkdown(fullReason(m, report), 800)}`;
 }
 
-function groupLine(g: GroupResult): string {
-  const top = [...g.members]
-    .sort((a, b) => b.share - a.share)
-    .slice(0, 3)
-    .map((m) => `${escapeMarkdown(m.name)} ${Math.round(m.share * 100)}% (own ${formatSigma(m.ownZ)})`);
-  return `- group **${escapeMarkdown(g.name)}**: ${g.status} — common move ${formatSigma(g.common.z)} (${g.common.status}); main contributors: ${top.join(', ') || 'none'}. ${escapeMarkdown(g.reason, 500)}`;
+function sharedLine(s: SharedMoveResult): string {
+  const mark = s.status === 'unsettled' ? '⚠ **unsettled**' : s.status;
+  return `- shared move of **${escapeMarkdown(s.name)}**: ${mark} — ${escapeMarkdown(sharedReason(s), 800)}`;
 }
 
 /** Take lines while they fit in `room` characters; say how many were left out. */
@@ -92,12 +91,18 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
     add('');
     add(`${HEAD}\n${fit(flagged.map(row), room / 2, 'flagged metrics').text}`);
     add('');
-    add(fit(flagged.map(picture), room / 2, 'pictures').text);
+    add(
+      fit(
+        flagged.map((m) => picture(m, report)),
+        room / 2,
+        'pictures',
+      ).text,
+    );
+    add(`<sub>${GLYPH_LEGEND}</sub>`);
   }
-  if (report.groups.length > 0) {
-    add('');
-    add(fit(report.groups.map(groupLine), room / 2, 'groups').text);
-  }
+  add('');
+  add(familyLine(report));
+  if (report.shared.length > 0) add(fit(report.shared.map(sharedLine), room / 2, 'shared moves').text);
   if (rest.length > 0) {
     add('');
     add(
@@ -111,7 +116,7 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
   out.push('');
   if (links.length > 0) out.push(links.join(' · '));
   out.push(
-    '<sub>Reported by Bellgate: a metric is flagged when its relative density under the baseline fit falls below its cutoff on its worse side.</sub>',
+    "<sub>Reported by Bellgate: each metric is judged on its own move beside the run's shared move, against the predictive distribution of its baseline, on its worse side.</sub>",
   );
   return out.join('\n') + '\n';
 }

@@ -13,8 +13,9 @@ export function statusRank(s: Status): number {
 }
 
 /**
- * A shape per status, so colour is never the only carrier (WCAG 1.4.1): triangles point the way the
- * metric moved against its baseline, a hollow circle for still learning.
+ * A shape per status, so colour is never the only carrier (WCAG 1.4.1): ▲ is always the worse side
+ * and ▼ the better side, whichever way the metric moved (a dropped throughput is ▲ regressed), a
+ * hollow circle for still learning. GLYPH_LEGEND says so in every report.
  */
 export const STATUS_GLYPH: Readonly<Record<Status, string>> = {
   regressed: '▲',
@@ -26,12 +27,18 @@ export const STATUS_GLYPH: Readonly<Record<Status, string>> = {
   ignored: '–',
 };
 
+/** The legend of the status glyphs, shown under every table. */
+export const GLYPH_LEGEND =
+  'legend: ▲ the worse side (regressed) · ▼ the better side (improved), whichever way the number moved';
+
 /** What each verdict means, in a sentence that follows the verdict word in every headline. */
 export const VERDICT_HEADLINE: Readonly<Record<Verdict, string>> = {
   pass: 'no metric regressed',
   regressed: 'at least one metric fell in the improbable tail on its worse side',
   learning: 'no metric has enough baseline runs yet',
   accepted: 'regressions found, accepted by the pull request label',
+  unsettled:
+    'no metric regressed on its own, but the timings moved together beyond what the history has shown (re-run, or record a baseline run on the same runner)',
 };
 
 /** Count of metrics per status, in STATUS_ORDER, omitting zeros. @example "2 regressed, 40 ok" */

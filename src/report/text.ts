@@ -1,10 +1,11 @@
 import pc from 'picocolors';
-import type { GroupResult, MetricResult, Report, Status } from '../gate/report.js';
+import type { MetricResult, Report, SharedMoveResult, Status } from '../gate/report.js';
 import { cleanText } from './clean.js';
 import { metricCells } from './cells.js';
 import { OK_ROWS_LISTED } from './ok-rows.js';
-import { formatSigma } from './format.js';
-import { STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
+import { familyLine } from './family-line.js';
+import { fullReason, sharedReason } from './reason.js';
+import { GLYPH_LEGEND, STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
 
 type Colors = ReturnType<typeof pc.createColors>;
 
@@ -38,17 +39,14 @@ function codePoints(s: string): number {
   return SURROGATE.test(s) ? Array.from(s).length : s.length;
 }
 
-function groupLine(g: GroupResult): string {
-  const top = [...g.members]
-    .sort((a, b) => b.share - a.share)
-    .slice(0, 3)
-    .map((m) => `${clean(m.name, TEXT_NAME_MAX)} (${Math.round(m.share * 100)}%, own ${formatSigma(m.ownZ)})`);
-  return `group ${clean(g.name, TEXT_NAME_MAX)}: ${g.status} — common move ${formatSigma(g.common.z)} (${g.common.status}); main contributors: ${top.join(', ') || 'none'}`;
+function sharedLine(s: SharedMoveResult): string {
+  return `shared move of ${clean(s.name, TEXT_NAME_MAX)}: ${s.status} — ${sharedReason(s)}`;
 }
 
 /**
  * The terminal report: a headline (verdict and counts), a table of judged metrics (regressed and
- * improved first) with the reason under each flagged one, one line per group, then one line per
+ * improved first) with the reason under each flagged one, the family control and each group's
+ * shared move, then one line per
  * learning/new/missing/ignored set. More than OK_ROWS_LISTED ok metrics are counted on one line
  * instead of listed, unless `all` is set. Colour (picocolors) only when `color` is true; status
  * words are always printed, so the report reads the same without colour. Every name passes
@@ -59,7 +57,11 @@ export function renderText(report: Report, options: { color: boolean; all?: bool
   const c = pc.createColors(options.color);
   const lines: string[] = [];
   const verdictWord =
-    report.verdict === 'regressed' ? c.red(c.bold('REGRESSED')) : c.bold(report.verdict.toUpperCase());
+    report.verdict === 'regressed'
+      ? c.red(c.bold('REGRESSED'))
+      : report.verdict === 'unsettled'
+        ? c.yellow(c.bold('UNSETTLED'))
+        : c.bold(report.verdict.toUpperCase());
   lines.push(`Bellgate — series "${clean(report.series, TEXT_NAME_MAX)}": ${verdictWord}`);
   lines.push(
     `${VERDICT_HEADLINE[report.verdict]}; ${statusCounts(report.metrics.map((m) => m.status)) || 'no metrics'}.`,
@@ -113,16 +115,18 @@ export function renderText(report: Report, options: { color: boolean; all?: bool
       const at = row * columns;
       for (let i = 0; i < columns; i++) parts[i] = cells[at + i]! + ' '.repeat(widths[i]! - cellWidths[at + i]!);
       lines.push(paint(c, m.status, parts.join('  ').trimEnd()));
-      if (m.status !== 'ok') lines.push(`    ${clean(m.reason, 400)}`);
+      if (m.status !== 'ok') lines.push(`    ${clean(fullReason(m, report), 600)}`);
     });
+    lines.push(c.dim(GLYPH_LEGEND));
   }
   if (foldOk) {
     if (judged.length === 0) lines.push('');
     lines.push(`${STATUS_GLYPH.ok} ok (${okCount}): within their baselines, not listed (--all lists every metric)`);
   }
 
-  if (report.groups.length > 0) lines.push('');
-  for (const g of report.groups) lines.push(paint(c, g.status, groupLine(g)));
+  lines.push('');
+  lines.push(familyLine(report));
+  for (const s of report.shared) lines.push(s.status === 'unsettled' ? c.yellow(sharedLine(s)) : sharedLine(s));
 
   const listed = new Map<Status, string[]>(LISTED.map((status) => [status, []]));
   for (const m of report.metrics) listed.get(m.status)?.push(clean(m.name, TEXT_NAME_MAX));

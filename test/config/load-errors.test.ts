@@ -42,7 +42,7 @@ describe('parseConfig: refused input, with line:column', () => {
     expect(text).toContain('cutoff (in defaults) must be a number greater than 0 and less than 1; got 1.5');
     expect(text).toContain('worse (in defaults) must be one of higher, lower, both; got "upward"');
     expect(text).toContain('window (in defaults) must be a whole number of at least 2; got 1');
-    expect(text).toContain('transform (in defaults) must be one of none, log; got "sqrt"');
+    expect(text).toContain('transform (in defaults) must be one of auto, none, log; got "sqrt"');
     expect(text).toContain(
       'tolerance (in metrics rule #1) must be a number of at least 0, or a percent such as "1%"; got "-2%"',
     );
@@ -121,7 +121,9 @@ describe('parseConfig: refused input, with line:column', () => {
     expect(r.problems[0]).toMatchObject({ line: 1, col: 9 });
     expect(r.error.fix).toBe('did you mean "holm"?');
     r = reportedProblems(() => parseConfig('frobnicate: 1\n', 'c.yml'), 'c.yml');
-    expect(r.error.fix).toBe('allowed here: defaults, metrics, groups, family, keep, input-format, limits');
+    expect(r.error.fix).toBe(
+      'allowed here: defaults, metrics, groups, family, budget, unsettled, keep, input-format, limits',
+    );
   });
 
   it('refuses a document that is not a mapping, several documents, unknown tags and non-finite numbers', () => {
@@ -155,8 +157,7 @@ describe('parseConfig: refused input, with line:column', () => {
       ['window', '10.5'],
       ['min-runs', '1'],
       ['transform', 'sqrt'],
-      ['fit', 'mean'],
-      ['uncertainty', 'plugin'],
+      ['shared-move', 'yes please'],
       ['aggregate', 'mode'],
       ['change-points', '1'],
     ];

@@ -18,14 +18,15 @@ describe('parseConfig: accepted keys', () => {
         resolution: 0,
         window: 60,
         minRuns: 8,
-        transform: 'none',
-        fit: 'mle',
-        uncertainty: 'predictive',
+        transform: 'auto',
         ignore: false,
         aggregate: 'median',
         changePoints: true,
+        sharedMove: true,
       });
-      expect(config.family).toBe('none');
+      expect(config.family).toBe('holm');
+      expect(config.budget).toBe(0.01);
+      expect(config.unsettled).toBe('pass');
       expect(config.keep).toBe(500);
       expect(config.limits).toEqual({
         maxFileBytes: 64 * 1024 * 1024,
@@ -51,8 +52,7 @@ describe('parseConfig: accepted keys', () => {
         '  window: 40',
         '  min-runs: 12',
         '  transform: log',
-        '  fit: robust',
-        '  uncertainty: plug-in',
+        '  shared-move: false',
         '  aggregate: min',
         '  change-points: false',
       ].join('\n'),
@@ -66,20 +66,21 @@ describe('parseConfig: accepted keys', () => {
       window: 40,
       minRuns: 12,
       transform: 'log',
-      fit: 'robust',
-      uncertainty: 'plug-in',
       ignore: false,
       aggregate: 'min',
       changePoints: false,
+      sharedMove: false,
     });
   });
 
   it('reads every top-level key and every limit', () => {
     const config = parseConfig(
-      'family: fdr\nkeep: 250\ninput-format: openmetrics\nlimits:\n  max-file-bytes: 1000\n  max-line-length: 200\n  max-metrics: 30\n',
+      'family: fdr\nbudget: 5%\nunsettled: block\nkeep: 250\ninput-format: openmetrics\nlimits:\n  max-file-bytes: 1000\n  max-line-length: 200\n  max-metrics: 30\n',
       'c.yml',
     );
     expect(config.family).toBe('fdr');
+    expect(config.budget).toBe(0.05);
+    expect(config.unsettled).toBe('block');
     expect(config.keep).toBe(250);
     expect(config.inputFormat).toBe('openmetrics');
     expect(config.limits).toEqual({ maxFileBytes: 1000, maxLineLength: 200, maxMetrics: 30 });
@@ -103,8 +104,7 @@ describe('parseConfig: accepted keys', () => {
         '    window: 30',
         '    min-runs: 9',
         '    transform: log',
-        '    fit: unbiased',
-        '    uncertainty: plug-in',
+        '    shared-move: false',
         '    aggregate: max',
         '    change-points: false',
         '    relative-to: throughput/calibrate',
@@ -124,15 +124,14 @@ describe('parseConfig: accepted keys', () => {
           window: 30,
           minRuns: 9,
           transform: 'log',
-          fit: 'unbiased',
-          uncertainty: 'plug-in',
+          sharedMove: false,
           aggregate: 'max',
           changePoints: false,
           relativeTo: 'throughput/calibrate',
         },
         line: 4,
       },
-      { match: ['legacy/*'], settings: { ignore: true }, line: 16 },
+      { match: ['legacy/*'], settings: { ignore: true }, line: 15 },
     ]);
   });
 

@@ -2,7 +2,6 @@ import { describe, expect, it } from 'vitest';
 import { runGate } from '../../src/gate/gate.js';
 import type { History } from '../../src/history/history.js';
 import type { Run } from '../../src/inputs/run.js';
-import { cutoffLevel } from '../../src/model/tails.js';
 import { seededNormal } from '../model/random.js';
 import { configFrom } from './helpers/scenario.js';
 
@@ -36,13 +35,13 @@ function binomialQuantile(n: number, p: number, q: number): number {
 
 describe('family control over many metrics (issue 6), simulated', () => {
   it('holm keeps the share of runs with any false alarm near the level; none does not', () => {
-    // cutoff 0.2 stands for level 0.0728 (1.79 sd two-sided), large enough to count in 200 runs.
+    // A budget of 7% (large enough to count in 200 runs; cutoff 0.2 for `none`, 1.79 sd two-sided).
     // worse: both, so the whole two-sided level counts; tolerance 0 so only the statistics decide.
     const yaml = (family: string) =>
-      `family: ${family}\ndefaults:\n  cutoff: 0.2\n  worse: both\n  tolerance: 0\n  min-runs: 8\n  window: ${WINDOW}\n  change-points: false\n`;
+      `family: ${family}\nbudget: 7%\ndefaults:\n  cutoff: 0.2\n  worse: both\n  tolerance: 0\n  min-runs: 8\n  window: ${WINDOW}\n  change-points: false\n`;
     const holm = configFrom(yaml('holm'));
     const none = configFrom(yaml('none'));
-    const level = cutoffLevel(0.2);
+    const level = 0.07;
     const normal = seededNormal(20261201);
     let holmRuns = 0;
     let noneRuns = 0;
@@ -51,9 +50,10 @@ describe('family control over many metrics (issue 6), simulated', () => {
       if (runGate({ config: holm, history, run, series: 'main' }).verdict === 'regressed') holmRuns++;
       if (runGate({ config: none, history, run, series: 'main' }).verdict === 'regressed') noneRuns++;
     }
-    // Holm (1979) bounds the chance of any false alarm by the level; with independent metrics it
-    // is close to it (1 - (1 - level/200)^200 = 0.0702). Binomial margins: the count must lie
-    // between the 0.1% and 99.9% quantiles of Bin(200, 0.0702) (about 4 and 26).
+    // Holm (1979) bounds the chance of any false alarm by the budget; with independent metrics it
+    // is close to it (1 - (1 - 0.07/200)^200 = 0.0676). The predictive (moderated variances, fitted
+    // tails) must not lose that: the count must lie between the 0.1% quantile of Bin(200, 0.0676)
+    // and the 99.9% quantile of Bin(200, 0.07) (about 4 and 26).
     console.info(`family simulation: runs with a false alarm, holm ${holmRuns}/${RUNS}, none ${noneRuns}/${RUNS}`);
     const familyRate = 1 - (1 - level / METRICS) ** METRICS;
     expect(holmRuns).toBeGreaterThanOrEqual(binomialQuantile(RUNS, familyRate, 0.001));

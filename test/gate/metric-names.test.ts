@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { metricNames } from '../../src/gate/judge-name.js';
+import { metricNames } from '../../src/gate/candidates.js';
 import { historyOf, runOf } from './helpers/scenario.js';
 
 // Names mixing case, digits, '/', astral characters (surrogate pairs), lone surrogates and the

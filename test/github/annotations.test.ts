@@ -6,11 +6,21 @@ import { annotate } from '../../src/github/annotations.js';
 import { REPORT_SCHEMA, type MetricResult, type Report } from '../../src/gate/report.js';
 
 function metric(over: Partial<MetricResult>): MetricResult {
-  return { name: 'route/match', status: 'ok', cutoff: 0.01, worse: 'higher', reason: 'within the baseline', ...over };
+  return { name: 'route/match', status: 'ok', cutoff: 0.01, worse: 'higher', ...over };
 }
 
 function report(metrics: MetricResult[]): Report {
-  return { schema: REPORT_SCHEMA, verdict: 'regressed', series: 'bench', family: 'none', metrics, groups: [] };
+  return {
+    schema: REPORT_SCHEMA,
+    verdict: 'regressed',
+    series: 'bench',
+    blocks: true,
+    family: 'none',
+    budget: 0.01,
+    unsettled: 'pass',
+    metrics,
+    shared: [],
+  };
 }
 
 describe('annotate', () => {
@@ -59,7 +69,7 @@ describe('annotate', () => {
           status: 'regressed',
           value: 1,
           unit: 'ms\u2066',
-          reason: 'moved\u001b[31m',
+          note: { kind: 'no-reference', reference: 'moved\u001b[31m' },
         }),
       ]),
       sink as never,

@@ -23,13 +23,13 @@ describe('collectRun', () => {
       ],
       (name) => (name === 'a' ? 'max' : 'mean'),
     );
-    expect(run.metrics.get('a')).toEqual({ value: 7, count: 3 });
-    expect(run.metrics.get('b')).toEqual({ value: 20, count: 2 });
+    expect(run.metrics.get('a')).toMatchObject({ value: 7, count: 3 });
+    expect(run.metrics.get('b')).toMatchObject({ value: 20, count: 2 });
   });
 
   it('uses the median by default rule and keeps the unit', () => {
     const run = collectRun([result([1, 9, 2].map((value) => ({ name: 'x', value, unit: 'ms' })))], () => 'median');
-    expect(run.metrics.get('x')).toEqual({ value: 2, unit: 'ms', count: 3 });
+    expect(run.metrics.get('x')).toMatchObject({ value: 2, unit: 'ms', count: 3 });
   });
 
   it('converts later samples to the first-seen unit (1500 ms joins 2 s as 1.5 s)', () => {
@@ -40,7 +40,7 @@ describe('collectRun', () => {
       ],
       () => 'mean',
     );
-    expect(run.metrics.get('t')).toEqual({ value: 1.75, unit: 's', count: 2 });
+    expect(run.metrics.get('t')).toMatchObject({ value: 1.75, unit: 's', count: 2 });
   });
 
   it('refuses incompatible units, naming both sources', () => {
@@ -104,7 +104,7 @@ describe('collectRun', () => {
       ['pkg', 'p'],
     ]);
     expect(run.notFitted?.get('t/skip')).toBe('skipped');
-    expect(run.metrics.get('__proto__')).toEqual({ value: 1, count: 1 });
+    expect(run.metrics.get('__proto__')).toMatchObject({ value: 1, count: 1 });
     expect(Object.getPrototypeOf(run.metrics)).toBe(Map.prototype);
   });
 });

@@ -49,7 +49,7 @@ describe('splitPattern', () => {
 describe('readMetricFiles', () => {
   it('expands globs, treats repeated lines and files as samples and keeps meta', async () => {
     const run = await readMetricFiles(['bench/*.txt'], options());
-    expect(run.metrics.get('BenchmarkRoute/ns/op')).toEqual({ value: 410, unit: 'ns/op', count: 3 });
+    expect(run.metrics.get('BenchmarkRoute/ns/op')).toMatchObject({ value: 410, unit: 'ns/op', count: 3 });
     expect(run.meta.get('goos')).toBe('linux');
     expect(run.meta.get('gomaxprocs')).toBe('8');
   });
@@ -69,7 +69,7 @@ describe('readMetricFiles', () => {
 
   it('converts units across files to the first-seen one (2 KiB and 1024 B -> KiB)', async () => {
     const run = await readMetricFiles(['size.json', 'size2.csv'], options({ aggregateFor: () => 'mean' }));
-    expect(run.metrics.get('bundle')).toEqual({ value: 1.5, unit: 'KiB', count: 2 });
+    expect(run.metrics.get('bundle')).toMatchObject({ value: 1.5, unit: 'KiB', count: 2 });
   });
 
   it('expands absolute globs too, and names files relative to the working directory', async () => {

@@ -9,7 +9,6 @@ import {
   predictiveRelativeDensity,
   predictiveScale,
 } from '../../src/model/density.js';
-import { InputError } from '../../src/errors/input-error.js';
 
 describe('gaussianDensity', () => {
   // Abramowitz & Stegun, Handbook of Mathematical Functions, table 26.1, Z(x) column
@@ -65,8 +64,8 @@ describe('gaussianDensity', () => {
   });
 
   it('rejects a negative or non-finite sd', () => {
-    expect(() => gaussianDensity(0, 0, -1)).toThrow(InputError);
-    expect(() => gaussianLogDensity(0, 0, Number.NaN)).toThrow(InputError);
+    expect(() => gaussianDensity(0, 0, -1)).toThrow(RangeError);
+    expect(() => gaussianLogDensity(0, 0, Number.NaN)).toThrow(RangeError);
   });
 });
 
@@ -122,6 +121,6 @@ describe('relative densities', () => {
   });
 
   it('predictive needs at least 2 runs', () => {
-    expect(() => predictiveRelativeDensity(1, 0, 1, 1)).toThrow(InputError);
+    expect(() => predictiveRelativeDensity(1, 0, 1, 1)).toThrow(RangeError);
   });
 });

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
-import { adjustTails } from '../../src/model/family.js';
-import { InputError } from '../../src/errors/input-error.js';
+import { adjustTails, holmLevels } from '../../src/model/family.js';
 
 const rejected = (adjusted: number[], alpha: number): number => adjusted.filter((p) => p <= alpha).length;
 
@@ -67,7 +66,16 @@ describe('adjustTails', () => {
 
   it('rejects values outside [0, 1] and unknown methods', () => {
     expect(() => adjustTails([0.1, 1.2], 'holm')).toThrow(/position 2/);
-    expect(() => adjustTails([Number.NaN], 'fdr')).toThrow(InputError);
-    expect(() => adjustTails([0.1], 'sidak' as 'holm')).toThrow(InputError);
+    expect(() => adjustTails([Number.NaN], 'fdr')).toThrow(RangeError);
+    expect(() => adjustTails([0.1], 'sidak' as 'holm')).toThrow(RangeError);
+  });
+});
+
+describe('holmLevels (Holm 1979)', () => {
+  it('the i-th smallest tail faces alpha / (m - i + 1), in input order', () => {
+    const levels = holmLevels([0.03, 0.001, 0.2], 0.01);
+    expect(levels[1]).toBeCloseTo(0.01 / 3, 15);
+    expect(levels[0]).toBeCloseTo(0.01 / 2, 15);
+    expect(levels[2]).toBeCloseTo(0.01, 15);
   });
 });

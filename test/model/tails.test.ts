@@ -3,7 +3,6 @@ import fc from 'fast-check';
 import { expectClose } from '../helpers/close.js';
 import { jStat } from './jstat.js';
 import { plugInRelativeDensity } from '../../src/model/density.js';
-import { InputError } from '../../src/errors/input-error.js';
 import { cutoffLevel, cutoffSigma, normalTail, studentTail } from '../../src/model/tails.js';
 
 describe('normalTail', () => {
@@ -78,9 +77,9 @@ describe('studentTail', () => {
   });
 
   it('rejects NaN and non-positive degrees of freedom', () => {
-    expect(() => studentTail(Number.NaN, 3, 'both')).toThrow(InputError);
-    expect(() => studentTail(1, 0, 'both')).toThrow(InputError);
-    expect(() => normalTail(Number.NaN, 'upper')).toThrow(InputError);
+    expect(() => studentTail(Number.NaN, 3, 'both')).toThrow(RangeError);
+    expect(() => studentTail(1, 0, 'both')).toThrow(RangeError);
+    expect(() => normalTail(Number.NaN, 'upper')).toThrow(RangeError);
   });
 });
 
@@ -100,7 +99,7 @@ describe('cutoffSigma and cutoffLevel', () => {
   });
 
   it('rejects cutoffs outside (0, 1]', () => {
-    for (const bad of [0, -0.1, 1.5, Number.NaN]) expect(() => cutoffSigma(bad)).toThrow(InputError);
+    for (const bad of [0, -0.1, 1.5, Number.NaN]) expect(() => cutoffSigma(bad)).toThrow(RangeError);
     expect(cutoffSigma(1)).toBe(0);
   });
 });

@@ -7,7 +7,7 @@
  */
 import { parseConfig } from '../../src/config/load.js';
 import type { Config } from '../../src/config/types.js';
-import { prepareGate, runGate } from '../../src/gate/gate.js';
+import { runGate } from '../../src/gate/gate.js';
 import type { History, MetricColumn, RunInfo } from '../../src/history/history.js';
 import type { Measurement, Run } from '../../src/inputs/run.js';
 import type { RunSpec, Scenario } from './simulate.js';
@@ -25,7 +25,6 @@ export type Judge = (history: History, run: Run) => Promise<GateAnswer>;
  * @example const judge = await gateJudge(config, 'main'); (await judge(history, run)).verdict
  */
 export async function gateJudge(config: Config, series: string): Promise<Judge> {
-  await prepareGate(config);
   return async (history, run) => runGate({ config, history, run, series });
 }
 

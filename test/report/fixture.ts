@@ -77,7 +77,6 @@ export function makeFixture(extra: Spec[] = []): { report: Report; history: Hist
       unit: s.unit,
       cutoff,
       worse: s.worse ?? 'higher',
-      reason: `${s.status} for an invented reason`,
       recent: base.slice(-20),
     };
     if (s.now !== undefined) r.value = s.now;
@@ -89,6 +88,8 @@ export function makeFixture(extra: Spec[] = []): { report: Report; history: Hist
         r.change = (s.now - mean(base)) / mean(base);
         r.relativeDensity = Math.exp(-0.5 * r.z * r.z);
         r.density = r.relativeDensity / (Math.sqrt(2 * Math.PI) * sd);
+        r.own = r.change;
+        r.detectable = 0.07;
       }
     }
     return r;
@@ -97,25 +98,12 @@ export function makeFixture(extra: Spec[] = []): { report: Report; history: Hist
     schema: 'bellgate.report/1',
     verdict: 'regressed',
     series: 'linux-x64',
+    blocks: true,
     family: 'none',
+    budget: 0.01,
+    unsettled: 'pass',
     metrics,
-    groups: [
-      {
-        name: 'timings',
-        status: 'regressed',
-        members: [
-          { name: 'build/time', share: 0.71, ownZ: 6.2 },
-          { name: 'render/page-md', share: 0.29, ownZ: -2.1 },
-        ],
-        n: 30,
-        distance: 44.1,
-        tail: 1e-9,
-        level: 0.0024,
-        common: { z: 1.1, tail: 0.27, status: 'ok' },
-        shrinkage: 0.1,
-        reason: 'build/time moved on its own; the runner as a whole did not',
-      },
-    ],
+    shared: [{ name: 'timings', status: 'ok', members: 4, move: 0.012, n: 30, tail: 0.27, largest: 0.05 }],
   };
   return { report, history };
 }

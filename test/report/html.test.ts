@@ -13,7 +13,6 @@ const base: MetricResult = {
   status: 'ok',
   cutoff: 0.01,
   worse: 'higher',
-  reason: 'r',
   baseline: { n: 30, mean: 10, sd: 2 },
 };
 

@@ -57,8 +57,8 @@ describe('renderJson', () => {
   it('is stable: the same report gives the same text, whatever order optional fields were set in', () => {
     const m0 = report.metrics[0];
     if (!m0) throw new Error('fixture');
-    const { reason, name, ...rest } = m0;
-    const reordered = { reason, ...rest, name };
+    const { cutoff, name, ...rest } = m0;
+    const reordered = { cutoff, ...rest, name };
     expect(renderJson({ ...report, metrics: [reordered] })).toBe(renderJson({ ...report, metrics: [m0] }));
   });
 

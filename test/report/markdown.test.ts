@@ -27,11 +27,11 @@ describe('renderMarkdown', () => {
     expect(md.trimEnd().split('\n').at(-1)).toContain('Bellgate');
   });
 
-  it('has one table row per metric, with 7 cells each, flagged ones outside <details>', () => {
+  it('has one table row per metric, with 9 cells each, flagged ones outside <details>', () => {
     const md = renderMarkdown(report);
     const rows = tableRows(md);
     expect(rows.length).toBe(report.metrics.length);
-    for (const r of rows) expect(cellCount(r)).toBe(7);
+    for (const r of rows) expect(cellCount(r)).toBe(9);
     const [open, closed = ''] = md.split('<details>');
     expect(open).toContain('▲ **regressed**');
     expect(closed).toContain('● ok');
@@ -65,7 +65,7 @@ describe('renderMarkdown', () => {
     expect(md).not.toMatch(/#123/);
     expect(md).not.toMatch(/[\u0000-\u0009\u000B-\u001F\u202A-\u202E\u2066-\u2069]/);
     expect(md).not.toContain('L'.repeat(201));
-    for (const r of tableRows(md)) expect(cellCount(r)).toBe(7);
+    for (const r of tableRows(md)) expect(cellCount(r)).toBe(9);
     expect(tableRows(md).length).toBe(bad.metrics.length);
   });
 

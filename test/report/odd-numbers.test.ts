@@ -58,7 +58,6 @@ describe('renderers with odd numbers', () => {
             status: s.status,
             cutoff: 0.01,
             worse: 'higher',
-            reason: 'r',
             recent: s.recent,
           };
           if (s.value !== undefined) m.value = s.value;
@@ -80,7 +79,10 @@ describe('renderers with odd numbers', () => {
           series: 's',
           family: 'none',
           metrics,
-          groups: [],
+          blocks: false,
+          budget: 0.01,
+          unsettled: 'pass',
+          shared: [],
         };
         const outputs = [
           renderText(report, { color: false }),

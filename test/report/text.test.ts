@@ -26,7 +26,8 @@ describe('renderText', () => {
     ]) {
       expect(out).toContain(word);
     }
-    expect(out).toContain('group timings: regressed');
+    expect(out).toContain('shared move of timings: ok');
+    expect(out).toContain('family control: none');
   });
 
   it('counts the ok metrics on one line beyond OK_ROWS_LISTED, keeps every flagged row, and lists all with `all`', () => {

@@ -1,7 +1,4 @@
-import { settingsFor } from '../../config/rules.js';
-import { selectBaseline } from '../../gate/baseline.js';
 import { InputError } from '../../errors/input-error.js';
-import { fromFitScale } from '../../model/transform.js';
 import { renderExplain } from '../../report/explain.js';
 import type { CommandContext } from '../context.js';
 import { judgeRequestedRun, type RequestedRunOptions } from '../judge-requested-run.js';
@@ -16,7 +13,7 @@ export type ExplainOptions = RequestedRunOptions;
  * @example await runExplain(ctx, 'latency/geocode-p95', { history: 'h.json', series: 'default' })
  */
 export async function runExplain(ctx: CommandContext, metric: string, options: ExplainOptions): Promise<void> {
-  const { config, history, run, report } = await judgeRequestedRun(ctx, options);
+  const { history, run, report } = await judgeRequestedRun(ctx, options);
   const result = report.metrics.find((m) => m.name === metric);
   if (result === undefined) {
     const known = [...new Set([...history.columns.keys(), ...run.metrics.keys()])];
@@ -29,14 +26,13 @@ export async function runExplain(ctx: CommandContext, metric: string, options: E
           : 'run bellgate check to list the metric names',
     });
   }
-  const settings = settingsFor(config, metric);
-  const baseline = selectBaseline(history, metric, settings);
   const width = Number(ctx.io.env.COLUMNS);
   const text = renderExplain({
     result,
-    // selectBaseline gives fit-scale values; the picture wants the metric's own unit.
-    baselineValues: baseline.values.map((v) => fromFitScale(v, settings.transform)),
-    cutoff: result.cutoff,
+    // The newest baseline values the gate kept, on the metric's own scale.
+    baselineValues: result.recent ?? [],
+    cutoff: result.effectiveCutoff ?? result.cutoff,
+    report,
     color: ctx.color,
     ...(Number.isInteger(width) && width >= 40 ? { width: Math.min(width, 160) } : {}),
   });

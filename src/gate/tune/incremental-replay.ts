@@ -3,10 +3,9 @@ import { plugInRelativeDensity, predictiveRelativeDensity, predictiveScale } fro
 import { fitGaussian, type GaussianFit } from '../../model/fit.js';
 import { RunningMoments } from '../../model/running-moments.js';
 import { normalTail, studentTail } from '../../model/tails.js';
-import { fromFitScale, toFitScale } from '../../model/transform.js';
-import { fitScaleFloor } from '../resolution-floor.js';
+import { fromFitScale, toFitScale, type Scale } from '../../model/transform.js';
 import { directionOf } from '../sides.js';
-import { beyondTolerance } from '../tolerance.js';
+import { beyondTolerance, fitScaleFloor } from './score-alone.js';
 import type { MetricSequence } from './metric-sequence.js';
 import { emptyReplay, type MetricReplay, type Side } from './replay-point.js';
 
@@ -17,7 +16,7 @@ import { emptyReplay, type MetricReplay, type Side } from './replay-point.js';
  * @example canSlide({ ...settings, fit: 'robust' }) // false
  */
 export function canSlide(settings: MetricSettings): boolean {
-  return settings.fit !== 'robust' && !settings.changePoints;
+  return !settings.changePoints;
 }
 
 /**
@@ -52,10 +51,10 @@ export function incrementalReplay(sequence: MetricSequence): MetricReplay {
     const n = k - start;
     if (n === 0 || n < settings.minRuns) continue;
     const fit = slidingFit(moments, shift, values, start, k, settings);
-    const x = toFitScale(own[k]!, settings.transform, name);
+    const x = toFitScale(own[k]!, settings.transform as Scale);
     const figures = decisionFigures(x, fit, settings);
     const direction = directionOf(x - fit.mean, settings.worse);
-    const beyond = beyondTolerance(own[k]!, fromFitScale(fit.mean, settings.transform), settings.tolerance);
+    const beyond = beyondTolerance(own[k]!, fromFitScale(fit.mean, settings.transform as Scale), settings.tolerance);
     replay.run.push(runIndex[k]!);
     replay.relativeDensity.push(figures.relativeDensity);
     replay.tail.push(figures.tail);
@@ -84,31 +83,31 @@ function slidingFit(
   // a constant history must give sd 0, not 1e-17.
   if (squares <= 1e-20 * n * mean * mean) return floored(values.slice(start, end), settings);
   const sampleVariance = n > 1 ? squares / (n - 1) : 0;
-  const spread = Math.sqrt(settings.fit === 'mle' ? squares / n : sampleVariance);
-  const floor = fitScaleFloor(settings.resolution, settings.transform, mean);
+  const spread = Math.sqrt(squares / n);
+  const floor = fitScaleFloor(settings.resolution, settings.transform as Scale, mean);
   return {
     n,
     mean,
     sd: Math.max(spread, floor),
     sampleSd: Math.max(Math.sqrt(sampleVariance), floor),
-    method: settings.fit,
+    method: 'mle',
   };
 }
 
 function floored(window: number[], settings: MetricSettings): GaussianFit {
-  const raw = fitGaussian(window, settings.fit, 0);
-  const floor = fitScaleFloor(settings.resolution, settings.transform, raw.mean);
-  return floor > 0 ? fitGaussian(window, settings.fit, floor) : raw;
+  const raw = fitGaussian(window, 'mle', 0);
+  const floor = fitScaleFloor(settings.resolution, settings.transform as Scale, raw.mean);
+  return floor > 0 ? fitGaussian(window, 'mle', floor) : raw;
 }
 
 /** Relative density and two-sided tail, as judgeMetric computes them for a fit (zero spread: 0 or 1). */
 export function decisionFigures(
   x: number,
   fit: GaussianFit,
-  settings: MetricSettings,
+  _settings: MetricSettings,
 ): { relativeDensity: number; tail: number } {
   const deviation = x - fit.mean;
-  const predictive = settings.uncertainty === 'predictive' && fit.n >= 2;
+  const predictive = fit.n >= 2;
   if (fit.sd === 0 || (predictive && fit.sampleSd === 0)) {
     const moved = deviation !== 0;
     return { relativeDensity: moved ? 0 : 1, tail: moved ? 0 : 1 };

@@ -1,6 +1,6 @@
 import type { MetricSettings } from '../../config/types.js';
 import type { History } from '../../history/history.js';
-import { selectBaseline } from '../baseline.js';
+import { selectBaseline } from './baseline.js';
 
 /**
  * Every value of one metric the gate could have judged, oldest first: the runs that hold the

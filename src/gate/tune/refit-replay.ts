@@ -1,6 +1,6 @@
 import type { History } from '../../history/history.js';
-import { selectBaseline } from '../baseline.js';
-import { scoreMetric } from '../judge-metric.js';
+import { selectBaseline } from './baseline.js';
+import { scoreMetric } from './score-alone.js';
 import type { MetricSequence } from './metric-sequence.js';
 import { emptyReplay, type MetricReplay } from './replay-point.js';
 
@@ -24,8 +24,8 @@ export function refitReplay(sequence: MetricSequence): MetricReplay {
     const score = scoreMetric(name, settings, baseline, own[k]!);
     if (!score.scored) continue;
     replay.run.push(runIndex[k]!);
-    replay.relativeDensity.push(score.result.relativeDensity ?? 1);
-    replay.tail.push(score.result.tail ?? 1);
+    replay.relativeDensity.push(score.relativeDensity);
+    replay.tail.push(score.tail);
     replay.side.push(
       !score.beyondTolerance ? 0 : score.direction === 'worse' ? 1 : score.direction === 'better' ? -1 : 0,
     );

@@ -4,6 +4,7 @@ import type { History } from '../../history/history.js';
 import { canSlide, incrementalReplay } from './incremental-replay.js';
 import { metricSequence } from './metric-sequence.js';
 import { refitReplay } from './refit-replay.js';
+import { replaySettings } from './score-alone.js';
 import type { MetricReplay } from './replay-point.js';
 
 /** Every metric's replay over one history. */
@@ -37,7 +38,7 @@ export function replayHistory(config: Config, history: History, options: ReplayO
     .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
   const metrics: MetricReplay[] = [];
   names.forEach((name, i) => {
-    const settings = settingsFor(config, name);
+    const settings = replaySettings(settingsFor(config, name), history.columns.get(name)?.unit);
     if (!settings.ignore) {
       const sequence = metricSequence(history, name, settings, indexOf);
       metrics.push(!options.refit && canSlide(settings) ? incrementalReplay(sequence) : refitReplay(sequence));

@@ -8,6 +8,7 @@ import { DEFAULT_LADDER, scoreLadder, type LadderRow } from './ladder.js';
 import { metricSequence } from './metric-sequence.js';
 import { normalityCheck, type NormalityCheck } from './normality-check.js';
 import { replayHistory } from './replay.js';
+import { replaySettings } from './score-alone.js';
 import {
   chooseCutoff,
   DEFAULT_TARGET,
@@ -91,7 +92,9 @@ export function tuneHistory(input: TuneInput): TuneResult {
   const perRun = new Map<number, number>();
   for (const m of replay.metrics) for (const r of m.run) perRun.set(r, (perRun.get(r) ?? 0) + 1);
   const metricsPerRun = perRun.size === 0 ? 0 : median([...perRun.values()]);
-  const rows = ladders.get(config.family)!;
+  // A cutoff decides only with family: none (under a family the run's budget does), so the
+  // cutoff is chosen on that ladder until tune replays the whole gate (issue 13 item 7).
+  const rows = ladders.get('none')!;
   // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
   const choice =
     perRun.size === 0
@@ -105,7 +108,7 @@ export function tuneHistory(input: TuneInput): TuneResult {
   const rules = perRun.size === 0 ? [] : noisyMetricRules(rows, names, choice.cutoff);
   const indexOf = new Map(history.runs.map((run, i) => [run.id, i] as const));
   const metrics = replay.metrics.map((m): MetricTune => {
-    const settings = settingsFor(config, m.name);
+    const settings = replaySettings(settingsFor(config, m.name), history.columns.get(m.name)?.unit);
     const own = metricSequence(history, m.name, settings, indexOf).own.slice(-settings.window);
     const normality = normalityCheck(own);
     if (normality?.suggestLog && settings.transform === 'none') {
@@ -117,7 +120,7 @@ export function tuneHistory(input: TuneInput): TuneResult {
       name: m.name,
       method: m.method,
       judged: m.run.length,
-      transform: settings.transform,
+      transform: settings.transform === 'log' ? 'log' : 'none',
       ...(normality ? { normality } : {}),
     };
   });

@@ -1,0 +1,336 @@
+import { median } from 'simple-statistics';
+import { groupFor } from '../config/rules.js';
+import type { Config } from '../config/types.js';
+import type { History } from '../history/history.js';
+import { medianOfOthers } from '../model/median-of-others.js';
+import type { Candidate } from './candidates.js';
+import { LASTING_RUNS, lastingStart } from './lasting-change.js';
+import type { MetricResult, SinceReason } from './report.js';
+
+/** The default group of the timings needs this many members: a median of fewer is no shared move. */
+export const MIN_TIMINGS = 3;
+
+/** A set of metrics judged beside a shared move: the timings, a configured group, a reference metric, or none. */
+export interface MoveGroup {
+  name: string;
+  kind: 'timings' | 'group' | 'reference' | 'alone';
+  members: Candidate[];
+  /** For `reference` (relative-to): the metric whose move is the shared move. */
+  reference?: Candidate;
+}
+
+/** One member after its moves were taken apart: everything the noise model and the judge need. */
+export interface MemberMoves {
+  candidate: Candidate;
+  group: MoveGroup;
+  /** Baseline runs (indexes into history.runs, ascending) behind the member. */
+  rows: number[];
+  /** Where each level of the member starts (indexes into history.runs, ascending; 0 first). */
+  levels: number[];
+  /** Why the current level starts where it does (absent: the whole window is one level). */
+  since?: { index: number; run: string; reason: SinceReason; pr?: number };
+  /** Own moves, worse side positive, in the member's deviation units, aligned with rows. */
+  own: number[];
+  /** This run's own move, and the shared move taken out of it (worse side positive). */
+  ownNow: number;
+  sharedNow: number;
+  /** Centre of the current level on the fit scale. */
+  centre: number;
+  runner?: 'same' | 'other' | 'mixed';
+}
+
+/** The shared moves of a group: one per baseline run, and this run's. */
+export interface GroupMoves {
+  group: MoveGroup;
+  history: number[];
+  now: number;
+  members: number;
+}
+
+/**
+ * Sorts candidates into move groups (issue 13 item 3): a `relative-to` metric is judged beside its
+ * reference metric's move; a configured group's members beside the group's shared move; every
+ * other timing (time unit, `shared-move` on) beside the timings' shared move; the rest alone.
+ * A timings group of fewer than MIN_TIMINGS, or a configured group of one, has no shared move.
+ * A relative-to metric whose reference this run lacks gets a `missing` result instead.
+ * @example formGroups(config, candidates).groups.map((g) => g.name) // ['timings', 'alone']
+ */
+export function formGroups(
+  config: Config,
+  candidates: readonly Candidate[],
+): { groups: MoveGroup[]; finished: MetricResult[] } {
+  const byName = new Map(candidates.map((c) => [c.name, c] as const));
+  const finished: MetricResult[] = [];
+  const named = new Map<string, MoveGroup>();
+  const alone: Candidate[] = [];
+  const timings: Candidate[] = [];
+  const add = (key: string, group: () => MoveGroup, member: Candidate): void => {
+    const found = named.get(key) ?? group();
+    found.members.push(member);
+    named.set(key, found);
+  };
+  for (const c of candidates) {
+    const reference = c.settings.relativeTo;
+    if (reference !== undefined) {
+      const ref = byName.get(reference);
+      if (ref === undefined) {
+        finished.push({
+          name: c.name,
+          status: 'missing',
+          value: c.measurement.value,
+          cutoff: c.settings.cutoff,
+          worse: c.settings.worse,
+          note: { kind: 'no-reference', reference },
+        });
+        continue;
+      }
+      const name = `relative-to ${reference}`;
+      add(name, () => ({ name, kind: 'reference', members: [], reference: ref }), c);
+      continue;
+    }
+    const spec = groupFor(config, c.name);
+    if (spec !== undefined) add(`group ${spec.name}`, () => ({ name: spec.name, kind: 'group', members: [] }), c);
+    else if (c.timing && c.settings.sharedMove) timings.push(c);
+    else alone.push(c);
+  }
+  const groups: MoveGroup[] = [];
+  for (const g of named.values()) {
+    if (g.kind === 'group' && g.members.length < 2) alone.push(...g.members);
+    else groups.push(g);
+  }
+  if (timings.length >= MIN_TIMINGS) groups.push({ name: 'timings', kind: 'timings', members: timings });
+  else alone.push(...timings);
+  for (const c of alone) groups.push({ name: c.name, kind: 'alone', members: [c] });
+  return { groups, finished };
+}
+
+/** A member's deviation from a centre in its deviation units (log: the difference; else a share of the centre). */
+function deviation(c: Candidate, x: number, centre: number): number {
+  const d = x - centre;
+  return c.sign * (c.log || centre === 0 ? d : d / Math.abs(centre));
+}
+
+/** The level (index into levels) that run i belongs to. */
+function levelOf(levels: readonly number[], i: number): number {
+  let k = 0;
+  while (k + 1 < levels.length && levels[k + 1]! <= i) k++;
+  return k;
+}
+
+/**
+ * Takes one group's runs apart into shared and own moves (issue 13 item 3).
+ * Rows: the newest `window` runs holding a member; when the caller knows this run's runner and at
+ * least min-runs of those runs share its fingerprint, only those (for timings: a new CPU model
+ * moves every timing). Levels: a member's runs before its newest level mark, and before a lasting
+ * change of its own moves (lastingStart, with `change-points` on), are earlier levels, each with
+ * its own centre, so the spread is taken over every level and a short new level still gets it.
+ * Centres and shared moves: a median polish (Tukey 1977, "Exploratory Data Analysis", ch. 11) of
+ * runs x members on the fit scale, value = centre(member, level) + shared(run) + own; then each
+ * member's own move is its deviation minus the median of the OTHER members' deviations in that
+ * run (medianOfOthers), so no member's own slowdown is ever part of the shared move it is judged
+ * beside. `reference`: the shared move is the reference metric's deviation; `alone`: none.
+ * O(rows x members x log members).
+ */
+export function takeApart(
+  group: MoveGroup,
+  history: History,
+  runner: string | undefined,
+): { members: MemberMoves[]; shared?: GroupMoves } {
+  const everyone = group.reference ? [...group.members, group.reference] : group.members;
+  const { rows, runnerMatch } = groupRows(everyone, history, runner);
+  let members = everyone.map((c) => memberFrame(c, rows, history));
+  let result = polish(group, members);
+  const changed = members.map((m, j) => withLastingChange(m, result.own[j]!, history));
+  if (changed.some((m, j) => m !== members[j])) {
+    members = changed;
+    result = polish(group, members);
+  }
+  const out: MemberMoves[] = group.members.map((c, j) => {
+    const m = members[j]!;
+    return {
+      candidate: c,
+      group,
+      rows: m.rows,
+      levels: m.levels,
+      ...(m.since === undefined ? {} : { since: m.since }),
+      own: result.own[j]!,
+      ownNow: result.ownNow[j]!,
+      sharedNow: result.sharedNow[j]!,
+      centre: result.centres[j]!.at(-1)!,
+      ...(runnerMatch === undefined ? {} : { runner: runnerMatch }),
+    };
+  });
+  return result.shared === undefined ? { members: out } : { members: out, shared: result.shared };
+}
+
+interface Frame {
+  candidate: Candidate;
+  rows: number[];
+  levels: number[];
+  since?: MemberMoves['since'];
+}
+
+/** The rows of a group, newest `window` first chosen, returned ascending; with the runner preference. */
+function groupRows(
+  members: readonly Candidate[],
+  history: History,
+  runner: string | undefined,
+): { rows: number[]; runnerMatch?: 'same' | 'other' | 'mixed' } {
+  const window = Math.max(...members.map((c) => c.settings.window));
+  const need = Math.max(...members.map((c) => c.settings.minRuns));
+  const eligible: number[] = [];
+  for (let i = Math.min(history.runs.length, ...members.map((c) => c.values.length)) - 1; i >= 0; i--) {
+    if (members.some((c) => Number.isFinite(c.values[i]!))) eligible.push(i);
+  }
+  const timed = members.some((c) => c.timing);
+  if (runner === undefined || !timed) return { rows: eligible.slice(0, window).reverse() };
+  const same = eligible.filter((i) => history.runs[i]!.runner === runner);
+  if (same.length >= need) return { rows: same.slice(0, window).reverse(), runnerMatch: 'same' };
+  const rows = eligible.slice(0, window).reverse();
+  const some = rows.some((i) => history.runs[i]!.runner === runner);
+  return { rows, runnerMatch: some ? 'mixed' : 'other' };
+}
+
+/** A member's own rows (its newest `window` values among the group's rows) and its marked levels. */
+function memberFrame(c: Candidate, groupRows: readonly number[], history: History): Frame {
+  const held = groupRows.filter((i) => Number.isFinite(c.values[i]!));
+  const rows = held.slice(Math.max(0, held.length - c.settings.window));
+  const frame: Frame = { candidate: c, rows, levels: [0] };
+  const mark = c.mark;
+  if (mark !== undefined && rows.length > 0 && mark.index > rows[0]!) {
+    frame.levels.push(mark.index);
+    frame.since = {
+      index: mark.index,
+      run: history.runs[mark.index]!.id,
+      reason: mark.reason,
+      ...(mark.pr === undefined ? {} : { pr: mark.pr }),
+    };
+  }
+  return frame;
+}
+
+/** The frame with a lasting change of its own moves as a new level, or the frame itself. */
+function withLastingChange(frame: Frame, own: readonly number[], history: History): Frame {
+  const { settings } = frame.candidate;
+  if (!settings.changePoints) return frame;
+  const from = frame.levels.at(-1)!;
+  const at = frame.rows.findIndex((i) => i >= from);
+  const series: number[] = [];
+  const runs: number[] = [];
+  for (let k = Math.max(0, at); k < frame.rows.length; k++) {
+    if (!Number.isFinite(own[k]!)) continue;
+    series.push(own[k]!);
+    runs.push(frame.rows[k]!);
+  }
+  const start = lastingStart(series, Math.max(settings.minRuns, LASTING_RUNS));
+  if (start === undefined) return frame;
+  const index = runs[start]!;
+  return {
+    ...frame,
+    levels: [...frame.levels, index],
+    since: { index, run: history.runs[index]!.id, reason: 'change' },
+  };
+}
+
+interface Polished {
+  /** Per member: the centre of each level (fit scale). */
+  centres: number[][];
+  own: number[][];
+  ownNow: number[];
+  sharedNow: number[];
+  shared?: GroupMoves;
+}
+
+/** Rounds of the median polish: the centres settle in two (Tukey's usual stopping point is a few). */
+const POLISH_ROUNDS = 2;
+
+function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
+  const n = group.members.length;
+  // Plain level centres first: the medians of each level's values.
+  const centres = frames.map((f) =>
+    f.levels.map((start, k) => {
+      const end = f.levels[k + 1] ?? Infinity;
+      const inLevel = f.rows.filter((i) => i >= start && i < end).map((i) => f.candidate.values[i]!);
+      return inLevel.length > 0 ? median(inLevel) : Number.NaN;
+    }),
+  );
+  // Fill a level without runs (a mark on the newest run) from the level before: it is learning anyway.
+  for (const c of centres) for (let k = 1; k < c.length; k++) if (!Number.isFinite(c[k]!)) c[k] = c[k - 1]!;
+  const rowIndex = [...new Set(frames.flatMap((f) => f.rows))].sort((a, b) => a - b);
+  const held = frames.map((f) => new Set(f.rows));
+  const dev = (j: number, i: number): number => {
+    const f = frames[j]!;
+    const x = f.candidate.values[i]!;
+    if (!Number.isFinite(x) || !held[j]!.has(i)) return Number.NaN;
+    return deviation(f.candidate, x, centres[j]![levelOf(f.levels, i)]!);
+  };
+  const devNow = (j: number): number => {
+    const f = frames[j]!;
+    return deviation(f.candidate, f.candidate.current, centres[j]!.at(-1)!);
+  };
+  if (group.kind === 'alone') {
+    return {
+      centres,
+      own: frames.map((f, j) => f.rows.map((i) => dev(j, i))),
+      ownNow: frames.map((_, j) => devNow(j)),
+      sharedNow: frames.map(() => 0),
+    };
+  }
+  if (group.kind === 'reference') {
+    const r = frames.length - 1;
+    const refDev = (i: number): number => dev(r, i) * frames[r]!.candidate.sign;
+    const refNow = devNow(r) * frames[r]!.candidate.sign;
+    return {
+      centres,
+      // The reference itself comes last, with its plain deviations (for its lasting-change check).
+      own: [
+        ...frames.slice(0, n).map((f, j) => f.rows.map((i) => dev(j, i) - f.candidate.sign * refDev(i))),
+        frames[r]!.rows.map((i) => dev(r, i)),
+      ],
+      ownNow: frames.slice(0, n).map((f, j) => devNow(j) - f.candidate.sign * refNow),
+      sharedNow: frames.slice(0, n).map((f) => f.candidate.sign * refNow),
+    };
+  }
+  for (let round = 0; round < POLISH_ROUNDS; round++) {
+    const shared = new Map<number, number>();
+    for (const i of rowIndex) {
+      const devs = frames.map((_, j) => dev(j, i)).filter((d) => Number.isFinite(d));
+      if (devs.length > 0) shared.set(i, median(devs));
+    }
+    frames.forEach((f, j) => {
+      f.levels.forEach((start, k) => {
+        const end = f.levels[k + 1] ?? Infinity;
+        const c = centres[j]![k]!;
+        const adjusted = f.rows
+          .filter((i) => i >= start && i < end && shared.has(i))
+          .map((i) => {
+            const s = f.candidate.sign * shared.get(i)!;
+            return f.candidate.values[i]! - (f.candidate.log || c === 0 ? s : s * Math.abs(c));
+          });
+        if (adjusted.length > 0) centres[j]![k] = median(adjusted);
+      });
+    });
+  }
+  const own: number[][] = frames.map((f) => f.rows.map(() => Number.NaN));
+  const position = frames.map((f) => new Map(f.rows.map((i, k) => [i, k] as const)));
+  const history_: number[] = [];
+  for (const i of rowIndex) {
+    const devs = frames.map((_, j) => dev(j, i));
+    const others = medianOfOthers(devs);
+    frames.forEach((f, j) => {
+      const k = position[j]!.get(i);
+      if (k !== undefined) own[j]![k] = devs[j]! - others[j]!;
+    });
+    const present = devs.filter((d) => Number.isFinite(d));
+    if (present.length >= 2) history_.push(median(present));
+  }
+  const nowDevs = frames.map((_, j) => devNow(j));
+  const nowOthers = medianOfOthers(nowDevs);
+  return {
+    centres,
+    own,
+    ownNow: nowDevs.map((d, j) => d - nowOthers[j]!),
+    sharedNow: nowOthers,
+    shared: { group, history: history_, now: median(nowDevs), members: n },
+  };
+}
