@@ -2,6 +2,7 @@ import { existsSync, readdirSync } from 'node:fs';
 import { afterAll, describe, expect, it } from 'vitest';
 import { CORPUS_DIR, corpusScenarios, readCorpus } from './corpus.js';
 import { evaluate, formatTable, type Evaluation, type TableRow } from './evaluate.js';
+import { formatFigures, regimeFigures } from './figures.js';
 import { bimodal, heavyTails, regimes, sharedRunner, simulatedProject, type Scenario } from './simulate.js';
 
 // Issue 13 item 8: the gate measured on simulated noise (and the recorded corpus). The table is
@@ -33,8 +34,20 @@ const SIMULATIONS: readonly (readonly [string, readonly Scenario[]])[] = [
 ];
 
 const rows: TableRow[] = [];
+const corpusRows: TableRow[] = [];
 
 afterAll(() => {
+  if (regimesRecorded.length > 0) {
+    const figures = regimesRecorded.flatMap((r) =>
+      (['cpu', 'wall'] as const).map((source) => regimeFigures(r, source)),
+    );
+    console.log(
+      `\nThe recorded corpus: noise figures over the timings (history and clean runs)\n${formatFigures(figures)}\n`,
+    );
+    console.log(
+      `\nBellgate on the recorded corpus (false alarms per 100 clean runs; share of slowdowns caught)\n${formatTable(corpusRows)}\n`,
+    );
+  }
   console.log(
     `\nBellgate on simulated noise (false alarms per 100 clean runs; share of slowdowns caught)\n${formatTable(rows)}\n`,
   );
@@ -110,20 +123,62 @@ describe('the gate on simulated noise', () => {
   }, 600_000);
 });
 
-// The recorded corpus (test/fixtures/noise/), when it is there: at defaults, at most 3 false alarms
-// per 100 clean runs in every regime and timing source, and slowdowns of at least 1.25 x the
-// reported `detectable` caught at least 80% of the time wherever 10 or more were that large.
-const recorded =
-  existsSync(CORPUS_DIR) && readdirSync(CORPUS_DIR).some((f) => f.endsWith('.jsonl'))
-    ? corpusScenarios(readCorpus())
-    : [];
-describe.skipIf(recorded.length === 0)('the gate on the recorded corpus, at defaults', () => {
+// The recorded corpus (test/fixtures/noise/, README there), when it is there: each load regime by
+// CPU and wall time, and two harder cases printed beside them: history from one regime and test
+// runs from another (the load moved between the baseline and the pull request), and a baseline
+// that mixes the regimes. At defaults, every regime and source: at most 3 false alarms per 100
+// clean runs, and slowdowns of at least 1.25 x the reported `detectable` caught at least 80% of the
+// time wherever 10 or more were that large.
+const regimesRecorded =
+  existsSync(CORPUS_DIR) && readdirSync(CORPUS_DIR).some((f) => f.endsWith('.jsonl')) ? readCorpus() : [];
+const recorded = corpusScenarios(regimesRecorded);
+/** Each regime by CPU time: enough for the checks that only need a gate made blind or absurd. */
+const regimesByCpu = recorded.filter((s) => s.params.regime !== undefined && s.params.source === 'cpu');
+describe.skipIf(recorded.length === 0)('the gate on the recorded corpus', () => {
+  it('holds every load regime with 60 history, 100 clean and 60 slowed runs, as recorded', () => {
+    expect(regimesRecorded.map((r) => r.name)).toEqual(expect.arrayContaining(['quiet', 'loaded']));
+    for (const r of regimesRecorded) {
+      const kinds = (kind: string) => r.runs.filter((x) => x.kind === kind).length;
+      expect([kinds('history'), kinds('clean'), kinds('slowed')]).toEqual([60, 100, 60]);
+      // the workload's byte counts come from seeded data: one value each in every run; the
+      // memory peak is the one size that varies
+      r.header.sizes.forEach((size, j) => {
+        const distinct = new Set(r.runs.map((x) => x.sizes[j])).size;
+        if (size.unit === 'B') expect(distinct, size.name).toBe(1);
+        else expect(distinct, size.name).toBeGreaterThan(1);
+      });
+      // a slowed run names a timing of the header, with one of the planned factors
+      for (const x of r.runs.filter((x) => x.kind === 'slowed')) {
+        expect(r.header.timings).toContain(x.metric);
+        expect(r.header.plan.factors).toContain(x.factor);
+      }
+    }
+  });
+
   for (const scenario of recorded)
-    it(`${scenario.name}: <= 3 false alarms per 100 clean runs; detectable honest`, async () => {
-      const result = await evaluate('', scenario);
-      rows.push({ scenario: `corpus: ${scenario.name}`, setting: 'defaults', result });
-      countsAddUp(result, [scenario]);
-      expect(result.falseAlarmsPer100).toBeLessThanOrEqual(3);
-      if (result.detectableCheck.eligible >= 10) expect(result.detectableCheck.share).toBeGreaterThanOrEqual(0.8);
-    }, 600_000);
+    for (const [setting, yaml] of SETTINGS) {
+      const target = setting === 'defaults' && scenario.params.regime !== undefined;
+      it(`${scenario.name}, ${setting}: counts add up${target ? '; <= 3 false alarms per 100 clean runs; detectable honest' : ''}`, async () => {
+        const result = await evaluate(yaml, scenario);
+        corpusRows.push({ scenario: scenario.name, setting, result });
+        countsAddUp(result, [scenario]);
+        if (!target) return;
+        expect(result.falseAlarmsPer100).toBeLessThanOrEqual(3);
+        if (result.detectableCheck.eligible >= 10) expect(result.detectableCheck.share).toBeGreaterThanOrEqual(0.8);
+      }, 600_000);
+    }
+
+  it('a cutoff of 1e-300 (family none) never alarms and never catches (only timings are slowed, and they all vary)', async () => {
+    const result = await evaluate('family: none\ndefaults:\n  cutoff: 1e-300\n', regimesByCpu);
+    expect(result.falseAlarms).toBe(0);
+    expect(result.caught).toBe(0);
+  }, 600_000);
+
+  it('an absurdly loose gate (family none, cutoff 0.999, no tolerance, both sides worse) alarms on most clean runs', async () => {
+    const result = await evaluate(
+      'family: none\ndefaults:\n  cutoff: 0.999\n  tolerance: 0\n  worse: both\n  change-points: false\n',
+      regimesByCpu,
+    );
+    expect(result.falseAlarmsPer100).toBeGreaterThan(80);
+  }, 600_000);
 });

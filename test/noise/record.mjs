@@ -4,7 +4,7 @@
  * processes under one load regime and appends one compact JSON line per run to
  * test/fixtures/noise/<regime>.jsonl (format: test/fixtures/noise/README.md).
  *
- *   node test/noise/record.mjs --regime quiet|loaded|blocks [--history 60] [--clean 100] [--slowed 60]
+ *   node test/noise/record.mjs --regime idle|quiet|loaded|blocks [--history 60] [--clean 100] [--slowed 60]
  *                              [--samples 5] [--seed N] [--out DIR]
  *
  * The plan of a regime is fixed by its seed: first the history runs, then the clean runs and the
@@ -26,6 +26,7 @@ const HERE = dirname(fileURLToPath(import.meta.url));
 const ROOT = join(HERE, '..', '..');
 const REGIMES = {
   quiet: 'no load of ours; other processes on the shared machine still run (see loadavg)',
+  idle: 'no load of ours, recorded while no other development session was running on the machine',
   loaded:
     'one busy process (test/noise/burn.mjs: sorting, hashing, string building) on one of the two cores for every run',
   blocks: "the loaded regime's busy process, on for blocks of 4-12 runs and off for blocks of 4-12 runs (seeded)",
