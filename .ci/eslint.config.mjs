@@ -6,13 +6,7 @@ import tseslint from 'typescript-eslint';
 
 export default tseslint.config(
   {
-    ignores: [
-      'dist/**',
-      'node_modules/**',
-      'src/config/schema-validator.generated.js',
-      'test/artifacts/**',
-      '**/*.d.ts',
-    ],
+    ignores: ['dist/**', 'node_modules/**', 'test/artifacts/**', '**/*.d.ts'],
   },
   js.configs.recommended,
   ...tseslint.configs.recommended,

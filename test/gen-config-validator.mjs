@@ -1,10 +1,9 @@
 // Writes src/config/schema-validator.generated.js: the config schema's validator, generated ahead
-// of time by ajv's standalone code generation, so no run of Bellgate compiles the schema (about
-// 40 ms and 275 KB of ajv at every start). Same options as a run-time compile would use: allErrors
-// (every problem is reported), verbose (errors carry their schema node, which the wording reads),
-// strict (unknown keywords in our own schema are refused here, at generation), and inlineRefs off:
-// each of the schema's definitions (settings, rule, group, limits) becomes a function of its own,
-// which V8 compiles only when a config holds that part (a one-key config compiles ~5 of 52 KB).
+// of time by ajv's standalone code generation, so no run of Bellgate compiles the schema (the
+// largest part of a PR check's time otherwise; DEVELOPERS.md "Decisions"). Same options as a
+// run-time compile would use: allErrors (every problem is reported), verbose (errors carry their
+// schema node, which the wording reads) and strict (unknown keywords in our own schema are refused
+// here, at generation).
 //
 // Usage: node test/gen-config-validator.mjs [OUTFILE]    (npm run gen:config-validator)
 // Default OUTFILE: src/config/schema-validator.generated.js. test/config/validator-fresh.test.ts
@@ -29,7 +28,6 @@ const ajv = new Ajv({
   allErrors: true,
   verbose: true,
   strict: true,
-  inlineRefs: false,
   code: { source: true, esm: true, lines: true },
 });
 const validate = ajv.compile(schema);
@@ -44,7 +42,7 @@ code = code.replace(/require\("ajv\/dist\/runtime\/([\w-]+)"\)\.default/g, (_who
 if (/\brequire\(/.test(code)) throw new Error('gen-config-validator: the generated code still calls require()');
 
 const header = `// GENERATED FILE, do not edit. The validator of src/config/bellgate.schema.json, written by ajv
-// standalone code generation (options: allErrors, verbose, strict, inlineRefs: false).
+// standalone code generation (options: allErrors, verbose, strict).
 // Regenerate after changing the schema: npm run gen:config-validator
 // (= node test/gen-config-validator.mjs); test/config/validator-fresh.test.ts fails while it is stale.
 /* eslint-disable */

@@ -9,7 +9,7 @@ import { withExactPlace } from '../inputs/exact-place.js';
 import { alignRunUnits } from '../inputs/units.js';
 import type { CommandContext } from './context.js';
 import { EXIT } from './exit-codes.js';
-import { loadConfig } from './load-config.js';
+import { loadConfig } from '../config/load.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
 import { runsToRead } from '../history/read-window.js';
 import { openHistory } from './open-history.js';
@@ -51,7 +51,7 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
       fix: 'name the history file to append this run to',
     });
   }
-  const config = await loadConfig(ctx, options.config);
+  const config = await loadConfig(options.config, ctx.io.cwd);
   const read = await loadRun(ctx, config, options);
   // Read after the config and metric files, so their problems are reported first; only the
   // newest runs the gate can use are read (from the end of the file).

@@ -1,5 +1,5 @@
 /**
- * The exit codes of `bellgate` (DESIGN.md "Vocabulary"). CI scripts branch on them, so they are
+ * The exit codes of `bellgate` (README "Exit codes"). CI scripts branch on them, so they are
  * part of the product: never renumber.
  */
 export const EXIT = {

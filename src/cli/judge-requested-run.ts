@@ -6,7 +6,7 @@ import type { Run } from '../inputs/run.js';
 import { withExactPlace } from '../inputs/exact-place.js';
 import { alignRunUnits } from '../inputs/units.js';
 import type { CommandContext } from './context.js';
-import { loadConfig } from './load-config.js';
+import { loadConfig } from '../config/load.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
 import { openHistory } from './open-history.js';
 import { splitNewest } from './split-newest.js';
@@ -27,7 +27,7 @@ export async function judgeRequestedRun(
   ctx: CommandContext,
   options: RequestedRunOptions,
 ): Promise<{ config: Config; history: History; run: Run; report: Report }> {
-  const config = await loadConfig(ctx, options.config);
+  const config = await loadConfig(options.config, ctx.io.cwd);
   const opened = await openHistory(ctx, options.history, options.series);
   const metrics = options.metrics;
   const { history, run } =

@@ -1,48 +1,46 @@
-import { readFile, stat } from 'node:fs/promises';
 import { InputError } from '../errors/input-error.js';
+import { readUserFile } from '../files/read-user-file.js';
+import type { CommandContext } from './context.js';
 
-/** Files the CLI reads whole (history, import runs) are refused above this size (256 MiB). */
+/** Files the CLI reads whole for a flag (history, past runs, labels) are refused above this size (256 MiB). */
 export const MAX_TEXT_BYTES = 256 * 1024 * 1024;
 
 /**
- * Reads a whole UTF-8 text file the user named, with errors that say which flag and file.
- * @throws InputError when the file is missing, a folder, unreadable or too large.
+ * The whole UTF-8 text of the file a flag names, read by readUserFile (a regular file, at most
+ * MAX_TEXT_BYTES); `confined` for files the repository's content chooses (labels, config), so a
+ * symbolic link there cannot lead out of the working folder or into .git.
+ * @throws InputError when the file is missing or refused, naming the flag and the path as given.
+ * @example await readFlagFile(ctx, '--labels', 'known.yml', true)
  */
-export async function readUserText(path: string, flag: string): Promise<string> {
-  let size: number;
-  try {
-    const info = await stat(path);
-    if (info.isDirectory())
-      throw new InputError(`${flag} ${path} is a folder, not a file`, { where: path, fix: `name a file with ${flag}` });
-    size = info.size;
-  } catch (error) {
-    if (error instanceof InputError) throw error;
-    throw new InputError(`cannot read ${flag} ${path}: ${reason(error)}`, {
-      where: path,
-      fix: `check the path given to ${flag}`,
-      cause: error,
-    });
+export async function readFlagFile(
+  ctx: CommandContext,
+  flag: string,
+  path: string,
+  confined: boolean,
+): Promise<string> {
+  const text = await readFlagFileIfAny(ctx, flag, path, confined);
+  if (text === undefined) {
+    throw new InputError(`${flag} ${path} does not exist`, { where: path, fix: `check the path given to ${flag}` });
   }
-  if (size > MAX_TEXT_BYTES) {
-    throw new InputError(`${flag} ${path} is ${size} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
-      where: path,
-      fix: 'split the file, or trim old runs first',
-    });
-  }
-  try {
-    return await readFile(path, 'utf8');
-  } catch (error) {
-    throw new InputError(`cannot read ${flag} ${path}: ${reason(error)}`, {
-      where: path,
-      fix: `check the path given to ${flag}`,
-      cause: error,
-    });
-  }
+  return text;
 }
 
-function reason(error: unknown): string {
-  const code = (error as { code?: unknown }).code;
-  if (code === 'ENOENT') return 'no such file';
-  if (code === 'EACCES' || code === 'EPERM') return 'permission denied';
-  return error instanceof Error ? error.message : String(error);
+/** readFlagFile, but undefined when nothing exists at the path. */
+export function readFlagFileIfAny(
+  ctx: CommandContext,
+  flag: string,
+  path: string,
+  confined: boolean,
+): Promise<string | undefined> {
+  return readUserFile(path, {
+    cwd: ctx.io.cwd,
+    what: `${flag} file`,
+    maxBytes: MAX_TEXT_BYTES,
+    tooLarge: (bytes) =>
+      new InputError(`${flag} ${path} is ${bytes} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
+        where: path,
+        fix: 'split the file, or trim old runs first',
+      }),
+    confined,
+  });
 }

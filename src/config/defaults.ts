@@ -1,7 +1,7 @@
 import type { Config, InputLimits, MetricSettings } from './types.js';
 
 /**
- * Settings of a metric that no rule touches (DESIGN.md, "Config file"). A 1% tolerance keeps a
+ * Settings of a metric that no rule touches (README "Configuration"). A 1% tolerance keeps a
  * metric with a tiny spread from failing on a change nobody would act on.
  */
 export const DEFAULT_SETTINGS: Readonly<MetricSettings> = Object.freeze({
@@ -18,11 +18,16 @@ export const DEFAULT_SETTINGS: Readonly<MetricSettings> = Object.freeze({
   sharedMove: true,
 } satisfies MetricSettings);
 
-/** Limits that fit ordinary CI output: 64 MiB files, 1 MiB lines, 100,000 metrics a run. */
+/**
+ * Limits that fit ordinary CI output: 64 MiB files, 1 MiB lines, 100,000 metrics and 250,000
+ * samples a run (a sample is one value of a metric, before repeated values are aggregated). The
+ * sample cap bounds the memory and time a hostile file can take: readers hold every sample.
+ */
 export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({
   maxFileBytes: 64 * 1024 * 1024,
   maxLineLength: 1024 * 1024,
   maxMetrics: 100_000,
+  maxSamples: 250_000,
 });
 
 /** The chance of any false alarm in a run that family control holds to by default (DESIGN.md). */

@@ -1,4 +1,4 @@
-import { matcherFor } from './name-matchers.js';
+import { compileGlobs } from './glob-matcher.js';
 import type { Config, GroupSpec, MetricSettings } from './types.js';
 
 /**
@@ -7,14 +7,12 @@ import type { Config, GroupSpec, MetricSettings } from './types.js';
  * Globs are picomatch globs over the whole name; `*` does not cross '/', `**` does; a glob starting
  * with '!' excludes (see compileGlobs). A metric is never relative to itself: when the resolved
  * `relative-to` names the metric (the calibration benchmark matched by its own rule), it is dropped.
- * The matchers were compiled when the config was read (name-matchers.ts), so no glob library is
- * loaded here.
  * @example settingsFor(config, 'throughput/home').worse // 'lower' with the rule { match: 'throughput/*', worse: lower }
  */
 export function settingsFor(config: Config, metric: string): MetricSettings {
   const settings: MetricSettings = { ...config.defaults };
   for (const rule of config.rules) {
-    if (matcherFor(rule.match)(metric)) Object.assign(settings, rule.settings);
+    if (compileGlobs(rule.match)(metric)) Object.assign(settings, rule.settings);
   }
   if (settings.relativeTo === metric) delete settings.relativeTo;
   return settings;
@@ -25,5 +23,5 @@ export function settingsFor(config: Config, metric: string): MetricSettings {
  * @example groupFor(config, 'latency/render')?.name // 'latency' with the group { name: latency, match: 'latency/*' }
  */
 export function groupFor(config: Config, metric: string): GroupSpec | undefined {
-  return config.groups.find((group) => matcherFor(group.match)(metric));
+  return config.groups.find((group) => compileGlobs(group.match)(metric));
 }

@@ -1,5 +1,5 @@
 import { defaultConfig } from './defaults.js';
-import type { GlobCompiler } from './name-matchers.js';
+import { compileGlobs, isLiteralGlob } from './glob-matcher.js';
 import type { ConfigProblem } from './problems.js';
 import { parseTolerance } from './tolerance.js';
 import type { Config, Family, GroupSpec, MetricRule, MetricSettings } from './types.js';
@@ -40,16 +40,13 @@ export function globList(value: unknown): string[] {
 /**
  * Builds the Config from schema-valid plain data, and checks what the schema cannot: globs that
  * do not compile, a `relative-to` naming its own rule's metric, group names used twice, and
- * window or keep too small for min-runs (such metrics could never leave learning). Each rule's and
- * group's globs are compiled here with `globs` (picomatch, or string comparison when every glob is
- * a plain name), which files the matchers for settingsFor and groupFor.
- * @example toConfig({ defaults: { tolerance: '2%' } }, tree, 'bellgate.yml', picomatchCompiler).config.defaults.tolerance // { kind: 'percent', amount: 0.02 }
+ * window or keep too small for min-runs (such metrics could never leave learning).
+ * @example toConfig({ defaults: { tolerance: '2%' } }, tree, 'bellgate.yml').config.defaults.tolerance // { kind: 'percent', amount: 0.02 }
  */
 export function toConfig(
   value: unknown,
   tree: YamlTree,
   source: string,
-  globs: GlobCompiler,
 ): { config: Config; problems: ConfigProblem[] } {
   const config = defaultConfig();
   config.source = source;
@@ -72,10 +69,11 @@ export function toConfig(
   if (limits['max-file-bytes'] !== undefined) config.limits.maxFileBytes = limits['max-file-bytes'] as number;
   if (limits['max-line-length'] !== undefined) config.limits.maxLineLength = limits['max-line-length'] as number;
   if (limits['max-metrics'] !== undefined) config.limits.maxMetrics = limits['max-metrics'] as number;
+  if (limits['max-samples'] !== undefined) config.limits.maxSamples = limits['max-samples'] as number;
 
   const checkGlobs = (list: string[], pointer: string): void => {
     try {
-      globs.compile(list);
+      compileGlobs(list);
     } catch (err) {
       problems.push({
         ...at(pointer),
@@ -90,12 +88,7 @@ export function toConfig(
     const rule: MetricRule = { match: globList(item.match), settings: settingsOf(item), line: at(pointer).line };
     checkGlobs(rule.match, `${pointer}/match`);
     const target = rule.settings.relativeTo;
-    if (
-      target !== undefined &&
-      rule.match.length === 1 &&
-      globs.isLiteral(rule.match[0]!) &&
-      rule.match[0] === target
-    ) {
+    if (target !== undefined && rule.match.length === 1 && isLiteralGlob(rule.match[0]!) && rule.match[0] === target) {
       problems.push({
         ...at(`${pointer}/relative-to`),
         message: `relative-to names the rule's own metric "${target}"; it would be divided by itself`,

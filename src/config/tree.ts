@@ -6,9 +6,7 @@ export interface Position {
 
 /**
  * A YAML document as plain data (null-prototype objects), with where each value and key was written.
- * Built by readYamlTree (yaml-tree.ts, the YAML library) or, for plain configs, readPlainYaml
- * (plain-yaml.ts); this module imports neither, so the schema and Config steps can use the type
- * without loading the library.
+ * Built by readYamlTree (yaml-tree.ts).
  */
 export interface YamlTree {
   /** undefined when the document is empty or only comments. */

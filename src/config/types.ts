@@ -48,6 +48,7 @@ export interface InputLimits {
   maxFileBytes: number;
   maxLineLength: number;
   maxMetrics: number;
+  maxSamples: number;
 }
 
 export interface Config {

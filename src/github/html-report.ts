@@ -1,9 +1,18 @@
 import { join } from 'node:path';
 import type { Report } from '../gate/report.js';
+import type { ArtifactUploader } from '../history/artifact-store.js';
 import type { History } from '../history/history.js';
 import type { RunContext } from './context.js';
 import { describeError } from './describe-error.js';
-import type { ActionDeps } from './run-action.js';
+import type { ActionSink } from './sink.js';
+
+/** What the HTML step needs of the action's collaborators (ActionDeps has them all). */
+export interface HtmlReportDeps {
+  sink: ActionSink;
+  now(): Date;
+  writeText(path: string, text: string): Promise<void>;
+  upload: ArtifactUploader;
+}
 
 /**
  * The HTML report is extra: written beside the JSON report and uploaded as its own artifact;
@@ -11,7 +20,7 @@ import type { ActionDeps } from './run-action.js';
  * @example await uploadHtml(deps, context, 'ci', report, history, 90)
  */
 export async function uploadHtml(
-  deps: ActionDeps,
+  deps: HtmlReportDeps,
   context: RunContext,
   series: string,
   report: Report,

@@ -2,8 +2,7 @@
  * The real collaborators of runAction: the runner's environment and inputs (@actions/core), the
  * file system, the clock, and the lazily loaded GitHub client and artifact uploader.
  */
-import { mkdirSync, writeFileSync } from 'node:fs';
-import { readFile } from 'node:fs/promises';
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { dirname } from 'node:path';
 import { createArtifactUploader } from '../history/artifact-upload.js';
 import type { ActionDeps } from './run-action.js';
@@ -20,11 +19,9 @@ export function createRealDeps(env: Record<string, string | undefined> = process
     sink: createCoreSink(),
     getInput: (name) => core.getInput(name),
     readText: (path) => readFile(path, 'utf8'),
-    // Synchronous: the report is written when the run has nothing left to overlap with, and an
-    // await there gives the event loop a turn in which V8's queued tasks run (~5 ms measured).
     writeText: async (path, text) => {
-      mkdirSync(dirname(path), { recursive: true });
-      writeFileSync(path, text, 'utf8');
+      await mkdir(dirname(path), { recursive: true });
+      await writeFile(path, text, 'utf8');
     },
     now: () => new Date(),
     // Loaded on first use: a PR check with the file store and `comment: never` never calls the API.

@@ -6,8 +6,8 @@ import { seriesSlug } from '../history/series-slug.js';
  * RUNNER_TEMP, `bellgate/report-<slug>-<8 hex>.json`. The slug keeps the name readable; the hash
  * keeps series whose slugs coincide ("bench/linux", "bench linux") apart.
  *
- * The hash is FNV-1a (32 bit, over the UTF-8 bytes), not SHA-256 as in artifact names: this file
- * only lives for the job, and node:crypto would add ~3 ms to every PR check's start-up.
+ * The hash is FNV-1a (32 bit, over the UTF-8 bytes): the file only lives for the job, so a short
+ * non-cryptographic hash is enough to tell the series apart.
  * @example reportPath('/tmp/runner', 'bench/linux') // '/tmp/runner/bellgate/report-bench-linux-<8 hex>.json'
  */
 export function reportPath(runnerTemp: string, series: string): string {

@@ -19,6 +19,7 @@
  * Whenever the history was not used or the run not recorded, the summary, the PR comment and the
  * job log open with a line that says so and why. Nothing prints a stack trace or the token.
  */
+import { loadConfig } from '../config/load.js';
 import { settingsFor } from '../config/rules.js';
 import { runGate } from '../gate/gate.js';
 import { mostlyMissing } from '../gate/missing-metrics.js';
@@ -40,7 +41,6 @@ import { annotate } from './annotations.js';
 import type { GitHubApi, GitHubApiFactory, RetryTuning } from './api.js';
 import { readRunContext } from './context.js';
 import { describeError } from './describe-error.js';
-import { loadActionConfig } from './load-config.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
 import { loadHistory, recordRun, runInfo } from './history-step.js';
 import { uploadHtml } from './html-report.js';
@@ -100,7 +100,7 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (inputs.token !== '') sink.setSecret(inputs.token);
   const context = await readRunContext(deps.env, deps.readText);
   // A missing file at the default path means default settings; a missing named file is an error.
-  const config = await loadActionConfig(inputs.config, deps.cwd);
+  const config = await loadConfig(inputs.config, deps.cwd);
   const read = await readMetricFiles(inputs.metrics, {
     ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
     limits: config.limits,

@@ -1,7 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import path from 'node:path';
 import { InputError } from '../errors/input-error.js';
-import { whereInJson } from './json-text.js';
+import { whereInJson } from './json-where.js';
 
 /**
  * The JSON reader stores a cheap place with each reading, `file (metrics[3])` or `file (name)`,

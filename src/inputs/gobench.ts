@@ -1,5 +1,5 @@
 import type { InputLimits } from '../config/types.js';
-import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { checkLineLengths, DEFAULT_LIMITS, eachLine, samplesError } from './limits.js';
 import { parseDecimal } from './numbers.js';
 import { ReadingSink } from './reading-sink.js';
 import type { ReadResult } from './run.js';
@@ -40,8 +40,9 @@ export function readGoBench(text: string, file: string, limits: InputLimits = DE
   const sink = new ReadingSink(file, limits);
   const config = new Map<string, string[]>();
   const results: ResultLine[] = [];
-  text.split('\n').forEach((line, i) => {
-    const where = `${file}:${i + 1}`;
+  let samples = 0;
+  eachLine(text, (line, number) => {
+    const where = `${file}:${number}`;
     const setting = CONFIG_LINE.exec(line);
     if (setting) {
       const values = config.get(setting[1]!) ?? [];
@@ -51,7 +52,11 @@ export function readGoBench(text: string, file: string, limits: InputLimits = DE
       return;
     }
     const result = parseResultLine(line, where);
-    if (result) results.push(result);
+    if (!result) return;
+    // Results are held until the file's processor counts are known: count their samples now.
+    samples += result.pairs.length;
+    if (samples > limits.maxSamples) throw samplesError(file, limits.maxSamples, where);
+    results.push(result);
   });
   const procs = [...new Set(results.map((r) => r.procs).filter((p): p is string => p !== undefined))];
   for (const { name, procs: n, pairs, where } of results) {

@@ -1,13 +1,14 @@
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
 import { isRecord, readEntry, readNumbers, describeJson } from './json-entry.js';
-import { parseJsonText, whereInJson } from './json-text.js';
+import { parseJsonText } from '../errors/json-text.js';
+import { whereInJson } from './json-where.js';
 import { DEFAULT_LIMITS } from './limits.js';
 import { ReadingSink } from './reading-sink.js';
 import type { ReadResult } from './run.js';
 
 /**
- * Reads Bellgate's own metric file (DESIGN "Metric file"), in either form:
+ * Reads Bellgate's own metric file (README "Metric files"), in either form:
  * - list form `{"metrics": [{"name", "value", "unit"?} | {"name", "samples": [...], "unit"?}]}`;
  *   a name may appear once per file (repeat measurements go in `samples`);
  * - flat form `{"name": 412.5, "other": [1, 2]}` (a number, or an array of samples; no units).

@@ -1,7 +1,7 @@
 import type { InputLimits } from '../config/types.js';
 import { readEntry } from './json-entry.js';
-import { parseJsonText } from './json-text.js';
-import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { parseJsonText } from '../errors/json-text.js';
+import { checkLineLengths, DEFAULT_LIMITS, eachLine } from './limits.js';
 import { ReadingSink } from './reading-sink.js';
 import type { ReadResult } from './run.js';
 
@@ -16,11 +16,10 @@ import type { ReadResult } from './run.js';
 export function readJsonLines(text: string, file: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
   checkLineLengths(text, file, limits);
   const sink = new ReadingSink(file, limits);
-  const lines = text.split('\n');
-  lines.forEach((line, i) => {
+  eachLine(text, (line, number) => {
     if (line.trim() === '') return;
-    const place = `${file}:${i + 1}`;
-    const entry = parseJsonText(line, file, i + 1);
+    const place = `${file}:${number}`;
+    const entry = parseJsonText(line, file, number);
     readEntry(entry, sink, place, () => place);
   });
   return sink.result;

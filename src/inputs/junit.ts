@@ -1,7 +1,7 @@
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
-import { DEFAULT_LIMITS } from './limits.js';
+import { DEFAULT_LIMITS, limitError } from './limits.js';
 import { parseDecimal } from './numbers.js';
 import { ReadingSink } from './reading-sink.js';
 import type { ReadResult } from './run.js';
@@ -25,11 +25,17 @@ const parser = new XMLParser({
  * - Skipped, failed and erroring cases, and cases without a `time`, go to `notFitted` with the
  *   reason instead: their times say nothing about speed.
  * - A name that repeats (retries, several files) gives several samples of one metric.
+ * - The document is parsed whole, so its `<testcase>` and `<testsuite>` elements are counted first
+ *   and a file with more than `limits.max-samples` of them is refused before parsing.
  * @throws InputError with file:line:col for malformed XML, and with the element path
  *   (`file:/testsuites/testsuite[2]/testcase[5]`) for a missing name or a time that is not a number.
  * @example readJunit('<testsuite name="s" time="2"><testcase name="t" time="1"/></testsuite>', 'j.xml').readings.map((r) => r.name) // ['s', 's/t']
  */
 export function readJunit(text: string, file: string, limits: InputLimits = DEFAULT_LIMITS): ReadResult {
+  if (countElements(text) > limits.maxSamples) {
+    const what = `${file} has more than ${limits.maxSamples} test cases and suites`;
+    throw limitError('maxSamples', limits.maxSamples, file, what);
+  }
   const checked = XMLValidator.validate(text);
   if (checked !== true) {
     const { msg, line, col } = checked.err;
@@ -66,6 +72,15 @@ export function readJunit(text: string, file: string, limits: InputLimits = DEFA
     });
   }
   return sink.result;
+}
+
+/** How many `<testcase` and `<testsuite` openings (not `<testsuites`) the text has: one linear scan. */
+function countElements(text: string): number {
+  let count = 0;
+  for (let at = text.indexOf('<test'); at >= 0; at = text.indexOf('<test', at + 5)) {
+    if (text.startsWith('case', at + 5) || (text.startsWith('suite', at + 5) && text[at + 10] !== 's')) count++;
+  }
+  return count;
 }
 
 function readSuites(parent: Element, path: string, suitePath: string[], sink: ReadingSink): void {

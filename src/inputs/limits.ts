@@ -1,18 +1,16 @@
+import { DEFAULT_LIMITS } from '../config/defaults.js';
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
 
-/** Limits used when the config gives none: 64 MiB per file, 1 MiB per line, 100000 metrics. */
-export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({
-  maxFileBytes: 64 * 1024 * 1024,
-  maxLineLength: 1024 * 1024,
-  maxMetrics: 100_000,
-});
+/** Limits used when the config gives none (config/defaults.ts). */
+export { DEFAULT_LIMITS };
 
 /** The config key that raises each limit, for refusal messages. */
 export const LIMIT_KEYS: Readonly<Record<keyof InputLimits, string>> = Object.freeze({
   maxFileBytes: 'limits.max-file-bytes',
   maxLineLength: 'limits.max-line-length',
   maxMetrics: 'limits.max-metrics',
+  maxSamples: 'limits.max-samples',
 });
 
 /**
@@ -24,6 +22,29 @@ export function limitError(limit: keyof InputLimits, value: number, where: strin
     where,
     fix: `raise ${LIMIT_KEYS[limit]} in the config file if this input is expected`,
   });
+}
+
+/**
+ * The refusal for a file or run past `limits.max-samples`, at the sample that passed it.
+ * @example samplesError('run.csv', 1000, 'run.csv:1002')
+ */
+export function samplesError(file: string, max: number, where: string): InputError {
+  return limitError('maxSamples', max, where, `${file} has more than ${max} samples`);
+}
+
+/**
+ * Calls `each` with every line of the text (without its "\n") and its 1-based number, in order,
+ * without splitting the whole text first, so a reader that throws part-way (at a limit) stops
+ * there instead of holding every line of a large file. The same lines as text.split('\n').
+ * @example eachLine('a\nb', (line, n) => console.log(n, line)) // 1 a, then 2 b
+ */
+export function eachLine(text: string, each: (line: string, number: number) => void): void {
+  for (let start = 0, number = 1; start <= text.length; number++) {
+    const newline = text.indexOf('\n', start);
+    const end = newline < 0 ? text.length : newline;
+    each(text.slice(start, end), number);
+    start = end + 1;
+  }
 }
 
 /**

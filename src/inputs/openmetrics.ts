@@ -1,6 +1,6 @@
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
-import { checkLineLengths, DEFAULT_LIMITS } from './limits.js';
+import { checkLineLengths, DEFAULT_LIMITS, eachLine } from './limits.js';
 import { parseDecimal, truncate } from './numbers.js';
 import { foldLabels } from './openmetrics-labels.js';
 import { parseSampleLine } from './openmetrics-line.js';
@@ -34,9 +34,9 @@ export function readOpenMetrics(text: string, file: string, limits: InputLimits 
   const types = new Map<string, string>();
   const units = new Map<string, string>();
   let ended = false;
-  text.split('\n').forEach((raw, i) => {
+  eachLine(text, (raw, number) => {
     const line = raw.replace(/\r$/, '');
-    const where = `${file}:${i + 1}`;
+    const where = `${file}:${number}`;
     if (line.trim() === '') return;
     if (ended) {
       throw new InputError('text after "# EOF"', { where, fix: 'end the exposition with "# EOF" as its last line' });

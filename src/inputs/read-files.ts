@@ -1,11 +1,13 @@
 import { existsSync } from 'node:fs';
-import { readFile, stat } from 'node:fs/promises';
+import { stat } from 'node:fs/promises';
 import path from 'node:path';
+import { glob } from 'tinyglobby';
 import type { Aggregate, InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
+import { readUserFile } from '../files/read-user-file.js';
 import { collectRun } from './collect.js';
 import { DEFAULT_LIMITS, limitError } from './limits.js';
-import { parseMetricTextLazily } from './parse-lazy.js';
+import { parseMetricText } from './parse.js';
 import { normalizePrefix, prefixed, splitPattern } from './pattern.js';
 import type { ReadResult, Run } from './run.js';
 
@@ -28,15 +30,16 @@ export interface ReadFilesOptions {
  * - A pattern is a path or a glob (tinyglobby: `**`, `*`, `{a,b}`), optionally `pattern => prefix`
  *   (pattern.ts). An existing file path is taken literally even if it holds glob characters.
  *   A pattern that matches no file is an error: a silent empty run would pass every gate.
- * - Each file's size is checked against `limits.maxFileBytes` before it is read; line length and
- *   the number of metrics are checked while parsing, and the total number of metrics after.
+ * - Each file is read by readUserFile: a regular file (not a folder, device or FIFO), at most
+ *   `limits.maxFileBytes`, and, inside the workspace (`cwd`), no symbolic link out of it or into .git.
+ *   Line length, metrics and samples are checked while parsing, the run's totals after each file.
  * - A file matched by two patterns with the same prefix is read once.
  * - Backslashes are path separators, as a Windows runner writes paths: `out\bench\*.json` is
  *   `out/bench/*.json` (a literal `*` in a file name is matched by `[*]`).
  * - A `prefixes` pattern is matched against each file found, not the metrics text: so
  *   `pkgs/{a,b}/bench.json` with `--prefix pkgs/a/*=pkg-a` prefixes only package a's metrics.
- * @throws InputError for no match, a limit passed (naming `limits.max-file-bytes` etc.), a file
- *   that is not UTF-8 text, a file two `prefixes` patterns with different prefixes match, a
+ * @throws InputError for no match, a limit passed (naming `limits.max-file-bytes` etc.), a refused
+ *   file, a file that is not UTF-8 text, a file two `prefixes` patterns with different prefixes match, a
  *   `prefixes` pattern that matches none of the files, or any problem in a file.
  * @example await readMetricFiles(['bench/*.txt'], { limits: DEFAULT_LIMITS, aggregateFor: () => 'median' })
  */
@@ -49,6 +52,7 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
   const done = new Set<string>();
   const results: ReadResult[] = [];
   const prefixFor = await filePrefixes(options.prefixes, cwd);
+  let samples = 0;
   for (const text of patterns) {
     const { pattern, prefix: arrowPrefix } = splitPattern(text);
     for (const file of await expand(pattern, cwd)) {
@@ -57,7 +61,12 @@ export async function readMetricFiles(patterns: string[], options: ReadFilesOpti
       if (done.has(key)) continue;
       done.add(key);
       const shown = path.relative(cwd, file).startsWith('..') ? file : path.relative(cwd, file);
-      const result = await readOne(file, shown, options.format, limits);
+      const result = await readOne(file, shown, options.format, limits, cwd);
+      samples += result.readings.length;
+      if (samples > limits.maxSamples) {
+        const what = `the metric files hold more than ${limits.maxSamples} samples`;
+        throw limitError('maxSamples', limits.maxSamples, shown, what);
+      }
       results.push(prefix === undefined ? result : withPrefix(result, prefix));
     }
   }
@@ -140,14 +149,13 @@ async function expand(given: string, cwd: string): Promise<string[]> {
   const pattern = existsSync(path.resolve(cwd, given)) ? given : slashes(given);
   const literal = path.resolve(cwd, pattern);
   const info = await stat(literal).catch(() => undefined);
-  if (info?.isFile()) return [literal];
   if (info?.isDirectory()) {
     throw new InputError(`${pattern} is a directory`, {
       fix: `name files in it, such as ${path.join(pattern, '*.json')}`,
     });
   }
-  // The glob library (tinyglobby, with picomatch) loads only for a pattern that is not a file.
-  const { glob } = await import('tinyglobby');
+  // Anything else that exists is taken literally; readUserFile refuses what is not a regular file.
+  if (info) return [literal];
   const files = await glob([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
   if (files.length === 0) {
     throw new InputError(`no metric file matches ${JSON.stringify(pattern)} (looked in ${cwd})`, {
@@ -162,25 +170,20 @@ async function readOne(
   shown: string,
   format: string | undefined,
   limits: InputLimits,
+  cwd: string,
 ): Promise<ReadResult> {
-  const info = await stat(file);
-  if (info.size > limits.maxFileBytes) {
-    throw limitError('maxFileBytes', limits.maxFileBytes, shown, `the file is ${info.size} bytes`);
+  const text = await readUserFile(file, {
+    cwd,
+    what: 'metric file',
+    shown,
+    maxBytes: limits.maxFileBytes,
+    tooLarge: (bytes) => limitError('maxFileBytes', limits.maxFileBytes, shown, `the file is ${bytes} bytes`),
+    confined: true,
+  });
+  if (text === undefined) {
+    throw new InputError(`metric file ${shown} disappeared while it was being read`, { where: shown });
   }
-  let text: string;
-  try {
-    text = new TextDecoder('utf-8', { fatal: true }).decode(await readFile(file));
-  } catch (error) {
-    if (error instanceof TypeError) {
-      throw new InputError('the file is not UTF-8 text', {
-        where: shown,
-        fix: 'write metric files as UTF-8',
-        cause: error,
-      });
-    }
-    throw new InputError(`cannot read the file: ${(error as Error).message}`, { where: shown, cause: error });
-  }
-  return parseMetricTextLazily(text, shown, format, limits);
+  return parseMetricText(text, shown, format, limits);
 }
 
 function withPrefix(result: ReadResult, prefix: string): ReadResult {

@@ -1,13 +1,14 @@
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
-import { limitError } from './limits.js';
+import { limitError, samplesError } from './limits.js';
 import { checkMetricName, checkUnit } from './names.js';
 import type { ReadResult } from './run.js';
 
 /**
  * Where every reader puts what it finds, so that the checks every format needs live in one place:
- * the metric name rule (names.ts), finite values, and the `limits.max-metrics` cap on distinct names,
- * enforced while parsing so a huge file is refused before it fills memory.
+ * the metric name rule (names.ts), finite values, and the caps on distinct names
+ * (`limits.max-metrics`) and samples (`limits.max-samples`), enforced while parsing so a huge file
+ * is refused before it fills memory.
  */
 export class ReadingSink {
   readonly result: ReadResult = { readings: [], notFitted: new Map(), meta: new Map() };
@@ -18,8 +19,10 @@ export class ReadingSink {
     private readonly limits: InputLimits,
   ) {}
 
-  /** Adds one sample. @throws InputError for a bad name or unit, a non-finite value or too many metrics. */
+  /** Adds one sample. @throws InputError for a bad name or unit, a non-finite value, too many metrics or samples. */
   add(name: string, value: number, unit: string | undefined, where: string): void {
+    if (this.result.readings.length >= this.limits.maxSamples)
+      throw samplesError(this.file, this.limits.maxSamples, where);
     checkMetricName(name, where);
     if (!Number.isFinite(value)) {
       throw new InputError(`value of ${JSON.stringify(name)} is ${value}, not a finite number`, {

@@ -33,7 +33,7 @@ function baseline(b: BaselineSummary | undefined): Json {
 }
 
 function metric(m: MetricResult, report: Report): Json {
-  // DESIGN.md's fields first and always present (null when not known), then the extras.
+  // The documented fields first and always present (null when not known), then the extras.
   return {
     name: m.name,
     status: m.status,
@@ -92,7 +92,7 @@ function shared(s: SharedMoveResult): Json {
 }
 
 /**
- * The JSON report (`--format json`, the action's `report` output) with DESIGN.md's field names in
+ * The JSON report (`--format json`, the action's `report` output) with the documented field names in
  * a stable order: schema, verdict, series, blocks, family, budget, unsettled, runner, metrics[],
  * shared[] (each group's shared move), then when present notes[] (what the history could not give),
  * missing (baseline metrics absent) and notJudged[]. Non-finite numbers become

@@ -64,7 +64,7 @@ const repeat = positive('repeat', flags.repeat);
 const only = new Set(flags.only.split(','));
 const dist = resolve(flags.dist);
 const cli = join(dist, 'cli', 'index.js');
-const action = join(dist, 'index.cjs');
+const action = join(dist, 'index.js');
 for (const file of [cli, action]) {
   if (!existsSync(file)) {
     console.error(`bench: ${file} is missing; build the bundles first: node test/build-dist.mjs ${dist}`);

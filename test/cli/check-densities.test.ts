@@ -62,7 +62,7 @@ describe('bellgate check --format json on a hand-made history', () => {
     expectClose(metric.baseline.sd, 1.3093073414, 1e-9); // sqrt(12 / 7), by hand
     expectClose(metric.z, 3.0550504633, 1e-9); // 4 / sqrt(12 / 7), by hand
     expectClose(metric.change, 4 / 11, 1e-12); // by hand
-    expect(metric.cutoff).toBe(0.01); // DESIGN default cutoff
+    expect(metric.cutoff).toBe(0.01); // the documented default cutoff
     expect(metric.relativeDensity).toBeGreaterThan(0);
     // eight runs: the predictive t is wider than the Gaussian with these figures plugged in
     expect(metric.relativeDensity).toBeGreaterThan(Math.exp(-0.5 * metric.z * metric.z));

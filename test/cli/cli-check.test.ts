@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { bellgate, handHistory, noStack, steadyFixture } from './helpers/cli-harness.js';
 
-// Exit codes are DESIGN.md's: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
+// Exit codes are README's ("Exit codes"): 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
 // 3 store unreachable. Every failure must be one readable message, never a stack trace.
 const { work, steady, history, calm, slow, config } = steadyFixture();
 afterAll(() => work.remove());
@@ -39,7 +39,7 @@ describe('check', () => {
       verdict: string;
       metrics: Array<{ name: string; status: string }>;
     };
-    expect(parsed.schema).toBe('bellgate.report/1'); // DESIGN.md JSON report
+    expect(parsed.schema).toBe('bellgate.report/1'); // the documented JSON report schema
     expect(parsed.verdict).toBe('regressed');
     expect(parsed.metrics.find((m) => m.name === 'api/latency')?.status).toBe('regressed');
     expect(r.stdout.trim().startsWith('{')).toBe(true);

@@ -2,7 +2,7 @@ import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { bellgate, handHistory, steadyFixture } from './helpers/cli-harness.js';
 
-// Exit codes are DESIGN.md's: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
+// Exit codes are README's ("Exit codes"): 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
 // 3 store unreachable. Every failure must be one readable message, never a stack trace.
 const { work } = steadyFixture();
 afterAll(() => work.remove());

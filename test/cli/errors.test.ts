@@ -6,7 +6,7 @@ import { parsePrefixes } from '../../src/cli/load-run.js';
 import { InputError } from '../../src/errors/input-error.js';
 import { StoreError } from '../../src/history/store.js';
 
-describe('toFailure: one message and DESIGN.md exit code for anything thrown', () => {
+describe('toFailure: one message and the documented exit code for anything thrown', () => {
   it('InputError -> 2 with where and fix', () => {
     const f = toFailure(new InputError('value is not a number', { where: 'bench.json:3:14', fix: 'write a number' }));
     expect(f).toEqual({ code: 2, text: 'bellgate: bench.json:3:14: value is not a number\n  fix: write a number' });

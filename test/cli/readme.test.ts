@@ -19,7 +19,7 @@ describe('README.md', () => {
   it('the cutoff table agrees with the standard normal table', () => {
     // c = 0.01 -> sqrt(-2 ln 0.01) = 3.0349 sigma. Abramowitz and Stegun table 26.1 (from memory):
     // P(Z > 3.03) = 0.00122, P(Z > 3.04) = 0.00118, so about 0.00120 at 3.035 and 0.0024 two-sided
-    // (DESIGN.md quotes 0.0024). The README row must say the same to its three digits.
+    // The README row must say the same to its three digits.
     const row = readme.split('\n').find((l) => l.startsWith('| 0.01 |'));
     const cells = (row ?? '').split('|').map((c) => Number(c.trim()));
     expect(cells[2]).toBeCloseTo(3.035, 3);

@@ -3,14 +3,14 @@ import { describe, expect, it } from 'vitest';
 import { defaultConfig, parseConfig } from '../../src/config/load.js';
 
 // The expected values below are the ones written in each YAML snippet: the check is that every key
-// of DESIGN.md's "Config file" is read into the Config field it names, with YAML 1.2 core-schema
+// of README's "Configuration" is read into the Config field it names, with YAML 1.2 core-schema
 // typing (yaml.org/spec/1.2.2, section 10.3: `.5` and `1e-3` are floats, `true` a boolean).
 describe('parseConfig: accepted keys', () => {
   it('gives the documented defaults for an empty file, only comments, or a null document', () => {
     const fixture = readFileSync(new URL('../fixtures/config/comments-only.yml', import.meta.url), 'utf8');
     for (const text of ['', '\n\n', fixture, '~\n', '---\n...\n']) {
       const config = parseConfig(text, 'bellgate.yml');
-      // Defaults from the task and DESIGN.md's "Config file" section.
+      // Defaults from README's "Configuration" section.
       expect(config.defaults).toEqual({
         cutoff: 0.01,
         worse: 'higher',
@@ -32,6 +32,7 @@ describe('parseConfig: accepted keys', () => {
         maxFileBytes: 64 * 1024 * 1024,
         maxLineLength: 1024 * 1024,
         maxMetrics: 100_000,
+        maxSamples: 250_000,
       });
       expect(config.rules).toEqual([]);
       expect(config.groups).toEqual([]);
@@ -75,7 +76,7 @@ describe('parseConfig: accepted keys', () => {
 
   it('reads every top-level key and every limit', () => {
     const config = parseConfig(
-      'family: fdr\nbudget: 5%\nunsettled: block\nkeep: 250\ninput-format: openmetrics\nlimits:\n  max-file-bytes: 1000\n  max-line-length: 200\n  max-metrics: 30\n',
+      'family: fdr\nbudget: 5%\nunsettled: block\nkeep: 250\ninput-format: openmetrics\nlimits:\n  max-file-bytes: 1000\n  max-line-length: 200\n  max-metrics: 30\n  max-samples: 40\n',
       'c.yml',
     );
     expect(config.family).toBe('fdr');
@@ -83,7 +84,7 @@ describe('parseConfig: accepted keys', () => {
     expect(config.unsettled).toBe('block');
     expect(config.keep).toBe(250);
     expect(config.inputFormat).toBe('openmetrics');
-    expect(config.limits).toEqual({ maxFileBytes: 1000, maxLineLength: 200, maxMetrics: 30 });
+    expect(config.limits).toEqual({ maxFileBytes: 1000, maxLineLength: 200, maxMetrics: 30, maxSamples: 40 });
     for (const family of ['none', 'bonferroni', 'holm', 'fdr'])
       expect(parseConfig(`family: ${family}`, 'c').family).toBe(family);
     for (const format of ['json', 'jsonl', 'csv', 'openmetrics', 'gobench', 'junit']) {

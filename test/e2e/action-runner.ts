@@ -1,5 +1,5 @@
 /**
- * Runs the action bundle the way the runner does: `node dist/index.cjs` with INPUT_* variables
+ * Runs the action bundle the way the runner does: `node dist/index.js` with INPUT_* variables
  * (upper-cased, hyphens kept), GITHUB_* variables, an event payload file, and GITHUB_OUTPUT /
  * GITHUB_STEP_SUMMARY files it appends to. Reads the outputs back in the runner's file format
  * (`name<<DELIMITER` ... `DELIMITER`, GitHub docs "Setting an output parameter").
@@ -9,7 +9,7 @@ import { mkdir, readFile, writeFile } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
 
 export const ROOT = resolve(new URL('../..', import.meta.url).pathname);
-export const BUNDLE = resolve(ROOT, process.env.BELLGATE_ACTION_BUNDLE ?? 'dist/index.cjs');
+export const BUNDLE = resolve(ROOT, process.env.BELLGATE_ACTION_BUNDLE ?? 'dist/index.js');
 
 export interface StepResult {
   code: number;

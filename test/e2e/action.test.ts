@@ -1,8 +1,8 @@
-// The action as the runner runs it: the real bundle (`node dist/index.cjs`, or BELLGATE_ACTION_BUNDLE)
+// The action as the runner runs it: the real bundle (`node dist/index.js`, or BELLGATE_ACTION_BUNDLE)
 // in a child process, against a loopback REST stand-in and a loopback results service whose
 // uploads land in Azurite blob storage, so @actions/artifact uploads for real. The contracts
 // checked are GitHub's (REST reference for artifacts and issue comments, the runner's INPUT_*,
-// GITHUB_OUTPUT and GITHUB_STEP_SUMMARY conventions) and DESIGN.md's. The regressed value is
+// GITHUB_OUTPUT and GITHUB_STEP_SUMMARY conventions) and README's ("Using it in GitHub Actions"). The regressed value is
 // ~20 sd above the baseline: far past the 0.01 cutoff (relative density 0.011 at 3 sd,
 // standard normal table, Abramowitz and Stegun 26.1).
 import { existsSync, readFileSync } from 'node:fs';
@@ -40,7 +40,7 @@ let dir: string;
 beforeAll(async () => {
   if (!existsSync(BUNDLE))
     throw new Error(
-      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`,
+      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.js`,
     );
   dir = await mkdtemp(join(tmpdir(), 'bellgate-e2e-action-'));
   azurite = await startAzurite(ROOT);

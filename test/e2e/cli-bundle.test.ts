@@ -6,7 +6,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 
 // The built `bellgate` run the way a user runs it: `node dist/cli/index.js ...` from some other
 // folder, with real exit codes and real stdout/stderr. dist/ is built by `npm run build`; when it
-// is absent these tests are skipped with a message (dist-fresh.test.ts then fails and says so).
+// is absent these tests are skipped with a message (and .ci/check-dist fails and says so).
 const root = resolve(import.meta.dirname, '..', '..');
 const cli = join(root, 'dist', 'cli', 'index.js');
 const built = existsSync(cli);

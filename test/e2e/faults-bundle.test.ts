@@ -1,4 +1,4 @@
-// The action bundle as the runner runs it (`node dist/index.cjs`, or BELLGATE_ACTION_BUNDLE), with
+// The action bundle as the runner runs it (`node dist/index.js`, or BELLGATE_ACTION_BUNDLE), with
 // `store: branch` against the loopback Git Data stand-in behind the fault proxy: pushes on the
 // baseline branch record on the data branch or warn (history-failure: warn) — the step never
 // crashes, no run on the branch is ever lost, and the token never reaches the log.
@@ -30,7 +30,7 @@ let dir: string;
 beforeAll(async () => {
   if (!existsSync(BUNDLE))
     throw new Error(
-      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`,
+      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.js`,
     );
   dir = await mkdtemp(join(tmpdir(), 'bellgate-e2e-faults-'));
   git = await startGitDataStandin();

@@ -1,4 +1,4 @@
-// Which events record: the rules of DESIGN.md ("Only runs on the baseline branch (push, schedule,
+// Which events record: the rules of README "Which runs are recorded" ("Only runs on the baseline branch (push, schedule,
 // manual) are recorded by default; pull-request runs are checked, not recorded").
 import { describe, expect, it } from 'vitest';
 import { decideRecord } from '../../src/github/event-policy.js';

@@ -19,7 +19,7 @@ describe('action.yml and the input constants', () => {
     expect(Object.keys(actionYml.inputs).sort()).toEqual(Object.values(INPUT).sort());
     expect(Object.keys(actionYml.outputs).sort()).toEqual(Object.values(OUTPUT).sort());
     for (const i of Object.values(actionYml.inputs)) expect(i.description.length).toBeGreaterThan(20);
-    expect(actionYml.runs).toEqual({ using: 'node24', main: 'dist/index.cjs' });
+    expect(actionYml.runs).toEqual({ using: 'node24', main: 'dist/index.js' });
   });
 
   it('reads action.yml defaults the way the action does when the runner passes them', () => {

@@ -1,5 +1,5 @@
 // runAction in-process with the real octokit client against the loopback REST stand-in, a fake
-// uploader and a collecting sink. Behaviour checked against DESIGN.md's action contract and the
+// uploader and a collecting sink. Behaviour checked against README's action contract ("Using it in GitHub Actions") and the
 // GitHub REST reference; the regressed value sits ~17 sd above a 12-run baseline, far past the 0.01
 // cutoff (relative density 0.011 at 3 sd: standard normal table, Abramowitz and Stegun 26.1).
 import { readFile } from 'node:fs/promises';

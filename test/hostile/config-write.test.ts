@@ -6,7 +6,7 @@ import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';
 import { parseConfig } from '../../src/config/load.js';
 import { settingsFor } from '../../src/config/rules.js';
-import { applyConfigEdit } from '../../src/gate/tune/write-config.js';
+import { applyConfigEdit } from '../../src/config/write-config.js';
 import { assertNoPollution, CaseCounter, FC, resultOrInputError } from './guards.js';
 
 const counter = new CaseCounter('config writing');

@@ -1,7 +1,7 @@
 // Hostile history documents: truncated, wrong version, duplicated runs, non-finite values, wrong
 // types, prototype keys — through parseHistory and verifyHistory, and through the CLI (check,
 // verify, report --html, check --record), where an unreadable history is refused clearly and never
-// overwritten (DESIGN.md, "History"). Numbers past the double range read as Infinity by JSON.parse
+// overwritten (DEVELOPERS.md, "The history document"). Numbers past the double range read as Infinity by JSON.parse
 // (ECMA-262, Number.parseFloat semantics of JSON numbers — from memory).
 import fc from 'fast-check';
 import { afterAll, describe, expect, it } from 'vitest';

@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { renderJson } from '../../src/report/json.js';
 import { makeFixture } from './fixture.js';
 
-// The JSON report example of DESIGN.md ("JSON report ... stable field names"), copied verbatim.
-const DESIGN_EXAMPLE = {
+// The JSON report's documented shape (schema bellgate.report/1: these field names are stable), written out by hand.
+const DOCUMENTED = {
   schema: 'bellgate.report/1',
   verdict: 'regressed',
   series: '...',
@@ -27,15 +27,15 @@ describe('renderJson', () => {
   const { report } = makeFixture();
   const doc = JSON.parse(renderJson(report)) as { metrics: Record<string, unknown>[] } & Record<string, unknown>;
 
-  it("uses DESIGN.md's field names in its order, extras after", () => {
-    expect(Object.keys(doc).slice(0, 3)).toEqual(Object.keys(DESIGN_EXAMPLE).slice(0, 3));
+  it('uses the documented field names in their order, extras after', () => {
+    expect(Object.keys(doc).slice(0, 3)).toEqual(Object.keys(DOCUMENTED).slice(0, 3));
     expect(Object.keys(doc)).toContain('metrics');
-    const designKeys = Object.keys(DESIGN_EXAMPLE.metrics[0] ?? {});
+    const designKeys = Object.keys(DOCUMENTED.metrics[0] ?? {});
     for (const m of doc.metrics) {
       expect(Object.keys(m).slice(0, designKeys.length)).toEqual(designKeys);
       if (m.baseline !== null) expect(Object.keys(m.baseline as object).slice(0, 3)).toEqual(['n', 'mean', 'sd']);
     }
-    expect(doc.schema).toBe(DESIGN_EXAMPLE.schema);
+    expect(doc.schema).toBe(DOCUMENTED.schema);
   });
 
   it('writes numbers that are not finite as null, keeps 2-space indent and a final newline', () => {

@@ -1,8 +1,7 @@
 import { Command, Option } from 'commander';
 import { OK_ROWS_LISTED } from '../../report/ok-rows.js';
 import type { CommandContext } from '../context.js';
-import type { CheckOptions } from '../check-flow.js';
-import { importCheckFlow } from '../warm-up.js';
+import { performCheck, verdictExitCode, type CheckOptions } from '../check-flow.js';
 import {
   configOption,
   examples,
@@ -55,8 +54,6 @@ export function checkCommand(ctx: CommandContext): Command {
     '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage (and --missing-metrics fail); 3 history store unreachable.\n',
   );
   return cmd.action(async (options: CheckOptions) => {
-    // Imported when the command runs, so `--help` and the other commands never load the gate.
-    const { performCheck, verdictExitCode } = await importCheckFlow();
     const report = await performCheck(ctx, options);
     ctx.exitCode = verdictExitCode(report, options.missingMetrics);
   });

@@ -3,7 +3,8 @@ import { join, relative } from 'node:path';
 import type { CommandContext } from '../context.js';
 import { EXIT } from '../exit-codes.js';
 import { examples } from '../options.js';
-import { importCheckFlow } from '../warm-up.js';
+import { performCheck, verdictExitCode } from '../check-flow.js';
+import { DEMO_FILES, locateDemo } from '../demo-data.js';
 
 /** The demo's series name, as written in examples/demo/history.jsonl. */
 export const DEMO_SERIES = 'kestrel-post/ci';
@@ -20,11 +21,6 @@ export function demoCommand(ctx: CommandContext): Command {
     .option('--out <dir>', 'folder for report.md, report.json and report.txt', 'bellgate-demo');
   examples(cmd, ['bellgate demo', 'bellgate demo --out /tmp/bellgate-demo']);
   return cmd.action(async (options: { out: string }) => {
-    // Imported when the command runs, so `--help` and the other commands never load the gate.
-    const [{ performCheck, verdictExitCode }, { DEMO_FILES, locateDemo }] = await Promise.all([
-      importCheckFlow(),
-      import('../demo-data.js'),
-    ]);
     const dir = locateDemo(ctx.io.cwd, process.argv[1]);
     ctx.io.stdout(`Demo: the Kestrel Post geocoding service — 120 trusted runs on main, and one pull request.\n\n`);
     const report = await performCheck(ctx, {

@@ -1,6 +1,6 @@
 import { Command } from 'commander';
 import type { CommandContext } from '../context.js';
-import type { ExplainOptions } from '../run/explain.js';
+import { runExplain, type ExplainOptions } from '../run/explain.js';
 import { configOption, examples, historyOption, inputOptions, seriesOption } from '../options.js';
 
 /**
@@ -23,8 +23,5 @@ export function explainCommand(ctx: CommandContext): Command {
     'bellgate explain latency/geocode-p95 --history .bellgate/history.jsonl',
     'bellgate explain size/web-bundle.js.gz --history h.json --metrics bench.json',
   ]);
-  // The work is imported when the command runs, so `--help` and the other commands never load it.
-  return cmd.action(async (metric: string, options: ExplainOptions) =>
-    (await import('../run/explain.js')).runExplain(ctx, metric, options),
-  );
+  return cmd.action((metric: string, options: ExplainOptions) => runExplain(ctx, metric, options));
 }

@@ -1,6 +1,6 @@
 import { Command } from 'commander';
 import type { CommandContext } from '../context.js';
-import type { ImportOptions } from '../run/import.js';
+import { runImport, type ImportOptions } from '../run/import.js';
 import { examples, historyOption, seriesOption } from '../options.js';
 
 /**
@@ -21,6 +21,5 @@ export function importCommand(ctx: CommandContext): Command {
     'after',
     '\nJSON Lines: {"id":"812-1","time":"2026-05-04T10:20:30Z","sha":"3f2a9c1","ref":"refs/heads/main","metrics":{"latency/p50":12.4}}\nCSV: id,time,sha,ref,name,value[,unit] (one row per metric) or id,time,sha,ref,<one column per metric>\n',
   );
-  // The work is imported when the command runs, so `--help` and the other commands never load it.
-  return cmd.action(async (options: ImportOptions) => (await import('../run/import.js')).runImport(ctx, options));
+  return cmd.action((options: ImportOptions) => runImport(ctx, options));
 }

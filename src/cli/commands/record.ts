@@ -1,7 +1,6 @@
 import { Command } from 'commander';
 import type { CommandContext } from '../context.js';
-import type { RecordOptions } from '../run/record.js';
-import { importRecord } from '../warm-up.js';
+import { runRecord, type RecordOptions } from '../run/record.js';
 import {
   configOption,
   examples,
@@ -25,6 +24,5 @@ export function recordCommand(ctx: CommandContext): Command {
     'bellgate record --metrics bench.json --history .bellgate/history.jsonl',
     'bellgate record --metrics bench.json --history h.json --id 8812-1 --sha 3f2a9c1 --ref refs/heads/main --time 2026-05-04T10:20:30Z',
   ]);
-  // The work is imported when the command runs, so `--help` and the other commands never load it.
-  return cmd.action(async (options: RecordOptions) => (await importRecord()).runRecord(ctx, options));
+  return cmd.action((options: RecordOptions) => runRecord(ctx, options));
 }

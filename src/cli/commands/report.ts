@@ -20,6 +20,6 @@ export function reportCommand(ctx: CommandContext): Command {
     'bellgate report --history .bellgate/history.jsonl --html bellgate-report.html',
     'bellgate report --history h.json --metrics bench.json --html out/report.html --title "Nightly"',
   ]);
-  // The work (with d3 and the HTML code) is imported when the command runs, so the others never load it.
+  // Imported when the command runs: d3 and the page code are needed by this command only.
   return cmd.action(async (options: ReportOptions) => (await import('../run/report.js')).runReport(ctx, options));
 }

@@ -1,6 +1,6 @@
 import { Command, Option } from 'commander';
 import type { CommandContext } from '../context.js';
-import type { SinceCliOptions } from '../run/since.js';
+import { runSince, type SinceCliOptions } from '../run/since.js';
 import { configOption, examples, historyOption, REPORT_FORMATS, seriesOption } from '../options.js';
 
 /**
@@ -33,8 +33,5 @@ export function sinceCommand(ctx: CommandContext): Command {
     'after',
     '\nThe review is evidence, not proof: levels are medians of the runs around each point, and steps and creep come from rank tests on noisy runs.\nExit codes: 0 reviewed; 2 bad input or usage; 3 history store unreachable.\n',
   );
-  // The work is imported when the command runs, so `--help` and the other commands never load it.
-  return cmd.action(async (ref: string, options: SinceCliOptions) =>
-    (await import('../run/since.js')).runSince(ctx, ref, options),
-  );
+  return cmd.action((ref: string, options: SinceCliOptions) => runSince(ctx, ref, options));
 }

@@ -1,7 +1,7 @@
 import { Command, InvalidArgumentError, Option } from 'commander';
 import type { CommandContext } from '../context.js';
 import { configOption, examples, historyOption } from '../options.js';
-import type { TuneOptions } from '../run/tune.js';
+import { runTune, type TuneOptions } from '../run/tune.js';
 
 /**
  * `bellgate tune`: replays the gate over the history and prints the cutoff ladder, per-metric
@@ -29,8 +29,7 @@ export function tuneCommand(ctx: CommandContext): Command {
     'bellgate tune --history h.json --labels known-regressions.yml --format json',
     'bellgate tune --history h.json --target 0.5 --write .github/bellgate.yml',
   ]);
-  // The work (replay, diff library) is imported when the command runs, so the others never load it.
-  return cmd.action(async (options: TuneOptions) => (await import('../run/tune.js')).runTune(ctx, options));
+  return cmd.action((options: TuneOptions) => runTune(ctx, options));
 }
 
 function parseTarget(text: string): number {

@@ -7,7 +7,7 @@ import { closeNames } from '../close-names.js';
 export type ExplainOptions = RequestedRunOptions;
 
 /**
- * The work of `bellgate explain METRIC` (loaded only when that command runs): judges the run and
+ * The work of `bellgate explain METRIC`: judges the run and
  * draws the one metric's decision on stdout.
  * @throws InputError for an unknown metric (naming the closest names), bad files or flags.
  * @example await runExplain(ctx, 'latency/geocode-p95', { history: 'h.json', series: 'default' })

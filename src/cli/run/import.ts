@@ -2,8 +2,7 @@ import { importRuns, parseImportRuns } from '../../history/import.js';
 import { visibleText } from '../../errors/visible-text.js';
 import type { CommandContext } from '../context.js';
 import { openHistory } from '../open-history.js';
-import { resolvePath } from '../paths.js';
-import { readUserText } from '../read-text.js';
+import { readFlagFile } from '../read-text.js';
 
 export interface ImportOptions {
   history: string;
@@ -15,14 +14,13 @@ export interface ImportOptions {
 const SHOWN_SKIPS = 20;
 
 /**
- * The work of `bellgate import` (loaded only when that command runs): merges the past runs into
+ * The work of `bellgate import`: merges the past runs into
  * the history file by run id; rows that cannot be used are listed on stderr with place and reason.
  * @throws InputError (unreadable runs file), StoreError (history unreadable or unwritable).
  * @example await runImport(ctx, { history: 'h.json', runs: 'past-runs.jsonl', series: 'default' })
  */
 export async function runImport(ctx: CommandContext, options: ImportOptions): Promise<void> {
-  const runsPath = resolvePath(ctx, options.runs);
-  const text = await readUserText(runsPath, '--runs');
+  const text = await readFlagFile(ctx, '--runs', options.runs, false);
   const parsed = parseImportRuns(text, options.runs);
   const { history, store } = await openHistory(ctx, options.history, options.series);
   const result = importRuns(history, parsed);

@@ -1,5 +1,5 @@
 import type { CommandContext } from '../context.js';
-import { loadConfig } from '../load-config.js';
+import { loadConfig } from '../../config/load.js';
 import { loadRun, type MetricFileOptions } from '../load-run.js';
 import { historyStore } from '../open-history.js';
 import { recordRun } from '../record-run.js';
@@ -12,14 +12,13 @@ export interface RecordOptions extends MetricFileOptions, RunInfoOptions {
 }
 
 /**
- * The work of `bellgate record` (loaded only when that command runs): appends the run to the
- * history file (one line; the file is not read beyond its header and last line) and says how many
- * runs are kept.
+ * The work of `bellgate record`: appends the run to the history file (one line; the file is not
+ * read beyond its header and last line) and says how many runs are kept.
  * @throws InputError (bad files, flags), StoreError (history unreadable or unwritable).
  * @example await runRecord(ctx, { metrics: ['bench.json'], history: 'h.json', series: 'default' })
  */
 export async function runRecord(ctx: CommandContext, options: RecordOptions): Promise<void> {
-  const config = await loadConfig(ctx, options.config);
+  const config = await loadConfig(options.config, ctx.io.cwd);
   const run = await loadRun(ctx, config, options);
   const store = historyStore(ctx, options.history, options.series);
   const info = runInfoFrom(ctx, options);

@@ -8,7 +8,7 @@ import { renderSinceJson } from '../../report/since-json.js';
 import { renderSinceMarkdown } from '../../report/since-markdown.js';
 import { renderSinceText } from '../../report/since-text.js';
 import type { CommandContext } from '../context.js';
-import { loadConfig } from '../load-config.js';
+import { loadConfig } from '../../config/load.js';
 import type { ReportFormat } from '../options.js';
 import { resolvePath } from '../paths.js';
 
@@ -38,13 +38,13 @@ export async function readSinceHistory(ctx: CommandContext, path: string, series
 }
 
 /**
- * The work of `bellgate since REF` (loaded only when that command runs): resolves REF in the
+ * The work of `bellgate since REF`: resolves REF in the
  * history, reviews every metric and prints the review in the chosen format.
  * @throws InputError for a REF the history cannot resolve or a bad config; StoreError for an unreadable history.
  * @example await runSince(ctx, 'v2.3.0-sha', { history: 'h.json', series: 'default', format: 'text' })
  */
 export async function runSince(ctx: CommandContext, ref: string, options: SinceCliOptions): Promise<void> {
-  const config = await loadConfig(ctx, options.config);
+  const config = await loadConfig(options.config, ctx.io.cwd);
   const history = await readSinceHistory(ctx, options.history, options.series);
   const reference = referenceFromText(ref, history.runs);
   if (options.at !== undefined) reference.time = options.at;

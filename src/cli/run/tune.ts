@@ -2,15 +2,15 @@ import { rename, writeFile, rm } from 'node:fs/promises';
 import { createTwoFilesPatch } from 'diff';
 import { parseLabels, type RegressionLabel } from '../../gate/tune/labels.js';
 import { tuneHistory } from '../../gate/tune/tune.js';
-import { applyConfigEdit } from '../../gate/tune/write-config.js';
+import { applyConfigEdit } from '../../config/write-config.js';
 import { InputError } from '../../errors/input-error.js';
 import { renderTuneJson } from '../../report/tune-json.js';
 import { renderTuneText } from '../../report/tune-text.js';
 import type { CliIo, CommandContext } from '../context.js';
-import { loadConfig } from '../load-config.js';
+import { loadConfig } from '../../config/load.js';
 import { openHistory } from '../open-history.js';
 import { resolvePath } from '../paths.js';
-import { readUserText } from '../read-text.js';
+import { readFlagFile, readFlagFileIfAny } from '../read-text.js';
 
 export interface TuneOptions {
   history: string;
@@ -22,14 +22,13 @@ export interface TuneOptions {
 }
 
 /**
- * The work of `bellgate tune` (loaded only when that command runs, so the replay and the diff
- * library are never loaded by the others): replays the gate, prints the ladder and suggestion,
+ * The work of `bellgate tune`: replays the gate, prints the ladder and suggestion,
  * and writes the config when `--write` is given.
  * @throws InputError for an empty history, bad labels (file:line:col) or unreadable files.
  * @example await runTune(ctx, { history: 'h.json', format: 'text' })
  */
 export async function runTune(ctx: CommandContext, options: TuneOptions): Promise<void> {
-  const config = await loadConfig(ctx, options.config);
+  const config = await loadConfig(options.config, ctx.io.cwd);
   // Whatever series the file holds: tune replays the document it is given.
   const { history } = await openHistory(ctx, options.history, undefined);
   if (history.runs.length === 0) {
@@ -40,7 +39,7 @@ export async function runTune(ctx: CommandContext, options: TuneOptions): Promis
   }
   let labels: RegressionLabel[] | undefined;
   if (options.labels !== undefined)
-    labels = parseLabels(await readUserText(resolvePath(ctx, options.labels), '--labels'), options.labels);
+    labels = parseLabels(await readFlagFile(ctx, '--labels', options.labels, true), options.labels);
   const progress = progressBar(ctx.io);
   const result = tuneHistory({
     config,
@@ -73,12 +72,7 @@ async function writeSuggestion(
   suggestion: Parameters<typeof applyConfigEdit>[2],
 ): Promise<{ file: string; diff: string }> {
   const full = resolvePath(ctx, path);
-  let before = '';
-  try {
-    before = await readUserText(full, '--write');
-  } catch (error) {
-    if (!(error instanceof InputError && /no such file/.test(error.message))) throw error;
-  }
+  const before = (await readFlagFileIfAny(ctx, '--write', path, true)) ?? '';
   const after = applyConfigEdit(before, path, suggestion);
   if (after === before) return { file: path, diff: '' };
   const temp = `${full}.bellgate-tune-${process.pid}.tmp`;

@@ -7,7 +7,7 @@ import { EXIT } from '../exit-codes.js';
 import { resolvePath } from '../paths.js';
 
 /**
- * The work of `bellgate verify` (loaded only when that command runs): lists the history file's
+ * The work of `bellgate verify`: lists the history file's
  * problems on stdout and sets exit 2 when there are any.
  * @throws InputError when the file is missing; StoreError when it is not a regular file or too large.
  * @example await runVerify(ctx, { history: '.bellgate/history.json' })
