@@ -15,8 +15,7 @@ export function parseJsonText(text: string, source: string, line?: number): unkn
     return JSON.parse(body);
   } catch (error) {
     const message = error instanceof Error ? error.message : String(error);
-    const stated = /at position (\d+)/.exec(message);
-    const { line: at, column } = lineColumnAt(body, stated ? Number(stated[1]) : locateJsonError(body));
+    const { line: at, column } = lineColumn(body, jsonErrorOffset(body, message));
     throw new InputError(`malformed JSON: ${message.replace(/ in JSON at position \d+.*$/s, '')}`, {
       where: `${source}:${at + (line ?? 1) - 1}:${column}`,
       fix:
@@ -33,11 +32,22 @@ export function parseJsonText(text: string, source: string, line?: number): unkn
  * @example whereAt('m.json', '{\n  "a": x}', 9) // 'm.json:2:8'
  */
 export function whereAt(file: string, text: string, offset: number): string {
-  const { line, column } = lineColumnAt(text, offset);
+  const { line, column } = lineColumn(text, offset);
   return `${file}:${line}:${column}`;
 }
 
-function lineColumnAt(text: string, offset: number): { line: number; column: number } {
+/**
+ * Offset of the character where JSON.parse stopped on `text`, from its error message or, when
+ * the engine states no position, by search.
+ * @example jsonErrorOffset('{"a": 1 x}', 'Unexpected token ... at position 8') // 8
+ */
+export function jsonErrorOffset(text: string, message: string): number {
+  const stated = /at position (\d+)/.exec(message);
+  return stated ? Number(stated[1]) : locateJsonError(text);
+}
+
+/** 1-based line and column of a UTF-16 offset (columns count characters of that line). */
+export function lineColumn(text: string, offset: number): { line: number; column: number } {
   const end = Math.max(0, Math.min(offset, text.length));
   let line = 1;
   let lineStart = 0;

@@ -1,3 +1,4 @@
+import { jsonErrorOffset, lineColumn } from '../errors/json-text.js';
 import { InputError } from '../errors/input-error.js';
 import {
   attemptOf,
@@ -8,7 +9,6 @@ import {
   type RunInfo,
   type Tombstone,
 } from './history.js';
-import { lineColumn, syntaxErrorOffset } from './json-text.js';
 import { textLines, type LineSource, type RawLine } from './lines.js';
 import { isObject, throwingSink, typeName, type ProblemSink } from './problems.js';
 import { timeKey } from './run-order.js';
@@ -164,7 +164,7 @@ function parseLine(
       return undefined;
     }
     const message = error instanceof Error ? error.message : String(error);
-    const { column } = lineColumn(line.text, syntaxErrorOffset(line.text, message));
+    const { column } = lineColumn(line.text, jsonErrorOffset(line.text, message));
     report(at(line, column), `not valid JSON (${message.replace(/, ".*" is not valid JSON$/s, '')})`);
     return undefined;
   }

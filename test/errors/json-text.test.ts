@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { InputError } from '../../src/errors/input-error.js';
-import { parseJsonText, whereAt } from '../../src/errors/json-text.js';
+import { jsonErrorOffset, lineColumn, parseJsonText, whereAt } from '../../src/errors/json-text.js';
 
 function refusal(text: string, line?: number): InputError {
   try {
@@ -55,5 +55,18 @@ describe('whereAt', () => {
     expect(whereAt('m', 'ab\ncd\n', 0)).toBe('m:1:1');
     expect(whereAt('m', 'ab\r\ncd', 5)).toBe('m:2:2');
     expect(whereAt('m', 'ab', 99)).toBe('m:1:3');
+  });
+});
+
+describe('jsonErrorOffset and lineColumn', () => {
+  it('takes the position V8 states, or searches when it states none', () => {
+    expect(jsonErrorOffset('{"a":1 x', 'Unexpected token in JSON at position 7')).toBe(7);
+    // "NaN" is not JSON (RFC 8259 section 6): offset 5 is the N, counted by hand.
+    expect(jsonErrorOffset('{"a":NaN}', 'Unexpected token \'N\', "{"a":NaN}" is not valid JSON')).toBe(5);
+  });
+
+  it('counts 1-based lines and columns', () => {
+    expect(lineColumn('ab\ncd\n', 4)).toEqual({ line: 2, column: 2 });
+    expect(lineColumn('ab\ncd\n', 6)).toEqual({ line: 3, column: 1 });
   });
 });
