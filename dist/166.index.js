@@ -152,7 +152,7 @@ function dataBranchName(raw) {
 /* harmony import */ var _changes_js__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(55201);
 /* harmony import */ var _branch_api_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(75939);
 /* harmony import */ var _branch_path_js__WEBPACK_IMPORTED_MODULE_3__ = __webpack_require__(39148);
-/* harmony import */ var _document_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(96276);
+/* harmony import */ var _document_js__WEBPACK_IMPORTED_MODULE_4__ = __webpack_require__(78363);
 /* harmony import */ var _history_js__WEBPACK_IMPORTED_MODULE_6__ = __webpack_require__(43328);
 /* harmony import */ var _store_js__WEBPACK_IMPORTED_MODULE_5__ = __webpack_require__(84689);
 /**

@@ -46,8 +46,8 @@ __webpack_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/history/changes.ts
 var changes = __webpack_require__(55201);
-// EXTERNAL MODULE: ./src/history/document.ts + 1 modules
-var history_document = __webpack_require__(96276);
+// EXTERNAL MODULE: ./src/history/document.ts
+var history_document = __webpack_require__(78363);
 // EXTERNAL MODULE: ./src/history/history.ts
 var history_history = __webpack_require__(43328);
 // EXTERNAL MODULE: ./src/history/merge.ts

@@ -4322,7 +4322,7 @@ var json_where = __nccwpck_require__(9617);
  * @example readJsonMetrics('{"a": 1}', 'm.json').readings // [{ name: 'a', value: 1, where: 'm.json (a)' }]
  */
 function readJsonMetrics(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
-    const doc = (0,json_text/* parseJsonText */.l)(text, file);
+    const doc = (0,json_text/* parseJsonText */.lk)(text, file);
     if (!isRecord(doc)) {
         throw new input_error/* InputError */.d(`the metric file must hold a JSON object, found ${describeJson(doc)}`, {
             where: file,
@@ -4413,7 +4413,7 @@ function readJsonLines(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
         if (line.trim() === '')
             return;
         const place = `${file}:${number}`;
-        const entry = (0,json_text/* parseJsonText */.l)(line, file, number);
+        const entry = (0,json_text/* parseJsonText */.lk)(line, file, number);
         readEntry(entry, sink, place, () => place);
     });
     return sink.result;
@@ -14085,8 +14085,8 @@ function importCommand(ctx) {
 
 // EXTERNAL MODULE: ./src/history/file-store.ts + 3 modules
 var file_store = __nccwpck_require__(4496);
-// EXTERNAL MODULE: ./src/history/document.ts + 1 modules
-var history_document = __nccwpck_require__(6276);
+// EXTERNAL MODULE: ./src/history/document.ts
+var history_document = __nccwpck_require__(8363);
 // EXTERNAL MODULE: ./src/history/lines.ts
 var history_lines = __nccwpck_require__(1483);
 ;// CONCATENATED MODULE: ./src/history/verify.ts
@@ -20597,8 +20597,10 @@ function shortenQuotes(text) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   l: () => (/* binding */ parseJsonText),
-/* harmony export */   x: () => (/* binding */ whereAt)
+/* harmony export */   O: () => (/* binding */ jsonErrorOffset),
+/* harmony export */   lk: () => (/* binding */ parseJsonText),
+/* harmony export */   rv: () => (/* binding */ lineColumn),
+/* harmony export */   xW: () => (/* binding */ whereAt)
 /* harmony export */ });
 /* harmony import */ var _input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3712);
 
@@ -20618,8 +20620,7 @@ function parseJsonText(text, source, line) {
     }
     catch (error) {
         const message = error instanceof Error ? error.message : String(error);
-        const stated = /at position (\d+)/.exec(message);
-        const { line: at, column } = lineColumnAt(body, stated ? Number(stated[1]) : locateJsonError(body));
+        const { line: at, column } = lineColumn(body, jsonErrorOffset(body, message));
         throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`malformed JSON: ${message.replace(/ in JSON at position \d+.*$/s, '')}`, {
             where: `${source}:${at + (line ?? 1) - 1}:${column}`,
             fix: body.trim() === ''
@@ -20634,10 +20635,20 @@ function parseJsonText(text, source, line) {
  * @example whereAt('m.json', '{\n  "a": x}', 9) // 'm.json:2:8'
  */
 function whereAt(file, text, offset) {
-    const { line, column } = lineColumnAt(text, offset);
+    const { line, column } = lineColumn(text, offset);
     return `${file}:${line}:${column}`;
 }
-function lineColumnAt(text, offset) {
+/**
+ * Offset of the character where JSON.parse stopped on `text`, from its error message or, when
+ * the engine states no position, by search.
+ * @example jsonErrorOffset('{"a": 1 x}', 'Unexpected token ... at position 8') // 8
+ */
+function jsonErrorOffset(text, message) {
+    const stated = /at position (\d+)/.exec(message);
+    return stated ? Number(stated[1]) : locateJsonError(text);
+}
+/** 1-based line and column of a UTF-16 offset (columns count characters of that line). */
+function lineColumn(text, offset) {
     const end = Math.max(0, Math.min(offset, text.length));
     let line = 1;
     let lineStart = 0;
@@ -22158,90 +22169,23 @@ function holdsAtLeast(values, last, wanted) {
 
 /***/ }),
 
-/***/ 6276:
+/***/ 8363:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  FU: () => (/* binding */ decodeHistory),
-  oi: () => (/* binding */ markLine),
-  L_: () => (/* binding */ mergeMarks),
-  gx: () => (/* binding */ replaces),
-  u_: () => (/* binding */ runLine),
-  ph: () => (/* binding */ serializeHistory)
-});
-
-// UNUSED EXPORTS: HISTORY_SCHEMA, checkRuns, checkStorable, dropLine, headerLine, parseHistory
-
-// EXTERNAL MODULE: ./src/errors/input-error.ts
-var input_error = __nccwpck_require__(3712);
-// EXTERNAL MODULE: ./src/history/history.ts
-var history_history = __nccwpck_require__(3328);
-;// CONCATENATED MODULE: ./src/history/json-text.ts
-
-/**
- * Parses JSON text, turning a syntax error into an InputError that points at "source:line:col".
- * V8 states the offset for most errors ("... in JSON at position 17"); for an unexpected token it
- * quotes about ten characters either side instead, so the quote is searched for in the text.
- * A leading byte-order mark is ignored.
- * Throws InputError (where = "source:line:col") on malformed JSON.
- *
- * @example parseJsonText('{"a": 1}', 'h.json') // { a: 1 }
- */
-function parseJsonText(text, source) {
-    const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
-    try {
-        return JSON.parse(body);
-    }
-    catch (error) {
-        const message = error instanceof Error ? error.message : String(error);
-        const offset = syntaxErrorOffset(body, message);
-        const { line, column } = lineColumn(body, offset);
-        throw new InputError(`not valid JSON (${message.replace(/, ".*" is not valid JSON$/s, '')})`, {
-            where: `${source}:${line}:${column}`,
-            fix: body.trim() === ''
-                ? 'the file is empty; remove it or write a complete document'
-                : 'repair the JSON at that spot (a truncated or hand-edited file?)',
-            cause: error,
-        });
-    }
-}
-/** Best estimate of where V8's JSON parser stopped, as an offset into `text`. */
-function syntaxErrorOffset(text, message) {
-    const stated = /at position (\d+)/.exec(message);
-    if (stated)
-        return Number(stated[1]);
-    if (/end of JSON input/.test(message))
-        return text.length;
-    // 'Unexpected token 'x', ..."context"... is not valid JSON': the token sits ten characters
-    // into the quote when the quote is cut on the left, else at its first place in the quote.
-    const quoted = /^Unexpected token '(.)', (\.\.\.)?"(.*?)"(\.\.\.)? is not valid JSON$/s.exec(message);
-    if (quoted) {
-        const [, token = '', cutLeft, context = ''] = quoted;
-        const at = text.indexOf(context);
-        if (at >= 0)
-            return at + (cutLeft ? 10 : Math.max(0, context.indexOf(token)));
-    }
-    return 0;
-}
-/** 1-based line and column of an offset (UTF-16 units; columns count characters of that line). */
-function lineColumn(text, offset) {
-    const end = Math.min(Math.max(offset, 0), text.length);
-    let line = 1;
-    let lineStart = 0;
-    for (let i = text.indexOf('\n'); i >= 0 && i < end; i = text.indexOf('\n', i + 1)) {
-        line += 1;
-        lineStart = i + 1;
-    }
-    return { line, column: end - lineStart + 1 };
-}
-
-// EXTERNAL MODULE: ./src/history/problems.ts
-var problems = __nccwpck_require__(7326);
-// EXTERNAL MODULE: ./src/history/run-order.ts
-var run_order = __nccwpck_require__(8400);
-;// CONCATENATED MODULE: ./src/history/document.ts
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   FU: () => (/* binding */ decodeHistory),
+/* harmony export */   L_: () => (/* binding */ mergeMarks),
+/* harmony export */   gx: () => (/* binding */ replaces),
+/* harmony export */   oi: () => (/* binding */ markLine),
+/* harmony export */   ph: () => (/* binding */ serializeHistory),
+/* harmony export */   u_: () => (/* binding */ runLine)
+/* harmony export */ });
+/* unused harmony exports HISTORY_SCHEMA, parseHistory, headerLine, dropLine, checkRuns, checkStorable */
+/* harmony import */ var _errors_json_text_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3369);
+/* harmony import */ var _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3712);
+/* harmony import */ var _history_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3328);
+/* harmony import */ var _problems_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(7326);
+/* harmony import */ var _run_order_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(8400);
 
 
 
@@ -22348,7 +22292,7 @@ function decodeHistory(src, report, options = {}) {
                     dropped.add(entry.tombstone.id);
                 if (entry.kind !== 'run' || dropped.has(entry.info.id))
                     continue;
-                seen.add((0,history_history/* replacementKey */.id)(entry.info.id));
+                seen.add((0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(entry.info.id));
                 if (seen.size >= newest)
                     break;
             }
@@ -22371,20 +22315,20 @@ function parseLine(line, at, report, warn) {
             return undefined;
         }
         const message = error instanceof Error ? error.message : String(error);
-        const { column } = lineColumn(line.text, syntaxErrorOffset(line.text, message));
+        const { column } = (0,_errors_json_text_js__WEBPACK_IMPORTED_MODULE_0__/* .lineColumn */ .rv)(line.text, (0,_errors_json_text_js__WEBPACK_IMPORTED_MODULE_0__/* .jsonErrorOffset */ .O)(line.text, message));
         report(at(line, column), `not valid JSON (${message.replace(/, ".*" is not valid JSON$/s, '')})`);
         return undefined;
     }
 }
 function decodeHeader(value, report) {
-    if (!(0,problems/* isObject */.Gv)(value)) {
-        report('1', `the first line must be the header object, found ${(0,problems/* typeName */.go)(value)}`, NOT_OURS);
+    if (!(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .isObject */ .Gv)(value)) {
+        report('1', `the first line must be the header object, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(value)}`, NOT_OURS);
         return undefined;
     }
     const schema = value.schema;
     const version = typeof schema === 'string' ? /^bellgate\.history\/([1-9]\d{0,8})$/.exec(schema)?.[1] : undefined;
     if (version === undefined) {
-        report('1', `not a Bellgate history document: "schema" is ${typeof schema === 'string' ? JSON.stringify(schema) : (0,problems/* typeName */.go)(schema)}, expected "${HISTORY_SCHEMA}"`, NOT_OURS);
+        report('1', `not a Bellgate history document: "schema" is ${typeof schema === 'string' ? JSON.stringify(schema) : (0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(schema)}, expected "${HISTORY_SCHEMA}"`, NOT_OURS);
         return undefined;
     }
     if (Number(version) > CURRENT_VERSION) {
@@ -22396,22 +22340,22 @@ function decodeHeader(value, report) {
         return undefined;
     }
     if (typeof value.series !== 'string') {
-        report('1', `"series" must be a string, found ${(0,problems/* typeName */.go)(value.series)}`);
+        report('1', `"series" must be a string, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(value.series)}`);
         return undefined;
     }
     if (!Array.isArray(value.metrics)) {
-        report('1', `"metrics" must be an array, found ${(0,problems/* typeName */.go)(value.metrics)}`);
+        report('1', `"metrics" must be an array, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(value.metrics)}`);
         return undefined;
     }
     const metrics = [];
     const names = new Set();
     for (const [i, m] of value.metrics.entries()) {
-        if (!(0,problems/* isObject */.Gv)(m) || typeof m.name !== 'string' || m.name === '') {
+        if (!(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .isObject */ .Gv)(m) || typeof m.name !== 'string' || m.name === '') {
             report('1', `metrics[${i}] must be an object with a non-empty "name"`);
             return undefined;
         }
         if (m.unit !== undefined && typeof m.unit !== 'string') {
-            report('1', `metrics[${i}] (${JSON.stringify(m.name)}): "unit" must be a string, found ${(0,problems/* typeName */.go)(m.unit)}`);
+            report('1', `metrics[${i}] (${JSON.stringify(m.name)}): "unit" must be a string, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(m.unit)}`);
             return undefined;
         }
         if (names.has(m.name)) {
@@ -22428,8 +22372,8 @@ const NOT_OURS = 'point the history option at a file that Bellgate wrote';
 function decodeEntry(value, metricCount, where, report) {
     // The line's place is worked out only when there is a problem to report.
     const at = where;
-    if (!(0,problems/* isObject */.Gv)(value)) {
-        report(at(), `a line must be a JSON object, found ${(0,problems/* typeName */.go)(value)}`);
+    if (!(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .isObject */ .Gv)(value)) {
+        report(at(), `a line must be a JSON object, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(value)}`);
         return undefined;
     }
     if ('drop' in value) {
@@ -22461,14 +22405,14 @@ function decodeEntry(value, metricCount, where, report) {
     }
     if (value.pr !== undefined) {
         if (!isPullNumber(value.pr)) {
-            report(at(), `${named}: "pr" must be a pull request number, found ${(0,problems/* typeName */.go)(value.pr)}`);
+            report(at(), `${named}: "pr" must be a pull request number, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(value.pr)}`);
             return undefined;
         }
         info.pr = value.pr;
     }
     const values = value.values ?? [];
     if (!Array.isArray(values)) {
-        report(at(), `${named}: "values" must be an array, found ${(0,problems/* typeName */.go)(values)}`);
+        report(at(), `${named}: "values" must be an array, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(values)}`);
         return undefined;
     }
     if (values.length > metricCount) {
@@ -22478,13 +22422,13 @@ function decodeEntry(value, metricCount, where, report) {
     for (let i = 0; i < values.length; i++) {
         const v = values[i];
         if (v !== null && !(typeof v === 'number' && Number.isFinite(v))) {
-            report(at(), `${named}: values[${i}] is ${(0,problems/* typeName */.go)(v)}, not a finite number or null`);
+            report(at(), `${named}: values[${i}] is ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(v)}, not a finite number or null`);
             return undefined;
         }
     }
     if (value.marks !== undefined) {
         if (!Array.isArray(value.marks)) {
-            report(at(), `${named}: "marks" must be an array, found ${(0,problems/* typeName */.go)(value.marks)}`);
+            report(at(), `${named}: "marks" must be an array, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(value.marks)}`);
             return undefined;
         }
         const marks = [];
@@ -22502,7 +22446,7 @@ function decodeEntry(value, metricCount, where, report) {
 }
 function idOf(raw, field, at, report) {
     if (typeof raw !== 'string' || raw === '' || raw.length > MAX_ID) {
-        report(at(), `${field} must be a run id (a non-empty string of at most ${MAX_ID} characters), found ${(0,problems/* typeName */.go)(raw)}`);
+        report(at(), `${field} must be a run id (a non-empty string of at most ${MAX_ID} characters), found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(raw)}`);
         return undefined;
     }
     return raw;
@@ -22512,7 +22456,7 @@ function optionalText(value, field, into, at, report, named = 'the line') {
     if (raw === undefined || raw === null)
         return true;
     if (typeof raw !== 'string' || raw.length > MAX_TEXT) {
-        report(at(), `${named}: "${field}" must be a string of at most ${MAX_TEXT} characters, found ${(0,problems/* typeName */.go)(raw)}`);
+        report(at(), `${named}: "${field}" must be a string of at most ${MAX_TEXT} characters, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(raw)}`);
         return false;
     }
     into[field] = raw;
@@ -22523,8 +22467,8 @@ function isPullNumber(v) {
 }
 /** A level mark as a run line or mark line holds it. */
 function decodeMark(raw, at, report, named = 'the mark') {
-    if (!(0,problems/* isObject */.Gv)(raw)) {
-        report(at(), `${named}: a mark must be an object, found ${(0,problems/* typeName */.go)(raw)}`);
+    if (!(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .isObject */ .Gv)(raw)) {
+        report(at(), `${named}: a mark must be an object, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(raw)}`);
         return undefined;
     }
     if (raw.reason !== 'accepted' && raw.reason !== 'manual') {
@@ -22541,7 +22485,7 @@ function decodeMark(raw, at, report, named = 'the mark') {
     }
     if (raw.pr !== undefined) {
         if (!isPullNumber(raw.pr)) {
-            report(at(), `${named}: a mark's "pr" must be a pull request number, found ${(0,problems/* typeName */.go)(raw.pr)}`);
+            report(at(), `${named}: a mark's "pr" must be a pull request number, found ${(0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .typeName */ .go)(raw.pr)}`);
             return undefined;
         }
         mark.pr = raw.pr;
@@ -22565,12 +22509,12 @@ function fold(header, entries, newest) {
         if (e.kind === 'drop')
             dropped.set(e.tombstone.id, e.tombstone);
         else if (e.kind === 'mark') {
-            const key = (0,history_history/* replacementKey */.id)(e.id);
+            const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(e.id);
             marks.set(key, mergeMarks(marks.get(key) ?? [], [e.mark]));
         }
         else {
             countHint = Math.max(countHint, e.n ?? 0);
-            const key = (0,history_history/* replacementKey */.id)(e.info.id);
+            const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(e.info.id);
             // A level change stays at its CI run when a later attempt replaces the run that carried it.
             if (e.info.marks !== undefined)
                 marks.set(key, mergeMarks(marks.get(key) ?? [], e.info.marks));
@@ -22580,12 +22524,12 @@ function fold(header, entries, newest) {
         }
     }
     let kept = [...byKey.values()].filter((e) => !dropped.has(e.info.id));
-    const keys = new Map(kept.map((e) => [e, (0,run_order/* timeKey */.b)(e.info)]));
+    const keys = new Map(kept.map((e) => [e, (0,_run_order_js__WEBPACK_IMPORTED_MODULE_4__/* .timeKey */ .b)(e.info)]));
     kept.sort((a, b) => compareKeyed(keys.get(a), a.info, keys.get(b), b.info));
     if (newest !== undefined)
         kept = kept.slice(Math.max(0, kept.length - newest));
     const runs = kept.map((e) => {
-        const folded = marks.get((0,history_history/* replacementKey */.id)(e.info.id));
+        const folded = marks.get((0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(e.info.id));
         return folded === undefined ? e.info : { ...e.info, marks: folded };
     });
     const columns = new Map();
@@ -22608,8 +22552,8 @@ function fold(header, entries, newest) {
 }
 /** True when a run line with id `next` replaces one with id `previous` of the same key. */
 function replaces(next, previous) {
-    const a = (0,history_history/* attemptOf */.tx)(next);
-    const b = (0,history_history/* attemptOf */.tx)(previous);
+    const a = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .attemptOf */ .tx)(next);
+    const b = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .attemptOf */ .tx)(previous);
     // Same id: the later line. Attempts of one CI run: the higher attempt, whichever line came last.
     return a === undefined || b === undefined || a.attempt >= b.attempt;
 }
@@ -22720,14 +22664,14 @@ function checkRuns(h) {
     const ids = new Set();
     for (const run of h.runs) {
         if (typeof run.id !== 'string' || run.id === '' || run.id.length > MAX_ID)
-            throw new input_error/* InputError */.d(`a run needs an id of 1 to ${MAX_ID} characters to be stored`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`a run needs an id of 1 to ${MAX_ID} characters to be stored`, {
                 where,
                 fix: NOT_STORABLE_FIX,
             });
         if (ids.has(run.id))
-            throw new input_error/* InputError */.d(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
         if (h.dropped?.has(run.id))
-            throw new input_error/* InputError */.d(`run ${JSON.stringify(run.id)} was dropped and cannot be stored again`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`run ${JSON.stringify(run.id)} was dropped and cannot be stored again`, {
                 where,
                 fix: NOT_STORABLE_FIX,
             });
@@ -22737,14 +22681,14 @@ function checkRuns(h) {
 /** The column half: one value per run, each a finite number or NaN (missing). Throws InputError. */
 function checkStorable(h, name, values) {
     if (values.length !== h.runs.length) {
-        throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, {
             where: storeWhere(h),
             fix: NOT_STORABLE_FIX,
         });
     }
     for (const v of values) {
         if (v === Infinity || v === -Infinity || typeof v !== 'number') {
-            throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, {
                 where: storeWhere(h),
                 fix: NOT_STORABLE_FIX,
             });
@@ -22777,8 +22721,8 @@ var external_node_path_ = __nccwpck_require__(6760);
 var input_error = __nccwpck_require__(3712);
 // EXTERNAL MODULE: ./src/inputs/names.ts
 var names = __nccwpck_require__(5585);
-// EXTERNAL MODULE: ./src/history/document.ts + 1 modules
-var history_document = __nccwpck_require__(6276);
+// EXTERNAL MODULE: ./src/history/document.ts
+var history_document = __nccwpck_require__(8363);
 // EXTERNAL MODULE: ./src/history/history.ts
 var history_history = __nccwpck_require__(3328);
 // EXTERNAL MODULE: ./src/history/merge.ts
@@ -23806,7 +23750,7 @@ function textLines(text) {
 /* harmony export */   lj: () => (/* binding */ trimHistory)
 /* harmony export */ });
 /* harmony import */ var _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3712);
-/* harmony import */ var _document_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(6276);
+/* harmony import */ var _document_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8363);
 /* harmony import */ var _history_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3328);
 /* harmony import */ var _run_order_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(8400);
 /* harmony import */ var _units_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(1947);
@@ -24251,7 +24195,7 @@ function whereInJson(text, file, path) {
         .join('')
         .replace(/^\./, '');
     const offset = jsonValueOffset(text, path);
-    return offset === undefined ? `${file} (${label})` : `${(0,_errors_json_text_js__WEBPACK_IMPORTED_MODULE_0__/* .whereAt */ .x)(file, text, offset)} (${label})`;
+    return offset === undefined ? `${file} (${label})` : `${(0,_errors_json_text_js__WEBPACK_IMPORTED_MODULE_0__/* .whereAt */ .xW)(file, text, offset)} (${label})`;
 }
 // JSON's own whitespace (RFC 8259, section 2): space, tab, line feed, carriage return.
 const SPACE = new Set([0x20, 0x09, 0x0a, 0x0d]);
