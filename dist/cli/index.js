@@ -18304,7 +18304,7 @@ const DEFAULT_LIMITS = Object.freeze({
     maxMetrics: 100_000,
     maxSamples: 250_000,
 });
-/** The chance of any false alarm in a run that family control holds to by default (DESIGN.md). */
+/** The chance of any false alarm in a run that family control holds to by default (README "The run's budget"). */
 const DEFAULT_BUDGET = 0.01;
 /**
  * Newest runs kept in a history document: six months of a busy repository (20 recorded runs a

@@ -30,7 +30,7 @@ export const DEFAULT_LIMITS: Readonly<InputLimits> = Object.freeze({
   maxSamples: 250_000,
 });
 
-/** The chance of any false alarm in a run that family control holds to by default (DESIGN.md). */
+/** The chance of any false alarm in a run that family control holds to by default (README "The run's budget"). */
 export const DEFAULT_BUDGET = 0.01;
 
 /**

@@ -43,6 +43,22 @@ describe('README.md', () => {
     expect(readme).toContain('```sh\nnpm test\n```');
   });
 
+  it('puts the user first: the job, a copyable workflow, the two commands, configuration, then the statistics', () => {
+    const at = (text: string): number => readme.indexOf(text);
+    const order = [
+      at('## Add it to a workflow'),
+      at('## Try it locally'),
+      at('## Configuration'),
+      at('## Using it in GitHub Actions'),
+      at('## How the decision works'),
+    ];
+    expect(order.every((x) => x > 0)).toBe(true);
+    expect([...order].sort((a, b) => a - b)).toEqual(order);
+    // The workflow to copy is the example the e2e tests run as written, byte for byte.
+    const example = readFileSync(resolve(root, 'examples', 'workflows', 'bench.yml'), 'utf8');
+    expect(readme).toContain('```yaml\n' + example + '```');
+  });
+
   it('keeps the GitHub Actions section for the action', () => {
     expect(readme).toContain('## Using it in GitHub Actions');
   });

@@ -5,7 +5,7 @@ import { seededNormal } from '../../model/random.js';
 /**
  * Invented CI timings: `metrics` benchmarks "time/bench-NN", each run multiplied by one shared
  * runner-speed factor exp(N(0, runnerSd)) and by its own noise exp(N(0, ownSd)) — the situation of
- * DESIGN.md "What good looks like", where the runner's noise is larger than each metric's own.
+ * the simulated project of test/noise/simulate.ts, where the runner's noise is larger than each metric's own.
  */
 export interface TimingSeries {
   names: string[];
