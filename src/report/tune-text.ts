@@ -1,7 +1,7 @@
 import type { RateEvidence } from '../gate/tune/evidence.js';
 import type { SettingScore } from '../gate/tune/score.js';
 import { percent, sameSetting, type TuneSetting } from '../gate/tune/setting.js';
-import { AIM_SHIFT, BLIND_SHARE, caughtShare, meetsTarget, type TuneResult } from '../gate/tune/tune.js';
+import { AIM_SHIFT, BLIND_SHARE, caughtShare, meetsTarget, SWITCH_LEVEL, type TuneResult } from '../gate/tune/tune.js';
 import { cleanText } from './clean.js';
 import { formatNumber } from './format.js';
 import { textTable } from './tune-table.js';
@@ -103,9 +103,11 @@ function recommendationLines(result: TuneResult): string[] {
   ];
   lines.push(`  ${keys.join(', ')}`);
   lines.push(
-    r.reason === 'best-under-target'
-      ? `  why: the most ${plus(AIM_SHIFT)} regressions caught among the settings whose replayed false alarms and promised rate both meet the target`
-      : `  why: NO setting of the ladder meets the target of ${result.target} per 100 on the replay; this one has the fewest false alarms`,
+    r.reason === 'configured-holds'
+      ? `  why: the configured setting meets the target, and no setting of the ladder catches significantly more ${plus(AIM_SHIFT)} regressions on the same injections (exact McNemar test, one-sided ${SWITCH_LEVEL})`
+      : r.reason === 'best-under-target'
+        ? `  why: the most ${plus(AIM_SHIFT)} regressions caught among the settings whose promised rate meets the target and whose replayed false alarms do not contradict it (the floor of their 95% interval is within it)`
+        : `  why: NO setting of the ladder meets the target of ${result.target} per 100 on the replay; this one has the fewest false alarms`,
   );
   lines.push(`  measured by the gate set exactly so, over ${f.trials} clean replayed runs: ${alarmEvidence(f)}`);
   if (r.replayTooShort)

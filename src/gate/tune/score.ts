@@ -40,6 +40,8 @@ export interface SettingScore {
   caught: { shift: number; evidence: RateEvidence }[];
   /** Labelled runs that the check would have failed. */
   labelledFlagged: number;
+  /** Whether each injection of the plan was caught, in plan order (for paired comparisons). */
+  hits: boolean[];
   /** How the figures were made: rescored from a replay at the loosest thresholds, or the gate run at exactly this setting. */
   measured: 'rescored' | 'exact';
 }
@@ -136,6 +138,7 @@ export function scoreStructure(
         return { shift, evidence: rateEvidence(hits, of.length) };
       }),
       labelledFlagged,
+      hits: injected.map((i) => i.o.flags.some((f) => f.name === i.metric && flagged(f))),
       measured: 'rescored',
     };
   });
@@ -161,6 +164,7 @@ export interface ExactScore {
   steps: number;
   caught: { shift: number; evidence: RateEvidence }[];
   labelledFlagged: number;
+  hits: boolean[];
   /** Median `detectable` over the clean runs, per metric that reported one. */
   detectable: Map<string, number>;
   /** Median number of metrics judged (ok, regressed, improved) in a clean run. */
@@ -181,6 +185,7 @@ export function scoreExact(config: Config, history: History, plan: ReplayPlan, t
   const detectables = new Map<string, number[]>();
   const judged: number[] = [];
   const hits = new Map<number, { n: number; caught: number }>();
+  const each: boolean[] = [];
   replayGate(
     config,
     history,
@@ -205,7 +210,9 @@ export function scoreExact(config: Config, history: History, plan: ReplayPlan, t
       injected: (i, report) => {
         const h = hits.get(i.shift) ?? { n: 0, caught: 0 };
         h.n++;
-        if (report.metrics.some((m) => m.name === i.metric && m.status === 'regressed')) h.caught++;
+        const caught = report.metrics.some((m) => m.name === i.metric && m.status === 'regressed');
+        if (caught) h.caught++;
+        each.push(caught);
         hits.set(i.shift, h);
       },
     },
@@ -217,6 +224,7 @@ export function scoreExact(config: Config, history: History, plan: ReplayPlan, t
     steps,
     caught: [...hits].sort(([a], [b]) => a - b).map(([shift, h]) => ({ shift, evidence: rateEvidence(h.caught, h.n) })),
     labelledFlagged,
+    hits: each,
     detectable: new Map([...detectables].map(([name, list]) => [name, median(list)])),
     metricsPerRun: judged.length === 0 ? 0 : median(judged),
   };
