@@ -25,7 +25,7 @@ export function renderTuneText(result: TuneResult): string {
   out.push(
     `bellgate tune: series ${cleanText(result.series)}, ${result.runs} runs; ${result.replayed} replayed clean (each judged against the runs before it), ` +
       `${result.injected} regressions injected (${shifts}, one metric at a time on its worse side); ` +
-      `${formatNumber(result.metricsPerRun)} metrics judged in a typical run; target ${result.target} false alarms per 100 clean runs`,
+      `${formatNumber(result.metricsPerRun)} metrics judged in a typical run; target: at most ${result.target} false alarms per 100 clean runs`,
   );
   const r = result.recommendation;
   if (r === undefined) {
