@@ -2592,7 +2592,7 @@ exports.basename = (path, { windows } = {}) => {
 /***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
 
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var _cli_main_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5096);
+/* harmony import */ var _cli_main_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5103);
 
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
 process.stdout.on('error', (e) => {
@@ -2624,16 +2624,16 @@ __nccwpck_require__.d(__webpack_exports__, {
   v: () => (/* binding */ judgeRequestedRun)
 });
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 16 modules
-var gate = __nccwpck_require__(2205);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 17 modules
+var gate = __nccwpck_require__(1027);
 // EXTERNAL MODULE: ./src/inputs/exact-place.ts
 var exact_place = __nccwpck_require__(8436);
 // EXTERNAL MODULE: ./src/inputs/units.ts
 var units = __nccwpck_require__(4702);
 // EXTERNAL MODULE: ./src/config/load.ts + 11 modules
 var load = __nccwpck_require__(9679);
-// EXTERNAL MODULE: ./src/cli/load-run.ts + 54 modules
-var load_run = __nccwpck_require__(4255);
+// EXTERNAL MODULE: ./src/cli/load-run.ts + 55 modules
+var load_run = __nccwpck_require__(3355);
 // EXTERNAL MODULE: ./src/cli/open-history.ts
 var open_history = __nccwpck_require__(9793);
 // EXTERNAL MODULE: ./src/errors/input-error.ts
@@ -2704,7 +2704,7 @@ async function judgeRequestedRun(ctx, options) {
 
 /***/ }),
 
-/***/ 4255:
+/***/ 3355:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -3617,8 +3617,56 @@ function globSync(globInput, options) {
 var input_error = __nccwpck_require__(3712);
 // EXTERNAL MODULE: ./src/files/read-user-file.ts
 var read_user_file = __nccwpck_require__(7990);
-// EXTERNAL MODULE: ./src/model/moments.ts
-var moments = __nccwpck_require__(8884);
+;// CONCATENATED MODULE: ./src/model/moments.ts
+/**
+ * Mean and sum of squared deviations by the corrected two-pass algorithm (Chan, Golub & LeVeque,
+ * "Algorithms for computing the sample variance", 1983): the second pass subtracts the mean first,
+ * and the small correction term removes the rounding left in the mean. Large offsets (values like
+ * 1e13 + small noise, NIST NumAcc4) keep their precision, which a one-pass sum of squares loses.
+ * O(n) time, O(1) space. Throws RangeError on an empty input or a non-finite value.
+ *
+ * @example meanAndSquares([1, 2, 3]) // { n: 3, mean: 2, squares: 2 }
+ */
+function meanAndSquares(values) {
+    const n = values.length;
+    if (n === 0)
+        throw new RangeError('cannot fit an empty set of values');
+    let sum = 0;
+    for (let i = 0; i < n; i++) {
+        const x = values[i];
+        if (!Number.isFinite(x))
+            throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
+        sum += x;
+    }
+    const first = sum / n;
+    let squares = 0;
+    let drift = 0;
+    for (let i = 0; i < n; i++) {
+        const d = values[i] - first;
+        squares += d * d;
+        drift += d;
+    }
+    squares -= (drift * drift) / n;
+    return { n, mean: first + drift / n, squares: Math.max(0, squares) };
+}
+/** Arithmetic mean (two-pass, see meanAndSquares). @example mean([2, 4]) // 3 */
+function mean(values) {
+    return meanAndSquares(values).mean;
+}
+/**
+ * Variance dividing by n ("mle", the maximum-likelihood estimate) or by n - 1 ("unbiased").
+ * @example variance([1, 2, 3, 4], 'mle') // 1.25
+ */
+function variance(values, divisor) {
+    const { n, squares } = meanAndSquares(values);
+    if (divisor === 'unbiased') {
+        if (n < 2)
+            throw new RangeError('the unbiased variance needs at least 2 values');
+        return squares / (n - 1);
+    }
+    return squares / n;
+}
+
 // EXTERNAL MODULE: ./src/model/median.ts
 var median = __nccwpck_require__(71);
 ;// CONCATENATED MODULE: ./src/inputs/aggregate.ts
@@ -3636,7 +3684,7 @@ function aggregateSamples(values, kind) {
         throw new Error('aggregateSamples needs at least one value');
     switch (kind) {
         case 'mean':
-            return (0,moments/* mean */.i2)(values);
+            return mean(values);
         case 'min':
             return values.reduce((a, b) => Math.min(a, b));
         case 'max':
@@ -3723,7 +3771,7 @@ function sampleSpread(values) {
         return undefined;
     const positive = values.every((v) => v > 0);
     const xs = positive ? values.map(Math.log) : values;
-    const { mean, squares } = (0,moments/* meanAndSquares */.R7)(xs);
+    const { mean, squares } = meanAndSquares(xs);
     const sd = Math.sqrt(squares / (xs.length - 1));
     if (positive)
         return sd;
@@ -12380,7 +12428,7 @@ function parsePrefixes(values) {
 
 /***/ }),
 
-/***/ 5096:
+/***/ 5103:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -12509,8 +12557,8 @@ function firstLine(s) {
  */
 const OK_ROWS_LISTED = 30;
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 16 modules
-var gate = __nccwpck_require__(2205);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 17 modules
+var gate = __nccwpck_require__(1027);
 // EXTERNAL MODULE: ./src/gate/missing-metrics.ts
 var missing_metrics = __nccwpck_require__(4719);
 // EXTERNAL MODULE: ./src/report/reason.ts
@@ -12968,8 +13016,8 @@ var exact_place = __nccwpck_require__(8436);
 var units = __nccwpck_require__(4702);
 // EXTERNAL MODULE: ./src/config/load.ts + 11 modules
 var load = __nccwpck_require__(9679);
-// EXTERNAL MODULE: ./src/cli/load-run.ts + 54 modules
-var load_run = __nccwpck_require__(4255);
+// EXTERNAL MODULE: ./src/cli/load-run.ts + 55 modules
+var load_run = __nccwpck_require__(3355);
 ;// CONCATENATED MODULE: ./src/history/read-window.ts
 /**
  * How many of the newest runs a check reads: twice the largest `window` any metric uses. A metric
@@ -13366,8 +13414,8 @@ function recordCommand(ctx) {
     return cmd.action((options) => runRecord(ctx, options));
 }
 
-// EXTERNAL MODULE: ./src/model/tails.ts + 3 modules
-var tails = __nccwpck_require__(323);
+// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
+var tails = __nccwpck_require__(2170);
 ;// CONCATENATED MODULE: ./src/report/explain.ts
 
 
@@ -14222,7 +14270,7 @@ function reportCommand(ctx) {
         'bellgate report --history h.json --metrics bench.json --html out/report.html --title "Nightly"',
     ]);
     // Imported when the command runs: d3 and the page code are needed by this command only.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__nccwpck_require__.e(850), __nccwpck_require__.e(574)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6574))).runReport(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__nccwpck_require__.e(850), __nccwpck_require__.e(29)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6029))).runReport(ctx, options));
 }
 
 // EXTERNAL MODULE: external "node:fs"
@@ -14973,12 +15021,437 @@ function checkLabels(labels, history) {
     }
 }
 
+// EXTERNAL MODULE: ./src/model/special/incomplete-beta.ts
+var incomplete_beta = __nccwpck_require__(916);
 // EXTERNAL MODULE: ./src/config/rules.ts
 var config_rules = __nccwpck_require__(5413);
 // EXTERNAL MODULE: ./src/model/median.ts
 var median = __nccwpck_require__(71);
-// EXTERNAL MODULE: ./src/model/family.ts
-var model_family = __nccwpck_require__(7089);
+;// CONCATENATED MODULE: ./src/gate/tune/replay.ts
+
+
+
+/** Injected shift sizes (issue 13 item 7). */
+const SHIFTS = [0.05, 0.1, 0.2];
+/** Newest runs replayed by default: bounds the time (every run is a few gate calls per setting). */
+const DEFAULT_LAST = 100;
+/**
+ * The replay plan: the newest `last` runs from min-runs on, each judged against the runs before
+ * it, and per judged run and shift size `perSize` injections, each on one metric of the run.
+ * Metrics are taken in turn per size (offset between sizes), so every size visits every metric
+ * evenly and one run carries different metrics for different sizes. Deterministic.
+ */
+function replayPlan(config, history, options = {}) {
+    const last = options.last ?? DEFAULT_LAST;
+    const perSize = options.perSize ?? 1;
+    const shifts = options.shifts ?? SHIFTS;
+    const labelled = options.labelled ?? new Set();
+    const first = Math.max(1, config.defaults.minRuns, history.runs.length - last);
+    const runs = [];
+    for (let k = first; k < history.runs.length; k++)
+        runs.push(k);
+    const injections = [];
+    let turn = 0;
+    for (const k of runs) {
+        if (labelled.has(k))
+            continue;
+        const names = injectable(config, history, k);
+        if (names.length === 0)
+            continue;
+        const offset = Math.max(1, Math.floor(names.length / shifts.length));
+        for (let r = 0; r < perSize; r++, turn++)
+            shifts.forEach((shift, si) => injections.push({ run: k, metric: names[(turn + si * offset) % names.length], shift }));
+    }
+    return { runs, labelled, injections };
+}
+/** Metrics of run k that a rule does not ignore and that the runs before it hold. */
+function injectable(config, history, k) {
+    const names = [];
+    for (const [name, column] of history.columns) {
+        if (!Number.isFinite(column.values[k]) || (0,config_rules/* settingsFor */.z)(config, name).ignore)
+            continue;
+        if (column.values.slice(0, k).some((v) => Number.isFinite(v)))
+            names.push(name);
+    }
+    return names.sort();
+}
+/** Runs after an alarm that must hold its level for it to count as a lasting step, not a false alarm. */
+const HOLD_RUNS = 5;
+/**
+ * Whether an alarm of run k on `name` (value and relative change from the report) was a real
+ * lasting step of the history rather than a false alarm: the median of the metric's next
+ * HOLD_RUNS values (later runs of the history, which the replay of run k never saw) keeps at least
+ * half of the change, on the same side, from the same centre. A history with a merged change
+ * flags it when it comes; calling that a false alarm would punish the gate for being right.
+ * False when fewer than HOLD_RUNS later runs hold the metric (the end of the history: no hindsight).
+ * @example holdsLater(history, 30, 'timing/t27', 118, 0.18) // true for a +15% step kept since
+ */
+function holdsLater(history, k, name, value, change) {
+    const column = history.columns.get(name);
+    if (column === undefined || !Number.isFinite(change) || change === 0)
+        return false;
+    const later = [];
+    for (let i = k + 1; i < history.runs.length && later.length < HOLD_RUNS; i++)
+        if (Number.isFinite(column.values[i]))
+            later.push(column.values[i]);
+    if (later.length < HOLD_RUNS)
+        return false;
+    const centre = value / (1 + change);
+    const kept = ((0,median/* median */.J)(later) - centre) / centre;
+    return Math.sign(kept) === Math.sign(change) && Math.abs(kept) >= Math.abs(change) / 2;
+}
+/** The history before run k: what the gate knew when run k came. */
+function historyBefore(history, k) {
+    const columns = new Map();
+    for (const [name, column] of history.columns)
+        columns.set(name, {
+            ...(column.unit === undefined ? {} : { unit: column.unit }),
+            values: column.values.slice(0, k),
+        });
+    return { ...history, runs: history.runs.slice(0, k), columns };
+}
+/** Run k of the history as a Run to judge, with an injected shift when given. */
+function runAt(config, history, k, injection) {
+    const metrics = new Map();
+    for (const [name, column] of history.columns) {
+        let value = column.values[k];
+        if (!Number.isFinite(value))
+            continue;
+        if (injection?.metric === name) {
+            const lower = (0,config_rules/* settingsFor */.z)(config, name).worse === 'lower';
+            value *= lower ? 1 - injection.shift : 1 + injection.shift;
+        }
+        metrics.set(name, { value, count: 1, ...(column.unit === undefined ? {} : { unit: column.unit }) });
+    }
+    return { metrics, meta: new Map() };
+}
+/**
+ * Replays the real gate (runGate) over the plan with one config: every planned run clean, then
+ * every injection, each judged against the runs before it. `visit` sees each report. Pure.
+ * Cost: (runs + injections) gate calls.
+ */
+function replayGate(config, history, plan, visit, tick = () => { }) {
+    const before = new Map();
+    const prefix = (k) => {
+        let h = before.get(k);
+        if (h === undefined)
+            before.set(k, (h = historyBefore(history, k)));
+        return h;
+    };
+    const judge = (k, injection) => {
+        const runner = history.runs[k].runner;
+        return (0,gate/* runGate */.R)({
+            config,
+            history: prefix(k),
+            run: runAt(config, history, k, injection),
+            series: history.series,
+            ...(runner === undefined ? {} : { runner }),
+        });
+    };
+    for (const k of plan.runs) {
+        visit.clean(k, judge(k));
+        tick();
+    }
+    for (const injection of plan.injections) {
+        visit.injected(injection, judge(injection.run, injection));
+        tick();
+    }
+}
+
+;// CONCATENATED MODULE: ./src/gate/tune/evidence.ts
+
+/**
+ * The p-quantile of Beta(a, b): the x with I_x(a, b) = p, by bisection on the regularized
+ * incomplete beta (monotone in x), 200 halvings at most, so the loop is bounded and exact to
+ * double precision. Throws RangeError unless 0 <= p <= 1 and a, b > 0.
+ * @example betaQuantile(0.975, 1, 10) // 0.3084971078187608
+ */
+function betaQuantile(p, a, b) {
+    if (!(p >= 0 && p <= 1) || !(a > 0 && b > 0))
+        throw new RangeError(`betaQuantile needs 0 <= p <= 1 and a, b > 0, got p ${p}, a ${a}, b ${b}`);
+    let lo = 0;
+    let hi = 1;
+    for (let i = 0; i < 200 && hi - lo > 0; i++) {
+        const mid = (lo + hi) / 2;
+        if (mid === lo || mid === hi)
+            break;
+        if ((0,incomplete_beta/* regularizedBeta */.RL)(a, b, (0,incomplete_beta/* betaPointAt */.kg)(mid), false) < p)
+            lo = mid;
+        else
+            hi = mid;
+    }
+    return (lo + hi) / 2;
+}
+/**
+ * The exact (Clopper-Pearson 1934) 95% interval of a binomial rate: lower = Beta(0.025; x, n - x + 1),
+ * upper = Beta(0.975; x + 1, n - x), with 0 and 1 at the ends; plus the rule of three for x = 0.
+ * @example rateEvidence(0, 52).ruleOfThree // 0.0577
+ */
+function rateEvidence(events, trials) {
+    if (trials === 0)
+        return { events, trials, rate: 0, lower: 0, upper: 1 };
+    const lower = events === 0 ? 0 : betaQuantile(0.025, events, trials - events + 1);
+    const upper = events === trials ? 1 : betaQuantile(0.975, events + 1, trials - events);
+    return {
+        events,
+        trials,
+        rate: events / trials,
+        lower,
+        upper,
+        ...(events === 0 ? { ruleOfThree: Math.min(1, 3 / trials) } : {}),
+    };
+}
+
+;// CONCATENATED MODULE: ./src/gate/tune/setting.ts
+
+/** Budgets tried with holm, loosest first. */
+const BUDGETS = [0.05, 0.02, 0.01, 0.005, 0.002, 0.001];
+/** Cutoffs tried with family none, loosest first. */
+const CUTOFFS = [0.01, 1e-3, 1e-4, 1e-5, 1e-6];
+/**
+ * The structures of the ladder: transform auto (the log scale for timings) or none, shared move
+ * on or off, change points on or off; the configured one first, so it wins ties.
+ */
+function structures(config) {
+    const own = {
+        transform: config.defaults.transform,
+        sharedMove: config.defaults.sharedMove,
+        changePoints: config.defaults.changePoints,
+    };
+    const all = [own];
+    for (const transform of ['auto', 'none'])
+        for (const sharedMove of [true, false])
+            for (const changePoints of [true, false]) {
+                const s = { transform, sharedMove, changePoints };
+                if (!all.some((t) => sameStructure(t, s)))
+                    all.push(s);
+            }
+    return all;
+}
+function sameStructure(a, b) {
+    return a.transform === b.transform && a.sharedMove === b.sharedMove && a.changePoints === b.changePoints;
+}
+/**
+ * The config with the setting in `defaults` (rules still override per metric) and at the top
+ * level, as `--write` leaves it. A structure alone (no family) keeps the config's family.
+ */
+function withSetting(config, setting) {
+    const defaults = {
+        ...config.defaults,
+        transform: setting.transform,
+        sharedMove: setting.sharedMove,
+        changePoints: setting.changePoints,
+        ...(setting.cutoff === undefined ? {} : { cutoff: setting.cutoff }),
+    };
+    return {
+        ...config,
+        defaults,
+        ...(setting.family === undefined ? {} : { family: setting.family }),
+        ...(setting.budget === undefined ? {} : { budget: setting.budget }),
+    };
+}
+/**
+ * What the model promises as the chance of a false alarm in a clean run, per 100 runs: for holm
+ * the budget (Holm 1979 holds the chance of any false alarm at it; so do bonferroni, and
+ * Benjamini-Hochberg when every metric is clean); for family none, m metrics
+ * each at the one-sided Gaussian tail of the cutoff's sigma, 1 - (1 - level / 2)^m.
+ * @example promisedPer100({ ...s, family: 'none', cutoff: 0.01 }, 50) // ≈ 5.8
+ */
+function promisedPer100(setting, metricsPerRun) {
+    if (setting.family !== 'none')
+        return 100 * setting.budget;
+    const level = (0,tails/* cutoffLevel */.yp)(setting.cutoff) / 2;
+    return 100 * -Math.expm1(metricsPerRun * Math.log1p(-level));
+}
+/** The setting in the config's words, e.g. "transform auto, shared move on, change points off, holm at 1%". */
+function describeSetting(s) {
+    const decide = s.family === 'none' ? `family none, cutoff ${s.cutoff}` : `${s.family} at ${percent(s.budget)}`;
+    return `transform ${s.transform}, shared move ${s.sharedMove ? 'on' : 'off'}, change points ${s.changePoints ? 'on' : 'off'}, ${decide}`;
+}
+/** A share as the config writes a percent: 0.005 -> "0.5%". */
+function percent(share) {
+    return `${Number((100 * share).toPrecision(6))}%`;
+}
+/** The setting a config already has. */
+function settingOf(config) {
+    const { transform, sharedMove, changePoints, cutoff } = config.defaults;
+    const family = config.family;
+    return {
+        transform,
+        sharedMove,
+        changePoints,
+        family,
+        ...(family === 'none' ? { cutoff } : { budget: config.budget }),
+    };
+}
+function sameSetting(a, b) {
+    return sameStructure(a, b) && a.family === b.family && a.budget === b.budget && a.cutoff === b.cutoff;
+}
+
+;// CONCATENATED MODULE: ./src/gate/tune/score.ts
+
+
+
+
+
+/**
+ * Replays one structure through the real gate once, at the loosest thresholds (holm with budget
+ * 1: every metric on its worse side beyond its tolerance is flagged), and scores every budget of
+ * BUDGETS and cutoff of CUTOFFS from the reports: a stricter threshold flags exactly the flagged
+ * metrics whose adjusted tail (holm) or relative density (none) is below it — the gate's own
+ * decision (src/gate/decide.ts), which tune-search.test.ts checks against the gate run at a
+ * stricter setting. A shared move is unsettled at budget b when its tail is below b.
+ */
+function scoreStructure(base, history, plan, structure, metricsPerRun, tick) {
+    const config = withSetting(base, {
+        transform: structure.transform,
+        sharedMove: structure.sharedMove,
+        changePoints: structure.changePoints,
+        family: 'holm',
+        budget: 1,
+    });
+    const ruleCutoffs = ruleCutoffOf(base);
+    const observe = (report, k) => ({
+        flags: report.metrics
+            .filter((m) => m.status === 'regressed')
+            .map((m) => {
+            const rule = ruleCutoffs(m.name);
+            return {
+                name: m.name,
+                adjusted: m.adjusted ?? 0,
+                relativeDensity: m.relativeDensity ?? 0,
+                lasting: k !== undefined && holdsLater(history, k, m.name, m.value, m.change ?? Number.NaN),
+                ...(rule === undefined ? {} : { ruleCutoff: rule }),
+            };
+        }),
+        sharedTail: Math.min(Infinity, ...report.shared.map((s) => s.tail ?? Infinity)),
+    });
+    const clean = [];
+    const injected = [];
+    replayGate(config, history, plan, {
+        clean: (k, report) => clean.push({ k, o: observe(report, k) }),
+        injected: (i, report) => injected.push({ shift: i.shift, metric: i.metric, o: observe(report) }),
+    }, tick);
+    const { transform, sharedMove, changePoints } = structure;
+    const shape = { transform, sharedMove, changePoints };
+    const settings = [
+        ...BUDGETS.map((budget) => ({ ...shape, family: 'holm', budget })),
+        ...CUTOFFS.map((cutoff) => ({ ...shape, family: 'none', cutoff })),
+    ];
+    const shifts = [...new Set(plan.injections.map((i) => i.shift))].sort((a, b) => a - b);
+    return settings.map((setting) => {
+        const flagged = (f) => setting.family === 'holm' ? f.adjusted <= setting.budget : f.relativeDensity < (f.ruleCutoff ?? setting.cutoff);
+        const sharedBudget = setting.family === 'holm' ? setting.budget : base.budget;
+        let alarms = 0;
+        let unsettled = 0;
+        let steps = 0;
+        let labelledFlagged = 0;
+        let trials = 0;
+        for (const { k, o } of clean) {
+            const fired = o.flags.filter(flagged);
+            const beyond = o.sharedTail < sharedBudget;
+            const blocks = fired.length > 0 || (beyond && base.unsettled === 'block');
+            if (plan.labelled.has(k)) {
+                if (blocks)
+                    labelledFlagged++;
+                continue;
+            }
+            trials++;
+            if (fired.some((f) => !f.lasting) || (beyond && base.unsettled === 'block'))
+                alarms++;
+            else if (blocks)
+                steps++;
+            else if (beyond)
+                unsettled++;
+        }
+        return {
+            setting,
+            falseAlarms: rateEvidence(alarms, trials),
+            unsettled,
+            steps,
+            promisedPer100: promisedPer100(setting, metricsPerRun),
+            caught: shifts.map((shift) => {
+                const of = injected.filter((i) => i.shift === shift);
+                const hits = of.filter((i) => i.o.flags.some((f) => f.name === i.metric && flagged(f))).length;
+                return { shift, evidence: rateEvidence(hits, of.length) };
+            }),
+            labelledFlagged,
+            hits: injected.map((i) => i.o.flags.some((f) => f.name === i.metric && flagged(f))),
+            measured: 'rescored',
+        };
+    });
+}
+/** A metric's cutoff when a rule sets it (so the candidate's defaults cutoff does not apply), else undefined. */
+function ruleCutoffOf(config) {
+    const probe = { ...config, defaults: { ...config.defaults, cutoff: 0.5 } };
+    const cache = new Map();
+    return (name) => {
+        if (!cache.has(name)) {
+            const own = (0,config_rules/* settingsFor */.z)(probe, name).cutoff;
+            cache.set(name, own === 0.5 ? undefined : own);
+        }
+        return cache.get(name);
+    };
+}
+/**
+ * Replays the gate at exactly `config` (no rescoring): false alarms are clean runs whose report
+ * blocks (unless every metric it flags is a lasting step, holdsLater), a catch is the injected
+ * metric regressed — as the noise evaluator counts them.
+ */
+function scoreExact(config, history, plan, tick) {
+    let alarms = 0;
+    let unsettled = 0;
+    let steps = 0;
+    let trials = 0;
+    let labelledFlagged = 0;
+    const detectables = new Map();
+    const judged = [];
+    const hits = new Map();
+    const each = [];
+    replayGate(config, history, plan, {
+        clean: (k, report) => {
+            judged.push(report.metrics.filter((m) => score_JUDGED.has(m.status)).length);
+            if (plan.labelled.has(k)) {
+                if (report.blocks)
+                    labelledFlagged++;
+                return;
+            }
+            trials++;
+            const fired = report.metrics.filter((m) => m.status === 'regressed');
+            const lasting = fired.every((m) => holdsLater(history, k, m.name, m.value, m.change ?? Number.NaN));
+            if (report.blocks && (fired.length === 0 || !lasting))
+                alarms++;
+            else if (report.blocks)
+                steps++;
+            else if (report.verdict === 'unsettled')
+                unsettled++;
+            for (const m of report.metrics)
+                if (m.detectable !== undefined && Number.isFinite(m.detectable))
+                    detectables.set(m.name, [...(detectables.get(m.name) ?? []), m.detectable]);
+        },
+        injected: (i, report) => {
+            const h = hits.get(i.shift) ?? { n: 0, caught: 0 };
+            h.n++;
+            const caught = report.metrics.some((m) => m.name === i.metric && m.status === 'regressed');
+            if (caught)
+                h.caught++;
+            each.push(caught);
+            hits.set(i.shift, h);
+        },
+    }, tick);
+    return {
+        falseAlarms: rateEvidence(alarms, trials),
+        unsettled,
+        steps,
+        caught: [...hits].sort(([a], [b]) => a - b).map(([shift, h]) => ({ shift, evidence: rateEvidence(h.caught, h.n) })),
+        labelledFlagged,
+        hits: each,
+        detectable: new Map([...detectables].map(([name, list]) => [name, (0,median/* median */.J)(list)])),
+        metricsPerRun: judged.length === 0 ? 0 : (0,median/* median */.J)(judged),
+    };
+}
+const score_JUDGED = new Set(['ok', 'regressed', 'improved']);
+
 ;// CONCATENATED MODULE: ./src/gate/tune/truth.ts
 /**
  * Indexes labels (already checked with checkLabels) by run. A whole-run label covers every metric
@@ -15010,911 +15483,6 @@ function isLabelled(truth, run, metric) {
     return labelled === 'run' || (labelled !== undefined && labelled.has(metric));
 }
 
-;// CONCATENATED MODULE: ./src/gate/tune/ladder.ts
-
-
-
-/** The candidate cutoffs tried when none are given, loosest first. */
-const DEFAULT_LADDER = [0.1, 0.05, 0.02, 0.01, 0.005, 0.001, 1e-4, 1e-5, 1e-6];
-/**
- * Scores a ladder of cutoffs (every metric at the same cutoff) from one replay, for one family
- * setting. A replayed metric alarms when it lies on its worse side beyond the tolerance and
- * - family none: relative density < cutoff (the gate's plain test);
- * - bonferroni / holm / fdr: its tail, adjusted with every other metric judged in that run
- *   (adjustTails), < cutoffLevel(cutoff) (the gate's family test).
- * Adjusted tails are computed once per run, so the cost is O(points x (log metrics + cutoffs)).
- * @example scoreLadder(replay, [0.01], 'none')[0].runsFlaggedPer100 // 2.5
- */
-function scoreLadder(replay, cutoffs, family, truth) {
-    const stat = family === 'none' ? replay.metrics.map((m) => m.relativeDensity) : adjustedTails(replay, family);
-    const runsJudged = new Set();
-    for (const m of replay.metrics)
-        for (const r of m.run)
-            runsJudged.add(r);
-    const runs = runsJudged.size;
-    return cutoffs.map((cutoff) => {
-        const level = (0,tails/* cutoffLevel */.yp)(cutoff);
-        const threshold = family === 'none' ? cutoff : level;
-        const perMetric = replay.metrics.map(() => 0);
-        const falseRuns = new Set();
-        const alarmedRuns = new Set();
-        const caughtPairs = new Set();
-        let trueAlarms = 0;
-        replay.metrics.forEach((m, j) => {
-            const values = stat[j];
-            for (let p = 0; p < m.run.length; p++) {
-                if (m.side[p] !== 1 || !(values[p] < threshold))
-                    continue;
-                const run = m.run[p];
-                alarmedRuns.add(run);
-                if (isLabelled(truth, run, m.name)) {
-                    trueAlarms++;
-                    caughtPairs.add(truth.byRun.get(run) === 'run' ? `${run}` : `${run}\u0000${m.name}`);
-                }
-                else {
-                    perMetric[j]++;
-                    falseRuns.add(run);
-                }
-            }
-        });
-        const falseAlarms = perMetric.reduce((a, b) => a + b, 0);
-        const row = {
-            cutoff,
-            sigma: (0,tails/* cutoffSigma */.DE)(cutoff),
-            level,
-            falseAlarms,
-            alarmsPerRun: runs === 0 ? 0 : falseAlarms / runs,
-            runsFlagged: falseRuns.size,
-            runsFlaggedPer100: runs === 0 ? 0 : (100 * falseRuns.size) / runs,
-            perMetric,
-        };
-        if (truth !== undefined)
-            row.labelled = labelScore(truth.count, caughtPairs.size, trueAlarms, falseAlarms);
-        return row;
-    });
-}
-/** Precision, recall and F1 (van Rijsbergen's F-measure with beta = 1). */
-function labelScore(labels, caught, trueAlarms, falseAlarms) {
-    const alarms = trueAlarms + falseAlarms;
-    const precision = alarms === 0 ? 0 : trueAlarms / alarms;
-    const recall = labels === 0 ? 0 : caught / labels;
-    const f1 = precision + recall === 0 ? 0 : (2 * precision * recall) / (precision + recall);
-    return { labels, caught, trueAlarms, falseAlarms, precision, recall, f1 };
-}
-/** For each metric and replayed run, its tail adjusted over all metrics judged in that run. */
-function adjustedTails(replay, family) {
-    const out = replay.metrics.map((m) => new Array(m.run.length).fill(1));
-    const byRun = new Map();
-    replay.metrics.forEach((m, j) => {
-        m.run.forEach((run, p) => {
-            let list = byRun.get(run);
-            if (list === undefined)
-                byRun.set(run, (list = []));
-            list.push([j, p]);
-        });
-    });
-    for (const members of byRun.values()) {
-        const adjusted = (0,model_family/* adjustTails */.F)(members.map(([j, p]) => replay.metrics[j].tail[p]), family);
-        members.forEach(([j, p], i) => (out[j][p] = adjusted[i]));
-    }
-    return out;
-}
-
-// EXTERNAL MODULE: ./src/model/change-points.ts
-var change_points = __nccwpck_require__(669);
-;// CONCATENATED MODULE: ./src/model/transform.ts
-/**
- * A value on the fit scale. Values must be finite, and > 0 on the log scale.
- * Throws RangeError otherwise (the gate checks values first and says which metric and run).
- * @example toFitScale(Math.E, 'log') // 1
- */
-function toFitScale(value, scale) {
-    if (!Number.isFinite(value))
-        throw new RangeError(`value ${value} is not a finite number`);
-    if (scale === 'none')
-        return value;
-    if (!(value > 0))
-        throw new RangeError(`value ${value} cannot be log-transformed (must be > 0)`);
-    return Math.log(value);
-}
-/** Back from the fit scale to the metric's own scale. @example fromFitScale(0, 'log') // 1 */
-function fromFitScale(value, scale) {
-    return scale === 'log' ? Math.exp(value) : value;
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/baseline.ts
-
-
-
-/**
- * Selects a metric's baseline for tune's per-metric replay (the gate itself takes a run apart in
- * moves.ts; tune is to replay the gate whole, issue 13 item 7), with `transform` already resolved
- * to none or log (replaySettings):
- * 1. the runs that hold the metric (with `relative-to`: that also hold a non-zero reference, and
- *    the value becomes metric / reference of the same run, cancelling a runner's common speed);
- * 2. the newest `window` of them, moved to the fit scale (`transform`);
- * 3. with `change-points` on, PELT-style segmentation of that window (detectChangePoints); when the
- *    last segment already spans `min-runs` runs, only it is kept, so a merged level change stops
- *    counting as a regression once the new level has enough history.
- * O(window) on the plain scale (older runs are counted only when `available` is read), O(runs)
- * with a transform or ratio, plus the change-point search. Throws InputError when a value cannot
- * take the transform.
- * @example selectBaseline(history, 'build/time', settings).values // [412.5, 409.9, ...]
- */
-function selectBaseline(history, name, settings) {
-    const column = history.columns.get(name);
-    const plain = settings.transform === 'none' && settings.relativeTo === undefined;
-    const selected = column === undefined
-        ? { values: [], runIds: [], available: 0 }
-        : plain
-            ? newestWindow(history, column.values, settings.window)
-            : checkedWindow(history, name, column.values, settings);
-    if (settings.relativeTo !== undefined)
-        selected.relativeTo = settings.relativeTo;
-    return settings.changePoints ? sinceLastChange(selected, settings.minRuns) : selected;
-}
-/**
- * The plain scale (no transform, no ratio), where no value can be refused: walks back from the
- * newest run only until `window` values are found (copied in one slice when none is missing), and
- * names their runs or counts the older ones only when asked (see NewestWindow).
- */
-function newestWindow(history, column, window) {
-    const count = Math.min(column.length, history.runs.length);
-    let first = count;
-    let found = 0;
-    while (first > 0 && found < window) {
-        first--;
-        if (Number.isFinite(column[first]))
-            found++;
-    }
-    let values;
-    if (found === count - first) {
-        values = column.slice(first, count);
-    }
-    else {
-        values = [];
-        for (let i = first; i < count; i++)
-            if (Number.isFinite(column[i]))
-                values.push(column[i]);
-    }
-    return new NewestWindow(values, history, column, first, count);
-}
-/**
- * A plain-scale baseline: the values, with the run ids and the `available` count computed when
- * read. Most metrics need neither (no level change, no group, not missing), and building an id
- * array per metric, or walking every older run, was most of the selection's cost on a long history.
- */
-class NewestWindow {
-    values;
-    #history;
-    #column;
-    /** Runs [first, count) hold the window (with any missing values skipped). */
-    #first;
-    #count;
-    #runIds;
-    constructor(values, history, column, first, count) {
-        this.values = values;
-        this.#history = history;
-        this.#column = column;
-        this.#first = first;
-        this.#count = count;
-    }
-    get runIds() {
-        if (this.#runIds === undefined) {
-            const ids = [];
-            for (let i = this.#first; i < this.#count; i++)
-                if (Number.isFinite(this.#column[i]))
-                    ids.push(this.#history.runs[i].id);
-            this.#runIds = ids;
-        }
-        return this.#runIds;
-    }
-    get available() {
-        let available = this.values.length;
-        for (let k = this.#first - 1; k >= 0; k--)
-            if (Number.isFinite(this.#column[k]))
-                available++;
-        return available;
-    }
-}
-/**
- * Any other scale: every value of the history is checked, since the transform or ratio can refuse
- * it. One forward pass checks and counts (in run order, so an error names the oldest bad run), then
- * a walk back from the newest run builds just the `window` kept values.
- */
-function checkedWindow(history, name, column, settings) {
-    const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo);
-    const ratio = settings.relativeTo !== undefined;
-    const count = Math.min(column.length, history.runs.length);
-    let available = 0;
-    for (let i = 0; i < count; i++) {
-        const x = pairedValue(column, reference?.values, ratio, i);
-        if (Number.isFinite(column[i]))
-            available++;
-        if (x !== undefined)
-            toHistoryFitScale(x, settings, name, history.runs[i].id);
-    }
-    const values = [];
-    const runIds = [];
-    for (let i = count - 1; i >= 0 && values.length < settings.window; i--) {
-        const x = pairedValue(column, reference?.values, ratio, i);
-        if (x === undefined)
-            continue;
-        const id = history.runs[i].id;
-        values.push(toHistoryFitScale(x, settings, name, id));
-        runIds.push(id);
-    }
-    return { values: values.reverse(), runIds: runIds.reverse(), available };
-}
-/** Run i's value, divided by the reference of the same run for a ratio; undefined when it lacks either. */
-function pairedValue(column, reference, ratio, i) {
-    const x = column[i];
-    if (!Number.isFinite(x))
-        return undefined;
-    if (!ratio)
-        return x;
-    const r = reference?.[i];
-    if (r === undefined || !Number.isFinite(r) || r === 0)
-        return undefined;
-    return x / r;
-}
-/** Keeps only the runs after the last level change, once they are at least `minRuns`. */
-function sinceLastChange(baseline, minRuns) {
-    if (baseline.values.length <= minRuns)
-        return baseline;
-    // The detector's own shortest segment (5 runs), not min-runs: forcing longer segments would
-    // place a fresh change too early and mix the old level into the new baseline.
-    const starts = (0,change_points/* detectChangePoints */.Z)(baseline.values);
-    const last = starts.filter((s) => s > 0 && s < baseline.values.length).at(-1);
-    if (last === undefined || baseline.values.length - last < minRuns)
-        return baseline;
-    // Field by field: a NewestWindow's run ids and count are getters, which a spread would drop.
-    const shortened = {
-        values: baseline.values.slice(last),
-        runIds: baseline.runIds.slice(last),
-        since: baseline.runIds[last],
-        available: baseline.available,
-        window: { values: baseline.values, runIds: baseline.runIds },
-    };
-    if (baseline.relativeTo !== undefined)
-        shortened.relativeTo = baseline.relativeTo;
-    return shortened;
-}
-function toHistoryFitScale(x, settings, name, runId) {
-    try {
-        return toFitScale(x, settings.transform);
-    }
-    catch (error) {
-        if (!(error instanceof RangeError))
-            throw error;
-        throw new input_error/* InputError */.d(`history run ${runId} has value ${x} for ${name}, which cannot be log-transformed`, {
-            where: name,
-            fix: 'use `transform: none` for this metric, or remove the bad run from the history',
-            cause: error,
-        });
-    }
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/metric-sequence.ts
-
-/**
- * Builds a metric's sequence with selectBaseline over an unbounded window and no change points,
- * so the pairing and transform are exactly the gate's; `own` is recomputed from the column with
- * the same division the gate applies to a run (value / reference), not by undoing the log, so
- * the replayed "this run" is bit-identical to what `bellgate check` would see. O(runs).
- * Throws InputError when a history value cannot take the transform (as the gate would).
- * @example metricSequence(history, 'build/time', settings).values.length // runs holding build/time
- */
-function metricSequence(history, name, settings, indexOf) {
-    const all = selectBaseline(history, name, { ...settings, window: Number.MAX_SAFE_INTEGER, changePoints: false });
-    const column = history.columns.get(name)?.values ?? [];
-    const reference = settings.relativeTo === undefined ? undefined : history.columns.get(settings.relativeTo)?.values;
-    const runIndex = all.runIds.map((id) => indexOf.get(id));
-    const own = runIndex.map((i) => {
-        const x = column[i];
-        return reference === undefined ? x : x / reference[i];
-    });
-    return { name, settings, values: all.values, own, runIds: all.runIds, runIndex };
-}
-
-// EXTERNAL MODULE: ./src/model/moments.ts
-var moments = __nccwpck_require__(8884);
-// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
-var normal = __nccwpck_require__(2986);
-;// CONCATENATED MODULE: ./src/model/normality.ts
-
-
-/**
- * Sample skewness G1, the adjusted Fisher-Pearson coefficient (Joanes & Gill 1998, "Comparing
- * measures of sample skewness and kurtosis"; also NIST/SEMATECH e-Handbook 1.3.5.11):
- *   g1 = m3 / m2^(3/2),  m_k = (1/n) sum (x - mean)^k,   G1 = g1 sqrt(n (n - 1)) / (n - 2).
- * Positive for a long right tail (timings often are; `transform: log` may suit them). A constant
- * sample has no asymmetry to report: 0. O(n). Throws RangeError on fewer than 3 values or
- * non-finite values.
- * @example skewness([1, 2, 3, 10]) // ≈ 1.7636
- */
-function skewness(values) {
-    const { n, mean, squares } = (0,moments/* meanAndSquares */.R7)(values);
-    if (n < 3)
-        throw new RangeError(`skewness needs at least 3 values, got ${n}`);
-    if (squares === 0)
-        return 0;
-    let cubes = 0;
-    for (let i = 0; i < n; i++) {
-        const d = values[i] - mean;
-        cubes += d * d * d;
-    }
-    const g1 = cubes / n / Math.pow(squares / n, 1.5);
-    return (g1 * Math.sqrt(n * (n - 1))) / (n - 2);
-}
-/**
- * p-value of A*^2 for the composite normal case (mean and variance estimated), the piecewise
- * formulas of D'Agostino & Stephens (1986), "Goodness-of-Fit Techniques", Table 4.9.
- * Throws RangeError on a negative or NaN A*^2.
- * @example andersonDarlingPValue(0.752) // ≈ 0.05
- */
-function andersonDarlingPValue(a) {
-    if (!(a >= 0))
-        throw new RangeError(`an Anderson-Darling statistic must be 0 or more, got ${a}`);
-    let p;
-    if (a >= 0.6)
-        p = Math.exp(1.2937 - 5.709 * a + 0.0186 * a * a);
-    else if (a >= 0.34)
-        p = Math.exp(0.9177 - 4.279 * a - 1.38 * a * a);
-    else if (a >= 0.2)
-        p = 1 - Math.exp(-8.318 + 42.796 * a - 59.938 * a * a);
-    else
-        p = 1 - Math.exp(-13.436 + 101.14 * a - 223.73 * a * a);
-    return Math.min(1, Math.max(0, p));
-}
-/**
- * Anderson-Darling test of normality with estimated mean and sd (Stephens 1974; D'Agostino &
- * Stephens 1986, section 4.8): with w_i the sorted standardised values,
- *   A^2 = -n - (1/n) sum_i (2i - 1) [ln Phi(w_i) + ln(1 - Phi(w_{n+1-i}))].
- * ln(1 - Phi(w)) is taken as ln Phi(-w), so an extreme value gives a large finite A^2 instead of
- * ln 0. Critical values of A*^2 (D'Agostino & Stephens): 0.631 at 10%, 0.752 at 5%, 1.035 at 1%.
- * O(n log n). Throws RangeError on fewer than 8 values (the p-value formulas are not meant for
- * less), non-finite values, or a constant sample (no spread to standardise by).
- * @example andersonDarling(values).pValue < 0.05 // the values do not look Gaussian
- */
-function andersonDarling(values) {
-    const { n, mean, squares } = (0,moments/* meanAndSquares */.R7)(values);
-    if (n < 8)
-        throw new RangeError(`the normality test needs at least 8 values, got ${n}`);
-    if (squares === 0) {
-        throw new RangeError('the normality test needs values that vary; all values are equal');
-    }
-    const sd = Math.sqrt(squares / (n - 1));
-    const w = Float64Array.from(values, (x) => (x - mean) / sd).sort();
-    let sum = 0;
-    for (let i = 0; i < n; i++) {
-        sum += (2 * i + 1) * ((0,normal/* normalLogCdf */.Hi)(w[i]) + (0,normal/* normalLogCdf */.Hi)(-w[n - 1 - i]));
-    }
-    const statistic = -n - sum / n;
-    const adjusted = statistic * (1 + 0.75 / n + 2.25 / (n * n));
-    return { statistic, adjusted, pValue: andersonDarlingPValue(adjusted) };
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/normality-check.ts
-
-/** Critical value of A*^2 at the 5% level, normal with estimated mean and variance (D'Agostino & Stephens 1986; see andersonDarling). */
-const AD_CRITICAL_5 = 0.752;
-/**
- * Skewness and Anderson-Darling on the raw values and on their logarithms. `transform: log` is
- * suggested when the raw values fail the 5% test (A*^2 > 0.752), every value is > 0, and the log
- * scale fits clearly better: its A*^2 at most half the raw one (our rule of thumb) and below the
- * critical value. Returns undefined for fewer than 8 values or a constant metric (nothing to test).
- * O(n log n).
- * @example normalityCheck(timings)?.suggestLog // true for log-normal timings
- */
-function normalityCheck(values) {
-    if (values.length < 8 || values.every((v) => v === values[0]))
-        return undefined;
-    const raw = shape(values);
-    const positive = values.every((v) => v > 0);
-    const logValues = positive ? values.map(Math.log) : undefined;
-    const log = logValues !== undefined && !logValues.every((v) => v === logValues[0]) ? shape(logValues) : undefined;
-    const rejectsRaw = raw.andersonDarling > AD_CRITICAL_5;
-    const suggestLog = log !== undefined &&
-        rejectsRaw &&
-        log.andersonDarling <= raw.andersonDarling / 2 &&
-        log.andersonDarling <= AD_CRITICAL_5;
-    let note;
-    if (!positive)
-        note = 'values <= 0: no log scale';
-    else if (!rejectsRaw)
-        note = 'raw scale looks Gaussian (A*² ≤ 0.752)';
-    else if (suggestLog)
-        note = `log scale fits clearly better (A*² ${fmt(log.andersonDarling)} vs ${fmt(raw.andersonDarling)})`;
-    else
-        note = 'not Gaussian on either scale (a level change or outliers?)';
-    return { n: values.length, raw, ...(log === undefined ? {} : { log }), suggestLog, note };
-}
-function shape(values) {
-    const ad = andersonDarling(values);
-    return { skewness: skewness(values), andersonDarling: ad.adjusted, pValue: ad.pValue };
-}
-function fmt(x) {
-    return x.toPrecision(3);
-}
-
-// EXTERNAL MODULE: ./src/model/density.ts
-var density = __nccwpck_require__(913);
-// EXTERNAL MODULE: ./src/model/fit.ts
-var model_fit = __nccwpck_require__(5046);
-;// CONCATENATED MODULE: ./src/model/running-moments.ts
-/**
- * Mean and sum of squared deviations of a changing set of values, updated in O(1) per value by
- * Welford's method (Welford 1962; Knuth, TAOCP vol. 2, 4.2.2): with d = x - mean,
- *   add:    n += 1, mean += d / n,       squares += d * (x - new mean)
- *   remove: n -= 1, mean -= d / n,       squares -= d * (x - new mean)
- * The updates work on deviations from the running mean, never on raw sums of squares, so values
- * with a large offset (1e7 + noise) keep their precision, unlike sum(x^2) - n mean^2.
- * A sliding window (add the newest, remove the oldest) makes replaying a long history O(n).
- * Numerical care: rounding accumulates slowly over add/remove pairs (about one ulp of the offset
- * per step); squares is clamped at 0 so cancellation never makes a variance negative, and a
- * caller replaying many thousands of steps can rebuild with `RunningMoments.of(window)`.
- * Throws RangeError on a non-finite value or removing from an empty set.
- *
- * @example const m = RunningMoments.of([1, 2, 3]); m.remove(1); m.add(4); m.mean // 3
- */
-class RunningMoments {
-    #n = 0;
-    #mean = 0;
-    #squares = 0;
-    /** A RunningMoments holding the given values. */
-    static of(values) {
-        const moments = new RunningMoments();
-        for (const x of values)
-            moments.add(x);
-        return moments;
-    }
-    get n() {
-        return this.#n;
-    }
-    /** Mean of the values held (0 when empty). */
-    get mean() {
-        return this.#mean;
-    }
-    /** Sum of squared deviations from the mean. */
-    get squares() {
-        return this.#squares;
-    }
-    add(x) {
-        if (!Number.isFinite(x))
-            throw new RangeError(`value ${x} is not a finite number`);
-        this.#n += 1;
-        const d = x - this.#mean;
-        this.#mean += d / this.#n;
-        this.#squares += d * (x - this.#mean);
-    }
-    /** Removes a value that was added before (the caller keeps the window). */
-    remove(x) {
-        if (!Number.isFinite(x))
-            throw new RangeError(`value ${x} is not a finite number`);
-        if (this.#n === 0)
-            throw new RangeError('cannot remove a value from an empty set');
-        if (this.#n === 1) {
-            this.#n = 0;
-            this.#mean = 0;
-            this.#squares = 0;
-            return;
-        }
-        this.#n -= 1;
-        const d = x - this.#mean;
-        this.#mean -= d / this.#n;
-        this.#squares = Math.max(0, this.#squares - d * (x - this.#mean));
-    }
-    /**
-     * squares / n ("mle") or squares / (n - 1) ("unbiased").
-     * Throws RangeError when empty, or with fewer than 2 values for "unbiased".
-     */
-    variance(divisor) {
-        if (divisor === 'unbiased') {
-            if (this.#n < 2)
-                throw new RangeError('the unbiased variance needs at least 2 values');
-            return this.#squares / (this.#n - 1);
-        }
-        if (this.#n === 0)
-            throw new RangeError('the variance of an empty set is undefined');
-        return this.#squares / this.#n;
-    }
-}
-
-;// CONCATENATED MODULE: ./src/gate/sides.ts
-/**
- * Classifies a deviation (this run minus the baseline centre) by the metric's `worse` setting.
- * `worse: both` has no better side: any move away from the centre is worse. A zero move is neither.
- * Transforms are monotone, so the sign on the fit scale equals the sign on the metric's own scale.
- * @example directionOf(0.3, 'lower') // 'better'
- */
-function directionOf(deviation, worse) {
-    if (deviation === 0 || Number.isNaN(deviation))
-        return 'none';
-    if (worse === 'both')
-        return 'worse';
-    const up = deviation > 0;
-    return up === (worse === 'higher') ? 'worse' : 'better';
-}
-/**
- * +1 when higher is worse, -1 when lower is worse; the sign that turns a deviation into a
- * "worse is positive" one. `both` counts as +1 (the group's common move is read as a slowdown).
- * @example worseSign('lower') // -1
- */
-function worseSign(worse) {
-    return worse === 'lower' ? -1 : 1;
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/score-alone.ts
-
-
-
-
-
-/**
- * The settings tune replays a metric with: `transform: auto` resolved by the metric's unit (the
- * log scale for a time unit), as the gate resolves it.
- * @example replaySettings({ ...defaults, transform: 'auto' }, 'ms').transform // 'log'
- */
-function replaySettings(settings, unit) {
-    if (settings.transform !== 'auto')
-        return settings;
-    const timing = unit !== undefined && (0,units/* unitScale */.$G)(unit)?.[0]?.dimension === 'time';
-    return { ...settings, transform: timing ? 'log' : 'none' };
-}
-/** Scores `value` against `baseline` (fit-scale values) alone; unscored below min-runs. */
-function scoreMetric(_name, settings, baseline, value) {
-    const scale = settings.transform;
-    const n = baseline.length;
-    if (n === 0 || n < settings.minRuns) {
-        return { scored: false, relativeDensity: 1, tail: 1, direction: 'none', beyondTolerance: false };
-    }
-    const current = toFitScale(value, scale);
-    const fit = floored(baseline, settings);
-    const figures = decisionFigures(current, fit, settings);
-    return {
-        scored: true,
-        ...figures,
-        direction: directionOf(current - fit.mean, settings.worse),
-        beyondTolerance: beyondTolerance(value, fromFitScale(fit.mean, scale), settings.tolerance),
-    };
-}
-function floored(values, settings) {
-    const raw = (0,model_fit/* fitGaussian */.Dk)(values, 'mle', 0);
-    const floor = fitScaleFloor(settings.resolution, settings.transform, raw.mean);
-    return floor > 0 ? (0,model_fit/* fitGaussian */.Dk)(values, 'mle', floor) : raw;
-}
-/**
- * The sigma floor on the fit scale for a `resolution` in the metric's own unit: on the log scale a
- * step dx near a centre m is a step of about dx / m in log x.
- * @example fitScaleFloor(2, 'log', Math.log(100)) // 0.02
- */
-function fitScaleFloor(resolution, scale, centre) {
-    if (scale === 'none' || resolution === 0)
-        return resolution;
-    return resolution / Math.exp(centre);
-}
-/** Whether |value - centre| exceeds the tolerance (a move exactly at it is within). */
-function beyondTolerance(value, centre, tolerance) {
-    const amount = tolerance.kind === 'absolute' ? tolerance.amount : Math.abs(centre) * tolerance.amount;
-    return Math.abs(value - centre) > amount;
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/replay-point.ts
-/** An empty replay for a metric. */
-function emptyReplay(name, method) {
-    return { name, method, run: [], relativeDensity: [], tail: [], side: [] };
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/incremental-replay.ts
-
-
-
-
-
-
-
-
-/**
- * Whether a metric's settings let the replay slide one RunningMoments window instead of refitting:
- * `fit: mle` or `unbiased` (the median of robust has no O(1) update) and no change points (the
- * baseline's start would jump). `relative-to` is fine: the sequence already holds the ratios.
- * @example canSlide({ ...settings, fit: 'robust' }) // false
- */
-function canSlide(settings) {
-    return !settings.changePoints;
-}
-/**
- * Replays a metric with a sliding window: Welford updates (RunningMoments) add the newest run and
- * drop the one leaving the window, O(1) per run, so O(runs) per metric. The fit and the figures
- * follow judgeMetric step by step (sd floored at the resolution on the fit scale; predictive
- * Student-t with n - 1 dof and scale s sqrt(1 + 1/n), else plug-in). Two guards keep it equal to
- * the refit: the moments are rebuilt from the window every `window` steps (rounding drift stays
- * bounded), and a window with (almost) no spread is refitted exactly with fitGaussian, since a
- * constant history must give sd 0, not 1e-17.
- * @example incrementalReplay(sequence).run.length // judged runs
- */
-function incrementalReplay(sequence) {
-    const { name, settings, values, own, runIndex } = sequence;
-    const replay = emptyReplay(name, 'incremental');
-    // Moments of (value - shift), the shift a recent value: Welford's rounding then scales with the
-    // spread, not with the offset (1e6 + noise keeps its digits).
-    let shift = values[0] ?? 0;
-    let moments = new RunningMoments();
-    let start = 0;
-    let sinceRebuild = 0;
-    for (let k = 0; k < values.length; k++) {
-        if (k > 0) {
-            moments.add(values[k - 1] - shift);
-            if (k - start > settings.window)
-                moments.remove(values[start++] - shift);
-            if (++sinceRebuild >= settings.window) {
-                shift = values[start];
-                moments = RunningMoments.of(values.slice(start, k).map((v) => v - shift));
-                sinceRebuild = 0;
-            }
-        }
-        const n = k - start;
-        if (n === 0 || n < settings.minRuns)
-            continue;
-        const fit = slidingFit(moments, shift, values, start, k, settings);
-        const x = toFitScale(own[k], settings.transform);
-        const figures = decisionFigures(x, fit, settings);
-        const direction = directionOf(x - fit.mean, settings.worse);
-        const beyond = beyondTolerance(own[k], fromFitScale(fit.mean, settings.transform), settings.tolerance);
-        replay.run.push(runIndex[k]);
-        replay.relativeDensity.push(figures.relativeDensity);
-        replay.tail.push(figures.tail);
-        replay.side.push(sideOf(direction, beyond));
-    }
-    return replay;
-}
-function sideOf(direction, beyond) {
-    if (!beyond)
-        return 0;
-    return direction === 'worse' ? 1 : direction === 'better' ? -1 : 0;
-}
-/** fitGaussian's mle/unbiased result from running moments, floored like judgeMetric's fitWithFloor. */
-function slidingFit(moments, shift, values, start, end, settings) {
-    const { n, squares } = moments;
-    const mean = shift + moments.mean;
-    // A spread within rounding of the offset is a constant window (or nearly): refit exactly, since
-    // a constant history must give sd 0, not 1e-17.
-    if (squares <= 1e-20 * n * mean * mean)
-        return incremental_replay_floored(values.slice(start, end), settings);
-    const sampleVariance = n > 1 ? squares / (n - 1) : 0;
-    const spread = Math.sqrt(squares / n);
-    const floor = fitScaleFloor(settings.resolution, settings.transform, mean);
-    return {
-        n,
-        mean,
-        sd: Math.max(spread, floor),
-        sampleSd: Math.max(Math.sqrt(sampleVariance), floor),
-        method: 'mle',
-    };
-}
-function incremental_replay_floored(window, settings) {
-    const raw = (0,model_fit/* fitGaussian */.Dk)(window, 'mle', 0);
-    const floor = fitScaleFloor(settings.resolution, settings.transform, raw.mean);
-    return floor > 0 ? (0,model_fit/* fitGaussian */.Dk)(window, 'mle', floor) : raw;
-}
-/** Relative density and two-sided tail, as judgeMetric computes them for a fit (zero spread: 0 or 1). */
-function decisionFigures(x, fit, _settings) {
-    const deviation = x - fit.mean;
-    const predictive = fit.n >= 2;
-    if (fit.sd === 0 || (predictive && fit.sampleSd === 0)) {
-        const moved = deviation !== 0;
-        return { relativeDensity: moved ? 0 : 1, tail: moved ? 0 : 1 };
-    }
-    if (!predictive) {
-        return {
-            relativeDensity: (0,density/* plugInRelativeDensity */.YS)(x, fit.mean, fit.sd),
-            tail: (0,tails/* normalTail */.WI)(deviation / fit.sd, 'both'),
-        };
-    }
-    return {
-        relativeDensity: (0,density/* predictiveRelativeDensity */.kr)(x, fit.mean, fit.sampleSd, fit.n),
-        tail: (0,tails/* studentTail */.gq)(deviation / (0,density/* predictiveScale */.Wn)(fit.sampleSd, fit.n), fit.n - 1, 'both'),
-    };
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/refit-replay.ts
-
-
-
-/**
- * Replays a metric by calling the gate's own judge for every run: the window of values before
- * the run, change-point shortening by selectBaseline itself (on a history holding just that
- * window), then scoreMetric. Exactly the gate's decision, for any setting (robust fit, change
- * points, relative-to). Cost: O(runs x window) for the fits, plus one change-point search per run
- * when `change-points` is on (PELT over the window, up to O(window^2) each), so
- * O(runs x window^2) in the worst case — seconds for 500 runs x 60-run windows x 100 metrics.
- * @example refitReplay(sequence).relativeDensity[0] // the first judged run's relative density
- */
-function refitReplay(sequence) {
-    const { name, settings, values, own, runIds, runIndex } = sequence;
-    const replay = emptyReplay(name, 'refit');
-    for (let k = 0; k < values.length; k++) {
-        const start = Math.max(0, k - settings.window);
-        if (k - start < settings.minRuns || k === 0)
-            continue;
-        let baseline = values.slice(start, k);
-        if (settings.changePoints)
-            baseline = shortened(name, baseline, runIds.slice(start, k), sequence);
-        const score = scoreMetric(name, settings, baseline, own[k]);
-        if (!score.scored)
-            continue;
-        replay.run.push(runIndex[k]);
-        replay.relativeDensity.push(score.relativeDensity);
-        replay.tail.push(score.tail);
-        replay.side.push(!score.beyondTolerance ? 0 : score.direction === 'worse' ? 1 : score.direction === 'better' ? -1 : 0);
-    }
-    return replay;
-}
-/** The window after selectBaseline's change-point step, run on a history of just that window (already on the fit scale). */
-function shortened(name, window, ids, sequence) {
-    const history = {
-        series: 'replay',
-        runs: ids.map((id) => ({ id })),
-        columns: new Map([[name, { values: window }]]),
-    };
-    const { relativeTo: _dropped, ...rest } = sequence.settings;
-    return selectBaseline(history, name, { ...rest, transform: 'none', window: window.length }).values;
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/replay.ts
-
-
-
-
-
-/**
- * Replays the gate over a history: every baseline run is judged against the runs before it with
- * the config's settings for each metric (window, min-runs, transform, fit, uncertainty,
- * tolerance, relative-to, change points), by the gate's own per-metric judge (refitReplay) or its
- * O(1)-per-run sliding equivalent where the settings allow (incrementalReplay, see canSlide).
- * Metrics a rule ignores are left out. Groups are not replayed jointly: a grouped metric is
- * replayed as the gate judges it alone (what it falls back to while its group is learning).
- * Pure. Throws InputError when a history value cannot take a metric's transform.
- * @example replayHistory(config, history).metrics[0].relativeDensity // one per judged run
- */
-function replayHistory(config, history, options = {}) {
-    const indexOf = new Map(history.runs.map((run, i) => [run.id, i]));
-    const names = [...history.columns.keys()]
-        .filter((name) => history.columns.get(name).values.some((v) => Number.isFinite(v)))
-        .sort((a, b) => (a < b ? -1 : a > b ? 1 : 0));
-    const metrics = [];
-    names.forEach((name, i) => {
-        const settings = replaySettings((0,config_rules/* settingsFor */.z)(config, name), history.columns.get(name)?.unit);
-        if (!settings.ignore) {
-            const sequence = metricSequence(history, name, settings, indexOf);
-            metrics.push(!options.refit && canSlide(settings) ? incrementalReplay(sequence) : refitReplay(sequence));
-        }
-        options.onProgress?.(i + 1, names.length);
-    });
-    return { runCount: history.runs.length, metrics };
-}
-
-;// CONCATENATED MODULE: ./src/gate/tune/suggest.ts
-/** The false alarms per 100 runs aimed at when no --target is given (DESIGN.md "What good looks like"). */
-const DEFAULT_TARGET = 1;
-/** Runs with at least this many judged metrics count as "many metrics" for the family advice (rule of thumb). */
-const MANY_METRICS = 10;
-/**
- * The loosest cutoff (largest relative density, most alarms) whose runs with a false alarm stay at
- * or under `per100` per 100 replayed runs. Rows are loosest first. Undefined when none qualifies.
- * @example loosestUnder(rows, 1)?.cutoff // 0.001
- */
-function loosestUnder(rows, per100) {
-    return [...rows].sort((a, b) => b.cutoff - a.cutoff).find((row) => row.runsFlaggedPer100 <= per100);
-}
-/**
- * The cutoff with the highest F1 against the labels; a tie goes to the stricter cutoff (fewer
- * alarms for the same score). Undefined without labels.
- * @example bestF1(rows)?.cutoff // 0.005
- */
-function bestF1(rows) {
-    let best;
-    for (const row of rows) {
-        if (row.labelled === undefined)
-            continue;
-        const f1 = row.labelled.f1;
-        if (best === undefined || f1 > best.labelled.f1 || (f1 === best.labelled.f1 && row.cutoff < best.cutoff))
-            best = row;
-    }
-    return best;
-}
-/**
- * The defaults cutoff: the F1-optimal one when labels are given, else the loosest meeting the
- * false-alarm target, else (nothing meets it) the strictest of the ladder.
- * @example chooseCutoff(rows, 1, false).cutoff // 0.001
- */
-function chooseCutoff(rows, target, labelled) {
-    const best = labelled ? bestF1(rows) : undefined;
-    if (best?.labelled !== undefined && best.labelled.f1 > 0) {
-        const l = best.labelled;
-        return {
-            cutoff: best.cutoff,
-            reason: `best F1 ${l.f1.toFixed(3)} against the labels (precision ${l.precision.toFixed(3)}, recall ${l.recall.toFixed(3)})`,
-        };
-    }
-    const under = loosestUnder(rows, target);
-    if (under !== undefined) {
-        return {
-            cutoff: under.cutoff,
-            reason: `loosest cutoff with at most ${target} run${target === 1 ? '' : 's'} per 100 falsely flagged (${under.runsFlaggedPer100.toFixed(1)} replayed)`,
-        };
-    }
-    const strictest = [...rows].sort((a, b) => a.cutoff - b.cutoff)[0];
-    return {
-        cutoff: strictest.cutoff,
-        reason: `no cutoff keeps false alarms at ${target} per 100 runs; the strictest tried flags ${strictest.runsFlaggedPer100.toFixed(1)} (consider groups, relative-to or change points)`,
-    };
-}
-/**
- * Per-metric cutoffs for metrics that are much noisier than the rest at the chosen cutoff: at least
- * 2 false alarms and more than twice the mean per metric (rule of thumb). Such a metric gets the
- * loosest stricter cutoff at which its own false alarms drop to the mean, or the strictest tried.
- * @example noisyMetricRules(rows, names, 0.01) // [{ metric: 'latency/p99', cutoff: 1e-4, reason: ... }]
- */
-function noisyMetricRules(rows, names, chosen) {
-    const sorted = [...rows].sort((a, b) => b.cutoff - a.cutoff);
-    const at = sorted.find((row) => row.cutoff === chosen);
-    if (at === undefined || names.length === 0)
-        return [];
-    const mean = at.falseAlarms / names.length;
-    const rules = [];
-    names.forEach((metric, j) => {
-        const own = at.perMetric[j];
-        if (own < 2 || own <= 2 * mean)
-            return;
-        const stricter = sorted.filter((row) => row.cutoff < chosen);
-        const fit = stricter.find((row) => row.perMetric[j] <= mean) ?? stricter.at(-1);
-        if (fit === undefined)
-            return;
-        rules.push({
-            metric,
-            cutoff: fit.cutoff,
-            reason: `${own} false alarms at ${chosen} (mean ${mean.toFixed(1)} a metric); ${fit.perMetric[j]} at ${fit.cutoff}`,
-        });
-    });
-    return rules;
-}
-/**
- * Which family setting to use. With fewer than MANY_METRICS judged metrics a typical run, the
- * current setting stays. With many: the family with the best F1 when labelled (ties: holm, then
- * fdr, bonferroni, none); without labels the current setting when it is not none, else holm, which bounds the chance of any false alarm in a
- * run and is never less powerful than bonferroni (Holm 1979).
- * @example recommendFamily(48, ladders, 0.01, 'none', 1).family // 'holm'
- */
-function recommendFamily(metricsPerRun, ladders, cutoff, current, target) {
-    const share = (family) => {
-        const row = ladders.get(family)?.find((r) => r.cutoff === cutoff);
-        return row === undefined ? '?' : row.runsFlaggedPer100.toFixed(1);
-    };
-    if (metricsPerRun < MANY_METRICS) {
-        return {
-            family: current,
-            reason: `${metricsPerRun} metrics a typical run: few enough that per-metric cutoffs suffice`,
-        };
-    }
-    const preference = ['holm', 'fdr', 'bonferroni', 'none'];
-    const f1 = (f) => bestF1(ladders.get(f) ?? [])?.labelled?.f1 ?? -1;
-    let family = current === 'none' ? 'holm' : current;
-    if (preference.some((f) => f1(f) >= 0))
-        family = preference.reduce((a, b) => (f1(b) > f1(a) ? b : a));
-    const loosest = (f) => {
-        const row = loosestUnder(ladders.get(f) ?? [], target);
-        return row === undefined ? 'none of the ladder' : String(row.cutoff);
-    };
-    const reason = `${metricsPerRun} metrics a typical run: at cutoff ${cutoff}, family none flags ${share('none')} runs per 100 falsely, ` +
-        `${family} ${share(family)}; loosest cutoff meeting ${target} per 100: none ${loosest('none')}, ${family} ${loosest(family)}` +
-        (f1(family) >= 0
-            ? ` (best F1 ${f1(family).toFixed(3)})`
-            : '; holm bounds the chance of any false alarm in a run and is never less powerful than bonferroni (Holm 1979)');
-    return { family, reason };
-}
-
 ;// CONCATENATED MODULE: ./src/gate/tune/tune.ts
 
 
@@ -15923,19 +15491,25 @@ function recommendFamily(metricsPerRun, ladders, cutoff, current, target) {
 
 
 
-
-
-
-
-const FAMILIES = ['none', 'bonferroni', 'holm', 'fdr'];
+/** The false alarms per 100 clean runs aimed at when no --target is given (DESIGN.md "What good looks like"). */
+const DEFAULT_TARGET = 1;
+/** The shift size the search maximises the share caught of (issue 13: +10%). */
+const AIM_SHIFT = 0.1;
+/** A setting is blind when it catches fewer than this share of the largest injected shift (rule of thumb). */
+const BLIND_SHARE = 0.5;
+/** A setting replaces the configured one only when it catches more at this one-sided level (exact McNemar test). */
+const SWITCH_LEVEL = 0.05;
 /**
- * Tunes cutoffs from evidence (issue 5.1): replays the gate over the history (replayHistory),
- * scores the cutoff ladder for every family setting (scoreLadder), checks each metric's shape on
- * the raw and log scales (normalityCheck), and suggests a defaults cutoff (best F1 with labels,
- * else the loosest meeting the target), per-metric cutoffs for much noisier metrics, `transform:
- * log` where it fits clearly better, and a family setting. Pure.
- * Throws InputError for a label naming an unknown run or metric, or a bad target or cutoff.
- * @example tuneHistory({ config, history }).suggestion.cutoff // 0.001
+ * Tunes the whole setting jointly from evidence (issue 13 item 7): replays the real gate over the
+ * history (every run judged against the runs before it) clean and with injected shifts (SHIFTS,
+ * one metric at a time, on its worse side); scores every setting of the ladder (transform, shared
+ * move, change points, holm budget or family none cutoff) by false alarms per 100 clean runs and
+ * share of injected shifts caught; recommends the setting catching the most +10% shifts among
+ * those meeting the target (meetsTarget; else the one with the fewest false alarms) — but keeps
+ * the configured setting when it meets the target and the best does not catch significantly more
+ * on the same injections (switchTail) — and measures it again with the gate set exactly so. Pure.
+ * Throws InputError for a bad target or a label naming an unknown run or metric.
+ * @example tuneHistory({ config, history }).recommendation?.setting.family // 'holm'
  */
 function tuneHistory(input) {
     const { config, history } = input;
@@ -15944,89 +15518,140 @@ function tuneHistory(input) {
         throw new input_error/* InputError */.d(`--target must be a number of false alarms per 100 runs from 0 to 100, got ${target}`, {
             fix: 'e.g. --target 1',
         });
-    const cutoffs = [...new Set([...(input.cutoffs ?? DEFAULT_LADDER), config.defaults.cutoff])].sort((a, b) => b - a);
     if (input.labels !== undefined)
         checkLabels(input.labels, history);
     const truth = input.labels === undefined ? undefined : buildTruth(input.labels, history);
-    const replay = replayHistory(config, history, {
-        ...(input.refit ? { refit: true } : {}),
-        ...(input.onProgress ? { onProgress: input.onProgress } : {}),
+    const labelled = new Set(truth?.byRun.keys() ?? []);
+    const plan = replayPlan(config, history, {
+        labelled,
+        ...(input.last === undefined ? {} : { last: input.last }),
+        ...(input.perSize === undefined ? {} : { perSize: input.perSize }),
     });
-    const ladders = new Map(FAMILIES.map((f) => [f, scoreLadder(replay, cutoffs, f, truth)]));
-    const perRun = new Map();
-    for (const m of replay.metrics)
-        for (const r of m.run)
-            perRun.set(r, (perRun.get(r) ?? 0) + 1);
-    const metricsPerRun = perRun.size === 0 ? 0 : (0,median/* median */.J)([...perRun.values()]);
-    // A cutoff decides only with family: none (under a family the run's budget does), so the
-    // cutoff is chosen on that ladder until tune replays the whole gate (issue 13 item 7).
-    const rows = ladders.get('none');
-    // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
-    const choice = perRun.size === 0
-        ? {
-            cutoff: config.defaults.cutoff,
-            reason: 'no run had enough baseline runs to be judged (min-runs), so there is no evidence yet; keeping the configured cutoff',
-        }
-        : chooseCutoff(rows, target, truth !== undefined);
-    const names = replay.metrics.map((m) => m.name);
-    const rules = perRun.size === 0 ? [] : noisyMetricRules(rows, names, choice.cutoff);
-    const indexOf = new Map(history.runs.map((run, i) => [run.id, i]));
-    const metrics = replay.metrics.map((m) => {
-        const settings = replaySettings((0,config_rules/* settingsFor */.z)(config, m.name), history.columns.get(m.name)?.unit);
-        const own = metricSequence(history, m.name, settings, indexOf).own.slice(-settings.window);
-        const normality = normalityCheck(own);
-        if (normality?.suggestLog && settings.transform === 'none') {
-            const rule = rules.find((r) => r.metric === m.name);
-            if (rule !== undefined)
-                Object.assign(rule, { transform: 'log', reason: `${rule.reason}; ${normality.note}` });
-            else
-                rules.push({ metric: m.name, transform: 'log', reason: normality.note });
-        }
-        return {
-            name: m.name,
-            method: m.method,
-            judged: m.run.length,
-            transform: settings.transform === 'log' ? 'log' : 'none',
-            ...(normality ? { normality } : {}),
-        };
-    });
-    const family = recommendFamily(metricsPerRun, ladders, choice.cutoff, config.family, target);
-    const best = bestF1(rows);
-    const targetRow = loosestUnder(rows, target);
-    return {
+    const shapes = structures(config);
+    const calls = plan.runs.length + plan.injections.length;
+    let done = 0;
+    const total = calls * (shapes.length + 2);
+    const tick = () => input.onProgress?.(++done, total);
+    const currentExact = scoreExact(config, history, plan, tick);
+    const metricsPerRun = currentExact.metricsPerRun;
+    const current = exactRow(settingOf(config), currentExact, metricsPerRun);
+    const ladder = shapes.flatMap((s) => scoreStructure(config, history, plan, s, metricsPerRun, tick));
+    const result = {
         series: history.series,
         runs: history.runs.length,
-        replayedRuns: perRun.size,
+        replayed: plan.runs.filter((k) => !labelled.has(k)).length,
+        injected: plan.injections.length,
+        shifts: SHIFTS,
         metricsPerRun,
-        family: config.family,
-        currentCutoff: config.defaults.cutoff,
-        metrics,
-        groups: config.groups.map((g) => g.name),
-        ladders,
-        target: { per100: target, ...(targetRow ? { cutoff: targetRow.cutoff } : {}) },
-        ...(truth === undefined
-            ? {}
-            : {
-                labels: {
-                    count: truth.count,
-                    ...(best?.labelled
-                        ? {
-                            best: {
-                                cutoff: best.cutoff,
-                                precision: best.labelled.precision,
-                                recall: best.labelled.recall,
-                                f1: best.labelled.f1,
-                            },
-                        }
-                        : {}),
-                },
-            }),
-        suggestion: {
-            ...choice,
-            family: family.family,
-            familyReason: family.reason,
-            rules: rules.sort((a, b) => (a.metric < b.metric ? -1 : 1)),
-        },
+        target,
+        current,
+        ladder,
+    };
+    if (truth !== undefined)
+        result.labels = { count: truth.count, runs: labelled.size, flagged: currentExact.labelledFlagged };
+    if (plan.runs.length === 0)
+        return result;
+    const { row, reason } = choose(ladder, target, current, plan);
+    if (sameSetting(row.setting, current.setting))
+        input.onProgress?.(total, total);
+    const exact = sameSetting(row.setting, current.setting)
+        ? currentExact
+        : scoreExact(withSetting(config, row.setting), history, plan, tick);
+    result.recommendation = recommend(row.setting, reason, exactRow(row.setting, exact, metricsPerRun), exact, plan, target);
+    return result;
+}
+/** A row from an exact replay. */
+function exactRow(setting, exact, metricsPerRun) {
+    return {
+        setting,
+        falseAlarms: exact.falseAlarms,
+        unsettled: exact.unsettled,
+        steps: exact.steps,
+        promisedPer100: promisedPer100(setting, metricsPerRun),
+        caught: exact.caught,
+        labelledFlagged: exact.labelledFlagged,
+        hits: exact.hits,
+        measured: 'exact',
+    };
+}
+/**
+ * Whether a row meets the target: the model promises at most `target` false alarms per 100 clean
+ * runs, and the replay does not contradict it — the floor of the replayed rate's exact 95%
+ * interval is at or below the target (a one-sided test at 2.5%). A short replay cannot tell 0 of
+ * 52 from 1 of 52, so demanding 0 would pick settings on noise; the promise is the guarantee and
+ * the replay the check that the model is not far off (as it was with 86 per 100 on real noise).
+ */
+function meetsTarget(row, target) {
+    return row.promisedPer100 <= target && 100 * row.falseAlarms.lower <= target;
+}
+/** Share caught of a shift (0 when it was not injected). */
+function caughtShare(row, shift) {
+    return row.caught.find((c) => c.shift === shift)?.evidence.rate ?? 0;
+}
+/**
+ * The setting to recommend: among rows meeting the target, the most +10% caught, then the fewest
+ * false alarms, then +5% and +20% caught; ties keep ladder order (the configured structure first).
+ * The configured setting stays when it meets the target and the best is not significantly better
+ * on the same +10% injections (switchTail at SWITCH_LEVEL): a config is not churned on noise.
+ * When none meets it: the fewest false alarms, then the most caught.
+ */
+function choose(ladder, target, current, plan) {
+    const key = (r) => [
+        caughtShare(r, AIM_SHIFT),
+        -r.falseAlarms.rate,
+        caughtShare(r, 0.05),
+        caughtShare(r, 0.2),
+    ];
+    const better = (a, b) => {
+        for (let i = 0; i < a.length; i++)
+            if (a[i] !== b[i])
+                return a[i] > b[i];
+        return false;
+    };
+    const under = ladder.filter((r) => meetsTarget(r, target));
+    if (under.length > 0) {
+        const best = under.reduce((a, b) => (better(key(b), key(a)) ? b : a));
+        if (meetsTarget(current, target) && switchTail(best, current, plan) >= SWITCH_LEVEL)
+            return { row: current, reason: 'configured-holds' };
+        return { row: best, reason: 'best-under-target' };
+    }
+    const fewest = (r) => [-r.falseAlarms.rate, caughtShare(r, AIM_SHIFT)];
+    return { row: ladder.reduce((a, b) => (better(fewest(b), fewest(a)) ? b : a)), reason: 'none-under-target' };
+}
+/**
+ * The exact McNemar test (McNemar 1947) of `best` against `current` on the same +10% injections:
+ * of the b + c injections only one of them caught, P(at least b of them by `best` | no difference)
+ * = I_0.5(b, c + 1), the binomial tail as a regularized incomplete beta. 1 when nothing differs.
+ */
+function switchTail(best, current, plan) {
+    let b = 0;
+    let c = 0;
+    plan.injections.forEach((injection, i) => {
+        if (injection.shift !== AIM_SHIFT)
+            return;
+        if (best.hits[i] && !current.hits[i])
+            b++;
+        if (!best.hits[i] && current.hits[i])
+            c++;
+    });
+    return b === 0 ? 1 : (0,incomplete_beta/* regularizedBeta */.RL)(b, c + 1, (0,incomplete_beta/* betaPointAt */.kg)(0.5), false);
+}
+function recommend(setting, reason, score, exact, plan, target) {
+    const largest = Math.max(...SHIFTS);
+    const injectedLargest = score.caught.find((c) => c.shift === largest)?.evidence;
+    const blind = injectedLargest !== undefined && injectedLargest.trials > 0 && injectedLargest.rate < BLIND_SHARE;
+    const misses = [...exact.detectable]
+        .filter(([, d]) => d > largest)
+        .sort(([a, x], [b, y]) => y - x || (a < b ? -1 : 1))
+        .map(([metric, detectable]) => ({ metric, detectable }));
+    const trials = score.falseAlarms.trials;
+    return {
+        setting,
+        reason,
+        score,
+        blind,
+        misses,
+        replayTooShort: trials === 0 || 300 / trials > target || plan.runs.length === 0,
     };
 }
 
@@ -16053,35 +15678,63 @@ function literalGlob(name) {
 
 
 /**
- * Writes suggested settings into a config's text, keeping the user's comments, key order and
- * formatting byte for byte wherever it can: the YAML is parsed with yaml's Document API only to
- * find node positions, and the edits are spliced into the original text —
- * - `defaults.cutoff`: its value replaced in place (a comment beside it stays), or a line inserted
- *   at the top of a block `defaults:`, or a new `defaults:` section at the end;
+ * Writes settings into a config's text, keeping the user's comments, key order and formatting
+ * byte for byte wherever it can: the YAML is parsed with yaml's Document API only to find node
+ * positions, and the edits are spliced into the original text —
+ * - a `defaults` key or a top-level key (family, budget): its value replaced in place (a comment
+ *   beside it stays), or a line inserted at the top of a block `defaults:` (a top-level key: at
+ *   the end), or a new `defaults:` section at the end;
  * - a per-metric rule: the metric's own literal rule edited in place when it already sets that key
  *   and no later rule also matches the metric, else a new rule (with a comment saying why)
  *   appended to the end of `metrics:` (a later rule wins).
  * Flow-style sections (`defaults: {cutoff: 0.01}`) are edited through the Document instead
  * (comments and order kept, spacing normalised).
  * Refuses (InputError with file:line:col) a text that is not a valid config, and checks that the
- * result reads back to the suggested settings. An empty text gives a new config.
- * @example applyConfigEdit('defaults:\n  cutoff: 0.01 # strict\n', 'b.yml', { cutoff: 0.001, rules: [] }) // 'defaults:\n  cutoff: 0.001 # strict\n'
+ * result reads back (src/config/load.ts) to the settings asked for. An empty text gives a new config.
+ * @example applyConfigEdit('defaults:\n  cutoff: 0.01 # strict\n', 'b.yml', { defaults: { cutoff: 0.001 } }) // 'defaults:\n  cutoff: 0.001 # strict\n'
  */
 function applyConfigEdit(text, source, edit) {
     (0,load/* parseConfig */.o4)(text, source);
-    const rules = edit.rules.filter((r) => literalGlob(r.metric) !== undefined);
-    const out = spliceEdit(text, edit.cutoff, rules) ?? documentEdit(text, edit.cutoff, rules);
+    const rules = (edit.rules ?? []).filter((r) => literalGlob(r.metric) !== undefined);
+    const defaults = defaultsPairs(edit.defaults ?? {});
+    const top = [];
+    if (edit.family !== undefined)
+        top.push(['family', edit.family]);
+    if (edit.budget !== undefined)
+        top.push(['budget', `${Number((100 * edit.budget).toPrecision(6))}%`]);
+    const out = spliceEdit(text, defaults, top, rules) ?? documentEdit(text, defaults, top, rules);
     const config = (0,load/* parseConfig */.o4)(out, source);
-    if (!readsBack(config, edit.cutoff, rules)) {
-        throw new input_error/* InputError */.d('could not write the suggestion so that it reads back as suggested; the config was not changed', {
+    if (!readsBack(config, edit, rules)) {
+        throw new input_error/* InputError */.d('could not write the settings so that they read back as asked; the config was not changed', {
             where: source,
-            fix: 'edit the config by hand with the suggestion printed above',
+            fix: 'edit the config by hand with the settings printed above',
         });
     }
     return out;
 }
-function readsBack(config, cutoff, rules) {
-    if (config.defaults.cutoff !== cutoff)
+function defaultsPairs(d) {
+    const pairs = [
+        ['cutoff', d.cutoff],
+        ['transform', d.transform],
+        ['shared-move', d.sharedMove],
+        ['change-points', d.changePoints],
+    ];
+    return pairs.filter((p) => p[1] !== undefined);
+}
+function readsBack(config, edit, rules) {
+    const d = edit.defaults ?? {};
+    const got = config.defaults;
+    if (d.cutoff !== undefined && got.cutoff !== d.cutoff)
+        return false;
+    if (d.transform !== undefined && got.transform !== d.transform)
+        return false;
+    if (d.sharedMove !== undefined && got.sharedMove !== d.sharedMove)
+        return false;
+    if (d.changePoints !== undefined && got.changePoints !== d.changePoints)
+        return false;
+    if (edit.family !== undefined && config.family !== edit.family)
+        return false;
+    if (edit.budget !== undefined && Math.abs(config.budget - edit.budget) > 1e-12 * edit.budget)
         return false;
     return rules.every((rule) => {
         const s = (0,config_rules/* settingsFor */.z)(config, rule.metric);
@@ -16090,7 +15743,7 @@ function readsBack(config, cutoff, rules) {
     });
 }
 /** The splice strategy; undefined when the layout needs the Document fallback. */
-function spliceEdit(text, cutoff, rules) {
+function spliceEdit(text, defaultsKeys, topKeys, rules) {
     const doc = (0,dist/* parseDocument */.Tp)(text);
     const root = doc.contents;
     if (root !== null && !((0,dist/* isMap */.jh)(root) && !root.flow))
@@ -16098,25 +15751,37 @@ function spliceEdit(text, cutoff, rules) {
     const splices = [];
     const tail = [];
     const defaults = root?.get('defaults', true);
-    if (defaults === undefined)
-        tail.push(`defaults:\n  cutoff: ${cutoff}\n`);
-    else if (!(0,dist/* isMap */.jh)(defaults) || defaults.flow || defaults.items.length === 0)
-        return undefined;
-    else {
-        const value = defaults.get('cutoff', true);
-        if ((0,dist/* isScalar */.jn)(value) && value.range)
-            splices.push({ start: value.range[0], end: value.range[1], text: String(cutoff) });
-        else if (value !== undefined)
+    if (defaultsKeys.length > 0) {
+        if (defaults === undefined || ((0,dist/* isScalar */.jn)(defaults) && defaults.value === null && !text.includes('{')))
+            tail.push(`defaults:\n${defaultsKeys.map(([k, v]) => `  ${k}: ${v}\n`).join('')}`);
+        else if (!(0,dist/* isMap */.jh)(defaults) || defaults.flow || defaults.items.length === 0)
             return undefined;
         else {
             const first = defaults.items[0].key;
             const lineStart = text.lastIndexOf('\n', first.range[0] - 1) + 1;
-            splices.push({
-                start: lineStart,
-                end: lineStart,
-                text: `${' '.repeat(first.range[0] - lineStart)}cutoff: ${cutoff}\n`,
-            });
+            const indent = ' '.repeat(first.range[0] - lineStart);
+            const inserted = [];
+            for (const [key, v] of defaultsKeys) {
+                const value = defaults.get(key, true);
+                if ((0,dist/* isScalar */.jn)(value) && value.range)
+                    splices.push({ start: value.range[0], end: value.range[1], text: String(v) });
+                else if (value !== undefined)
+                    return undefined;
+                else
+                    inserted.push(`${indent}${key}: ${v}\n`);
+            }
+            if (inserted.length > 0)
+                splices.push({ start: lineStart, end: lineStart, text: inserted.join('') });
         }
+    }
+    for (const [key, v] of topKeys) {
+        const value = root?.get(key, true);
+        if ((0,dist/* isScalar */.jn)(value) && value.range)
+            splices.push({ start: value.range[0], end: value.range[1], text: String(v) });
+        else if (value !== undefined)
+            return undefined;
+        else
+            tail.push(`${key}: ${v}\n`);
     }
     const metrics = root?.get('metrics', true);
     const appended = [];
@@ -16216,11 +15881,14 @@ function oneLine(s) {
     return s.replace(/[\u0000-\u001f\u007f\u2028\u2029]+/g, ' ');
 }
 /** The Document fallback for flow-style or empty sections: nodes edited, comments and order kept. */
-function documentEdit(text, cutoff, rules) {
+function documentEdit(text, defaultsKeys, topKeys, rules) {
     const doc = (0,dist/* parseDocument */.Tp)(text);
     if (doc.contents === null || ((0,dist/* isScalar */.jn)(doc.contents) && doc.contents.value === null))
         doc.contents = doc.createNode({});
-    setScalar(doc, ['defaults', 'cutoff'], cutoff);
+    for (const [key, v] of defaultsKeys)
+        setScalar(doc, ['defaults', key], v);
+    for (const [key, v] of topKeys)
+        setScalar(doc, [key], v);
     for (const rule of rules) {
         let seq = doc.get('metrics', true);
         if (!(0,dist/* isSeq */.oP)(seq)) {
@@ -16260,31 +15928,48 @@ function setScalar(target, path, value) {
 /** Schema tag of the tune JSON; bumped only on a breaking change of its fields. */
 const TUNE_SCHEMA = 'bellgate.tune/1';
 /**
- * `bellgate tune --format json`: the whole result for scripts, with stable field names. Ladders
- * become an object keyed by family setting (a fixed set of names, never metric names); per-metric
- * counts are arrays aligned with `metrics`. Non-finite numbers never occur (rates of empty sets
- * are 0). Two-space indent, trailing newline.
- * @example JSON.parse(renderTuneJson(result)).suggestion.cutoff // 0.01
+ * `bellgate tune --format json`: the whole result for scripts, with stable field names. Every
+ * rate carries its evidence (events, trials, rate, Clopper-Pearson `lower`/`upper`, and
+ * `ruleOfThree` when there was no event); shares caught are a list by `shift`. Metric names only
+ * appear as values, never as keys. Two-space indent, trailing newline.
+ * @example JSON.parse(renderTuneJson(result)).recommendation.setting.family // 'holm'
  */
 function renderTuneJson(result, extra = {}) {
-    const ladders = Object.create(null);
-    for (const [family, rows] of result.ladders)
-        ladders[family] = rows;
+    const row = (r) => ({
+        setting: r.setting,
+        measured: r.measured,
+        falseAlarms: r.falseAlarms,
+        promisedPer100: r.promisedPer100,
+        unsettled: r.unsettled,
+        steps: r.steps,
+        caught: r.caught.map((c) => ({ shift: c.shift, ...c.evidence })),
+    });
+    const r = result.recommendation;
     const body = {
         schema: TUNE_SCHEMA,
         series: result.series,
         runs: result.runs,
-        replayedRuns: result.replayedRuns,
+        replayed: result.replayed,
+        injected: result.injected,
+        shifts: result.shifts,
         metricsPerRun: result.metricsPerRun,
-        family: result.family,
-        currentCutoff: result.currentCutoff,
-        metrics: result.metrics,
-        groups: result.groups,
-        ladders,
         target: result.target,
+        current: row(result.current),
+        ...(r === undefined
+            ? {}
+            : {
+                recommendation: {
+                    ...row(r.score),
+                    reason: r.reason,
+                    blind: r.blind,
+                    replayTooShort: r.replayTooShort,
+                    misses: r.misses,
+                },
+            }),
+        ladder: result.ladder.map(row),
         ...(result.labels === undefined ? {} : { labels: result.labels }),
-        suggestion: result.suggestion,
         ...(extra.written === undefined ? {} : { written: extra.written }),
+        ...(extra.refused === undefined ? {} : { refused: extra.refused }),
     };
     return `${JSON.stringify(body, null, 2)}\n`;
 }
@@ -16316,114 +16001,138 @@ function textTable(rows, align = 'l') {
 
 
 
+
+/** Rows of the ladder shown in the terminal (the JSON has all of them). */
+const SHOWN = 12;
+/** Metrics named as unseen before "and N more". */
+const MISSES_SHOWN = 10;
 /**
- * `bellgate tune` for a terminal: the cutoff ladder (false alarms per run, share of runs with a
- * false alarm per family setting, precision/recall/F1 with labels), false alarms per metric at the
- * current and the suggested cutoff, normality per metric, and the suggestion with its reasons.
- * Metric names pass through cleanText. Pure.
- * @example renderTuneText(result).split('\n')[0] // 'bellgate tune: series main, 120 runs, 112 replayed, ...'
+ * `bellgate tune` for a terminal: what was replayed, the best settings of the ladder (false alarms
+ * per 100 clean replayed runs with their 95% interval, the model's promised rate, the share of each
+ * injected shift caught), the configured setting, and the recommendation measured by the gate at
+ * exactly that setting, with the evidence behind it and what it cannot see. Pure.
+ * @example renderTuneText(result).split('\n')[0] // 'bellgate tune: series main, 60 runs; ...'
  */
 function renderTuneText(result) {
     const out = [];
-    const refit = result.metrics.filter((m) => m.method === 'refit').length;
-    out.push(`bellgate tune: series ${(0,clean/* cleanText */.X)(result.series)}, ${result.runs} runs, ${result.replayedRuns} replayed, ` +
-        `${(0,format/* formatNumber */.ZV)(result.metricsPerRun)} metrics judged in a typical run`);
-    out.push(`replay: ${result.metrics.length - refit} metrics slid incrementally, ${refit} refitted per run (change points or robust fit)`);
-    if (result.groups.length > 0) {
-        out.push(`note: groups (${result.groups.map((g) => (0,clean/* cleanText */.X)(g)).join(', ')}) are replayed member by member, as the gate judges them while a group is learning; their joint check is not in the ladder`);
+    const shifts = result.shifts.map(plus).join(', ');
+    out.push(`bellgate tune: series ${(0,clean/* cleanText */.X)(result.series)}, ${result.runs} runs; ${result.replayed} replayed clean (each judged against the runs before it), ` +
+        `${result.injected} regressions injected (${shifts}, one metric at a time on its worse side); ` +
+        `${(0,format/* formatNumber */.ZV)(result.metricsPerRun)} metrics judged in a typical run; target: at most ${result.target} false alarms per 100 clean runs`);
+    const r = result.recommendation;
+    if (r === undefined) {
+        out.push('', 'no run had enough runs before it to be judged (min-runs): there is no evidence yet, nothing to recommend');
+        return `${out.join('\n')}\n`;
     }
-    out.push('', ladderTable(result), '');
-    out.push(`false alarms: alarms on runs not labelled as regressions; "runs/100" is the share of runs with at least one, by family setting (config: ${result.family}).`);
-    out.push('', perMetricTable(result));
-    const normality = normalityTable(result);
-    if (normality !== '')
-        out.push('', normality);
-    out.push('', ...suggestionLines(result));
+    const under = result.ladder.filter((row) => meetsTarget(row, result.target));
+    const best = [...under].sort((a, b) => caughtShare(b, AIM_SHIFT) - caughtShare(a, AIM_SHIFT)).slice(0, SHOWN);
+    const rows = [result.current, ...best.filter((row) => !sameSetting(row.setting, result.current.setting))];
+    out.push('', `settings meeting the target (${under.length} of ${result.ladder.length} tried; best ${best.length} shown) and the configured one`);
+    out.push(settingsTable(rows, result, r.setting));
+    out.push('  (> recommended, * configured; FA/100: clean replayed runs the check would have failed, per 100, with the exact 95% interval (Clopper-Pearson); model: the rate the setting promises; steps: runs flagged only on a change the later runs kept)');
+    out.push('', ...recommendationLines(result));
+    if (result.labels !== undefined)
+        out.push('', `labels: ${result.labels.count} known regressions in ${result.labels.runs} runs, left out of the clean count; the configured setting flagged ${result.labels.flagged} of those runs`);
     return `${out.join('\n')}\n`;
 }
-function ladderTable(result) {
-    const own = result.ladders.get(result.family);
-    const labelled = own.some((r) => r.labelled !== undefined);
-    const head = ['', 'cutoff', 'sigma', 'false/run', ...FAMILIES.map((f) => `runs/100 ${f}`)];
-    if (labelled)
-        head.push('precision', 'recall', 'F1');
-    const rows = own.map((row, i) => {
-        const mark = [
-            row.cutoff === result.suggestion.cutoff ? '>' : ' ',
-            row.cutoff === result.currentCutoff ? '*' : ' ',
-        ].join('');
-        const cells = [mark, (0,format/* formatNumber */.ZV)(row.cutoff), row.sigma.toFixed(2), row.alarmsPerRun.toFixed(3)];
-        for (const f of FAMILIES)
-            cells.push(per100(result.ladders.get(f)[i].runsFlaggedPer100));
-        if (row.labelled !== undefined)
-            cells.push(row.labelled.precision.toFixed(3), row.labelled.recall.toFixed(3), row.labelled.f1.toFixed(3));
-        return cells;
-    });
-    const legend = `  (> suggested, * current; cutoff chosen on family none, where a cutoff decides; config: family ${result.family}${labelled ? `; ${result.labels?.count ?? 0} labelled regressions` : ''})`;
-    return `cutoff ladder\n${textTable([head, ...rows], 'lr')}\n${legend}`;
-}
-function perMetricTable(result) {
-    const own = result.ladders.get(result.family);
-    const current = own.find((r) => r.cutoff === result.currentCutoff);
-    const suggested = own.find((r) => r.cutoff === result.suggestion.cutoff);
-    const shown = current === suggested ? [current] : [current, suggested];
-    const head = ['metric', 'judged', ...shown.map((row) => `per100 @${(0,format/* formatNumber */.ZV)(row.cutoff)}`), 'replay'];
-    const rows = result.metrics.map((m, j) => [
-        (0,clean/* cleanText */.X)(m.name),
-        String(m.judged),
-        ...shown.map((row) => per100(rate(row.perMetric[j], m.judged))),
-        m.method,
-    ]);
-    return `false alarms per 100 judged runs, by metric\n${textTable([head, ...rows], `lr${'r'.repeat(shown.length)}l`)}`;
-}
-function normalityTable(result) {
-    const rows = result.metrics
-        .filter((m) => m.normality !== undefined)
-        .map((m) => {
-        const n = m.normality;
+function settingsTable(rows, result, chosen) {
+    const head = [
+        '',
+        'transform',
+        'shared move',
+        'change points',
+        'decided by',
+        'FA/100',
+        '95% interval',
+        'model',
+        'steps',
+        'unsettled',
+    ];
+    for (const s of result.shifts)
+        head.push(`${plus(s)} caught`);
+    const body = rows.map((row) => {
+        const s = row.setting;
+        const mark = `${sameSetting(s, chosen) ? '>' : ' '}${row === result.current ? '*' : ' '}`;
         return [
-            (0,clean/* cleanText */.X)(m.name),
-            String(n.n),
-            n.raw.skewness.toFixed(2),
-            n.raw.andersonDarling.toFixed(3),
-            n.log ? n.log.skewness.toFixed(2) : '-',
-            n.log ? n.log.andersonDarling.toFixed(3) : '-',
-            m.transform,
-            n.note,
+            mark,
+            s.transform,
+            s.sharedMove ? 'on' : 'off',
+            s.changePoints ? 'on' : 'off',
+            s.family === 'none' ? `cutoff ${(0,format/* formatNumber */.ZV)(s.cutoff)}` : `${s.family} ${percent(s.budget)}`,
+            per100(row.falseAlarms.rate),
+            interval(row.falseAlarms),
+            per100(row.promisedPer100 / 100),
+            String(row.steps),
+            String(row.unsettled),
+            ...result.shifts.map((shift) => share(row.caught.find((c) => c.shift === shift)?.evidence)),
         ];
     });
-    if (rows.length === 0)
-        return '';
-    const head = ['metric', 'n', 'skew', 'A*²', 'skew log', 'A*² log', 'transform', 'note'];
-    return ("normality of the newest window (skewness: Joanes & Gill 1998; Anderson-Darling A*² with estimated mean and sd, 5% critical value 0.752: D'Agostino & Stephens 1986)\n" +
-        textTable([head, ...rows], 'lrrrrrll'));
+    return textTable([head, ...body], 'lllll');
 }
-function suggestionLines(result) {
-    const s = result.suggestion;
-    const lines = ['suggestion', `  defaults.cutoff: ${(0,format/* formatNumber */.ZV)(s.cutoff)} — ${s.reason}`];
-    lines.push(`  family: ${s.family}${s.family === result.family ? ' (as configured)' : ` (configured: ${result.family})`} — ${s.familyReason}`);
-    for (const rule of s.rules) {
-        const keys = [
-            rule.cutoff === undefined ? '' : `cutoff: ${(0,format/* formatNumber */.ZV)(rule.cutoff)}`,
-            rule.transform === undefined ? '' : `transform: ${rule.transform}`,
-        ].filter((k) => k !== '');
-        lines.push(`  rule ${(0,clean/* cleanText */.X)(rule.metric)}: ${keys.join(', ')} — ${(0,clean/* cleanText */.X)(rule.reason, 400)}`);
+function recommendationLines(result) {
+    const r = result.recommendation;
+    const s = r.setting;
+    const f = r.score.falseAlarms;
+    const lines = ['recommendation'];
+    const keys = [
+        `transform: ${s.transform}`,
+        `shared-move: ${s.sharedMove}`,
+        `change-points: ${s.changePoints}`,
+        `family: ${s.family}`,
+        s.family === 'none' ? `cutoff: ${(0,format/* formatNumber */.ZV)(s.cutoff)}` : `budget: ${percent(s.budget)}`,
+    ];
+    lines.push(`  ${keys.join(', ')}`);
+    lines.push(r.reason === 'configured-holds'
+        ? `  why: the configured setting meets the target, and no setting of the ladder catches significantly more ${plus(AIM_SHIFT)} regressions on the same injections (exact McNemar test, one-sided ${SWITCH_LEVEL})`
+        : r.reason === 'best-under-target'
+            ? `  why: the most ${plus(AIM_SHIFT)} regressions caught among the settings whose promised rate meets the target and whose replayed false alarms do not contradict it (the floor of their 95% interval is within it)`
+            : `  why: NO setting of the ladder meets the target of ${result.target} per 100 on the replay; this one has the fewest false alarms`);
+    lines.push(`  measured by the gate set exactly so, over ${f.trials} clean replayed runs: ${alarmEvidence(f)}`);
+    if (r.replayTooShort)
+        lines.push(`  evidence: ${f.trials} replayed runs cannot show a rate below ${per100(Math.min(1, 3 / Math.max(1, f.trials)))} per 100 (rule of three), ` +
+            `so the figure to rely on is the model's own calibrated rate: ${promise(s, r.score.promisedPer100)}`);
+    else
+        lines.push(`  the model's own calibrated rate: ${promise(s, r.score.promisedPer100)}`);
+    const caught = r.score.caught.map((c) => `${plus(c.shift)} ${c.evidence.events} of ${c.evidence.trials} (${share(c.evidence)}, 95% ${shareInterval(c.evidence)})`);
+    lines.push(`  injected regressions caught: ${caught.join('; ')}`);
+    if (r.blind) {
+        const largest = Math.max(...result.shifts);
+        lines.push(`  BLIND: it catches fewer than ${Math.round(100 * BLIND_SHARE)}% of ${plus(largest)} regressions; --write refuses it unless --force is given`);
     }
-    const t = result.target;
-    lines.push(t.cutoff === undefined
-        ? `  target ${t.per100} per 100 runs: no cutoff of the ladder meets it`
-        : `  target ${t.per100} per 100 runs: loosest qualifying cutoff ${(0,format/* formatNumber */.ZV)(t.cutoff)}`);
-    if (result.labels?.best !== undefined) {
-        const b = result.labels.best;
-        lines.push(`  labels: best F1 ${b.f1.toFixed(3)} at cutoff ${(0,format/* formatNumber */.ZV)(b.cutoff)} (precision ${b.precision.toFixed(3)}, recall ${b.recall.toFixed(3)})`);
+    if (r.misses.length > 0) {
+        const named = r.misses
+            .slice(0, MISSES_SHOWN)
+            .map((m) => `${(0,clean/* cleanText */.X)(m.metric)} (${Math.round(100 * m.detectable)}%)`)
+            .join(', ');
+        const more = r.misses.length > MISSES_SHOWN ? ` and ${r.misses.length - MISSES_SHOWN} more` : '';
+        lines.push(`  unseen: a ${plus(Math.max(...result.shifts))} regression of ${r.misses.length} metric${r.misses.length === 1 ? '' : 's'} would pass (median detectable above it): ${named}${more}`);
     }
     return lines;
 }
-function rate(count, of) {
-    return of === 0 ? 0 : (100 * count) / of;
+function alarmEvidence(f) {
+    if (f.events === 0)
+        return `0 false alarms: below ${per100(f.ruleOfThree ?? 1)} per 100 at 95% (rule of three, Hanley & Lippman-Hand 1983; exact upper ${per100(f.upper)})`;
+    return `${f.events} false alarm${f.events === 1 ? '' : 's'}, ${per100(f.rate)} per 100 (95% ${interval(f)})`;
 }
-function per100(x) {
-    return x.toFixed(1);
+function promise(s, per100Rate) {
+    if (s.family !== 'none')
+        return `${s.family} holds the chance of any false alarm in a run at ${percent(s.budget)} (${per100(per100Rate / 100)} per 100)`;
+    return `each metric at the one-sided Gaussian tail of cutoff ${(0,format/* formatNumber */.ZV)(s.cutoff)}: ${per100(per100Rate / 100)} per 100 runs`;
+}
+function plus(shift) {
+    return `+${Math.round(100 * shift)}%`;
+}
+function per100(rate) {
+    return (100 * rate).toFixed(1);
+}
+function interval(e) {
+    return `${per100(e.lower)}-${per100(e.upper)}`;
+}
+function share(e) {
+    return e === undefined || e.trials === 0 ? '-' : `${Math.round(100 * e.rate)}%`;
+}
+function shareInterval(e) {
+    return `${Math.round(100 * e.lower)}-${Math.round(100 * e.upper)}%`;
 }
 
 ;// CONCATENATED MODULE: ./src/cli/run/tune.ts
@@ -16440,9 +16149,11 @@ function per100(x) {
 
 
 /**
- * The work of `bellgate tune`: replays the gate, prints the ladder and suggestion,
- * and writes the config when `--write` is given.
- * @throws InputError for an empty history, bad labels (file:line:col) or unreadable files.
+ * The work of `bellgate tune`: replays the gate clean and with injected regressions, prints the
+ * settings and the recommendation, and writes it into the config with `--write` — every key it
+ * recommends; a blind recommendation only with `--force`.
+ * @throws InputError for an empty history, bad labels (file:line:col), unreadable files, a
+ * `--write` without evidence, or a blind recommendation to write without `--force` (after printing).
  * @example await runTune(ctx, { history: 'h.json', format: 'text' })
  */
 async function runTune(ctx, options) {
@@ -16458,32 +16169,75 @@ async function runTune(ctx, options) {
     let labels;
     if (options.labels !== undefined)
         labels = parseLabels(await readFlagFile(ctx, '--labels', options.labels, true), options.labels);
+    // A config that cannot take the recommendation fails before the replay, not after it.
+    const before = options.write === undefined ? undefined : await configText(ctx, options.write);
     const progress = progressBar(ctx.io);
     const result = tuneHistory({
         config,
         history,
         ...(labels === undefined ? {} : { labels }),
         ...(options.target === undefined ? {} : { target: options.target }),
+        ...(options.last === undefined ? {} : { last: options.last }),
         onProgress: progress.update,
     });
     progress.done();
-    const written = options.write === undefined ? undefined : await writeSuggestion(ctx, options.write, result.suggestion);
+    const r = result.recommendation;
+    let refused;
+    let written;
+    if (options.write !== undefined) {
+        if (r === undefined)
+            refused = new input_error/* InputError */.d('no run could be replayed, so there is no recommendation to write', {
+                where: options.history,
+                fix: 'record at least min-runs + 1 runs first',
+            });
+        else if (r.blind && options.force !== true)
+            refused = new input_error/* InputError */.d(`the recommended setting is blind (it catches ${Math.round(100 * (r.score.caught.at(-1)?.evidence.rate ?? 0))}% of the largest injected regressions), so it was not written`, {
+                where: options.write,
+                fix: 'see what it misses above; add --force to write it anyway, or raise --target',
+            });
+        else
+            written = await writeSuggestion(ctx, options.write, before, editOf(r.setting));
+    }
     if (options.format === 'json') {
-        ctx.io.stdout(renderTuneJson(result, written === undefined ? {} : { written }));
-        return;
+        ctx.io.stdout(renderTuneJson(result, {
+            ...(written === undefined ? {} : { written }),
+            ...(refused === undefined ? {} : { refused: refused.message }),
+        }));
     }
-    ctx.io.stdout(renderTuneText(result));
-    if (written !== undefined) {
-        ctx.io.stdout(written.diff === ''
-            ? `\n${options.write}: already as suggested, not changed\n`
-            : `\nwrote ${options.write}:\n${written.diff}`);
+    else {
+        ctx.io.stdout(renderTuneText(result));
+        if (written !== undefined) {
+            ctx.io.stdout(written.diff === ''
+                ? `\n${options.write}: already as recommended, not changed\n`
+                : `\nwrote ${options.write}:\n${written.diff}`);
+        }
     }
+    if (refused !== undefined)
+        throw refused;
+}
+/** Every key of the recommended setting, as the config writer takes them. */
+function editOf(s) {
+    return {
+        defaults: {
+            transform: s.transform,
+            sharedMove: s.sharedMove,
+            changePoints: s.changePoints,
+            ...(s.family === 'none' ? { cutoff: s.cutoff } : {}),
+        },
+        family: s.family,
+        ...(s.family === 'none' ? {} : { budget: s.budget }),
+    };
+}
+/** The text of the config to write into ('' when it does not exist yet), checked to be a valid config. */
+async function configText(ctx, path) {
+    const text = (await readFlagFileIfAny(ctx, '--write', path, true)) ?? '';
+    (0,load/* parseConfig */.o4)(text, path);
+    return text;
 }
 /** Applies the suggestion to the file (missing: a new config), atomically; returns the unified diff ('' when unchanged). */
-async function writeSuggestion(ctx, path, suggestion) {
+async function writeSuggestion(ctx, path, before, edit) {
     const full = (0,paths/* resolvePath */.o)(ctx, path);
-    const before = (await readFlagFileIfAny(ctx, '--write', path, true)) ?? '';
-    const after = applyConfigEdit(before, path, suggestion);
+    const after = applyConfigEdit(before, path, edit);
     if (after === before)
         return { file: path, diff: '' };
     const temp = `${full}.bellgate-tune-${process.pid}.tmp`;
@@ -16512,7 +16266,7 @@ function progressBar(io) {
                 return;
             last = filled;
             drawn = true;
-            io.stderr(`\rreplaying [${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${done}/${total} metrics`);
+            io.stderr(`\rreplaying [${'#'.repeat(filled)}${'.'.repeat(width - filled)}] ${done}/${total} gate calls`);
         },
         done() {
             if (drawn)
@@ -16526,20 +16280,22 @@ function progressBar(io) {
 
 
 /**
- * `bellgate tune`: replays the gate over the history and prints the cutoff ladder, per-metric
- * false alarms, normality and a suggestion; `--labels` scores known regressions (precision,
- * recall, F1), `--target N` picks the loosest cutoff with at most N falsely flagged runs per 100,
- * `--write FILE` puts the suggestion into a config (comments and order kept) and prints the diff.
- * Exit 0, or 2 for bad input (a labels problem names file:line:col).
+ * `bellgate tune`: replays the gate over the history, clean and with injected regressions (+5%,
+ * +10%, +20% on one metric at a time), scores a ladder of whole settings by false alarms per 100
+ * clean runs and share caught, and recommends the one catching the most +10% regressions within
+ * `--target`; `--write FILE` writes every key it recommends (comments and order kept) and prints
+ * the diff, refusing a blind setting unless `--force`. Exit 0, or 2 for bad input or a refused write.
  */
 function tuneCommand(ctx) {
-    const cmd = new Command('tune').description('suggest cutoffs from evidence: replay the gate over the history and score a ladder of cutoffs');
+    const cmd = new Command('tune').description('recommend settings from evidence: replay the gate over the history, clean and with injected regressions');
     historyOption(cmd, true, 'history file of trusted runs to replay (JSON)');
     configOption(cmd);
     cmd
-        .option('--labels <file>', 'YAML or JSON list of known regressions: `regressions: [{run: "1234-1"}, {run: "1240-1", metric: "latency/p95"}]`')
-        .option('--target <n>', 'false alarms per 100 runs to stay at or under (default 1)', parseTarget)
-        .option('--write <file>', 'write the suggested cutoffs and transforms into this config file and print the diff')
+        .option('--labels <file>', 'YAML or JSON list of known regressions in the history, left out of the clean count: `regressions: [{run: "1234-1"}]`')
+        .option('--target <n>', 'false alarms per 100 clean runs to stay at or under (default 1)', parseTarget)
+        .option('--last <n>', 'replay only the newest N runs (default 100)', parseLast)
+        .option('--write <file>', 'write the recommended settings into this config file and print the diff')
+        .option('--force', 'with --write: write the recommendation even when it is blind (catches almost nothing)')
         .addOption(new Option('--format <format>', 'output format').choices(['text', 'json']).default('text'));
     examples(cmd, [
         'bellgate tune --history .bellgate/history.jsonl --config .github/bellgate.yml',
@@ -16553,6 +16309,12 @@ function parseTarget(text) {
     if (text.trim() === '' || !Number.isFinite(n) || n < 0 || n > 100) {
         throw new InvalidArgumentError('expected a number of false alarms per 100 runs from 0 to 100, e.g. 1');
     }
+    return n;
+}
+function parseLast(text) {
+    const n = Number(text);
+    if (!Number.isInteger(n) || n < 1)
+        throw new InvalidArgumentError('expected a whole number of runs, e.g. 100');
     return n;
 }
 
@@ -16690,6 +16452,8 @@ function findLast(runs, test) {
     return -1;
 }
 
+// EXTERNAL MODULE: ./src/model/family.ts
+var family = __nccwpck_require__(7089);
 ;// CONCATENATED MODULE: ./src/model/ranks.ts
 
 /**
@@ -16734,6 +16498,8 @@ function correctedScore(offset, variance) {
     return (Math.sign(offset) * Math.max(0, Math.abs(offset) - 0.5)) / Math.sqrt(variance);
 }
 
+// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
+var normal = __nccwpck_require__(2986);
 ;// CONCATENATED MODULE: ./src/model/rank-sum.ts
 
 
@@ -16847,9 +16613,35 @@ function shiftEstimate(a, b, confidence = 0.95) {
     };
 }
 
+;// CONCATENATED MODULE: ./src/gate/sides.ts
+/**
+ * Classifies a deviation (this run minus the baseline centre) by the metric's `worse` setting.
+ * `worse: both` has no better side: any move away from the centre is worse. A zero move is neither.
+ * Transforms are monotone, so the sign on the fit scale equals the sign on the metric's own scale.
+ * @example directionOf(0.3, 'lower') // 'better'
+ */
+function directionOf(deviation, worse) {
+    if (deviation === 0 || Number.isNaN(deviation))
+        return 'none';
+    if (worse === 'both')
+        return 'worse';
+    const up = deviation > 0;
+    return up === (worse === 'higher') ? 'worse' : 'better';
+}
+/**
+ * +1 when higher is worse, -1 when lower is worse; the sign that turns a deviation into a
+ * "worse is positive" one. `both` counts as +1 (the group's common move is read as a slowdown).
+ * @example worseSign('lower') // -1
+ */
+function worseSign(worse) {
+    return worse === 'lower' ? -1 : 1;
+}
+
 ;// CONCATENATED MODULE: ./src/gate/since/since-report.ts
 const SINCE_SCHEMA = 'bellgate.since/1';
 
+// EXTERNAL MODULE: ./src/model/fit.ts
+var model_fit = __nccwpck_require__(5046);
 ;// CONCATENATED MODULE: ./src/model/hampel.ts
 
 
@@ -17754,7 +17546,7 @@ function marksInRange(name, runs, reference) {
 /** Holm across metrics for the level test and for the creep; then each metric's status. */
 function familyControl(metrics, settings) {
     const tested = metrics.filter((m) => m.p !== null);
-    (0,model_family/* adjustTails */.F)(tested.map((m) => m.p), 'holm').forEach((q, i) => {
+    (0,family/* adjustTails */.F)(tested.map((m) => m.p), 'holm').forEach((q, i) => {
         const m = tested[i];
         m.adjusted = q;
         if (q < settings.level && m.ratio !== null) {
@@ -17763,7 +17555,7 @@ function familyControl(metrics, settings) {
         }
     });
     const creeping = metrics.filter((m) => m.creep !== null);
-    (0,model_family/* adjustTails */.F)(creeping.map((m) => m.creep.p), 'holm').forEach((q, i) => {
+    (0,family/* adjustTails */.F)(creeping.map((m) => m.creep.p), 'holm').forEach((q, i) => {
         const creep = creeping[i].creep;
         creep.adjusted = q;
         creep.reported = q < settings.creepLevel;
@@ -20867,7 +20659,7 @@ function errorCode(error) {
 
 /***/ }),
 
-/***/ 2205:
+/***/ 1027:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -21013,8 +20805,8 @@ function own(measurement) {
     return fields;
 }
 
-// EXTERNAL MODULE: ./src/model/tails.ts + 3 modules
-var tails = __nccwpck_require__(323);
+// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
+var tails = __nccwpck_require__(2170);
 ;// CONCATENATED MODULE: ./src/gate/decide.ts
 
 /**
@@ -21087,8 +20879,106 @@ function medianOfOthers(values) {
     });
 }
 
-// EXTERNAL MODULE: ./src/model/change-points.ts
-var change_points = __nccwpck_require__(669);
+// EXTERNAL MODULE: ./src/model/fit.ts
+var fit = __nccwpck_require__(5046);
+;// CONCATENATED MODULE: ./src/model/change-points.ts
+
+
+/**
+ * The noise sigma of a series from successive differences, so level shifts barely bias it:
+ * x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one difference only.
+ * Robust (1.4826 MAD / sqrt 2), falling back to the root mean square of the differences for
+ * quantised data whose MAD is 0.
+ */
+function differenceSigma(values) {
+    const diffs = values.slice(1).map((x, i) => x - values[i]);
+    if (diffs.length === 0)
+        return 0;
+    const robust = (fit/* MAD_TO_SIGMA */.tF * (0,simple_statistics/* medianAbsoluteDeviation */.hK)(diffs)) / Math.SQRT2;
+    if (robust > 0)
+        return robust;
+    return Math.sqrt(diffs.reduce((sum, d) => sum + d * d, 0) / (2 * diffs.length));
+}
+/**
+ * Where the level of a series changes, by optimal partitioning (Jackson et al. 2005, "An algorithm
+ * for optimal partitioning of data on an interval", IEEE Signal Processing Letters 12; the recursion
+ * PELT prunes, Killick, Fearnhead & Eckley 2012): the exact minimiser of
+ *   sum over segments of C(segment) + penalty x (number of changes),
+ * C the Gaussian cost of a change in mean on the standardised values clipped at +-clip, a
+ * Huber-style robust cost (cf. Fearnhead & Rigaill 2019, "Changepoint detection in the presence of
+ * outliers", JASA 114): a slow run costs at most clip^2, so a few slow runs do not buy a segment.
+ * The values are standardised by their median and differenceSigma; the penalty is in units of the
+ * clipped noise's own variance (estimated from the clipped successive differences), so it is
+ * calibrated to the tails the series has: heavy tails raise the price of a change. Only the mean
+ * is modelled. Returns the indices where new segments start, ascending; empty when none (also for
+ * a constant series or fewer than 2 x minSegment values). O(n^2): n is a window of runs, short
+ * enough that PELT's pruning would only add code.
+ * Throws RangeError on non-finite values or bad options.
+ * @example detectChangePoints([...Array(40).fill(100), ...Array(30).fill(110)].map((x, i) => x + (i % 2) * 0.5)) // [40]
+ */
+function detectChangePoints(values, options = {}) {
+    const n = values.length;
+    const minSegment = options.minSegment ?? 5;
+    if (!Number.isInteger(minSegment) || minSegment < 1) {
+        throw new RangeError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
+    }
+    const clip = options.clip ?? 3;
+    if (options.penalty !== undefined && !(options.penalty >= 0 && Number.isFinite(options.penalty))) {
+        throw new RangeError(`penalty must be a finite number, 0 or more, got ${options.penalty}`);
+    }
+    values.forEach((x, i) => {
+        if (!Number.isFinite(x))
+            throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
+    });
+    if (n < 2 * minSegment)
+        return [];
+    const sigma = differenceSigma(values);
+    if (!(sigma > 0))
+        return [];
+    const centre = (0,simple_statistics/* median */.JZ)([...values]);
+    const z = values.map((x) => Math.max(-clip, Math.min(clip, (x - centre) / sigma)));
+    let noise = 0;
+    for (let i = 1; i < n; i++)
+        noise += Math.min(clip * clip, (z[i] - z[i - 1]) ** 2 / 2);
+    noise = Math.max(noise / (n - 1), 1e-12);
+    const penalty = (options.penalty ?? 3 * Math.log(n)) * noise;
+    const s1 = [0];
+    const s2 = [0];
+    for (let i = 0; i < n; i++) {
+        s1.push(s1[i] + z[i]);
+        s2.push(s2[i] + z[i] * z[i]);
+    }
+    const cost = (a, b) => {
+        const s = s1[b] - s1[a];
+        return Math.max(0, s2[b] - s2[a] - (s * s) / (b - a));
+    };
+    // best[t]: the least total for the first t values; previous[t]: where its last segment starts.
+    const best = new Array(n + 1).fill(Infinity);
+    const previous = new Array(n + 1).fill(0);
+    best[0] = -penalty;
+    const candidates = [];
+    for (let end = minSegment; end <= n; end++) {
+        const fresh = end - minSegment;
+        if (fresh === 0 || fresh >= minSegment)
+            candidates.push(fresh);
+        let value = Infinity;
+        let start = 0;
+        for (const s of candidates) {
+            const total = best[s] + cost(s, end) + penalty;
+            if (total < value) {
+                value = total;
+                start = s;
+            }
+        }
+        best[end] = value;
+        previous[end] = start;
+    }
+    const starts = [];
+    for (let at = previous[n]; at > 0; at = previous[at])
+        starts.push(at);
+    return starts.reverse();
+}
+
 ;// CONCATENATED MODULE: ./src/gate/lasting-change.ts
 
 
@@ -21108,11 +20998,11 @@ const LASTING_RUNS = 10;
  * @example lastingStart([...Array(30).fill(0), ...Array(30).fill(5)].map((x, i) => x + (i % 3) * 0.1), 10) // 30
  */
 function lastingStart(values, minSegment) {
-    const starts = (0,change_points/* detectChangePoints */.Z)(values, { minSegment });
+    const starts = detectChangePoints(values, { minSegment });
     const last = starts.at(-1);
     if (last === undefined)
         return undefined;
-    const sigma = (0,change_points/* differenceSigma */.F)(values);
+    const sigma = differenceSigma(values);
     const bounds = [0, ...starts, values.length];
     const levels = bounds.slice(0, -1).map((b, k) => (0,simple_statistics/* median */.JZ)(values.slice(b, bounds[k + 1])));
     const level = levels.at(-1);
@@ -24508,197 +24398,6 @@ function alignRunUnits(run, unitOf) {
 
 /***/ }),
 
-/***/ 669:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   F: () => (/* binding */ differenceSigma),
-/* harmony export */   Z: () => (/* binding */ detectChangePoints)
-/* harmony export */ });
-/* harmony import */ var simple_statistics__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5521);
-/* harmony import */ var _fit_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5046);
-
-
-/**
- * The noise sigma of a series from successive differences, so level shifts barely bias it:
- * x_{t+1} - x_t has variance 2 sigma^2 within a segment, and a step touches one difference only.
- * Robust (1.4826 MAD / sqrt 2), falling back to the root mean square of the differences for
- * quantised data whose MAD is 0.
- */
-function differenceSigma(values) {
-    const diffs = values.slice(1).map((x, i) => x - values[i]);
-    if (diffs.length === 0)
-        return 0;
-    const robust = (_fit_js__WEBPACK_IMPORTED_MODULE_1__/* .MAD_TO_SIGMA */ .tF * (0,simple_statistics__WEBPACK_IMPORTED_MODULE_0__/* .medianAbsoluteDeviation */ .hK)(diffs)) / Math.SQRT2;
-    if (robust > 0)
-        return robust;
-    return Math.sqrt(diffs.reduce((sum, d) => sum + d * d, 0) / (2 * diffs.length));
-}
-/**
- * Where the level of a series changes, by optimal partitioning (Jackson et al. 2005, "An algorithm
- * for optimal partitioning of data on an interval", IEEE Signal Processing Letters 12; the recursion
- * PELT prunes, Killick, Fearnhead & Eckley 2012): the exact minimiser of
- *   sum over segments of C(segment) + penalty x (number of changes),
- * C the Gaussian cost of a change in mean on the standardised values clipped at +-clip, a
- * Huber-style robust cost (cf. Fearnhead & Rigaill 2019, "Changepoint detection in the presence of
- * outliers", JASA 114): a slow run costs at most clip^2, so a few slow runs do not buy a segment.
- * The values are standardised by their median and differenceSigma; the penalty is in units of the
- * clipped noise's own variance (estimated from the clipped successive differences), so it is
- * calibrated to the tails the series has: heavy tails raise the price of a change. Only the mean
- * is modelled. Returns the indices where new segments start, ascending; empty when none (also for
- * a constant series or fewer than 2 x minSegment values). O(n^2): n is a window of runs, short
- * enough that PELT's pruning would only add code.
- * Throws RangeError on non-finite values or bad options.
- * @example detectChangePoints([...Array(40).fill(100), ...Array(30).fill(110)].map((x, i) => x + (i % 2) * 0.5)) // [40]
- */
-function detectChangePoints(values, options = {}) {
-    const n = values.length;
-    const minSegment = options.minSegment ?? 5;
-    if (!Number.isInteger(minSegment) || minSegment < 1) {
-        throw new RangeError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
-    }
-    const clip = options.clip ?? 3;
-    if (options.penalty !== undefined && !(options.penalty >= 0 && Number.isFinite(options.penalty))) {
-        throw new RangeError(`penalty must be a finite number, 0 or more, got ${options.penalty}`);
-    }
-    values.forEach((x, i) => {
-        if (!Number.isFinite(x))
-            throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
-    });
-    if (n < 2 * minSegment)
-        return [];
-    const sigma = differenceSigma(values);
-    if (!(sigma > 0))
-        return [];
-    const centre = (0,simple_statistics__WEBPACK_IMPORTED_MODULE_0__/* .median */ .JZ)([...values]);
-    const z = values.map((x) => Math.max(-clip, Math.min(clip, (x - centre) / sigma)));
-    let noise = 0;
-    for (let i = 1; i < n; i++)
-        noise += Math.min(clip * clip, (z[i] - z[i - 1]) ** 2 / 2);
-    noise = Math.max(noise / (n - 1), 1e-12);
-    const penalty = (options.penalty ?? 3 * Math.log(n)) * noise;
-    const s1 = [0];
-    const s2 = [0];
-    for (let i = 0; i < n; i++) {
-        s1.push(s1[i] + z[i]);
-        s2.push(s2[i] + z[i] * z[i]);
-    }
-    const cost = (a, b) => {
-        const s = s1[b] - s1[a];
-        return Math.max(0, s2[b] - s2[a] - (s * s) / (b - a));
-    };
-    // best[t]: the least total for the first t values; previous[t]: where its last segment starts.
-    const best = new Array(n + 1).fill(Infinity);
-    const previous = new Array(n + 1).fill(0);
-    best[0] = -penalty;
-    const candidates = [];
-    for (let end = minSegment; end <= n; end++) {
-        const fresh = end - minSegment;
-        if (fresh === 0 || fresh >= minSegment)
-            candidates.push(fresh);
-        let value = Infinity;
-        let start = 0;
-        for (const s of candidates) {
-            const total = best[s] + cost(s, end) + penalty;
-            if (total < value) {
-                value = total;
-                start = s;
-            }
-        }
-        best[end] = value;
-        previous[end] = start;
-    }
-    const starts = [];
-    for (let at = previous[n]; at > 0; at = previous[at])
-        starts.push(at);
-    return starts.reverse();
-}
-
-
-/***/ }),
-
-/***/ 913:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   QA: () => (/* binding */ gaussianDensity),
-/* harmony export */   Wn: () => (/* binding */ predictiveScale),
-/* harmony export */   YS: () => (/* binding */ plugInRelativeDensity),
-/* harmony export */   kr: () => (/* binding */ predictiveRelativeDensity)
-/* harmony export */ });
-/* unused harmony export gaussianLogDensity */
-/* harmony import */ var _special_normal_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2986);
-
-/** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */
-function checkSpread(sd) {
-    if (!(sd >= 0) || !Number.isFinite(sd)) {
-        throw new RangeError(`a standard deviation must be a finite number, 0 or more, got ${sd}`);
-    }
-}
-/**
- * Gaussian density p(x) = exp(-(x - mu)^2 / (2 sigma^2)) / (sqrt(2 pi) sigma).
- * A zero sigma is the degenerate distribution: Infinity at the mean, 0 elsewhere.
- * Throws RangeError on a negative or non-finite sd.
- * @example gaussianDensity(0, 0, 1) // 0.3989422804014327
- */
-function gaussianDensity(x, mean, sd) {
-    checkSpread(sd);
-    return (0,_special_normal_js__WEBPACK_IMPORTED_MODULE_0__/* .normalDensity */ .kC)(x, mean, sd);
-}
-/**
- * log p(x), exact where p(x) underflows to 0 (beyond about 38 sigma).
- * @example gaussianLogDensity(0, 0, 1) // -0.9189385332046727
- */
-function gaussianLogDensity(x, mean, sd) {
-    checkSpread(sd);
-    return normalLogDensity(x, mean, sd);
-}
-/**
- * Relative density under the fitted Gaussian used as is ("plug-in"): p(x) / p(mean) =
- * exp(-z^2 / 2). Unitless, in [0, 1]; 1 at the centre, about 0.0111 at 3 sigma. With a zero
- * sd it is 1 at the mean and 0 elsewhere (the limit), never NaN.
- * @example plugInRelativeDensity(3, 0, 1) // 0.011108996538242306
- */
-function plugInRelativeDensity(x, mean, sd) {
-    checkSpread(sd);
-    if (sd === 0)
-        return x === mean ? 1 : 0;
-    const z = (x - mean) / sd;
-    return Math.exp(-0.5 * z * z);
-}
-/**
- * Scale of the predictive distribution for one new run when mean and sigma were estimated from
- * n runs: s * sqrt(1 + 1/n), with s the n-1 standard deviation (a Student-t with n-1 degrees of
- * freedom around the mean; e.g. Gelman et al., Bayesian Data Analysis, section 3.2).
- * @example predictiveScale(1, 4) // 1.118033988749895
- */
-function predictiveScale(sampleSd, n) {
-    return sampleSd * Math.sqrt(1 + 1 / n);
-}
-/**
- * Relative density under the predictive Student-t with n-1 degrees of freedom:
- * f(t) / f(0) = (1 + t^2 / nu)^(-(nu + 1) / 2), t = (x - mean) / (s sqrt(1 + 1/n)).
- * Heavier tails than the Gaussian, so a short history needs a larger move to fall below a cutoff;
- * as n grows it approaches plugInRelativeDensity. Computed in log space (log1p) so far tails do
- * not underflow early. A zero sampleSd gives 1 at the mean, 0 elsewhere.
- * Throws RangeError when n < 2 (no degrees of freedom) or sampleSd is negative or not finite.
- * @example predictiveRelativeDensity(3, 0, 1, 1e9) // ≈ 0.011109 (large n: the Gaussian)
- */
-function predictiveRelativeDensity(x, mean, sampleSd, n) {
-    if (!(n >= 2)) {
-        throw new RangeError(`the predictive distribution needs at least 2 runs, got ${n}`);
-    }
-    checkSpread(sampleSd);
-    if (sampleSd === 0)
-        return x === mean ? 1 : 0;
-    const nu = n - 1;
-    const t = (x - mean) / predictiveScale(sampleSd, n);
-    return Math.exp((-(nu + 1) / 2) * Math.log1p((t * t) / nu));
-}
-
-
-/***/ }),
-
 /***/ 7089:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -24772,11 +24471,9 @@ function holmLevels(tails, alpha) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   Dk: () => (/* binding */ fitGaussian),
 /* harmony export */   tF: () => (/* binding */ MAD_TO_SIGMA)
 /* harmony export */ });
-/* unused harmony export MEAN_AD_TO_SIGMA */
-/* harmony import */ var _moments_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(8884);
+/* unused harmony exports MEAN_AD_TO_SIGMA, fitGaussian */
 /* harmony import */ var _median_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(71);
 
 
@@ -24801,7 +24498,7 @@ const MEAN_AD_TO_SIGMA = Math.sqrt(Math.PI / 2);
  * @example fitGaussian([9, 10, 11], 'mle') // { n: 3, mean: 10, sd: 0.8165, sampleSd: 1, ... }
  */
 function fitGaussian(values, method = 'mle', resolution = 0) {
-    const { n, mean, squares } = (0,_moments_js__WEBPACK_IMPORTED_MODULE_1__/* .meanAndSquares */ .R7)(values);
+    const { n, mean, squares } = meanAndSquares(values);
     if (!(resolution >= 0) || !Number.isFinite(resolution)) {
         throw new RangeError(`resolution must be a finite number, 0 or more, got ${resolution}`);
     }
@@ -24810,8 +24507,8 @@ function fitGaussian(values, method = 'mle', resolution = 0) {
     let spread;
     let sampleSpread;
     if (method === 'robust') {
-        centre = (0,_median_js__WEBPACK_IMPORTED_MODULE_0__/* .median */ .J)(values);
-        spread = MAD_TO_SIGMA * (0,_median_js__WEBPACK_IMPORTED_MODULE_0__/* .medianAbsoluteDeviation */ .h)(values);
+        centre = median(values);
+        spread = MAD_TO_SIGMA * medianAbsoluteDeviation(values);
         if (spread === 0)
             spread = MEAN_AD_TO_SIGMA * meanAbsoluteDeviation(values, centre);
         sampleSpread = spread;
@@ -24844,9 +24541,9 @@ function meanAbsoluteDeviation(values, centre) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   J: () => (/* binding */ median),
-/* harmony export */   h: () => (/* binding */ medianAbsoluteDeviation)
+/* harmony export */   J: () => (/* binding */ median)
 /* harmony export */ });
+/* unused harmony export medianAbsoluteDeviation */
 /* harmony import */ var simple_statistics__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5521);
 
 /** Rejects what has no median: an empty set or a non-finite value (1-based position in the message). */
@@ -24876,344 +24573,21 @@ function median(values) {
  * @example medianAbsoluteDeviation([1, 2, 3, 4, 100]) // 1
  */
 function medianAbsoluteDeviation(values) {
-    return (0,simple_statistics__WEBPACK_IMPORTED_MODULE_0__/* .medianAbsoluteDeviation */ .hK)(checkFinite(values));
+    return ssMad(checkFinite(values));
 }
 
 
 /***/ }),
 
-/***/ 8884:
+/***/ 916:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   R7: () => (/* binding */ meanAndSquares),
-/* harmony export */   i2: () => (/* binding */ mean)
+/* harmony export */   RL: () => (/* binding */ regularizedBeta),
+/* harmony export */   kg: () => (/* binding */ betaPointAt),
+/* harmony export */   rP: () => (/* binding */ betaPointFromOdds)
 /* harmony export */ });
-/* unused harmony export variance */
-/**
- * Mean and sum of squared deviations by the corrected two-pass algorithm (Chan, Golub & LeVeque,
- * "Algorithms for computing the sample variance", 1983): the second pass subtracts the mean first,
- * and the small correction term removes the rounding left in the mean. Large offsets (values like
- * 1e13 + small noise, NIST NumAcc4) keep their precision, which a one-pass sum of squares loses.
- * O(n) time, O(1) space. Throws RangeError on an empty input or a non-finite value.
- *
- * @example meanAndSquares([1, 2, 3]) // { n: 3, mean: 2, squares: 2 }
- */
-function meanAndSquares(values) {
-    const n = values.length;
-    if (n === 0)
-        throw new RangeError('cannot fit an empty set of values');
-    let sum = 0;
-    for (let i = 0; i < n; i++) {
-        const x = values[i];
-        if (!Number.isFinite(x))
-            throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
-        sum += x;
-    }
-    const first = sum / n;
-    let squares = 0;
-    let drift = 0;
-    for (let i = 0; i < n; i++) {
-        const d = values[i] - first;
-        squares += d * d;
-        drift += d;
-    }
-    squares -= (drift * drift) / n;
-    return { n, mean: first + drift / n, squares: Math.max(0, squares) };
-}
-/** Arithmetic mean (two-pass, see meanAndSquares). @example mean([2, 4]) // 3 */
-function mean(values) {
-    return meanAndSquares(values).mean;
-}
-/**
- * Variance dividing by n ("mle", the maximum-likelihood estimate) or by n - 1 ("unbiased").
- * @example variance([1, 2, 3, 4], 'mle') // 1.25
- */
-function variance(values, divisor) {
-    const { n, squares } = meanAndSquares(values);
-    if (divisor === 'unbiased') {
-        if (n < 2)
-            throw new RangeError('the unbiased variance needs at least 2 values');
-        return squares / (n - 1);
-    }
-    return squares / n;
-}
-
-
-/***/ }),
-
-/***/ 2986:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  kC: () => (/* binding */ normalDensity),
-  Hi: () => (/* binding */ normalLogCdf),
-  IL: () => (/* binding */ normalUpperTail)
-});
-
-// UNUSED EXPORTS: normalLogDensity
-
-;// CONCATENATED MODULE: ./src/model/special/erfc.ts
-/**
- * The complementary error function by W. J. Cody's rational Chebyshev approximations ("Rational
- * Chebyshev approximations for the error function", Math. Comp. 23 (1969) 631-637; the
- * coefficients of his CALERF routine in netlib's SPECFUN, good to about 1e-18): three intervals,
- * |x| <= 0.46875, up to 4, and beyond 4 (in 1/x^2). The exponential factor exp(-x^2) is taken
- * in two exact pieces so that far tails keep their relative accuracy down to the underflow.
- */
-// Cody's coefficients for erf(x) = x R(x^2), |x| <= 0.46875.
-const A = [3.1611237438705656, 113.86415415105016, 377.485237685302021, 3209.37758913846947, 0.185777706184603153];
-const B = [23.6012909523441209, 244.024637934444173, 1282.61652607737228, 2844.23683343917062];
-// exp(x^2) erfc(x) = R(x), 0.46875 < x <= 4.
-const C = [
-    0.564188496988670089, 8.88314979438837594, 66.1191906371416295, 298.635138197400131, 881.95222124176909,
-    1712.04761263407058, 2051.07837782607147, 1230.33935479799725, 2.15311535474403846e-8,
-];
-const D = [
-    15.7449261107098347, 117.693950891312499, 537.181101862009858, 1621.38957456669019, 3290.79923573345963,
-    4362.61909014324716, 3439.36767414372164, 1230.33935480374942,
-];
-// exp(x^2) erfc(x) = (1/sqrt(pi) - R(1/x^2) / x^2) / x, x > 4.
-const P = [
-    0.305326634961232344, 0.360344899949804439, 0.125781726111229246, 0.0160837851487422766, 6.58749161529837803e-4,
-    0.0163153871373020978,
-];
-const Q = [
-    2.56852019228982242, 1.87295284992346725, 0.527905102951428412, 0.0605183413124413191, 2.33520497626869185e-3,
-];
-const INV_SQRT_PI = 0.56418958354775628695;
-/** Where Cody's first interval (erf as a rational function of x^2) ends. */
-const ERF_SMALL_LIMIT = 0.46875;
-/** erf(x) for |x| <= ERF_SMALL_LIMIT (Cody's first interval). */
-function erfSmall(x) {
-    const z = x * x;
-    let num = A[4] * z;
-    let den = z;
-    for (let i = 0; i < 3; i++) {
-        num = (num + A[i]) * z;
-        den = (den + B[i]) * z;
-    }
-    return (x * (num + A[3])) / (den + B[3]);
-}
-/**
- * exp(y^2) erfc(y) for y > ERF_SMALL_LIMIT (Cody's second and third intervals); about
- * 1 / (y sqrt(pi)) for large y, 0 at Infinity.
- */
-function erfcScaledTail(y) {
-    if (y <= 4) {
-        let num = C[8] * y;
-        let den = y;
-        for (let i = 0; i < 7; i++) {
-            num = (num + C[i]) * y;
-            den = (den + D[i]) * y;
-        }
-        return (num + C[7]) / (den + D[7]);
-    }
-    const z = 1 / (y * y);
-    let num = P[5] * z;
-    let den = z;
-    for (let i = 0; i < 4; i++) {
-        num = (num + P[i]) * z;
-        den = (den + Q[i]) * z;
-    }
-    return (INV_SQRT_PI - (z * (num + P[4])) / (den + Q[4])) / y;
-}
-/**
- * exp(-s y^2) for y >= 0 and s = 1 or 1/2, as Cody takes it: y = h + r with h a multiple of
- * 1/16, so h^2 is exact and only the small exp(-s (y - h)(y + h)) carries rounding. 0 beyond 40.
- */
-function expNegSquare(y, s) {
-    if (y > 40)
-        return 0;
-    const h = Math.trunc(y * 16) / 16;
-    return Math.exp(-s * h * h) * Math.exp(-s * (y - h) * (y + h));
-}
-/**
- * Complementary error function erfc(x) = (2 / sqrt(pi)) integral_x^inf exp(-t^2) dt, with full
- * relative accuracy for large x (W. J. Cody 1969). NaN in, NaN out.
- * @example erfc(1) // 0.15729920705028513
- */
-function erfc(x) {
-    const y = Math.abs(x);
-    if (!(y > ERF_SMALL_LIMIT))
-        return 1 - erfSmall(x); // also NaN
-    const upper = erfcScaledTail(y) * expNegSquare(y, 1);
-    return x < 0 ? 2 - upper : upper;
-}
-/**
- * Scaled complementary error function exp(x^2) erfc(x) for x >= 0 (finite where erfc underflows:
- * about 1 / (x sqrt(pi)) for large x). Throws RangeError for negative x, where it grows as
- * 2 exp(x^2) and nothing here needs it.
- * @example erfcScaled(30) // ≈ 0.0187958888
- */
-function erfcScaled(x) {
-    if (x < 0)
-        throw new RangeError(`erfcScaled takes x >= 0, got ${x}`);
-    if (!(x > ERF_SMALL_LIMIT))
-        return Math.exp(x * x) * (1 - erfSmall(x));
-    return erfcScaledTail(x);
-}
-
-;// CONCATENATED MODULE: ./src/model/special/normal.ts
-
-/** ln sqrt(2 pi). */
-const LN_SQRT_2PI = 0.91893853320467274178;
-const INV_SQRT_2PI = 0.39894228040143267794;
-/**
- * Standard normal upper tail Q(z) = P(Z > z) = erfc(z / sqrt 2) / 2, computed directly (never as
- * 1 - cdf) with Cody's erfc; exp(-z^2/2) is split as in erfc so the
- * relative accuracy holds out to z = 37 and beyond, until the result underflows. NaN in, NaN out.
- * @example normalUpperTail(1.96) // ≈ 0.0249979
- */
-function normalUpperTail(z) {
-    const y = Math.abs(z) * Math.SQRT1_2;
-    if (!(y > ERF_SMALL_LIMIT))
-        return 0.5 - 0.5 * erfSmall(z * Math.SQRT1_2); // also NaN
-    const far = 0.5 * erfcScaledTail(y) * expNegSquare(Math.abs(z), 0.5);
-    return z < 0 ? 1 - far : far;
-}
-/**
- * ln P(Z < z) for a standard normal, finite far below where P underflows: for z < -1 it is
- * ln(erfcx(-z / sqrt 2) / 2) - z^2 / 2 with erfcx the scaled erfc, otherwise log1p(-Q(z)).
- * -Infinity at -Infinity, 0 at +Infinity, NaN for NaN.
- * @example normalLogCdf(-40) // ≈ -804.608
- */
-function normalLogCdf(z) {
-    if (z < -1) {
-        if (z === -Infinity)
-            return -Infinity;
-        return Math.log(0.5 * erfcScaledTail(-z * Math.SQRT1_2)) - 0.5 * z * z;
-    }
-    return Math.log1p(-normalUpperTail(z));
-}
-/**
- * Normal density exp(-(x - mean)^2 / (2 sd^2)) / (sd sqrt(2 pi)). sd = 0 is the degenerate
- * distribution (Infinity at the mean, 0 elsewhere). The caller checks sd >= 0; NaN in, NaN out.
- * @example normalDensity(1, 0, 1) // 0.24197072451914337
- */
-function normalDensity(x, mean, sd) {
-    if (sd === 0)
-        return x === mean ? Infinity : Number.isNaN(x - mean) ? Number.NaN : 0;
-    const z = Math.abs((x - mean) / sd);
-    return (INV_SQRT_2PI / sd) * expNegSquare(z, 0.5);
-}
-/**
- * ln of normalDensity: -(x - mean)^2 / (2 sd^2) - ln sd - ln sqrt(2 pi), finite where the density
- * underflows. sd = 0: Infinity at the mean, -Infinity elsewhere. NaN in, NaN out.
- * @example normalLogDensity(0, 0, 1) // -0.9189385332046727
- */
-function normalLogDensity(x, mean, sd) {
-    if (sd === 0)
-        return x === mean ? Infinity : Number.isNaN(x - mean) ? Number.NaN : -Infinity;
-    const z = (x - mean) / sd;
-    return -0.5 * z * z - Math.log(sd) - LN_SQRT_2PI;
-}
-
-
-/***/ }),
-
-/***/ 323:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-
-// EXPORTS
-__nccwpck_require__.d(__webpack_exports__, {
-  yp: () => (/* binding */ cutoffLevel),
-  DE: () => (/* binding */ cutoffSigma),
-  cZ: () => (/* binding */ cutoffT),
-  WI: () => (/* binding */ normalTail),
-  WR: () => (/* binding */ studentLogDensity),
-  AL: () => (/* binding */ studentRelativeDensity),
-  gq: () => (/* binding */ studentTail),
-  br: () => (/* binding */ studentUpperQuantile)
-});
-
-;// CONCATENATED MODULE: ./src/model/special/log-gamma.ts
-/**
- * ln Gamma by Stirling's series with its Bernoulli-number corrections (A&S 6.1.40-41):
- *   ln Gamma(x) = (x - 1/2) ln x - x + ln sqrt(2 pi) + mu(x),
- *   mu(x) = 1/(12x) - 1/(360x^3) + 1/(1260x^5) - 1/(1680x^7) + 1/(1188x^9) - 691/(360360x^11) + 1/(156x^13),
- * used from x = 10 up (the next term is below 3e-17 there) and below 10 through the recurrence
- * Gamma(x) = Gamma(x + k) / (x (x + 1) ... (x + k - 1)). Absolute error a few 1e-15.
- */
-const LN_SQRT_2PI = 0.91893853320467274178;
-/** Where Stirling's series is used as is. */
-const STIRLING_FROM = 10;
-/**
- * The Stirling correction mu(x) = ln Gamma(x) - ((x - 1/2) ln x - x + ln sqrt(2 pi)), x >= 10
- * (A&S 6.1.41; coefficients B_2k / (2k (2k - 1))).
- * @example stirlingCorrection(10) // ≈ 0.0083305634
- */
-function stirlingCorrection(x) {
-    const r = 1 / x;
-    const r2 = r * r;
-    return (r *
-        (1 / 12 + r2 * (-1 / 360 + r2 * (1 / 1260 + r2 * (-1 / 1680 + r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 / 156)))))));
-}
-/**
- * ln Gamma(x) for x > 0 (Stirling's series, recurrence below 10). NaN for x <= 0 or NaN.
- * @example logGamma(0.5) // ≈ 0.5723649429247001 (ln sqrt(pi))
- */
-function logGamma(x) {
-    if (!(x > 0))
-        return Number.NaN;
-    if (x >= STIRLING_FROM)
-        return (x - 0.5) * Math.log(x) - x + LN_SQRT_2PI + stirlingCorrection(x);
-    let product = 1;
-    let y = x;
-    while (y < STIRLING_FROM) {
-        product *= y;
-        y += 1;
-    }
-    return logGamma(y) - Math.log(product);
-}
-/**
- * ln Gamma(x + s) - ln Gamma(x) for x >= 10 and s >= 0, without subtracting two large logs:
- *   (x - 1/2) log1p(s / x) + s ln(x + s) - s + mu(x + s) - mu(x).
- * @example logGammaShift(1e6, 0.5) // ≈ 0.5 ln 1e6 = 6.9077552789821
- */
-function logGammaShift(x, s) {
-    return (x - 0.5) * Math.log1p(s / x) + s * Math.log(x + s) - s + stirlingCorrection(x + s) - stirlingCorrection(x);
-}
-/**
- * ln B(a, b) = ln Gamma(a) + ln Gamma(b) - ln Gamma(a + b) for a, b > 0. When the larger argument
- * is 10 or more, the two large terms are combined by logGammaShift (no cancellation).
- * @example logBeta(0.5, 0.5) // ≈ 1.1447298858494002 (ln pi)
- */
-function logBeta(a, b) {
-    const small = Math.min(a, b);
-    const large = Math.max(a, b);
-    if (large < STIRLING_FROM)
-        return logGamma(a) + logGamma(b) - logGamma(a + b);
-    return logGamma(small) - logGammaShift(large, small);
-}
-/**
- * log1p(u) - u for u > -1, accurate near 0 where the two terms cancel: with t = u / (2 + u),
- * log1p(u) = 2 atanh(t) = 2 (t + t^3/3 + t^5/5 + ...) and u - 2t = u t.
- * @example log1pMinus(1e-10) // ≈ -5e-21
- */
-function log1pMinus(u) {
-    if (!(Math.abs(u) < 0.5))
-        return Math.log1p(u) - u;
-    const t = u / (2 + u);
-    const t2 = t * t;
-    let power = t * t2;
-    let sum = 0;
-    for (let k = 3; k < 80; k += 2) {
-        const term = power / k;
-        sum += term;
-        if (Math.abs(term) <= 1e-17 * Math.abs(sum))
-            break;
-        power *= t2;
-    }
-    return 2 * sum - u * t;
-}
-
-// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
-var normal = __nccwpck_require__(2986);
-;// CONCATENATED MODULE: ./src/model/special/incomplete-beta.ts
+/* harmony import */ var _log_gamma_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2231);
 
 /**
  * The point with odds w = y / x >= 0: x = 1 / (1 + w), y = w / (1 + w), ln x = -log1p(w),
@@ -25244,17 +24618,17 @@ function betaPointAt(x) {
  * Otherwise exp(a ln x + b ln y - ln B(a, b)), every term of moderate size.
  */
 function betaFront(a, b, p) {
-    if (a >= STIRLING_FROM && b >= STIRLING_FROM) {
+    if (a >= _log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .STIRLING_FROM */ .k0 && b >= _log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .STIRLING_FROM */ .k0) {
         const s = a + b;
         const excess = p.x * b - p.y * a; // x (a + b) - a
         const exponent = powerExcess(a, excess / a, p.logX, s) +
             powerExcess(b, -excess / b, p.logY, s) +
-            stirlingCorrection(s) -
-            stirlingCorrection(a) -
-            stirlingCorrection(b);
+            (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .stirlingCorrection */ .np)(s) -
+            (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .stirlingCorrection */ .np)(a) -
+            (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .stirlingCorrection */ .np)(b);
         return Math.sqrt(((a / s) * b) / (2 * Math.PI)) * Math.exp(exponent);
     }
-    return Math.exp(a * p.logX + b * p.logY - logBeta(a, b));
+    return Math.exp(a * p.logX + b * p.logY - (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .logBeta */ .ln)(a, b));
 }
 /**
  * a (log1p(u) - u) for u = x / x0 - 1, x0 = a / s: near x0 by log1pMinus; far below it
@@ -25262,7 +24636,7 @@ function betaFront(a, b, p) {
  */
 function powerExcess(a, u, logX, s) {
     if (u > -0.5)
-        return a * log1pMinus(u);
+        return a * (0,_log_gamma_js__WEBPACK_IMPORTED_MODULE_0__/* .log1pMinus */ ._g)(u);
     return a * (logX + Math.log(s / a) - u);
 }
 const TINY = 1e-300;
@@ -25346,6 +24720,297 @@ function regularizedBeta(a, b, p, upper) {
     return Math.min(1, Math.max(0, upper ? complement : 1 - complement));
 }
 
+
+/***/ }),
+
+/***/ 2231:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   SX: () => (/* binding */ logGamma),
+/* harmony export */   _g: () => (/* binding */ log1pMinus),
+/* harmony export */   k0: () => (/* binding */ STIRLING_FROM),
+/* harmony export */   ln: () => (/* binding */ logBeta),
+/* harmony export */   np: () => (/* binding */ stirlingCorrection)
+/* harmony export */ });
+/* unused harmony export logGammaShift */
+/**
+ * ln Gamma by Stirling's series with its Bernoulli-number corrections (A&S 6.1.40-41):
+ *   ln Gamma(x) = (x - 1/2) ln x - x + ln sqrt(2 pi) + mu(x),
+ *   mu(x) = 1/(12x) - 1/(360x^3) + 1/(1260x^5) - 1/(1680x^7) + 1/(1188x^9) - 691/(360360x^11) + 1/(156x^13),
+ * used from x = 10 up (the next term is below 3e-17 there) and below 10 through the recurrence
+ * Gamma(x) = Gamma(x + k) / (x (x + 1) ... (x + k - 1)). Absolute error a few 1e-15.
+ */
+const LN_SQRT_2PI = 0.91893853320467274178;
+/** Where Stirling's series is used as is. */
+const STIRLING_FROM = 10;
+/**
+ * The Stirling correction mu(x) = ln Gamma(x) - ((x - 1/2) ln x - x + ln sqrt(2 pi)), x >= 10
+ * (A&S 6.1.41; coefficients B_2k / (2k (2k - 1))).
+ * @example stirlingCorrection(10) // ≈ 0.0083305634
+ */
+function stirlingCorrection(x) {
+    const r = 1 / x;
+    const r2 = r * r;
+    return (r *
+        (1 / 12 + r2 * (-1 / 360 + r2 * (1 / 1260 + r2 * (-1 / 1680 + r2 * (1 / 1188 + r2 * (-691 / 360360 + r2 / 156)))))));
+}
+/**
+ * ln Gamma(x) for x > 0 (Stirling's series, recurrence below 10). NaN for x <= 0 or NaN.
+ * @example logGamma(0.5) // ≈ 0.5723649429247001 (ln sqrt(pi))
+ */
+function logGamma(x) {
+    if (!(x > 0))
+        return Number.NaN;
+    if (x >= STIRLING_FROM)
+        return (x - 0.5) * Math.log(x) - x + LN_SQRT_2PI + stirlingCorrection(x);
+    let product = 1;
+    let y = x;
+    while (y < STIRLING_FROM) {
+        product *= y;
+        y += 1;
+    }
+    return logGamma(y) - Math.log(product);
+}
+/**
+ * ln Gamma(x + s) - ln Gamma(x) for x >= 10 and s >= 0, without subtracting two large logs:
+ *   (x - 1/2) log1p(s / x) + s ln(x + s) - s + mu(x + s) - mu(x).
+ * @example logGammaShift(1e6, 0.5) // ≈ 0.5 ln 1e6 = 6.9077552789821
+ */
+function logGammaShift(x, s) {
+    return (x - 0.5) * Math.log1p(s / x) + s * Math.log(x + s) - s + stirlingCorrection(x + s) - stirlingCorrection(x);
+}
+/**
+ * ln B(a, b) = ln Gamma(a) + ln Gamma(b) - ln Gamma(a + b) for a, b > 0. When the larger argument
+ * is 10 or more, the two large terms are combined by logGammaShift (no cancellation).
+ * @example logBeta(0.5, 0.5) // ≈ 1.1447298858494002 (ln pi)
+ */
+function logBeta(a, b) {
+    const small = Math.min(a, b);
+    const large = Math.max(a, b);
+    if (large < STIRLING_FROM)
+        return logGamma(a) + logGamma(b) - logGamma(a + b);
+    return logGamma(small) - logGammaShift(large, small);
+}
+/**
+ * log1p(u) - u for u > -1, accurate near 0 where the two terms cancel: with t = u / (2 + u),
+ * log1p(u) = 2 atanh(t) = 2 (t + t^3/3 + t^5/5 + ...) and u - 2t = u t.
+ * @example log1pMinus(1e-10) // ≈ -5e-21
+ */
+function log1pMinus(u) {
+    if (!(Math.abs(u) < 0.5))
+        return Math.log1p(u) - u;
+    const t = u / (2 + u);
+    const t2 = t * t;
+    let power = t * t2;
+    let sum = 0;
+    for (let k = 3; k < 80; k += 2) {
+        const term = power / k;
+        sum += term;
+        if (Math.abs(term) <= 1e-17 * Math.abs(sum))
+            break;
+        power *= t2;
+    }
+    return 2 * sum - u * t;
+}
+
+
+/***/ }),
+
+/***/ 2986:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  kC: () => (/* binding */ normalDensity),
+  IL: () => (/* binding */ normalUpperTail)
+});
+
+// UNUSED EXPORTS: normalLogCdf, normalLogDensity
+
+;// CONCATENATED MODULE: ./src/model/special/erfc.ts
+/**
+ * The complementary error function by W. J. Cody's rational Chebyshev approximations ("Rational
+ * Chebyshev approximations for the error function", Math. Comp. 23 (1969) 631-637; the
+ * coefficients of his CALERF routine in netlib's SPECFUN, good to about 1e-18): three intervals,
+ * |x| <= 0.46875, up to 4, and beyond 4 (in 1/x^2). The exponential factor exp(-x^2) is taken
+ * in two exact pieces so that far tails keep their relative accuracy down to the underflow.
+ */
+// Cody's coefficients for erf(x) = x R(x^2), |x| <= 0.46875.
+const A = [3.1611237438705656, 113.86415415105016, 377.485237685302021, 3209.37758913846947, 0.185777706184603153];
+const B = [23.6012909523441209, 244.024637934444173, 1282.61652607737228, 2844.23683343917062];
+// exp(x^2) erfc(x) = R(x), 0.46875 < x <= 4.
+const C = [
+    0.564188496988670089, 8.88314979438837594, 66.1191906371416295, 298.635138197400131, 881.95222124176909,
+    1712.04761263407058, 2051.07837782607147, 1230.33935479799725, 2.15311535474403846e-8,
+];
+const D = [
+    15.7449261107098347, 117.693950891312499, 537.181101862009858, 1621.38957456669019, 3290.79923573345963,
+    4362.61909014324716, 3439.36767414372164, 1230.33935480374942,
+];
+// exp(x^2) erfc(x) = (1/sqrt(pi) - R(1/x^2) / x^2) / x, x > 4.
+const P = [
+    0.305326634961232344, 0.360344899949804439, 0.125781726111229246, 0.0160837851487422766, 6.58749161529837803e-4,
+    0.0163153871373020978,
+];
+const Q = [
+    2.56852019228982242, 1.87295284992346725, 0.527905102951428412, 0.0605183413124413191, 2.33520497626869185e-3,
+];
+const INV_SQRT_PI = 0.56418958354775628695;
+/** Where Cody's first interval (erf as a rational function of x^2) ends. */
+const ERF_SMALL_LIMIT = 0.46875;
+/** erf(x) for |x| <= ERF_SMALL_LIMIT (Cody's first interval). */
+function erfSmall(x) {
+    const z = x * x;
+    let num = A[4] * z;
+    let den = z;
+    for (let i = 0; i < 3; i++) {
+        num = (num + A[i]) * z;
+        den = (den + B[i]) * z;
+    }
+    return (x * (num + A[3])) / (den + B[3]);
+}
+/**
+ * exp(y^2) erfc(y) for y > ERF_SMALL_LIMIT (Cody's second and third intervals); about
+ * 1 / (y sqrt(pi)) for large y, 0 at Infinity.
+ */
+function erfc_erfcScaledTail(y) {
+    if (y <= 4) {
+        let num = C[8] * y;
+        let den = y;
+        for (let i = 0; i < 7; i++) {
+            num = (num + C[i]) * y;
+            den = (den + D[i]) * y;
+        }
+        return (num + C[7]) / (den + D[7]);
+    }
+    const z = 1 / (y * y);
+    let num = P[5] * z;
+    let den = z;
+    for (let i = 0; i < 4; i++) {
+        num = (num + P[i]) * z;
+        den = (den + Q[i]) * z;
+    }
+    return (INV_SQRT_PI - (z * (num + P[4])) / (den + Q[4])) / y;
+}
+/**
+ * exp(-s y^2) for y >= 0 and s = 1 or 1/2, as Cody takes it: y = h + r with h a multiple of
+ * 1/16, so h^2 is exact and only the small exp(-s (y - h)(y + h)) carries rounding. 0 beyond 40.
+ */
+function expNegSquare(y, s) {
+    if (y > 40)
+        return 0;
+    const h = Math.trunc(y * 16) / 16;
+    return Math.exp(-s * h * h) * Math.exp(-s * (y - h) * (y + h));
+}
+/**
+ * Complementary error function erfc(x) = (2 / sqrt(pi)) integral_x^inf exp(-t^2) dt, with full
+ * relative accuracy for large x (W. J. Cody 1969). NaN in, NaN out.
+ * @example erfc(1) // 0.15729920705028513
+ */
+function erfc(x) {
+    const y = Math.abs(x);
+    if (!(y > ERF_SMALL_LIMIT))
+        return 1 - erfSmall(x); // also NaN
+    const upper = erfc_erfcScaledTail(y) * expNegSquare(y, 1);
+    return x < 0 ? 2 - upper : upper;
+}
+/**
+ * Scaled complementary error function exp(x^2) erfc(x) for x >= 0 (finite where erfc underflows:
+ * about 1 / (x sqrt(pi)) for large x). Throws RangeError for negative x, where it grows as
+ * 2 exp(x^2) and nothing here needs it.
+ * @example erfcScaled(30) // ≈ 0.0187958888
+ */
+function erfcScaled(x) {
+    if (x < 0)
+        throw new RangeError(`erfcScaled takes x >= 0, got ${x}`);
+    if (!(x > ERF_SMALL_LIMIT))
+        return Math.exp(x * x) * (1 - erfSmall(x));
+    return erfc_erfcScaledTail(x);
+}
+
+;// CONCATENATED MODULE: ./src/model/special/normal.ts
+
+/** ln sqrt(2 pi). */
+const LN_SQRT_2PI = 0.91893853320467274178;
+const INV_SQRT_2PI = 0.39894228040143267794;
+/**
+ * Standard normal upper tail Q(z) = P(Z > z) = erfc(z / sqrt 2) / 2, computed directly (never as
+ * 1 - cdf) with Cody's erfc; exp(-z^2/2) is split as in erfc so the
+ * relative accuracy holds out to z = 37 and beyond, until the result underflows. NaN in, NaN out.
+ * @example normalUpperTail(1.96) // ≈ 0.0249979
+ */
+function normalUpperTail(z) {
+    const y = Math.abs(z) * Math.SQRT1_2;
+    if (!(y > ERF_SMALL_LIMIT))
+        return 0.5 - 0.5 * erfSmall(z * Math.SQRT1_2); // also NaN
+    const far = 0.5 * erfc_erfcScaledTail(y) * expNegSquare(Math.abs(z), 0.5);
+    return z < 0 ? 1 - far : far;
+}
+/**
+ * ln P(Z < z) for a standard normal, finite far below where P underflows: for z < -1 it is
+ * ln(erfcx(-z / sqrt 2) / 2) - z^2 / 2 with erfcx the scaled erfc, otherwise log1p(-Q(z)).
+ * -Infinity at -Infinity, 0 at +Infinity, NaN for NaN.
+ * @example normalLogCdf(-40) // ≈ -804.608
+ */
+function normalLogCdf(z) {
+    if (z < -1) {
+        if (z === -Infinity)
+            return -Infinity;
+        return Math.log(0.5 * erfcScaledTail(-z * Math.SQRT1_2)) - 0.5 * z * z;
+    }
+    return Math.log1p(-normalUpperTail(z));
+}
+/**
+ * Normal density exp(-(x - mean)^2 / (2 sd^2)) / (sd sqrt(2 pi)). sd = 0 is the degenerate
+ * distribution (Infinity at the mean, 0 elsewhere). The caller checks sd >= 0; NaN in, NaN out.
+ * @example normalDensity(1, 0, 1) // 0.24197072451914337
+ */
+function normalDensity(x, mean, sd) {
+    if (sd === 0)
+        return x === mean ? Infinity : Number.isNaN(x - mean) ? Number.NaN : 0;
+    const z = Math.abs((x - mean) / sd);
+    return (INV_SQRT_2PI / sd) * expNegSquare(z, 0.5);
+}
+/**
+ * ln of normalDensity: -(x - mean)^2 / (2 sd^2) - ln sd - ln sqrt(2 pi), finite where the density
+ * underflows. sd = 0: Infinity at the mean, -Infinity elsewhere. NaN in, NaN out.
+ * @example normalLogDensity(0, 0, 1) // -0.9189385332046727
+ */
+function normalLogDensity(x, mean, sd) {
+    if (sd === 0)
+        return x === mean ? Infinity : Number.isNaN(x - mean) ? Number.NaN : -Infinity;
+    const z = (x - mean) / sd;
+    return -0.5 * z * z - Math.log(sd) - LN_SQRT_2PI;
+}
+
+
+/***/ }),
+
+/***/ 2170:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  yp: () => (/* binding */ cutoffLevel),
+  DE: () => (/* binding */ cutoffSigma),
+  cZ: () => (/* binding */ cutoffT),
+  WR: () => (/* binding */ studentLogDensity),
+  AL: () => (/* binding */ studentRelativeDensity),
+  gq: () => (/* binding */ studentTail),
+  br: () => (/* binding */ studentUpperQuantile)
+});
+
+// UNUSED EXPORTS: normalTail
+
+// EXTERNAL MODULE: ./src/model/special/log-gamma.ts
+var log_gamma = __nccwpck_require__(2231);
+// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
+var normal = __nccwpck_require__(2986);
+// EXTERNAL MODULE: ./src/model/special/incomplete-beta.ts
+var incomplete_beta = __nccwpck_require__(916);
 ;// CONCATENATED MODULE: ./src/model/special/student-t.ts
 
 
@@ -25363,7 +25028,7 @@ function studentTwoSidedTail(t, nu) {
         return 2 * (0,normal/* normalUpperTail */.IL)(Math.abs(t));
     if (t === 0)
         return 1;
-    return regularizedBeta(nu / 2, 0.5, betaPointFromOdds((t * t) / nu), false);
+    return (0,incomplete_beta/* regularizedBeta */.RL)(nu / 2, 0.5, (0,incomplete_beta/* betaPointFromOdds */.rP)((t * t) / nu), false);
 }
 /**
  * Upper tail P(T > t): half the two-sided tail for t >= 0, one minus half of it below 0.
@@ -25477,7 +25142,7 @@ function cutoffT(cutoff, nu) {
 function studentLogDensity(t, nu) {
     if (nu === Infinity)
         return -0.5 * t * t - 0.9189385332046727;
-    return (logGamma((nu + 1) / 2) - logGamma(nu / 2) - 0.5 * Math.log(nu * Math.PI) - ((nu + 1) / 2) * Math.log1p((t * t) / nu));
+    return ((0,log_gamma/* logGamma */.SX)((nu + 1) / 2) - (0,log_gamma/* logGamma */.SX)(nu / 2) - 0.5 * Math.log(nu * Math.PI) - ((nu + 1) / 2) * Math.log1p((t * t) / nu));
 }
 /** A cutoff is a relative density: a number in (0, 1]. */
 function checkCutoff(cutoff) {

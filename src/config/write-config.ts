@@ -4,9 +4,9 @@ import { literalGlob } from './escape-glob.js';
 import { compileGlobs } from './glob-matcher.js';
 import { parseConfig } from './load.js';
 import { settingsFor } from './rules.js';
-import type { Config } from './types.js';
+import type { Config, Family, Transform } from './types.js';
 
-/** One metric's suggested settings (what `bellgate tune` suggests), with the reason written beside it. */
+/** One metric's settings to write into its own rule, with the reason written beside it. */
 export interface RuleEdit {
   metric: string;
   cutoff?: number;
@@ -14,10 +14,21 @@ export interface RuleEdit {
   reason: string;
 }
 
-/** What `--write` puts into a config. */
+/** The `defaults` keys `--write` may set. */
+export interface DefaultsEdit {
+  cutoff?: number;
+  transform?: Transform;
+  sharedMove?: boolean;
+  changePoints?: boolean;
+}
+
+/** What `--write` puts into a config: defaults keys, top-level keys and per-metric rules. */
 export interface ConfigEdit {
-  cutoff: number;
-  rules: readonly RuleEdit[];
+  defaults?: DefaultsEdit;
+  family?: Family;
+  /** The per-run budget as a share (0.01 is written `1%`). */
+  budget?: number;
+  rules?: readonly RuleEdit[];
 }
 
 /** A replacement of text[start, end) by `text`. */
@@ -27,40 +38,61 @@ interface Splice {
   text: string;
 }
 
+type Scalar = number | string | boolean;
+
 /**
- * Writes suggested settings into a config's text, keeping the user's comments, key order and
- * formatting byte for byte wherever it can: the YAML is parsed with yaml's Document API only to
- * find node positions, and the edits are spliced into the original text —
- * - `defaults.cutoff`: its value replaced in place (a comment beside it stays), or a line inserted
- *   at the top of a block `defaults:`, or a new `defaults:` section at the end;
+ * Writes settings into a config's text, keeping the user's comments, key order and formatting
+ * byte for byte wherever it can: the YAML is parsed with yaml's Document API only to find node
+ * positions, and the edits are spliced into the original text —
+ * - a `defaults` key or a top-level key (family, budget): its value replaced in place (a comment
+ *   beside it stays), or a line inserted at the top of a block `defaults:` (a top-level key: at
+ *   the end), or a new `defaults:` section at the end;
  * - a per-metric rule: the metric's own literal rule edited in place when it already sets that key
  *   and no later rule also matches the metric, else a new rule (with a comment saying why)
  *   appended to the end of `metrics:` (a later rule wins).
  * Flow-style sections (`defaults: {cutoff: 0.01}`) are edited through the Document instead
  * (comments and order kept, spacing normalised).
  * Refuses (InputError with file:line:col) a text that is not a valid config, and checks that the
- * result reads back to the suggested settings. An empty text gives a new config.
- * @example applyConfigEdit('defaults:\n  cutoff: 0.01 # strict\n', 'b.yml', { cutoff: 0.001, rules: [] }) // 'defaults:\n  cutoff: 0.001 # strict\n'
+ * result reads back (src/config/load.ts) to the settings asked for. An empty text gives a new config.
+ * @example applyConfigEdit('defaults:\n  cutoff: 0.01 # strict\n', 'b.yml', { defaults: { cutoff: 0.001 } }) // 'defaults:\n  cutoff: 0.001 # strict\n'
  */
 export function applyConfigEdit(text: string, source: string, edit: ConfigEdit): string {
   parseConfig(text, source);
-  const rules = edit.rules.filter((r) => literalGlob(r.metric) !== undefined);
-  const out = spliceEdit(text, edit.cutoff, rules) ?? documentEdit(text, edit.cutoff, rules);
+  const rules = (edit.rules ?? []).filter((r) => literalGlob(r.metric) !== undefined);
+  const defaults = defaultsPairs(edit.defaults ?? {});
+  const top: [string, Scalar][] = [];
+  if (edit.family !== undefined) top.push(['family', edit.family]);
+  if (edit.budget !== undefined) top.push(['budget', `${Number((100 * edit.budget).toPrecision(6))}%`]);
+  const out = spliceEdit(text, defaults, top, rules) ?? documentEdit(text, defaults, top, rules);
   const config = parseConfig(out, source);
-  if (!readsBack(config, edit.cutoff, rules)) {
-    throw new InputError(
-      'could not write the suggestion so that it reads back as suggested; the config was not changed',
-      {
-        where: source,
-        fix: 'edit the config by hand with the suggestion printed above',
-      },
-    );
+  if (!readsBack(config, edit, rules)) {
+    throw new InputError('could not write the settings so that they read back as asked; the config was not changed', {
+      where: source,
+      fix: 'edit the config by hand with the settings printed above',
+    });
   }
   return out;
 }
 
-function readsBack(config: Config, cutoff: number, rules: readonly RuleEdit[]): boolean {
-  if (config.defaults.cutoff !== cutoff) return false;
+function defaultsPairs(d: DefaultsEdit): [string, Scalar][] {
+  const pairs: [string, Scalar | undefined][] = [
+    ['cutoff', d.cutoff],
+    ['transform', d.transform],
+    ['shared-move', d.sharedMove],
+    ['change-points', d.changePoints],
+  ];
+  return pairs.filter((p): p is [string, Scalar] => p[1] !== undefined);
+}
+
+function readsBack(config: Config, edit: ConfigEdit, rules: readonly RuleEdit[]): boolean {
+  const d = edit.defaults ?? {};
+  const got = config.defaults;
+  if (d.cutoff !== undefined && got.cutoff !== d.cutoff) return false;
+  if (d.transform !== undefined && got.transform !== d.transform) return false;
+  if (d.sharedMove !== undefined && got.sharedMove !== d.sharedMove) return false;
+  if (d.changePoints !== undefined && got.changePoints !== d.changePoints) return false;
+  if (edit.family !== undefined && config.family !== edit.family) return false;
+  if (edit.budget !== undefined && Math.abs(config.budget - edit.budget) > 1e-12 * edit.budget) return false;
   return rules.every((rule) => {
     const s = settingsFor(config, rule.metric);
     return (
@@ -71,29 +103,42 @@ function readsBack(config: Config, cutoff: number, rules: readonly RuleEdit[]): 
 }
 
 /** The splice strategy; undefined when the layout needs the Document fallback. */
-function spliceEdit(text: string, cutoff: number, rules: readonly RuleEdit[]): string | undefined {
+function spliceEdit(
+  text: string,
+  defaultsKeys: readonly [string, Scalar][],
+  topKeys: readonly [string, Scalar][],
+  rules: readonly RuleEdit[],
+): string | undefined {
   const doc = parseDocument(text);
   const root = doc.contents;
   if (root !== null && !(isMap(root) && !root.flow)) return undefined;
   const splices: Splice[] = [];
   const tail: string[] = [];
   const defaults = root?.get('defaults', true) as Node | undefined;
-  if (defaults === undefined) tail.push(`defaults:\n  cutoff: ${cutoff}\n`);
-  else if (!isMap(defaults) || defaults.flow || defaults.items.length === 0) return undefined;
-  else {
-    const value = defaults.get('cutoff', true);
-    if (isScalar(value) && value.range)
-      splices.push({ start: value.range[0], end: value.range[1], text: String(cutoff) });
-    else if (value !== undefined) return undefined;
+  if (defaultsKeys.length > 0) {
+    if (defaults === undefined || (isScalar(defaults) && defaults.value === null && !text.includes('{')))
+      tail.push(`defaults:\n${defaultsKeys.map(([k, v]) => `  ${k}: ${v}\n`).join('')}`);
+    else if (!isMap(defaults) || defaults.flow || defaults.items.length === 0) return undefined;
     else {
       const first = defaults.items[0]!.key as Node;
       const lineStart = text.lastIndexOf('\n', first.range![0] - 1) + 1;
-      splices.push({
-        start: lineStart,
-        end: lineStart,
-        text: `${' '.repeat(first.range![0] - lineStart)}cutoff: ${cutoff}\n`,
-      });
+      const indent = ' '.repeat(first.range![0] - lineStart);
+      const inserted: string[] = [];
+      for (const [key, v] of defaultsKeys) {
+        const value = defaults.get(key, true);
+        if (isScalar(value) && value.range)
+          splices.push({ start: value.range[0], end: value.range[1], text: String(v) });
+        else if (value !== undefined) return undefined;
+        else inserted.push(`${indent}${key}: ${v}\n`);
+      }
+      if (inserted.length > 0) splices.push({ start: lineStart, end: lineStart, text: inserted.join('') });
     }
+  }
+  for (const [key, v] of topKeys) {
+    const value = root?.get(key, true);
+    if (isScalar(value) && value.range) splices.push({ start: value.range[0], end: value.range[1], text: String(v) });
+    else if (value !== undefined) return undefined;
+    else tail.push(`${key}: ${v}\n`);
   }
   const metrics = root?.get('metrics', true) as Node | undefined;
   const appended: RuleEdit[] = [];
@@ -186,11 +231,17 @@ function oneLine(s: string): string {
 }
 
 /** The Document fallback for flow-style or empty sections: nodes edited, comments and order kept. */
-function documentEdit(text: string, cutoff: number, rules: readonly RuleEdit[]): string {
+function documentEdit(
+  text: string,
+  defaultsKeys: readonly [string, Scalar][],
+  topKeys: readonly [string, Scalar][],
+  rules: readonly RuleEdit[],
+): string {
   const doc = parseDocument(text);
   if (doc.contents === null || (isScalar(doc.contents) && doc.contents.value === null))
     doc.contents = doc.createNode({}) as unknown as typeof doc.contents;
-  setScalar(doc, ['defaults', 'cutoff'], cutoff);
+  for (const [key, v] of defaultsKeys) setScalar(doc, ['defaults', key], v);
+  for (const [key, v] of topKeys) setScalar(doc, [key], v);
   for (const rule of rules) {
     let seq = doc.get('metrics', true);
     if (!isSeq(seq)) {
@@ -217,7 +268,7 @@ function documentEdit(text: string, cutoff: number, rules: readonly RuleEdit[]):
 }
 
 /** Sets a scalar, editing an existing scalar node in place so its comments stay. */
-function setScalar(target: Document | YAMLMap, path: string[], value: number | string): void {
+function setScalar(target: Document | YAMLMap, path: string[], value: Scalar): void {
   const node = target.getIn(path, true);
   if (isScalar(node)) node.value = value;
   else target.setIn(path, value);

@@ -1,134 +1,173 @@
-import type { Family } from '../config/types.js';
-import type { TuneResult } from '../gate/tune/tune.js';
-import { FAMILIES } from '../gate/tune/tune.js';
+import type { RateEvidence } from '../gate/tune/evidence.js';
+import type { SettingScore } from '../gate/tune/score.js';
+import { percent, sameSetting, type TuneSetting } from '../gate/tune/setting.js';
+import { AIM_SHIFT, BLIND_SHARE, caughtShare, meetsTarget, SWITCH_LEVEL, type TuneResult } from '../gate/tune/tune.js';
 import { cleanText } from './clean.js';
 import { formatNumber } from './format.js';
 import { textTable } from './tune-table.js';
 
+/** Rows of the ladder shown in the terminal (the JSON has all of them). */
+const SHOWN = 12;
+
+/** Metrics named as unseen before "and N more". */
+const MISSES_SHOWN = 10;
+
 /**
- * `bellgate tune` for a terminal: the cutoff ladder (false alarms per run, share of runs with a
- * false alarm per family setting, precision/recall/F1 with labels), false alarms per metric at the
- * current and the suggested cutoff, normality per metric, and the suggestion with its reasons.
- * Metric names pass through cleanText. Pure.
- * @example renderTuneText(result).split('\n')[0] // 'bellgate tune: series main, 120 runs, 112 replayed, ...'
+ * `bellgate tune` for a terminal: what was replayed, the best settings of the ladder (false alarms
+ * per 100 clean replayed runs with their 95% interval, the model's promised rate, the share of each
+ * injected shift caught), the configured setting, and the recommendation measured by the gate at
+ * exactly that setting, with the evidence behind it and what it cannot see. Pure.
+ * @example renderTuneText(result).split('\n')[0] // 'bellgate tune: series main, 60 runs; ...'
  */
 export function renderTuneText(result: TuneResult): string {
   const out: string[] = [];
-  const refit = result.metrics.filter((m) => m.method === 'refit').length;
+  const shifts = result.shifts.map(plus).join(', ');
   out.push(
-    `bellgate tune: series ${cleanText(result.series)}, ${result.runs} runs, ${result.replayedRuns} replayed, ` +
-      `${formatNumber(result.metricsPerRun)} metrics judged in a typical run`,
+    `bellgate tune: series ${cleanText(result.series)}, ${result.runs} runs; ${result.replayed} replayed clean (each judged against the runs before it), ` +
+      `${result.injected} regressions injected (${shifts}, one metric at a time on its worse side); ` +
+      `${formatNumber(result.metricsPerRun)} metrics judged in a typical run; target: at most ${result.target} false alarms per 100 clean runs`,
   );
-  out.push(
-    `replay: ${result.metrics.length - refit} metrics slid incrementally, ${refit} refitted per run (change points or robust fit)`,
-  );
-  if (result.groups.length > 0) {
+  const r = result.recommendation;
+  if (r === undefined) {
     out.push(
-      `note: groups (${result.groups.map((g) => cleanText(g)).join(', ')}) are replayed member by member, as the gate judges them while a group is learning; their joint check is not in the ladder`,
+      '',
+      'no run had enough runs before it to be judged (min-runs): there is no evidence yet, nothing to recommend',
     );
+    return `${out.join('\n')}\n`;
   }
-  out.push('', ladderTable(result), '');
+  const under = result.ladder.filter((row) => meetsTarget(row, result.target));
+  const best = [...under].sort((a, b) => caughtShare(b, AIM_SHIFT) - caughtShare(a, AIM_SHIFT)).slice(0, SHOWN);
+  const rows = [result.current, ...best.filter((row) => !sameSetting(row.setting, result.current.setting))];
   out.push(
-    `false alarms: alarms on runs not labelled as regressions; "runs/100" is the share of runs with at least one, by family setting (config: ${result.family}).`,
+    '',
+    `settings meeting the target (${under.length} of ${result.ladder.length} tried; best ${best.length} shown) and the configured one`,
   );
-  out.push('', perMetricTable(result));
-  const normality = normalityTable(result);
-  if (normality !== '') out.push('', normality);
-  out.push('', ...suggestionLines(result));
+  out.push(settingsTable(rows, result, r.setting));
+  out.push(
+    '  (> recommended, * configured; FA/100: clean replayed runs the check would have failed, per 100, with the exact 95% interval (Clopper-Pearson); model: the rate the setting promises; steps: runs flagged only on a change the later runs kept)',
+  );
+  out.push('', ...recommendationLines(result));
+  if (result.labels !== undefined)
+    out.push(
+      '',
+      `labels: ${result.labels.count} known regressions in ${result.labels.runs} runs, left out of the clean count; the configured setting flagged ${result.labels.flagged} of those runs`,
+    );
   return `${out.join('\n')}\n`;
 }
 
-function ladderTable(result: TuneResult): string {
-  const own = result.ladders.get(result.family)!;
-  const labelled = own.some((r) => r.labelled !== undefined);
-  const head = ['', 'cutoff', 'sigma', 'false/run', ...FAMILIES.map((f) => `runs/100 ${f}`)];
-  if (labelled) head.push('precision', 'recall', 'F1');
-  const rows = own.map((row, i) => {
-    const mark = [
-      row.cutoff === result.suggestion.cutoff ? '>' : ' ',
-      row.cutoff === result.currentCutoff ? '*' : ' ',
-    ].join('');
-    const cells = [mark, formatNumber(row.cutoff), row.sigma.toFixed(2), row.alarmsPerRun.toFixed(3)];
-    for (const f of FAMILIES) cells.push(per100(result.ladders.get(f as Family)![i]!.runsFlaggedPer100));
-    if (row.labelled !== undefined)
-      cells.push(row.labelled.precision.toFixed(3), row.labelled.recall.toFixed(3), row.labelled.f1.toFixed(3));
-    return cells;
+function settingsTable(rows: readonly SettingScore[], result: TuneResult, chosen: TuneSetting): string {
+  const head = [
+    '',
+    'transform',
+    'shared move',
+    'change points',
+    'decided by',
+    'FA/100',
+    '95% interval',
+    'model',
+    'steps',
+    'unsettled',
+  ];
+  for (const s of result.shifts) head.push(`${plus(s)} caught`);
+  const body = rows.map((row) => {
+    const s = row.setting;
+    const mark = `${sameSetting(s, chosen) ? '>' : ' '}${row === result.current ? '*' : ' '}`;
+    return [
+      mark,
+      s.transform,
+      s.sharedMove ? 'on' : 'off',
+      s.changePoints ? 'on' : 'off',
+      s.family === 'none' ? `cutoff ${formatNumber(s.cutoff)}` : `${s.family} ${percent(s.budget!)}`,
+      per100(row.falseAlarms.rate),
+      interval(row.falseAlarms),
+      per100(row.promisedPer100 / 100),
+      String(row.steps),
+      String(row.unsettled),
+      ...result.shifts.map((shift) => share(row.caught.find((c) => c.shift === shift)?.evidence)),
+    ];
   });
-  const legend = `  (> suggested, * current; cutoff chosen on family none, where a cutoff decides; config: family ${result.family}${labelled ? `; ${result.labels?.count ?? 0} labelled regressions` : ''})`;
-  return `cutoff ladder\n${textTable([head, ...rows], 'lr')}\n${legend}`;
+  return textTable([head, ...body], 'lllll');
 }
 
-function perMetricTable(result: TuneResult): string {
-  const own = result.ladders.get(result.family)!;
-  const current = own.find((r) => r.cutoff === result.currentCutoff)!;
-  const suggested = own.find((r) => r.cutoff === result.suggestion.cutoff)!;
-  const shown = current === suggested ? [current] : [current, suggested];
-  const head = ['metric', 'judged', ...shown.map((row) => `per100 @${formatNumber(row.cutoff)}`), 'replay'];
-  const rows = result.metrics.map((m, j) => [
-    cleanText(m.name),
-    String(m.judged),
-    ...shown.map((row) => per100(rate(row.perMetric[j]!, m.judged))),
-    m.method,
-  ]);
-  return `false alarms per 100 judged runs, by metric\n${textTable([head, ...rows], `lr${'r'.repeat(shown.length)}l`)}`;
-}
-
-function normalityTable(result: TuneResult): string {
-  const rows = result.metrics
-    .filter((m) => m.normality !== undefined)
-    .map((m) => {
-      const n = m.normality!;
-      return [
-        cleanText(m.name),
-        String(n.n),
-        n.raw.skewness.toFixed(2),
-        n.raw.andersonDarling.toFixed(3),
-        n.log ? n.log.skewness.toFixed(2) : '-',
-        n.log ? n.log.andersonDarling.toFixed(3) : '-',
-        m.transform,
-        n.note,
-      ];
-    });
-  if (rows.length === 0) return '';
-  const head = ['metric', 'n', 'skew', 'A*²', 'skew log', 'A*² log', 'transform', 'note'];
-  return (
-    "normality of the newest window (skewness: Joanes & Gill 1998; Anderson-Darling A*² with estimated mean and sd, 5% critical value 0.752: D'Agostino & Stephens 1986)\n" +
-    textTable([head, ...rows], 'lrrrrrll')
-  );
-}
-
-function suggestionLines(result: TuneResult): string[] {
-  const s = result.suggestion;
-  const lines = ['suggestion', `  defaults.cutoff: ${formatNumber(s.cutoff)} — ${s.reason}`];
+function recommendationLines(result: TuneResult): string[] {
+  const r = result.recommendation!;
+  const s = r.setting;
+  const f = r.score.falseAlarms;
+  const lines = ['recommendation'];
+  const keys = [
+    `transform: ${s.transform}`,
+    `shared-move: ${s.sharedMove}`,
+    `change-points: ${s.changePoints}`,
+    `family: ${s.family}`,
+    s.family === 'none' ? `cutoff: ${formatNumber(s.cutoff)}` : `budget: ${percent(s.budget!)}`,
+  ];
+  lines.push(`  ${keys.join(', ')}`);
   lines.push(
-    `  family: ${s.family}${s.family === result.family ? ' (as configured)' : ` (configured: ${result.family})`} — ${s.familyReason}`,
+    r.reason === 'configured-holds'
+      ? `  why: the configured setting meets the target, and no setting of the ladder catches significantly more ${plus(AIM_SHIFT)} regressions on the same injections (exact McNemar test, one-sided ${SWITCH_LEVEL})`
+      : r.reason === 'best-under-target'
+        ? `  why: the most ${plus(AIM_SHIFT)} regressions caught among the settings whose promised rate meets the target and whose replayed false alarms do not contradict it (the floor of their 95% interval is within it)`
+        : `  why: NO setting of the ladder meets the target of ${result.target} per 100 on the replay; this one has the fewest false alarms`,
   );
-  for (const rule of s.rules) {
-    const keys = [
-      rule.cutoff === undefined ? '' : `cutoff: ${formatNumber(rule.cutoff)}`,
-      rule.transform === undefined ? '' : `transform: ${rule.transform}`,
-    ].filter((k) => k !== '');
-    lines.push(`  rule ${cleanText(rule.metric)}: ${keys.join(', ')} — ${cleanText(rule.reason, 400)}`);
-  }
-  const t = result.target;
-  lines.push(
-    t.cutoff === undefined
-      ? `  target ${t.per100} per 100 runs: no cutoff of the ladder meets it`
-      : `  target ${t.per100} per 100 runs: loosest qualifying cutoff ${formatNumber(t.cutoff)}`,
-  );
-  if (result.labels?.best !== undefined) {
-    const b = result.labels.best;
+  lines.push(`  measured by the gate set exactly so, over ${f.trials} clean replayed runs: ${alarmEvidence(f)}`);
+  if (r.replayTooShort)
     lines.push(
-      `  labels: best F1 ${b.f1.toFixed(3)} at cutoff ${formatNumber(b.cutoff)} (precision ${b.precision.toFixed(3)}, recall ${b.recall.toFixed(3)})`,
+      `  evidence: ${f.trials} replayed runs cannot show a rate below ${per100(Math.min(1, 3 / Math.max(1, f.trials)))} per 100 (rule of three), ` +
+        `so the figure to rely on is the model's own calibrated rate: ${promise(s, r.score.promisedPer100)}`,
+    );
+  else lines.push(`  the model's own calibrated rate: ${promise(s, r.score.promisedPer100)}`);
+  const caught = r.score.caught.map(
+    (c) =>
+      `${plus(c.shift)} ${c.evidence.events} of ${c.evidence.trials} (${share(c.evidence)}, 95% ${shareInterval(c.evidence)})`,
+  );
+  lines.push(`  injected regressions caught: ${caught.join('; ')}`);
+  if (r.blind) {
+    const largest = Math.max(...result.shifts);
+    lines.push(
+      `  BLIND: it catches fewer than ${Math.round(100 * BLIND_SHARE)}% of ${plus(largest)} regressions; --write refuses it unless --force is given`,
+    );
+  }
+  if (r.misses.length > 0) {
+    const named = r.misses
+      .slice(0, MISSES_SHOWN)
+      .map((m) => `${cleanText(m.metric)} (${Math.round(100 * m.detectable)}%)`)
+      .join(', ');
+    const more = r.misses.length > MISSES_SHOWN ? ` and ${r.misses.length - MISSES_SHOWN} more` : '';
+    lines.push(
+      `  unseen: a ${plus(Math.max(...result.shifts))} regression of ${r.misses.length} metric${r.misses.length === 1 ? '' : 's'} would pass (median detectable above it): ${named}${more}`,
     );
   }
   return lines;
 }
 
-function rate(count: number, of: number): number {
-  return of === 0 ? 0 : (100 * count) / of;
+function alarmEvidence(f: RateEvidence): string {
+  if (f.events === 0)
+    return `0 false alarms: below ${per100(f.ruleOfThree ?? 1)} per 100 at 95% (rule of three, Hanley & Lippman-Hand 1983; exact upper ${per100(f.upper)})`;
+  return `${f.events} false alarm${f.events === 1 ? '' : 's'}, ${per100(f.rate)} per 100 (95% ${interval(f)})`;
 }
 
-function per100(x: number): string {
-  return x.toFixed(1);
+function promise(s: TuneSetting, per100Rate: number): string {
+  if (s.family !== 'none')
+    return `${s.family} holds the chance of any false alarm in a run at ${percent(s.budget!)} (${per100(per100Rate / 100)} per 100)`;
+  return `each metric at the one-sided Gaussian tail of cutoff ${formatNumber(s.cutoff)}: ${per100(per100Rate / 100)} per 100 runs`;
+}
+
+function plus(shift: number): string {
+  return `+${Math.round(100 * shift)}%`;
+}
+
+function per100(rate: number): string {
+  return (100 * rate).toFixed(1);
+}
+
+function interval(e: RateEvidence): string {
+  return `${per100(e.lower)}-${per100(e.upper)}`;
+}
+
+function share(e: RateEvidence | undefined): string {
+  return e === undefined || e.trials === 0 ? '-' : `${Math.round(100 * e.rate)}%`;
+}
+
+function shareInterval(e: RateEvidence): string {
+  return `${Math.round(100 * e.lower)}-${Math.round(100 * e.upper)}%`;
 }

@@ -4,6 +4,8 @@
 //   JSON-parsing the same numbers as a plain array of arrays), and <= 1.3 x check at 100 runs;
 // - record at 10,000 runs <= 1.3 x record at 100 runs;
 // - the action's PR check, against a loopback stand-in of the GitHub API, under 0.3 s.
+// `--only tune` instead measures `bellgate tune`'s written config on the simulated project and the
+// recorded corpus (test/bench/tune.bench.ts, through vitest: it needs no bundle).
 //
 //   node test/bench/run.mjs [--runs 100,1000,10000] [--metrics 1000] [--repeat 5] [--dist dist]
 //                           [--only floor,check,record,action] [--keep-files] [--profile DIR] [--trace]
@@ -62,6 +64,18 @@ const sizes = flags.runs.split(',').map((r) => positive('runs', r));
 const metrics = positive('metrics', flags.metrics);
 const repeat = positive('repeat', flags.repeat);
 const only = new Set(flags.only.split(','));
+if (only.has('tune')) {
+  const vitest = join(root, 'node_modules', 'vitest', 'vitest.mjs');
+  const code = await new Promise((done) =>
+    spawn(process.execPath, [vitest, 'run', '--config', join(root, 'test', 'bench', 'tune.vitest.config.ts')], {
+      cwd: root,
+      stdio: 'inherit',
+    }).on('close', done),
+  );
+  if (code !== 0) process.exit(1);
+  only.delete('tune');
+  if (only.size === 0) process.exit(0);
+}
 const dist = resolve(flags.dist);
 const cli = join(dist, 'cli', 'index.js');
 const action = join(dist, 'index.js');

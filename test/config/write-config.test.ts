@@ -10,7 +10,7 @@ const original = readFileSync(new URL('../fixtures/tune/bellgate.yml', import.me
 
 describe('writing the suggestion into a config', () => {
   const out = applyConfigEdit(original, 'bellgate.yml', {
-    cutoff: 0.001,
+    defaults: { cutoff: 0.001 },
     rules: [
       { metric: 'render/slow-tile', cutoff: 1e-4, reason: 'noisy' },
       { metric: 'size/tiles.db', transform: 'log', reason: 'skewed' },
@@ -45,13 +45,16 @@ describe('writing the suggestion into a config', () => {
 
   it('writes into an empty file, and into flow-style sections', () => {
     const fresh = applyConfigEdit('', 'b.yml', {
-      cutoff: 0.005,
+      defaults: { cutoff: 0.005 },
       rules: [{ metric: 'a/b', cutoff: 1e-5, reason: 'x' }],
     });
     expect(fresh).toBe(
       'defaults:\n  cutoff: 0.005\nmetrics:\n  # suggested by bellgate tune: x\n  - match: "a/b"\n    cutoff: 0.00001\n',
     );
-    const flow = applyConfigEdit('defaults: {window: 30} # short\n', 'b.yml', { cutoff: 0.005, rules: [] });
+    const flow = applyConfigEdit('defaults: {window: 30} # short\n', 'b.yml', {
+      defaults: { cutoff: 0.005 },
+      rules: [],
+    });
     expect(parseConfig(flow, 'b.yml').defaults).toMatchObject({ cutoff: 0.005, window: 30 });
     expect(flow).toContain('# short');
   });
@@ -59,7 +62,10 @@ describe('writing the suggestion into a config', () => {
   it('escapes glob characters so a rule names exactly one metric', () => {
     for (const name of ['cache[hit]', '!legacy', 'a*b', 'p95{eu}', 'x?(y)', 'back\\slash']) {
       const glob = literalGlob(name)!;
-      const out2 = applyConfigEdit('', 'b.yml', { cutoff: 0.01, rules: [{ metric: name, cutoff: 1e-3, reason: 'r' }] });
+      const out2 = applyConfigEdit('', 'b.yml', {
+        defaults: { cutoff: 0.01 },
+        rules: [{ metric: name, cutoff: 1e-3, reason: 'r' }],
+      });
       expect(settingsFor(parseConfig(out2, 'b.yml'), name).cutoff).toBe(1e-3);
       expect(settingsFor(parseConfig(out2, 'b.yml'), `${name}x`).cutoff).toBe(0.01);
       expect(glob).toBeTruthy();
@@ -68,11 +74,33 @@ describe('writing the suggestion into a config', () => {
 
   it('refuses a config it cannot parse, naming file:line:col', () => {
     try {
-      applyConfigEdit('defaults:\n  cuttoff: 0.05\n', 'b.yml', { cutoff: 0.01, rules: [] });
+      applyConfigEdit('defaults:\n  cuttoff: 0.05\n', 'b.yml', { defaults: { cutoff: 0.01 }, rules: [] });
       expect.fail('should throw');
     } catch (error) {
       expect(error).toBeInstanceOf(InputError);
       expect((error as InputError).where).toBe('b.yml:2:3');
     }
+  });
+
+  it('writes defaults and top-level keys in place or as new lines, keeping comments, and it loads', () => {
+    const text = applyConfigEdit(original, 'bellgate.yml', {
+      defaults: { transform: 'auto', sharedMove: true, changePoints: true },
+      family: 'holm',
+      budget: 0.005,
+    });
+    const lines = text.split('\n');
+    // change-points was set: edited in place; shared-move and transform were not: inserted at the top of defaults.
+    expect(lines).toContain('  change-points: true');
+    expect(lines.indexOf('  transform: auto')).toBe(lines.indexOf('defaults:') + 1);
+    expect(lines).toContain('  shared-move: true');
+    expect(lines).toContain('  cutoff: 0.01          # flag below 1% relative density');
+    expect(text.endsWith('# end of rules\nfamily: holm\nbudget: 0.5%\n')).toBe(true);
+    const config = parseConfig(text, 'bellgate.yml');
+    expect(config).toMatchObject({ family: 'holm', budget: 0.005 });
+    expect(config.defaults).toMatchObject({ transform: 'auto', sharedMove: true, changePoints: true, window: 40 });
+    // A second write of the same keys changes nothing; a new value is spliced over the old one.
+    expect(applyConfigEdit(text, 'bellgate.yml', { family: 'holm', budget: 0.005 })).toBe(text);
+    const none = applyConfigEdit(text, 'bellgate.yml', { family: 'none', defaults: { cutoff: 1e-4 } });
+    expect(none).toBe(text.replace('family: holm', 'family: none').replace('cutoff: 0.01 ', 'cutoff: 0.0001 '));
   });
 });

@@ -61,7 +61,7 @@ describe('applyConfigEdit with hostile metric names in rules and reasons', () =>
     'rule for %s reads back for that name only',
     (_label, name) => {
       const edit = {
-        cutoff: 0.005,
+        defaults: { cutoff: 0.005 },
         rules: [{ metric: name, cutoff: 0.0001, reason: `because ${name}\n---\nmetrics: []` }],
       };
       const outcome = resultOrInputError(
@@ -94,7 +94,7 @@ describe('applyConfigEdit with hostile metric names in rules and reasons', () =>
         (names) => {
           const rules = names.map((metric, i) => ({ metric, cutoff: 0.0001 * (i + 1), reason: 'r' }));
           const outcome = resultOrInputError(
-            () => applyConfigEdit('', 'b.yml', { cutoff: 0.01, rules }),
+            () => applyConfigEdit('', 'b.yml', { defaults: { cutoff: 0.01 }, rules }),
             (text) => {
               const config = parseConfig(text, 'b.yml');
               names.forEach((n, i) => {

@@ -1,78 +1,84 @@
-import { settingsFor } from '../../config/rules.js';
-import type { Config, Family } from '../../config/types.js';
+import type { Config } from '../../config/types.js';
 import type { History } from '../../history/history.js';
 import { InputError } from '../../errors/input-error.js';
-import { median } from '../../model/median.js';
+import { betaPointAt, regularizedBeta } from '../../model/special/incomplete-beta.js';
 import { checkLabels, type RegressionLabel } from './labels.js';
-import { DEFAULT_LADDER, scoreLadder, type LadderRow } from './ladder.js';
-import { metricSequence } from './metric-sequence.js';
-import { normalityCheck, type NormalityCheck } from './normality-check.js';
-import { replayHistory } from './replay.js';
-import { replaySettings } from './score-alone.js';
-import {
-  chooseCutoff,
-  DEFAULT_TARGET,
-  loosestUnder,
-  noisyMetricRules,
-  recommendFamily,
-  bestF1,
-  type SuggestedRule,
-} from './suggest.js';
+import { replayPlan, SHIFTS, type ReplayPlan } from './replay.js';
+import { scoreExact, scoreStructure, type ExactScore, type SettingScore } from './score.js';
+import { promisedPer100, sameSetting, settingOf, structures, withSetting, type TuneSetting } from './setting.js';
 import { buildTruth } from './truth.js';
 
-export const FAMILIES: readonly Family[] = ['none', 'bonferroni', 'holm', 'fdr'];
+/** The false alarms per 100 clean runs aimed at when no --target is given (DESIGN.md "What good looks like"). */
+export const DEFAULT_TARGET = 1;
+
+/** The shift size the search maximises the share caught of (issue 13: +10%). */
+export const AIM_SHIFT = 0.1;
+
+/** A setting is blind when it catches fewer than this share of the largest injected shift (rule of thumb). */
+export const BLIND_SHARE = 0.5;
 
 export interface TuneInput {
   config: Config;
   history: History;
   labels?: readonly RegressionLabel[];
-  /** False alarms per 100 runs to stay at or under (default DEFAULT_TARGET). */
+  /** False alarms per 100 clean runs to stay at or under (default DEFAULT_TARGET). */
   target?: number;
-  /** Candidate cutoffs (default DEFAULT_LADDER plus the config's own default cutoff). */
-  cutoffs?: readonly number[];
-  /** Refit every baseline even where a sliding window would do (for checking). */
-  refit?: boolean;
+  /** Newest runs to replay (default DEFAULT_LAST). */
+  last?: number;
+  /** Injections per replayed run and shift size (default 1). */
+  perSize?: number;
   onProgress?: (done: number, total: number) => void;
 }
 
-export interface MetricTune {
-  name: string;
-  /** Replay path used: incremental (sliding moments) or refit. */
-  method: 'incremental' | 'refit';
-  /** Runs in which the metric was judged (enough baseline runs). */
-  judged: number;
-  transform: 'none' | 'log';
-  normality?: NormalityCheck;
+/** Why the recommended setting was chosen. */
+export type ChoiceReason = 'best-under-target' | 'configured-holds' | 'none-under-target';
+
+/** A setting replaces the configured one only when it catches more at this one-sided level (exact McNemar test). */
+export const SWITCH_LEVEL = 0.05;
+
+/** The recommendation, measured by the real gate at exactly this setting. */
+export interface Recommendation {
+  setting: TuneSetting;
+  reason: ChoiceReason;
+  score: SettingScore;
+  /** Catches fewer than BLIND_SHARE of the largest injected shift: never written without --force. */
+  blind: boolean;
+  /** Metrics whose median `detectable` is above the largest injected shift: regressions of that size there go unseen. */
+  misses: { metric: string; detectable: number }[];
+  /** The replay cannot show a rate as low as the target (3 / runs per run, the rule of three, is above it). */
+  replayTooShort: boolean;
 }
 
-/** Everything `bellgate tune` found. Ladders are loosest cutoff first. */
+/** Everything `bellgate tune` found. */
 export interface TuneResult {
   series: string;
   runs: number;
-  /** Runs in which at least one metric was judged. */
-  replayedRuns: number;
-  /** Median number of metrics judged in a replayed run. */
+  /** Clean runs replayed (labelled runs excluded), and regressions injected. */
+  replayed: number;
+  injected: number;
+  shifts: readonly number[];
   metricsPerRun: number;
-  /** The config's family setting and default cutoff. */
-  family: Family;
-  currentCutoff: number;
-  metrics: MetricTune[];
-  /** Configured groups: the replay judges their members one by one (see replayHistory). */
-  groups: string[];
-  ladders: Map<Family, LadderRow[]>;
-  target: { per100: number; cutoff?: number };
-  labels?: { count: number; best?: { cutoff: number; precision: number; recall: number; f1: number } };
-  suggestion: { cutoff: number; reason: string; family: Family; familyReason: string; rules: SuggestedRule[] };
+  target: number;
+  /** The configured setting, measured exactly. */
+  current: SettingScore;
+  /** Every setting of the ladder (rescored from one replay per structure), in ladder order. */
+  ladder: SettingScore[];
+  /** Absent when no run could be replayed (the history is shorter than min-runs). */
+  recommendation?: Recommendation;
+  labels?: { count: number; runs: number; flagged: number };
 }
 
 /**
- * Tunes cutoffs from evidence (issue 5.1): replays the gate over the history (replayHistory),
- * scores the cutoff ladder for every family setting (scoreLadder), checks each metric's shape on
- * the raw and log scales (normalityCheck), and suggests a defaults cutoff (best F1 with labels,
- * else the loosest meeting the target), per-metric cutoffs for much noisier metrics, `transform:
- * log` where it fits clearly better, and a family setting. Pure.
- * Throws InputError for a label naming an unknown run or metric, or a bad target or cutoff.
- * @example tuneHistory({ config, history }).suggestion.cutoff // 0.001
+ * Tunes the whole setting jointly from evidence (issue 13 item 7): replays the real gate over the
+ * history (every run judged against the runs before it) clean and with injected shifts (SHIFTS,
+ * one metric at a time, on its worse side); scores every setting of the ladder (transform, shared
+ * move, change points, holm budget or family none cutoff) by false alarms per 100 clean runs and
+ * share of injected shifts caught; recommends the setting catching the most +10% shifts among
+ * those meeting the target (meetsTarget; else the one with the fewest false alarms) — but keeps
+ * the configured setting when it meets the target and the best does not catch significantly more
+ * on the same injections (switchTail) — and measures it again with the gate set exactly so. Pure.
+ * Throws InputError for a bad target or a label naming an unknown run or metric.
+ * @example tuneHistory({ config, history }).recommendation?.setting.family // 'holm'
  */
 export function tuneHistory(input: TuneInput): TuneResult {
   const { config, history } = input;
@@ -81,85 +87,156 @@ export function tuneHistory(input: TuneInput): TuneResult {
     throw new InputError(`--target must be a number of false alarms per 100 runs from 0 to 100, got ${target}`, {
       fix: 'e.g. --target 1',
     });
-  const cutoffs = [...new Set([...(input.cutoffs ?? DEFAULT_LADDER), config.defaults.cutoff])].sort((a, b) => b - a);
   if (input.labels !== undefined) checkLabels(input.labels, history);
   const truth = input.labels === undefined ? undefined : buildTruth(input.labels, history);
-  const replay = replayHistory(config, history, {
-    ...(input.refit ? { refit: true } : {}),
-    ...(input.onProgress ? { onProgress: input.onProgress } : {}),
+  const labelled = new Set(truth?.byRun.keys() ?? []);
+  const plan = replayPlan(config, history, {
+    labelled,
+    ...(input.last === undefined ? {} : { last: input.last }),
+    ...(input.perSize === undefined ? {} : { perSize: input.perSize }),
   });
-  const ladders = new Map(FAMILIES.map((f) => [f, scoreLadder(replay, cutoffs, f, truth)] as const));
-  const perRun = new Map<number, number>();
-  for (const m of replay.metrics) for (const r of m.run) perRun.set(r, (perRun.get(r) ?? 0) + 1);
-  const metricsPerRun = perRun.size === 0 ? 0 : median([...perRun.values()]);
-  // A cutoff decides only with family: none (under a family the run's budget does), so the
-  // cutoff is chosen on that ladder until tune replays the whole gate (issue 13 item 7).
-  const rows = ladders.get('none')!;
-  // No judged run is no evidence: keep the configured cutoff rather than "0 false alarms at 0.1".
-  const choice =
-    perRun.size === 0
-      ? {
-          cutoff: config.defaults.cutoff,
-          reason:
-            'no run had enough baseline runs to be judged (min-runs), so there is no evidence yet; keeping the configured cutoff',
-        }
-      : chooseCutoff(rows, target, truth !== undefined);
-  const names = replay.metrics.map((m) => m.name);
-  const rules = perRun.size === 0 ? [] : noisyMetricRules(rows, names, choice.cutoff);
-  const indexOf = new Map(history.runs.map((run, i) => [run.id, i] as const));
-  const metrics = replay.metrics.map((m): MetricTune => {
-    const settings = replaySettings(settingsFor(config, m.name), history.columns.get(m.name)?.unit);
-    const own = metricSequence(history, m.name, settings, indexOf).own.slice(-settings.window);
-    const normality = normalityCheck(own);
-    if (normality?.suggestLog && settings.transform === 'none') {
-      const rule = rules.find((r) => r.metric === m.name);
-      if (rule !== undefined) Object.assign(rule, { transform: 'log', reason: `${rule.reason}; ${normality.note}` });
-      else rules.push({ metric: m.name, transform: 'log', reason: normality.note });
-    }
-    return {
-      name: m.name,
-      method: m.method,
-      judged: m.run.length,
-      transform: settings.transform === 'log' ? 'log' : 'none',
-      ...(normality ? { normality } : {}),
-    };
-  });
-  const family = recommendFamily(metricsPerRun, ladders, choice.cutoff, config.family, target);
-  const best = bestF1(rows);
-  const targetRow = loosestUnder(rows, target);
-  return {
+  const shapes = structures(config);
+  const calls = plan.runs.length + plan.injections.length;
+  let done = 0;
+  const total = calls * (shapes.length + 2);
+  const tick = (): void => input.onProgress?.(++done, total);
+  const currentExact = scoreExact(config, history, plan, tick);
+  const metricsPerRun = currentExact.metricsPerRun;
+  const current = exactRow(settingOf(config), currentExact, metricsPerRun);
+  const ladder = shapes.flatMap((s) => scoreStructure(config, history, plan, s, metricsPerRun, tick));
+  const result: TuneResult = {
     series: history.series,
     runs: history.runs.length,
-    replayedRuns: perRun.size,
+    replayed: plan.runs.filter((k) => !labelled.has(k)).length,
+    injected: plan.injections.length,
+    shifts: SHIFTS,
     metricsPerRun,
-    family: config.family,
-    currentCutoff: config.defaults.cutoff,
-    metrics,
-    groups: config.groups.map((g) => g.name),
-    ladders,
-    target: { per100: target, ...(targetRow ? { cutoff: targetRow.cutoff } : {}) },
-    ...(truth === undefined
-      ? {}
-      : {
-          labels: {
-            count: truth.count,
-            ...(best?.labelled
-              ? {
-                  best: {
-                    cutoff: best.cutoff,
-                    precision: best.labelled.precision,
-                    recall: best.labelled.recall,
-                    f1: best.labelled.f1,
-                  },
-                }
-              : {}),
-          },
-        }),
-    suggestion: {
-      ...choice,
-      family: family.family,
-      familyReason: family.reason,
-      rules: rules.sort((a, b) => (a.metric < b.metric ? -1 : 1)),
-    },
+    target,
+    current,
+    ladder,
+  };
+  if (truth !== undefined)
+    result.labels = { count: truth.count, runs: labelled.size, flagged: currentExact.labelledFlagged };
+  if (plan.runs.length === 0) return result;
+  const { row, reason } = choose(ladder, target, current, plan);
+  if (sameSetting(row.setting, current.setting)) input.onProgress?.(total, total);
+  const exact = sameSetting(row.setting, current.setting)
+    ? currentExact
+    : scoreExact(withSetting(config, row.setting), history, plan, tick);
+  result.recommendation = recommend(
+    row.setting,
+    reason,
+    exactRow(row.setting, exact, metricsPerRun),
+    exact,
+    plan,
+    target,
+  );
+  return result;
+}
+
+/** A row from an exact replay. */
+function exactRow(setting: TuneSetting, exact: ExactScore, metricsPerRun: number): SettingScore {
+  return {
+    setting,
+    falseAlarms: exact.falseAlarms,
+    unsettled: exact.unsettled,
+    steps: exact.steps,
+    promisedPer100: promisedPer100(setting, metricsPerRun),
+    caught: exact.caught,
+    labelledFlagged: exact.labelledFlagged,
+    hits: exact.hits,
+    measured: 'exact',
+  };
+}
+
+/**
+ * Whether a row meets the target: the model promises at most `target` false alarms per 100 clean
+ * runs, and the replay does not contradict it — the floor of the replayed rate's exact 95%
+ * interval is at or below the target (a one-sided test at 2.5%). A short replay cannot tell 0 of
+ * 52 from 1 of 52, so demanding 0 would pick settings on noise; the promise is the guarantee and
+ * the replay the check that the model is not far off (as it was with 86 per 100 on real noise).
+ */
+export function meetsTarget(row: SettingScore, target: number): boolean {
+  return row.promisedPer100 <= target && 100 * row.falseAlarms.lower <= target;
+}
+
+/** Share caught of a shift (0 when it was not injected). */
+export function caughtShare(row: SettingScore, shift: number): number {
+  return row.caught.find((c) => c.shift === shift)?.evidence.rate ?? 0;
+}
+
+/**
+ * The setting to recommend: among rows meeting the target, the most +10% caught, then the fewest
+ * false alarms, then +5% and +20% caught; ties keep ladder order (the configured structure first).
+ * The configured setting stays when it meets the target and the best is not significantly better
+ * on the same +10% injections (switchTail at SWITCH_LEVEL): a config is not churned on noise.
+ * When none meets it: the fewest false alarms, then the most caught.
+ */
+export function choose(
+  ladder: readonly SettingScore[],
+  target: number,
+  current: SettingScore,
+  plan: ReplayPlan,
+): { row: SettingScore; reason: ChoiceReason } {
+  const key = (r: SettingScore): number[] => [
+    caughtShare(r, AIM_SHIFT),
+    -r.falseAlarms.rate,
+    caughtShare(r, 0.05),
+    caughtShare(r, 0.2),
+  ];
+  const better = (a: number[], b: number[]): boolean => {
+    for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return a[i]! > b[i]!;
+    return false;
+  };
+  const under = ladder.filter((r) => meetsTarget(r, target));
+  if (under.length > 0) {
+    const best = under.reduce((a, b) => (better(key(b), key(a)) ? b : a));
+    if (meetsTarget(current, target) && switchTail(best, current, plan) >= SWITCH_LEVEL)
+      return { row: current, reason: 'configured-holds' };
+    return { row: best, reason: 'best-under-target' };
+  }
+  const fewest = (r: SettingScore): number[] => [-r.falseAlarms.rate, caughtShare(r, AIM_SHIFT)];
+  return { row: ladder.reduce((a, b) => (better(fewest(b), fewest(a)) ? b : a)), reason: 'none-under-target' };
+}
+
+/**
+ * The exact McNemar test (McNemar 1947) of `best` against `current` on the same +10% injections:
+ * of the b + c injections only one of them caught, P(at least b of them by `best` | no difference)
+ * = I_0.5(b, c + 1), the binomial tail as a regularized incomplete beta. 1 when nothing differs.
+ */
+export function switchTail(best: SettingScore, current: SettingScore, plan: ReplayPlan): number {
+  let b = 0;
+  let c = 0;
+  plan.injections.forEach((injection, i) => {
+    if (injection.shift !== AIM_SHIFT) return;
+    if (best.hits[i] && !current.hits[i]) b++;
+    if (!best.hits[i] && current.hits[i]) c++;
+  });
+  return b === 0 ? 1 : regularizedBeta(b, c + 1, betaPointAt(0.5), false);
+}
+
+function recommend(
+  setting: TuneSetting,
+  reason: ChoiceReason,
+  score: SettingScore,
+  exact: ExactScore,
+  plan: ReplayPlan,
+  target: number,
+): Recommendation {
+  const largest = Math.max(...SHIFTS);
+  const injectedLargest = score.caught.find((c) => c.shift === largest)?.evidence;
+  const blind = injectedLargest !== undefined && injectedLargest.trials > 0 && injectedLargest.rate < BLIND_SHARE;
+  const misses = [...exact.detectable]
+    .filter(([, d]) => d > largest)
+    .sort(([a, x], [b, y]) => y - x || (a < b ? -1 : 1))
+    .map(([metric, detectable]) => ({ metric, detectable }));
+  const trials = score.falseAlarms.trials;
+  return {
+    setting,
+    reason,
+    score,
+    blind,
+    misses,
+    replayTooShort: trials === 0 || 300 / trials > target || plan.runs.length === 0,
   };
 }

@@ -1,8 +1,8 @@
-export const id = 574;
-export const ids = [574];
+export const id = 29;
+export const ids = [29];
 export const modules = {
 
-/***/ 6574:
+/***/ 6029:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -25,8 +25,8 @@ var notes = __webpack_require__(4931);
 var report_escape = __webpack_require__(4031);
 // EXTERNAL MODULE: ./src/report/family-line.ts
 var family_line = __webpack_require__(4551);
-// EXTERNAL MODULE: ./src/model/tails.ts + 3 modules
-var tails = __webpack_require__(323);
+// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
+var tails = __webpack_require__(2170);
 ;// CONCATENATED MODULE: ./src/report/html-data.ts
 
 /** The finite values of a history column with their run, oldest first. */
@@ -91,8 +91,77 @@ function chartColumn(history, m) {
 var d3_scale = __webpack_require__(5602);
 // EXTERNAL MODULE: ./node_modules/d3-shape/dist/d3-shape.mjs + 1 modules
 var d3_shape = __webpack_require__(6879);
-// EXTERNAL MODULE: ./src/model/density.ts
-var density = __webpack_require__(913);
+// EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
+var normal = __webpack_require__(2986);
+;// CONCATENATED MODULE: ./src/model/density.ts
+
+/** A spread must be a finite number >= 0; 0 is the degenerate fit of a constant history. */
+function checkSpread(sd) {
+    if (!(sd >= 0) || !Number.isFinite(sd)) {
+        throw new RangeError(`a standard deviation must be a finite number, 0 or more, got ${sd}`);
+    }
+}
+/**
+ * Gaussian density p(x) = exp(-(x - mu)^2 / (2 sigma^2)) / (sqrt(2 pi) sigma).
+ * A zero sigma is the degenerate distribution: Infinity at the mean, 0 elsewhere.
+ * Throws RangeError on a negative or non-finite sd.
+ * @example gaussianDensity(0, 0, 1) // 0.3989422804014327
+ */
+function gaussianDensity(x, mean, sd) {
+    checkSpread(sd);
+    return (0,normal/* normalDensity */.kC)(x, mean, sd);
+}
+/**
+ * log p(x), exact where p(x) underflows to 0 (beyond about 38 sigma).
+ * @example gaussianLogDensity(0, 0, 1) // -0.9189385332046727
+ */
+function gaussianLogDensity(x, mean, sd) {
+    checkSpread(sd);
+    return normalLogDensity(x, mean, sd);
+}
+/**
+ * Relative density under the fitted Gaussian used as is ("plug-in"): p(x) / p(mean) =
+ * exp(-z^2 / 2). Unitless, in [0, 1]; 1 at the centre, about 0.0111 at 3 sigma. With a zero
+ * sd it is 1 at the mean and 0 elsewhere (the limit), never NaN.
+ * @example plugInRelativeDensity(3, 0, 1) // 0.011108996538242306
+ */
+function plugInRelativeDensity(x, mean, sd) {
+    checkSpread(sd);
+    if (sd === 0)
+        return x === mean ? 1 : 0;
+    const z = (x - mean) / sd;
+    return Math.exp(-0.5 * z * z);
+}
+/**
+ * Scale of the predictive distribution for one new run when mean and sigma were estimated from
+ * n runs: s * sqrt(1 + 1/n), with s the n-1 standard deviation (a Student-t with n-1 degrees of
+ * freedom around the mean; e.g. Gelman et al., Bayesian Data Analysis, section 3.2).
+ * @example predictiveScale(1, 4) // 1.118033988749895
+ */
+function predictiveScale(sampleSd, n) {
+    return sampleSd * Math.sqrt(1 + 1 / n);
+}
+/**
+ * Relative density under the predictive Student-t with n-1 degrees of freedom:
+ * f(t) / f(0) = (1 + t^2 / nu)^(-(nu + 1) / 2), t = (x - mean) / (s sqrt(1 + 1/n)).
+ * Heavier tails than the Gaussian, so a short history needs a larger move to fall below a cutoff;
+ * as n grows it approaches plugInRelativeDensity. Computed in log space (log1p) so far tails do
+ * not underflow early. A zero sampleSd gives 1 at the mean, 0 elsewhere.
+ * Throws RangeError when n < 2 (no degrees of freedom) or sampleSd is negative or not finite.
+ * @example predictiveRelativeDensity(3, 0, 1, 1e9) // ≈ 0.011109 (large n: the Gaussian)
+ */
+function predictiveRelativeDensity(x, mean, sampleSd, n) {
+    if (!(n >= 2)) {
+        throw new RangeError(`the predictive distribution needs at least 2 runs, got ${n}`);
+    }
+    checkSpread(sampleSd);
+    if (sampleSd === 0)
+        return x === mean ? 1 : 0;
+    const nu = n - 1;
+    const t = (x - mean) / predictiveScale(sampleSd, n);
+    return Math.exp((-(nu + 1) / 2) * Math.log1p((t * t) / nu));
+}
+
 ;// CONCATENATED MODULE: ./src/report/html-svg.ts
 /** SVG coordinates with two decimals: enough for a screen, and non-finite values never leak in. */
 const px = (x) => (Number.isFinite(x) ? Math.round(x * 100) / 100 : 0);
@@ -279,7 +348,7 @@ function baselineHistogram(m, values, cutoff) {
         const count = vals.filter((v) => v >= loEdge && (v < hiEdge || (last && v <= hiEdge))).length;
         return { loEdge, hiEdge, count, density: count / (vals.length * (toFit(hiEdge) - toFit(loEdge))) };
     });
-    const peak = (0,density/* gaussianDensity */.QA)(b.mean, b.mean, b.sd);
+    const peak = gaussianDensity(b.mean, b.mean, b.sd);
     const top = Math.max(peak, ...bins.map((bin) => bin.density));
     const y = (0,d3_scale/* scaleLinear */.m4)()
         .domain([0, top])
@@ -298,7 +367,7 @@ function baselineHistogram(m, values, cutoff) {
     const ts = Array.from({ length: CURVE_POINTS + 1 }, (_, i) => toFit(d0) + ((toFit(d1) - toFit(d0)) * i) / CURVE_POINTS);
     const curve = (0,d3_shape/* line */.n8)()
         .x((t) => x(log ? Math.exp(t) : t))
-        .y((t) => y((0,density/* gaussianDensity */.QA)(t, b.mean, b.sd)));
+        .y((t) => y(gaussianDensity(t, b.mean, b.sd)));
     const curveTip = `fitted Gaussian: mean ${(0,report_escape/* escapeHtml */.Z)((0,format/* formatValue */.Fl)(band.mean))} ${unit}${log ? ' (geometric)' : ''}`;
     parts.push(svgElement('path', { class: 'curve', d: curve(ts) ?? '' }, curveTip));
     const level = y(peak * cutoff);
