@@ -2,15 +2,13 @@ import { settingsFor } from '../../config/rules.js';
 import { InputError } from '../../errors/input-error.js';
 import { referenceFromText } from '../../gate/since/reference.js';
 import { reviewSince } from '../../gate/since/review-since.js';
-import type { SinceHistory } from '../../gate/since/since-history.js';
-import { createFileStore } from '../../history/file-store.js';
 import { renderSinceJson } from '../../report/since-json.js';
 import { renderSinceMarkdown } from '../../report/since-markdown.js';
 import { renderSinceText } from '../../report/since-text.js';
 import type { CommandContext } from '../context.js';
 import { loadConfig } from '../../config/load.js';
 import type { ReportFormat } from '../options.js';
-import { resolvePath } from '../paths.js';
+import { historyStore } from '../open-history.js';
 
 export interface SinceCliOptions {
   history: string;
@@ -22,22 +20,6 @@ export interface SinceCliOptions {
 }
 
 /**
- * The history the review reads: today the file store's document. The one place that knows where
- * the history comes from, so other stores plug in here.
- * @throws StoreError when the file exists but cannot be read (exit 3); InputError when it is missing.
- */
-export async function readSinceHistory(ctx: CommandContext, path: string, series: string): Promise<SinceHistory> {
-  const history = await createFileStore(resolvePath(ctx, path), series).read();
-  if (history.runs.length === 0) {
-    throw new InputError('the history has no runs to review', {
-      where: path,
-      fix: 'point --history at a history that bellgate record or the action has written',
-    });
-  }
-  return history;
-}
-
-/**
  * The work of `bellgate since REF`: resolves REF in the
  * history, reviews every metric and prints the review in the chosen format.
  * @throws InputError for a REF the history cannot resolve or a bad config; StoreError for an unreadable history.
@@ -45,7 +27,13 @@ export async function readSinceHistory(ctx: CommandContext, path: string, series
  */
 export async function runSince(ctx: CommandContext, ref: string, options: SinceCliOptions): Promise<void> {
   const config = await loadConfig(options.config, ctx.io.cwd);
-  const history = await readSinceHistory(ctx, options.history, options.series);
+  const history = await historyStore(ctx, options.history, options.series).read();
+  if (history.runs.length === 0) {
+    throw new InputError('the history has no runs to review', {
+      where: options.history,
+      fix: 'point --history at a history that bellgate record or the action has written',
+    });
+  }
   const reference = referenceFromText(ref, history.runs);
   if (options.at !== undefined) reference.time = options.at;
   const report = reviewSince(history, reference, { worse: (name) => settingsFor(config, name).worse });
