@@ -2592,7 +2592,7 @@ exports.basename = (path, { windows } = {}) => {
 /***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
 
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var _cli_main_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5103);
+/* harmony import */ var _cli_main_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8616);
 
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
 process.stdout.on('error', (e) => {
@@ -12428,7 +12428,7 @@ function parsePrefixes(values) {
 
 /***/ }),
 
-/***/ 5103:
+/***/ 8616:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -12680,196 +12680,21 @@ function renderJson(report) {
     return JSON.stringify(doc, null, 2) + '\n';
 }
 
-// EXTERNAL MODULE: ./src/report/cells.ts
-var report_cells = __nccwpck_require__(571);
-// EXTERNAL MODULE: ./src/report/escape.ts
-var report_escape = __nccwpck_require__(4031);
-// EXTERNAL MODULE: ./src/report/family-line.ts
-var family_line = __nccwpck_require__(4551);
-// EXTERNAL MODULE: ./src/report/format.ts + 1 modules
-var format = __nccwpck_require__(5956);
-;// CONCATENATED MODULE: ./src/report/marker.ts
-/**
- * The hidden marker that lets the action find its own PR comment for a series and update it in
- * place. Percent-encoding keeps any series name inside one HTML comment: no `-->` can close it
- * early and no newline can split it.
- * @example commentMarker('linux x64') // 'bellgate:series=linux%20x64'
- */
-function commentMarker(series) {
-    return `bellgate:series=${safeMarker(series)}`;
-}
-/**
- * Percent-encode everything but [A-Za-z0-9._~-] (and a `-` that starts `--`), so the text is safe
- * inside `<!-- ... -->`: it can contain neither `>` nor the `--` that HTML forbids in comments.
- * @example safeMarker('a-->b') // 'a%2D-%3Eb'
- */
-function safeMarker(s) {
-    return encodeURIComponent(s)
-        .replace(/[!'()*]/g, (ch) => `%${ch.charCodeAt(0).toString(16).toUpperCase()}`)
-        .replace(/-(?=-)/g, '%2D');
-}
-/** The first line of a comment: `<!-- marker -->`; a marker from commentMarker passes unchanged. */
-function markerLine(marker) {
-    const safe = marker.replace(/[^A-Za-z0-9._~:=/%-]/g, (ch) => safeMarker(ch)).replace(/-(?=-)/g, '%2D');
-    return `<!-- ${safe} -->`;
-}
-
-// EXTERNAL MODULE: ./src/report/notes.ts
-var notes = __nccwpck_require__(4931);
-;// CONCATENATED MODULE: ./src/report/sparkline.ts
-/** The eight Unicode block heights, lowest first (U+2581..U+2588). */
-const BLOCKS = ['▁', '▂', '▃', '▄', '▅', '▆', '▇', '█'];
-/** Separates the history from this run's mark, so the mark reads as "and now". */
-const MARK_SEPARATOR = '→';
-/**
- * A one-line picture of a series: one block per value, height linear between the smallest and
- * largest finite value (this run's `mark` included, so a jump stands out). Missing values (NaN)
- * show as a space; a constant series sits at mid height. When `mark` is given it follows the
- * history after an arrow. Returns '' when nothing is finite. Plain text, so it reads the same in a
- * terminal, a code span on GitHub and a screen reader's character mode.
- * @example sparkline([1, 2, 3, 4, 5, 6, 7, 8]) // '▁▂▃▄▅▆▇█'
- * @example sparkline([1, 1, 1], 2) // '▁▁▁→█'
- */
-function sparkline(values, mark) {
-    const finite = values.filter((v) => Number.isFinite(v));
-    const hasMark = mark !== undefined && Number.isFinite(mark);
-    if (hasMark)
-        finite.push(mark);
-    if (finite.length === 0)
-        return '';
-    let lo = Infinity;
-    let hi = -Infinity;
-    for (const v of finite) {
-        if (v < lo)
-            lo = v;
-        if (v > hi)
-            hi = v;
-    }
-    const block = (v) => {
-        if (!Number.isFinite(v))
-            return ' ';
-        if (hi === lo)
-            return BLOCKS[3];
-        const i = Math.round(((v - lo) / (hi - lo)) * (BLOCKS.length - 1));
-        return BLOCKS[Math.min(BLOCKS.length - 1, Math.max(0, i))] ?? BLOCKS[3];
-    };
-    const line = values.map(block).join('');
-    return hasMark ? `${line}${MARK_SEPARATOR}${block(mark)}` : line;
-}
-
-// EXTERNAL MODULE: ./src/report/status.ts
-var report_status = __nccwpck_require__(6934);
-;// CONCATENATED MODULE: ./src/report/markdown.ts
-
-
-
-
-
-
-
-
-
-/** GitHub rejects comment bodies over 65,536 characters; stay well under with room for the footer. */
-const MARKDOWN_LIMIT = 65_536;
-const BUDGET = MARKDOWN_LIMIT - 2_000;
-const FLAGGED = new Set(['regressed', 'improved']);
-const HEAD = '| status | metric | baseline (mean ± sd) | this run | change | own move | sigma | rel. density vs cutoff | detectable |\n|---|---|---|---|---|---|---|---|---|';
-function row(m) {
-    const unit = m.unit === undefined ? undefined : (0,report_escape/* escapeMarkdown */.F)(m.unit, 20);
-    const c = (0,report_cells/* metricCells */.G)(m, unit);
-    const status = FLAGGED.has(m.status)
-        ? `${report_status/* STATUS_GLYPH */.id[m.status]} **${m.status}**`
-        : `${report_status/* STATUS_GLYPH */.id[m.status]} ${m.status}`;
-    return `| ${status} | ${(0,report_escape/* escapeMarkdown */.F)(m.name)} | ${c.baseline} | ${c.value} | ${c.change} | ${c.own} | ${c.sigma} | ${c.density.replace('<', '&lt;')} | ${c.detectable} |`;
-}
-function picture(m, report) {
-    const recent = m.recent ?? [];
-    const line = sparkline(recent, m.value);
-    const unit = m.unit === undefined ? undefined : (0,report_escape/* escapeMarkdown */.F)(m.unit, 20);
-    const shown = line
-        ? `\`${line}\` ${recent.length} baseline runs → this run ${(0,format/* formatValue */.Fl)(m.value, unit)}`
-        : `this run ${(0,format/* formatValue */.Fl)(m.value, unit)}`;
-    return `- **${(0,report_escape/* escapeMarkdown */.F)(m.name)}** ${shown}. ${(0,report_escape/* escapeMarkdown */.F)((0,reason/* fullReason */.EZ)(m, report), 800)}`;
-}
-function sharedLine(s) {
-    const mark = s.status === 'unsettled' ? '⚠ **unsettled**' : s.status;
-    return `- shared move of **${(0,report_escape/* escapeMarkdown */.F)(s.name)}**: ${mark} — ${(0,report_escape/* escapeMarkdown */.F)((0,reason/* sharedReason */.KM)(s), 800)}`;
-}
-/** Take lines while they fit in `room` characters; say how many were left out. */
-function fit(lines, room, what) {
-    const kept = [];
-    let used = 0;
-    for (const [i, l] of lines.entries()) {
-        if (used + l.length + 1 > room - 200) {
-            kept.push(`\n_…and ${lines.length - i} more ${what} not shown (comment size limit); see the JSON report._`);
-            break;
-        }
-        kept.push(l);
-        used += l.length + 1;
-    }
-    const text = kept.join('\n');
-    return { text, used: text.length };
-}
-const isWebUrl = (u) => u !== undefined && /^https?:\/\/[^\s<>()[\]"'`]+$/.test(u);
-/**
- * The PR comment and job summary: optional hidden marker, a one-line verdict, a table of flagged
- * metrics with a sparkline of each one's recent baseline and this run, the groups' findings, and
- * every other metric in a collapsed `<details>` table; links to the run and HTML report when given;
- * a footer naming Bellgate. Every metric-file string passes escapeMarkdown. The body stays under
- * GitHub's 65,536-character limit by cutting table rows with a note.
- * @example renderMarkdown(report, { marker: commentMarker('ci') }).startsWith('<!-- bellgate:series=ci -->') // true
- */
-function renderMarkdown(report, options = {}) {
-    const out = [];
-    if (options.marker !== undefined)
-        out.push(markerLine(options.marker));
-    // What the reader must know before the verdict (the history was not used, metrics missing).
-    for (const note of (0,notes/* reportNotes */.W)(report, (t) => t))
-        out.push(`> **Note:** ${(0,report_escape/* escapeMarkdown */.F)(note, 2000)}`, '');
-    const counts = (0,report_status/* statusCounts */.rc)(report.metrics.map((m) => m.status)) || 'no metrics';
-    out.push(`### Bellgate: **${report.verdict}** — ${counts}`);
-    out.push(`Verdict ${report.verdict}: ${report_status/* VERDICT_HEADLINE */.pB[report.verdict]} (series ${(0,report_escape/* escapeMarkdown */.F)(report.series)}).`);
-    let room = BUDGET - out.join('\n').length;
-    const sorted = [...report.metrics].sort((a, b) => (0,report_status/* statusRank */.Tx)(a.status) - (0,report_status/* statusRank */.Tx)(b.status));
-    const flagged = sorted.filter((m) => FLAGGED.has(m.status));
-    const rest = sorted.filter((m) => !FLAGGED.has(m.status));
-    const add = (text) => {
-        out.push(text);
-        room -= text.length + 1;
-    };
-    if (flagged.length > 0) {
-        add('');
-        add(`${HEAD}\n${fit(flagged.map(row), room / 2, 'flagged metrics').text}`);
-        add('');
-        add(fit(flagged.map((m) => picture(m, report)), room / 2, 'pictures').text);
-        add(`<sub>${report_status/* GLYPH_LEGEND */.z6}</sub>`);
-    }
-    add('');
-    add((0,family_line/* familyLine */.l)(report));
-    if (report.shared.length > 0)
-        add(fit(report.shared.map(sharedLine), room / 2, 'shared moves').text);
-    if (rest.length > 0) {
-        add('');
-        add(`<details><summary>${rest.length} other metric${rest.length === 1 ? '' : 's'}: ${(0,report_status/* statusCounts */.rc)(rest.map((m) => m.status))}</summary>\n`);
-        add(`${HEAD}\n${fit(rest.map(row), room, 'metrics').text}\n\n</details>`);
-    }
-    const links = [];
-    if (isWebUrl(options.runUrl))
-        links.push(`[workflow run](${options.runUrl})`);
-    if (isWebUrl(options.htmlReportUrl))
-        links.push(`[full HTML report](${options.htmlReportUrl})`);
-    out.push('');
-    if (links.length > 0)
-        out.push(links.join(' · '));
-    out.push("<sub>Reported by Bellgate: each metric is judged on its own move beside the run's shared move, against the predictive distribution of its baseline, on its worse side.</sub>");
-    return out.join('\n') + '\n';
-}
-
+// EXTERNAL MODULE: ./src/report/markdown.ts + 1 modules
+var markdown = __nccwpck_require__(9214);
 // EXTERNAL MODULE: ./node_modules/picocolors/picocolors.js
 var picocolors = __nccwpck_require__(7336);
 var picocolors_default = /*#__PURE__*/__nccwpck_require__.n(picocolors);
 // EXTERNAL MODULE: ./src/report/clean.ts
 var clean = __nccwpck_require__(23);
+// EXTERNAL MODULE: ./src/report/cells.ts
+var report_cells = __nccwpck_require__(571);
+// EXTERNAL MODULE: ./src/report/family-line.ts
+var family_line = __nccwpck_require__(4551);
+// EXTERNAL MODULE: ./src/report/status.ts
+var report_status = __nccwpck_require__(6934);
+// EXTERNAL MODULE: ./src/report/notes.ts
+var notes = __nccwpck_require__(4931);
 ;// CONCATENATED MODULE: ./src/report/text.ts
 
 
@@ -12908,7 +12733,7 @@ function text_clean(s, max) {
 function codePoints(s) {
     return SURROGATE.test(s) ? Array.from(s).length : s.length;
 }
-function text_sharedLine(s) {
+function sharedLine(s) {
     return `shared move of ${text_clean(s.name, TEXT_NAME_MAX)}: ${s.status} — ${(0,reason/* sharedReason */.KM)(s)}`;
 }
 /**
@@ -12994,7 +12819,7 @@ function renderText(report, options) {
     lines.push('');
     lines.push((0,family_line/* familyLine */.l)(report));
     for (const s of report.shared)
-        lines.push(s.status === 'unsettled' ? c.yellow(text_sharedLine(s)) : text_sharedLine(s));
+        lines.push(s.status === 'unsettled' ? c.yellow(sharedLine(s)) : sharedLine(s));
     const listed = new Map(LISTED.map((status) => [status, []]));
     for (const m of report.metrics)
         listed.get(m.status)?.push(text_clean(m.name, TEXT_NAME_MAX));
@@ -13187,7 +13012,7 @@ const REPORT_FILES = ['report.md', 'report.json', 'report.txt'];
 async function writeReports(dir, report) {
     await (0,promises_.mkdir)(dir, { recursive: true });
     const contents = {
-        'report.md': renderMarkdown(report, {}),
+        'report.md': (0,markdown/* renderMarkdown */.G)(report, {}),
         'report.json': renderJson(report),
         'report.txt': renderText(report, { color: false, all: true }),
     };
@@ -13323,7 +13148,7 @@ function render(ctx, report, format, all = false) {
     if (format === 'json')
         return renderJson(report);
     if (format === 'markdown')
-        return renderMarkdown(report, {});
+        return (0,markdown/* renderMarkdown */.G)(report, {});
     return renderText(report, { color: ctx.color, all });
 }
 function check_flow_ensureNewline(s) {
@@ -13416,6 +13241,10 @@ function recordCommand(ctx) {
 
 // EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
 var tails = __nccwpck_require__(2170);
+// EXTERNAL MODULE: ./src/report/format.ts + 1 modules
+var format = __nccwpck_require__(5956);
+// EXTERNAL MODULE: ./src/report/sparkline.ts
+var sparkline = __nccwpck_require__(9833);
 ;// CONCATENATED MODULE: ./src/report/explain.ts
 
 
@@ -13488,7 +13317,7 @@ function renderExplain(input) {
     for (let r = ROWS - 1; r >= 0; r--) {
         const line = eighths.map((e, i) => {
             const fill = e - r * 8;
-            const ch = fill >= 8 ? '█' : fill <= 0 ? ' ' : (BLOCKS[fill - 1] ?? ' ');
+            const ch = fill >= 8 ? '█' : fill <= 0 ? ' ' : (sparkline/* BLOCKS */.nA[fill - 1] ?? ' ');
             return inBand(lo + ((i + 0.5) / width) * (hi - lo)) ? ch : c.dim(ch);
         });
         out.push(line.join('').trimEnd());
@@ -14262,15 +14091,18 @@ function reportCommand(ctx) {
     cmd.option('--metrics <file...>', 'metric files of this run (default: the newest run in the history)');
     cmd.requiredOption('--html <file>', 'where to write the HTML file');
     cmd.option('--title <text>', 'title of the page');
+    cmd.option('--since <ref>', 'add a release review section: each metric since this run id, commit sha or time');
+    cmd.option('--at <iso>', "with --since: the reference commit's time (a commit without a recorded run)");
     configOption(cmd);
     seriesOption(cmd);
     inputOptions(cmd);
     examples(cmd, [
         'bellgate report --history .bellgate/history.jsonl --html bellgate-report.html',
         'bellgate report --history h.json --metrics bench.json --html out/report.html --title "Nightly"',
+        'bellgate report --history h.json --html review.html --since "$(git rev-list -n 1 v2.3.0)" --at "$(git show -s --format=%cI v2.3.0)"',
     ]);
     // Imported when the command runs: d3 and the page code are needed by this command only.
-    return cmd.action(async (options) => (await Promise.all(/* import() */[__nccwpck_require__.e(850), __nccwpck_require__.e(29)]).then(__nccwpck_require__.bind(__nccwpck_require__, 6029))).runReport(ctx, options));
+    return cmd.action(async (options) => (await Promise.all(/* import() */[__nccwpck_require__.e(850), __nccwpck_require__.e(100)]).then(__nccwpck_require__.bind(__nccwpck_require__, 1100))).runReport(ctx, options));
 }
 
 // EXTERNAL MODULE: external "node:fs"
@@ -16318,6 +16150,190 @@ function parseLast(text) {
     return n;
 }
 
+// EXTERNAL MODULE: ./src/cli/run/since.ts + 19 modules
+var since = __nccwpck_require__(3041);
+;// CONCATENATED MODULE: ./src/cli/commands/since.ts
+
+
+
+/**
+ * `bellgate since REF`: the release review — what changed in each metric between the run at REF
+ * and now: levels then and now, steps, creep and accepted changes. Informational: exit 0, 2 for
+ * bad input, 3 for an unreadable history.
+ */
+function sinceCommand(ctx) {
+    const cmd = new Command('since')
+        .description('release review: levels, steps, creep and accepted changes since a reference run')
+        .argument('<ref>', 'run id, commit sha (or its first digits) or ISO-8601 time of the reference');
+    historyOption(cmd, true);
+    configOption(cmd);
+    seriesOption(cmd);
+    cmd
+        .addOption(new Option('--format <format>', 'how to print the review on stdout').choices(REPORT_FORMATS).default('text'))
+        .option('--at <iso>', "the reference commit's time, so a commit without a recorded run is matched to the nearest earlier run")
+        .option('--all', 'list every metric in the text review, quiet ones too');
+    examples(cmd, [
+        'bellgate since "$(git rev-list -n 1 v2.3.0)" --at "$(git show -s --format=%cI v2.3.0)" --history h.json',
+        'bellgate since 2026-03-01 --history .bellgate/history.json --format markdown >> "$GITHUB_STEP_SUMMARY"',
+        'bellgate since 8123-1 --history h.json --format json > since.json',
+    ]);
+    cmd.addHelpText('after', '\nThe review is evidence, not proof: levels are medians of the runs around each point, and steps and creep come from rank tests on noisy runs.\nExit codes: 0 reviewed; 2 bad input or usage; 3 history store unreachable.\n');
+    return cmd.action((ref, options) => (0,since/* runSince */.g)(ctx, ref, options));
+}
+
+;// CONCATENATED MODULE: ./src/cli/main.ts
+
+
+
+
+
+
+
+
+
+
+
+
+/** Every subcommand, in the order --help lists them. Adding a command: its import and one line here. */
+const COMMANDS = [
+    checkCommand,
+    recordCommand,
+    explainCommand,
+    tuneCommand,
+    reportCommand,
+    sinceCommand,
+    importCommand,
+    verifyCommand,
+    demoCommand,
+];
+/** Version shown by --version; kept in step with package.json by the release steps in DEVELOPERS.md. */
+const VERSION = '0.1.0';
+/**
+ * Runs `bellgate` with the given arguments (without node and script) against injected process
+ * edges and resolves to the exit code: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
+ * 3 history store unreachable. Never throws and never prints a stack trace.
+ * @example await runCli(['check', '--metrics', 'bench.json', '--history', 'h.json'], io) // 0 or 1
+ */
+async function runCli(argv, io) {
+    const ctx = createContext(io);
+    const program = buildProgram(ctx);
+    try {
+        await program.parseAsync(argv, { from: 'user' });
+        return ctx.exitCode;
+    }
+    catch (error) {
+        const failure = toFailure(error);
+        if (failure.text !== '')
+            io.stderr(`${failure.text}\n`);
+        return failure.code;
+    }
+}
+/** The commander program with every subcommand, writing through io and throwing instead of exiting. */
+function buildProgram(ctx) {
+    const program = new Command('bellgate')
+        .description('Gate pull requests on metric regressions, judged against the history of trusted runs.')
+        .version(VERSION, '--version', 'print the version')
+        .helpOption('-h, --help', 'show help for a command')
+        .exitOverride()
+        .configureOutput({
+        writeOut: (s) => ctx.io.stdout(s),
+        writeErr: (s) => ctx.io.stderr(s),
+        outputError: (s, write) => write(s),
+    })
+        .showHelpAfterError('(run with --help for usage)')
+        .showSuggestionAfterError(true)
+        .allowExcessArguments(false);
+    for (const factory of COMMANDS) {
+        const cmd = factory(ctx);
+        // addCommand does not copy the parent's settings (only .command() does), so copy them here:
+        // every subcommand must throw instead of exiting and write through io.
+        cmd.copyInheritedSettings(program);
+        cmd.allowExcessArguments(false);
+        program.addCommand(cmd);
+    }
+    program.addHelpText('after', '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\nRun "bellgate <command> --help" for a command\'s flags and examples; "bellgate demo" to see it work.\n');
+    return program;
+}
+
+
+/***/ }),
+
+/***/ 9793:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   O: () => (/* binding */ historyStore),
+/* harmony export */   j: () => (/* binding */ openHistory)
+/* harmony export */ });
+/* harmony import */ var _errors_visible_text_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(81);
+/* harmony import */ var _history_file_store_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4496);
+/* harmony import */ var _history_history_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3328);
+/* harmony import */ var _paths_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5450);
+
+
+
+
+/**
+ * The file store of `path` for `series`; what it repairs or skips (a torn last line, a killed
+ * writer's temp file) is said on stderr.
+ * @example historyStore(ctx, '.bellgate/history.jsonl', 'default').describe() // 'file /repo/.bellgate/history.jsonl'
+ */
+function historyStore(ctx, path, series) {
+    return (0,_history_file_store_js__WEBPACK_IMPORTED_MODULE_0__/* .createFileStore */ .IF)((0,_paths_js__WEBPACK_IMPORTED_MODULE_1__/* .resolvePath */ .o)(ctx, path), series, {
+        warn: (message) => ctx.io.stderr(`bellgate: note: ${(0,_errors_visible_text_js__WEBPACK_IMPORTED_MODULE_2__/* .visibleText */ .Q)(message)}\n`),
+    });
+}
+/**
+ * Reads the history of `series` from a file store (a missing file is an empty history; `newest`
+ * reads only that many newest runs, from the end of the file), or starts an empty one when no
+ * `--history` was given (every metric is then `new`). Series undefined: whichever the file holds.
+ * @throws StoreError when the file exists but cannot be read (exit 3; never overwritten).
+ */
+async function openHistory(ctx, path, series, newest) {
+    if (path === undefined)
+        return { history: (0,_history_history_js__WEBPACK_IMPORTED_MODULE_3__/* .emptyHistory */ .s4)(series ?? '') };
+    const store = historyStore(ctx, path, series);
+    return { history: await store.read(newest === undefined ? {} : { newest }), store };
+}
+
+
+/***/ }),
+
+/***/ 5450:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   o: () => (/* binding */ resolvePath)
+/* harmony export */ });
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
+/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
+
+/**
+ * A user-given path, resolved against the CLI's working folder (not the process's, so in-process
+ * callers and tests can point the CLI anywhere).
+ * @example resolvePath(ctx, 'out/report.json') // '/repo/out/report.json' when ctx.io.cwd is '/repo'
+ */
+function resolvePath(ctx, path) {
+    return (0,node_path__WEBPACK_IMPORTED_MODULE_0__.isAbsolute)(path) ? path : (0,node_path__WEBPACK_IMPORTED_MODULE_0__.resolve)(ctx.io.cwd, path);
+}
+
+
+/***/ }),
+
+/***/ 3041:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  A: () => (/* binding */ reviewSinceRef),
+  g: () => (/* binding */ runSince)
+});
+
+// EXTERNAL MODULE: ./src/config/rules.ts
+var rules = __nccwpck_require__(5413);
+// EXTERNAL MODULE: ./src/errors/input-error.ts
+var input_error = __nccwpck_require__(3712);
 ;// CONCATENATED MODULE: ./src/gate/since/reference.ts
 
 const SHA = /^[0-9a-f]{4,40}$/i;
@@ -16452,8 +16468,12 @@ function findLast(runs, test) {
     return -1;
 }
 
+// EXTERNAL MODULE: ./src/config/glob-matcher.ts
+var glob_matcher = __nccwpck_require__(517);
 // EXTERNAL MODULE: ./src/model/family.ts
 var family = __nccwpck_require__(7089);
+// EXTERNAL MODULE: ./src/model/median.ts
+var median = __nccwpck_require__(71);
 ;// CONCATENATED MODULE: ./src/model/ranks.ts
 
 /**
@@ -16641,7 +16661,7 @@ function worseSign(worse) {
 const SINCE_SCHEMA = 'bellgate.since/1';
 
 // EXTERNAL MODULE: ./src/model/fit.ts
-var model_fit = __nccwpck_require__(5046);
+var fit = __nccwpck_require__(5046);
 ;// CONCATENATED MODULE: ./src/model/hampel.ts
 
 
@@ -16670,7 +16690,7 @@ function hampelOutliers(values, half, threshold = 3) {
     for (let i = 0; i < n; i++) {
         const window = Array.prototype.slice.call(values, Math.max(0, i - half), Math.min(n, i + half + 1));
         const centre = (0,median/* median */.J)(window);
-        const spread = model_fit/* MAD_TO_SIGMA */.tF * (0,median/* median */.J)(window.map((x) => Math.abs(x - centre)));
+        const spread = fit/* MAD_TO_SIGMA */.tF * (0,median/* median */.J)(window.map((x) => Math.abs(x - centre)));
         flags.push(Math.abs(values[i] - centre) > threshold * spread && spread > 0);
     }
     return flags;
@@ -16819,7 +16839,86 @@ function longRunFactor(residuals) {
     return Math.max(1, 1 + 2 * sum);
 }
 
+;// CONCATENATED MODULE: ./src/model/theil-sen.ts
+
+
+/** Pairs above which the slopes would not fit a reasonable amount of memory (8 bytes each). */
+const MAX_SLOPE_PAIRS = 20_000_000;
+/**
+ * The Theil-Sen estimate of a linear trend (Theil 1950, "A rank-invariant method of linear and
+ * polynomial regression analysis"; Sen 1968, "Estimates of the regression coefficient based on
+ * Kendall's tau"): the median of the slopes (y_j - y_i) / (t_j - t_i) over all pairs i < j with
+ * t_i != t_j. With several blocks, only pairs within one block are taken (the seasonal Kendall
+ * slope of Hirsch, Slack & Smith 1982), so a level step between blocks does not bend the slope.
+ * The interval is Sen's: with N slopes in order and C = z_(1-a/2) sqrt(Var S), the bounds are
+ * the ((N - C) / 2)-th and ((N + C) / 2 + 1)-th slopes, ranks rounded to the nearest (Gilbert
+ * 1987, section 16.5, interpolates between them instead), Var S the
+ * Mann-Kendall variance of the same blocks without tie correction (`variance` overrides it).
+ * `maxLag` keeps only pairs close in the series: a step then touches few of the slopes, and their
+ * median stays near the local trend (the interval is not meant for that case).
+ * The interval is NaN where C leaves no slope on a side. Breakdown point about 29%: outliers move
+ * it little. O(P log P) time and 8P bytes for P pairs; throws InputError over MAX_SLOPE_PAIRS,
+ * for non-finite input, mismatched lengths, or no pair with distinct positions.
+ * @example theilSen([{ at: [1, 2, 3, 4], values: [1, 3, 2, 4] }]).slope // 0.75
+ */
+function theilSen(blocks, options = {}) {
+    const confidence = options.confidence ?? 0.95;
+    const maxLag = options.maxLag ?? Infinity;
+    if (!(confidence > 0 && confidence < 1)) {
+        throw new input_error/* InputError */.d(`a confidence level must be between 0 and 1, got ${confidence}`);
+    }
+    let total = 0;
+    let varianceSum = 0;
+    blocks.forEach((block, b) => {
+        const m = block.values.length;
+        if (block.at.length !== m) {
+            throw new input_error/* InputError */.d(`block ${b + 1} has ${block.at.length} positions for ${m} values`);
+        }
+        for (let i = 0; i < m; i++) {
+            if (!Number.isFinite(block.values[i]) || !Number.isFinite(block.at[i])) {
+                throw new input_error/* InputError */.d(`block ${b + 1}, position ${i + 1}: value and position must be finite numbers`);
+            }
+        }
+        total += maxLag >= m ? (m * (m - 1)) / 2 : maxLag * m - (maxLag * (maxLag + 1)) / 2;
+        varianceSum += (m * (m - 1) * (2 * m + 5)) / 18;
+    });
+    if (total > MAX_SLOPE_PAIRS) {
+        throw new input_error/* InputError */.d(`a Theil-Sen slope over ${total} pairs is more than this build computes (${MAX_SLOPE_PAIRS})`, {
+            fix: 'review a shorter range of runs',
+        });
+    }
+    const slopes = new Float64Array(total);
+    let count = 0;
+    for (const { at, values } of blocks) {
+        const m = values.length;
+        for (let i = 0; i < m; i++) {
+            const last = Math.min(m - 1, i + maxLag);
+            for (let j = i + 1; j <= last; j++) {
+                const dt = at[j] - at[i];
+                if (dt !== 0)
+                    slopes[count++] = (values[j] - values[i]) / dt;
+            }
+        }
+    }
+    if (count === 0)
+        throw new input_error/* InputError */.d('a Theil-Sen slope needs two values at different positions');
+    const sorted = slopes.subarray(0, count).sort();
+    const half = count >> 1;
+    const slope = count % 2 === 1 ? sorted[half] : (sorted[half - 1] + sorted[half]) / 2;
+    const c = normalQuantile(1 - (1 - confidence) / 2) * Math.sqrt(options.variance ?? varianceSum);
+    // 1-based ranks (N - C) / 2 and (N + C) / 2 + 1, each rounded to the nearest rank.
+    const low = Math.round((count - c) / 2);
+    const high = Math.round((count + c) / 2) + 1;
+    return {
+        slope,
+        lower: low >= 1 ? sorted[low - 1] : Number.NaN,
+        upper: high <= count ? sorted[high - 1] : Number.NaN,
+        pairs: count,
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/model/level-steps.ts
+
 
 
 
@@ -16837,7 +16936,8 @@ function longRunFactor(residuals) {
  *    least is dropped first and the rest tested again, until every step left holds. So a regime
  *    that comes and goes (up at one split, back down at the next) is no step: the level after it
  *    is the level before it, and both of its splits are dropped. The test's variance is widened
- *    by longRunFactor of what the steps leave (values less their segment's median): runs in
+ *    by longRunFactor of what the steps leave (values less their segment's Theil-Sen line: a steady
+ *    drift is no serial correlation): runs in
  *    load regimes that last a few runs are not independent, and would pass for a level.
  * Ranks make both tests distribution-free: heavy tails and single wild values barely move them.
  * Returns the steps in order. O(n log n) per split tried. Throws InputError for non-finite
@@ -16902,15 +17002,18 @@ function holding(series, starts, level) {
         kept = kept.filter((_, i) => i !== weakest);
     }
 }
-/** The values less the median of their segment: what is left once the steps are taken out. */
+/** The values less their segment's Theil-Sen line: what is left once the steps (and drifts) are taken out. */
 function residuals(series, starts) {
     const out = new Float64Array(series.length);
     const cuts = [0, ...starts, series.length];
     for (let k = 0; k + 1 < cuts.length; k++) {
         const part = series.subarray(cuts[k], cuts[k + 1]);
-        const level = (0,median/* median */.J)(part);
+        // A steady drift within a segment is no serial correlation: its Theil-Sen line is taken out too.
+        const at = Array.from(part, (_, i) => i);
+        const slope = part.length > 2 ? theilSen([{ at, values: Array.from(part) }]).slope : 0;
+        const level = (0,median/* median */.J)(Array.from(part, (y, i) => y - slope * i));
         for (let i = 0; i < part.length; i++)
-            out[cuts[k] + i] = part[i] - level;
+            out[cuts[k] + i] = part[i] - slope * i - level;
     }
     return out;
 }
@@ -17081,84 +17184,6 @@ function tieCorrection(block) {
         run = 1;
     }
     return total;
-}
-
-;// CONCATENATED MODULE: ./src/model/theil-sen.ts
-
-
-/** Pairs above which the slopes would not fit a reasonable amount of memory (8 bytes each). */
-const MAX_SLOPE_PAIRS = 20_000_000;
-/**
- * The Theil-Sen estimate of a linear trend (Theil 1950, "A rank-invariant method of linear and
- * polynomial regression analysis"; Sen 1968, "Estimates of the regression coefficient based on
- * Kendall's tau"): the median of the slopes (y_j - y_i) / (t_j - t_i) over all pairs i < j with
- * t_i != t_j. With several blocks, only pairs within one block are taken (the seasonal Kendall
- * slope of Hirsch, Slack & Smith 1982), so a level step between blocks does not bend the slope.
- * The interval is Sen's: with N slopes in order and C = z_(1-a/2) sqrt(Var S), the bounds are
- * the ((N - C) / 2)-th and ((N + C) / 2 + 1)-th slopes, ranks rounded to the nearest (Gilbert
- * 1987, section 16.5, interpolates between them instead), Var S the
- * Mann-Kendall variance of the same blocks without tie correction (`variance` overrides it).
- * `maxLag` keeps only pairs close in the series: a step then touches few of the slopes, and their
- * median stays near the local trend (the interval is not meant for that case).
- * The interval is NaN where C leaves no slope on a side. Breakdown point about 29%: outliers move
- * it little. O(P log P) time and 8P bytes for P pairs; throws InputError over MAX_SLOPE_PAIRS,
- * for non-finite input, mismatched lengths, or no pair with distinct positions.
- * @example theilSen([{ at: [1, 2, 3, 4], values: [1, 3, 2, 4] }]).slope // 0.75
- */
-function theilSen(blocks, options = {}) {
-    const confidence = options.confidence ?? 0.95;
-    const maxLag = options.maxLag ?? Infinity;
-    if (!(confidence > 0 && confidence < 1)) {
-        throw new input_error/* InputError */.d(`a confidence level must be between 0 and 1, got ${confidence}`);
-    }
-    let total = 0;
-    let varianceSum = 0;
-    blocks.forEach((block, b) => {
-        const m = block.values.length;
-        if (block.at.length !== m) {
-            throw new input_error/* InputError */.d(`block ${b + 1} has ${block.at.length} positions for ${m} values`);
-        }
-        for (let i = 0; i < m; i++) {
-            if (!Number.isFinite(block.values[i]) || !Number.isFinite(block.at[i])) {
-                throw new input_error/* InputError */.d(`block ${b + 1}, position ${i + 1}: value and position must be finite numbers`);
-            }
-        }
-        total += maxLag >= m ? (m * (m - 1)) / 2 : maxLag * m - (maxLag * (maxLag + 1)) / 2;
-        varianceSum += (m * (m - 1) * (2 * m + 5)) / 18;
-    });
-    if (total > MAX_SLOPE_PAIRS) {
-        throw new input_error/* InputError */.d(`a Theil-Sen slope over ${total} pairs is more than this build computes (${MAX_SLOPE_PAIRS})`, {
-            fix: 'review a shorter range of runs',
-        });
-    }
-    const slopes = new Float64Array(total);
-    let count = 0;
-    for (const { at, values } of blocks) {
-        const m = values.length;
-        for (let i = 0; i < m; i++) {
-            const last = Math.min(m - 1, i + maxLag);
-            for (let j = i + 1; j <= last; j++) {
-                const dt = at[j] - at[i];
-                if (dt !== 0)
-                    slopes[count++] = (values[j] - values[i]) / dt;
-            }
-        }
-    }
-    if (count === 0)
-        throw new input_error/* InputError */.d('a Theil-Sen slope needs two values at different positions');
-    const sorted = slopes.subarray(0, count).sort();
-    const half = count >> 1;
-    const slope = count % 2 === 1 ? sorted[half] : (sorted[half - 1] + sorted[half]) / 2;
-    const c = normalQuantile(1 - (1 - confidence) / 2) * Math.sqrt(options.variance ?? varianceSum);
-    // 1-based ranks (N - C) / 2 and (N + C) / 2 + 1, each rounded to the nearest rank.
-    const low = Math.round((count - c) / 2);
-    const high = Math.round((count + c) / 2) + 1;
-    return {
-        slope,
-        lower: low >= 1 ? sorted[low - 1] : Number.NaN,
-        upper: high <= count ? sorted[high - 1] : Number.NaN,
-        pairs: count,
-    };
 }
 
 ;// CONCATENATED MODULE: ./src/gate/since/steps-and-creep.ts
@@ -17562,113 +17587,53 @@ function familyControl(metrics, settings) {
     });
 }
 
-;// CONCATENATED MODULE: ./src/report/since-words.ts
-
-/** A ratio as a signed percent change: 1.083 -> "+8.3%". */
-const ratioText = (ratio) => (ratio === null ? 'n/a' : (0,format/* formatChange */.eD)(ratio - 1));
-/** A p-value with two significant digits. */
-const pText = (p) => p === null ? 'n/a' : p < 1e-4 ? p.toExponential(1).replace('e+', 'e') : (0,format/* formatNumber */.ZV)(p, 2);
-/** "+8.3% (95% CI +6.1% to +10.4%)" */
-function ratioWithInterval(m, confidence) {
-    const interval = m.lower === null || m.upper === null
-        ? ''
-        : ` (${Math.round(confidence * 100)}% CI ${ratioText(m.lower)} to ${ratioText(m.upper)})`;
-    return `${ratioText(m.ratio)}${interval}`;
-}
-/**
- * Where a step starts: "run 812-1 (sha 4f1c2ab, PR #123), 20 runs after the reference". Run id and
- * sha come from the history and pass `escape` (the target's escaping); the PR is a number.
- */
-function stepPlace(s, escape) {
-    const who = [s.sha ? `sha ${escape(s.sha.slice(0, 7))}` : undefined, s.pr === undefined ? undefined : `PR #${s.pr}`]
-        .filter(Boolean)
-        .join(', ');
-    return `run ${escape(s.run)}${who ? ` (${who})` : ''}, ${s.offset} run${s.offset === 1 ? '' : 's'} after the reference`;
-}
-/** One sentence on a metric: what moved, how, and whether a mark explains it. */
-function metricSentence(m, report) {
-    if (m.status === 'new')
-        return 'no value at or before the reference: new since then.';
-    if (m.status === 'gone')
-        return 'no value after the reference: gone since then.';
-    const level = m.status === 'unchanged'
-        ? `level ${ratioText(m.ratio)}, within the noise (adjusted p ${pText(m.adjusted)})`
-        : `level ${ratioWithInterval(m, report.settings.confidence)}, ${m.status} (adjusted p ${pText(m.adjusted)})`;
-    const parts = [level];
-    if (m.steps.length > 0) {
-        parts.push(`${m.steps.length} step${m.steps.length === 1 ? '' : 's'} (${m.steps.map((s) => ratioText(s.ratio)).join(', ')})`);
-    }
-    if (m.creep?.reported)
-        parts.push(`creep ${(0,format/* formatChange */.eD)(m.creep.slope)} per run`);
-    const accepted = m.steps.filter((s) => s.mark?.reason === 'accepted').length;
-    if (accepted > 0)
-        parts.push(`${accepted} of the steps accepted`);
-    return `${parts.join('; ')}.`;
-}
-/** The headline counts: "3 worse, 1 better, 12 unchanged". */
-function statusLine(report) {
-    const order = ['worse', 'better', 'unchanged', 'new', 'gone'];
-    const counts = order
-        .map((s) => [s, report.metrics.filter((m) => m.status === s).length])
-        .filter(([, n]) => n > 0)
-        .map(([s, n]) => `${n} ${s}`);
-    return counts.join(', ') || 'no metrics';
-}
-/** The range reviewed; run ids, sha and times pass `escape`. */
-function rangeLine(report, escape) {
-    const ref = report.reference;
-    const at = [ref.sha ? `sha ${ref.sha.slice(0, 7)}` : undefined, ref.time].filter(Boolean).join(', ');
-    const latest = report.latest;
-    return `since run ${escape(ref.run)}${at ? ` (${escape(at)})` : ''}: ${report.runs} run${report.runs === 1 ? '' : 's'} to ${escape(latest.run)}${latest.time ? ` (${escape(latest.time)})` : ''}`;
-}
-/** The limits a reader must keep in mind, once per report. */
-const EVIDENCE_NOTE = 'Evidence, not proof: levels are medians of the runs around each point, steps and creep come from rank tests on noisy CI runs, and a change that came and went is not shown.';
-
+// EXTERNAL MODULE: ./src/report/since-words.ts
+var since_words = __nccwpck_require__(3056);
 ;// CONCATENATED MODULE: ./src/report/since-json.ts
 
 /** JSON has no NaN or Infinity: a number that is not finite becomes null. */
-const since_json_num = (x) => (x != null && Number.isFinite(x) ? x : null);
+const num = (x) => (x != null && Number.isFinite(x) ? x : null);
 const opt = (key, value, as) => value === undefined ? {} : { [key]: as(value) };
 function runFields(r) {
-    return { run: r.run, sha: r.sha ?? null, pr: since_json_num(r.pr), time: r.time ?? null };
+    return { run: r.run, sha: r.sha ?? null, pr: num(r.pr), time: r.time ?? null };
 }
-function since_json_metric(m, report) {
+function metric(m, report) {
     return {
         name: m.name,
         unit: m.unit ?? null,
         status: m.status,
         worse: m.worse,
         scale: m.scale,
-        then: m.then ? { n: m.then.n, level: since_json_num(m.then.level), from: m.then.from, to: m.then.to } : null,
-        now: m.now ? { n: m.now.n, level: since_json_num(m.now.level), from: m.now.from, to: m.now.to } : null,
-        ratio: since_json_num(m.ratio),
-        lower: since_json_num(m.lower),
-        upper: since_json_num(m.upper),
-        p: since_json_num(m.p),
-        adjusted: since_json_num(m.adjusted),
+        then: m.then ? { n: m.then.n, level: num(m.then.level), from: m.then.from, to: m.then.to } : null,
+        now: m.now ? { n: m.now.n, level: num(m.now.level), from: m.now.from, to: m.now.to } : null,
+        ratio: num(m.ratio),
+        lower: num(m.lower),
+        upper: num(m.upper),
+        p: num(m.p),
+        adjusted: num(m.adjusted),
         steps: m.steps.map((s) => ({
             ...runFields(s),
             offset: s.offset,
-            ratio: since_json_num(s.ratio),
-            p: since_json_num(s.p),
+            ratio: num(s.ratio),
+            p: num(s.p),
             ...opt('mark', s.mark, (k) => ({ ...runFields(k), reason: k.reason, note: k.note ?? null })),
         })),
         creep: m.creep
             ? {
-                slope: since_json_num(m.creep.slope),
-                lower: since_json_num(m.creep.lower),
-                upper: since_json_num(m.creep.upper),
-                p: since_json_num(m.creep.p),
-                adjusted: since_json_num(m.creep.adjusted),
+                slope: num(m.creep.slope),
+                lower: num(m.creep.lower),
+                upper: num(m.creep.upper),
+                p: num(m.creep.p),
+                adjusted: num(m.creep.adjusted),
                 s: m.creep.s,
-                tau: since_json_num(m.creep.tau),
+                tau: num(m.creep.tau),
                 runs: m.creep.runs,
                 segments: m.creep.segments,
                 reported: m.creep.reported,
             }
             : null,
         accepted: m.accepted.map((k) => ({ ...runFields(k), offset: k.offset, reason: k.reason, note: k.note ?? null })),
-        summary: metricSentence(m, report),
+        summary: (0,since_words/* metricSentence */.I9)(m, report),
     };
 }
 /**
@@ -17699,42 +17664,38 @@ function renderSinceJson(report) {
         latest: runFields(report.latest),
         runs: report.runs,
         settings: { ...report.settings },
-        metrics: report.metrics.map((m) => since_json_metric(m, report)),
+        metrics: report.metrics.map((m) => metric(m, report)),
     };
     return JSON.stringify(doc, null, 2) + '\n';
 }
 
-;// CONCATENATED MODULE: ./src/report/since-order.ts
-const RANK = { worse: 0, better: 1, unchanged: 2, new: 3, gone: 4 };
-/** Whether a metric has anything to tell: a changed level, a step or a reported creep. */
-const noteworthy = (m) => m.status === 'worse' || m.status === 'better' || m.steps.length > 0 || m.creep?.reported === true;
-/** Worse first, then better, then the rest; noteworthy before quiet within each; input order kept otherwise. */
-function sinceOrder(metrics) {
-    return metrics
-        .map((m, i) => ({ m, i }))
-        .sort((a, b) => RANK[a.m.status] - RANK[b.m.status] || Number(noteworthy(b.m)) - Number(noteworthy(a.m)) || a.i - b.i)
-        .map(({ m }) => m);
-}
-
+// EXTERNAL MODULE: ./src/report/escape.ts
+var report_escape = __nccwpck_require__(4031);
+// EXTERNAL MODULE: ./src/report/format.ts + 1 modules
+var format = __nccwpck_require__(5956);
+// EXTERNAL MODULE: ./src/report/markdown.ts + 1 modules
+var markdown = __nccwpck_require__(9214);
+// EXTERNAL MODULE: ./src/report/since-order.ts
+var since_order = __nccwpck_require__(3801);
 ;// CONCATENATED MODULE: ./src/report/since-markdown.ts
 
 
 
 
 
-const since_markdown_HEAD = '| metric | status | then | now | change | adj. p | steps | creep per run |\n|---|---|---|---|---|---|---|---|';
-const since_markdown_BUDGET = MARKDOWN_LIMIT - 2_000;
-function since_markdown_row(m, report) {
+const HEAD = '| metric | status | then | now | change | adj. p | steps | creep per run |\n|---|---|---|---|---|---|---|---|';
+const BUDGET = markdown/* MARKDOWN_LIMIT */.w - 2_000;
+function row(m, report) {
     const unit = m.unit === undefined ? undefined : (0,report_escape/* escapeMarkdown */.F)(m.unit, 20);
     const creep = m.creep?.reported ? (0,format/* formatChange */.eD)(m.creep.slope) : '—';
-    const steps = m.steps.length === 0 ? '—' : m.steps.map((s) => `${ratioText(s.ratio)} @ ${(0,report_escape/* escapeMarkdown */.F)(s.run, 40)}`).join(', ');
+    const steps = m.steps.length === 0 ? '—' : m.steps.map((s) => `${(0,since_words/* ratioText */.B9)(s.ratio)} @ ${(0,report_escape/* escapeMarkdown */.F)(s.run, 40)}`).join(', ');
     const status = m.status === 'worse' ? '**worse**' : m.status;
-    return `| ${(0,report_escape/* escapeMarkdown */.F)(m.name)} | ${status} | ${(0,format/* formatValue */.Fl)(m.then?.level, unit)} | ${(0,format/* formatValue */.Fl)(m.now?.level, unit)} | ${m.ratio === null ? 'n/a' : ratioWithInterval(m, report.settings.confidence)} | ${pText(m.adjusted)} | ${steps} | ${creep} |`;
+    return `| ${(0,report_escape/* escapeMarkdown */.F)(m.name)} | ${status} | ${(0,format/* formatValue */.Fl)(m.then?.level, unit)} | ${(0,format/* formatValue */.Fl)(m.now?.level, unit)} | ${m.ratio === null ? 'n/a' : (0,since_words/* ratioWithInterval */.pe)(m, report.settings.confidence)} | ${(0,since_words/* pText */.C6)(m.adjusted)} | ${steps} | ${creep} |`;
 }
 function stepLines(m) {
     const lines = m.steps.map((s) => {
         const mark = s.mark ? ` — ${s.mark.reason}${s.mark.pr === undefined ? '' : ` in #${s.mark.pr}`}` : '';
-        return `- **${(0,report_escape/* escapeMarkdown */.F)(m.name)}** step ${ratioText(s.ratio)} at ${stepPlace(s, (t) => (0,report_escape/* escapeMarkdown */.F)(t, 40))} (p ${pText(s.p)})${mark}`;
+        return `- **${(0,report_escape/* escapeMarkdown */.F)(m.name)}** step ${(0,since_words/* ratioText */.B9)(s.ratio)} at ${(0,since_words/* stepPlace */.qN)(s, (t) => (0,report_escape/* escapeMarkdown */.F)(t, 40))} (p ${(0,since_words/* pText */.C6)(s.p)})${mark}`;
     });
     for (const a of m.accepted) {
         if (m.steps.some((s) => s.mark === a))
@@ -17749,20 +17710,23 @@ function stepLines(m) {
  * steps with their first run, commit and pull request (and the accepted marks), the quiet
  * metrics folded in a `<details>` table, and the evidence note. Metric names, units and run ids
  * pass escapeMarkdown; PR numbers are numbers (GitHub links them). Stays under GitHub's
- * 65,536-character limit by cutting rows with a note.
+ * 65,536-character limit by cutting rows with a note. `notes` (how the caller found the
+ * reference, where the review ends) open the review, escaped.
  * @example renderSinceMarkdown(report).startsWith('### Bellgate release review') // true
  */
-function renderSinceMarkdown(report) {
+function renderSinceMarkdown(report, options = {}) {
     const out = [
-        `### Bellgate release review: ${statusLine(report)}`,
-        `Series ${(0,report_escape/* escapeMarkdown */.F)(report.series)}, ${rangeLine(report, (t) => (0,report_escape/* escapeMarkdown */.F)(t, 60))}.`,
+        `### Bellgate release review: ${(0,since_words/* statusLine */.Bs)(report)}`,
+        `Series ${(0,report_escape/* escapeMarkdown */.F)(report.series)}, ${(0,since_words/* rangeLine */.ye)(report, (t) => (0,report_escape/* escapeMarkdown */.F)(t, 60))}.`,
     ];
+    for (const note of options.notes ?? [])
+        out.push(`> ${(0,report_escape/* escapeMarkdown */.F)(note, 500)}.`);
     if (report.reference.note)
         out.push(`> ${(0,report_escape/* escapeMarkdown */.F)(report.reference.note, 500)}.`);
-    const ordered = sinceOrder(report.metrics);
-    const told = ordered.filter(noteworthy);
-    const quiet = ordered.filter((m) => !noteworthy(m));
-    let room = since_markdown_BUDGET;
+    const ordered = (0,since_order/* sinceOrder */.v)(report.metrics);
+    const told = ordered.filter(since_order/* noteworthy */.o);
+    const quiet = ordered.filter((m) => !(0,since_order/* noteworthy */.o)(m));
+    let room = BUDGET;
     const take = (lines, what) => {
         const kept = [];
         for (const [i, l] of lines.entries()) {
@@ -17776,7 +17740,7 @@ function renderSinceMarkdown(report) {
         return kept.join('\n');
     };
     if (told.length > 0) {
-        out.push('', `${since_markdown_HEAD}\n${take(told.map((m) => since_markdown_row(m, report)), 'metrics')}`);
+        out.push('', `${HEAD}\n${take(told.map((m) => row(m, report)), 'metrics')}`);
         const steps = told.flatMap(stepLines);
         if (steps.length > 0)
             out.push('', take(steps, 'steps'));
@@ -17785,12 +17749,14 @@ function renderSinceMarkdown(report) {
         out.push('', 'No metric changed level, stepped or crept in this range.');
     }
     if (quiet.length > 0) {
-        out.push('', `<details><summary>${quiet.length} other metric${quiet.length === 1 ? '' : 's'}</summary>\n\n${since_markdown_HEAD}\n${take(quiet.map((m) => since_markdown_row(m, report)), 'metrics')}\n\n</details>`);
+        out.push('', `<details><summary>${quiet.length} other metric${quiet.length === 1 ? '' : 's'}</summary>\n\n${HEAD}\n${take(quiet.map((m) => row(m, report)), 'metrics')}\n\n</details>`);
     }
-    out.push('', `<sub>${EVIDENCE_NOTE}</sub>`);
+    out.push('', `<sub>${since_words/* EVIDENCE_NOTE */.te}</sub>`);
     return out.join('\n') + '\n';
 }
 
+// EXTERNAL MODULE: ./src/report/clean.ts
+var clean = __nccwpck_require__(23);
 ;// CONCATENATED MODULE: ./src/report/since-text.ts
 
 
@@ -17799,18 +17765,18 @@ function renderSinceMarkdown(report) {
 const NAME_MAX = 80;
 function details(m, report) {
     const unit = m.unit === undefined ? undefined : (0,clean/* cleanText */.X)(m.unit, 20);
-    const lines = [`${m.status.padEnd(9)} ${(0,clean/* cleanText */.X)(m.name, NAME_MAX)}: ${metricSentence(m, report)}`];
+    const lines = [`${m.status.padEnd(9)} ${(0,clean/* cleanText */.X)(m.name, NAME_MAX)}: ${(0,since_words/* metricSentence */.I9)(m, report)}`];
     if (m.then && m.now) {
         lines.push(`          level ${(0,format/* formatValue */.Fl)(m.then.level, unit)} then (${m.then.n} runs to ${(0,clean/* cleanText */.X)(m.then.to, 60)}), ${(0,format/* formatValue */.Fl)(m.now.level, unit)} now (${m.now.n} runs to ${(0,clean/* cleanText */.X)(m.now.to, 60)})`);
     }
     for (const s of m.steps) {
         const mark = s.mark ? `; ${s.mark.reason}${s.mark.pr === undefined ? '' : ` in PR #${s.mark.pr}`}` : '';
-        lines.push(`          step ${ratioText(s.ratio)} at ${stepPlace(s, (t) => (0,clean/* cleanText */.X)(t, 60))} (p ${pText(s.p)}${mark})`);
+        lines.push(`          step ${(0,since_words/* ratioText */.B9)(s.ratio)} at ${(0,since_words/* stepPlace */.qN)(s, (t) => (0,clean/* cleanText */.X)(t, 60))} (p ${(0,since_words/* pText */.C6)(s.p)}${mark})`);
     }
     if (m.creep?.reported) {
         const c = m.creep;
         const interval = c.lower === null || c.upper === null ? '' : ` (CI ${(0,format/* formatChange */.eD)(c.lower)} to ${(0,format/* formatChange */.eD)(c.upper)})`;
-        lines.push(`          creep ${(0,format/* formatChange */.eD)(c.slope)} per run${interval} over ${c.runs} runs in ${c.segments} segment${c.segments === 1 ? '' : 's'} (adjusted p ${pText(c.adjusted)})`);
+        lines.push(`          creep ${(0,format/* formatChange */.eD)(c.slope)} per run${interval} over ${c.runs} runs in ${c.segments} segment${c.segments === 1 ? '' : 's'} (adjusted p ${(0,since_words/* pText */.C6)(c.adjusted)})`);
     }
     for (const a of m.accepted) {
         if (m.steps.some((s) => s.mark === a))
@@ -17828,23 +17794,27 @@ function details(m, report) {
  */
 function renderSinceText(report, options = {}) {
     const lines = [
-        `Bellgate release review — series "${(0,clean/* cleanText */.X)(report.series, NAME_MAX)}" ${rangeLine(report, (t) => (0,clean/* cleanText */.X)(t, 60))}`,
+        `Bellgate release review — series "${(0,clean/* cleanText */.X)(report.series, NAME_MAX)}" ${(0,since_words/* rangeLine */.ye)(report, (t) => (0,clean/* cleanText */.X)(t, 60))}`,
     ];
     if (report.reference.note)
         lines.push(`Note: ${report.reference.note}.`);
-    lines.push(`${statusLine(report)}.`);
-    const ordered = sinceOrder(report.metrics);
-    const told = ordered.filter((m) => options.all === true || noteworthy(m));
+    lines.push(`${(0,since_words/* statusLine */.Bs)(report)}.`);
+    const ordered = (0,since_order/* sinceOrder */.v)(report.metrics);
+    const told = ordered.filter((m) => options.all === true || (0,since_order/* noteworthy */.o)(m));
     const quiet = ordered.filter((m) => !told.includes(m));
     for (const m of told)
         lines.push('', ...details(m, report));
     if (quiet.length > 0) {
         lines.push('', `${quiet.length} other metric${quiet.length === 1 ? '' : 's'} without a change, step or creep (--all lists them).`);
     }
-    lines.push('', EVIDENCE_NOTE);
+    lines.push('', since_words/* EVIDENCE_NOTE */.te);
     return lines.join('\n') + '\n';
 }
 
+// EXTERNAL MODULE: ./src/config/load.ts + 11 modules
+var load = __nccwpck_require__(9679);
+// EXTERNAL MODULE: ./src/cli/open-history.ts
+var open_history = __nccwpck_require__(9793);
 ;// CONCATENATED MODULE: ./src/cli/run/since.ts
 
 
@@ -17855,21 +17825,24 @@ function renderSinceText(report, options = {}) {
 
 
 
-
 /**
- * The history the review reads: today the file store's document. The one place that knows where
- * the history comes from, so other stores plug in here.
- * @throws StoreError when the file exists but cannot be read (exit 3); InputError when it is missing.
+ * Reads the history and reviews it since `ref` (with `at`, the reference commit's time): the
+ * review that `bellgate since` prints and `bellgate report --since` draws, with the history it read.
+ * @throws InputError for a REF the history cannot resolve, an empty history or a bad config; StoreError for an unreadable history.
  */
-async function readSinceHistory(ctx, path, series) {
-    const history = await (0,file_store/* createFileStore */.IF)((0,paths/* resolvePath */.o)(ctx, path), series).read();
+async function reviewSinceRef(ctx, ref, options) {
+    const config = await (0,load/* loadConfig */.Z9)(options.config, ctx.io.cwd);
+    const history = await (0,open_history/* historyStore */.O)(ctx, options.history, options.series).read();
     if (history.runs.length === 0) {
         throw new input_error/* InputError */.d('the history has no runs to review', {
-            where: path,
+            where: options.history,
             fix: 'point --history at a history that bellgate record or the action has written',
         });
     }
-    return history;
+    const reference = referenceFromText(ref, history.runs);
+    if (options.at !== undefined)
+        reference.time = options.at;
+    return { report: reviewSince(history, reference, { worse: (name) => (0,rules/* settingsFor */.z)(config, name).worse }), history };
 }
 /**
  * The work of `bellgate since REF`: resolves REF in the
@@ -17878,183 +17851,13 @@ async function readSinceHistory(ctx, path, series) {
  * @example await runSince(ctx, 'v2.3.0-sha', { history: 'h.json', series: 'default', format: 'text' })
  */
 async function runSince(ctx, ref, options) {
-    const config = await (0,load/* loadConfig */.Z9)(options.config, ctx.io.cwd);
-    const history = await readSinceHistory(ctx, options.history, options.series);
-    const reference = referenceFromText(ref, history.runs);
-    if (options.at !== undefined)
-        reference.time = options.at;
-    const report = reviewSince(history, reference, { worse: (name) => (0,config_rules/* settingsFor */.z)(config, name).worse });
+    const { report } = await reviewSinceRef(ctx, ref, options);
     const text = options.format === 'json'
         ? renderSinceJson(report)
         : options.format === 'markdown'
             ? renderSinceMarkdown(report)
             : renderSinceText(report, { all: options.all === true });
     ctx.io.stdout(text);
-}
-
-;// CONCATENATED MODULE: ./src/cli/commands/since.ts
-
-
-
-/**
- * `bellgate since REF`: the release review — what changed in each metric between the run at REF
- * and now: levels then and now, steps, creep and accepted changes. Informational: exit 0, 2 for
- * bad input, 3 for an unreadable history.
- */
-function sinceCommand(ctx) {
-    const cmd = new Command('since')
-        .description('release review: levels, steps, creep and accepted changes since a reference run')
-        .argument('<ref>', 'run id, commit sha (or its first digits) or ISO-8601 time of the reference');
-    historyOption(cmd, true);
-    configOption(cmd);
-    seriesOption(cmd);
-    cmd
-        .addOption(new Option('--format <format>', 'how to print the review on stdout').choices(REPORT_FORMATS).default('text'))
-        .option('--at <iso>', "the reference commit's time, so a commit without a recorded run is matched to the nearest earlier run")
-        .option('--all', 'list every metric in the text review, quiet ones too');
-    examples(cmd, [
-        'bellgate since "$(git rev-list -n 1 v2.3.0)" --at "$(git show -s --format=%cI v2.3.0)" --history h.json',
-        'bellgate since 2026-03-01 --history .bellgate/history.json --format markdown >> "$GITHUB_STEP_SUMMARY"',
-        'bellgate since 8123-1 --history h.json --format json > since.json',
-    ]);
-    cmd.addHelpText('after', '\nThe review is evidence, not proof: levels are medians of the runs around each point, and steps and creep come from rank tests on noisy runs.\nExit codes: 0 reviewed; 2 bad input or usage; 3 history store unreachable.\n');
-    return cmd.action((ref, options) => runSince(ctx, ref, options));
-}
-
-;// CONCATENATED MODULE: ./src/cli/main.ts
-
-
-
-
-
-
-
-
-
-
-
-
-/** Every subcommand, in the order --help lists them. Adding a command: its import and one line here. */
-const COMMANDS = [
-    checkCommand,
-    recordCommand,
-    explainCommand,
-    tuneCommand,
-    reportCommand,
-    sinceCommand,
-    importCommand,
-    verifyCommand,
-    demoCommand,
-];
-/** Version shown by --version; kept in step with package.json by the release steps in DEVELOPERS.md. */
-const VERSION = '0.1.0';
-/**
- * Runs `bellgate` with the given arguments (without node and script) against injected process
- * edges and resolves to the exit code: 0 pass/learning/accepted, 1 regressed, 2 bad input or usage,
- * 3 history store unreachable. Never throws and never prints a stack trace.
- * @example await runCli(['check', '--metrics', 'bench.json', '--history', 'h.json'], io) // 0 or 1
- */
-async function runCli(argv, io) {
-    const ctx = createContext(io);
-    const program = buildProgram(ctx);
-    try {
-        await program.parseAsync(argv, { from: 'user' });
-        return ctx.exitCode;
-    }
-    catch (error) {
-        const failure = toFailure(error);
-        if (failure.text !== '')
-            io.stderr(`${failure.text}\n`);
-        return failure.code;
-    }
-}
-/** The commander program with every subcommand, writing through io and throwing instead of exiting. */
-function buildProgram(ctx) {
-    const program = new Command('bellgate')
-        .description('Gate pull requests on metric regressions, judged against the history of trusted runs.')
-        .version(VERSION, '--version', 'print the version')
-        .helpOption('-h, --help', 'show help for a command')
-        .exitOverride()
-        .configureOutput({
-        writeOut: (s) => ctx.io.stdout(s),
-        writeErr: (s) => ctx.io.stderr(s),
-        outputError: (s, write) => write(s),
-    })
-        .showHelpAfterError('(run with --help for usage)')
-        .showSuggestionAfterError(true)
-        .allowExcessArguments(false);
-    for (const factory of COMMANDS) {
-        const cmd = factory(ctx);
-        // addCommand does not copy the parent's settings (only .command() does), so copy them here:
-        // every subcommand must throw instead of exiting and write through io.
-        cmd.copyInheritedSettings(program);
-        cmd.allowExcessArguments(false);
-        program.addCommand(cmd);
-    }
-    program.addHelpText('after', '\nExit codes: 0 pass, learning or accepted; 1 regressed; 2 bad input or usage; 3 history store unreachable.\nRun "bellgate <command> --help" for a command\'s flags and examples; "bellgate demo" to see it work.\n');
-    return program;
-}
-
-
-/***/ }),
-
-/***/ 9793:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   O: () => (/* binding */ historyStore),
-/* harmony export */   j: () => (/* binding */ openHistory)
-/* harmony export */ });
-/* harmony import */ var _errors_visible_text_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(81);
-/* harmony import */ var _history_file_store_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4496);
-/* harmony import */ var _history_history_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3328);
-/* harmony import */ var _paths_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5450);
-
-
-
-
-/**
- * The file store of `path` for `series`; what it repairs or skips (a torn last line, a killed
- * writer's temp file) is said on stderr.
- * @example historyStore(ctx, '.bellgate/history.jsonl', 'default').describe() // 'file /repo/.bellgate/history.jsonl'
- */
-function historyStore(ctx, path, series) {
-    return (0,_history_file_store_js__WEBPACK_IMPORTED_MODULE_0__/* .createFileStore */ .IF)((0,_paths_js__WEBPACK_IMPORTED_MODULE_1__/* .resolvePath */ .o)(ctx, path), series, {
-        warn: (message) => ctx.io.stderr(`bellgate: note: ${(0,_errors_visible_text_js__WEBPACK_IMPORTED_MODULE_2__/* .visibleText */ .Q)(message)}\n`),
-    });
-}
-/**
- * Reads the history of `series` from a file store (a missing file is an empty history; `newest`
- * reads only that many newest runs, from the end of the file), or starts an empty one when no
- * `--history` was given (every metric is then `new`). Series undefined: whichever the file holds.
- * @throws StoreError when the file exists but cannot be read (exit 3; never overwritten).
- */
-async function openHistory(ctx, path, series, newest) {
-    if (path === undefined)
-        return { history: (0,_history_history_js__WEBPACK_IMPORTED_MODULE_3__/* .emptyHistory */ .s4)(series ?? '') };
-    const store = historyStore(ctx, path, series);
-    return { history: await store.read(newest === undefined ? {} : { newest }), store };
-}
-
-
-/***/ }),
-
-/***/ 5450:
-/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
-
-/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   o: () => (/* binding */ resolvePath)
-/* harmony export */ });
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6760);
-/* harmony import */ var node_path__WEBPACK_IMPORTED_MODULE_0___default = /*#__PURE__*/__nccwpck_require__.n(node_path__WEBPACK_IMPORTED_MODULE_0__);
-
-/**
- * A user-given path, resolved against the CLI's working folder (not the process's, so in-process
- * callers and tests can point the CLI anywhere).
- * @example resolvePath(ctx, 'out/report.json') // '/repo/out/report.json' when ctx.io.cwd is '/repo'
- */
-function resolvePath(ctx, path) {
-    return (0,node_path__WEBPACK_IMPORTED_MODULE_0__.isAbsolute)(path) ? path : (0,node_path__WEBPACK_IMPORTED_MODULE_0__.resolve)(ctx.io.cwd, path);
 }
 
 
@@ -25457,6 +25260,167 @@ function formatAgainstCutoff(r, cutoff) {
 
 /***/ }),
 
+/***/ 9214:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  w: () => (/* binding */ MARKDOWN_LIMIT),
+  G: () => (/* binding */ renderMarkdown)
+});
+
+// EXTERNAL MODULE: ./src/report/cells.ts
+var cells = __nccwpck_require__(571);
+// EXTERNAL MODULE: ./src/report/escape.ts
+var report_escape = __nccwpck_require__(4031);
+// EXTERNAL MODULE: ./src/report/family-line.ts
+var family_line = __nccwpck_require__(4551);
+// EXTERNAL MODULE: ./src/report/format.ts + 1 modules
+var format = __nccwpck_require__(5956);
+;// CONCATENATED MODULE: ./src/report/marker.ts
+/**
+ * The hidden marker that lets the action find its own PR comment for a series and update it in
+ * place. Percent-encoding keeps any series name inside one HTML comment: no `-->` can close it
+ * early and no newline can split it.
+ * @example commentMarker('linux x64') // 'bellgate:series=linux%20x64'
+ */
+function commentMarker(series) {
+    return `bellgate:series=${safeMarker(series)}`;
+}
+/**
+ * Percent-encode everything but [A-Za-z0-9._~-] (and a `-` that starts `--`), so the text is safe
+ * inside `<!-- ... -->`: it can contain neither `>` nor the `--` that HTML forbids in comments.
+ * @example safeMarker('a-->b') // 'a%2D-%3Eb'
+ */
+function safeMarker(s) {
+    return encodeURIComponent(s)
+        .replace(/[!'()*]/g, (ch) => `%${ch.charCodeAt(0).toString(16).toUpperCase()}`)
+        .replace(/-(?=-)/g, '%2D');
+}
+/** The first line of a comment: `<!-- marker -->`; a marker from commentMarker passes unchanged. */
+function markerLine(marker) {
+    const safe = marker.replace(/[^A-Za-z0-9._~:=/%-]/g, (ch) => safeMarker(ch)).replace(/-(?=-)/g, '%2D');
+    return `<!-- ${safe} -->`;
+}
+
+// EXTERNAL MODULE: ./src/report/notes.ts
+var notes = __nccwpck_require__(4931);
+// EXTERNAL MODULE: ./src/report/sparkline.ts
+var sparkline = __nccwpck_require__(9833);
+// EXTERNAL MODULE: ./src/report/reason.ts
+var reason = __nccwpck_require__(8880);
+// EXTERNAL MODULE: ./src/report/status.ts
+var report_status = __nccwpck_require__(6934);
+;// CONCATENATED MODULE: ./src/report/markdown.ts
+
+
+
+
+
+
+
+
+
+/** GitHub rejects comment bodies over 65,536 characters; stay well under with room for the footer. */
+const MARKDOWN_LIMIT = 65_536;
+const BUDGET = MARKDOWN_LIMIT - 2_000;
+const FLAGGED = new Set(['regressed', 'improved']);
+const HEAD = '| status | metric | baseline (mean ± sd) | this run | change | own move | sigma | rel. density vs cutoff | detectable |\n|---|---|---|---|---|---|---|---|---|';
+function row(m) {
+    const unit = m.unit === undefined ? undefined : (0,report_escape/* escapeMarkdown */.F)(m.unit, 20);
+    const c = (0,cells/* metricCells */.G)(m, unit);
+    const status = FLAGGED.has(m.status)
+        ? `${report_status/* STATUS_GLYPH */.id[m.status]} **${m.status}**`
+        : `${report_status/* STATUS_GLYPH */.id[m.status]} ${m.status}`;
+    return `| ${status} | ${(0,report_escape/* escapeMarkdown */.F)(m.name)} | ${c.baseline} | ${c.value} | ${c.change} | ${c.own} | ${c.sigma} | ${c.density.replace('<', '&lt;')} | ${c.detectable} |`;
+}
+function picture(m, report) {
+    const recent = m.recent ?? [];
+    const line = (0,sparkline/* sparkline */.KM)(recent, m.value);
+    const unit = m.unit === undefined ? undefined : (0,report_escape/* escapeMarkdown */.F)(m.unit, 20);
+    const shown = line
+        ? `\`${line}\` ${recent.length} baseline runs → this run ${(0,format/* formatValue */.Fl)(m.value, unit)}`
+        : `this run ${(0,format/* formatValue */.Fl)(m.value, unit)}`;
+    return `- **${(0,report_escape/* escapeMarkdown */.F)(m.name)}** ${shown}. ${(0,report_escape/* escapeMarkdown */.F)((0,reason/* fullReason */.EZ)(m, report), 800)}`;
+}
+function sharedLine(s) {
+    const mark = s.status === 'unsettled' ? '⚠ **unsettled**' : s.status;
+    return `- shared move of **${(0,report_escape/* escapeMarkdown */.F)(s.name)}**: ${mark} — ${(0,report_escape/* escapeMarkdown */.F)((0,reason/* sharedReason */.KM)(s), 800)}`;
+}
+/** Take lines while they fit in `room` characters; say how many were left out. */
+function fit(lines, room, what) {
+    const kept = [];
+    let used = 0;
+    for (const [i, l] of lines.entries()) {
+        if (used + l.length + 1 > room - 200) {
+            kept.push(`\n_…and ${lines.length - i} more ${what} not shown (comment size limit); see the JSON report._`);
+            break;
+        }
+        kept.push(l);
+        used += l.length + 1;
+    }
+    const text = kept.join('\n');
+    return { text, used: text.length };
+}
+const isWebUrl = (u) => u !== undefined && /^https?:\/\/[^\s<>()[\]"'`]+$/.test(u);
+/**
+ * The PR comment and job summary: optional hidden marker, a one-line verdict, a table of flagged
+ * metrics with a sparkline of each one's recent baseline and this run, the groups' findings, and
+ * every other metric in a collapsed `<details>` table; links to the run and HTML report when given;
+ * a footer naming Bellgate. Every metric-file string passes escapeMarkdown. The body stays under
+ * GitHub's 65,536-character limit by cutting table rows with a note.
+ * @example renderMarkdown(report, { marker: commentMarker('ci') }).startsWith('<!-- bellgate:series=ci -->') // true
+ */
+function renderMarkdown(report, options = {}) {
+    const out = [];
+    if (options.marker !== undefined)
+        out.push(markerLine(options.marker));
+    // What the reader must know before the verdict (the history was not used, metrics missing).
+    for (const note of (0,notes/* reportNotes */.W)(report, (t) => t))
+        out.push(`> **Note:** ${(0,report_escape/* escapeMarkdown */.F)(note, 2000)}`, '');
+    const counts = (0,report_status/* statusCounts */.rc)(report.metrics.map((m) => m.status)) || 'no metrics';
+    out.push(`### Bellgate: **${report.verdict}** — ${counts}`);
+    out.push(`Verdict ${report.verdict}: ${report_status/* VERDICT_HEADLINE */.pB[report.verdict]} (series ${(0,report_escape/* escapeMarkdown */.F)(report.series)}).`);
+    let room = BUDGET - out.join('\n').length;
+    const sorted = [...report.metrics].sort((a, b) => (0,report_status/* statusRank */.Tx)(a.status) - (0,report_status/* statusRank */.Tx)(b.status));
+    const flagged = sorted.filter((m) => FLAGGED.has(m.status));
+    const rest = sorted.filter((m) => !FLAGGED.has(m.status));
+    const add = (text) => {
+        out.push(text);
+        room -= text.length + 1;
+    };
+    if (flagged.length > 0) {
+        add('');
+        add(`${HEAD}\n${fit(flagged.map(row), room / 2, 'flagged metrics').text}`);
+        add('');
+        add(fit(flagged.map((m) => picture(m, report)), room / 2, 'pictures').text);
+        add(`<sub>${report_status/* GLYPH_LEGEND */.z6}</sub>`);
+    }
+    add('');
+    add((0,family_line/* familyLine */.l)(report));
+    if (report.shared.length > 0)
+        add(fit(report.shared.map(sharedLine), room / 2, 'shared moves').text);
+    if (rest.length > 0) {
+        add('');
+        add(`<details><summary>${rest.length} other metric${rest.length === 1 ? '' : 's'}: ${(0,report_status/* statusCounts */.rc)(rest.map((m) => m.status))}</summary>\n`);
+        add(`${HEAD}\n${fit(rest.map(row), room, 'metrics').text}\n\n</details>`);
+    }
+    const links = [];
+    if (isWebUrl(options.runUrl))
+        links.push(`[workflow run](${options.runUrl})`);
+    if (isWebUrl(options.htmlReportUrl))
+        links.push(`[full HTML report](${options.htmlReportUrl})`);
+    out.push('');
+    if (links.length > 0)
+        out.push(links.join(' · '));
+    out.push("<sub>Reported by Bellgate: each metric is judged on its own move beside the run's shared move, against the predictive distribution of its baseline, on its worse side.</sub>");
+    return out.join('\n') + '\n';
+}
+
+
+/***/ }),
+
 /***/ 4931:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -25661,6 +25625,156 @@ function sharedReason(s) {
  */
 function fullReason(m, report) {
     return [metricReason(m, report), sinceText(m), runnerText(m), detectableText(m)].filter((s) => s !== '').join('; ');
+}
+
+
+/***/ }),
+
+/***/ 3801:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   o: () => (/* binding */ noteworthy),
+/* harmony export */   v: () => (/* binding */ sinceOrder)
+/* harmony export */ });
+const RANK = { worse: 0, better: 1, unchanged: 2, new: 3, gone: 4 };
+/** Whether a metric has anything to tell: a changed level, a step or a reported creep. */
+const noteworthy = (m) => m.status === 'worse' || m.status === 'better' || m.steps.length > 0 || m.creep?.reported === true;
+/** Worse first, then better, then the rest; noteworthy before quiet within each; input order kept otherwise. */
+function sinceOrder(metrics) {
+    return metrics
+        .map((m, i) => ({ m, i }))
+        .sort((a, b) => RANK[a.m.status] - RANK[b.m.status] || Number(noteworthy(b.m)) - Number(noteworthy(a.m)) || a.i - b.i)
+        .map(({ m }) => m);
+}
+
+
+/***/ }),
+
+/***/ 3056:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   B9: () => (/* binding */ ratioText),
+/* harmony export */   Bs: () => (/* binding */ statusLine),
+/* harmony export */   C6: () => (/* binding */ pText),
+/* harmony export */   I9: () => (/* binding */ metricSentence),
+/* harmony export */   pe: () => (/* binding */ ratioWithInterval),
+/* harmony export */   qN: () => (/* binding */ stepPlace),
+/* harmony export */   te: () => (/* binding */ EVIDENCE_NOTE),
+/* harmony export */   ye: () => (/* binding */ rangeLine)
+/* harmony export */ });
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5956);
+
+/** A ratio as a signed percent change: 1.083 -> "+8.3%". */
+const ratioText = (ratio) => (ratio === null ? 'n/a' : (0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(ratio - 1));
+/** A p-value with two significant digits. */
+const pText = (p) => p === null ? 'n/a' : p < 1e-4 ? p.toExponential(1).replace('e+', 'e') : (0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(p, 2);
+/** "+8.3% (95% CI +6.1% to +10.4%)" */
+function ratioWithInterval(m, confidence) {
+    const interval = m.lower === null || m.upper === null
+        ? ''
+        : ` (${Math.round(confidence * 100)}% CI ${ratioText(m.lower)} to ${ratioText(m.upper)})`;
+    return `${ratioText(m.ratio)}${interval}`;
+}
+/**
+ * Where a step starts: "run 812-1 (sha 4f1c2ab, PR #123), 20 runs after the reference". Run id and
+ * sha come from the history and pass `escape` (the target's escaping); the PR is a number.
+ */
+function stepPlace(s, escape) {
+    const who = [s.sha ? `sha ${escape(s.sha.slice(0, 7))}` : undefined, s.pr === undefined ? undefined : `PR #${s.pr}`]
+        .filter(Boolean)
+        .join(', ');
+    return `run ${escape(s.run)}${who ? ` (${who})` : ''}, ${s.offset} run${s.offset === 1 ? '' : 's'} after the reference`;
+}
+/** One sentence on a metric: what moved, how, and whether a mark explains it. */
+function metricSentence(m, report) {
+    if (m.status === 'new')
+        return 'no value at or before the reference: new since then.';
+    if (m.status === 'gone')
+        return 'no value after the reference: gone since then.';
+    const level = m.status === 'unchanged'
+        ? `level ${ratioText(m.ratio)}, within the noise (adjusted p ${pText(m.adjusted)})`
+        : `level ${ratioWithInterval(m, report.settings.confidence)}, ${m.status} (adjusted p ${pText(m.adjusted)})`;
+    const parts = [level];
+    if (m.steps.length > 0) {
+        parts.push(`${m.steps.length} step${m.steps.length === 1 ? '' : 's'} (${m.steps.map((s) => ratioText(s.ratio)).join(', ')})`);
+    }
+    if (m.creep?.reported)
+        parts.push(`creep ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(m.creep.slope)} per run`);
+    const accepted = m.steps.filter((s) => s.mark?.reason === 'accepted').length;
+    if (accepted > 0)
+        parts.push(`${accepted} of the steps accepted`);
+    return `${parts.join('; ')}.`;
+}
+/** The headline counts: "3 worse, 1 better, 12 unchanged". */
+function statusLine(report) {
+    const order = ['worse', 'better', 'unchanged', 'new', 'gone'];
+    const counts = order
+        .map((s) => [s, report.metrics.filter((m) => m.status === s).length])
+        .filter(([, n]) => n > 0)
+        .map(([s, n]) => `${n} ${s}`);
+    return counts.join(', ') || 'no metrics';
+}
+/** The range reviewed; run ids, sha and times pass `escape`. */
+function rangeLine(report, escape) {
+    const ref = report.reference;
+    const at = [ref.sha ? `sha ${ref.sha.slice(0, 7)}` : undefined, ref.time].filter(Boolean).join(', ');
+    const latest = report.latest;
+    return `since run ${escape(ref.run)}${at ? ` (${escape(at)})` : ''}: ${report.runs} run${report.runs === 1 ? '' : 's'} to ${escape(latest.run)}${latest.time ? ` (${escape(latest.time)})` : ''}`;
+}
+/** The limits a reader must keep in mind, once per report. */
+const EVIDENCE_NOTE = 'Evidence, not proof: levels are medians of the runs around each point, steps and creep come from rank tests on noisy CI runs, and a change that came and went is not shown.';
+
+
+/***/ }),
+
+/***/ 9833:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   KM: () => (/* binding */ sparkline),
+/* harmony export */   nA: () => (/* binding */ BLOCKS)
+/* harmony export */ });
+/* unused harmony export MARK_SEPARATOR */
+/** The eight Unicode block heights, lowest first (U+2581..U+2588). */
+const BLOCKS = ['▁', '▂', '▃', '▄', '▅', '▆', '▇', '█'];
+/** Separates the history from this run's mark, so the mark reads as "and now". */
+const MARK_SEPARATOR = '→';
+/**
+ * A one-line picture of a series: one block per value, height linear between the smallest and
+ * largest finite value (this run's `mark` included, so a jump stands out). Missing values (NaN)
+ * show as a space; a constant series sits at mid height. When `mark` is given it follows the
+ * history after an arrow. Returns '' when nothing is finite. Plain text, so it reads the same in a
+ * terminal, a code span on GitHub and a screen reader's character mode.
+ * @example sparkline([1, 2, 3, 4, 5, 6, 7, 8]) // '▁▂▃▄▅▆▇█'
+ * @example sparkline([1, 1, 1], 2) // '▁▁▁→█'
+ */
+function sparkline(values, mark) {
+    const finite = values.filter((v) => Number.isFinite(v));
+    const hasMark = mark !== undefined && Number.isFinite(mark);
+    if (hasMark)
+        finite.push(mark);
+    if (finite.length === 0)
+        return '';
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (const v of finite) {
+        if (v < lo)
+            lo = v;
+        if (v > hi)
+            hi = v;
+    }
+    const block = (v) => {
+        if (!Number.isFinite(v))
+            return ' ';
+        if (hi === lo)
+            return BLOCKS[3];
+        const i = Math.round(((v - lo) / (hi - lo)) * (BLOCKS.length - 1));
+        return BLOCKS[Math.min(BLOCKS.length - 1, Math.max(0, i))] ?? BLOCKS[3];
+    };
+    const line = values.map(block).join('');
+    return hasMark ? `${line}${MARK_SEPARATOR}${block(mark)}` : line;
 }
 
 

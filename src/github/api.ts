@@ -5,6 +5,7 @@
  */
 import type { ArtifactApi } from '../history/artifact-store.js';
 import type { GitDataApi } from '../history/branch-api.js';
+import type { ReleaseApi } from './release-api.js';
 
 export interface IssueComment {
   id: number;
@@ -22,6 +23,8 @@ export interface GitHubApi extends ArtifactApi {
   updateIssueComment(id: number, body: string): Promise<void>;
   /** The Git Data calls of the `branch` store (same token and API URL); fakes may leave it out. */
   gitData?: GitDataApi;
+  /** The release review's tag and commit calls (release-api.ts); fakes may leave it out. */
+  release?: ReleaseApi;
 }
 
 /** Knobs of the retries; tests use tiny intervals. Times in milliseconds. */

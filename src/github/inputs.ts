@@ -22,6 +22,8 @@ export const INPUT = {
   historyFailure: 'history-failure',
   missingMetrics: 'missing-metrics',
   htmlReport: 'html-report',
+  since: 'since',
+  sinceBlock: 'since-block',
 } as const;
 
 /** Output names exactly as action.yml declares them. */
@@ -54,6 +56,10 @@ export interface ActionInputs {
   /** A run lacking more than half of its baseline metrics: `warn` (annotation) or `fail` (the step). */
   missingMetrics: 'warn' | 'fail';
   htmlReport: boolean;
+  /** Release mode (release-review.ts): the reference to review since; undefined: check the run. */
+  since?: string;
+  /** In release mode, a metric worse since the reference fails the step. */
+  sinceBlock: boolean;
 }
 
 /** Reads one input by its action.yml name, trimmed: @actions/core's getInput in the action. */
@@ -92,7 +98,8 @@ export function readActionInputs(read: InputReader): ActionInputs {
     .split(/\r?\n/)
     .map((l) => l.trim())
     .filter((l) => l !== '' && !l.startsWith('#'));
-  if (metrics.length === 0) {
+  const since = get(INPUT.since);
+  if (metrics.length === 0 && since === '') {
     throw new InputError('input `metrics` is empty: there are no metric files to check', {
       where: `input ${INPUT.metrics}`,
       fix: 'list the metric files or globs, one a line, e.g. `metrics: out/bench/*.json`',
@@ -136,5 +143,7 @@ export function readActionInputs(read: InputReader): ActionInputs {
     historyFailure: choice(INPUT.historyFailure, get(INPUT.historyFailure), ['warn', 'fail'] as const, 'warn'),
     missingMetrics: choice(INPUT.missingMetrics, get(INPUT.missingMetrics), ['warn', 'fail'] as const, 'warn'),
     htmlReport: flag(INPUT.htmlReport, get(INPUT.htmlReport), false),
+    ...(since === '' ? {} : { since }),
+    sinceBlock: flag(INPUT.sinceBlock, get(INPUT.sinceBlock), false),
   };
 }

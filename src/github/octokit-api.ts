@@ -14,6 +14,7 @@ import { DEFAULT_RETRY, statusOf, type ApiTarget, type GitHubApi, type IssueComm
 import { readCapped } from './fetch-capped.js';
 import { createGitData } from './git-data.js';
 import { proxyFetch } from './proxy-fetch.js';
+import { createReleaseApi } from './release-api.js';
 import { honourRetryAfter } from './retry-after.js';
 
 const PER_PAGE = 100;
@@ -209,5 +210,6 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
     },
     // The branch store's calls, through this same client.
     gitData: createGitData(octokit, repo),
+    release: createReleaseApi(octokit, repo),
   };
 }

@@ -47,6 +47,7 @@ import { uploadHtml } from './html-report.js';
 import { OUTPUT, readActionInputs, type ActionInputs, type InputReader } from './inputs.js';
 import { logText } from './log-text.js';
 import { postComment } from './pr-comment.js';
+import { runReleaseReview } from './release-review.js';
 import { reportPath } from './report-path.js';
 import type { ActionSink } from './sink.js';
 import { createHistoryStore, type StoreSpec } from './store-factory.js';
@@ -101,21 +102,9 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const context = await readRunContext(deps.env, deps.readText);
   // A missing file at the default path means default settings; a missing named file is an error.
   const config = await loadConfig(inputs.config, deps.cwd);
-  const read = await readMetricFiles(inputs.metrics, {
-    ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
-    limits: config.limits,
-    aggregateFor: (name) => settingsFor(config, name).aggregate,
-    cwd: deps.cwd,
-  });
   const series = inputs.series ?? `${context.workflow}/${context.job}`;
   const shownSeries = logText(series);
   const baselineBranch = inputs.baselineBranch ?? context.defaultBranch;
-  const decision = decideRecord(inputs.record, context, baselineBranch);
-  if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
-  else
-    sink.info(
-      `bellgate: series "${shownSeries}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`,
-    );
 
   let api: GitHubApi | Promise<GitHubApi> | undefined;
   const apiOnce = (): GitHubApi | Promise<GitHubApi> => {
@@ -147,6 +136,32 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     upload: deps.upload,
     warn: (m) => sink.warning(`bellgate: ${m}`),
     info: (m) => sink.info(`bellgate: ${m}`),
+  });
+  // Release mode: review since a reference instead of checking this run (release-review.ts).
+  if (inputs.since !== undefined) {
+    const review = await runReleaseReview({
+      ...deps,
+      inputs: { ...inputs, since: inputs.since },
+      context,
+      config,
+      store,
+      series,
+      api: apiOnce,
+    });
+    return { failed: review.failed, recorded: false };
+  }
+  const decision = decideRecord(inputs.record, context, baselineBranch);
+  if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
+  else
+    sink.info(
+      `bellgate: series "${shownSeries}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`,
+    );
+
+  const read = await readMetricFiles(inputs.metrics, {
+    ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
+    limits: config.limits,
+    aggregateFor: (name) => settingsFor(config, name).aggregate,
+    cwd: deps.cwd,
   });
   const setting = { store: inputs.store, history: inputs.history };
 

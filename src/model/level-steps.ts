@@ -3,6 +3,7 @@ import { rankSplit } from './rank-split.js';
 import { median } from './median.js';
 import { rankSumTest } from './rank-sum.js';
 import { longRunFactor } from './serial-correction.js';
+import { theilSen } from './theil-sen.js';
 
 /** A sustained change in level found by levelSteps. */
 export interface LevelStep {
@@ -32,7 +33,8 @@ export interface LevelStepOptions {
  *    least is dropped first and the rest tested again, until every step left holds. So a regime
  *    that comes and goes (up at one split, back down at the next) is no step: the level after it
  *    is the level before it, and both of its splits are dropped. The test's variance is widened
- *    by longRunFactor of what the steps leave (values less their segment's median): runs in
+ *    by longRunFactor of what the steps leave (values less their segment's Theil-Sen line: a steady
+ *    drift is no serial correlation): runs in
  *    load regimes that last a few runs are not independent, and would pass for a level.
  * Ranks make both tests distribution-free: heavy tails and single wild values barely move them.
  * Returns the steps in order. O(n log n) per split tried. Throws InputError for non-finite
@@ -95,14 +97,17 @@ function holding(series: Float64Array, starts: number[], level: number): LevelSt
   }
 }
 
-/** The values less the median of their segment: what is left once the steps are taken out. */
+/** The values less their segment's Theil-Sen line: what is left once the steps (and drifts) are taken out. */
 function residuals(series: Float64Array, starts: readonly number[]): Float64Array {
   const out = new Float64Array(series.length);
   const cuts = [0, ...starts, series.length];
   for (let k = 0; k + 1 < cuts.length; k++) {
     const part = series.subarray(cuts[k], cuts[k + 1]);
-    const level = median(part);
-    for (let i = 0; i < part.length; i++) out[cuts[k]! + i] = part[i]! - level;
+    // A steady drift within a segment is no serial correlation: its Theil-Sen line is taken out too.
+    const at = Array.from(part, (_, i) => i);
+    const slope = part.length > 2 ? theilSen([{ at, values: Array.from(part) }]).slope : 0;
+    const level = median(Array.from(part, (y, i) => y - slope * i));
+    for (let i = 0; i < part.length; i++) out[cuts[k]! + i] = part[i]! - slope * i - level;
   }
   return out;
 }

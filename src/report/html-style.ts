@@ -35,6 +35,8 @@ svg .cutoff { stroke: var(--warn); stroke-dasharray: 4 3; stroke-width: 1.5; } s
 svg .run-mark { fill: var(--fg); stroke: var(--bg); stroke-width: 1; }
 svg .run-mark.s-regressed { fill: var(--bad); } svg .run-mark.s-improved { fill: var(--good); }
 svg .note { font-size: 11px; paint-order: stroke; stroke: var(--bg); stroke-width: 3px; }
+section.since { border-top: 2px solid var(--line); padding: 1rem 0; } .since-metric h3 { font-size: 1rem; margin: .75rem 0 .25rem; }
+svg .since-ref { stroke: var(--fg); stroke-width: 1.5; } svg .since-step { stroke: var(--bad); stroke-dasharray: 3 2; stroke-width: 1.5; }
 .legend { color: var(--muted); font-size: 12px; margin: .25rem 0 0; }
 footer { color: var(--muted); font-size: 12px; margin-top: 2rem; }
 @media print {

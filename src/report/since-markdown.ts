@@ -38,14 +38,16 @@ function stepLines(m: SinceMetric): string[] {
  * steps with their first run, commit and pull request (and the accepted marks), the quiet
  * metrics folded in a `<details>` table, and the evidence note. Metric names, units and run ids
  * pass escapeMarkdown; PR numbers are numbers (GitHub links them). Stays under GitHub's
- * 65,536-character limit by cutting rows with a note.
+ * 65,536-character limit by cutting rows with a note. `notes` (how the caller found the
+ * reference, where the review ends) open the review, escaped.
  * @example renderSinceMarkdown(report).startsWith('### Bellgate release review') // true
  */
-export function renderSinceMarkdown(report: SinceReport): string {
+export function renderSinceMarkdown(report: SinceReport, options: { notes?: readonly string[] } = {}): string {
   const out = [
     `### Bellgate release review: ${statusLine(report)}`,
     `Series ${escapeMarkdown(report.series)}, ${rangeLine(report, (t) => escapeMarkdown(t, 60))}.`,
   ];
+  for (const note of options.notes ?? []) out.push(`> ${escapeMarkdown(note, 500)}.`);
   if (report.reference.note) out.push(`> ${escapeMarkdown(report.reference.note, 500)}.`);
   const ordered = sinceOrder(report.metrics);
   const told = ordered.filter(noteworthy);

@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { serializeHistory } from '../../src/history/document.js';
 import type { History } from '../../src/history/history.js';
@@ -18,10 +20,10 @@ const generated = generateHistory({
     'size/app.js': { level: 40_000, unit: 'B', sd: 0.001 },
   },
 });
-// The file format on main has no pr or marks yet (round two): only the fields it stores.
+// The one history layout (src/history): the fields it stores, the merged pull request included.
 const stored: History = {
   series: 'default',
-  runs: generated.runs.map(({ id, sha, time }) => ({ id, sha, time, ref: 'refs/heads/main', event: 'push' })),
+  runs: generated.runs.map(({ id, sha, time, pr }) => ({ id, sha, time, pr, ref: 'refs/heads/main', event: 'push' })),
   columns: generated.columns,
 };
 const file = work.write('history.json', serializeHistory(stored));
@@ -39,7 +41,7 @@ describe('bellgate since', () => {
         name: string;
         ratio: number;
         status: string;
-        steps: { run: string }[];
+        steps: { run: string; pr?: number }[];
         creep: { slope: number; p: number; reported: boolean };
       }[];
     };
@@ -50,6 +52,9 @@ describe('bellgate since', () => {
     expect(byName.get('build/compile')!.steps.map((s) => s.run)).toEqual([
       expect.stringMatching(/^run-(58|59|60|61|62)$/),
     ]);
+    // generate.ts gives run-N the pull request 99 + N: read back from the stored history.
+    const step = byName.get('build/compile')!.steps[0]!;
+    expect(step.pr).toBe(99 + Number(step.run.slice('run-'.length)));
     expect(byName.get('api/latency')!.creep.reported).toBe(true);
     expect(byName.get('api/latency')!.creep.slope).toBeGreaterThan(0.003);
     expect(byName.get('api/latency')!.creep.slope).toBeLessThan(0.005);
@@ -57,11 +62,23 @@ describe('bellgate since', () => {
     expect(typeof byName.get('size/app.js')!.ratio).toBe('number');
   });
 
+  it('bellgate report --since adds the review section with each changed metric drawn', async () => {
+    const out = join(work.dir, 'review.html');
+    const r = await bellgate(work.dir, ['report', '--history', file, '--html', out, '--since', 'run-40']);
+    expect(r.stderr).toBe('');
+    expect(r.code).toBe(0);
+    const html = readFileSync(out, 'utf8');
+    expect(html).toContain('<section id="since"');
+    expect(html.match(/class="since-metric"/g)).toHaveLength(2);
+    expect(html).toContain('data-metric="build/compile"');
+    expect(html).toContain('data-metric="api/latency"');
+  });
+
   it('text and markdown name the step, the creep and the range', async () => {
     const text = await bellgate(work.dir, ['since', 'run-40', '--history', file]);
     expect(text.code).toBe(0);
     expect(text.stdout).toMatch(/^Bellgate release review — series "default" since run run-40/);
-    expect(text.stdout).toMatch(/step \+\d\.\d+% at run run-\d+ \(sha [0-9a-f]{7}\)/);
+    expect(text.stdout).toMatch(/step \+\d\.\d+% at run run-\d+ \(sha [0-9a-f]{7}, PR #\d+\)/);
     expect(text.stdout).toMatch(/creep \+0\.\d+% per run/);
     expect(text.stdout).toContain('Evidence, not proof');
     const md = await bellgate(work.dir, ['since', 'run-40', '--history', file, '--format', 'markdown']);

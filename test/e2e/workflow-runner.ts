@@ -1,6 +1,6 @@
 /**
  * Runs an example workflow file the way GitHub Actions would, as far as the examples use it: the
- * `on:` filters (event, branches, pull_request types), the job and step `if:` conditions, a
+ * `on:` filters (event, branches, tags, pull_request types), the job and step `if:` conditions, a
  * `strategy.matrix`, `${{ }}` expressions in `with:`, `run:` and `concurrency`, and each job's
  * `permissions`, which the token the job gets is limited to (the REST stand-in refuses what they
  * do not grant). The checkout and setup steps are stood in (the sample project is already in the
@@ -55,11 +55,28 @@ export function triggers(workflow: Json, event: WorkflowEvent): boolean {
     const types = (filter.types as string[] | undefined) ?? ['opened', 'synchronize', 'reopened'];
     if (!types.includes(String(event.payload.action))) return false;
   }
-  if (event.name === 'push' && Array.isArray(filter.branches)) {
-    const branch = event.ref.replace(/^refs\/heads\//, '');
-    if (!(filter.branches as string[]).includes(branch)) return false;
+  if (event.name === 'push' && (Array.isArray(filter.branches) || Array.isArray(filter.tags))) {
+    // GitHub docs, "Using filters": with only `tags`, branch pushes do not start the run, and the other way round.
+    const tag = event.ref.startsWith('refs/tags/');
+    const patterns = (tag ? filter.tags : filter.branches) as string[] | undefined;
+    const name = event.ref.replace(/^refs\/(heads|tags)\//, '');
+    if (!patterns?.some((p) => globMatch(p, name))) return false;
   }
   return true;
+}
+
+/** A ref filter pattern: `*` any characters but `/`, `**` any characters (GitHub's filter pattern cheat sheet). */
+function globMatch(pattern: string, name: string): boolean {
+  const source = pattern
+    .split('**')
+    .map((part) =>
+      part
+        .split('*')
+        .map((t) => t.replace(/[.+?^${}()|[\]\\]/g, '\\$&'))
+        .join('[^/]*'),
+    )
+    .join('.*');
+  return new RegExp(`^${source}$`).test(name);
 }
 
 export function readWorkflow(path: string): Json {

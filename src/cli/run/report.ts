@@ -4,10 +4,14 @@ import { renderHtmlReport } from '../../report/html.js';
 import type { CommandContext } from '../context.js';
 import { judgeRequestedRun, type RequestedRunOptions } from '../judge-requested-run.js';
 import { resolvePath } from '../paths.js';
+import { reviewSinceRef } from './since.js';
 
 export interface ReportOptions extends RequestedRunOptions {
   html: string;
   title?: string;
+  /** A reference (run id, sha, time): adds the release review's section (cli/run/since.ts). */
+  since?: string;
+  at?: string;
 }
 
 /**
@@ -18,9 +22,11 @@ export interface ReportOptions extends RequestedRunOptions {
  */
 export async function runReport(ctx: CommandContext, options: ReportOptions): Promise<void> {
   const { history, report } = await judgeRequestedRun(ctx, options);
+  const since = options.since === undefined ? undefined : await reviewSinceRef(ctx, options.since, options);
   const html = renderHtmlReport({
     report,
     history,
+    ...(since === undefined ? {} : { since }),
     title: options.title ?? `Bellgate report: ${options.series}`,
     generatedAt: ctx.now().toISOString(),
   });

@@ -2,15 +2,15 @@ import { settingsFor } from '../../config/rules.js';
 import { InputError } from '../../errors/input-error.js';
 import { referenceFromText } from '../../gate/since/reference.js';
 import { reviewSince } from '../../gate/since/review-since.js';
-import type { SinceHistory } from '../../gate/since/since-history.js';
-import { createFileStore } from '../../history/file-store.js';
+import type { SinceReport } from '../../gate/since/since-report.js';
+import type { History } from '../../history/history.js';
 import { renderSinceJson } from '../../report/since-json.js';
 import { renderSinceMarkdown } from '../../report/since-markdown.js';
 import { renderSinceText } from '../../report/since-text.js';
 import type { CommandContext } from '../context.js';
 import { loadConfig } from '../../config/load.js';
 import type { ReportFormat } from '../options.js';
-import { resolvePath } from '../paths.js';
+import { historyStore } from '../open-history.js';
 
 export interface SinceCliOptions {
   history: string;
@@ -22,19 +22,26 @@ export interface SinceCliOptions {
 }
 
 /**
- * The history the review reads: today the file store's document. The one place that knows where
- * the history comes from, so other stores plug in here.
- * @throws StoreError when the file exists but cannot be read (exit 3); InputError when it is missing.
+ * Reads the history and reviews it since `ref` (with `at`, the reference commit's time): the
+ * review that `bellgate since` prints and `bellgate report --since` draws, with the history it read.
+ * @throws InputError for a REF the history cannot resolve, an empty history or a bad config; StoreError for an unreadable history.
  */
-export async function readSinceHistory(ctx: CommandContext, path: string, series: string): Promise<SinceHistory> {
-  const history = await createFileStore(resolvePath(ctx, path), series).read();
+export async function reviewSinceRef(
+  ctx: CommandContext,
+  ref: string,
+  options: { history: string; series: string; config?: string; at?: string },
+): Promise<{ report: SinceReport; history: History }> {
+  const config = await loadConfig(options.config, ctx.io.cwd);
+  const history = await historyStore(ctx, options.history, options.series).read();
   if (history.runs.length === 0) {
     throw new InputError('the history has no runs to review', {
-      where: path,
+      where: options.history,
       fix: 'point --history at a history that bellgate record or the action has written',
     });
   }
-  return history;
+  const reference = referenceFromText(ref, history.runs);
+  if (options.at !== undefined) reference.time = options.at;
+  return { report: reviewSince(history, reference, { worse: (name) => settingsFor(config, name).worse }), history };
 }
 
 /**
@@ -44,11 +51,7 @@ export async function readSinceHistory(ctx: CommandContext, path: string, series
  * @example await runSince(ctx, 'v2.3.0-sha', { history: 'h.json', series: 'default', format: 'text' })
  */
 export async function runSince(ctx: CommandContext, ref: string, options: SinceCliOptions): Promise<void> {
-  const config = await loadConfig(options.config, ctx.io.cwd);
-  const history = await readSinceHistory(ctx, options.history, options.series);
-  const reference = referenceFromText(ref, history.runs);
-  if (options.at !== undefined) reference.time = options.at;
-  const report = reviewSince(history, reference, { worse: (name) => settingsFor(config, name).worse });
+  const { report } = await reviewSinceRef(ctx, ref, options);
   const text =
     options.format === 'json'
       ? renderSinceJson(report)

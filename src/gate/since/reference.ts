@@ -1,5 +1,5 @@
 import { InputError } from '../../errors/input-error.js';
-import type { SinceRunInfo } from './since-history.js';
+import type { RunInfo } from '../../history/history.js';
 import type { ResolvedReference } from './since-report.js';
 
 /** The reference point of a review: a run id, a commit sha, a time, or a sha with its commit time. */
@@ -20,7 +20,7 @@ const ISO_DATE = /^\d{4}-\d{2}-\d{2}/;
  * Throws InputError naming what REF can be when it is none of these.
  * @example referenceFromText('2026-03-01', runs) // { time: '2026-03-01' }
  */
-export function referenceFromText(text: string, runs: readonly SinceRunInfo[]): SinceReference {
+export function referenceFromText(text: string, runs: readonly RunInfo[]): SinceReference {
   const ref = text.trim();
   if (runs.some((r) => r.id === ref)) return { run: ref };
   if (SHA.test(ref)) return { sha: ref };
@@ -41,7 +41,7 @@ export function referenceFromText(text: string, runs: readonly SinceRunInfo[]): 
  * Pure: times are compared as parsed ISO-8601 strings, never against a clock.
  * @example resolveReference(runs, { sha: '4f1c2ab' }).run // '812-1'
  */
-export function resolveReference(runs: readonly SinceRunInfo[], reference: SinceReference): ResolvedReference {
+export function resolveReference(runs: readonly RunInfo[], reference: SinceReference): ResolvedReference {
   const requested = { ...reference };
   if (reference.run !== undefined) {
     const index = findLast(runs, (r) => r.id === reference.run);
@@ -97,7 +97,7 @@ export function resolveReference(runs: readonly SinceRunInfo[], reference: Since
 }
 
 function resolved(
-  runs: readonly SinceRunInfo[],
+  runs: readonly RunInfo[],
   index: number,
   requested: SinceReference,
   exact: boolean,
@@ -107,7 +107,7 @@ function resolved(
 }
 
 /** The run's id, sha, pr and time, leaving out the absent ones. */
-export function runRef(run: SinceRunInfo): { run: string; sha?: string; pr?: number; time?: string } {
+export function runRef(run: RunInfo): { run: string; sha?: string; pr?: number; time?: string } {
   return {
     run: run.id,
     ...(run.sha === undefined ? {} : { sha: run.sha }),
@@ -116,7 +116,7 @@ export function runRef(run: SinceRunInfo): { run: string; sha?: string; pr?: num
   };
 }
 
-function atOrBefore(runs: readonly SinceRunInfo[], time: string): number {
+function atOrBefore(runs: readonly RunInfo[], time: string): number {
   const t = Date.parse(time);
   if (!Number.isFinite(t)) {
     throw new InputError(`"${time}" is not an ISO-8601 time`, {
@@ -146,7 +146,7 @@ function atOrBefore(runs: readonly SinceRunInfo[], time: string): number {
   return best;
 }
 
-function findLast(runs: readonly SinceRunInfo[], test: (r: SinceRunInfo) => boolean): number {
+function findLast(runs: readonly RunInfo[], test: (r: RunInfo) => boolean): number {
   for (let i = runs.length - 1; i >= 0; i--) if (test(runs[i]!)) return i;
   return -1;
 }

@@ -7,7 +7,7 @@ import { rankSumTest } from '../../model/rank-sum.js';
 import { shiftEstimate } from '../../model/shift-estimate.js';
 import { directionOf } from '../sides.js';
 import { resolveReference, runRef, type SinceReference } from './reference.js';
-import type { SinceHistory, SinceRunInfo } from './since-history.js';
+import type { History, RunInfo } from '../../history/history.js';
 import {
   SINCE_SCHEMA,
   type LevelWindow,
@@ -55,7 +55,7 @@ const MARK_NEAR = 2;
  * MAX_RANGE runs.
  * @example reviewSince(history, { sha: '4f1c2ab' }).metrics[0].ratio // 1.083
  */
-export function reviewSince(history: SinceHistory, reference: SinceReference, options: SinceOptions = {}): SinceReport {
+export function reviewSince(history: History, reference: SinceReference, options: SinceOptions = {}): SinceReport {
   const settings = checkSettings(options);
   const runs = history.runs;
   if (runs.length === 0) throw new InputError('the history has no runs to review', { where: 'REF' });
@@ -111,7 +111,7 @@ function reviewMetric(
   name: string,
   unit: string | undefined,
   column: readonly number[],
-  runs: readonly SinceRunInfo[],
+  runs: readonly RunInfo[],
   reference: number,
   worse: Worse,
   settings: SinceSettings,
@@ -185,7 +185,7 @@ function finiteOrNull(x: number): number | null {
 function levelWindow(
   values: readonly number[],
   positions: readonly number[],
-  runs: readonly SinceRunInfo[],
+  runs: readonly RunInfo[],
   fromScale: (x: number) => number,
 ): LevelWindow {
   return {
@@ -201,7 +201,7 @@ function stepOf(
   k: number,
   found: StepsAndCreep,
   positions: readonly number[],
-  runs: readonly SinceRunInfo[],
+  runs: readonly RunInfo[],
   reference: number,
   ratio: (shift: number) => number,
   marks: readonly SinceMark[],
@@ -246,7 +246,7 @@ function creepOf(found: StepsAndCreep, scale: 'log' | 'raw', level: number): Sin
 }
 
 /** Level marks on runs after the reference that match the metric, oldest first. */
-function marksInRange(name: string, runs: readonly SinceRunInfo[], reference: number): SinceMark[] {
+function marksInRange(name: string, runs: readonly RunInfo[], reference: number): SinceMark[] {
   const marks: SinceMark[] = [];
   for (let i = reference + 1; i < runs.length; i++) {
     for (const mark of runs[i]!.marks ?? []) {

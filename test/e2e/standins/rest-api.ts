@@ -1,7 +1,8 @@
 /**
  * A loopback stand-in for the parts of the GitHub REST API the action calls ("List artifacts for
  * a repository", "Download an artifact" answering 302 with a storage Location, "List labels for an
- * issue", "List/Create/Update issue comment", "Delete an artifact"): exact-name artifact filter, newest-first listing,
+ * issue", "List/Create/Update issue comment", "Delete an artifact", "List repository tags", "Get a
+ * commit"): exact-name artifact filter, newest-first listing,
  * per_page/page pagination, and fault injection (status, headers, times) so retries can be
  * counted. Every request is held to GitHub's published REST description and every answer to its
  * documented response schema (openapi.ts); a mismatch, or a request the description does not
@@ -75,6 +76,9 @@ export interface RestState {
   comments: Map<number, StoredComment[]>;
   /** Labels each issue or pull request carries now, by number. */
   labels: Map<number, string[]>;
+  /** The repository's tags, in the order "List repository tags" gives them, and commit times by sha. */
+  tags: { name: string; sha: string }[];
+  commitTimes: Map<string, string>;
   /** Requests and answers that do not match GitHub's REST description (should stay empty). */
   violations: string[];
   /**
@@ -142,6 +146,8 @@ function artifactJson(a: StoredArtifact, base: string, owner: string, repo: stri
 function neededPermission(method: string, template: string): [string, 'read' | 'write'][] | undefined {
   const level = method === 'GET' ? 'read' : 'write';
   if (template.startsWith('/repos/{owner}/{repo}/actions/artifacts')) return [['actions', level]];
+  if (template === '/repos/{owner}/{repo}/tags' || template.startsWith('/repos/{owner}/{repo}/commits/'))
+    return [['contents', level]];
   if (template.startsWith('/repos/{owner}/{repo}/issues/'))
     return [
       ['issues', level],
@@ -182,12 +188,46 @@ function labelJson(name: string, i: number, base: string, owner: string, repo: s
   };
 }
 
+function tagJson(t: { name: string; sha: string }, base: string, owner: string, repo: string): unknown {
+  return {
+    name: t.name,
+    commit: { sha: t.sha, url: `${base}/repos/${owner}/${repo}/commits/${t.sha}` },
+    zipball_url: `${base}/repos/${owner}/${repo}/zipball/refs/tags/${encodeURIComponent(t.name)}`,
+    tarball_url: `${base}/repos/${owner}/${repo}/tarball/refs/tags/${encodeURIComponent(t.name)}`,
+    node_id: `REF_${t.name}`,
+  };
+}
+
+function commitJson(sha: string, date: string, base: string, owner: string, repo: string): unknown {
+  const person = { name: 'Monalisa Octocat', email: 'octocat@github.com', date };
+  return {
+    url: `${base}/repos/${owner}/${repo}/commits/${sha}`,
+    sha,
+    node_id: `C_${sha.slice(0, 8)}`,
+    html_url: `https://github.com/${owner}/${repo}/commit/${sha}`,
+    comments_url: `${base}/repos/${owner}/${repo}/commits/${sha}/comments`,
+    commit: {
+      url: `${base}/repos/${owner}/${repo}/git/commits/${sha}`,
+      author: person,
+      committer: person,
+      message: 'Release',
+      comment_count: 0,
+      tree: { sha: '0'.repeat(40), url: `${base}/repos/${owner}/${repo}/git/trees/${'0'.repeat(40)}` },
+    },
+    author: null,
+    committer: null,
+    parents: [],
+  };
+}
+
 export async function startRestStandin(initial: Partial<RestState> = {}): Promise<RestStandin> {
   const api = githubApiCheck();
   const state: RestState = {
     artifacts: [],
     comments: new Map(),
     labels: new Map(),
+    tags: [],
+    commitTimes: new Map(),
     violations: [],
     tokenPermissions: new Map(),
     faults: [],
@@ -287,6 +327,14 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
       res.writeHead(302, { location: a.location ?? `${base}/blob/${a.id}?sig=standin` });
       res.end();
       return;
+    }
+    if (method === 'GET' && rest === '/tags')
+      return send(res, 200, slice(state.tags.map((t) => tagJson(t, base, owner, repo))));
+    d = /^\/commits\/([0-9a-f]{40})$/.exec(rest);
+    if (method === 'GET' && d) {
+      const date = state.commitTimes.get(d[1]!);
+      if (date === undefined) return send(res, 404, { message: 'Not Found' });
+      return send(res, 200, commitJson(d[1]!, date, base, owner, repo));
     }
     d = /^\/issues\/(\d+)\/labels$/.exec(rest);
     if (d && method === 'GET') {

@@ -4,7 +4,7 @@
  * by each step's factor from its run on. Seeded (mulberry32 and Box-Muller, test/model/random.ts),
  * so every figure a test asserts is repeatable.
  */
-import type { SinceHistory, SinceRunInfo } from '../../../src/gate/since/since-history.js';
+import type { History, RunInfo } from '../../../src/history/history.js';
 import { seededNormal, seededUniform } from '../../model/random.js';
 
 /** How a metric's noise is drawn: log-normal, Student-t (3 df), log-normal with slow-run outliers, or load regimes. */
@@ -29,17 +29,17 @@ export interface HistoryPlan {
   seed: number;
   metrics: Record<string, MetricPlan>;
   /** Runs (by offset after the reference) whose run info carries these extras. */
-  runInfo?: Record<number, Partial<SinceRunInfo>>;
+  runInfo?: Record<number, Partial<RunInfo>>;
 }
 
 /** The reference run's id in a generated history. */
 export const referenceId = (plan: HistoryPlan): string => `run-${plan.before}`;
 
 /** A history of plan.before runs up to and including the reference and plan.after runs after it. */
-export function generateHistory(plan: HistoryPlan): SinceHistory {
+export function generateHistory(plan: HistoryPlan): History {
   const total = plan.before + plan.after;
   const reference = plan.before - 1;
-  const runs: SinceRunInfo[] = Array.from({ length: total }, (_, i) => ({
+  const runs: RunInfo[] = Array.from({ length: total }, (_, i) => ({
     id: `run-${i + 1}`,
     sha: (0x1000000 + i * 7919).toString(16).padStart(7, '0') + 'abc',
     time: new Date(Date.UTC(2026, 0, 1, 0, 0, 0) + i * 3_600_000).toISOString(),

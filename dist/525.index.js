@@ -1,8 +1,8 @@
-export const id = 586;
-export const ids = [586];
+export const id = 525;
+export const ids = [525];
 export const modules = {
 
-/***/ 7586:
+/***/ 6525:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -256,6 +256,37 @@ async function proxyFetch(baseUrl) {
     return ((url, init) => undici.fetch(url, { ...init, dispatcher }));
 }
 
+;// CONCATENATED MODULE: ./src/github/release-api.ts
+const release_api_obj = (v) => (typeof v === 'object' && v !== null ? v : {});
+/**
+ * @example await createReleaseApi(() => octokit(), { owner: 'acme', repo: 'router' }).listTags() // [{ name: 'v1.2.0', sha: '…' }]
+ */
+function createReleaseApi(client, repo) {
+    return {
+        async listTags(maxPages = 10) {
+            const tags = [];
+            for (let page = 1; page <= maxPages; page++) {
+                const res = await (await client()).request('GET /repos/{owner}/{repo}/tags', { ...repo, per_page: 100, page });
+                const items = Array.isArray(res.data) ? res.data : [];
+                for (const t of items) {
+                    const name = release_api_obj(t).name;
+                    const sha = release_api_obj(release_api_obj(t).commit).sha;
+                    if (typeof name === 'string' && typeof sha === 'string')
+                        tags.push({ name, sha });
+                }
+                if (items.length < 100)
+                    break;
+            }
+            return tags;
+        },
+        async commitTime(sha) {
+            const res = await (await client()).request('GET /repos/{owner}/{repo}/commits/{ref}', { ...repo, ref: sha });
+            const date = release_api_obj(release_api_obj(release_api_obj(res.data).commit).committer).date;
+            return typeof date === 'string' ? date : undefined;
+        },
+    };
+}
+
 ;// CONCATENATED MODULE: ./src/github/octokit-api.ts
 /**
  * The real GitHubApi over octokit — the action's one HTTP client: @octokit/core with
@@ -268,6 +299,7 @@ async function proxyFetch(baseUrl) {
  * (proxy-fetch.ts); without one, through Node's own fetch, which starts far faster than the
  * proxy-capable client. Intervals are tunable so tests can run the same code with millisecond waits.
  */
+
 
 
 
@@ -428,6 +460,7 @@ function createOctokitApi(target) {
         },
         // The branch store's calls, through this same client.
         gitData: createGitData(octokit, repo),
+        release: createReleaseApi(octokit, repo),
     };
 }
 

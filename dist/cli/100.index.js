@@ -1,8 +1,8 @@
-export const id = 29;
-export const ids = [29];
+export const id = 100;
+export const ids = [100];
 export const modules = {
 
-/***/ 6029:
+/***/ 1100:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -511,6 +511,129 @@ const HTML_SCRIPT = `
 })();
 `;
 
+// EXTERNAL MODULE: ./src/report/since-order.ts
+var since_order = __webpack_require__(3801);
+// EXTERNAL MODULE: ./src/report/since-words.ts
+var since_words = __webpack_require__(3056);
+;// CONCATENATED MODULE: ./src/report/html-since.ts
+
+
+
+
+
+
+
+
+const html_since_W = 560;
+const html_since_H = 200;
+const html_since_M = { top: 14, right: 18, bottom: 40, left: 72 };
+/** Metrics drawn at most; the rest are listed (a page of thousands of charts helps no one). */
+const MAX_CHARTS = 60;
+/**
+ * An SVG of one metric's path from the reference to now: every recorded value from the first
+ * run of the level-then window to the newest run, the reference as a vertical line, the level
+ * then and the level now as dashed lines over their windows, and each step as a marked vertical
+ * line with a tooltip (its size, first run, pull request). The y axis is logarithmic when the
+ * review compared ratios. Returns '' when the history holds none of the metric's runs.
+ */
+function sincePathChart(m, report, history) {
+    const ids = new Map(history.runs.map((r, i) => [r.id, i]));
+    const from = ids.get(m.then?.from ?? report.reference.run) ?? ids.get(report.reference.run);
+    const to = ids.get(report.latest.run);
+    const column = history.columns.get(m.name);
+    if (from === undefined || to === undefined || column === undefined)
+        return '';
+    const pts = [];
+    for (let i = from; i <= to; i++) {
+        const value = column.values[i];
+        if (value !== undefined && Number.isFinite(value))
+            pts.push({ index: i, value, run: history.runs[i] });
+    }
+    if (pts.length === 0)
+        return '';
+    const levels = [m.then?.level, m.now?.level].filter((v) => v !== undefined && Number.isFinite(v));
+    const all = [...pts.map((p) => p.value), ...levels];
+    const log = m.scale === 'log' && all.every((v) => v > 0);
+    const y = valueScale(log, Math.min(...all), Math.max(...all), [html_since_H - html_since_M.bottom, html_since_M.top]);
+    const x = (0,d3_scale/* scaleLinear */.m4)()
+        .domain([from, Math.max(from + 1, to)])
+        .range([html_since_M.left, html_since_W - html_since_M.right]);
+    const unit = m.unit === undefined ? '' : (0,report_escape/* escapeHtml */.Z)(m.unit, 40);
+    const parts = [];
+    const vertical = (index, cls, tip) => svgElement('line', { class: cls, x1: x(index), x2: x(index), y1: html_since_M.top, y2: html_since_H - html_since_M.bottom }, tip);
+    const reference = ids.get(report.reference.run);
+    if (reference !== undefined)
+        parts.push(vertical(reference, 'since-ref', `reference: run ${(0,report_escape/* escapeHtml */.Z)(report.reference.run, 100)}`));
+    for (const [window, name] of [
+        [m.then, 'then'],
+        [m.now, 'now'],
+    ]) {
+        const a = window === undefined ? undefined : ids.get(window.from);
+        const b = window === undefined ? undefined : ids.get(window.to);
+        if (window === undefined || a === undefined || b === undefined)
+            continue;
+        const tip = `level ${name}: ${(0,report_escape/* escapeHtml */.Z)((0,format/* formatValue */.Fl)(window.level))} ${unit} (median of ${window.n} runs)`;
+        parts.push(svgElement('line', {
+            class: `mean since-${name}`,
+            x1: x(a),
+            x2: x(Math.max(b, a + 0.5)),
+            y1: y(window.level),
+            y2: y(window.level),
+        }, tip));
+    }
+    for (const s of m.steps) {
+        const at = ids.get(s.run);
+        if (at === undefined)
+            continue;
+        const pr = s.pr === undefined ? '' : `, PR #${s.pr}`;
+        const mark = s.mark ? `, ${s.mark.reason}` : '';
+        parts.push(vertical(at, 'since-step', (0,report_escape/* escapeHtml */.Z)(`step ${(0,since_words/* ratioText */.B9)(s.ratio)} from run ${s.run}${pr}${mark}`, 300)));
+        parts.push(textElement({ class: 'note', x: x(at) + 3, y: html_since_M.top + 10 }, (0,report_escape/* escapeHtml */.Z)((0,since_words/* ratioText */.B9)(s.ratio))));
+    }
+    const trace = (0,d3_shape/* line */.n8)()
+        .x((p) => x(p.index))
+        .y((p) => y(p.value));
+    if (pts.length > 1)
+        parts.push(svgElement('path', { class: 'trace', d: trace(pts) ?? '' }));
+    for (const p of pts) {
+        const tip = (0,report_escape/* escapeHtml */.Z)(`run ${p.run.id}${p.run.time ? ` · ${p.run.time}` : ''}: ${(0,format/* formatValue */.Fl)(p.value)} ${m.unit ?? ''}`, 300);
+        parts.push(svgElement('circle', { class: 'point', cx: x(p.index), cy: y(p.value), r: 2.4 }, tip));
+    }
+    const axes = bottomAxis(x, html_since_H - html_since_M.bottom, 'run, from the level-then window to the newest') + leftAxis(y, html_since_M.left, unit || 'value');
+    return chartSvg(html_since_W, html_since_H, `path of ${(0,report_escape/* escapeHtml */.Z)(m.name, 200)} since the reference`, axes + parts.join(''));
+}
+/**
+ * The HTML report's release review section: the headline counts and range, how the reference was
+ * matched, then per metric (worse first; the first MAX_CHARTS that have something to tell) its
+ * sentence and its path chart; quiet metrics are listed by name. Everything from the history is
+ * escaped.
+ */
+function sinceSection(report, history) {
+    const ordered = (0,since_order/* sinceOrder */.v)(report.metrics);
+    const told = ordered.filter(since_order/* noteworthy */.o);
+    const quiet = ordered.filter((m) => !(0,since_order/* noteworthy */.o)(m));
+    const drawn = told.slice(0, MAX_CHARTS).map((m) => {
+        const chart = sincePathChart(m, report, history);
+        const unit = m.unit === undefined ? '' : ` <span class="meta">(${(0,report_escape/* escapeHtml */.Z)(m.unit, 40)})</span>`;
+        return (`<div class="since-metric" data-metric="${(0,report_escape/* escapeHtml */.Z)(m.name, 300)}"><h3><span class="s-${m.status === 'worse' ? 'regressed' : m.status === 'better' ? 'improved' : 'ok'}">${m.status}</span> ${(0,report_escape/* escapeHtml */.Z)(m.name, 300)}${unit}</h3>` +
+            `<p class="reason">${(0,report_escape/* escapeHtml */.Z)((0,since_words/* metricSentence */.I9)(m, report), 1500)}</p>${chart || '<p class="note-text">No values to draw.</p>'}</div>`);
+    });
+    const more = told.length > MAX_CHARTS
+        ? `<p class="note-text">…and ${told.length - MAX_CHARTS} more metrics with changes; see the JSON review.</p>`
+        : '';
+    const rest = quiet.length > 0
+        ? `<p class="meta">Unchanged, new or gone without steps or creep: ${quiet.map((m) => (0,report_escape/* escapeHtml */.Z)(m.name, 300)).join(', ')}.</p>`
+        : '';
+    const note = report.reference.note ? `<p class="report-note">${(0,report_escape/* escapeHtml */.Z)(report.reference.note, 500)}.</p>` : '';
+    return (`<section id="since" class="since"><h2>Release review: ${(0,report_escape/* escapeHtml */.Z)((0,since_words/* statusLine */.Bs)(report))}</h2>` +
+        `<p class="meta">${(0,report_escape/* escapeHtml */.Z)((0,since_words/* rangeLine */.ye)(report, (t) => t), 600)}. Dots are recorded runs; the solid line is the reference, dashed lines the level then and now, red lines the steps.</p>` +
+        note +
+        (told.length === 0 ? '<p>No metric changed level, stepped or crept in this range.</p>' : drawn.join('')) +
+        more +
+        rest +
+        `<p class="legend">${(0,report_escape/* escapeHtml */.Z)(since_words/* EVIDENCE_NOTE */.te)}</p></section>`);
+}
+
 ;// CONCATENATED MODULE: ./src/report/html-style.ts
 /**
  * The report's inline stylesheet. Status colours always come with a word and a shape; print
@@ -549,6 +672,8 @@ svg .cutoff { stroke: var(--warn); stroke-dasharray: 4 3; stroke-width: 1.5; } s
 svg .run-mark { fill: var(--fg); stroke: var(--bg); stroke-width: 1; }
 svg .run-mark.s-regressed { fill: var(--bad); } svg .run-mark.s-improved { fill: var(--good); }
 svg .note { font-size: 11px; paint-order: stroke; stroke: var(--bg); stroke-width: 3px; }
+section.since { border-top: 2px solid var(--line); padding: 1rem 0; } .since-metric h3 { font-size: 1rem; margin: .75rem 0 .25rem; }
+svg .since-ref { stroke: var(--fg); stroke-width: 1.5; } svg .since-step { stroke: var(--bad); stroke-dasharray: 3 2; stroke-width: 1.5; }
 .legend { color: var(--muted); font-size: 12px; margin: .25rem 0 0; }
 footer { color: var(--muted); font-size: 12px; margin-top: 2rem; }
 @media print {
@@ -565,6 +690,7 @@ var report_reason = __webpack_require__(8880);
 // EXTERNAL MODULE: ./src/report/status.ts
 var report_status = __webpack_require__(6934);
 ;// CONCATENATED MODULE: ./src/report/html.ts
+
 
 
 
@@ -663,6 +789,7 @@ function renderHtmlReport(input) {
         shared.length > 0 ? `<h2>Shared moves</h2><ul>${shared.join('')}</ul>` : '',
         LEGEND,
         order.map(({ m, i }) => metricSection(m, i, history, report)).join(''),
+        input.since ? sinceSection(input.since.report, input.since.history) : '',
         `</main><footer>Generated by Bellgate${input.generatedAt ? ` at ${(0,report_escape/* escapeHtml */.Z)(input.generatedAt, 100)}` : ''}. ` +
             `Schema ${(0,report_escape/* escapeHtml */.Z)(report.schema)}.</footer>`,
         `<script>${HTML_SCRIPT}</script></body></html>`,
@@ -674,7 +801,10 @@ function renderHtmlReport(input) {
 var judge_requested_run = __webpack_require__(8370);
 // EXTERNAL MODULE: ./src/cli/paths.ts
 var paths = __webpack_require__(5450);
+// EXTERNAL MODULE: ./src/cli/run/since.ts + 19 modules
+var run_since = __webpack_require__(3041);
 ;// CONCATENATED MODULE: ./src/cli/run/report.ts
+
 
 
 
@@ -688,9 +818,11 @@ var paths = __webpack_require__(5450);
  */
 async function runReport(ctx, options) {
     const { history, report } = await (0,judge_requested_run/* judgeRequestedRun */.v)(ctx, options);
+    const since = options.since === undefined ? undefined : await (0,run_since/* reviewSinceRef */.A)(ctx, options.since, options);
     const html = renderHtmlReport({
         report,
         history,
+        ...(since === undefined ? {} : { since }),
         title: options.title ?? `Bellgate report: ${options.series}`,
         generatedAt: ctx.now().toISOString(),
     });
