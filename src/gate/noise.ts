@@ -27,7 +27,9 @@ const GAUSSIAN_SIDE: TailShape = { nu: Infinity, scale: 1, n: 0 };
  * share a noise shape: the members of one move group (the timings, a configured group), and the
  * remaining timings or other metrics among themselves.
  * - Residuals: each own move minus the median own move of its level, so a level change does not
- *   count as spread and a short new level gets the spread of the whole window.
+ *   count as spread and a short new level gets the spread of the whole window. A calm run takes
+ *   the residuals of the calm baseline runs only (moves.ts runStates), when there are min-runs of
+ *   them; a slow episode those of every run.
  * - Spread: the sample variance of the residuals on n - levels degrees of freedom, moderated by
  *   Smyth's empirical-Bayes prior over the class (variancePrior, moderatedVariance; Smyth 2004),
  *   so 60 runs need not pin each metric's spread alone (their sd is good to about +-9%).
@@ -89,9 +91,14 @@ function residuals(m: MemberMoves): {
   levelRuns: number;
   n: number;
 } {
+  // A calm run is judged against the calm runs when there are min-runs of them; an episode against all.
+  const calmRuns = m.calm.filter((c, r) => c && Number.isFinite(m.own[r]!)).length;
+  const useCalm = m.calmNow && calmRuns >= m.candidate.settings.minRuns;
   const byLevel = m.levels.map((start, k) => {
     const end = m.levels[k + 1] ?? Infinity;
-    return m.own.filter((o, r) => Number.isFinite(o) && m.rows[r]! >= start && m.rows[r]! < end);
+    return m.own.filter(
+      (o, r) => Number.isFinite(o) && m.rows[r]! >= start && m.rows[r]! < end && (!useCalm || m.calm[r]!),
+    );
   });
   const out: number[] = [];
   let levels = 0;
