@@ -1,6 +1,6 @@
 import { median } from 'simple-statistics';
 import { moderatedVariance, variancePrior } from '../model/moderated-variance.js';
-import { halfTailProfile, halfTailShape, pooledTailShape, type TailFit, type TailShape } from '../model/tail-shape.js';
+import { bestOf, halfTailProfile, pooledTailShape, type TailFit, type TailShape } from '../model/tail-shape.js';
 import type { MemberMoves } from './moves.js';
 
 /** A member's noise: the spread of its own moves and the shape of each side of them. */
@@ -81,10 +81,10 @@ export function noiseModel(members: readonly MemberMoves[]): Map<MemberMoves, Me
         else if (e < 0) lower.push(-e / sd);
       }
     });
-    const worse = halfTailShape(upper) ?? GAUSSIAN_SIDE;
-    const better = halfTailShape(lower) ?? GAUSSIAN_SIDE;
     const upperProfile = halfTailProfile(upper);
     const lowerProfile = halfTailProfile(lower);
+    const worse = upperProfile === undefined ? GAUSSIAN_SIDE : bestOf(upperProfile, () => 0);
+    const better = lowerProfile === undefined ? GAUSSIAN_SIDE : bestOf(lowerProfile, () => 0);
     list.forEach((m, j) => {
       const p = parts[j]!;
       const sd = sds[j]!.sd;

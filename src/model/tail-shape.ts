@@ -68,7 +68,7 @@ export interface TailFit {
 }
 
 /** The fit of the grid point k with the highest log-likelihood plus `prior(k)` (ties: the heavier). */
-function bestOf(profile: readonly TailFit[], prior: (k: number) => number): TailShape {
+export function bestOf(profile: readonly TailFit[], prior: (k: number) => number): TailShape {
   let best = profile[0]!;
   let bestScore = -Infinity;
   profile.forEach((f, k) => {
