@@ -3,6 +3,7 @@ import { defaultConfig } from '../../src/config/load.js';
 import { InputError } from '../../src/errors/input-error.js';
 import { runGate } from '../../src/gate/gate.js';
 import { REPORT_SCHEMA } from '../../src/gate/report.js';
+import { sharedReason } from '../../src/report/reason.js';
 import type { History, RunInfo } from '../../src/history/history.js';
 import type { Run } from '../../src/inputs/run.js';
 import { seededNormal } from '../model/random.js';
@@ -358,5 +359,17 @@ describe('calm runs and slow episodes (issue 13: time-clustered slow spells)', (
       expect(report.verdict).not.toBe('regressed');
       expect(report.shared[0]!.episode).toBe(true);
     }
+  });
+});
+
+describe('the words of a held episode (src/report)', () => {
+  it('names the held timings and asks for a re-run; a calm run says nothing of episodes', () => {
+    const base = { name: 'timings', members: 20, move: 0.02, n: 60 };
+    const held = sharedReason({ ...base, status: 'unsettled', episode: true, held: ['time/t03', 'time/t04'] });
+    expect(held).toContain('slow episode');
+    expect(held).toContain('time/t03, time/t04');
+    expect(held).toContain('Re-run');
+    expect(sharedReason({ ...base, status: 'ok' })).not.toContain('episode');
+    expect(sharedReason({ ...base, status: 'ok', episode: true })).toContain('judged against every baseline run');
   });
 });
