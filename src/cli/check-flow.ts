@@ -12,6 +12,7 @@ import { EXIT } from './exit-codes.js';
 import { loadConfig } from '../config/load.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
 import { runsToRead } from '../history/read-window.js';
+import { machineFacts, runnerFingerprint } from '../history/runner-fingerprint.js';
 import { openHistory } from './open-history.js';
 import { resolvePath } from './paths.js';
 import { recordRun } from './record-run.js';
@@ -62,7 +63,9 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
   }
-  const report = runGate({ config, history, run, series: options.series });
+  // This machine's fingerprint: timings are judged against baseline runs of the same runner when there are enough.
+  const runner = runnerFingerprint(ctx.io.env, ctx.io.machine ?? machineFacts());
+  const report = runGate({ config, history, run, series: options.series, runner });
 
   ctx.io.stdout(ensureNewline(render(ctx, report, options.format, options.all)));
   if (mostlyMissing(report.missing)) {

@@ -9,6 +9,7 @@ import type { CommandContext } from './context.js';
 import { loadConfig } from '../config/load.js';
 import { loadRun, type MetricFileOptions } from './load-run.js';
 import { openHistory } from './open-history.js';
+import { machineFacts, runnerFingerprint } from '../history/runner-fingerprint.js';
 import { splitNewest } from './split-newest.js';
 
 export interface RequestedRunOptions extends Partial<MetricFileOptions> {
@@ -30,6 +31,9 @@ export async function judgeRequestedRun(
   const config = await loadConfig(options.config, ctx.io.cwd);
   const opened = await openHistory(ctx, options.history, options.series);
   const metrics = options.metrics;
+  // The runner: the newest recorded run's own fingerprint, or this machine's for metric files.
+  const newest = opened.history.runs.at(-1)?.runner;
+  const runner = metrics === undefined ? newest : runnerFingerprint(ctx.io.env, ctx.io.machine ?? machineFacts());
   const { history, run } =
     metrics === undefined
       ? splitNewest(opened.history, options.history)
@@ -45,5 +49,10 @@ export async function judgeRequestedRun(
             ctx.io.cwd,
           ),
         };
-  return { config, history, run, report: runGate({ config, history, run, series: options.series }) };
+  return {
+    config,
+    history,
+    run,
+    report: runGate({ config, history, run, series: options.series, ...(runner === undefined ? {} : { runner }) }),
+  };
 }

@@ -13,7 +13,7 @@ export const DEFAULT_SETTINGS: Readonly<MetricSettings> = Object.freeze({
   minRuns: 8,
   transform: 'auto',
   ignore: false,
-  aggregate: 'median',
+  aggregate: 'auto',
   changePoints: true,
   sharedMove: true,
 } satisfies MetricSettings);

@@ -3,7 +3,8 @@
 export type Worse = 'higher' | 'lower' | 'both';
 /** `auto`: the log scale for metrics with a time unit, none for the rest. */
 export type Transform = 'auto' | 'none' | 'log';
-export type Aggregate = 'median' | 'mean' | 'min' | 'max';
+/** `auto`: the min for metrics with a time unit, the median for the rest. */
+export type Aggregate = 'auto' | 'median' | 'mean' | 'min' | 'max';
 export type Family = 'none' | 'bonferroni' | 'holm' | 'fdr';
 /** What a run whose shared move is beyond the history (verdict `unsettled`) does to the check. */
 export type UnsettledPolicy = 'pass' | 'block';

@@ -73,6 +73,7 @@ export function runGate(input: GateInput): Report {
   } else {
     for (const s of scored) metrics.push(decide(s, undefined));
   }
+  holdEpisodes(members, metrics, shared);
   const verdict = decideVerdict(metrics, shared, input.accepted === true);
   const report: Report = {
     schema: REPORT_SCHEMA,
@@ -101,4 +102,24 @@ function fdrLevels(tails: readonly number[], alpha: number): number[] {
   const levels = new Array<number>(tails.length);
   order.forEach((index, rank) => (levels[index] = ((rank + 1) * alpha) / tails.length));
   return levels;
+}
+
+/**
+ * In a slow episode (runStates) a timing far out may be the episode's work or a real change, and
+ * one run cannot tell which: like a shared move beyond the history's, it is its own outcome. A
+ * timing that would regress in such a run is held (status ok, named in its group's `held`) and
+ * the group's shared move becomes `unsettled`, which asks for a re-run. Mutates the results.
+ */
+function holdEpisodes(members: readonly MemberMoves[], metrics: MetricResult[], shared: SharedMoveResult[]): void {
+  const calmless = members.filter((m) => !m.calmNow);
+  const episode = new Set(calmless.map((m) => m.candidate.name));
+  for (const g of shared) if (calmless.some((m) => m.group.name === g.name)) g.episode = true;
+  for (const r of metrics) {
+    if (r.status !== 'regressed' || !episode.has(r.name)) continue;
+    const group = shared.find((g) => g.name === r.group);
+    if (group === undefined) continue;
+    r.status = 'ok';
+    group.status = 'unsettled';
+    (group.held ??= []).push(r.name);
+  }
 }

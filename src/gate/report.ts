@@ -112,6 +112,10 @@ export interface SharedMoveResult {
   tail?: number;
   /** The largest shared move of the history, as a relative change. */
   largest?: number;
+  /** This run is a slow episode (several members far out at once; gate.ts holdEpisodes). */
+  episode?: boolean;
+  /** Members that would have regressed but were held because the run is a slow episode. */
+  held?: string[];
 }
 
 /** A metric value this run holds but never judged nor records (a NaN sample, a failed test). */

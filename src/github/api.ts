@@ -6,6 +6,7 @@
 import type { ArtifactApi } from '../history/artifact-store.js';
 import type { GitDataApi } from '../history/branch-api.js';
 import type { ReleaseApi } from './release-api.js';
+import type { RetryTuning } from './retry-after.js';
 
 export interface IssueComment {
   id: number;
@@ -27,15 +28,7 @@ export interface GitHubApi extends ArtifactApi {
   release?: ReleaseApi;
 }
 
-/** Knobs of the retries; tests use tiny intervals. Times in milliseconds. */
-export interface RetryTuning {
-  retries: number;
-  /** Multiplies plugin-retry's backoff steps (1, 4, 9 ... units) and Retry-After seconds. */
-  unitMs: number;
-  /** Time limit of one try of a request (default 30 s). */
-  timeoutMs?: number;
-}
-
+/** The retries of the action's calls. */
 export const DEFAULT_RETRY: RetryTuning = { retries: 3, unitMs: 1000 };
 
 export interface ApiTarget {

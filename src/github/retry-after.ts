@@ -15,7 +15,14 @@
  * which plugin-retry retries like any server error. Registered first, the plugin wraps the request
  * innermost, below both plugins.
  */
-import type { RetryTuning } from './api.js';
+/** Knobs of the retries; tests use tiny intervals. Times in milliseconds. */
+export interface RetryTuning {
+  retries: number;
+  /** Multiplies plugin-retry's backoff steps (1, 4, 9 ... units) and Retry-After seconds. */
+  unitMs: number;
+  /** Time limit of one try of a request (default 30 s). */
+  timeoutMs?: number;
+}
 
 /** Longest wait honoured, in seconds; a longer ask fails now. */
 export const MAX_RETRY_AFTER = 120;

@@ -14,7 +14,7 @@ interface Samples {
 
 /**
  * Folds the readings of several files into one Run. All samples of a name (repeated lines, several
- * files) are aggregated by `aggregateFor(name)` (median | mean | min | max); `count` is how many.
+ * files) are aggregated by `aggregateFor(name)` (auto | median | mean | min | max; auto by the unit); `count` is how many.
  * Units: the first-seen unit of a metric is kept and later samples are converted to it when both
  * are known units of the same dimension (units.ts: 1500 ms joins 2 s as 1.5 s). Meta: the first
  * value of a key wins. notFitted: the union, first reason kept.
@@ -40,7 +40,7 @@ export function collectRun(results: ReadResult[], aggregateFor: (name: string) =
   }
   const metrics: Run['metrics'] = new Map();
   for (const [name, { unit, values, where }] of byName) {
-    const value = aggregateSamples(values, aggregateFor(name));
+    const value = aggregateSamples(values, aggregateFor(name), unit);
     if (!Number.isFinite(value)) {
       throw new InputError(
         `the ${aggregateFor(name)} of the ${values.length} samples of ${JSON.stringify(name)} overflows`,

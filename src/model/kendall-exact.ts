@@ -1,5 +1,3 @@
-import { InputError } from '../errors/input-error.js';
-
 /**
  * P(S >= s) for Kendall's S under no trend and no ties, with S summed over independent blocks of
  * the given lengths (one block: the classic exact tables, Kendall 1975; Gilbert 1987, table A18).
@@ -9,17 +7,17 @@ import { InputError } from '../errors/input-error.js';
  * (the Mahonian numbers over n!). Each factor is a moving sum of width k over the coefficients,
  * so a block costs O(n x pairs); blocks convolve because they are independent. Probabilities are
  * kept (divided by k at each factor), never counts, so n! never overflows.
- * Throws InputError for a length below 1 or a total of pairs over 20,000.
+ * Throws RangeError for a length below 1 or a total of pairs over 20,000.
  * @example kendallExactUpperTail([4], 6) // 1 / 24
  */
 export function kendallExactUpperTail(lengths: readonly number[], s: number): number {
   let total = 0;
   for (const n of lengths) {
     if (!Number.isInteger(n) || n < 1)
-      throw new InputError(`a block length must be a whole number, 1 or more, got ${n}`);
+      throw new RangeError(`a block length must be a whole number, 1 or more, got ${n}`);
     total += (n * (n - 1)) / 2;
   }
-  if (total > 20_000) throw new InputError(`the exact distribution of S is limited to 20,000 pairs, got ${total}`);
+  if (total > 20_000) throw new RangeError(`the exact distribution of S is limited to 20,000 pairs, got ${total}`);
   // dist[i]: P(total inversions = i) over all blocks so far.
   let dist: Float64Array = new Float64Array([1]);
   for (const n of lengths) dist = convolve(dist, inversions(n));

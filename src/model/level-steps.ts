@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { rankSplit } from './rank-split.js';
 import { median } from './median.js';
 import { rankSumTest } from './rank-sum.js';
@@ -37,7 +36,7 @@ export interface LevelStepOptions {
  *    drift is no serial correlation): runs in
  *    load regimes that last a few runs are not independent, and would pass for a level.
  * Ranks make both tests distribution-free: heavy tails and single wild values barely move them.
- * Returns the steps in order. O(n log n) per split tried. Throws InputError for non-finite
+ * Returns the steps in order. O(n log n) per split tried. Throws RangeError for non-finite
  * values or bad options.
  * @example levelSteps([...Array(20).fill(0), ...Array(20).fill(1)].map((x, i) => x + (i % 5) * 0.01)) // [{ at: 20, p: ... }]
  */
@@ -45,11 +44,11 @@ export function levelSteps(values: ArrayLike<number>, options: LevelStepOptions 
   const minSegment = options.minSegment ?? 5;
   const level = options.level ?? 0.001;
   if (!Number.isInteger(minSegment) || minSegment < 1) {
-    throw new InputError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
+    throw new RangeError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
   }
-  if (!(level > 0 && level < 1)) throw new InputError(`a test level must be between 0 and 1, got ${level}`);
+  if (!(level > 0 && level < 1)) throw new RangeError(`a test level must be between 0 and 1, got ${level}`);
   const series = Float64Array.from(values, (x, i) => {
-    if (!Number.isFinite(x)) throw new InputError(`value ${x} at position ${i + 1} is not a finite number`);
+    if (!Number.isFinite(x)) throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
     return x;
   });
   const starts = splitSearch(series, minSegment, level);

@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { kendallExactUpperTail } from './kendall-exact.js';
 import { normalUpperTail } from './special/normal.js';
 
@@ -36,7 +35,7 @@ export const EXACT_PAIRS = 5000;
  * of Kendall (1975) and Gilbert (1987, table A18) give it for small n. `varianceFactor` (at
  * least 1) widens Var(S) for serially correlated values (serialCorrection); the p-value then
  * comes from z.
- * O(sum of n_k^2). Throws InputError for a non-finite value or fewer than 2 values in all.
+ * O(sum of n_k^2). Throws RangeError for a non-finite value or fewer than 2 values in all.
  * The test assumes independent values: serial correlation makes it too eager.
  * @example mannKendall([[1, 2, 3, 4, 5]]).p // 0.0166... (exact: 2 / 120)
  */
@@ -52,7 +51,7 @@ export function mannKendall(blocks: readonly ArrayLike<number>[], varianceFactor
     for (let i = 0; i < m; i++) {
       const x = block[i]!;
       if (!Number.isFinite(x)) {
-        throw new InputError(`value ${x} at position ${i + 1} of block ${b + 1} is not a finite number`);
+        throw new RangeError(`value ${x} at position ${i + 1} of block ${b + 1} is not a finite number`);
       }
     }
     for (let i = 0; i < m; i++) {
@@ -66,9 +65,9 @@ export function mannKendall(blocks: readonly ArrayLike<number>[], varianceFactor
     pairs += (m * (m - 1)) / 2;
     if (m > 1) lengths.push(m);
   });
-  if (pairs === 0) throw new InputError('a trend test needs at least 2 values in one block');
+  if (pairs === 0) throw new RangeError('a trend test needs at least 2 values in one block');
   if (!(varianceFactor >= 1) || !Number.isFinite(varianceFactor)) {
-    throw new InputError(`a variance factor must be a finite number, 1 or more, got ${varianceFactor}`);
+    throw new RangeError(`a variance factor must be a finite number, 1 or more, got ${varianceFactor}`);
   }
   varianceSum *= varianceFactor;
   const z = s === 0 || !(varianceSum > 0) ? 0 : (s - Math.sign(s)) / Math.sqrt(varianceSum);

@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { normalDensity, normalUpperTail } from './special/normal.js';
 
 /**
@@ -7,11 +6,11 @@ import { normalDensity, normalUpperTail } from './special/normal.js';
  * smaller tail q = min(p, 1 - p), then takes Newton steps on Q(z) = q, with Q the directly
  * computed upper tail (no 1 - cdf cancellation), so the result is good to a few ulps across the
  * whole range. The steps are bounded (A&S's start is within 4.5e-4, Newton doubles the digits).
- * Throws InputError unless 0 < p < 1.
+ * Throws RangeError unless 0 < p < 1.
  * @example normalQuantile(0.975) // ≈ 1.959963984540054
  */
 export function normalQuantile(p: number): number {
-  if (!(p > 0 && p < 1)) throw new InputError(`a normal quantile needs a probability between 0 and 1, got ${p}`);
+  if (!(p > 0 && p < 1)) throw new RangeError(`a normal quantile needs a probability between 0 and 1, got ${p}`);
   if (p === 0.5) return 0;
   const q = Math.min(p, 1 - p);
   const t = Math.sqrt(-2 * Math.log(q));

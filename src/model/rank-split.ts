@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { correctedScore, midranks, rankSumVariance } from './ranks.js';
 import { normalDensity, normalUpperTail } from './special/normal.js';
 
@@ -20,13 +19,13 @@ export interface RankSplit {
  * near an end as findable as one in the middle, where the raw statistic of Pettitt (1979)
  * favours the middle. The p-value is that of the largest of the correlated scores (maximumTail:
  * Lausen & Schumacher 1992, or the Bonferroni bound where sharper). One ranking of the
- * whole series serves every split (rank sums by a running sum). O(n log n). Throws InputError
+ * whole series serves every split (rank sums by a running sum). O(n log n). Throws RangeError
  * for non-finite values; with fewer than 2 x minSegment values there is no split and p = 1.
  * @example rankSplit([1, 2, 1, 2, 1, 9, 8, 9, 8, 9], 2).at // 5
  */
 export function rankSplit(values: ArrayLike<number>, minSegment = 1): RankSplit {
   if (!Number.isInteger(minSegment) || minSegment < 1) {
-    throw new InputError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
+    throw new RangeError(`minSegment must be a whole number, 1 or more, got ${minSegment}`);
   }
   const n = values.length;
   const { ranks, ties } = midranks(values);

@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { correctedScore, midranks, rankSumVariance } from './ranks.js';
 import { normalUpperTail } from './special/normal.js';
 
@@ -21,14 +20,14 @@ export interface RankSum {
  * and p = P(|Z| >= |z|) under the normal approximation (Hollander & Wolfe 1999, section 4.1),
  * good for m, n >= 8 and conservative in the far tail. `varianceFactor` widens Var U for
  * serially correlated values (longRunFactor). Distribution-free: heavy tails and
- * outliers change ranks, not the test. O((m + n) log(m + n)). Throws InputError for an empty
+ * outliers change ranks, not the test. O((m + n) log(m + n)). Throws RangeError for an empty
  * sample or a non-finite value; p = 1 when every value is equal.
  * @example rankSumTest([1, 2, 3, 4, 5, 6, 7, 8], [9, 10, 11, 12, 13, 14, 15, 16]).u // 64
  */
 export function rankSumTest(a: ArrayLike<number>, b: ArrayLike<number>, varianceFactor = 1): RankSum {
   const m = a.length;
   const n = b.length;
-  if (m === 0 || n === 0) throw new InputError('a rank-sum test needs values in both samples');
+  if (m === 0 || n === 0) throw new RangeError('a rank-sum test needs values in both samples');
   const joined = new Float64Array(m + n);
   for (let i = 0; i < m; i++) joined[i] = a[i]!;
   for (let i = 0; i < n; i++) joined[m + i] = b[i]!;

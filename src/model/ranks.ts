@@ -1,5 +1,3 @@
-import { InputError } from '../errors/input-error.js';
-
 /** Midranks of a sample and the tie term its rank tests need. */
 export interface Ranks {
   /** Rank 1..n of each value in input order; tied values share their mean rank. */
@@ -10,14 +8,14 @@ export interface Ranks {
 
 /**
  * Midranks of the values (ties share the mean of the ranks they span) and the tie term
- * sum (t^3 - t) of the rank-sum variance. O(n log n). Throws InputError for a non-finite value.
+ * sum (t^3 - t) of the rank-sum variance. O(n log n). Throws RangeError for a non-finite value.
  * @example midranks([10, 30, 20, 20]).ranks // Float64Array [1, 4, 2.5, 2.5]
  */
 export function midranks(values: ArrayLike<number>): Ranks {
   const n = values.length;
   for (let i = 0; i < n; i++) {
     if (!Number.isFinite(values[i]!))
-      throw new InputError(`value ${values[i]} at position ${i + 1} is not a finite number`);
+      throw new RangeError(`value ${values[i]} at position ${i + 1} is not a finite number`);
   }
   const order = Array.from({ length: n }, (_, i) => i).sort((a, b) => values[a]! - values[b]!);
   const ranks = new Float64Array(n);

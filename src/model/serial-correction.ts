@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { midranks } from './ranks.js';
 
 /**
@@ -9,7 +8,7 @@ import { midranks } from './ranks.js';
  * and Var(S) multiplied by it. Hamed & Rao add every lag significant at 5% (|rho_k| > 1.96 /
  * sqrt n); here the sum stops at the first lag that is not (as longRunFactor, which says why). CI timings come in load regimes that last a few runs; such runs are not
  * independent, and the plain test would call their drift a trend. The factor is kept at 1 or more
- * (a negative correlation does not make the test bolder). O(n^2). Throws InputError for
+ * (a negative correlation does not make the test bolder). O(n^2). Throws RangeError for
  * non-finite values; 1 for fewer than 3 values.
  * @example serialCorrection([1, 1, 1, 0, 0, 0, 1, 1, 1, 0, 0, 0, 1, 1, 1, 0, 0, 0]) // > 1
  */
@@ -18,7 +17,7 @@ export function serialCorrection(detrended: ArrayLike<number>): number {
   if (n < 3) {
     for (let i = 0; i < n; i++) {
       if (!Number.isFinite(detrended[i]!))
-        throw new InputError(`value ${detrended[i]} at position ${i + 1} is not a finite number`);
+        throw new RangeError(`value ${detrended[i]} at position ${i + 1} is not a finite number`);
     }
     return 1;
   }
@@ -49,7 +48,7 @@ export function serialCorrection(detrended: ArrayLike<number>): number {
  * process, and would cancel the short ones (the truncation of Geyer 1992, "Practical Markov chain
  * Monte Carlo", in its simplest form).
  * A rank test of two long segments of such values has its variance widened by about this factor.
- * Kept at 1 or more. O(n^2 / 4). Throws InputError for non-finite values; 1 for fewer than 8 values.
+ * Kept at 1 or more. O(n^2 / 4). Throws RangeError for non-finite values; 1 for fewer than 8 values.
  * @example longRunFactor([1, 1, 1, 0, 0, 0, 1, 1, 1, 0, 0, 0, 1, 1, 1, 0, 0, 0]) // > 1
  */
 export function longRunFactor(residuals: ArrayLike<number>): number {

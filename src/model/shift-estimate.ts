@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { normalQuantile } from './normal-quantile.js';
 
 /** The Hodges-Lehmann shift between two samples with its confidence interval. */
@@ -18,22 +17,22 @@ export interface ShiftEstimate {
  *   C = mn/2 - z_(1-a/2) sqrt(mn(m + n + 1)/12)   (normal approximation, rounded down),
  * the bounds are the C-th smallest and the C-th largest difference. On the log scale, exp(shift)
  * is the ratio of the levels of b and a. Resistant to outliers (a few wild runs barely move it).
- * O(mn log mn). Throws InputError for an empty sample, a non-finite value or a level outside (0, 1).
+ * O(mn log mn). Throws RangeError for an empty sample, a non-finite value or a level outside (0, 1).
  * @example shiftEstimate([1, 2, 3], [11, 12, 13]).shift // 10
  */
 export function shiftEstimate(a: ArrayLike<number>, b: ArrayLike<number>, confidence = 0.95): ShiftEstimate {
   const m = a.length;
   const n = b.length;
-  if (m === 0 || n === 0) throw new InputError('a shift estimate needs values in both samples');
+  if (m === 0 || n === 0) throw new RangeError('a shift estimate needs values in both samples');
   if (!(confidence > 0 && confidence < 1)) {
-    throw new InputError(`a confidence level must be between 0 and 1, got ${confidence}`);
+    throw new RangeError(`a confidence level must be between 0 and 1, got ${confidence}`);
   }
   const differences = new Float64Array(m * n);
   for (let i = 0; i < m; i++) {
     const x = a[i]!;
     for (let j = 0; j < n; j++) {
       const d = b[j]! - x;
-      if (!Number.isFinite(d)) throw new InputError('a shift estimate needs finite values in both samples');
+      if (!Number.isFinite(d)) throw new RangeError('a shift estimate needs finite values in both samples');
       differences[i * n + j] = d;
     }
   }

@@ -54,14 +54,68 @@ function scaleEquationRoot(d: readonly number[], nu: number, start: number): num
  * @example halfTailShape(Array.from({ length: 400 }, (_, i) => ...gaussian draws)).nu // large
  */
 export function halfTailShape(deviations: readonly number[]): TailShape | undefined {
+  const profile = halfTailProfile(deviations);
+  if (profile === undefined) return undefined;
+  return bestOf(profile, () => 0);
+}
+
+/** One point of a half-t profile: a nu of DOF_GRID, its maximum-likelihood scale and log-likelihood. */
+export interface TailFit {
+  nu: number;
+  scale: number;
+  logLik: number;
+  n: number;
+}
+
+/** The fit of the grid point k with the highest log-likelihood plus `prior(k)` (ties: the heavier). */
+export function bestOf(profile: readonly TailFit[], prior: (k: number) => number): TailShape {
+  let best = profile[0]!;
+  let bestScore = -Infinity;
+  profile.forEach((f, k) => {
+    const score = f.logLik + prior(k);
+    if (score > bestScore + 1e-9) {
+      bestScore = score;
+      best = f;
+    }
+  });
+  return { nu: best.nu, scale: best.scale, n: best.n };
+}
+
+/**
+ * The half-t tail of one metric's deviations, partially pooled with its class's (the metrics of
+ * one noise shape): nu is the point of DOF_GRID maximising the metric's own profile log-likelihood
+ * plus `weight` x (n / n_class) x the class's, so the class's evidence counts as `weight` times
+ * the metric's own number of deviations (a power prior: Ibrahim & Chen 2000, "Power prior
+ * distributions for regression models", Statistical Science 15); the scale is the class's at that
+ * nu (the deviations are already in units of each metric's moderated sd, so a scale of the
+ * metric's own would undo the moderation). A metric with a slow mode of its own (a parser that
+ * sometimes runs 50% slower) gets its heavy tail, and the others are no longer made Cauchy-like by
+ * it; 60 runs alone never decide. Undefined when the metric's side cannot be fitted.
+ * @example pooledTailShape(ownSide, halfTailProfile(classSide), 3)?.nu // 4
+ */
+export function pooledTailShape(
+  own: readonly number[],
+  pooled: readonly TailFit[] | undefined,
+  weight: number,
+): TailShape | undefined {
+  const profile = halfTailProfile(own);
+  if (profile === undefined) return undefined;
+  if (pooled === undefined) return bestOf(profile, () => 0);
+  const share = (weight * profile[0]!.n) / pooled[0]!.n;
+  const chosen = bestOf(profile, (k) => share * pooled[k]!.logLik);
+  const k = DOF_GRID.indexOf(chosen.nu);
+  return { ...chosen, scale: pooled[k]!.scale };
+}
+
+/** The profile of halfTailShape: every nu of DOF_GRID with its scale and log-likelihood. */
+export function halfTailProfile(deviations: readonly number[]): TailFit[] | undefined {
   const d = deviations.filter((x) => x > 0 && Number.isFinite(x));
   const n = d.length;
   if (n < 3) return undefined;
   let squares = 0;
   for (const x of d) squares += x * x;
   if (!(squares > 0)) return undefined;
-  let best: TailShape | undefined;
-  let bestLik = -Infinity;
+  const out: TailFit[] = [];
   // Each nu's scale starts from the one before it (a heavier nu), which is close.
   let start = Math.log(squares / n);
   for (const nu of DOF_GRID) {
@@ -73,10 +127,7 @@ export function halfTailShape(deviations: readonly number[]): TailShape | undefi
       const t = x / scale;
       lik += nu === Infinity ? -0.5 * t * t : (-(nu + 1) / 2) * Math.log1p((t * t) / nu);
     }
-    if (lik > bestLik + 1e-9) {
-      bestLik = lik;
-      best = { nu, scale, n };
-    }
+    out.push({ nu, scale, logLik: lik, n });
   }
-  return best;
+  return out;
 }

@@ -1,4 +1,3 @@
-import { InputError } from '../errors/input-error.js';
 import { normalQuantile } from './normal-quantile.js';
 
 /** One block of a series: values at positions (e.g. run numbers), in time order. */
@@ -43,7 +42,7 @@ export const MAX_SLOPE_PAIRS = 20_000_000;
  * `maxLag` keeps only pairs close in the series: a step then touches few of the slopes, and their
  * median stays near the local trend (the interval is not meant for that case).
  * The interval is NaN where C leaves no slope on a side. Breakdown point about 29%: outliers move
- * it little. O(P log P) time and 8P bytes for P pairs; throws InputError over MAX_SLOPE_PAIRS,
+ * it little. O(P log P) time and 8P bytes for P pairs; throws RangeError over MAX_SLOPE_PAIRS,
  * for non-finite input, mismatched lengths, or no pair with distinct positions.
  * @example theilSen([{ at: [1, 2, 3, 4], values: [1, 3, 2, 4] }]).slope // 0.75
  */
@@ -51,29 +50,26 @@ export function theilSen(blocks: readonly TrendBlock[], options: TheilSenOptions
   const confidence = options.confidence ?? 0.95;
   const maxLag = options.maxLag ?? Infinity;
   if (!(confidence > 0 && confidence < 1)) {
-    throw new InputError(`a confidence level must be between 0 and 1, got ${confidence}`);
+    throw new RangeError(`a confidence level must be between 0 and 1, got ${confidence}`);
   }
   let total = 0;
   let varianceSum = 0;
   blocks.forEach((block, b) => {
     const m = block.values.length;
     if (block.at.length !== m) {
-      throw new InputError(`block ${b + 1} has ${block.at.length} positions for ${m} values`);
+      throw new RangeError(`block ${b + 1} has ${block.at.length} positions for ${m} values`);
     }
     for (let i = 0; i < m; i++) {
       if (!Number.isFinite(block.values[i]!) || !Number.isFinite(block.at[i]!)) {
-        throw new InputError(`block ${b + 1}, position ${i + 1}: value and position must be finite numbers`);
+        throw new RangeError(`block ${b + 1}, position ${i + 1}: value and position must be finite numbers`);
       }
     }
     total += maxLag >= m ? (m * (m - 1)) / 2 : maxLag * m - (maxLag * (maxLag + 1)) / 2;
     varianceSum += (m * (m - 1) * (2 * m + 5)) / 18;
   });
   if (total > MAX_SLOPE_PAIRS) {
-    throw new InputError(
-      `a Theil-Sen slope over ${total} pairs is more than this build computes (${MAX_SLOPE_PAIRS})`,
-      {
-        fix: 'review a shorter range of runs',
-      },
+    throw new RangeError(
+      `a Theil-Sen slope over ${total} pairs is more than this build computes (${MAX_SLOPE_PAIRS}): review a shorter range of runs`,
     );
   }
   const slopes = new Float64Array(total);
@@ -88,7 +84,7 @@ export function theilSen(blocks: readonly TrendBlock[], options: TheilSenOptions
       }
     }
   }
-  if (count === 0) throw new InputError('a Theil-Sen slope needs two values at different positions');
+  if (count === 0) throw new RangeError('a Theil-Sen slope needs two values at different positions');
   const sorted = slopes.subarray(0, count).sort();
   const half = count >> 1;
   const slope = count % 2 === 1 ? sorted[half]! : (sorted[half - 1]! + sorted[half]!) / 2;

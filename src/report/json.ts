@@ -86,6 +86,8 @@ function shared(s: SharedMoveResult): Json {
     ...extras([
       ['tail', s.tail === undefined ? undefined : num(s.tail)],
       ['largest', s.largest === undefined ? undefined : num(s.largest)],
+      ['episode', s.episode === true ? true : undefined],
+      ['held', s.held === undefined ? undefined : [...s.held]],
     ]),
     reason: sharedReason(s),
   };

@@ -152,12 +152,21 @@ export function sharedReason(s: SharedMoveResult): string {
     return `shared move ${formatChange(s.move)} of ${s.members} metrics; only ${s.n} baseline runs to judge it against`;
   const largest = s.largest === undefined ? '' : ` (the largest of ${s.n} baseline runs: ${formatChange(s.largest)})`;
   const tail = s.tail === undefined ? '' : `, tail ${formatNumber(s.tail, 3)}`;
+  if (s.held !== undefined && s.held.length > 0)
+    return (
+      `a slow episode: several metrics of ${s.name} were far out at once, each by its own amount (shared move ${formatChange(s.move)}); ` +
+      `${s.held.join(', ')} would have regressed, but one run in such a spell cannot tell the spell from a change. Re-run the check (a calm run that shows the same move confirms it)`
+    );
+  const episode =
+    s.episode === true
+      ? '; a slow episode (several metrics far out at once): judged against every baseline run, so less is visible'
+      : '';
   if (s.status === 'unsettled')
     return (
       `every metric of ${s.name} moved together by ${formatChange(s.move)}, beyond what the history has shown${largest}${tail}: ` +
       'a slower runner, or a change that slowed everything; one run cannot tell. Re-run the check (a second run with the same move confirms the change), or record a baseline run on the same runner'
     );
-  return `shared move ${formatChange(s.move)} of ${s.members} metrics, within what the history has shown${largest}${tail}`;
+  return `shared move ${formatChange(s.move)} of ${s.members} metrics, within what the history has shown${largest}${tail}${episode}`;
 }
 
 /**

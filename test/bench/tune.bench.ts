@@ -31,7 +31,7 @@ afterAll(() => {
 
 /** The config tune writes for a scenario's history, and the setting it recommended. */
 function writtenConfig(scenario: Scenario): { yaml: string; setting: TuneSetting; blind: boolean } {
-  const result = tuneHistory({ config: defaultConfig(), history: toHistory(scenario.history) });
+  const result = tuneHistory({ config: defaultConfig(), history: toHistory(scenario.history, defaultConfig()) });
   const r = result.recommendation!;
   const s = r.setting;
   const yaml = applyConfigEdit('', 'bellgate.yml', {

@@ -20,7 +20,7 @@ describe('parseConfig: accepted keys', () => {
         minRuns: 8,
         transform: 'auto',
         ignore: false,
-        aggregate: 'median',
+        aggregate: 'auto',
         changePoints: true,
         sharedMove: true,
       });

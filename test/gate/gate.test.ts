@@ -3,6 +3,7 @@ import { defaultConfig } from '../../src/config/load.js';
 import { InputError } from '../../src/errors/input-error.js';
 import { runGate } from '../../src/gate/gate.js';
 import { REPORT_SCHEMA } from '../../src/gate/report.js';
+import { sharedReason } from '../../src/report/reason.js';
 import type { History, RunInfo } from '../../src/history/history.js';
 import type { Run } from '../../src/inputs/run.js';
 import { seededNormal } from '../model/random.js';
@@ -302,5 +303,73 @@ describe('runGate: detectable (issue 13 item 6)', () => {
       if (slowed.metrics.find((m) => m.name === 'time/t05')!.status === 'regressed') caught++;
     }
     expect(caught / trials).toBeGreaterThanOrEqual(0.8);
+  });
+});
+
+describe('calm runs and slow episodes (issue 13: time-clustered slow spells)', () => {
+  // 20 timings with 1% own and 1% shared noise; one history run in four carries a spell that slows
+  // a block of 8 timings by 30-60% each (as the recorded corpus shows), the rest not at all.
+  function spells(seed: number) {
+    const normal = seededNormal(seed);
+    const names = Array.from({ length: 20 }, (_, j) => `time/t${String(j).padStart(2, '0')}`);
+    const spell = names.map((_, j) => 1.3 + 0.03 * (j % 11));
+    const draw = (episode: boolean, extra: Record<string, number> = {}): number[] => {
+      const shared = 0.01 * normal();
+      const start = 2 + (Math.floor(10 * Math.abs(normal())) % 10);
+      return names.map(
+        (n, j) =>
+          (10 + j) *
+          Math.exp(shared + 0.01 * normal()) *
+          (episode && j >= start && j < start + 8 ? spell[j]! : 1) *
+          (extra[n] ?? 1),
+      );
+    };
+    const columns = new Map(names.map((n) => [n, { unit: 'ms', values: [] as number[] }]));
+    const infos: RunInfo[] = [];
+    for (let i = 0; i < 60; i++) {
+      infos.push({ id: `run-${i + 1}` });
+      draw(i % 4 === 3).forEach((v, j) => columns.get(names[j]!)!.values.push(v));
+    }
+    const run = (values: number[]): Run => ({
+      metrics: new Map(names.map((n, j) => [n, { value: values[j]!, unit: 'ms', count: 1 }])),
+      meta: new Map(),
+    });
+    return { history: { series: 'main', runs: infos, columns } as History, draw, run };
+  }
+
+  it('a calm run is judged against the calm runs: +10% on one timing with 1% noise is caught', () => {
+    const { history, draw, run } = spells(21);
+    const report = runGate({
+      config: defaultConfig(),
+      history,
+      run: run(draw(false, { 'time/t05': 1.1 })),
+      series: 'main',
+    });
+    expect(report.metrics.filter((m) => m.status === 'regressed').map((m) => m.name)).toEqual(['time/t05']);
+    // the calm runs' spread, not the spells': about the 1% own noise (common practice: within a factor 2)
+    const sd = report.metrics.find((m) => m.name === 'time/t05')!.baseline!.sd;
+    expect(sd).toBeGreaterThan(0.005);
+    expect(sd).toBeLessThan(0.02);
+  });
+
+  it('a run in a spell is held, not regressed: unsettled, naming the timings it held', () => {
+    const { history, draw, run } = spells(22);
+    for (let k = 0; k < 20; k++) {
+      const report = runGate({ config: defaultConfig(), history, run: run(draw(true)), series: 'main' });
+      expect(report.verdict).not.toBe('regressed');
+      expect(report.shared[0]!.episode).toBe(true);
+    }
+  });
+});
+
+describe('the words of a held episode (src/report)', () => {
+  it('names the held timings and asks for a re-run; a calm run says nothing of episodes', () => {
+    const base = { name: 'timings', members: 20, move: 0.02, n: 60 };
+    const held = sharedReason({ ...base, status: 'unsettled', episode: true, held: ['time/t03', 'time/t04'] });
+    expect(held).toContain('slow episode');
+    expect(held).toContain('time/t03, time/t04');
+    expect(held).toContain('Re-run');
+    expect(sharedReason({ ...base, status: 'ok' })).not.toContain('episode');
+    expect(sharedReason({ ...base, status: 'ok', episode: true })).toContain('judged against every baseline run');
   });
 });

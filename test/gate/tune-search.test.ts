@@ -15,7 +15,10 @@ import { sharedRunner, simulatedProject } from '../noise/simulate.js';
 
 describe('the replay plan', () => {
   it('injects every shift size into every metric evenly, one metric a call, never into the first min-runs runs', () => {
-    const history = toHistory(sharedRunner({ seed: 5, timings: 7, history: 40, clean: 0, regressed: 0 }).history);
+    const history = toHistory(
+      sharedRunner({ seed: 5, timings: 7, history: 40, clean: 0, regressed: 0 }).history,
+      defaultConfig(),
+    );
     const config = defaultConfig();
     const plan = replayPlan(config, history);
     expect(plan.runs[0]).toBe(config.defaults.minRuns);
@@ -43,6 +46,7 @@ describe('a lasting step of the history is not a false alarm', () => {
         ['spike', { value: i === 20 ? 118 : 100, unit: 'ms' }],
       ]),
     })),
+    defaultConfig(),
   );
   it('a change the next 5 runs keep holds; a one-run spike, or one too near the end to tell, does not', () => {
     // Computed by hand: centre 118 / 1.18 = 100; the next five are 118, 18% above it (>= 9%).
@@ -55,7 +59,7 @@ describe('a lasting step of the history is not a false alarm', () => {
 describe('rescoring a replay at stricter thresholds is the gate set exactly so', () => {
   it('false alarms, steps and catches of holm at 0.5% and family none at cutoff 1e-3 match the gate run at each', () => {
     const scenario = sharedRunner({ seed: 7, timings: 10, history: 30, clean: 0, regressed: 0 });
-    const history = toHistory(scenario.history);
+    const history = toHistory(scenario.history, defaultConfig());
     const config = defaultConfig();
     const plan = replayPlan(config, history);
     const own = settingOf(config);
@@ -79,7 +83,7 @@ describe('rescoring a replay at stricter thresholds is the gate set exactly so',
 
 describe('tune on a small simulated project (issue 13 shape, 40 history runs)', () => {
   const scenario = simulatedProject({ seed: 21, history: 40, clean: 100, regressed: 100 });
-  const result = tuneHistory({ config: defaultConfig(), history: toHistory(scenario.history) });
+  const result = tuneHistory({ config: defaultConfig(), history: toHistory(scenario.history, defaultConfig()) });
   const r = result.recommendation!;
 
   it('recommends a setting that meets the target on the replay and is not blind', () => {

@@ -2,7 +2,7 @@
 // router service), a store pointed at the loopback Git Data stand-in, and a direct reader.
 import { expect } from 'vitest';
 import { createBranchStore, type BranchStoreOptions } from '../../src/history/branch-store.js';
-import type { RetryTuning } from '../../src/github/api.js';
+import type { RetryTuning } from '../../src/github/retry-after.js';
 import { createOctokitApi } from '../../src/github/octokit-api.js';
 import { seriesFilePath } from '../../src/history/branch-path.js';
 import { parseHistory } from '../../src/history/document.js';

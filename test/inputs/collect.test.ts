@@ -1,13 +1,33 @@
+import { createRequire } from 'node:module';
 import { describe, expect, it } from 'vitest';
 import { collectRun } from '../../src/inputs/collect.js';
 import type { Reading, ReadResult } from '../../src/inputs/run.js';
 import { inputErrorOf } from './helpers.js';
+
+// jStat, a reference statistics library from the npm registry (dev dependency; ships no types).
+const jStat = createRequire(import.meta.url)('jstat') as Record<'median' | 'min', (values: number[]) => number>;
 
 function result(readings: Reading[], meta: [string, string][] = [], notFitted: [string, string][] = []): ReadResult {
   return { readings, meta: new Map(meta), notFitted: new Map(notFitted) };
 }
 
 describe('collectRun', () => {
+  it('aggregate auto keeps the fastest sample of a timing and the median of anything else (Chen & Revels 2016)', () => {
+    const samples = [8.4, 8.1, 12.9, 8.2, 15.3];
+    const run = collectRun(
+      [
+        result([
+          ...samples.map((value) => ({ name: 'parse', value, unit: 'ms' })),
+          ...samples.map((value) => ({ name: 'heap', value, unit: 'MiB' })),
+        ]),
+      ],
+      () => 'auto',
+    );
+    // reference values: jStat (an npm statistics library) on the same samples
+    expect(run.metrics.get('parse')!.value).toBe(jStat.min(samples));
+    expect(run.metrics.get('heap')!.value).toBe(jStat.median(samples));
+  });
+
   it('aggregates the samples of a name across files by the rule for that name, keeping the count', () => {
     const run = collectRun(
       [

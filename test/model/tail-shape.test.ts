@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { halfTailShape } from '../../src/model/tail-shape.js';
+import { halfTailProfile, halfTailShape, pooledTailShape } from '../../src/model/tail-shape.js';
 import { studentLogDensity } from '../../src/model/tails.js';
 import { seededNormal, seededUniform } from './random.js';
 
@@ -38,5 +38,29 @@ describe('halfTailShape: the maximum-likelihood half Student-t of one side (Lang
 
   it('needs 3 deviations on its side', () => {
     expect(halfTailShape([1, 2, -3, 0])).toBeUndefined();
+  });
+});
+
+describe('pooledTailShape: one metric tail partially pooled with its class (a power prior, Ibrahim & Chen 2000)', () => {
+  // Reference: the distributions the draws come from (t(1), Cauchy, for the metric; the Gaussian
+  // for the class, Student 1908 and the definition of the normal).
+  const normal = seededNormal(41);
+  const classSide = Array.from({ length: 4000 }, () => normal());
+  const own = studentDraws(1, 60, 42);
+
+  it('a heavy-tailed metric keeps a heavy tail beside a Gaussian class; a weight of 1000 gives the class its say', () => {
+    const pooled = halfTailProfile(classSide)!;
+    expect(pooledTailShape(own, pooled, 0)!.nu).toBeLessThanOrEqual(2);
+    expect(pooledTailShape(own, pooled, 3)!.nu).toBeLessThanOrEqual(3);
+    expect(pooledTailShape(own, pooled, 1000)!.nu).toBeGreaterThanOrEqual(30);
+  });
+
+  it('takes the class scale at the chosen degrees of freedom (the deviations are already in moderated sd)', () => {
+    const pooled = halfTailProfile(classSide)!;
+    const fit = pooledTailShape(own, pooled, 1000)!;
+    expect(fit.scale).toBe(pooled.find((f) => f.nu === fit.nu)!.scale);
+    // the Gaussian class's scale is about 1 (its sd)
+    expect(fit.scale).toBeGreaterThan(0.95);
+    expect(fit.scale).toBeLessThan(1.05);
   });
 });

@@ -7,9 +7,11 @@
  */
 import { parseConfig } from '../../src/config/load.js';
 import type { Config } from '../../src/config/types.js';
+import { settingsFor } from '../../src/config/rules.js';
 import { runGate } from '../../src/gate/gate.js';
+import { collectRun } from '../../src/inputs/collect.js';
 import type { History, MetricColumn, RunInfo } from '../../src/history/history.js';
-import type { Measurement, Run } from '../../src/inputs/run.js';
+import type { Run } from '../../src/inputs/run.js';
 import type { RunSpec, Scenario } from './simulate.js';
 
 /** The part of a report the harness reads; anything else the gate adds is ignored. */
@@ -34,10 +36,10 @@ export function configOf(config: string | Config): Config {
 }
 
 /** The in-memory History of a scenario's history runs (oldest first), one column per metric seen. */
-export function toHistory(runs: readonly RunSpec[], series = 'main'): History {
+export function toHistory(runs: readonly RunSpec[], config: Config, series = 'main'): History {
   const columns = new Map<string, MetricColumn>();
-  runs.forEach((run, k) => {
-    for (const [name, m] of run.metrics) {
+  runs.forEach((spec, k) => {
+    for (const [name, m] of toRun(spec, config).metrics) {
       let column = columns.get(name);
       if (column === undefined) {
         column = { ...(m.unit === undefined ? {} : { unit: m.unit }), values: Array<number>(runs.length).fill(NaN) };
@@ -53,16 +55,23 @@ export function toHistory(runs: readonly RunSpec[], series = 'main'): History {
   return history;
 }
 
-/** A scenario run as the gate's Run: the value (the samples' median), its unit and sample count. */
-export function toRun(spec: RunSpec): Run {
-  const metrics = new Map<string, Measurement>();
-  for (const [name, m] of spec.metrics)
-    metrics.set(name, {
-      value: m.value,
+/**
+ * A scenario run as the gate's Run, built as the CLI and the action build it: every sample a
+ * reading, folded by collectRun with the aggregate the config gives each metric (value, count and
+ * the inside-run spread); a metric without samples is one reading.
+ */
+export function toRun(spec: RunSpec, config: Config): Run {
+  const readings = [...spec.metrics].flatMap(([name, m]) =>
+    (m.samples !== undefined && m.samples.length > 0 ? m.samples : [m.value]).map((value) => ({
+      name,
+      value,
       ...(m.unit === undefined ? {} : { unit: m.unit }),
-      count: m.samples?.length ?? 1,
-    });
-  return { metrics, meta: new Map() };
+    })),
+  );
+  return collectRun(
+    [{ readings, notFitted: new Map(), meta: new Map() }],
+    (name) => settingsFor(config, name).aggregate,
+  );
 }
 
 export interface FactorCount {
@@ -112,7 +121,8 @@ export async function evaluate(
   series = 'main',
 ): Promise<Evaluation> {
   const list = Array.isArray(scenarios) ? (scenarios as readonly Scenario[]) : [scenarios as Scenario];
-  const judge = await gateJudge(configOf(config), series);
+  const resolved = configOf(config);
+  const judge = await gateJudge(resolved, series);
   const out: Evaluation = {
     scenario: [...new Set(list.map((s) => s.name))].join(' + '),
     clean: 0,
@@ -129,9 +139,9 @@ export async function evaluate(
     alarmsByMetric: {},
   };
   for (const scenario of list) {
-    const history = toHistory(scenario.history, series);
+    const history = toHistory(scenario.history, resolved, series);
     for (const run of scenario.clean) {
-      const answer = await judge(history, toRun(run));
+      const answer = await judge(history, toRun(run, resolved));
       out.clean++;
       if (answer.verdict === 'regressed') {
         out.falseAlarms++;
@@ -139,7 +149,7 @@ export async function evaluate(
       } else if (answer.verdict !== 'pass') bump(out.otherOutcomes.clean, answer.verdict);
     }
     for (const { run, metric, factor } of scenario.regressed) {
-      const answer = await judge(history, toRun(run));
+      const answer = await judge(history, toRun(run, resolved));
       out.regressed++;
       const slowedResult = answer.metrics.find((m) => m.name === metric);
       const caught = slowedResult?.status === 'regressed';

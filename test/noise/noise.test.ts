@@ -112,13 +112,16 @@ describe('the gate on simulated noise', () => {
     }
   }, 600_000);
 
-  it('an absurdly loose gate (family none, cutoff 0.999, no tolerance, both sides worse) alarms on most clean runs', async () => {
+  it('an absurdly loose gate (family none, cutoff 0.999, no tolerance, both sides worse) stops most clean runs', async () => {
     for (const scenario of ONE) {
       const result = await evaluate(
         'family: none\ndefaults:\n  cutoff: 0.999\n  tolerance: 0\n  worse: both\n  change-points: false\n',
         scenario,
       );
-      expect(result.falseAlarmsPer100).toBeGreaterThan(80);
+      // A run in a slow episode holds its would-be regressions as `unsettled` (asks for a re-run):
+      // it stops the run too, so both count here.
+      const stopped = result.falseAlarms + (result.otherOutcomes.clean.unsettled ?? 0);
+      expect((100 * stopped) / result.clean).toBeGreaterThan(80);
     }
   }, 600_000);
 });
@@ -167,6 +170,17 @@ describe.skipIf(recorded.length === 0)('the gate on the recorded corpus', () => 
         if (result.detectableCheck.eligible >= 10) expect(result.detectableCheck.share).toBeGreaterThanOrEqual(0.8);
       }, 600_000);
     }
+
+  // Per regime only a few slowdowns are at least 1.25 x `detectable` (3-6), so the honesty of the
+  // figure is asserted on all regimes together (runs after the regime tests above, in file order).
+  it('pooled over the regimes at defaults: slowdowns of at least 1.25 x detectable caught at least 80% of the time', () => {
+    const rows = corpusRows.filter((r) => r.setting === 'defaults' && !/->|mixed/.test(r.scenario));
+    expect(rows.length).toBe(2 * regimesRecorded.length);
+    const eligible = rows.reduce((n, r) => n + r.result.detectableCheck.eligible, 0);
+    const caught = rows.reduce((n, r) => n + r.result.detectableCheck.caught, 0);
+    expect(eligible).toBeGreaterThanOrEqual(10);
+    expect(caught / eligible).toBeGreaterThanOrEqual(0.8);
+  });
 
   it('a cutoff of 1e-300 (family none) never alarms and never catches (only timings are slowed, and they all vary)', async () => {
     const result = await evaluate('family: none\ndefaults:\n  cutoff: 1e-300\n', regimesByCpu);

@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { levelSteps } from '../../../src/model/level-steps.js';
 import { hampelOutliers } from '../../../src/model/hampel.js';
-import { InputError } from '../../../src/errors/input-error.js';
 import { seededNormal } from '../random.js';
 
 const noisy = (seed: number, levels: [number, number][]): number[] => {
@@ -50,9 +49,9 @@ describe('levelSteps', () => {
   });
 
   it('refuses bad options and values', () => {
-    expect(() => levelSteps([1, 2, Number.NaN])).toThrow(InputError);
-    expect(() => levelSteps([1, 2], { level: 2 })).toThrow(InputError);
-    expect(() => levelSteps([1, 2], { minSegment: 0 })).toThrow(InputError);
+    expect(() => levelSteps([1, 2, Number.NaN])).toThrow(RangeError);
+    expect(() => levelSteps([1, 2], { level: 2 })).toThrow(RangeError);
+    expect(() => levelSteps([1, 2], { minSegment: 0 })).toThrow(RangeError);
     expect(levelSteps([1, 2, 3])).toEqual([]);
   });
 });
@@ -81,7 +80,7 @@ describe('hampelOutliers', () => {
   });
 
   it('refuses bad options', () => {
-    expect(() => hampelOutliers([1, 2], 0)).toThrow(InputError);
-    expect(() => hampelOutliers([1, Number.NaN], 1)).toThrow(InputError);
+    expect(() => hampelOutliers([1, 2], 0)).toThrow(RangeError);
+    expect(() => hampelOutliers([1, Number.NaN], 1)).toThrow(RangeError);
   });
 });
