@@ -22,7 +22,17 @@ export const INPUT = {
   historyFailure: 'history-failure',
   missingMetrics: 'missing-metrics',
   htmlReport: 'html-report',
+  maintenance: 'maintenance',
+  maintenanceRun: 'maintenance-run',
+  maintenanceMetric: 'maintenance-metric',
+  maintenanceTo: 'maintenance-to',
+  maintenanceNote: 'maintenance-note',
+  maintenanceFile: 'maintenance-file',
 } as const;
+
+/** The operations of a maintenance run (`maintenance` input), as `bellgate runs|mark|drop|rename|import`. */
+export const MAINTENANCE_OPS = ['runs', 'mark', 'drop', 'rename', 'import'] as const;
+export type MaintenanceOp = (typeof MAINTENANCE_OPS)[number];
 
 /** Output names exactly as action.yml declares them. */
 export const OUTPUT = { verdict: 'verdict', regressed: 'regressed', report: 'report' } as const;
@@ -54,6 +64,16 @@ export interface ActionInputs {
   /** A run lacking more than half of its baseline metrics: `warn` (annotation) or `fail` (the step). */
   missingMetrics: 'warn' | 'fail';
   htmlReport: boolean;
+  /** A maintenance run instead of a check: the operation and its inputs (maintenance-run.ts). */
+  maintenance?: {
+    op: MaintenanceOp;
+    run?: string;
+    /** Globs (mark) or the old name (rename), one a line. */
+    metric: string[];
+    to?: string;
+    note?: string;
+    file?: string;
+  };
 }
 
 /** Reads one input by its action.yml name, trimmed: @actions/core's getInput in the action. */
@@ -92,7 +112,20 @@ export function readActionInputs(read: InputReader): ActionInputs {
     .split(/\r?\n/)
     .map((l) => l.trim())
     .filter((l) => l !== '' && !l.startsWith('#'));
-  if (metrics.length === 0) {
+  const op = get(INPUT.maintenance);
+  const maintenance =
+    op === ''
+      ? undefined
+      : {
+          op: choice(INPUT.maintenance, op, MAINTENANCE_OPS, 'runs'),
+          metric: lines(get(INPUT.maintenanceMetric)),
+          ...optional('run', get(INPUT.maintenanceRun)),
+          ...optional('to', get(INPUT.maintenanceTo)),
+          ...optional('note', get(INPUT.maintenanceNote)),
+          ...optional('file', get(INPUT.maintenanceFile)),
+        };
+  // A maintenance run reads no metric files.
+  if (metrics.length === 0 && maintenance === undefined) {
     throw new InputError('input `metrics` is empty: there are no metric files to check', {
       where: `input ${INPUT.metrics}`,
       fix: 'list the metric files or globs, one a line, e.g. `metrics: out/bench/*.json`',
@@ -136,5 +169,15 @@ export function readActionInputs(read: InputReader): ActionInputs {
     historyFailure: choice(INPUT.historyFailure, get(INPUT.historyFailure), ['warn', 'fail'] as const, 'warn'),
     missingMetrics: choice(INPUT.missingMetrics, get(INPUT.missingMetrics), ['warn', 'fail'] as const, 'warn'),
     htmlReport: flag(INPUT.htmlReport, get(INPUT.htmlReport), false),
+    ...(maintenance === undefined ? {} : { maintenance }),
   };
 }
+
+const lines = (text: string): string[] =>
+  text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter((l) => l !== '');
+
+const optional = <K extends string>(key: K, value: string): Partial<Record<K, string>> =>
+  (value === '' ? {} : { [key]: value }) as Partial<Record<K, string>>;

@@ -46,6 +46,7 @@ import { describeError } from './describe-error.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
 import { loadHistory, recordRun, runInfo } from './history-step.js';
 import { acceptedMark, mergedPull, type MergedPull } from './merged-acceptance.js';
+import { maintenanceRun } from './maintenance-run.js';
 import { uploadHtml } from './html-report.js';
 import { OUTPUT, readActionInputs, type ActionInputs, type InputReader } from './inputs.js';
 import { logText } from './log-text.js';
@@ -102,23 +103,9 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const inputs = readActionInputs(deps.getInput);
   if (inputs.token !== '') sink.setSecret(inputs.token);
   const context = await readRunContext(deps.env, deps.readText);
-  // A missing file at the default path means default settings; a missing named file is an error.
-  const config = await loadConfig(inputs.config, deps.cwd);
-  const read = await readMetricFiles(inputs.metrics, {
-    ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
-    limits: config.limits,
-    aggregateFor: (name) => settingsFor(config, name).aggregate,
-    cwd: deps.cwd,
-  });
   const series = inputs.series ?? `${context.workflow}/${context.job}`;
   const shownSeries = logText(series);
   const baselineBranch = inputs.baselineBranch ?? context.defaultBranch;
-  const decision = decideRecord(inputs.record, context, baselineBranch);
-  if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
-  else
-    sink.info(
-      `bellgate: series "${shownSeries}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`,
-    );
 
   let api: GitHubApi | Promise<GitHubApi> | undefined;
   const apiOnce = (): GitHubApi | Promise<GitHubApi> => {
@@ -151,6 +138,24 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     warn: (m) => sink.warning(`bellgate: ${m}`),
     info: (m) => sink.info(`bellgate: ${m}`),
   });
+  if (inputs.maintenance !== undefined) {
+    await maintenanceRun(inputs.maintenance, inputs.series, store, deps);
+    return { failed: false, recorded: false };
+  }
+  // A missing file at the default path means default settings; a missing named file is an error.
+  const config = await loadConfig(inputs.config, deps.cwd);
+  const read = await readMetricFiles(inputs.metrics, {
+    ...((inputs.inputFormat ?? config.inputFormat) ? { format: inputs.inputFormat ?? config.inputFormat } : {}),
+    limits: config.limits,
+    aggregateFor: (name) => settingsFor(config, name).aggregate,
+    cwd: deps.cwd,
+  });
+  const decision = decideRecord(inputs.record, context, baselineBranch);
+  if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
+  else
+    sink.info(
+      `bellgate: series "${shownSeries}"; ${decision.record ? 'will record' : 'check only'} (${decision.reason})`,
+    );
   const setting = { store: inputs.store, history: inputs.history };
 
   const loaded = await loadHistory(store, series, setting, sink, runsToRead(config));
