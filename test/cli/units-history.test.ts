@@ -84,3 +84,21 @@ describe('import', () => {
     expect(values(h).slice(0, 2)).toEqual([2048, 2048]);
   });
 });
+
+describe('verify', () => {
+  it('reports mixed units: 0.121 in a column of about 121 ms (a factor of 1000, 1 s = 1000 ms), at its line', async () => {
+    const lines = [
+      '{"schema":"bellgate.history/3","series":"default","metrics":[{"name":"time/parse","unit":"ms"}]}',
+      ...[120.5, 121.2, 119.8, 0.121, 120.9, 121.4].map(
+        (v, i) => `{"id":"${i + 1}-1","time":"2026-05-0${i + 1}T10:00:00.000Z","values":[${v}]}`,
+      ),
+    ];
+    const h = work.write('mixed.jsonl', `${lines.join('\n')}\n`);
+    const r = await bellgate(work.dir, ['verify', '--history', h]);
+    expect(r.code).toBe(2);
+    expect(r.stdout).toMatch(
+      /mixed\.jsonl:5: mixed units: "time\/parse" is 0\.121 ms, about 1\/1000 of its median .* ms, as if it was written in another unit; drop the run \(bellgate drop 4-1\)/,
+    );
+    expect(r.stdout.trimEnd().split('\n')).toHaveLength(1);
+  });
+});
