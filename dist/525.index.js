@@ -347,6 +347,24 @@ function toComment(raw) {
     const login = octokit_api_obj(c.user).login;
     return { id: Number(c.id), body: String(c.body ?? ''), author: typeof login === 'string' ? login : undefined };
 }
+function toCommitPull(raw) {
+    const p = octokit_api_obj(raw);
+    const text = (v) => (typeof v === 'string' && v !== '' ? v : undefined);
+    const pull = {
+        number: Number(p.number),
+        labels: (Array.isArray(p.labels) ? p.labels : []).map((l) => String(octokit_api_obj(l).name ?? '')),
+    };
+    const mergedAt = text(p.merged_at);
+    const mergeSha = text(p.merge_commit_sha);
+    const base = text(octokit_api_obj(p.base).ref);
+    if (mergedAt !== undefined)
+        pull.mergedAt = mergedAt;
+    if (mergeSha !== undefined)
+        pull.mergeSha = mergeSha;
+    if (base !== undefined)
+        pull.base = base;
+    return pull;
+}
 /**
  * Creates the API client for one repository.
  * @example createOctokitApi({ token, baseUrl: 'https://api.github.com', owner: 'acme', repo: 'router' })
@@ -450,6 +468,7 @@ function createOctokitApi(target) {
             }
         },
         listIssueLabels: (issue) => pages('GET /repos/{owner}/{repo}/issues/{issue_number}/labels', { issue_number: issue }, (d) => (Array.isArray(d) ? d : []), (raw) => String(octokit_api_obj(raw).name ?? '')),
+        listCommitPulls: (sha) => pages('GET /repos/{owner}/{repo}/commits/{commit_sha}/pulls', { commit_sha: sha }, (d) => (Array.isArray(d) ? d : []), toCommitPull),
         listIssueComments: (issue) => pages('GET /repos/{owner}/{repo}/issues/{issue_number}/comments', { issue_number: issue }, (d) => (Array.isArray(d) ? d : []), toComment),
         async createIssueComment(issue, body) {
             const res = await (await octokit()).request('POST /repos/{owner}/{repo}/issues/{issue_number}/comments', { ...repo, issue_number: issue, body });

@@ -2592,7 +2592,7 @@ exports.basename = (path, { windows } = {}) => {
 /***/ ((module, __unused_webpack___webpack_exports__, __nccwpck_require__) => {
 
 __nccwpck_require__.a(module, async (__webpack_handle_async_dependencies__, __webpack_async_result__) => { try {
-/* harmony import */ var _cli_main_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2416);
+/* harmony import */ var _cli_main_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8581);
 
 // A reader that closes the pipe early (`bellgate check | head`) is not a failure of the check.
 process.stdout.on('error', (e) => {
@@ -2624,8 +2624,8 @@ __nccwpck_require__.d(__webpack_exports__, {
   v: () => (/* binding */ judgeRequestedRun)
 });
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 17 modules
-var gate = __nccwpck_require__(1027);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 14 modules
+var gate = __nccwpck_require__(1229);
 // EXTERNAL MODULE: ./src/inputs/exact-place.ts
 var exact_place = __nccwpck_require__(8436);
 // EXTERNAL MODULE: ./src/inputs/units.ts
@@ -12451,7 +12451,7 @@ function parsePrefixes(values) {
 
 /***/ }),
 
-/***/ 2416:
+/***/ 8581:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -12580,8 +12580,8 @@ function firstLine(s) {
  */
 const OK_ROWS_LISTED = 30;
 
-// EXTERNAL MODULE: ./src/gate/gate.ts + 17 modules
-var gate = __nccwpck_require__(1027);
+// EXTERNAL MODULE: ./src/gate/gate.ts + 14 modules
+var gate = __nccwpck_require__(1229);
 // EXTERNAL MODULE: ./src/gate/missing-metrics.ts
 var missing_metrics = __nccwpck_require__(4719);
 // EXTERNAL MODULE: ./src/report/reason.ts
@@ -12716,11 +12716,14 @@ var clean = __nccwpck_require__(23);
 var report_cells = __nccwpck_require__(571);
 // EXTERNAL MODULE: ./src/report/family-line.ts
 var family_line = __nccwpck_require__(4551);
+// EXTERNAL MODULE: ./src/report/level-lines.ts
+var level_lines = __nccwpck_require__(3778);
 // EXTERNAL MODULE: ./src/report/status.ts
 var report_status = __nccwpck_require__(6934);
 // EXTERNAL MODULE: ./src/report/notes.ts
 var notes = __nccwpck_require__(4931);
 ;// CONCATENATED MODULE: ./src/report/text.ts
+
 
 
 
@@ -12841,6 +12844,9 @@ function renderText(report, options) {
             lines.push('');
         lines.push(`${report_status/* STATUS_GLYPH */.id.ok} ok (${okCount}): within their baselines, not listed (--all lists every metric)`);
     }
+    const levels = (0,level_lines/* levelLines */.c)(report, (t) => text_clean(t, 600));
+    if (levels.length > 0)
+        lines.push('', ...levels);
     lines.push('');
     lines.push((0,family_line/* familyLine */.l)(report));
     for (const s of report.shared)
@@ -13169,6 +13175,7 @@ function checkCommand(ctx) {
 
 
 
+
 /**
  * The work of `bellgate record`: appends the run to the history file (one line; the file is not
  * read beyond its header and last line) and says how many runs are kept.
@@ -13180,7 +13187,8 @@ async function runRecord(ctx, options) {
     const run = await (0,load_run/* loadRun */.S)(ctx, config, options);
     const store = (0,open_history/* historyStore */.O)(ctx, options.history, options.series);
     const info = runInfoFrom(ctx, options);
-    const saved = await recordRun(store, info, run, config.keep);
+    // A unit the history refuses is named at its exact line of the metric file.
+    const saved = await (0,exact_place/* withExactPlace */.F)(() => recordRun(store, info, run, config.keep), ctx.io.cwd);
     const replaced = saved.replaced === undefined
         ? ''
         : saved.replaced === info.id
@@ -13428,6 +13436,45 @@ function explainCommand(ctx) {
     return cmd.action((metric, options) => runExplain(ctx, metric, options));
 }
 
+// EXTERNAL MODULE: ./src/files/read-user-file.ts
+var read_user_file = __nccwpck_require__(7990);
+;// CONCATENATED MODULE: ./src/cli/read-text.ts
+
+
+/** Files the CLI reads whole for a flag (history, past runs, labels) are refused above this size (256 MiB). */
+const MAX_TEXT_BYTES = 256 * 1024 * 1024;
+/**
+ * The whole UTF-8 text of the file a flag names, read by readUserFile (a regular file, at most
+ * MAX_TEXT_BYTES); `confined` for files the repository's content chooses (labels, config), so a
+ * symbolic link there cannot lead out of the working folder or into .git.
+ * @throws InputError when the file is missing or refused, naming the flag and the path as given.
+ * @example await readFlagFile(ctx, '--labels', 'known.yml', true)
+ */
+async function readFlagFile(ctx, flag, path, confined) {
+    const text = await readFlagFileIfAny(ctx, flag, path, confined);
+    if (text === undefined) {
+        throw new input_error/* InputError */.d(`${flag} ${path} does not exist`, { where: path, fix: `check the path given to ${flag}` });
+    }
+    return text;
+}
+/** readFlagFile, but undefined when nothing exists at the path. */
+function readFlagFileIfAny(ctx, flag, path, confined) {
+    return (0,read_user_file/* readUserFile */.E)(path, {
+        cwd: ctx.io.cwd,
+        what: `${flag} file`,
+        maxBytes: MAX_TEXT_BYTES,
+        tooLarge: (bytes) => new input_error/* InputError */.d(`${flag} ${path} is ${bytes} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
+            where: path,
+            fix: 'split the file, or trim old runs first',
+        }),
+        confined,
+    });
+}
+
+// EXTERNAL MODULE: ./src/errors/visible-text.ts
+var visible_text = __nccwpck_require__(81);
+// EXTERNAL MODULE: ./src/history/changes.ts
+var changes = __nccwpck_require__(5201);
 // EXTERNAL MODULE: ./node_modules/csv-parse/lib/sync.js + 8 modules
 var sync = __nccwpck_require__(712);
 // EXTERNAL MODULE: ./src/inputs/names.ts
@@ -13441,10 +13488,11 @@ var iso_time = __nccwpck_require__(1459);
 /**
  * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
  * an id is required (a string, or a whole number such as a CI run id); a time is required and
- * must be ISO-8601 (stored normalised to UTC, since import order is time order); sha, ref and
+ * must be ISO-8601 with a zone when it has a time of day (stored normalised to UTC, since import
+ * order is time order); sha, ref and
  * event are optional strings. Returns the reason as a string when the run must be skipped.
  *
- * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
+ * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00Z' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
  */
 function import_run_runInfoFrom(fields) {
     const { id, time } = fields;
@@ -13457,7 +13505,9 @@ function import_run_runInfoFrom(fields) {
         return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
     if (time === undefined || time === null || time === '')
         return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
-    const iso = typeof time === 'string' ? (0,iso_time/* normalizeIsoTime */.U)(time) : undefined;
+    if (typeof time === 'string' && (0,iso_time/* lacksZone */.r_)(time))
+        return `run ${JSON.stringify(runId)} has a time without a zone, ${JSON.stringify(time)}, which means another instant on every machine: add Z for UTC or the offset it was taken in, e.g. ${JSON.stringify(`${time.trim().replace(' ', 'T')}Z`)}`;
+    const iso = typeof time === 'string' ? (0,iso_time/* normalizeIsoTime */.UN)(time) : undefined;
     if (iso === undefined)
         return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;
     const info = { id: runId, time: iso };
@@ -13594,7 +13644,7 @@ function parseCsvRuns(text, source) {
             continue;
         }
         if (!run) {
-            run = { info: runInfo, metrics: new Map(), units: new Map() };
+            run = { info: runInfo, metrics: new Map(), units: new Map(), places: new Map() };
             byId.set(runInfo.id, run);
         }
         const target = run;
@@ -13608,6 +13658,7 @@ function parseCsvRuns(text, source) {
             if (target.metrics.has(name))
                 skip(`metric ${JSON.stringify(name)} of run ${JSON.stringify(target.info.id)} was given before; this row's value is kept`);
             target.metrics.set(name, value);
+            target.places?.set(name, where);
             if (unit)
                 target.units.set(name, unit);
         };
@@ -13676,7 +13727,7 @@ function parseJsonLines(text, source) {
         const info = import_run_runInfoFrom(entry);
         if (typeof info === 'string')
             return skip(info);
-        const run = { info, metrics: new Map(), units: new Map() };
+        const run = { info, metrics: new Map(), units: new Map(), places: new Map() };
         const units = (0,history_problems/* isObject */.Gv)(entry.units) ? entry.units : {};
         const add = (name, raw, unit) => {
             if (typeof name !== 'string' || name === '')
@@ -13688,6 +13739,7 @@ function parseJsonLines(text, source) {
             if (typeof value === 'string')
                 return skip(`metric ${JSON.stringify(name)}: ${value}`);
             run.metrics.set(name, value);
+            run.places?.set(name, where);
             if (typeof unit === 'string' && unit !== '')
                 run.units.set(name, unit);
         };
@@ -13725,6 +13777,7 @@ function parseJsonLines(text, source) {
 // EXTERNAL MODULE: ./src/history/merge.ts
 var merge = __nccwpck_require__(4292);
 ;// CONCATENATED MODULE: ./src/history/import.ts
+
 
 
 
@@ -13793,17 +13846,21 @@ function importRuns(h, input) {
             }
             const unit = run.units.get(name);
             const stored = h.columns.get(name)?.unit ?? column.unit;
-            if (unit !== undefined && stored !== undefined && unit !== stored) {
-                // The stored unit is authoritative: a value in another unit would relabel the column.
-                skipped.push({
-                    where: `run ${run.info.id}`,
-                    reason: `metric ${JSON.stringify(name)} is in ${JSON.stringify(unit)}, but the history holds it in ${JSON.stringify(stored)}`,
-                });
+            // The stored unit is authoritative (never relabelled): a value in a unit that converts is
+            // converted to it, one that does not is left out naming its line and both units.
+            let inStored;
+            try {
+                inStored = (0,units/* inStoredUnit */.H)(name, { value, count: 1, ...(unit === undefined ? {} : { unit }) }, stored);
+            }
+            catch (error) {
+                if (!(error instanceof input_error/* InputError */.d))
+                    throw error;
+                skipped.push({ where: run.places?.get(name) ?? `run ${run.info.id}`, reason: error.message });
                 continue;
             }
-            column.values[r] = value;
-            if (unit !== undefined)
-                column.unit = unit;
+            column.values[r] = inStored;
+            if (column.unit === undefined && (stored ?? unit) !== undefined)
+                column.unit = (stored ?? unit);
         }
     });
     const stored = new Map(h.runs.map((run, i) => [run.id, i]));
@@ -13839,73 +13896,188 @@ function sameRun(h, index, run) {
     return [...run.metrics.keys()].every((name) => h.columns.has(name));
 }
 
-// EXTERNAL MODULE: ./src/errors/visible-text.ts
-var visible_text = __nccwpck_require__(81);
-// EXTERNAL MODULE: ./src/files/read-user-file.ts
-var read_user_file = __nccwpck_require__(7990);
-;// CONCATENATED MODULE: ./src/cli/read-text.ts
-
-
-/** Files the CLI reads whole for a flag (history, past runs, labels) are refused above this size (256 MiB). */
-const MAX_TEXT_BYTES = 256 * 1024 * 1024;
+;// CONCATENATED MODULE: ./src/history/maintain.ts
 /**
- * The whole UTF-8 text of the file a flag names, read by readUserFile (a regular file, at most
- * MAX_TEXT_BYTES); `confined` for files the repository's content chooses (labels, config), so a
- * symbolic link there cannot lead out of the working folder or into .git.
- * @throws InputError when the file is missing or refused, naming the flag and the path as given.
- * @example await readFlagFile(ctx, '--labels', 'known.yml', true)
+ * The maintenance operations, as the CLI (`bellgate mark|drop|rename|runs|import`) and the
+ * action's manual run (`maintenance:` input) both perform them on any store: each becomes one
+ * HistoryChange applied by the store at the moment of writing (so a record running at once is
+ * not lost), or a read for `runs`. Returns the lines to show; throws InputError for an unknown
+ * run or metric (applyChange), StoreError when the store fails.
  */
-async function readFlagFile(ctx, flag, path, confined) {
-    const text = await readFlagFileIfAny(ctx, flag, path, confined);
-    if (text === undefined) {
-        throw new input_error/* InputError */.d(`${flag} ${path} does not exist`, { where: path, fix: `check the path given to ${flag}` });
-    }
-    return text;
+
+
+
+/** How many skipped import rows are listed one by one before the rest are counted. */
+const SHOWN_SKIPS = 20;
+/**
+ * @example (await maintain(store, { op: 'drop', run: '81-1', reason: 'broken runner' }, new Date())).lines // ['dropped run 81-1 ...']
+ */
+async function maintain(store, m, now) {
+    // Names and ids come from the user or a file: nothing in them may steer the terminal or log.
+    const skipped = [];
+    const lines = await perform(store, m, now, skipped);
+    return { lines: lines.map((l) => (0,visible_text/* visibleText */.Q)(l)), skipped: skipped.map((l) => (0,visible_text/* visibleText */.Q)(l)) };
 }
-/** readFlagFile, but undefined when nothing exists at the path. */
-function readFlagFileIfAny(ctx, flag, path, confined) {
-    return (0,read_user_file/* readUserFile */.E)(path, {
-        cwd: ctx.io.cwd,
-        what: `${flag} file`,
-        maxBytes: MAX_TEXT_BYTES,
-        tooLarge: (bytes) => new input_error/* InputError */.d(`${flag} ${path} is ${bytes} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
-            where: path,
-            fix: 'split the file, or trim old runs first',
-        }),
-        confined,
+async function perform(store, m, now, skipped) {
+    const where = store.describe();
+    switch (m.op) {
+        case 'mark': {
+            const mark = { reason: 'manual' };
+            if (m.metrics !== undefined && m.metrics.length > 0)
+                mark.metrics = m.metrics;
+            if (m.note !== undefined && m.note !== '')
+                mark.note = m.note;
+            const done = await store.update({ kind: 'mark', id: m.run, mark });
+            const which = mark.metrics === undefined ? 'every metric' : mark.metrics.join(', ');
+            return [`marked run ${m.run}: a new level of ${which} starts there (${done.runs} runs in ${where})`];
+        }
+        case 'drop': {
+            const tombstone = { id: m.run, time: now.toISOString(), ...(m.reason ? { reason: m.reason } : {}) };
+            const done = await store.update({ kind: 'drop', tombstone });
+            return [`dropped run ${m.run}; it stays dropped after merges (${done.runs} runs left in ${where})`];
+        }
+        case 'rename': {
+            const done = await store.update({ kind: 'rename', from: m.from, to: m.to });
+            return [`renamed ${m.from} to ${m.to}, keeping its history (${done.runs} runs in ${where})`];
+        }
+        case 'runs': {
+            const h = await store.read();
+            return runLines((0,changes/* listRuns */.v)(h), h.dropped?.size ?? 0, where);
+        }
+        case 'import': {
+            const parsed = parseImportRuns(m.text, m.source);
+            const result = importRuns(await store.read(), parsed);
+            for (const s of result.skipped.slice(0, SHOWN_SKIPS))
+                skipped.push(`skipped ${s.where}: ${s.reason}`);
+            if (result.skipped.length > SHOWN_SKIPS)
+                skipped.push(`... and ${result.skipped.length - SHOWN_SKIPS} more skipped rows`);
+            // The store merges what it holds when it writes with these runs.
+            const done = await store.update({ kind: 'merge', history: result.incoming });
+            return [
+                `imported ${m.source}: ${result.added} runs added, ${result.updated} updated, ${result.unchanged} unchanged, ${result.skipped.length} skipped; ${done.runs} runs in ${where}`,
+            ];
+        }
+    }
+}
+/** One line per run, oldest first: id, time, sha, event, pull request, metric count, marks. */
+function runLines(runs, dropped, where) {
+    const out = [`${runs.length} runs in ${where}${dropped > 0 ? ` (${dropped} dropped)` : ''}`];
+    for (const r of runs) {
+        const parts = [r.id, r.time ?? '-', r.sha?.slice(0, 12) ?? '-', r.event ?? '-'];
+        if (r.pr !== undefined)
+            parts.push(`#${r.pr}`);
+        parts.push(`${r.metricCount} metric${r.metricCount === 1 ? '' : 's'}`);
+        for (const mark of r.marks ?? []) {
+            const why = mark.reason === 'accepted' ? `accepted${mark.pr === undefined ? '' : ` in #${mark.pr}`}` : 'manual';
+            parts.push(`level mark (${why}${mark.metrics ? `: ${mark.metrics.join(', ')}` : ': every metric'})`);
+        }
+        out.push(parts.join('  '));
+    }
+    return out;
+}
+
+;// CONCATENATED MODULE: ./src/cli/open-store.ts
+
+
+const STORES = ['file', 'branch', 'artifact'];
+/** Adds --history, --store, --repo and --series to a maintenance command. */
+function storeOptions(cmd) {
+    return cmd
+        .requiredOption('--history <file|branch>', 'the history file (`--store file`) or data branch (`--store branch`)')
+        .option('--store <kind>', 'where the history lives: file or branch (artifact: use a manual workflow run)', 'file')
+        .option('--repo <owner/name>', 'repository of the data branch (default: GITHUB_REPOSITORY); token in GITHUB_TOKEN')
+        .option('--series <key>', 'which series (needed for a data branch; a file holds one series)');
+}
+/**
+ * @throws InputError for an unknown store, the artifact store, or a branch store without series, repository or token.
+ * @example await openStore(ctx, { history: '.bellgate/history.jsonl', store: 'file' })
+ */
+async function openStore(ctx, flags) {
+    if (flags.store === 'file') {
+        // A file holds one series: without --series, the one its header names.
+        const series = flags.series ?? (await (0,open_history/* historyStore */.O)(ctx, flags.history, undefined).read({ newest: 0 })).series;
+        return (0,open_history/* historyStore */.O)(ctx, flags.history, series || undefined);
+    }
+    if (flags.store === 'artifact') {
+        throw new input_error/* InputError */.d('the artifact store can only be changed from inside a workflow run', {
+            where: '--store',
+            fix: 'run the action from a manual workflow run with the `maintenance` input (examples/workflows/maintenance.yml)',
+        });
+    }
+    if (flags.store !== 'branch') {
+        throw new input_error/* InputError */.d(`unknown store ${JSON.stringify(flags.store)}`, {
+            where: '--store',
+            fix: `use one of ${STORES.join(', ')}`,
+        });
+    }
+    const env = ctx.io.env;
+    const series = flags.series;
+    if (series === undefined || series === '')
+        throw new input_error/* InputError */.d('a data branch holds one file per series: say which', {
+            where: '--series',
+            fix: 'pass --series with the `series` of the workflow that records it',
+        });
+    const [owner, repo, ...extra] = (flags.repo ?? env.GITHUB_REPOSITORY ?? '').split('/');
+    if (!owner || !repo || extra.length > 0)
+        throw new input_error/* InputError */.d('the repository of the data branch is not known', {
+            where: '--repo',
+            fix: 'pass --repo OWNER/NAME (or set GITHUB_REPOSITORY)',
+        });
+    const token = env.GITHUB_TOKEN ?? '';
+    if (token === '')
+        throw new input_error/* InputError */.d('GITHUB_TOKEN is not set, but the data branch is read and written through the GitHub API', {
+            where: 'GITHUB_TOKEN',
+            fix: 'export GITHUB_TOKEN with a token that may write the repository contents (e.g. `gh auth token`)',
+        });
+    const [{ createOctokitApi }, { createBranchStore }, { dataBranchName }] = await Promise.all([
+        __nccwpck_require__.e(/* import() */ 679).then(__nccwpck_require__.bind(__nccwpck_require__, 7679)),
+        __nccwpck_require__.e(/* import() */ 166).then(__nccwpck_require__.bind(__nccwpck_require__, 2166)),
+        __nccwpck_require__.e(/* import() */ 716).then(__nccwpck_require__.bind(__nccwpck_require__, 1716)),
+    ]);
+    // BELLGATE_RETRY_UNIT_MS shortens the spacing of writes and the backoff for tests, as in the action.
+    const unitMs = Math.max(1, Number(env.BELLGATE_RETRY_UNIT_MS) || 1000);
+    const api = createOctokitApi({
+        token,
+        baseUrl: env.GITHUB_API_URL || 'https://api.github.com',
+        owner,
+        repo,
+        retry: { retries: 3, unitMs },
     });
+    if (api.gitData === undefined)
+        throw new Error('the GitHub client has no Git Data calls');
+    return createBranchStore({ api: api.gitData, branch: dataBranchName(flags.history), series, unitMs });
+}
+
+;// CONCATENATED MODULE: ./src/cli/run/maintain.ts
+
+
+/**
+ * The work of `bellgate mark|drop|rename|runs`: one maintenance operation on the store the flags
+ * name; what it did goes to stdout.
+ * @throws InputError (bad flags, no such run or metric), StoreError (exit 3).
+ * @example await runMaintenance(ctx, { history: 'h.jsonl', store: 'file' }, { op: 'runs' })
+ */
+async function runMaintenance(ctx, flags, m) {
+    const store = await openStore(ctx, flags);
+    const done = await maintain(store, m, ctx.now());
+    for (const line of done.skipped)
+        ctx.io.stderr(`bellgate: ${line}\n`);
+    for (const line of done.lines)
+        ctx.io.stdout(`${line}\n`);
 }
 
 ;// CONCATENATED MODULE: ./src/cli/run/import.ts
 
 
-
-
-/** How many skipped rows are listed one by one before the rest are counted. */
-const SHOWN_SKIPS = 20;
 /**
- * The work of `bellgate import`: merges the past runs into
- * the history file by run id; rows that cannot be used are listed on stderr with place and reason.
+ * The work of `bellgate import`: merges the past runs into the store (a history file, or a data
+ * branch) by run id; rows that cannot be used are listed on stderr with place and reason.
  * @throws InputError (unreadable runs file), StoreError (history unreadable or unwritable).
- * @example await runImport(ctx, { history: 'h.json', runs: 'past-runs.jsonl', series: 'default' })
+ * @example await runImport(ctx, { history: 'h.json', store: 'file', runs: 'past-runs.jsonl', series: 'default' })
  */
 async function runImport(ctx, options) {
     const text = await readFlagFile(ctx, '--runs', options.runs, false);
-    const parsed = parseImportRuns(text, options.runs);
-    const { history, store } = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series);
-    const result = importRuns(history, parsed);
-    const skipped = result.skipped;
-    // Reasons quote names from the file: no control or bidi character reaches the terminal.
-    for (const skip of skipped.slice(0, SHOWN_SKIPS))
-        ctx.io.stderr((0,visible_text/* visibleText */.Q)(`bellgate: skipped ${skip.where}: ${skip.reason}`) + '\n');
-    if (skipped.length > SHOWN_SKIPS)
-        ctx.io.stderr(`bellgate: ... and ${skipped.length - SHOWN_SKIPS} more skipped rows\n`);
-    // The store merges what it holds at the moment of writing (under its lock) with these runs.
-    const runs = store
-        ? (await store.update({ kind: 'merge', history: result.incoming })).runs
-        : result.history.runs.length;
-    ctx.io.stdout(`imported ${options.runs}: ${result.added} runs added, ${result.updated} updated, ${result.unchanged} unchanged, ${skipped.length} skipped; ` +
-        `${runs} runs in ${store?.describe() ?? options.history}\n`);
+    await runMaintenance(ctx, options, { op: 'import', text, source: options.runs });
 }
 
 ;// CONCATENATED MODULE: ./src/cli/commands/import.ts
@@ -13914,7 +14086,7 @@ async function runImport(ctx, options) {
 
 /**
  * `bellgate import`: merges past results (JSON Lines or CSV, detected by content) into the history
- * file by run id, so a project can start with the history it already has. Rows that cannot be used
+ * file or data branch by run id, so a project can start with the history it already has. Rows that cannot be used
  * are listed on stderr with their place and reason; the rest are imported.
  */
 function importCommand(ctx) {
@@ -13922,21 +14094,68 @@ function importCommand(ctx) {
     historyOption(cmd, true, 'history file to merge into (created when missing)');
     cmd.requiredOption('--runs <file>', 'past runs: JSON Lines (one run a line) or CSV');
     seriesOption(cmd);
+    cmd
+        .option('--store <kind>', 'where the history lives: file or branch (artifact: use a manual workflow run)', 'file')
+        .option('--repo <owner/name>', 'repository of the data branch (default: GITHUB_REPOSITORY); token in GITHUB_TOKEN');
     examples(cmd, [
         'bellgate import --history .bellgate/history.jsonl --runs past-runs.jsonl',
+        'GITHUB_TOKEN=... bellgate import --store branch --history bellgate-data --series bench/linux --runs past.csv',
         'bellgate import --history h.json --runs nightly.csv --series nightly',
     ]);
     cmd.addHelpText('after', '\nJSON Lines: {"id":"812-1","time":"2026-05-04T10:20:30Z","sha":"3f2a9c1","ref":"refs/heads/main","metrics":{"latency/p50":12.4}}\nCSV: id,time,sha,ref,name,value[,unit] (one row per metric) or id,time,sha,ref,<one column per metric>\n');
     return cmd.action((options) => runImport(ctx, options));
 }
 
-// EXTERNAL MODULE: ./src/history/file-store.ts + 3 modules
-var file_store = __nccwpck_require__(4496);
+// EXTERNAL MODULE: ./src/history/file-store.ts + 2 modules
+var file_store = __nccwpck_require__(6580);
 // EXTERNAL MODULE: ./src/history/document.ts
 var history_document = __nccwpck_require__(8363);
 // EXTERNAL MODULE: ./src/history/lines.ts
 var history_lines = __nccwpck_require__(1483);
+// EXTERNAL MODULE: ./node_modules/simple-statistics/dist/simple-statistics.mjs
+var simple_statistics = __nccwpck_require__(5521);
+;// CONCATENATED MODULE: ./src/history/unit-mixups.ts
+
+
+/** Ratios between units of one dimension that a value written in the wrong unit shows. */
+const FACTORS = [1000, 1024, 1e6, 1024 ** 2, 60, 3600];
+const NEAR = 0.1;
+const MIN_VALUES = 5;
+/**
+ * Values that look written in another unit than their column's (mixed units, e.g. 0.121 recorded
+ * as "ms" in a column of about 121 ms): off the column's median by about a unit ratio (1000, 1024,
+ * 10^6, 2^20, 60, 3600, either way, within 10%), for columns in a unit Bellgate converts and with
+ * at least 5 values. Pure; O(values).
+ * @example unitMixups(history) // [{ run: '81-1', metric: 'time/parse', problem: '...' }]
+ */
+function unitMixups(h) {
+    const out = [];
+    for (const [name, column] of h.columns) {
+        if (column.unit === undefined || (0,units/* unitScale */.$G)(column.unit) === undefined)
+            continue;
+        const held = column.values.filter((v) => Number.isFinite(v) && v > 0);
+        if (held.length < MIN_VALUES)
+            continue;
+        const mid = (0,simple_statistics/* median */.JZ)(held);
+        column.values.forEach((v, i) => {
+            if (!(Number.isFinite(v) && v > 0))
+                return;
+            const ratio = v / mid;
+            const factor = FACTORS.find((f) => Math.abs(ratio / f - 1) < NEAR || Math.abs(ratio * f - 1) < NEAR);
+            if (factor === undefined)
+                return;
+            const run = h.runs[i].id;
+            out.push({
+                run,
+                problem: `mixed units: ${JSON.stringify(name)} is ${v} ${column.unit}, about ${ratio > 1 ? factor : `1/${factor}`} of its median ${mid} ${column.unit}, as if it was written in another unit; drop the run (bellgate drop ${run}) or re-import it in ${column.unit}`,
+            });
+        });
+    }
+    return out;
+}
+
 ;// CONCATENATED MODULE: ./src/history/verify.ts
+
 
 
 
@@ -13954,7 +14173,8 @@ const FIELDS = {
  * object, or not a run, tombstone or mark; wrong types; more values than metrics; non-finite
  * values; a field this format does not have; a time that is not ISO-8601; a mark for a run the
  * document does not hold; metric names every metric reader would refuse (control or
- * bidirectional-override characters, over 512 characters); a torn last line. At most 200 problems
+ * bidirectional-override characters, over 512 characters); a torn last line; mixed units (a value
+ * off its column's median by about a unit ratio, unit-mixups.ts). At most 200 problems
  * are listed, then a count of the rest.
  *
  * @example verifyHistory('{"schema":"bellgate.history/9"}\n')
@@ -13972,6 +14192,7 @@ function verifyHistory(text) {
                 sink('1', `metrics[${i}]: ${problem}`);
         });
         const runIds = new Set(decoded.history.runs.map((r) => r.id));
+        const lineOf = new Map();
         let number = 0;
         for (const line of lines.forward()) {
             number += 1;
@@ -13989,15 +14210,19 @@ function verifyHistory(text) {
             const kind = 'drop' in value ? 'drop' : 'mark' in value ? 'mark' : 'id' in value ? 'run' : undefined;
             if (kind === undefined)
                 continue;
+            if (kind === 'run' && typeof value.id === 'string')
+                lineOf.set(value.id, number);
             for (const field of Object.keys(value)) {
                 if (!FIELDS[kind].has(field))
                     sink(String(number), `field ${JSON.stringify(field)} is not part of a ${kind} line`);
             }
-            if (typeof value.time === 'string' && (0,iso_time/* parseIsoTime */.s)(value.time) === undefined)
+            if (typeof value.time === 'string' && (0,iso_time/* parseIsoTime */.sX)(value.time) === undefined)
                 sink(String(number), `time ${JSON.stringify(value.time)} is not an ISO-8601 date-time`);
             if (kind === 'mark' && typeof value.mark === 'string' && !runIds.has(value.mark))
                 sink(String(number), `the mark is for run ${JSON.stringify(value.mark)}, which the history does not hold`);
         }
+        for (const m of unitMixups(decoded.history))
+            sink(String(lineOf.get(m.run) ?? ''), m.problem);
     }
     finish();
     return problems;
@@ -14077,8 +14302,8 @@ function reportCommand(ctx) {
 
 // EXTERNAL MODULE: external "node:fs"
 var external_node_fs_ = __nccwpck_require__(3024);
-;// CONCATENATED MODULE: external "node:url"
-const external_node_url_namespaceObject = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
+// EXTERNAL MODULE: external "node:url"
+var external_node_url_ = __nccwpck_require__(3136);
 ;// CONCATENATED MODULE: ./src/cli/demo-data.ts
 
 
@@ -14095,7 +14320,7 @@ const DEMO_FILES = { history: 'history.jsonl', run: 'pr-run.json', config: 'bell
 function locateDemo(cwd, script, moduleUrl = import.meta.url) {
     const starts = [];
     try {
-        starts.push((0,external_node_path_.dirname)((0,external_node_url_namespaceObject.fileURLToPath)(moduleUrl)));
+        starts.push((0,external_node_path_.dirname)((0,external_node_url_.fileURLToPath)(moduleUrl)));
     }
     catch {
         // A bundler may leave a non-file URL here; the script path and cwd still work.
@@ -16151,7 +16376,86 @@ function sinceCommand(ctx) {
     return cmd.action((ref, options) => (0,since/* runSince */.g)(ctx, ref, options));
 }
 
+;// CONCATENATED MODULE: ./src/cli/commands/mark.ts
+
+
+
+
+/**
+ * `bellgate mark RUN`: a level change starts at RUN (an intended change merged without the accept
+ * label): the metrics it names are judged only on runs since it.
+ */
+function markCommand(ctx) {
+    const cmd = new Command('mark')
+        .description('say that a level change starts at a run (an intended change)')
+        .argument('<run>', 'id of the run the new level starts at (see `bellgate runs`)');
+    storeOptions(cmd)
+        .option('--metric <glob...>', 'only the metrics matching these globs (default: every metric)')
+        .option('--note <text>', 'why, for the next reader');
+    examples(cmd, [
+        'bellgate mark 8123-1 --history .bellgate/history.jsonl --metric "build/*" --note "new compiler"',
+        'GITHUB_TOKEN=... bellgate mark 8123-1 --store branch --history bellgate-data --series bench/linux',
+    ]);
+    return cmd.action((run, o) => runMaintenance(ctx, o, {
+        op: 'mark',
+        run,
+        ...(o.metric ? { metrics: o.metric } : {}),
+        ...(o.note ? { note: o.note } : {}),
+    }));
+}
+
+;// CONCATENATED MODULE: ./src/cli/commands/drop.ts
+
+
+
+
+/** `bellgate drop RUN`: removes a bad run (a broken runner); a tombstone keeps it out after merges. */
+function dropCommand(ctx) {
+    const cmd = new Command('drop')
+        .description('remove a bad run for good (it stays dropped after merges)')
+        .argument('<run>', 'id of the run to drop (see `bellgate runs`)');
+    storeOptions(cmd).option('--reason <text>', 'why, kept with the tombstone');
+    examples(cmd, ['bellgate drop 8123-1 --history .bellgate/history.jsonl --reason "broken runner"']);
+    return cmd.action((run, o) => runMaintenance(ctx, o, { op: 'drop', run, ...(o.reason ? { reason: o.reason } : {}) }));
+}
+
+;// CONCATENATED MODULE: ./src/cli/commands/rename.ts
+
+
+
+
+/** `bellgate rename FROM TO`: gives a metric a new name, keeping its history. */
+function renameCommand(ctx) {
+    const cmd = new Command('rename')
+        .description('give a metric a new name, keeping its history')
+        .argument('<from>', 'the metric name in the history')
+        .argument('<to>', 'its new name');
+    storeOptions(cmd);
+    examples(cmd, ['bellgate rename build/compile build/compile-ms --history .bellgate/history.jsonl']);
+    return cmd.action((from, to, o) => runMaintenance(ctx, o, { op: 'rename', from, to }));
+}
+
+;// CONCATENATED MODULE: ./src/cli/commands/runs.ts
+
+
+
+
+/** `bellgate runs`: lists the runs of a history, oldest first, with their marks and sizes. */
+function runsCommand(ctx) {
+    const cmd = new Command('runs').description('list the runs of a history, their level marks and sizes');
+    storeOptions(cmd);
+    examples(cmd, [
+        'bellgate runs --history .bellgate/history.jsonl',
+        'GITHUB_TOKEN=... bellgate runs --store branch --history bellgate-data --series bench/linux --repo acme/router',
+    ]);
+    return cmd.action((o) => runMaintenance(ctx, o, { op: 'runs' }));
+}
+
 ;// CONCATENATED MODULE: ./src/cli/main.ts
+
+
+
+
 
 
 
@@ -16174,6 +16478,10 @@ const COMMANDS = [
     sinceCommand,
     importCommand,
     verifyCommand,
+    runsCommand,
+    markCommand,
+    dropCommand,
+    renameCommand,
     demoCommand,
 ];
 /** Version shown by --version; kept in step with package.json by the release steps in DEVELOPERS.md. */
@@ -16236,7 +16544,7 @@ function buildProgram(ctx) {
 /* harmony export */   j: () => (/* binding */ openHistory)
 /* harmony export */ });
 /* harmony import */ var _errors_visible_text_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(81);
-/* harmony import */ var _history_file_store_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4496);
+/* harmony import */ var _history_file_store_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(6580);
 /* harmony import */ var _history_history_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3328);
 /* harmony import */ var _paths_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5450);
 
@@ -20419,7 +20727,7 @@ function errorCode(error) {
 
 /***/ }),
 
-/***/ 1027:
+/***/ 1229:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -21481,6 +21789,226 @@ function resolutionFloor(m) {
     return c === 0 ? resolution : resolution / Math.abs(c);
 }
 
+// EXTERNAL MODULE: ./src/gate/judge.ts + 2 modules
+var judge = __nccwpck_require__(4697);
+;// CONCATENATED MODULE: ./src/gate/report.ts
+const REPORT_SCHEMA = 'bellgate.report/1';
+
+;// CONCATENATED MODULE: ./src/gate/shared-verdict.ts
+
+
+
+
+/**
+ * Judges a group's shared move in this run against the shared moves of its baseline runs
+ * (issue 13 item 3): the same predictive as a metric's own move — the history's slow side
+ * fitted with a half Student-t (halfTailShape), scale sqrt(1 + 1/n) for the centre's uncertainty,
+ * degrees of freedom combined with n - 1 — and `unsettled` when its slow-side tail is below the
+ * run's budget: every timing moved together beyond what the history has shown, which one run
+ * cannot tell from a change that slowed everything (a re-run, or a baseline run on the same
+ * runner, tells). A faster shared move is never unsettled. Learning below min-runs shared moves.
+ * The group's moves are in its members' deviation units (the log scale for timings); the result's
+ * `move` and `largest` are relative changes.
+ */
+function judgeSharedMove(moves, config) {
+    const { group } = moves;
+    const log = group.members.every((c) => c.log);
+    const relative = (d) => (log ? Math.expm1(d) : d);
+    const base = {
+        name: group.name,
+        status: 'ok',
+        members: moves.members,
+        move: relative(moves.now),
+        n: moves.history.length,
+    };
+    const minRuns = Math.max(...group.members.map((c) => c.settings.minRuns));
+    if (moves.history.length < minRuns)
+        return { ...base, status: 'learning' };
+    base.largest = relative(Math.max(...moves.history));
+    const centre = (0,simple_statistics/* median */.JZ)(moves.history);
+    const residuals = moves.history.map((s) => s - centre);
+    const n = residuals.length;
+    const sd = Math.sqrt(residuals.reduce((sum, e) => sum + e * e, 0) / Math.max(1, n - 1));
+    const move = moves.now - centre;
+    if (!(sd > 0))
+        return { ...base, tail: move > 0 ? 0 : 1, status: move > 0 ? 'unsettled' : 'ok' };
+    const shape = halfTailShape(residuals.map((e) => e / sd)) ?? { nu: Infinity, scale: 1, n: 0 };
+    const scale = shape.scale * sd * Math.sqrt(1 + 1 / n);
+    const tail = (0,tails/* studentTail */.gq)(move / scale, (0,judge/* combinedDof */.vA)(shape.nu, n - 1), 'upper');
+    return { ...base, tail, status: tail < config.budget ? 'unsettled' : 'ok' };
+}
+
+// EXTERNAL MODULE: ./src/gate/missing-metrics.ts
+var missing_metrics = __nccwpck_require__(4719);
+;// CONCATENATED MODULE: ./src/gate/verdict.ts
+/**
+ * The run's verdict (DESIGN.md, issue 13 item 3): `regressed` when any metric regressed
+ * (`accepted` instead when the pull request carries the accept label); else `unsettled` when a
+ * shared move is beyond what the history has shown; `learning` when no metric had enough history
+ * to be judged; otherwise `pass`.
+ * @example decideVerdict([{ status: 'ok' }], [], false) // 'pass'
+ */
+function decideVerdict(metrics, shared, accepted) {
+    if (metrics.some((m) => m.status === 'regressed'))
+        return accepted ? 'accepted' : 'regressed';
+    if (shared.some((s) => s.status === 'unsettled'))
+        return 'unsettled';
+    return metrics.some((m) => JUDGED.has(m.status)) ? 'pass' : 'learning';
+}
+/** Statuses that mean the metric had enough history to be judged. */
+const JUDGED = new Set(['ok', 'regressed', 'improved']);
+const RANK = {
+    regressed: 0,
+    improved: 1,
+    ok: 2,
+    learning: 2,
+    new: 2,
+    missing: 2,
+    ignored: 2,
+};
+/**
+ * Report order: regressed first, then improved, then the rest, each by name (code-unit order,
+ * the same on every machine). Returns a new array.
+ * @example orderMetrics(results).map((m) => m.status) // ['regressed', 'improved', 'ok', 'new']
+ */
+function orderMetrics(metrics) {
+    return [...metrics].sort((a, b) => RANK[a.status] - RANK[b.status] || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
+}
+
+;// CONCATENATED MODULE: ./src/gate/gate.ts
+
+
+
+
+
+
+
+
+
+
+/**
+ * The decision (DESIGN.md "Statistics" and "Real CI noise", issue 13): every metric of the run and
+ * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
+ * the run's shared move and its own move (takeApart); the own moves get a noise model that borrows
+ * strength across metrics of one noise shape (noiseModel) and are scored against their predictive
+ * Student-t (scoreMember); family control holds the chance of any false alarm in the run at the
+ * budget (Holm by default) and each metric is decided (decide); each group's shared move is judged
+ * against the history's (judgeSharedMove); then the verdict. Pure: no I/O, no clock, no state.
+ * Throws InputError for values the settings cannot take (e.g. <= 0 with `transform: log`).
+ * @example runGate({ config: defaultConfig(), history, run, series: 'main' }).verdict // 'pass'
+ */
+function runGate(input) {
+    const { config, history, run } = input;
+    const sorted = sortMetrics(config, history, run);
+    const formed = formGroups(config, sorted.candidates);
+    const metrics = [...sorted.finished, ...formed.finished];
+    const shared = [];
+    const members = [];
+    for (const group of formed.groups) {
+        const parts = takeApart(group, history, input.runner);
+        members.push(...parts.members);
+        if (parts.shared !== undefined && group.kind !== 'reference')
+            shared.push(judgeSharedMove(parts.shared, config));
+    }
+    const noise = noiseModel(members);
+    const family = config.family !== 'none';
+    // The Bonferroni share of the budget bounds every metric's Holm level from below, so the
+    // detectable computed at it holds whatever rank the metric takes.
+    const judged = members.filter((m) => !(0,judge/* isLearning */.lz)(m, noise.get(m))).length;
+    const share = family ? config.budget / Math.max(1, judged) : undefined;
+    const scored = [];
+    for (const m of members) {
+        const s = (0,judge/* scoreMember */.zG)(m, noise.get(m), share);
+        if ('result' in s)
+            scored.push(s);
+        else
+            metrics.push(s);
+    }
+    if (config.family !== 'none' && share !== undefined) {
+        const tails = scored.map((s) => s.worseTail);
+        const adjusted = (0,model_family/* adjustTails */.F)(tails, config.family);
+        const levels = config.family === 'holm'
+            ? (0,model_family/* holmLevels */.E)(tails, config.budget)
+            : config.family === 'bonferroni'
+                ? tails.map(() => share)
+                : fdrLevels(tails, config.budget);
+        scored.forEach((s, i) => metrics.push(decide(s, { adjusted: adjusted[i], level: levels[i], budget: config.budget, share })));
+    }
+    else {
+        for (const s of scored)
+            metrics.push(decide(s, undefined));
+    }
+    holdEpisodes(members, metrics, shared);
+    const verdict = decideVerdict(metrics, shared, input.accepted === true);
+    const report = {
+        schema: REPORT_SCHEMA,
+        verdict,
+        blocks: verdict === 'regressed' || (verdict === 'unsettled' && config.unsettled === 'block'),
+        series: input.series,
+        family: config.family,
+        budget: config.budget,
+        unsettled: config.unsettled,
+        ...(input.runner === undefined ? {} : { runner: input.runner }),
+        metrics: orderMetrics(metrics),
+        shared: shared.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
+    };
+    const missing = (0,missing_metrics/* missingMetrics */.u)(config, history, run);
+    if (missing.of > 0)
+        report.missing = missing;
+    if (run.notFitted !== undefined && run.notFitted.size > 0)
+        report.notJudged = [...run.notFitted]
+            .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
+            .map(([name, reason]) => ({ name, reason }));
+    return report;
+}
+/** Benjamini-Hochberg's level of each tail at its rank i (ascending, from 1): i alpha / m. */
+function fdrLevels(tails, alpha) {
+    const order = tails.map((_, i) => i).sort((a, b) => tails[a] - tails[b] || a - b);
+    const levels = new Array(tails.length);
+    order.forEach((index, rank) => (levels[index] = ((rank + 1) * alpha) / tails.length));
+    return levels;
+}
+/**
+ * In a slow episode (runStates) a timing far out may be the episode's work or a real change, and
+ * one run cannot tell which: like a shared move beyond the history's, it is its own outcome. A
+ * timing that would regress in such a run is held (status ok, named in its group's `held`) and
+ * the group's shared move becomes `unsettled`, which asks for a re-run. Mutates the results.
+ */
+function holdEpisodes(members, metrics, shared) {
+    const calmless = members.filter((m) => !m.calmNow);
+    const episode = new Set(calmless.map((m) => m.candidate.name));
+    for (const g of shared)
+        if (calmless.some((m) => m.group.name === g.name))
+            g.episode = true;
+    for (const r of metrics) {
+        if (r.status !== 'regressed' || !episode.has(r.name))
+            continue;
+        const group = shared.find((g) => g.name === r.group);
+        if (group === undefined)
+            continue;
+        r.status = 'ok';
+        group.status = 'unsettled';
+        (group.held ??= []).push(r.name);
+    }
+}
+
+
+/***/ }),
+
+/***/ 4697:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+
+// EXPORTS
+__nccwpck_require__.d(__webpack_exports__, {
+  bV: () => (/* binding */ LEVEL_MIN_RUNS),
+  vA: () => (/* binding */ combinedDof),
+  lz: () => (/* binding */ isLearning),
+  zG: () => (/* binding */ scoreMember)
+});
+
+// UNUSED EXPORTS: DETECT_POWER, RECENT_VALUES
+
 ;// CONCATENATED MODULE: ./src/model/detectable.ts
 /**
  * The smallest shift d on the worse side that a one-sided test flags with probability `power`,
@@ -21496,6 +22024,8 @@ function detectableShift(threshold, lower, power, quantile) {
     return threshold + lower.scale * quantile(1 - power, lower.nu);
 }
 
+// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
+var tails = __nccwpck_require__(2170);
 ;// CONCATENATED MODULE: ./src/gate/tolerance.ts
 /**
  * The tolerance as a share of the baseline centre (on the metric's own scale): a percent as is,
@@ -21701,207 +22231,6 @@ function runsToReach(noise, level, cutoff, both, goal) {
     return hi;
 }
 
-;// CONCATENATED MODULE: ./src/gate/report.ts
-const REPORT_SCHEMA = 'bellgate.report/1';
-
-;// CONCATENATED MODULE: ./src/gate/shared-verdict.ts
-
-
-
-
-/**
- * Judges a group's shared move in this run against the shared moves of its baseline runs
- * (issue 13 item 3): the same predictive as a metric's own move — the history's slow side
- * fitted with a half Student-t (halfTailShape), scale sqrt(1 + 1/n) for the centre's uncertainty,
- * degrees of freedom combined with n - 1 — and `unsettled` when its slow-side tail is below the
- * run's budget: every timing moved together beyond what the history has shown, which one run
- * cannot tell from a change that slowed everything (a re-run, or a baseline run on the same
- * runner, tells). A faster shared move is never unsettled. Learning below min-runs shared moves.
- * The group's moves are in its members' deviation units (the log scale for timings); the result's
- * `move` and `largest` are relative changes.
- */
-function judgeSharedMove(moves, config) {
-    const { group } = moves;
-    const log = group.members.every((c) => c.log);
-    const relative = (d) => (log ? Math.expm1(d) : d);
-    const base = {
-        name: group.name,
-        status: 'ok',
-        members: moves.members,
-        move: relative(moves.now),
-        n: moves.history.length,
-    };
-    const minRuns = Math.max(...group.members.map((c) => c.settings.minRuns));
-    if (moves.history.length < minRuns)
-        return { ...base, status: 'learning' };
-    base.largest = relative(Math.max(...moves.history));
-    const centre = (0,simple_statistics/* median */.JZ)(moves.history);
-    const residuals = moves.history.map((s) => s - centre);
-    const n = residuals.length;
-    const sd = Math.sqrt(residuals.reduce((sum, e) => sum + e * e, 0) / Math.max(1, n - 1));
-    const move = moves.now - centre;
-    if (!(sd > 0))
-        return { ...base, tail: move > 0 ? 0 : 1, status: move > 0 ? 'unsettled' : 'ok' };
-    const shape = halfTailShape(residuals.map((e) => e / sd)) ?? { nu: Infinity, scale: 1, n: 0 };
-    const scale = shape.scale * sd * Math.sqrt(1 + 1 / n);
-    const tail = (0,tails/* studentTail */.gq)(move / scale, combinedDof(shape.nu, n - 1), 'upper');
-    return { ...base, tail, status: tail < config.budget ? 'unsettled' : 'ok' };
-}
-
-// EXTERNAL MODULE: ./src/gate/missing-metrics.ts
-var missing_metrics = __nccwpck_require__(4719);
-;// CONCATENATED MODULE: ./src/gate/verdict.ts
-/**
- * The run's verdict (DESIGN.md, issue 13 item 3): `regressed` when any metric regressed
- * (`accepted` instead when the pull request carries the accept label); else `unsettled` when a
- * shared move is beyond what the history has shown; `learning` when no metric had enough history
- * to be judged; otherwise `pass`.
- * @example decideVerdict([{ status: 'ok' }], [], false) // 'pass'
- */
-function decideVerdict(metrics, shared, accepted) {
-    if (metrics.some((m) => m.status === 'regressed'))
-        return accepted ? 'accepted' : 'regressed';
-    if (shared.some((s) => s.status === 'unsettled'))
-        return 'unsettled';
-    return metrics.some((m) => JUDGED.has(m.status)) ? 'pass' : 'learning';
-}
-/** Statuses that mean the metric had enough history to be judged. */
-const JUDGED = new Set(['ok', 'regressed', 'improved']);
-const RANK = {
-    regressed: 0,
-    improved: 1,
-    ok: 2,
-    learning: 2,
-    new: 2,
-    missing: 2,
-    ignored: 2,
-};
-/**
- * Report order: regressed first, then improved, then the rest, each by name (code-unit order,
- * the same on every machine). Returns a new array.
- * @example orderMetrics(results).map((m) => m.status) // ['regressed', 'improved', 'ok', 'new']
- */
-function orderMetrics(metrics) {
-    return [...metrics].sort((a, b) => RANK[a.status] - RANK[b.status] || (a.name < b.name ? -1 : a.name > b.name ? 1 : 0));
-}
-
-;// CONCATENATED MODULE: ./src/gate/gate.ts
-
-
-
-
-
-
-
-
-
-
-/**
- * The decision (DESIGN.md "Statistics" and "Real CI noise", issue 13): every metric of the run and
- * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
- * the run's shared move and its own move (takeApart); the own moves get a noise model that borrows
- * strength across metrics of one noise shape (noiseModel) and are scored against their predictive
- * Student-t (scoreMember); family control holds the chance of any false alarm in the run at the
- * budget (Holm by default) and each metric is decided (decide); each group's shared move is judged
- * against the history's (judgeSharedMove); then the verdict. Pure: no I/O, no clock, no state.
- * Throws InputError for values the settings cannot take (e.g. <= 0 with `transform: log`).
- * @example runGate({ config: defaultConfig(), history, run, series: 'main' }).verdict // 'pass'
- */
-function runGate(input) {
-    const { config, history, run } = input;
-    const sorted = sortMetrics(config, history, run);
-    const formed = formGroups(config, sorted.candidates);
-    const metrics = [...sorted.finished, ...formed.finished];
-    const shared = [];
-    const members = [];
-    for (const group of formed.groups) {
-        const parts = takeApart(group, history, input.runner);
-        members.push(...parts.members);
-        if (parts.shared !== undefined && group.kind !== 'reference')
-            shared.push(judgeSharedMove(parts.shared, config));
-    }
-    const noise = noiseModel(members);
-    const family = config.family !== 'none';
-    // The Bonferroni share of the budget bounds every metric's Holm level from below, so the
-    // detectable computed at it holds whatever rank the metric takes.
-    const judged = members.filter((m) => !isLearning(m, noise.get(m))).length;
-    const share = family ? config.budget / Math.max(1, judged) : undefined;
-    const scored = [];
-    for (const m of members) {
-        const s = scoreMember(m, noise.get(m), share);
-        if ('result' in s)
-            scored.push(s);
-        else
-            metrics.push(s);
-    }
-    if (config.family !== 'none' && share !== undefined) {
-        const tails = scored.map((s) => s.worseTail);
-        const adjusted = (0,model_family/* adjustTails */.F)(tails, config.family);
-        const levels = config.family === 'holm'
-            ? (0,model_family/* holmLevels */.E)(tails, config.budget)
-            : config.family === 'bonferroni'
-                ? tails.map(() => share)
-                : fdrLevels(tails, config.budget);
-        scored.forEach((s, i) => metrics.push(decide(s, { adjusted: adjusted[i], level: levels[i], budget: config.budget, share })));
-    }
-    else {
-        for (const s of scored)
-            metrics.push(decide(s, undefined));
-    }
-    holdEpisodes(members, metrics, shared);
-    const verdict = decideVerdict(metrics, shared, input.accepted === true);
-    const report = {
-        schema: REPORT_SCHEMA,
-        verdict,
-        blocks: verdict === 'regressed' || (verdict === 'unsettled' && config.unsettled === 'block'),
-        series: input.series,
-        family: config.family,
-        budget: config.budget,
-        unsettled: config.unsettled,
-        ...(input.runner === undefined ? {} : { runner: input.runner }),
-        metrics: orderMetrics(metrics),
-        shared: shared.sort((a, b) => (a.name < b.name ? -1 : a.name > b.name ? 1 : 0)),
-    };
-    const missing = (0,missing_metrics/* missingMetrics */.u)(config, history, run);
-    if (missing.of > 0)
-        report.missing = missing;
-    if (run.notFitted !== undefined && run.notFitted.size > 0)
-        report.notJudged = [...run.notFitted]
-            .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0))
-            .map(([name, reason]) => ({ name, reason }));
-    return report;
-}
-/** Benjamini-Hochberg's level of each tail at its rank i (ascending, from 1): i alpha / m. */
-function fdrLevels(tails, alpha) {
-    const order = tails.map((_, i) => i).sort((a, b) => tails[a] - tails[b] || a - b);
-    const levels = new Array(tails.length);
-    order.forEach((index, rank) => (levels[index] = ((rank + 1) * alpha) / tails.length));
-    return levels;
-}
-/**
- * In a slow episode (runStates) a timing far out may be the episode's work or a real change, and
- * one run cannot tell which: like a shared move beyond the history's, it is its own outcome. A
- * timing that would regress in such a run is held (status ok, named in its group's `held`) and
- * the group's shared move becomes `unsettled`, which asks for a re-run. Mutates the results.
- */
-function holdEpisodes(members, metrics, shared) {
-    const calmless = members.filter((m) => !m.calmNow);
-    const episode = new Set(calmless.map((m) => m.candidate.name));
-    for (const g of shared)
-        if (calmless.some((m) => m.group.name === g.name))
-            g.episode = true;
-    for (const r of metrics) {
-        if (r.status !== 'regressed' || !episode.has(r.name))
-            continue;
-        const group = shared.find((g) => g.name === r.group);
-        if (group === undefined)
-            continue;
-        r.status = 'ok';
-        group.status = 'unsettled';
-        (group.held ??= []).push(r.name);
-    }
-}
-
 
 /***/ }),
 
@@ -21958,6 +22287,165 @@ function holdsAtLeast(values, last, wanted) {
 
 /***/ }),
 
+/***/ 5201:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   hX: () => (/* binding */ applyChange),
+/* harmony export */   nR: () => (/* binding */ markRun),
+/* harmony export */   v: () => (/* binding */ listRuns)
+/* harmony export */ });
+/* unused harmony exports dropRun, renameMetric */
+/* harmony import */ var _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3712);
+/* harmony import */ var _inputs_names_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5585);
+/* harmony import */ var _document_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(8363);
+/* harmony import */ var _history_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(3328);
+/* harmony import */ var _merge_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(4292);
+/**
+ * Everything a store can be asked to change in a history, as data (HistoryChange), and the pure
+ * functions that apply it. Stores take a change rather than a finished History so each can apply
+ * it to what is stored at the moment of writing (under the file lock, after the branch's newest
+ * head, over every artifact): a writer never overwrites what another added since it read.
+ * Applying a change again to its own result changes nothing more, so a store may retry freely.
+ * The maintenance commands (mark, drop, runs, rename) are built on these.
+ */
+
+
+
+
+
+/**
+ * Applies a change to a whole history. Pure.
+ * @throws InputError when the change cannot apply (no such run or metric, a dropped id, a unit that does not fit).
+ * @example applyChange(h, { kind: 'drop', tombstone: { id: '81-1', reason: 'noisy runner' } }).history.dropped?.has('81-1') // true
+ */
+function applyChange(h, change) {
+    switch (change.kind) {
+        case 'record': {
+            const { history, replaced } = (0,_merge_js__WEBPACK_IMPORTED_MODULE_3__/* .appendRun */ .ah)(h, change.info, change.run);
+            const trimmed = (0,_merge_js__WEBPACK_IMPORTED_MODULE_3__/* .trimHistory */ .lj)(history, change.keep);
+            return replaced === undefined ? { history: trimmed } : { history: trimmed, replaced };
+        }
+        case 'mark':
+            return { history: markRun(h, change.id, change.mark) };
+        case 'drop':
+            return { history: dropRun(h, change.tombstone) };
+        case 'rename':
+            return { history: renameMetric(h, change.from, change.to) };
+        case 'merge':
+            return { history: (0,_merge_js__WEBPACK_IMPORTED_MODULE_3__/* .mergeHistories */ .dk)(h, change.history) };
+    }
+}
+/**
+ * Adds a level mark to the run `id` (or to the later attempt that replaced it). A mark already
+ * there is not added twice.
+ * @throws InputError when no such run is in the history.
+ * @example markRun(h, '81-1', { reason: 'manual', metrics: ['build/*'] }).runs.find((r) => r.id === '81-1')?.marks
+ */
+function markRun(h, id, mark) {
+    const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .replacementKey */ .id)(id);
+    const index = h.runs.findIndex((r) => r.id === id);
+    const at = index >= 0 ? index : h.runs.findIndex((r) => (0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .replacementKey */ .id)(r.id) === key);
+    if (at < 0)
+        throw unknownRun(h, id, 'mark');
+    const runs = h.runs.map((r, i) => (i === at ? { ...r, marks: (0,_document_js__WEBPACK_IMPORTED_MODULE_2__/* .mergeMarks */ .L_)(r.marks ?? [], [mark]) } : r));
+    return { ...h, runs };
+}
+/**
+ * Drops the run `tombstone.id`: it leaves the runs and its tombstone stays, so that no merge with
+ * an older copy of the history brings it back. Dropping a run already dropped changes nothing.
+ * @throws InputError when the history holds no such run and has not dropped it.
+ * @example dropRun(h, { id: '81-1', reason: 'noisy runner' }).runs.some((r) => r.id === '81-1') // false
+ */
+function dropRun(h, tombstone) {
+    if (h.dropped?.has(tombstone.id))
+        return h;
+    const at = h.runs.findIndex((r) => r.id === tombstone.id);
+    if (at < 0)
+        throw unknownRun(h, tombstone.id, 'drop');
+    const columns = new Map();
+    for (const [name, column] of h.columns) {
+        const values = column.values.filter((_, i) => i !== at);
+        if (!values.some((v) => !Number.isNaN(v)))
+            continue;
+        columns.set(name, column.unit === undefined ? { values } : { unit: column.unit, values });
+    }
+    return {
+        series: h.series,
+        runs: h.runs.filter((_, i) => i !== at),
+        columns,
+        dropped: new Map([...(h.dropped ?? []), [tombstone.id, { ...tombstone }]]),
+    };
+}
+/**
+ * Gives metric `from` the name `to`, keeping its values, unit and place in the column order. When
+ * `to` exists already the two are joined, provided no run holds both and their units agree.
+ * Renaming a metric that is already called `to` (and no longer `from`) changes nothing.
+ * @throws InputError for an unknown metric, a name every reader refuses, or two columns that cannot be joined.
+ * @example renameMetric(h, 'build/compile', 'build/compile-ms').columns.has('build/compile-ms') // true
+ */
+function renameMetric(h, from, to) {
+    (0,_inputs_names_js__WEBPACK_IMPORTED_MODULE_1__/* .checkMetricName */ .WO)(to, 'the new name');
+    const source = h.columns.get(from);
+    if (source === undefined) {
+        if (h.columns.has(to))
+            return h;
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`the history holds no metric named ${JSON.stringify(from)}`, {
+            where: `series ${h.series}`,
+            fix: 'list the metric names with `bellgate check` or `bellgate runs`',
+        });
+    }
+    if (from === to)
+        return h;
+    const target = h.columns.get(to);
+    let joined = source;
+    if (target !== undefined) {
+        if (target.unit !== undefined && source.unit !== undefined && target.unit !== source.unit) {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`cannot join ${JSON.stringify(from)} (${source.unit}) into ${JSON.stringify(to)} (${target.unit}): their units differ`, { where: `series ${h.series}`, fix: 'rename to a new name instead' });
+        }
+        const both = source.values.findIndex((v, i) => !Number.isNaN(v) && !Number.isNaN(target.values[i] ?? NaN));
+        if (both >= 0) {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`cannot join ${JSON.stringify(from)} into ${JSON.stringify(to)}: run ${JSON.stringify(h.runs[both]?.id)} holds both`, { where: `series ${h.series}`, fix: 'drop that run first, or rename to a new name' });
+        }
+        const values = target.values.map((v, i) => (Number.isNaN(v) ? (source.values[i] ?? NaN) : v));
+        const unit = target.unit ?? source.unit;
+        joined = unit === undefined ? { values } : { unit, values };
+    }
+    const columns = new Map();
+    for (const [name, column] of h.columns) {
+        if (name === from) {
+            if (target === undefined)
+                columns.set(to, joined);
+        }
+        else
+            columns.set(name, name === to ? joined : column);
+    }
+    return { ...h, columns };
+}
+/**
+ * The runs of a history, oldest first, each with its metric count. Pure.
+ * @example listRuns(h).map((r) => `${r.id} ${r.metricCount}`)
+ */
+function listRuns(h) {
+    const counts = new Array(h.runs.length).fill(0);
+    for (const column of h.columns.values()) {
+        column.values.forEach((v, i) => {
+            if (!Number.isNaN(v))
+                counts[i] = (counts[i] ?? 0) + 1;
+        });
+    }
+    return h.runs.map((r, i) => ({ ...r, metricCount: counts[i] ?? 0 }));
+}
+function unknownRun(h, id, what) {
+    return new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`the history of series ${JSON.stringify(h.series)} holds no run ${JSON.stringify(id)} to ${what}`, {
+        where: `series ${h.series}`,
+        fix: 'list the run ids with `bellgate runs`',
+    });
+}
+
+
+/***/ }),
+
 /***/ 8363:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -21965,16 +22453,18 @@ function holdsAtLeast(values, last, wanted) {
 /* harmony export */   FU: () => (/* binding */ decodeHistory),
 /* harmony export */   L_: () => (/* binding */ mergeMarks),
 /* harmony export */   gx: () => (/* binding */ replaces),
+/* harmony export */   i6: () => (/* binding */ parseHistory),
 /* harmony export */   oi: () => (/* binding */ markLine),
 /* harmony export */   ph: () => (/* binding */ serializeHistory),
 /* harmony export */   u_: () => (/* binding */ runLine)
 /* harmony export */ });
-/* unused harmony exports HISTORY_SCHEMA, parseHistory, headerLine, dropLine, checkRuns, checkStorable */
+/* unused harmony exports HISTORY_SCHEMA, headerLine, dropLine, checkRuns, checkStorable */
 /* harmony import */ var _errors_json_text_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3369);
 /* harmony import */ var _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(3712);
-/* harmony import */ var _history_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(3328);
+/* harmony import */ var _history_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(3328);
+/* harmony import */ var _lines_js__WEBPACK_IMPORTED_MODULE_3__ = __nccwpck_require__(1483);
 /* harmony import */ var _problems_js__WEBPACK_IMPORTED_MODULE_2__ = __nccwpck_require__(7326);
-/* harmony import */ var _run_order_js__WEBPACK_IMPORTED_MODULE_4__ = __nccwpck_require__(8400);
+/* harmony import */ var _run_order_js__WEBPACK_IMPORTED_MODULE_5__ = __nccwpck_require__(8400);
 
 
 
@@ -22015,10 +22505,10 @@ const MAX_TEXT = 4096;
  * @example parseHistory('{"schema":"bellgate.history/3","series":"s","metrics":[]}\n', 'h.jsonl').runs // []
  */
 function parseHistory(text, source, options = {}) {
-    const decoded = decodeHistory(textLines(text), throwingSink(source), options);
+    const decoded = decodeHistory((0,_lines_js__WEBPACK_IMPORTED_MODULE_3__/* .textLines */ .F)(text), (0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .throwingSink */ .sC)(source), options);
     // The throwing sink stops at the first problem, so undefined cannot come back; keep TS honest.
     if (!decoded)
-        throw new InputError('unreadable history document', { where: source });
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d('unreadable history document', { where: source });
     return decoded.history;
 }
 /**
@@ -22081,7 +22571,7 @@ function decodeHistory(src, report, options = {}) {
                     dropped.add(entry.tombstone.id);
                 if (entry.kind !== 'run' || dropped.has(entry.info.id))
                     continue;
-                seen.add((0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(entry.info.id));
+                seen.add((0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .replacementKey */ .id)(entry.info.id));
                 if (seen.size >= newest)
                     break;
             }
@@ -22298,12 +22788,12 @@ function fold(header, entries, newest) {
         if (e.kind === 'drop')
             dropped.set(e.tombstone.id, e.tombstone);
         else if (e.kind === 'mark') {
-            const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(e.id);
+            const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .replacementKey */ .id)(e.id);
             marks.set(key, mergeMarks(marks.get(key) ?? [], [e.mark]));
         }
         else {
             countHint = Math.max(countHint, e.n ?? 0);
-            const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(e.info.id);
+            const key = (0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .replacementKey */ .id)(e.info.id);
             // A level change stays at its CI run when a later attempt replaces the run that carried it.
             if (e.info.marks !== undefined)
                 marks.set(key, mergeMarks(marks.get(key) ?? [], e.info.marks));
@@ -22313,12 +22803,12 @@ function fold(header, entries, newest) {
         }
     }
     let kept = [...byKey.values()].filter((e) => !dropped.has(e.info.id));
-    const keys = new Map(kept.map((e) => [e, (0,_run_order_js__WEBPACK_IMPORTED_MODULE_4__/* .timeKey */ .b)(e.info)]));
+    const keys = new Map(kept.map((e) => [e, (0,_run_order_js__WEBPACK_IMPORTED_MODULE_5__/* .timeKey */ .b)(e.info)]));
     kept.sort((a, b) => compareKeyed(keys.get(a), a.info, keys.get(b), b.info));
     if (newest !== undefined)
         kept = kept.slice(Math.max(0, kept.length - newest));
     const runs = kept.map((e) => {
-        const folded = marks.get((0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .replacementKey */ .id)(e.info.id));
+        const folded = marks.get((0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .replacementKey */ .id)(e.info.id));
         return folded === undefined ? e.info : { ...e.info, marks: folded };
     });
     const columns = new Map();
@@ -22341,8 +22831,8 @@ function fold(header, entries, newest) {
 }
 /** True when a run line with id `next` replaces one with id `previous` of the same key. */
 function replaces(next, previous) {
-    const a = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .attemptOf */ .tx)(next);
-    const b = (0,_history_js__WEBPACK_IMPORTED_MODULE_3__/* .attemptOf */ .tx)(previous);
+    const a = (0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .attemptOf */ .tx)(next);
+    const b = (0,_history_js__WEBPACK_IMPORTED_MODULE_4__/* .attemptOf */ .tx)(previous);
     // Same id: the later line. Attempts of one CI run: the higher attempt, whichever line came last.
     return a === undefined || b === undefined || a.attempt >= b.attempt;
 }
@@ -22488,7 +22978,7 @@ function checkStorable(h, name, values) {
 
 /***/ }),
 
-/***/ 4496:
+/***/ 6580:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -22508,157 +22998,12 @@ var promises_ = __nccwpck_require__(1455);
 var external_node_path_ = __nccwpck_require__(6760);
 // EXTERNAL MODULE: ./src/errors/input-error.ts
 var input_error = __nccwpck_require__(3712);
-// EXTERNAL MODULE: ./src/inputs/names.ts
-var names = __nccwpck_require__(5585);
-// EXTERNAL MODULE: ./src/history/document.ts
-var history_document = __nccwpck_require__(8363);
-// EXTERNAL MODULE: ./src/history/history.ts
-var history_history = __nccwpck_require__(3328);
+// EXTERNAL MODULE: ./src/history/changes.ts
+var changes = __nccwpck_require__(5201);
 // EXTERNAL MODULE: ./src/history/merge.ts
 var merge = __nccwpck_require__(4292);
-;// CONCATENATED MODULE: ./src/history/changes.ts
-/**
- * Everything a store can be asked to change in a history, as data (HistoryChange), and the pure
- * functions that apply it. Stores take a change rather than a finished History so each can apply
- * it to what is stored at the moment of writing (under the file lock, after the branch's newest
- * head, over every artifact): a writer never overwrites what another added since it read.
- * Applying a change again to its own result changes nothing more, so a store may retry freely.
- * The maintenance commands (mark, drop, runs, rename) are built on these.
- */
-
-
-
-
-
-/**
- * Applies a change to a whole history. Pure.
- * @throws InputError when the change cannot apply (no such run or metric, a dropped id, a unit that does not fit).
- * @example applyChange(h, { kind: 'drop', tombstone: { id: '81-1', reason: 'noisy runner' } }).history.dropped?.has('81-1') // true
- */
-function applyChange(h, change) {
-    switch (change.kind) {
-        case 'record': {
-            const { history, replaced } = (0,merge/* appendRun */.ah)(h, change.info, change.run);
-            const trimmed = (0,merge/* trimHistory */.lj)(history, change.keep);
-            return replaced === undefined ? { history: trimmed } : { history: trimmed, replaced };
-        }
-        case 'mark':
-            return { history: markRun(h, change.id, change.mark) };
-        case 'drop':
-            return { history: dropRun(h, change.tombstone) };
-        case 'rename':
-            return { history: renameMetric(h, change.from, change.to) };
-        case 'merge':
-            return { history: (0,merge/* mergeHistories */.dk)(h, change.history) };
-    }
-}
-/**
- * Adds a level mark to the run `id` (or to the later attempt that replaced it). A mark already
- * there is not added twice.
- * @throws InputError when no such run is in the history.
- * @example markRun(h, '81-1', { reason: 'manual', metrics: ['build/*'] }).runs.find((r) => r.id === '81-1')?.marks
- */
-function markRun(h, id, mark) {
-    const key = (0,history_history/* replacementKey */.id)(id);
-    const index = h.runs.findIndex((r) => r.id === id);
-    const at = index >= 0 ? index : h.runs.findIndex((r) => (0,history_history/* replacementKey */.id)(r.id) === key);
-    if (at < 0)
-        throw unknownRun(h, id, 'mark');
-    const runs = h.runs.map((r, i) => (i === at ? { ...r, marks: (0,history_document/* mergeMarks */.L_)(r.marks ?? [], [mark]) } : r));
-    return { ...h, runs };
-}
-/**
- * Drops the run `tombstone.id`: it leaves the runs and its tombstone stays, so that no merge with
- * an older copy of the history brings it back. Dropping a run already dropped changes nothing.
- * @throws InputError when the history holds no such run and has not dropped it.
- * @example dropRun(h, { id: '81-1', reason: 'noisy runner' }).runs.some((r) => r.id === '81-1') // false
- */
-function dropRun(h, tombstone) {
-    if (h.dropped?.has(tombstone.id))
-        return h;
-    const at = h.runs.findIndex((r) => r.id === tombstone.id);
-    if (at < 0)
-        throw unknownRun(h, tombstone.id, 'drop');
-    const columns = new Map();
-    for (const [name, column] of h.columns) {
-        const values = column.values.filter((_, i) => i !== at);
-        if (!values.some((v) => !Number.isNaN(v)))
-            continue;
-        columns.set(name, column.unit === undefined ? { values } : { unit: column.unit, values });
-    }
-    return {
-        series: h.series,
-        runs: h.runs.filter((_, i) => i !== at),
-        columns,
-        dropped: new Map([...(h.dropped ?? []), [tombstone.id, { ...tombstone }]]),
-    };
-}
-/**
- * Gives metric `from` the name `to`, keeping its values, unit and place in the column order. When
- * `to` exists already the two are joined, provided no run holds both and their units agree.
- * Renaming a metric that is already called `to` (and no longer `from`) changes nothing.
- * @throws InputError for an unknown metric, a name every reader refuses, or two columns that cannot be joined.
- * @example renameMetric(h, 'build/compile', 'build/compile-ms').columns.has('build/compile-ms') // true
- */
-function renameMetric(h, from, to) {
-    (0,names/* checkMetricName */.WO)(to, 'the new name');
-    const source = h.columns.get(from);
-    if (source === undefined) {
-        if (h.columns.has(to))
-            return h;
-        throw new input_error/* InputError */.d(`the history holds no metric named ${JSON.stringify(from)}`, {
-            where: `series ${h.series}`,
-            fix: 'list the metric names with `bellgate check` or `bellgate runs`',
-        });
-    }
-    if (from === to)
-        return h;
-    const target = h.columns.get(to);
-    let joined = source;
-    if (target !== undefined) {
-        if (target.unit !== undefined && source.unit !== undefined && target.unit !== source.unit) {
-            throw new input_error/* InputError */.d(`cannot join ${JSON.stringify(from)} (${source.unit}) into ${JSON.stringify(to)} (${target.unit}): their units differ`, { where: `series ${h.series}`, fix: 'rename to a new name instead' });
-        }
-        const both = source.values.findIndex((v, i) => !Number.isNaN(v) && !Number.isNaN(target.values[i] ?? NaN));
-        if (both >= 0) {
-            throw new input_error/* InputError */.d(`cannot join ${JSON.stringify(from)} into ${JSON.stringify(to)}: run ${JSON.stringify(h.runs[both]?.id)} holds both`, { where: `series ${h.series}`, fix: 'drop that run first, or rename to a new name' });
-        }
-        const values = target.values.map((v, i) => (Number.isNaN(v) ? (source.values[i] ?? NaN) : v));
-        const unit = target.unit ?? source.unit;
-        joined = unit === undefined ? { values } : { unit, values };
-    }
-    const columns = new Map();
-    for (const [name, column] of h.columns) {
-        if (name === from) {
-            if (target === undefined)
-                columns.set(to, joined);
-        }
-        else
-            columns.set(name, name === to ? joined : column);
-    }
-    return { ...h, columns };
-}
-/**
- * The runs of a history, oldest first, each with its metric count. Pure.
- * @example listRuns(h).map((r) => `${r.id} ${r.metricCount}`)
- */
-function listRuns(h) {
-    const counts = new Array(h.runs.length).fill(0);
-    for (const column of h.columns.values()) {
-        column.values.forEach((v, i) => {
-            if (!Number.isNaN(v))
-                counts[i] = (counts[i] ?? 0) + 1;
-        });
-    }
-    return h.runs.map((r, i) => ({ ...r, metricCount: counts[i] ?? 0 }));
-}
-function unknownRun(h, id, what) {
-    return new input_error/* InputError */.d(`the history of series ${JSON.stringify(h.series)} holds no run ${JSON.stringify(id)} to ${what}`, {
-        where: `series ${h.series}`,
-        fix: 'list the run ids with `bellgate runs`',
-    });
-}
-
+// EXTERNAL MODULE: ./src/history/document.ts
+var history_document = __nccwpck_require__(8363);
 ;// CONCATENATED MODULE: ./src/history/file-lines.ts
 /**
  * The lines of a history file read through an open file descriptor in blocks, from the start or
@@ -22948,6 +23293,8 @@ function release(lockPath, token) {
     }
 }
 
+// EXTERNAL MODULE: ./src/history/history.ts
+var history_history = __nccwpck_require__(3328);
 // EXTERNAL MODULE: ./src/history/lines.ts
 var lines = __nccwpck_require__(1483);
 // EXTERNAL MODULE: ./src/history/problems.ts
@@ -23156,11 +23503,11 @@ function createFileStore(path, series, options = {}) {
                 const stored = fd === undefined ? (0,history_history/* emptyHistory */.s4)(own) : readWhole(fd, size).history;
                 if (change.kind === 'mark' && fd !== undefined) {
                     // Checked against the whole history (the run must exist), then written as one line.
-                    const marked = markRun(stored, change.id, change.mark);
+                    const marked = (0,changes/* markRun */.nR)(stored, change.id, change.mark);
                     appendLine(fd, size, (0,history_document/* markLine */.oi)(change.id, change.mark));
                     return { runs: marked.runs.length, wrote: 'appended' };
                 }
-                const { history, replaced } = applyChange(stored, change);
+                const { history, replaced } = (0,changes/* applyChange */.hX)(stored, change);
                 text = (0,history_document/* serializeHistory */.ph)(history);
                 outcome =
                     replaced === undefined
@@ -23412,8 +23759,9 @@ function replacementKey(id) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   U: () => (/* binding */ normalizeIsoTime),
-/* harmony export */   s: () => (/* binding */ parseIsoTime)
+/* harmony export */   UN: () => (/* binding */ normalizeIsoTime),
+/* harmony export */   r_: () => (/* binding */ lacksZone),
+/* harmony export */   sX: () => (/* binding */ parseIsoTime)
 /* harmony export */ });
 /**
  * Reads an ISO-8601 date or date-time ("2026-03-01", "2026-03-01T10:00:00.5+02:00",
@@ -23463,6 +23811,15 @@ function parseIsoTime(text) {
 function normalizeIsoTime(text) {
     const ms = parseIsoTime(text);
     return ms === undefined || !Number.isFinite(ms) || Math.abs(ms) > 8.64e15 ? undefined : new Date(ms).toISOString();
+}
+/**
+ * Whether an ISO-8601 text gives a time of day without a zone ("2026-03-01T10:00:00"): another
+ * instant on every machine, so imports refuse it rather than guess. A date alone (midnight UTC)
+ * or a time with Z or an offset is fine.
+ * @example lacksZone('2026-03-01 10:00') // true
+ */
+function lacksZone(text) {
+    return /^\s*\d{4}-\d{2}-\d{2}[T ]\d{2}:\d{2}(?::\d{2}(?:\.\d{1,9})?)?\s*$/i.test(text);
 }
 
 
@@ -23768,7 +24125,7 @@ function compareRuns(a, b) {
 }
 /** Milliseconds of a run's time, -Infinity when it has none or it cannot be read. */
 function timeKey(run) {
-    return run.time === undefined ? -Infinity : ((0,_iso_time_js__WEBPACK_IMPORTED_MODULE_0__/* .parseIsoTime */ .s)(run.time) ?? -Infinity);
+    return run.time === undefined ? -Infinity : ((0,_iso_time_js__WEBPACK_IMPORTED_MODULE_0__/* .parseIsoTime */ .sX)(run.time) ?? -Infinity);
 }
 
 
@@ -23905,31 +24262,27 @@ function trimSlack(keep) {
 /* harmony export */   b: () => (/* binding */ storedValue)
 /* harmony export */ });
 /* harmony import */ var _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3712);
+/* harmony import */ var _inputs_units_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4702);
+
 
 /**
  * The value a measurement is stored as, given the unit the history holds for its metric
  * (`stored`, the unit the history first saw; undefined when it never saw one). The stored unit is
- * authoritative: a column is never relabelled, so a measurement in another unit is refused here
- * (converting known units is the one change this function may grow). A measurement with a unit
- * where the history had none gives the metric its unit.
+ * authoritative: a column is never relabelled, so a value in a unit that converts (s to ms, KiB
+ * to B) is converted, and one that does not is refused naming its file and line, the metric and
+ * both units. A measurement with a unit where the history had none gives the metric its unit.
  * Throws InputError for a non-finite value or a unit that does not fit.
  *
- * @example storedValue('build/compile', { value: 12.5, unit: 's', count: 1 }, 's') // 12.5
+ * @example storedValue('build/compile', { value: 0.0125, unit: 's', count: 1 }, 'ms') // 12.5
  */
 function storedValue(name, m, stored) {
     if (!Number.isFinite(m.value)) {
         throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric value ${m.value} is not a finite number and cannot be recorded`, {
-            where: name,
+            where: m.where ?? name,
             fix: 'check the metric file that produced it',
         });
     }
-    if (stored !== undefined && m.unit !== undefined && m.unit !== stored) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric ${JSON.stringify(name)} is stored in ${JSON.stringify(stored)}, but this run gives it in ${JSON.stringify(m.unit)}; a stored metric is never relabelled`, {
-            where: name,
-            fix: `report it in ${JSON.stringify(stored)}, or under a new name (bellgate rename keeps the old history under the new name)`,
-        });
-    }
-    return m.value;
+    return (0,_inputs_units_js__WEBPACK_IMPORTED_MODULE_1__/* .inStoredUnit */ .H)(name, m, stored);
 }
 
 
@@ -24229,6 +24582,7 @@ function checkUnit(unit, where) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   $G: () => (/* binding */ unitScale),
+/* harmony export */   H: () => (/* binding */ inStoredUnit),
 /* harmony export */   Q6: () => (/* binding */ alignRunUnits),
 /* harmony export */   oU: () => (/* binding */ convertUnit)
 /* harmony export */ });
@@ -24350,17 +24704,28 @@ function alignRunUnits(run, unitOf) {
         const stored = unitOf(name);
         if (m.unit === undefined || stored === undefined || m.unit === stored)
             continue;
-        const value = convertUnit(m.value, m.unit, stored);
-        if (value === undefined || !Number.isFinite(value)) {
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`, {
-                where: m.where,
-                fix: `write ${JSON.stringify(name)} in ${JSON.stringify(stored)} or a unit that converts to it, or give the metric another name to start a new history`,
-            });
-        }
+        const value = inStoredUnit(name, m, stored);
         metrics ??= new Map(run.metrics);
         metrics.set(name, { ...m, value, unit: stored });
     }
     return metrics === undefined ? run : { ...run, metrics };
+}
+/**
+ * A measurement's value in the unit its history stores the metric in (`stored`; undefined when
+ * the history has none, which leaves the value as it is): 0.121 s against ms is 121.
+ * @throws InputError naming the reading's place (file and line), the metric and both units when they do not convert.
+ * @example inStoredUnit('time/parse', { value: 0.121, unit: 's', count: 1 }, 'ms') // 121
+ */
+function inStoredUnit(name, m, stored) {
+    if (m.unit === undefined || stored === undefined || m.unit === stored)
+        return m.value;
+    const value = convertUnit(m.value, m.unit, stored);
+    if (value !== undefined && Number.isFinite(value))
+        return value;
+    throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`, {
+        where: m.where ?? name,
+        fix: `write ${JSON.stringify(name)} in ${JSON.stringify(stored)} or a unit that converts to it, or give the metric another name to start a new history`,
+    });
 }
 
 
@@ -25425,6 +25790,35 @@ function formatAgainstCutoff(r, cutoff) {
 
 /***/ }),
 
+/***/ 3778:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   c: () => (/* binding */ levelLines)
+/* harmony export */ });
+/* harmony import */ var _reason_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(8880);
+
+const SHOWN = 10;
+/**
+ * "route/match-static: baseline since run 6101-1 (accepted in #2, 3 runs; spread from all 13)"
+ * for each metric whose baseline starts at a level mark (an accepted merge, `bellgate mark`) and
+ * whose reason line is not printed anyway (regressed and improved metrics carry it there), at
+ * most SHOWN of them, then a count. Names pass through `clean` (the renderer's escaping).
+ * @example levelLines(report, (t) => t) // ['time/parse: baseline since run 41-1 (accepted in #12, 3 runs; spread from all 60)']
+ */
+function levelLines(report, clean) {
+    const marked = report.metrics.filter((m) => m.status !== 'regressed' &&
+        m.status !== 'improved' &&
+        (m.baseline?.sinceReason === 'accepted' || m.baseline?.sinceReason === 'manual'));
+    const lines = marked.slice(0, SHOWN).map((m) => clean(`${m.name}: ${(0,_reason_js__WEBPACK_IMPORTED_MODULE_0__/* .sinceText */ .I)(m)}`));
+    if (marked.length > SHOWN)
+        lines.push(`and ${marked.length - SHOWN} more metrics with a level mark`);
+    return lines;
+}
+
+
+/***/ }),
+
 /***/ 9214:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
@@ -25473,11 +25867,14 @@ function markerLine(marker) {
 var notes = __nccwpck_require__(4931);
 // EXTERNAL MODULE: ./src/report/sparkline.ts
 var sparkline = __nccwpck_require__(9833);
+// EXTERNAL MODULE: ./src/report/level-lines.ts
+var level_lines = __nccwpck_require__(3778);
 // EXTERNAL MODULE: ./src/report/reason.ts
 var reason = __nccwpck_require__(8880);
 // EXTERNAL MODULE: ./src/report/status.ts
 var report_status = __nccwpck_require__(6934);
 ;// CONCATENATED MODULE: ./src/report/markdown.ts
+
 
 
 
@@ -25562,6 +25959,9 @@ function renderMarkdown(report, options = {}) {
         add(fit(flagged.map((m) => picture(m, report)), room / 2, 'pictures').text);
         add(`<sub>${report_status/* GLYPH_LEGEND */.z6}</sub>`);
     }
+    const levels = (0,level_lines/* levelLines */.c)(report, (t) => `- ${(0,report_escape/* escapeMarkdown */.F)(t, 800)}`);
+    if (levels.length > 0)
+        add(`\n${levels.join('\n')}`);
     add('');
     add((0,family_line/* familyLine */.l)(report));
     if (report.shared.length > 0)
@@ -25592,7 +25992,10 @@ function renderMarkdown(report, options = {}) {
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   W: () => (/* binding */ reportNotes)
 /* harmony export */ });
-/* harmony import */ var _gate_missing_metrics_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4719);
+/* unused harmony export learningLine */
+/* harmony import */ var _gate_judge_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4697);
+/* harmony import */ var _gate_missing_metrics_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(4719);
+
 
 /** Names listed in the "not judged" line before it only counts the rest. */
 const NOT_JUDGED_LISTED = 10;
@@ -25605,7 +26008,7 @@ const NOT_JUDGED_LISTED = 10;
  */
 function reportNotes(report, clean) {
     const lines = (report.notes ?? []).map(clean);
-    if ((0,_gate_missing_metrics_js__WEBPACK_IMPORTED_MODULE_0__/* .mostlyMissing */ .j)(report.missing)) {
+    if ((0,_gate_missing_metrics_js__WEBPACK_IMPORTED_MODULE_1__/* .mostlyMissing */ .j)(report.missing)) {
         const { count, of } = report.missing;
         lines.push(`${count} of ${of} baseline metrics are missing from this run: check that every benchmark ran and wrote its file`);
     }
@@ -25615,7 +26018,38 @@ function reportNotes(report, clean) {
         const more = notJudged.length - shown.length;
         lines.push(`${notJudged.length} value${notJudged.length === 1 ? '' : 's'} not judged nor recorded: ${shown.join(', ')}${more > 0 ? ` and ${more} more` : ''}`);
     }
+    const learning = learningLine(report);
+    if (learning !== undefined)
+        lines.push(learning);
     return lines;
+}
+/** The seeding hint of a learning report: what a new adopter can do instead of waiting. */
+const SEED = 'record runs on the baseline branch, or seed the history with `bellgate import`';
+/**
+ * For a `learning` verdict: how many baseline runs the closest metric has and how many it needs
+ * ("5 of the 8 baseline runs (min-runs) ... 3 more"), or that the history holds none yet.
+ * Undefined for any other verdict.
+ * @example learningLine(report) // 'learning: the baseline holds 5 runs; a metric is judged once it has 8 (min-runs): 3 more. ...'
+ */
+function learningLine(report) {
+    if (report.verdict !== 'learning')
+        return undefined;
+    let best;
+    for (const m of report.metrics) {
+        if (m.note?.kind !== 'learning')
+            continue;
+        const gap = (n) => n.minRuns - n.runs;
+        if (best === undefined || gap(m.note) < gap(best))
+            best = m.note;
+    }
+    if (best === undefined)
+        return report.metrics.some((m) => m.status === 'new')
+            ? `learning: the history holds no runs of these metrics yet; ${SEED}`
+            : undefined;
+    if (best.runs >= best.minRuns && best.levelRuns !== undefined)
+        return `learning: ${best.levelRuns} run${best.levelRuns === 1 ? '' : 's'} since a level change, and ${_gate_judge_js__WEBPACK_IMPORTED_MODULE_0__/* .LEVEL_MIN_RUNS */ .bV} are needed before it is judged; record runs on the baseline branch`;
+    const more = best.minRuns - best.runs;
+    return `learning: the baseline holds ${best.runs} run${best.runs === 1 ? '' : 's'}; a metric is judged once it has ${best.minRuns} (min-runs): ${more} more; ${SEED}`;
 }
 
 
@@ -26009,6 +26443,13 @@ function statusCounts(statuses) {
 
 /***/ }),
 
+/***/ 2613:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("assert");
+
+/***/ }),
+
 /***/ 181:
 /***/ ((module) => {
 
@@ -26016,10 +26457,87 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("buffer");
 
 /***/ }),
 
+/***/ 4434:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("events");
+
+/***/ }),
+
+/***/ 8611:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("http");
+
+/***/ }),
+
+/***/ 5692:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("https");
+
+/***/ }),
+
+/***/ 9278:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("net");
+
+/***/ }),
+
+/***/ 4589:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:assert");
+
+/***/ }),
+
+/***/ 6698:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:async_hooks");
+
+/***/ }),
+
+/***/ 4573:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:buffer");
+
+/***/ }),
+
 /***/ 1421:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:child_process");
+
+/***/ }),
+
+/***/ 7540:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:console");
+
+/***/ }),
+
+/***/ 7598:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:crypto");
+
+/***/ }),
+
+/***/ 3053:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:diagnostics_channel");
+
+/***/ }),
+
+/***/ 610:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:dns");
 
 /***/ }),
 
@@ -26044,6 +26562,27 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:fs/prom
 
 /***/ }),
 
+/***/ 7067:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:http");
+
+/***/ }),
+
+/***/ 2467:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:http2");
+
+/***/ }),
+
+/***/ 7030:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:net");
+
+/***/ }),
+
 /***/ 8161:
 /***/ ((module) => {
 
@@ -26058,6 +26597,13 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:path");
 
 /***/ }),
 
+/***/ 643:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:perf_hooks");
+
+/***/ }),
+
 /***/ 1708:
 /***/ ((module) => {
 
@@ -26065,10 +26611,87 @@ module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:process
 
 /***/ }),
 
+/***/ 1792:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:querystring");
+
+/***/ }),
+
+/***/ 7075:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:stream");
+
+/***/ }),
+
+/***/ 1692:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:tls");
+
+/***/ }),
+
+/***/ 3136:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:url");
+
+/***/ }),
+
+/***/ 7975:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:util");
+
+/***/ }),
+
+/***/ 3429:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:util/types");
+
+/***/ }),
+
+/***/ 5919:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:worker_threads");
+
+/***/ }),
+
+/***/ 8522:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("node:zlib");
+
+/***/ }),
+
 /***/ 932:
 /***/ ((module) => {
 
 module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("process");
+
+/***/ }),
+
+/***/ 3193:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("string_decoder");
+
+/***/ }),
+
+/***/ 4756:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("tls");
+
+/***/ }),
+
+/***/ 9023:
+/***/ ((module) => {
+
+module.exports = __WEBPACK_EXTERNAL_createRequire(import.meta.url)("util");
 
 /***/ }),
 
@@ -45844,7 +46467,7 @@ function zScore(x, mean, standardDeviation) {
 /******/ 	// Execute the module function
 /******/ 	var threw = true;
 /******/ 	try {
-/******/ 		__webpack_modules__[moduleId](module, module.exports, __nccwpck_require__);
+/******/ 		__webpack_modules__[moduleId].call(module.exports, module, module.exports, __nccwpck_require__);
 /******/ 		threw = false;
 /******/ 	} finally {
 /******/ 		if(threw) delete __webpack_module_cache__[moduleId];

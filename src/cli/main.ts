@@ -10,6 +10,10 @@ import { reportCommand } from './commands/report.js';
 import { demoCommand } from './commands/demo.js';
 import { tuneCommand } from './commands/tune.js';
 import { sinceCommand } from './commands/since.js';
+import { markCommand } from './commands/mark.js';
+import { dropCommand } from './commands/drop.js';
+import { renameCommand } from './commands/rename.js';
+import { runsCommand } from './commands/runs.js';
 
 export type { CliIo } from './context.js';
 
@@ -26,6 +30,10 @@ export const COMMANDS: readonly CommandFactory[] = [
   sinceCommand,
   importCommand,
   verifyCommand,
+  runsCommand,
+  markCommand,
+  dropCommand,
+  renameCommand,
   demoCommand,
 ];
 

@@ -15,9 +15,24 @@ export interface IssueComment {
   author?: string;
 }
 
+/** A pull request a commit belongs to ("List pull requests associated with a commit"). */
+export interface CommitPull {
+  number: number;
+  /** When it was merged; absent for an open or closed-unmerged pull request. */
+  mergedAt?: string;
+  /** The commit its merge made on the base branch (merge, squash or rebase). */
+  mergeSha?: string;
+  /** The branch it was merged into, e.g. "main". */
+  base?: string;
+  /** Names of the labels it carries now. */
+  labels: string[];
+}
+
 export interface GitHubApi extends ArtifactApi {
   /** The names of the labels a pull request (an issue) carries now (paginated, bounded). */
   listIssueLabels(issue: number): Promise<string[]>;
+  /** The pull requests the commit belongs to (the merged one of a push to the base branch). */
+  listCommitPulls(sha: string): Promise<CommitPull[]>;
   /** Every comment of the issue or pull request, oldest first (paginated, bounded). */
   listIssueComments(issue: number): Promise<IssueComment[]>;
   createIssueComment(issue: number, body: string): Promise<IssueComment>;

@@ -24,7 +24,17 @@ export const INPUT = {
   htmlReport: 'html-report',
   since: 'since',
   sinceBlock: 'since-block',
+  maintenance: 'maintenance',
+  maintenanceRun: 'maintenance-run',
+  maintenanceMetric: 'maintenance-metric',
+  maintenanceTo: 'maintenance-to',
+  maintenanceNote: 'maintenance-note',
+  maintenanceFile: 'maintenance-file',
 } as const;
+
+/** The operations of a maintenance run (`maintenance` input), as `bellgate runs|mark|drop|rename|import`. */
+export const MAINTENANCE_OPS = ['runs', 'mark', 'drop', 'rename', 'import'] as const;
+export type MaintenanceOp = (typeof MAINTENANCE_OPS)[number];
 
 /** Output names exactly as action.yml declares them. */
 export const OUTPUT = { verdict: 'verdict', regressed: 'regressed', report: 'report' } as const;
@@ -60,6 +70,16 @@ export interface ActionInputs {
   since?: string;
   /** In release mode, a metric worse since the reference fails the step. */
   sinceBlock: boolean;
+  /** A maintenance run instead of a check: the operation and its inputs (maintenance-run.ts). */
+  maintenance?: {
+    op: MaintenanceOp;
+    run?: string;
+    /** Globs (mark) or the old name (rename), one a line. */
+    metric: string[];
+    to?: string;
+    note?: string;
+    file?: string;
+  };
 }
 
 /** Reads one input by its action.yml name, trimmed: @actions/core's getInput in the action. */
@@ -99,7 +119,20 @@ export function readActionInputs(read: InputReader): ActionInputs {
     .map((l) => l.trim())
     .filter((l) => l !== '' && !l.startsWith('#'));
   const since = get(INPUT.since);
-  if (metrics.length === 0 && since === '') {
+  const op = get(INPUT.maintenance);
+  const maintenance =
+    op === ''
+      ? undefined
+      : {
+          op: choice(INPUT.maintenance, op, MAINTENANCE_OPS, 'runs'),
+          metric: lines(get(INPUT.maintenanceMetric)),
+          ...optional('run', get(INPUT.maintenanceRun)),
+          ...optional('to', get(INPUT.maintenanceTo)),
+          ...optional('note', get(INPUT.maintenanceNote)),
+          ...optional('file', get(INPUT.maintenanceFile)),
+        };
+  // A release review and a maintenance run read no metric files.
+  if (metrics.length === 0 && since === '' && maintenance === undefined) {
     throw new InputError('input `metrics` is empty: there are no metric files to check', {
       where: `input ${INPUT.metrics}`,
       fix: 'list the metric files or globs, one a line, e.g. `metrics: out/bench/*.json`',
@@ -145,5 +178,15 @@ export function readActionInputs(read: InputReader): ActionInputs {
     htmlReport: flag(INPUT.htmlReport, get(INPUT.htmlReport), false),
     ...(since === '' ? {} : { since }),
     sinceBlock: flag(INPUT.sinceBlock, get(INPUT.sinceBlock), false),
+    ...(maintenance === undefined ? {} : { maintenance }),
   };
 }
+
+const lines = (text: string): string[] =>
+  text
+    .split(/\r?\n/)
+    .map((l) => l.trim())
+    .filter((l) => l !== '');
+
+const optional = <K extends string>(key: K, value: string): Partial<Record<K, string>> =>
+  (value === '' ? {} : { [key]: value }) as Partial<Record<K, string>>;

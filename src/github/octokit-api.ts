@@ -10,7 +10,7 @@
  * proxy-capable client. Intervals are tunable so tests can run the same code with millisecond waits.
  */
 import { ArtifactGoneError, type ArtifactEntry } from '../history/artifact-store.js';
-import { DEFAULT_RETRY, statusOf, type ApiTarget, type GitHubApi, type IssueComment } from './api.js';
+import { DEFAULT_RETRY, statusOf, type ApiTarget, type CommitPull, type GitHubApi, type IssueComment } from './api.js';
 import { readCapped } from './fetch-capped.js';
 import { createGitData } from './git-data.js';
 import { proxyFetch } from './proxy-fetch.js';
@@ -67,6 +67,22 @@ function toComment(raw: unknown): IssueComment {
   const c = obj(raw);
   const login = obj(c.user).login;
   return { id: Number(c.id), body: String(c.body ?? ''), author: typeof login === 'string' ? login : undefined };
+}
+
+function toCommitPull(raw: unknown): CommitPull {
+  const p = obj(raw);
+  const text = (v: unknown): string | undefined => (typeof v === 'string' && v !== '' ? v : undefined);
+  const pull: CommitPull = {
+    number: Number(p.number),
+    labels: (Array.isArray(p.labels) ? p.labels : []).map((l) => String(obj(l).name ?? '')),
+  };
+  const mergedAt = text(p.merged_at);
+  const mergeSha = text(p.merge_commit_sha);
+  const base = text(obj(p.base).ref);
+  if (mergedAt !== undefined) pull.mergedAt = mergedAt;
+  if (mergeSha !== undefined) pull.mergeSha = mergeSha;
+  if (base !== undefined) pull.base = base;
+  return pull;
 }
 
 /**
@@ -189,6 +205,13 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
         { issue_number: issue },
         (d) => (Array.isArray(d) ? d : []),
         (raw) => String(obj(raw).name ?? ''),
+      ),
+    listCommitPulls: (sha) =>
+      pages(
+        'GET /repos/{owner}/{repo}/commits/{commit_sha}/pulls',
+        { commit_sha: sha },
+        (d) => (Array.isArray(d) ? d : []),
+        toCommitPull,
       ),
     listIssueComments: (issue) =>
       pages(

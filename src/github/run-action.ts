@@ -13,8 +13,10 @@
  *   there were no history, every metric `new`, and nothing is recorded so nothing is buried); a
  *   run lacking most of its baseline metrics (default `missing-metrics: warn`); a corrupt history
  *   artifact among good ones (skipped); a PR comment the token may not write (a fork's pull request
- *   cannot be given `pull-requests: write`); labels that cannot be read; a job summary that cannot
- *   be written.
+ *   cannot be given `pull-requests: write`); labels, or the merged pull request of a regressed
+ *   recording run, that cannot be read; a job summary that cannot be written.
+ * - A regressed recording run that merged a pull request carrying the accept label is `accepted`
+ *   and recorded with a level mark for the metrics it accepted (merged-acceptance.ts).
  * - NOTICE only: an event that is checked but never recorded (e.g. `release`), an accepted run.
  * Whenever the history was not used or the run not recorded, the summary, the PR comment and the
  * job log open with a line that says so and why. Nothing prints a stack trace or the token.
@@ -44,6 +46,8 @@ import { readRunContext } from './context.js';
 import { describeError } from './describe-error.js';
 import { decideRecord, PULL_REQUEST_EVENTS } from './event-policy.js';
 import { loadHistory, recordRun, runInfo } from './history-step.js';
+import { acceptedMark, mergedPull, type MergedPull } from './merged-acceptance.js';
+import { maintenanceRun } from './maintenance-run.js';
 import { uploadHtml } from './html-report.js';
 import { OUTPUT, readActionInputs, type ActionInputs, type InputReader } from './inputs.js';
 import { logText } from './log-text.js';
@@ -101,8 +105,6 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const inputs = readActionInputs(deps.getInput);
   if (inputs.token !== '') sink.setSecret(inputs.token);
   const context = await readRunContext(deps.env, deps.readText);
-  // A missing file at the default path means default settings; a missing named file is an error.
-  const config = await loadConfig(inputs.config, deps.cwd);
   const series = inputs.series ?? `${context.workflow}/${context.job}`;
   const shownSeries = logText(series);
   const baselineBranch = inputs.baselineBranch ?? context.defaultBranch;
@@ -138,6 +140,12 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     warn: (m) => sink.warning(`bellgate: ${m}`),
     info: (m) => sink.info(`bellgate: ${m}`),
   });
+  if (inputs.maintenance !== undefined) {
+    await maintenanceRun(inputs.maintenance, inputs.series, store, deps);
+    return { failed: false, recorded: false };
+  }
+  // A missing file at the default path means default settings; a missing named file is an error.
+  const config = await loadConfig(inputs.config, deps.cwd);
   // Release mode: review since a reference instead of checking this run (release-review.ts).
   if (inputs.since !== undefined) {
     const review = await runReleaseReview({
@@ -172,17 +180,27 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), deps.cwd);
   const runner = runnerFingerprint(deps.env, deps.machine ?? machineFacts());
   let report = runGate({ config, history, run, series, runner, accepted: false });
+  const info = runInfo(context, deps.now(), runner);
+  let merged: MergedPull | undefined;
   if (report.verdict === 'regressed') {
     // Labels matter only now; the payload's may be stale (a label added after the push, a re-run).
     const source = await acceptLabelSource(apiOnce, context, inputs.acceptLabel, sink);
-    if (source !== undefined) report = runGate({ config, history, run, series, runner, accepted: true });
+    // A recording run that merged an accepted pull request starts a new level of what it accepted.
+    merged =
+      source === undefined && decision.record && loaded.problem === undefined && context.sha && baselineBranch
+        ? await mergedPull(apiOnce, context.sha, baselineBranch, inputs.acceptLabel, sink)
+        : undefined;
+    if (merged !== undefined) info.pr = merged.number;
+    const mark = merged?.accepted ? acceptedMark(regressedNames(report), merged.number) : undefined;
+    if (mark !== undefined) info.marks = [mark];
+    if (source !== undefined || mark !== undefined)
+      report = runGate({ config, history, run, series, runner, accepted: true });
   }
 
   let recorded = false;
   let saveProblem: StoreProblem | undefined;
   if (decision.record && loaded.problem === undefined) {
-    saveProblem = (await recordRun(store, runInfo(context, deps.now(), runner), run, config.keep, setting, sink))
-      .problem;
+    saveProblem = (await recordRun(store, info, run, config.keep, setting, sink)).problem;
     recorded = saveProblem === undefined;
   }
   const notes = [
@@ -230,8 +248,11 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   if (report.verdict === 'regressed' && !inputs.block)
     sink.warning(`bellgate: ${regressed} metric(s) regressed; not failing because block is false`);
   if (report.verdict === 'accepted') {
+    const by = merged?.accepted
+      ? ` of the merged pull request #${merged.number}; ${recorded ? 'a new level starts at this run' : 'no new level was stored (this run was not recorded)'}`
+      : '';
     sink.notice(
-      `bellgate: ${regressed} regression${regressed === 1 ? '' : 's'} accepted by the label "${logText(inputs.acceptLabel)}"`,
+      `bellgate: ${regressed} regression${regressed === 1 ? '' : 's'} accepted by the label "${logText(inputs.acceptLabel)}"${by}`,
     );
     used.notice += 1;
   }
@@ -253,6 +274,9 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   }
   return { failed: failures.length > 0, report, recorded, ...(comment ? { comment } : {}) };
 }
+
+const regressedNames = (report: Report): string[] =>
+  report.metrics.filter((m) => m.status === 'regressed').map((m) => m.name);
 
 /** The note a report opens with when the store failed: what did not happen, why, and the fix. */
 function problemNote(what: string, problem: StoreProblem, inputs: ActionInputs): string {

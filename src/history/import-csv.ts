@@ -84,7 +84,7 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
       continue;
     }
     if (!run) {
-      run = { info: runInfo, metrics: new Map(), units: new Map() };
+      run = { info: runInfo, metrics: new Map(), units: new Map(), places: new Map() };
       byId.set(runInfo.id, run);
     }
     const target = run;
@@ -98,6 +98,7 @@ export function parseCsvRuns(text: string, source: string): ImportParse {
           `metric ${JSON.stringify(name)} of run ${JSON.stringify(target.info.id)} was given before; this row's value is kept`,
         );
       target.metrics.set(name, value);
+      target.places?.set(name, where);
       if (unit) target.units.set(name, unit);
     };
     if (long) {

@@ -31,7 +31,7 @@ export function parseJsonLines(text: string, source: string): ImportParse {
     if (!isObject(entry)) return skip(`a run must be a JSON object, found ${typeName(entry)}`);
     const info = runInfoFrom(entry);
     if (typeof info === 'string') return skip(info);
-    const run: ImportedRun = { info, metrics: new Map(), units: new Map() };
+    const run: ImportedRun = { info, metrics: new Map(), units: new Map(), places: new Map() };
     const units = isObject(entry.units) ? entry.units : {};
     const add = (name: unknown, raw: unknown, unit: unknown): void => {
       if (typeof name !== 'string' || name === '') return skip(`a metric needs a non-empty "name"`);
@@ -40,6 +40,7 @@ export function parseJsonLines(text: string, source: string): ImportParse {
       const value = valueFrom(raw);
       if (typeof value === 'string') return skip(`metric ${JSON.stringify(name)}: ${value}`);
       run.metrics.set(name, value);
+      run.places?.set(name, where);
       if (typeof unit === 'string' && unit !== '') run.units.set(name, unit);
     };
     const { metrics } = entry;

@@ -1,13 +1,15 @@
 import { checkMetricName } from '../inputs/names.js';
 import { InputError } from '../errors/input-error.js';
 import type { RunInfo } from './history.js';
-import { normalizeIsoTime } from './iso-time.js';
+import { lacksZone, normalizeIsoTime } from './iso-time.js';
 
 /** One past run to import: who produced it and its metric values (finite numbers only). */
 export interface ImportedRun {
   info: RunInfo;
   metrics: Map<string, number>;
   units: Map<string, string>;
+  /** Where each metric's value was read ("file:line"), for a refusal that names it. */
+  places?: Map<string, string>;
 }
 
 /** A line, row or value left out of an import, and why. `where` is "file:line". */
@@ -24,10 +26,11 @@ export interface ImportParse {
 /**
  * Builds the RunInfo of an imported run from its raw fields, or says why it cannot be imported:
  * an id is required (a string, or a whole number such as a CI run id); a time is required and
- * must be ISO-8601 (stored normalised to UTC, since import order is time order); sha, ref and
+ * must be ISO-8601 with a zone when it has a time of day (stored normalised to UTC, since import
+ * order is time order); sha, ref and
  * event are optional strings. Returns the reason as a string when the run must be skipped.
  *
- * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
+ * @example runInfoFrom({ id: 81, time: '2026-03-01 10:00Z' }) // { id: '81', time: '2026-03-01T10:00:00.000Z' }
  */
 export function runInfoFrom(fields: {
   id?: unknown;
@@ -43,6 +46,8 @@ export function runInfoFrom(fields: {
   else return 'no id: every run needs a non-empty "id" (the CI run id and attempt, e.g. 1234-1)';
   if (time === undefined || time === null || time === '')
     return `run ${JSON.stringify(runId)} has no time: imported runs are ordered by time`;
+  if (typeof time === 'string' && lacksZone(time))
+    return `run ${JSON.stringify(runId)} has a time without a zone, ${JSON.stringify(time)}, which means another instant on every machine: add Z for UTC or the offset it was taken in, e.g. ${JSON.stringify(`${time.trim().replace(' ', 'T')}Z`)}`;
   const iso = typeof time === 'string' ? normalizeIsoTime(time) : undefined;
   if (iso === undefined)
     return `run ${JSON.stringify(runId)} has a bad time ${JSON.stringify(time)}: write ISO-8601, e.g. 2026-03-01T10:00:00Z`;

@@ -3,6 +3,7 @@ import type { History, MetricColumn, RunInfo } from './history.js';
 import { parseCsvRuns } from './import-csv.js';
 import { parseJsonLines } from './import-jsonl.js';
 import type { ImportedRun, ImportParse, SkippedEntry } from './import-run.js';
+import { inStoredUnit } from '../inputs/units.js';
 import { mergeHistories } from './merge.js';
 
 export type { ImportedRun, ImportParse, SkippedEntry } from './import-run.js';
@@ -82,16 +83,18 @@ export function importRuns(h: History, input: ImportedRun[] | ImportParse): Impo
       }
       const unit = run.units.get(name);
       const stored = h.columns.get(name)?.unit ?? column.unit;
-      if (unit !== undefined && stored !== undefined && unit !== stored) {
-        // The stored unit is authoritative: a value in another unit would relabel the column.
-        skipped.push({
-          where: `run ${run.info.id}`,
-          reason: `metric ${JSON.stringify(name)} is in ${JSON.stringify(unit)}, but the history holds it in ${JSON.stringify(stored)}`,
-        });
+      // The stored unit is authoritative (never relabelled): a value in a unit that converts is
+      // converted to it, one that does not is left out naming its line and both units.
+      let inStored: number;
+      try {
+        inStored = inStoredUnit(name, { value, count: 1, ...(unit === undefined ? {} : { unit }) }, stored);
+      } catch (error) {
+        if (!(error instanceof InputError)) throw error;
+        skipped.push({ where: run.places?.get(name) ?? `run ${run.info.id}`, reason: error.message });
         continue;
       }
-      column.values[r] = value;
-      if (unit !== undefined) column.unit = unit;
+      column.values[r] = inStored;
+      if (column.unit === undefined && (stored ?? unit) !== undefined) column.unit = (stored ?? unit) as string;
     }
   });
   const stored = new Map(h.runs.map((run, i) => [run.id, i]));

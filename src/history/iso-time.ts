@@ -49,3 +49,13 @@ export function normalizeIsoTime(text: string): string | undefined {
   const ms = parseIsoTime(text);
   return ms === undefined || !Number.isFinite(ms) || Math.abs(ms) > 8.64e15 ? undefined : new Date(ms).toISOString();
 }
+
+/**
+ * Whether an ISO-8601 text gives a time of day without a zone ("2026-03-01T10:00:00"): another
+ * instant on every machine, so imports refuse it rather than guess. A date alone (midnight UTC)
+ * or a time with Z or an offset is fine.
+ * @example lacksZone('2026-03-01 10:00') // true
+ */
+export function lacksZone(text: string): boolean {
+  return /^\s*\d{4}-\d{2}-\d{2}[T ]\d{2}:\d{2}(?::\d{2}(?:\.\d{1,9})?)?\s*$/i.test(text);
+}

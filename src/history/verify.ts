@@ -2,6 +2,7 @@ import { decodeHistory } from './document.js';
 import { nameProblem } from './import-run.js';
 import { parseIsoTime } from './iso-time.js';
 import { textLines } from './lines.js';
+import { unitMixups } from './unit-mixups.js';
 import { collectingSink, isObject, type HistoryProblem } from './problems.js';
 
 const FIELDS = {
@@ -17,7 +18,8 @@ const FIELDS = {
  * object, or not a run, tombstone or mark; wrong types; more values than metrics; non-finite
  * values; a field this format does not have; a time that is not ISO-8601; a mark for a run the
  * document does not hold; metric names every metric reader would refuse (control or
- * bidirectional-override characters, over 512 characters); a torn last line. At most 200 problems
+ * bidirectional-override characters, over 512 characters); a torn last line; mixed units (a value
+ * off its column's median by about a unit ratio, unit-mixups.ts). At most 200 problems
  * are listed, then a count of the rest.
  *
  * @example verifyHistory('{"schema":"bellgate.history/9"}\n')
@@ -34,6 +36,7 @@ export function verifyHistory(text: string): HistoryProblem[] {
       if (problem) sink('1', `metrics[${i}]: ${problem}`);
     });
     const runIds = new Set(decoded.history.runs.map((r) => r.id));
+    const lineOf = new Map<string, number>();
     let number = 0;
     for (const line of lines.forward()) {
       number += 1;
@@ -47,6 +50,7 @@ export function verifyHistory(text: string): HistoryProblem[] {
       if (!isObject(value)) continue;
       const kind = 'drop' in value ? 'drop' : 'mark' in value ? 'mark' : 'id' in value ? 'run' : undefined;
       if (kind === undefined) continue;
+      if (kind === 'run' && typeof value.id === 'string') lineOf.set(value.id, number);
       for (const field of Object.keys(value)) {
         if (!FIELDS[kind].has(field))
           sink(String(number), `field ${JSON.stringify(field)} is not part of a ${kind} line`);
@@ -56,6 +60,7 @@ export function verifyHistory(text: string): HistoryProblem[] {
       if (kind === 'mark' && typeof value.mark === 'string' && !runIds.has(value.mark))
         sink(String(number), `the mark is for run ${JSON.stringify(value.mark)}, which the history does not hold`);
     }
+    for (const m of unitMixups(decoded.history)) sink(String(lineOf.get(m.run) ?? ''), m.problem);
   }
   finish();
   return problems;

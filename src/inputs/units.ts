@@ -1,5 +1,5 @@
 import { InputError } from '../errors/input-error.js';
-import type { Run } from './run.js';
+import type { Measurement, Run } from './run.js';
 
 /**
  * The unit algebra, in one place for every reader, `check` and the history: the units Bellgate
@@ -126,18 +126,28 @@ export function alignRunUnits(run: Run, unitOf: (name: string) => string | undef
   for (const [name, m] of run.metrics) {
     const stored = unitOf(name);
     if (m.unit === undefined || stored === undefined || m.unit === stored) continue;
-    const value = convertUnit(m.value, m.unit, stored);
-    if (value === undefined || !Number.isFinite(value)) {
-      throw new InputError(
-        `metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`,
-        {
-          where: m.where,
-          fix: `write ${JSON.stringify(name)} in ${JSON.stringify(stored)} or a unit that converts to it, or give the metric another name to start a new history`,
-        },
-      );
-    }
+    const value = inStoredUnit(name, m, stored);
     metrics ??= new Map(run.metrics);
     metrics.set(name, { ...m, value, unit: stored });
   }
   return metrics === undefined ? run : { ...run, metrics };
+}
+
+/**
+ * A measurement's value in the unit its history stores the metric in (`stored`; undefined when
+ * the history has none, which leaves the value as it is): 0.121 s against ms is 121.
+ * @throws InputError naming the reading's place (file and line), the metric and both units when they do not convert.
+ * @example inStoredUnit('time/parse', { value: 0.121, unit: 's', count: 1 }, 'ms') // 121
+ */
+export function inStoredUnit(name: string, m: Measurement, stored: string | undefined): number {
+  if (m.unit === undefined || stored === undefined || m.unit === stored) return m.value;
+  const value = convertUnit(m.value, m.unit, stored);
+  if (value !== undefined && Number.isFinite(value)) return value;
+  throw new InputError(
+    `metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`,
+    {
+      where: m.where ?? name,
+      fix: `write ${JSON.stringify(name)} in ${JSON.stringify(stored)} or a unit that converts to it, or give the metric another name to start a new history`,
+    },
+  );
 }

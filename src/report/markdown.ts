@@ -6,6 +6,7 @@ import { formatValue } from './format.js';
 import { markerLine } from './marker.js';
 import { reportNotes } from './notes.js';
 import { sparkline } from './sparkline.js';
+import { levelLines } from './level-lines.js';
 import { fullReason, sharedReason } from './reason.js';
 import { GLYPH_LEGEND, STATUS_GLYPH, statusCounts, statusRank, VERDICT_HEADLINE } from './status.js';
 
@@ -103,6 +104,8 @@ export function renderMarkdown(report: Report, options: MarkdownOptions = {}): s
     );
     add(`<sub>${GLYPH_LEGEND}</sub>`);
   }
+  const levels = levelLines(report, (t) => `- ${escapeMarkdown(t, 800)}`);
+  if (levels.length > 0) add(`\n${levels.join('\n')}`);
   add('');
   add(familyLine(report));
   if (report.shared.length > 0) add(fit(report.shared.map(sharedLine), room / 2, 'shared moves').text);

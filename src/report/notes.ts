@@ -1,4 +1,5 @@
 import type { Report } from '../gate/report.js';
+import { LEVEL_MIN_RUNS } from '../gate/judge.js';
 import { mostlyMissing } from '../gate/missing-metrics.js';
 
 /** Names listed in the "not judged" line before it only counts the rest. */
@@ -27,5 +28,34 @@ export function reportNotes(report: Report, clean: (text: string) => string): st
       `${notJudged.length} value${notJudged.length === 1 ? '' : 's'} not judged nor recorded: ${shown.join(', ')}${more > 0 ? ` and ${more} more` : ''}`,
     );
   }
+  const learning = learningLine(report);
+  if (learning !== undefined) lines.push(learning);
   return lines;
+}
+
+/** The seeding hint of a learning report: what a new adopter can do instead of waiting. */
+const SEED = 'record runs on the baseline branch, or seed the history with `bellgate import`';
+
+/**
+ * For a `learning` verdict: how many baseline runs the closest metric has and how many it needs
+ * ("5 of the 8 baseline runs (min-runs) ... 3 more"), or that the history holds none yet.
+ * Undefined for any other verdict.
+ * @example learningLine(report) // 'learning: the baseline holds 5 runs; a metric is judged once it has 8 (min-runs): 3 more. ...'
+ */
+export function learningLine(report: Pick<Report, 'verdict' | 'metrics'>): string | undefined {
+  if (report.verdict !== 'learning') return undefined;
+  let best: { runs: number; minRuns: number; levelRuns?: number } | undefined;
+  for (const m of report.metrics) {
+    if (m.note?.kind !== 'learning') continue;
+    const gap = (n: { runs: number; minRuns: number }) => n.minRuns - n.runs;
+    if (best === undefined || gap(m.note) < gap(best)) best = m.note;
+  }
+  if (best === undefined)
+    return report.metrics.some((m) => m.status === 'new')
+      ? `learning: the history holds no runs of these metrics yet; ${SEED}`
+      : undefined;
+  if (best.runs >= best.minRuns && best.levelRuns !== undefined)
+    return `learning: ${best.levelRuns} run${best.levelRuns === 1 ? '' : 's'} since a level change, and ${LEVEL_MIN_RUNS} are needed before it is judged; record runs on the baseline branch`;
+  const more = best.minRuns - best.runs;
+  return `learning: the baseline holds ${best.runs} run${best.runs === 1 ? '' : 's'}; a metric is judged once it has ${best.minRuns} (min-runs): ${more} more; ${SEED}`;
 }

@@ -4,6 +4,7 @@ import { cleanText } from './clean.js';
 import { metricCells } from './cells.js';
 import { OK_ROWS_LISTED } from './ok-rows.js';
 import { familyLine } from './family-line.js';
+import { levelLines } from './level-lines.js';
 import { fullReason, sharedReason } from './reason.js';
 import { GLYPH_LEGEND, STATUS_GLYPH, statusCounts, VERDICT_HEADLINE } from './status.js';
 import { reportNotes } from './notes.js';
@@ -126,6 +127,8 @@ export function renderText(report: Report, options: { color: boolean; all?: bool
     lines.push(`${STATUS_GLYPH.ok} ok (${okCount}): within their baselines, not listed (--all lists every metric)`);
   }
 
+  const levels = levelLines(report, (t) => clean(t, 600));
+  if (levels.length > 0) lines.push('', ...levels);
   lines.push('');
   lines.push(familyLine(report));
   for (const s of report.shared) lines.push(s.status === 'unsettled' ? c.yellow(sharedLine(s)) : sharedLine(s));

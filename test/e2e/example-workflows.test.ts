@@ -1,6 +1,6 @@
 // Every example workflow in examples/workflows, run as written on a small sample project
 // (test/fixtures/sample-project): its `on:` filters, job and step conditions, matrix, permissions
-// and each step's inputs, with the action itself run through the bundle (`node dist/index.cjs`, or
+// and each step's inputs, with the action itself run through the bundle (`node dist/index.js`, or
 // BELLGATE_ACTION_BUNDLE) against the loopback REST stand-in (GitHub's REST description, and each
 // job's token limited to its `permissions:`), the results service and Azurite. Checkout, setup-node
 // and `npm ci` are stood in. Event payloads are GitHub's examples (@octokit/webhooks-examples),
@@ -35,7 +35,7 @@ let tokens = 0;
 beforeAll(async () => {
   if (!existsSync(BUNDLE))
     throw new Error(
-      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`,
+      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.js`,
     );
   root = await mkdtemp(join(tmpdir(), 'bellgate-e2e-examples-'));
   azurite = await startAzurite(ROOT);
@@ -162,13 +162,16 @@ describe.each(FILES)('examples/workflows/%s as written', (file) => {
         // The job condition with this event's context, as the runner evaluates it.
         const runsOn = job.if === undefined || evaluateIf(String(job.if), e);
         if (!runsOn) continue;
-        expect((job.permissions as Record<string, string>)['pull-requests'], `${name} on ${e}`).toBeUndefined();
+        // Read only: a push asks which pull request it merged (an accepted merge starts a new level).
+        expect((job.permissions as Record<string, string>)['pull-requests'], `${name} on ${e}`).not.toBe('write');
         expect(job.concurrency, `${name} records on ${e}`).toBeDefined();
       }
     }
   });
 
   it('runs on the sample project: pushes record, pull requests and merge queues are checked, label noise is skipped', async () => {
+    // A maintenance workflow checks and records nothing: its own test below runs it.
+    if (/^\s+maintenance:/m.test(text)) return;
     const workspace = checkout(file.replace(/\.yml$/, ''));
     const recordingEvents = ['push', 'schedule', 'workflow_dispatch'].filter((e) => triggers(workflow, event(e)));
     for (const name of recordingEvents) {
@@ -234,6 +237,86 @@ describe('the accept flow of examples/workflows/bench.yml, as the README describ
     expect(gate(green[0]!)?.code, explain(green)).toBe(0);
     expect(gate(green[0]!)?.result?.outputs.get('verdict')).toBe('accepted');
   }, 240_000);
+});
+
+describe('examples/workflows/maintenance.yml as written, on the artifact history of record-baseline.yml', () => {
+  const dispatch = (inputs: Record<string, string>) =>
+    run(
+      'maintenance.yml',
+      event('workflow_dispatch', undefined, (p) => {
+        p.inputs = inputs;
+      }),
+      workspace,
+    );
+  const log = async (inputs: Record<string, string>): Promise<string> => {
+    const jobs = ran(await dispatch(inputs));
+    expect(jobs.map((j) => j.job)).toEqual(['maintain']);
+    expect(gate(jobs[0]!)?.code, explain(jobs)).toBe(0);
+    return gate(jobs[0]!)?.result?.stdout ?? '';
+  };
+  const recorded: string[] = [];
+  let workspace: string;
+  beforeAll(async () => {
+    // This describe's own history: the artifacts other tests of this file recorded are gone.
+    rest.state.artifacts.length = 0;
+    workspace = checkout('maintenance');
+    for (let i = 0; i < 4; i++) {
+      const jobs = await run('record-baseline.yml', event('push'), workspace);
+      const out = gate(ran(jobs)[0]!)?.result?.stdout ?? '';
+      const id = /recorded run (\d+-1) in artifact /.exec(out)?.[1];
+      expect(id, explain(jobs)).toBeDefined();
+      recorded.push(id!);
+    }
+  }, 240_000);
+
+  it('runs lists the recorded runs (the default operation)', async () => {
+    const out = await log({});
+    expect(out).toMatch(/bellgate: 4 runs in artifact /);
+    for (const id of recorded) expect(out).toMatch(new RegExp(`bellgate: ${id} .* 3 metrics`));
+  }, 60_000);
+
+  it('mark, drop and rename change the artifact history; a dropped run stays dropped after the next record', async () => {
+    expect(await log({ operation: 'mark', run: recorded[2]!, metric: 'latency/*', note: 'new index' })).toMatch(
+      new RegExp(`marked run ${recorded[2]}: a new level of latency/\\* starts there`),
+    );
+    expect(await log({ operation: 'drop', run: recorded[1]!, note: 'broken runner' })).toMatch(
+      new RegExp(`dropped run ${recorded[1]}; it stays dropped after merges \\(3 runs left`),
+    );
+    expect(await log({ operation: 'rename', metric: 'size/web-bundle.js.gz', to: 'size/web-bundle.js.br' })).toMatch(
+      /renamed size\/web-bundle\.js\.gz to size\/web-bundle\.js\.br, keeping its history/,
+    );
+    // A push records on top: every older artifact is merged again, and the tombstone holds.
+    const jobs = await run('record-baseline.yml', event('push'), workspace);
+    expect(
+      ran(jobs).every((j) => j.steps?.every((s) => s.code === 0)),
+      explain(jobs),
+    ).toBe(true);
+    const out = await log({ operation: 'runs' });
+    expect(out).toMatch(/bellgate: 4 runs in artifact .*\(1 dropped\)/);
+    expect(out).not.toMatch(new RegExp(`bellgate: ${recorded[1]} `));
+    expect(out).toMatch(new RegExp(`bellgate: ${recorded[2]} .*level mark \\(manual: latency/\\*\\)`));
+  }, 240_000);
+
+  it('import seeds the history from past results in the repository', async () => {
+    const past = Array.from({ length: 6 }, (_, i) =>
+      JSON.stringify({
+        id: `past-${i}`,
+        time: new Date(Date.UTC(2025, 10, 1 + i)).toISOString(),
+        metrics: { 'latency/geocode-p50': 12.4 + 0.01 * i },
+      }),
+    );
+    writeFileSync(join(workspace, 'past-runs.jsonl'), `${past.join('\n')}\n`);
+    const out = await log({ operation: 'import', file: 'past-runs.jsonl' });
+    expect(out).toMatch(
+      /imported past-runs\.jsonl: 6 runs added, 0 updated, 0 unchanged, 0 skipped; 10 runs in artifact /,
+    );
+  }, 60_000);
+
+  it('a mark without its run fails the step, naming the input', async () => {
+    const jobs = ran(await dispatch({ operation: 'mark' }));
+    expect(gate(jobs[0]!)?.code).toBe(1);
+    expect(gate(jobs[0]!)?.result?.stdout).toMatch(/::error.*input `maintenance-run` is empty/);
+  }, 60_000);
 });
 
 /** A job's `if:` for an event, with the examples' own expression rules (workflow-runner.ts). */

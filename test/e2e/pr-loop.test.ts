@@ -1,8 +1,8 @@
-// The pull-request loop through the real bundle (`node dist/index.cjs`, or BELLGATE_ACTION_BUNDLE),
+// The pull-request loop through the real bundle (`node dist/index.js`, or BELLGATE_ACTION_BUNDLE),
 // driven by GitHub's own example payloads (@octokit/webhooks-examples) against the loopback REST
 // stand-in held to GitHub's published REST description (@octokit/openapi): accepting a regression
 // by label (read from the labels endpoint at run time, so a label added later and a re-run with the
-// original payload count), merge queues, fail-loud store faults with their exit codes and first
+// original payload count), an accepted merge starting a new level (commits/{sha}/pulls), merge queues, fail-loud store faults with their exit codes and first
 // summary lines, the missing-metrics policy, units against the history, the annotation limit, the
 // verdict table in the job log and a series name that tries to break out of its log line.
 // Regressed values sit ~20 sd above the baseline, far past the 0.01 cutoff (relative density 0.011
@@ -31,7 +31,7 @@ let run = 5000;
 beforeAll(async () => {
   if (!existsSync(BUNDLE))
     throw new Error(
-      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.cjs`,
+      `no action bundle at ${BUNDLE}: run \`node test/build-dist.mjs /tmp/action-dist\` and set BELLGATE_ACTION_BUNDLE=/tmp/action-dist/index.js`,
     );
   root = await mkdtemp(join(tmpdir(), 'bellgate-e2e-prloop-'));
   rest = await startRestStandin();
@@ -243,6 +243,81 @@ describe('accepting a regression on GitHub', () => {
     const r = await step({ dir, event: 'workflow_dispatch', payload, metrics: [route(4), bundle(4)] });
     expect(r.code, explain(r)).toBe(0);
     expect(r.stdout).toMatch(/recorded run \d+-1 in file /);
+  });
+});
+
+describe('an accepted change becomes the new baseline when it is merged', () => {
+  // The merge of pull request #2 (GitHub's `closed` example, made merged) is the push's commit.
+  const mergedPr = (sha: string, labels: string[]): Record<string, unknown> => {
+    const pr = examplePayload('pull_request', 'closed').pull_request as Record<string, unknown>;
+    const label = (pr.labels as Record<string, unknown>[])[0]!;
+    return {
+      ...pr,
+      merged_at: pr.closed_at,
+      merge_commit_sha: sha,
+      labels: labels.map((name, i) => ({ ...label, id: Number(label.id) + i, name })),
+    };
+  };
+  // The intended step: route/match-static moves from ~412 ns to ~452 ns (about 20 sd).
+  const stepped = (i: number): Metric[] => [{ ...route(i), value: route(i).value + 40 }, bundle(i)];
+  const shaOf = (id: number) => String(id).padStart(40, 'c');
+  const pullsCalls = (sha: string) =>
+    rest.state.calls.filter((c) => c.method === 'GET' && c.path.startsWith(`/repos/${REPO}/commits/${sha}/pulls`))
+      .length;
+  const historyLines = (dir: string) =>
+    readFileSync(join(dir, '.bellgate/history.json'), 'utf8')
+      .trimEnd()
+      .split('\n')
+      .map((l) => JSON.parse(l) as Record<string, unknown>);
+
+  it('the merge push passes as accepted, stores a level mark and the pull request with the run', async () => {
+    const dir = await project('merged-accepted');
+    await pushes(dir, 10, (i) => [route(i), bundle(i)]);
+    rest.state.commitPulls.set(shaOf(6101), [mergedPr(shaOf(6101), ['bug', 'bellgate:accept'])]);
+    const merge = await step({ dir, event: 'push', payload: pushPayload(), metrics: stepped(0), runId: 6101 });
+    expect(merge.code, explain(merge)).toBe(0);
+    expect(merge.outputs.get('verdict')).toBe('accepted');
+    expect(pullsCalls(shaOf(6101))).toBe(1);
+    expect(errors(merge)).toEqual([]);
+    expect(merge.annotations.find((a) => a.kind === 'notice')?.text).toMatch(
+      /1 regression accepted by the label "bellgate:accept" of the merged pull request #2; a new level starts at this run/,
+    );
+    expect(historyLines(dir).find((l) => l.id === '6101-1')).toMatchObject({
+      pr: 2,
+      marks: [{ metrics: ['route/match-static'], reason: 'accepted', pr: 2 }],
+    });
+
+    // The pushes after it are judged on the new level (learning until it has 3 runs), not red.
+    await pushes(dir, 2, (i) => stepped(i + 1));
+    const check = await step({
+      dir,
+      event: 'pull_request',
+      payload: examplePayload('pull_request', 'synchronize'),
+      metrics: stepped(4),
+    });
+    expect(check.code, explain(check)).toBe(0);
+    expect(check.outputs.get('verdict')).toBe('pass');
+    const report = JSON.parse(readFileSync(check.outputs.get('report') ?? '', 'utf8'));
+    const m = report.metrics.find((r: { name: string }) => r.name === 'route/match-static');
+    // The merge run and the two pushes after it: 3 runs of the new level, spread from all 13.
+    expect(m).toMatchObject({ status: 'ok', baseline: { since: '6101-1', levelRuns: 3, n: 13 } });
+    expect(check.stdout).toMatch(/route\/match-static: baseline since run 6101-1 \(accepted in #2, 3 runs/);
+    // Markdown escapes the parenthesis and keeps "#2" from linking (a zero-width space after "#").
+    expect(check.summary).toMatch(
+      /- route\/match-static: baseline since run 6101-1 \\\(accepted in \\#\u200b?2, 3 runs/,
+    );
+  });
+
+  it('a merge without the label starts no level: the push fails, its pull request is still noted', async () => {
+    const dir = await project('merged-plain');
+    await pushes(dir, 10, (i) => [route(i), bundle(i)]);
+    rest.state.commitPulls.set(shaOf(6201), [mergedPr(shaOf(6201), ['bug'])]);
+    const merge = await step({ dir, event: 'push', payload: pushPayload(), metrics: stepped(0), runId: 6201 });
+    expect(merge.code, explain(merge)).toBe(1);
+    expect(merge.outputs.get('verdict')).toBe('regressed');
+    const line = historyLines(dir).find((l) => l.id === '6201-1');
+    expect(line).toMatchObject({ pr: 2 });
+    expect(line?.marks).toBeUndefined();
   });
 });
 

@@ -6,7 +6,7 @@
  * do not grant). The checkout and setup steps are stood in (the sample project is already in the
  * workspace; `npm ci` has nothing to install); every other `run:` runs in bash, and
  * `uses: OWNER/bellgate@v1` runs the action bundle with the step's inputs.
- * Expressions: contexts github, matrix, steps, env; literals; ==, !=, &&, ||, !, parentheses;
+ * Expressions: contexts github, inputs (workflow_dispatch), matrix, steps, env; literals; ==, !=, &&, ||, !, parentheses;
  * always(), success(), failure(), contains(), startsWith() (GitHub docs, "Expressions").
  */
 import { spawn } from 'node:child_process';
@@ -123,8 +123,10 @@ async function runJob(
   };
   const steps: Json = {};
   let failed = false;
+  const inputs = dispatchInputs(workflow, event);
   const context = (): Json => ({
     github,
+    inputs,
     matrix,
     steps,
     env: setup.env,
@@ -188,6 +190,19 @@ async function runJob(
     if (code !== 0) failed = true;
   }
   return run;
+}
+
+/**
+ * The `inputs` context of a workflow_dispatch run: each declared input's default, overridden by
+ * the inputs the run was started with (the payload's `inputs`). Empty for other events.
+ */
+function dispatchInputs(workflow: Json, event: WorkflowEvent): Json {
+  if (event.name !== 'workflow_dispatch') return {};
+  const on = workflow.on as Json | undefined;
+  const declared = ((on?.workflow_dispatch as Json | null | undefined)?.inputs ?? {}) as Record<string, Json>;
+  const out: Json = {};
+  for (const [name, spec] of Object.entries(declared)) out[name] = spec.default ?? '';
+  return { ...out, ...((event.payload.inputs as Json | null | undefined) ?? {}) };
 }
 
 function bash(script: string, cwd: string, env: Record<string, string>): Promise<{ code: number; output: string }> {

@@ -119,7 +119,7 @@ describe('parseImportRuns: CSV', () => {
     const csv = [
       'ID,Time,SHA,Ref,build/compile [s],route/match-static [ns],tiles',
       '8101-1,2026-03-01T10:00:00Z,aaa,,41.25,,3',
-      '8102-1,2026-03-02 10:00,bbb,main,40.5,412.5,',
+      '8102-1,2026-03-02 10:00Z,bbb,main,40.5,412.5,',
       '8103-1,2026-03-03,ccc,main,abc,1,2',
     ].join('\n');
     const parsed = parseImportRuns(csv, 'wide.csv');

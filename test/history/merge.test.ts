@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import type { Run } from '../../src/inputs/run.js';
 import { InputError } from '../../src/errors/input-error.js';
-import type { History } from '../../src/history/history.js';
+import { attemptOf, replacementKey, type History } from '../../src/history/history.js';
 import { appendRun as appendWithReplaced, mergeHistories, trimHistory } from '../../src/history/merge.js';
 import { historyArbitrary } from './arbitraries.js';
 
@@ -108,7 +108,13 @@ describe('mergeHistories', () => {
         const ids = m.runs.map((r) => r.id);
         expect(new Set(ids).size).toBe(ids.length);
         const dropped = new Set([...(a.dropped?.keys() ?? []), ...(b.dropped?.keys() ?? [])]);
-        expect(new Set(ids)).toEqual(new Set([...a.runs, ...b.runs].map((r) => r.id).filter((id) => !dropped.has(id))));
+        // A higher attempt of a CI run ("7-2") replaces a lower one ("7-1").
+        const all = [...a.runs, ...b.runs].map((r) => r.id).filter((id) => !dropped.has(id));
+        const attempt = (id: string) => attemptOf(id)?.attempt ?? 0;
+        const kept = all.filter(
+          (id) => !all.some((o) => replacementKey(o) === replacementKey(id) && attempt(o) > attempt(id)),
+        );
+        expect(new Set(ids)).toEqual(new Set(kept));
         expect(new Set(m.dropped?.keys())).toEqual(dropped);
         for (const [name, column] of m.columns) {
           expect(column.values).toHaveLength(ids.length);
@@ -232,11 +238,15 @@ describe('appendRun', () => {
     expect(late.replaced).toBeUndefined();
   });
 
-  it('refuses a dropped id, and a value in another unit than the stored one (never relabelled)', () => {
+  it('refuses a dropped id; converts a value in another unit to the stored one, refuses one that does not convert (never relabelled)', () => {
     const h: History = { ...base(), dropped: new Map([['8099-1', { id: '8099-1' }]]) };
     expect(() => appendRun(h, { id: '8099-1', time: day(3) }, run({ 'build/compile': 1 }))).toThrow(/was dropped/);
-    expect(() => appendRun(base(), { id: 'x', time: day(3) }, run({ 'build/compile': 41000 }, 'ms'))).toThrow(
-      /stored in "s", but this run gives it in "ms"/,
+    // 41000 ms = 41 s (1 s = 1000 ms): converted to the stored unit, the column keeps "s".
+    const converted = appendRun(base(), { id: 'x', time: day(3) }, run({ 'build/compile': 41000 }, 'ms'));
+    expect(converted.columns.get('build/compile')?.unit).toBe('s');
+    expect(converted.columns.get('build/compile')?.values.at(-1)).toBe(41);
+    expect(() => appendRun(base(), { id: 'x', time: day(3) }, run({ 'build/compile': 41 }, 'kB'))).toThrow(
+      /"build\/compile" is in "kB" but its history is in "s": kB \(size\) cannot be converted to s \(time\)/,
     );
     // a metric without a unit takes the first one it is given
     const first = appendRun(

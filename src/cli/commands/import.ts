@@ -5,7 +5,7 @@ import { examples, historyOption, seriesOption } from '../options.js';
 
 /**
  * `bellgate import`: merges past results (JSON Lines or CSV, detected by content) into the history
- * file by run id, so a project can start with the history it already has. Rows that cannot be used
+ * file or data branch by run id, so a project can start with the history it already has. Rows that cannot be used
  * are listed on stderr with their place and reason; the rest are imported.
  */
 export function importCommand(ctx: CommandContext): Command {
@@ -13,8 +13,12 @@ export function importCommand(ctx: CommandContext): Command {
   historyOption(cmd, true, 'history file to merge into (created when missing)');
   cmd.requiredOption('--runs <file>', 'past runs: JSON Lines (one run a line) or CSV');
   seriesOption(cmd);
+  cmd
+    .option('--store <kind>', 'where the history lives: file or branch (artifact: use a manual workflow run)', 'file')
+    .option('--repo <owner/name>', 'repository of the data branch (default: GITHUB_REPOSITORY); token in GITHUB_TOKEN');
   examples(cmd, [
     'bellgate import --history .bellgate/history.jsonl --runs past-runs.jsonl',
+    'GITHUB_TOKEN=... bellgate import --store branch --history bellgate-data --series bench/linux --runs past.csv',
     'bellgate import --history h.json --runs nightly.csv --series nightly',
   ]);
   cmd.addHelpText(

@@ -3,6 +3,7 @@ import { loadConfig } from '../../config/load.js';
 import { loadRun, type MetricFileOptions } from '../load-run.js';
 import { historyStore } from '../open-history.js';
 import { recordRun } from '../record-run.js';
+import { withExactPlace } from '../../inputs/exact-place.js';
 import { runInfoFrom, type RunInfoOptions } from '../run-info.js';
 
 export interface RecordOptions extends MetricFileOptions, RunInfoOptions {
@@ -22,7 +23,8 @@ export async function runRecord(ctx: CommandContext, options: RecordOptions): Pr
   const run = await loadRun(ctx, config, options);
   const store = historyStore(ctx, options.history, options.series);
   const info = runInfoFrom(ctx, options);
-  const saved = await recordRun(store, info, run, config.keep);
+  // A unit the history refuses is named at its exact line of the metric file.
+  const saved = await withExactPlace(() => recordRun(store, info, run, config.keep), ctx.io.cwd);
   const replaced =
     saved.replaced === undefined
       ? ''

@@ -1,8 +1,8 @@
 /**
  * A loopback stand-in for the parts of the GitHub REST API the action calls ("List artifacts for
  * a repository", "Download an artifact" answering 302 with a storage Location, "List labels for an
- * issue", "List/Create/Update issue comment", "Delete an artifact", "List repository tags", "Get a
- * commit"): exact-name artifact filter, newest-first listing,
+ * issue", "List pull requests associated with a commit", "List/Create/Update issue comment", "Delete an
+ * artifact", "List repository tags", "Get a commit"): exact-name artifact filter, newest-first listing,
  * per_page/page pagination, and fault injection (status, headers, times) so retries can be
  * counted. Every request is held to GitHub's published REST description and every answer to its
  * documented response schema (openapi.ts); a mismatch, or a request the description does not
@@ -79,6 +79,11 @@ export interface RestState {
   /** The repository's tags, in the order "List repository tags" gives them, and commit times by sha. */
   tags: { name: string; sha: string }[];
   commitTimes: Map<string, string>;
+  /**
+   * "List pull requests associated with a commit", by commit sha: pull request objects in the
+   * documented pull-request-simple shape (tests take them from GitHub's webhook examples).
+   */
+  commitPulls: Map<string, Record<string, unknown>[]>;
   /** Requests and answers that do not match GitHub's REST description (should stay empty). */
   violations: string[];
   /**
@@ -146,6 +151,8 @@ function artifactJson(a: StoredArtifact, base: string, owner: string, repo: stri
 function neededPermission(method: string, template: string): [string, 'read' | 'write'][] | undefined {
   const level = method === 'GET' ? 'read' : 'write';
   if (template.startsWith('/repos/{owner}/{repo}/actions/artifacts')) return [['actions', level]];
+  // GitHub documents `contents: read` besides; every job token has that unless it is taken away.
+  if (template.startsWith('/repos/{owner}/{repo}/commits/{commit_sha}/pulls')) return [['pull-requests', level]];
   if (template === '/repos/{owner}/{repo}/tags' || template.startsWith('/repos/{owner}/{repo}/commits/'))
     return [['contents', level]];
   if (template.startsWith('/repos/{owner}/{repo}/issues/'))
@@ -228,6 +235,7 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
     labels: new Map(),
     tags: [],
     commitTimes: new Map(),
+    commitPulls: new Map(),
     violations: [],
     tokenPermissions: new Map(),
     faults: [],
@@ -341,6 +349,8 @@ export async function startRestStandin(initial: Partial<RestState> = {}): Promis
       const names = state.labels.get(Number(d[1])) ?? [];
       return send(res, 200, slice(names.map((n, i) => labelJson(n, i, base, owner, repo))));
     }
+    d = /^\/commits\/([^/]+)\/pulls$/.exec(rest);
+    if (d && method === 'GET') return send(res, 200, slice(state.commitPulls.get(d[1] ?? '') ?? []));
     d = /^\/issues\/(\d+)\/comments$/.exec(rest);
     if (d) {
       const issue = Number(d[1]);
