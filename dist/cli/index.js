@@ -12545,7 +12545,10 @@ function toFailure(error) {
         return { code: EXIT.input, text: `bellgate: ${error.describe()}` };
     if (error instanceof store/* StoreError */.A || (error instanceof Error && error.name === 'StoreError')) {
         const text = error instanceof store/* StoreError */.A ? error.describe() : error.message;
-        return { code: EXIT.store, text: `bellgate: history store: ${text}` };
+        // What is stored is the wrong thing (another series, not a history): bad input, not an outage.
+        const kind = error instanceof store/* StoreError */.A ? error.kind : undefined;
+        const code = kind === 'other-series' || kind === 'not-a-history' ? EXIT.input : EXIT.store;
+        return { code, text: `bellgate: history store: ${text}` };
     }
     const system = systemError(error);
     if (system)
@@ -13084,7 +13087,11 @@ async function performCheck(ctx, options) {
     const { history, store } = await (0,open_history/* openHistory */.j)(ctx, options.history, options.series, runsToRead(config));
     // Values in the units the history stores (0.121 s against ms becomes 121 ms), or a refusal.
     const run = await (0,exact_place/* withExactPlace */.F)(() => (0,units/* alignRunUnits */.Q6)(read, (name) => history.columns.get(name)?.unit), ctx.io.cwd);
-    if (options.history !== undefined && history.runs.length === 0) {
+    if (options.history === undefined) {
+        // Without a history nothing can regress: said, so a forgotten flag is not a quiet pass.
+        ctx.io.stderr('bellgate: note: no --history given, so every metric is new and nothing is judged\n');
+    }
+    else if (history.runs.length === 0) {
         // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
         ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
     }
@@ -14284,7 +14291,7 @@ function reportCommand(ctx) {
     const cmd = new Command('report').description('write an HTML report of the history and this run');
     historyOption(cmd, true);
     cmd.option('--metrics <file...>', 'metric files of this run (default: the newest run in the history)');
-    cmd.requiredOption('--html <file>', 'where to write the HTML file');
+    cmd.requiredOption('--html <file>', 'where to write the HTML file (required)');
     cmd.option('--title <text>', 'title of the page');
     cmd.option('--since <ref>', 'add a release review section: each metric since this run id, commit sha or time');
     cmd.option('--at <iso>', "with --since: the reference commit's time (a commit without a recorded run)");
@@ -20432,8 +20439,11 @@ class InputError extends Error {
      * send a terminal escape sequence or reorder the line it is printed on (CVE-2021-42574).
      */
     describe() {
-        const head = this.where ? `${this.where}: ${this.message}` : this.message;
-        return (0,_visible_text_js__WEBPACK_IMPORTED_MODULE_0__/* .visibleText */ .Q)(shortenQuotes(this.fix ? `${head}\n  fix: ${this.fix}` : head));
+        // Each part is one line: a line feed quoted from input (a metric name) must not start a line
+        // of its own, which a CI log would read as a command.
+        const line = (text) => (0,_visible_text_js__WEBPACK_IMPORTED_MODULE_0__/* .visibleText */ .Q)(shortenQuotes(text)).replace(/\n/g, '\\u{000A}');
+        const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
+        return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
     }
 }
 /** Quoted text past this many characters is cut in messages: a 10 KB metric name is not echoed whole. */
@@ -23366,20 +23376,27 @@ function createFileStore(path, series, options = {}) {
                 throw new store/* StoreError */.A(`the history file is not a readable history document (${cause.message}); it was left as it is`, {
                     where,
                     fix: 'point the history at a file that Bellgate wrote',
+                    kind: 'not-a-history',
                     cause,
                 });
             }
             if (!(cause instanceof input_error/* InputError */.d))
                 throw cause;
-            throw new store/* StoreError */.A(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, { where, fix: `${cause.fix ?? 'repair it'}; \`bellgate verify --history ${path}\` lists every problem`, cause });
+            throw new store/* StoreError */.A(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
+                where,
+                fix: `${cause.fix ?? 'repair it'}; \`bellgate verify --history ${path}\` lists every problem`,
+                kind: 'not-a-history',
+                cause,
+            });
         }
         if (decoded === undefined)
-            throw new store/* StoreError */.A('the history file is not a readable history document', { where });
+            throw new store/* StoreError */.A('the history file is not a readable history document', { where, kind: 'not-a-history' });
         const found = decoded.history.series;
         if (series !== undefined && found !== series) {
             throw new store/* StoreError */.A(`the file holds the history of series ${JSON.stringify(found)}, not ${JSON.stringify(series)}`, {
                 where,
                 fix: `use one file per series, or pass --series ${JSON.stringify(found)}`,
+                kind: 'other-series',
             });
         }
         return decoded;
@@ -24207,6 +24224,8 @@ function clean(text) {
 /* harmony export */   A: () => (/* binding */ StoreError),
 /* harmony export */   n: () => (/* binding */ trimSlack)
 /* harmony export */ });
+/* harmony import */ var _errors_visible_text_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(81);
+
 /**
  * A store could not be reached, read or written. The CLI maps it to exit 3 and the action fails
  * the step; the stored history is left as it was. `message` is the reason; `where` describes the
@@ -24238,8 +24257,9 @@ class StoreError extends Error {
     }
     /** "store: reason\n  fix: ..." — the line a user sees. */
     describe() {
-        const head = this.where ? `${this.where}: ${this.message}` : this.message;
-        return this.fix ? `${head}\n  fix: ${this.fix}` : head;
+        const line = (text) => (0,_errors_visible_text_js__WEBPACK_IMPORTED_MODULE_0__/* .visibleText */ .Q)(text).replace(/\n/g, '\\u{000A}');
+        const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
+        return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
     }
 }
 /**
@@ -26068,15 +26088,17 @@ function learningLine(report) {
 /* harmony export */   yQ: () => (/* binding */ runnerText)
 /* harmony export */ });
 /* unused harmony export describeTolerance */
-/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5956);
+/* harmony import */ var _inputs_units_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(4702);
+/* harmony import */ var _format_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(5956);
+
 
 /** "1%" or "512". @example describeTolerance({ kind: 'percent', amount: 0.01 }) // '1%' */
 function describeTolerance(tolerance) {
-    return tolerance.kind === 'percent' ? `${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(tolerance.amount * 100)}%` : (0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(tolerance.amount);
+    return tolerance.kind === 'percent' ? `${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(tolerance.amount * 100)}%` : (0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(tolerance.amount);
 }
 /** A share as a percent with enough digits to check: "7.1%", "0.028%". */
 function formatShare(share) {
-    return (0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(share).replace(/^[+±]/, '');
+    return (0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(share).replace(/^[+±]/, '');
 }
 /** "1%", the budget of a report in words. */
 function budgetText(budget) {
@@ -26132,28 +26154,28 @@ function position(m) {
     if (m.note?.kind === 'constant') {
         const centre = m.baseline === undefined ? NaN : m.baseline.scale === 'log' ? Math.exp(m.baseline.mean) : m.baseline.mean;
         return m.relativeDensity === 1
-            ? `equal to the constant baseline ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(centre)}`
-            : `off the constant baseline ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(centre)} (sd 0; set \`resolution\` to the smallest meaningful step)`;
+            ? `equal to the constant baseline ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(centre)}`
+            : `off the constant baseline ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(centre)} (sd 0; set \`resolution\` to the smallest meaningful step)`;
     }
-    const own = m.own === undefined ? '' : `${m.shared === undefined ? 'move' : 'own move'} ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(m.own)}`;
-    const beside = m.shared === undefined ? '' : ` beside a shared move of ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(m.shared)} (${m.group ?? 'shared'})`;
+    const own = m.own === undefined ? '' : `${m.shared === undefined ? 'move' : 'own move'} ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(m.own)}`;
+    const beside = m.shared === undefined ? '' : ` beside a shared move of ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(m.shared)} (${m.group ?? 'shared'})`;
     const z = m.z === undefined
         ? ''
-        : `, ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(Math.abs(m.z), 3)} sd ${m.z >= 0 ? 'above' : 'below'} the baseline centre`;
+        : `, ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(Math.abs(m.z), 3)} sd ${m.z >= 0 ? 'above' : 'below'} the baseline centre`;
     return `${own}${beside}${z}` || 'at the baseline centre';
 }
 /** The test the metric faced, with its numbers. */
 function testPhrase(m, report) {
     const r = m.relativeDensity ?? 1;
     if (report.family === 'none' || m.adjusted === undefined) {
-        return `relative density ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatDensity */ .a7)(r)} ${r < m.cutoff ? '<' : '≥'} cutoff ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatDensity */ .a7)(m.cutoff)}`;
+        return `relative density ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatDensity */ .a7)(r)} ${r < m.cutoff ? '<' : '≥'} cutoff ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatDensity */ .a7)(m.cutoff)}`;
     }
     const fired = m.adjusted <= report.budget;
-    const level = m.level === undefined ? '' : ` ${fired ? '≤' : '>'} ${report.family} level ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(m.level, 3)}`;
-    const tail = m.tail === undefined ? '' : `tail ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(m.tail, 3)}${level}`;
+    const level = m.level === undefined ? '' : ` ${fired ? '≤' : '>'} ${report.family} level ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(m.level, 3)}`;
+    const tail = m.tail === undefined ? '' : `tail ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(m.tail, 3)}${level}`;
     const density = m.effectiveCutoff === undefined
         ? ''
-        : ` (relative density ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatDensity */ .a7)(r)} ${r < m.effectiveCutoff ? '<' : '≥'} effective cutoff ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatDensity */ .a7)(m.effectiveCutoff)})`;
+        : ` (relative density ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatDensity */ .a7)(r)} ${r < m.effectiveCutoff ? '<' : '≥'} effective cutoff ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatDensity */ .a7)(m.effectiveCutoff)})`;
     return `${tail}${density}, ${budgetText(report.budget)} chance of any false alarm per run`;
 }
 /** "baseline since run 4180-1 (accepted in #12)", or '' when the baseline spans its whole window. */
@@ -26189,7 +26211,8 @@ function runnerText(m) {
 function detectableText(m) {
     if (m.detectable === undefined || !Number.isFinite(m.detectable))
         return '';
-    const way = m.worse === 'lower' ? 'drop' : m.worse === 'both' ? 'move' : 'slowdown';
+    const timing = m.unit !== undefined && (0,_inputs_units_js__WEBPACK_IMPORTED_MODULE_0__/* .unitScale */ .$G)(m.unit)?.[0]?.dimension === 'time';
+    const way = m.worse === 'lower' ? 'drop' : m.worse === 'both' ? 'move' : timing ? 'slowdown' : 'rise';
     const parts = [`can see a ${way} of ${formatShare(m.detectable)} or more (80% of the time)`];
     const noise = m.noise;
     if (noise?.moreRuns !== undefined)
@@ -26209,19 +26232,19 @@ function detectableText(m) {
 /** The sentence of a group's shared move: what it was, against the history, and what to do. */
 function sharedReason(s) {
     if (s.status === 'learning')
-        return `shared move ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(s.move)} of ${s.members} metrics; only ${s.n} baseline runs to judge it against`;
-    const largest = s.largest === undefined ? '' : ` (the largest of ${s.n} baseline runs: ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(s.largest)})`;
-    const tail = s.tail === undefined ? '' : `, tail ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatNumber */ .ZV)(s.tail, 3)}`;
+        return `shared move ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(s.move)} of ${s.members} metrics; only ${s.n} baseline runs to judge it against`;
+    const largest = s.largest === undefined ? '' : ` (the largest of ${s.n} baseline runs: ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(s.largest)})`;
+    const tail = s.tail === undefined ? '' : `, tail ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatNumber */ .ZV)(s.tail, 3)}`;
     if (s.held !== undefined && s.held.length > 0)
-        return (`a slow episode: several metrics of ${s.name} were far out at once, each by its own amount (shared move ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(s.move)}); ` +
+        return (`a slow episode: several metrics of ${s.name} were far out at once, each by its own amount (shared move ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(s.move)}); ` +
             `${s.held.join(', ')} would have regressed, but one run in such a spell cannot tell the spell from a change. Re-run the check (a calm run that shows the same move confirms it)`);
     const episode = s.episode === true
         ? '; a slow episode (several metrics far out at once): judged against every baseline run, so less is visible'
         : '';
     if (s.status === 'unsettled')
-        return (`every metric of ${s.name} moved together by ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(s.move)}, beyond what the history has shown${largest}${tail}: ` +
+        return (`every metric of ${s.name} moved together by ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(s.move)}, beyond what the history has shown${largest}${tail}: ` +
             'a slower runner, or a change that slowed everything; one run cannot tell. Re-run the check (a second run with the same move confirms the change), or record a baseline run on the same runner');
-    return `shared move ${(0,_format_js__WEBPACK_IMPORTED_MODULE_0__/* .formatChange */ .eD)(s.move)} of ${s.members} metrics, within what the history has shown${largest}${tail}${episode}`;
+    return `shared move ${(0,_format_js__WEBPACK_IMPORTED_MODULE_1__/* .formatChange */ .eD)(s.move)} of ${s.members} metrics, within what the history has shown${largest}${tail}${episode}`;
 }
 /**
  * Everything a reader is told about one metric, in one line: the reason, the baseline's start,

@@ -59,7 +59,10 @@ export async function performCheck(ctx: CommandContext, options: CheckOptions): 
   const { history, store } = await openHistory(ctx, options.history, options.series, runsToRead(config));
   // Values in the units the history stores (0.121 s against ms becomes 121 ms), or a refusal.
   const run = await withExactPlace(() => alignRunUnits(read, (name) => history.columns.get(name)?.unit), ctx.io.cwd);
-  if (options.history !== undefined && history.runs.length === 0) {
+  if (options.history === undefined) {
+    // Without a history nothing can regress: said, so a forgotten flag is not a quiet pass.
+    ctx.io.stderr('bellgate: note: no --history given, so every metric is new and nothing is judged\n');
+  } else if (history.runs.length === 0) {
     // Said out loud because a mistyped --history would otherwise pass quietly as "learning".
     ctx.io.stderr(`bellgate: note: ${options.history} holds no runs yet (missing or empty), so every metric is new\n`);
   }

@@ -38,7 +38,10 @@ export function toFailure(error: unknown): Failure {
   if (error instanceof InputError) return { code: EXIT.input, text: `bellgate: ${error.describe()}` };
   if (error instanceof StoreError || (error instanceof Error && error.name === 'StoreError')) {
     const text = error instanceof StoreError ? error.describe() : error.message;
-    return { code: EXIT.store, text: `bellgate: history store: ${text}` };
+    // What is stored is the wrong thing (another series, not a history): bad input, not an outage.
+    const kind = error instanceof StoreError ? error.kind : undefined;
+    const code = kind === 'other-series' || kind === 'not-a-history' ? EXIT.input : EXIT.store;
+    return { code, text: `bellgate: history store: ${text}` };
   }
   const system = systemError(error);
   if (system) return { code: EXIT.input, text: `bellgate: ${system}` };

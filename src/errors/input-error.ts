@@ -23,8 +23,11 @@ export class InputError extends Error {
    * send a terminal escape sequence or reorder the line it is printed on (CVE-2021-42574).
    */
   describe(): string {
-    const head = this.where ? `${this.where}: ${this.message}` : this.message;
-    return visibleText(shortenQuotes(this.fix ? `${head}\n  fix: ${this.fix}` : head));
+    // Each part is one line: a line feed quoted from input (a metric name) must not start a line
+    // of its own, which a CI log would read as a command.
+    const line = (text: string): string => visibleText(shortenQuotes(text)).replace(/\n/g, '\\u{000A}');
+    const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
+    return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
   }
 }
 

@@ -91,6 +91,7 @@ export function createFileStore(
           {
             where,
             fix: 'point the history at a file that Bellgate wrote',
+            kind: 'not-a-history',
             cause,
           },
         );
@@ -98,10 +99,16 @@ export function createFileStore(
       if (!(cause instanceof InputError)) throw cause;
       throw new StoreError(
         `the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`,
-        { where, fix: `${cause.fix ?? 'repair it'}; \`bellgate verify --history ${path}\` lists every problem`, cause },
+        {
+          where,
+          fix: `${cause.fix ?? 'repair it'}; \`bellgate verify --history ${path}\` lists every problem`,
+          kind: 'not-a-history',
+          cause,
+        },
       );
     }
-    if (decoded === undefined) throw new StoreError('the history file is not a readable history document', { where });
+    if (decoded === undefined)
+      throw new StoreError('the history file is not a readable history document', { where, kind: 'not-a-history' });
     const found = decoded.history.series;
     if (series !== undefined && found !== series) {
       throw new StoreError(
@@ -109,6 +116,7 @@ export function createFileStore(
         {
           where,
           fix: `use one file per series, or pass --series ${JSON.stringify(found)}`,
+          kind: 'other-series',
         },
       );
     }

@@ -1,3 +1,4 @@
+import { visibleText } from '../errors/visible-text.js';
 import type { HistoryChange } from './changes.js';
 import type { History } from './history.js';
 
@@ -80,8 +81,9 @@ export class StoreError extends Error {
 
   /** "store: reason\n  fix: ..." — the line a user sees. */
   describe(): string {
-    const head = this.where ? `${this.where}: ${this.message}` : this.message;
-    return this.fix ? `${head}\n  fix: ${this.fix}` : head;
+    const line = (text: string): string => visibleText(text).replace(/\n/g, '\\u{000A}');
+    const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
+    return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
   }
 }
 

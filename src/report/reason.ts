@@ -1,3 +1,4 @@
+import { unitScale } from '../inputs/units.js';
 import type { Tolerance } from '../config/types.js';
 import type { MetricResult, Report, SharedMoveResult } from '../gate/report.js';
 import { formatChange, formatDensity, formatNumber } from './format.js';
@@ -128,7 +129,8 @@ export function runnerText(m: MetricResult): string {
  */
 export function detectableText(m: MetricResult): string {
   if (m.detectable === undefined || !Number.isFinite(m.detectable)) return '';
-  const way = m.worse === 'lower' ? 'drop' : m.worse === 'both' ? 'move' : 'slowdown';
+  const timing = m.unit !== undefined && unitScale(m.unit)?.[0]?.dimension === 'time';
+  const way = m.worse === 'lower' ? 'drop' : m.worse === 'both' ? 'move' : timing ? 'slowdown' : 'rise';
   const parts = [`can see a ${way} of ${formatShare(m.detectable)} or more (80% of the time)`];
   const noise = m.noise;
   if (noise?.moreRuns !== undefined)

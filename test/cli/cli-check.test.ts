@@ -98,6 +98,8 @@ describe('check', () => {
     const parsed = JSON.parse(r.stdout) as { verdict: string; metrics: Array<{ status: string }> };
     expect(parsed.verdict).toBe('learning');
     expect(parsed.metrics.every((m) => m.status === 'new')).toBe(true);
+    // A forgotten --history is said, not a quiet pass.
+    expect(r.stderr).toContain('no --history given, so every metric is new');
   });
 
   it('a --history file that does not exist yet: a note on stderr, every metric new', async () => {
@@ -155,10 +157,10 @@ describe('check', () => {
     expect(r.stderr).toMatch(/bad\.yml:2:\d+/);
   });
 
-  it('a corrupt history: exit 3, the file left untouched', async () => {
+  it('a corrupt history: exit 2, the file left untouched', async () => {
     const corrupt = work.write('corrupt.json', '{"schema": "bellgate.history/2", "series": "default", "runs": ');
     const r = await bellgate(work.dir, ['check', '--metrics', calm, '--history', corrupt, '--record']);
-    expect(r.code).toBe(3);
+    expect(r.code).toBe(2); // what is stored is the wrong thing: bad input (README, Exit codes)
     expect(r.stderr).toContain('corrupt.json');
     noStack(r.stderr);
     expect(readFileSync(corrupt, 'utf8')).toBe('{"schema": "bellgate.history/2", "series": "default", "runs": ');
@@ -184,9 +186,9 @@ describe('check', () => {
     expect(r.stderr).not.toContain('corrupt-three.json');
   });
 
-  it('a history of another series: exit 3 saying which series it holds', async () => {
+  it('a history of another series: exit 2 saying which series it holds', async () => {
     const r = await bellgate(work.dir, ['check', '--metrics', calm, '--history', history, '--series', 'nightly']);
-    expect(r.code).toBe(3);
+    expect(r.code).toBe(2); // what is stored is the wrong thing: bad input (README, Exit codes)
     expect(r.stderr).toContain('"default"');
   });
 

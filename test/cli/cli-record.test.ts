@@ -47,10 +47,10 @@ describe('record', () => {
     expect(existsSync(join(work.dir, 't.json'))).toBe(false);
   });
 
-  it('refuses to write over a corrupt history: exit 3, file unchanged', async () => {
+  it('refuses to write over a corrupt history: exit 2, file unchanged', async () => {
     const bad = work.write('bad-history.json', 'not json at all');
     const r = await bellgate(work.dir, ['record', '--metrics', calm, '--history', bad]);
-    expect(r.code).toBe(3);
+    expect(r.code).toBe(2); // what is stored is the wrong thing: bad input (README, Exit codes)
     expect(readFileSync(bad, 'utf8')).toBe('not json at all');
   });
 

@@ -11,7 +11,7 @@ export function reportCommand(ctx: CommandContext): Command {
   const cmd = new Command('report').description('write an HTML report of the history and this run');
   historyOption(cmd, true);
   cmd.option('--metrics <file...>', 'metric files of this run (default: the newest run in the history)');
-  cmd.requiredOption('--html <file>', 'where to write the HTML file');
+  cmd.requiredOption('--html <file>', 'where to write the HTML file (required)');
   cmd.option('--title <text>', 'title of the page');
   cmd.option('--since <ref>', 'add a release review section: each metric since this run id, commit sha or time');
   cmd.option('--at <iso>', "with --since: the reference commit's time (a commit without a recorded run)");
