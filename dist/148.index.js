@@ -47,7 +47,7 @@ function seriesFilePath(series) {
 function dataBranchName(raw) {
     const name = raw.trim().replace(/^refs\/heads\//, '');
     const bad = (why) => {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`input \`history\` is ${JSON.stringify(raw)}, which cannot be a branch name: ${why}`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(`input \`history\` is ${JSON.stringify(raw)}, which cannot be a branch name: ${why}`, {
             where: 'input history',
             fix: `name the data branch with letters, digits, dashes and slashes, e.g. \`history: ${DEFAULT_DATA_BRANCH}\``,
         });

@@ -133,7 +133,7 @@ function seriesFilePath(series) {
 function dataBranchName(raw) {
     const name = raw.trim().replace(/^refs\/heads\//, '');
     const bad = (why) => {
-        throw new input_error/* InputError */.d(`input \`history\` is ${JSON.stringify(raw)}, which cannot be a branch name: ${why}`, {
+        throw new input_error/* InputError */.dz(`input \`history\` is ${JSON.stringify(raw)}, which cannot be a branch name: ${why}`, {
             where: 'input history',
             fix: `name the data branch with letters, digits, dashes and slashes, e.g. \`history: ${DEFAULT_DATA_BRANCH}\``,
         });
@@ -240,7 +240,7 @@ function createBranchStore(options) {
             stored = (0,_document_js__WEBPACK_IMPORTED_MODULE_4__/* .parseHistory */ .i6)(text, `${branch}:${path}`, newest === undefined ? {} : { newest });
         }
         catch (cause) {
-            if (!(cause instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d))
+            if (!(cause instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz))
                 throw cause;
             throw new _store_js__WEBPACK_IMPORTED_MODULE_5__/* .StoreError */ .A(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, { where, fix: cause.fix ?? 'repair or delete the file on the data branch', cause });
         }
@@ -293,7 +293,7 @@ function createBranchStore(options) {
             }
             catch (error) {
                 // A change that does not apply (InputError) says so plainly; it is not a store failure.
-                if (error instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d)
+                if (error instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz)
                     throw error;
                 if (!(error instanceof _branch_api_js__WEBPACK_IMPORTED_MODULE_2__/* .GitDataError */ .x))
                     throw failure(error, doing);

@@ -67,7 +67,7 @@ function seriesFilePath(series) {
 function dataBranchName(raw) {
     const name = raw.trim().replace(/^refs\/heads\//, '');
     const bad = (why) => {
-        throw new input_error/* InputError */.d(`input \`history\` is ${JSON.stringify(raw)}, which cannot be a branch name: ${why}`, {
+        throw new input_error/* InputError */.dz(`input \`history\` is ${JSON.stringify(raw)}, which cannot be a branch name: ${why}`, {
             where: 'input history',
             fix: `name the data branch with letters, digits, dashes and slashes, e.g. \`history: ${DEFAULT_DATA_BRANCH}\``,
         });

@@ -2652,7 +2652,7 @@ function splitNewest(history, source) {
     const last = history.runs.length - 1;
     const newest = history.runs[last];
     if (newest === undefined) {
-        throw new input_error/* InputError */.d('the history holds no runs, so there is nothing to judge', {
+        throw new input_error/* InputError */.dz('the history holds no runs, so there is nothing to judge', {
             where: source,
             fix: "pass this run's metric files with --metrics, or record runs first (bellgate record / import)",
         });
@@ -3758,7 +3758,7 @@ function collectRun(results, aggregateFor) {
     for (const [name, { unit, values, where }] of byName) {
         const value = aggregateSamples(values, aggregateFor(name), unit);
         if (!Number.isFinite(value)) {
-            throw new input_error/* InputError */.d(`the ${aggregateFor(name)} of the ${values.length} samples of ${JSON.stringify(name)} overflows`, {
+            throw new input_error/* InputError */.dz(`the ${aggregateFor(name)} of the ${values.length} samples of ${JSON.stringify(name)} overflows`, {
                 where,
                 fix: 'check the values of this metric, or change its unit so the numbers are smaller',
             });
@@ -3782,7 +3782,7 @@ function converted(name, value, unit, where, seen) {
     if (out !== undefined && Number.isFinite(out))
         return out;
     const show = (u) => (u === undefined ? 'no unit' : `unit ${JSON.stringify(u)}`);
-    throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has ${show(seen.unit)} at ${seen.where ?? 'its first source'} but ${show(unit)} at ${where ?? 'another source'}, which cannot be converted`, { where, fix: 'write the metric in one unit everywhere, or in convertible units (ms and s, kB and MiB)' });
+    throw new input_error/* InputError */.dz(`metric ${JSON.stringify(name)} has ${show(seen.unit)} at ${seen.where ?? 'its first source'} but ${show(unit)} at ${where ?? 'another source'}, which cannot be converted`, { where, fix: 'write the metric in one unit everywhere, or in convertible units (ms and s, kB and MiB)' });
 }
 /**
  * The relative spread of one run's samples: the sd of their logarithms when all are above 0,
@@ -3820,7 +3820,7 @@ const LIMIT_KEYS = Object.freeze({
  * @example limitError('maxMetrics', 100000, 'run.json', 'more than 100000 metrics')
  */
 function limitError(limit, value, where, what) {
-    return new input_error/* InputError */.d(`${what} (limit ${LIMIT_KEYS[limit]} = ${value})`, {
+    return new input_error/* InputError */.dz(`${what} (limit ${LIMIT_KEYS[limit]} = ${value})`, {
         where,
         fix: `raise ${LIMIT_KEYS[limit]} in the config file if this input is expected`,
     });
@@ -3895,14 +3895,14 @@ function parseDecimal(text, where, what) {
     }
     if (NON_FINITE.test(trimmed))
         throw nonFinite(trimmed, where, what);
-    throw new input_error/* InputError */.d(`${what} ${JSON.stringify(truncate(trimmed))} is not a number`, {
+    throw new input_error/* InputError */.dz(`${what} ${JSON.stringify(truncate(trimmed))} is not a number`, {
         where,
         fix: 'write the value as a plain decimal number such as 412.5 or 1.2e-3',
     });
 }
 /** The error for NaN, infinities and overflowing numbers, shared by all readers. */
 function nonFinite(text, where, what) {
-    return new input_error/* InputError */.d(`${what} ${truncate(text)} is not a finite number`, {
+    return new input_error/* InputError */.dz(`${what} ${truncate(text)} is not a finite number`, {
         where,
         fix: 'leave out metrics that were not measured instead of writing NaN or Infinity',
     });
@@ -3939,7 +3939,7 @@ class ReadingSink {
             throw samplesError(this.file, this.limits.maxSamples, where);
         (0,names/* checkMetricName */.WO)(name, where);
         if (!Number.isFinite(value)) {
-            throw new input_error/* InputError */.d(`value of ${JSON.stringify(name)} is ${value}, not a finite number`, {
+            throw new input_error/* InputError */.dz(`value of ${JSON.stringify(name)} is ${value}, not a finite number`, {
                 where,
                 fix: 'leave out metrics that were not measured instead of writing NaN or Infinity',
             });
@@ -4002,7 +4002,7 @@ function readCsvMetrics(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
         rows++;
     });
     if (layout === undefined)
-        throw new input_error/* InputError */.d('the CSV file has no header row', {
+        throw new input_error/* InputError */.dz('the CSV file has no header row', {
             where: file,
             fix: 'start the file with a header such as name,value,unit',
         });
@@ -4019,7 +4019,7 @@ function layoutOf(header, file, sink) {
 }
 function longLayout(columns, file, sink) {
     if (new Set(columns).size !== columns.length) {
-        throw new input_error/* InputError */.d(`the CSV header repeats a column: ${columns.join(',')}`, {
+        throw new input_error/* InputError */.dz(`the CSV header repeats a column: ${columns.join(',')}`, {
             where: `${file}:1`,
             fix: 'name each column once',
         });
@@ -4043,7 +4043,7 @@ function wideLayout(header, file, sink) {
     const seen = new Set();
     for (const [i, { name }] of metrics.entries()) {
         if (seen.has(name)) {
-            throw new input_error/* InputError */.d(`the CSV header names metric ${JSON.stringify(name)} twice (column ${i + 1})`, {
+            throw new input_error/* InputError */.dz(`the CSV header names metric ${JSON.stringify(name)} twice (column ${i + 1})`, {
                 where: headerWhere,
                 fix: 'give each metric one column; put repeated measurements in more rows',
             });
@@ -4081,10 +4081,10 @@ function eachRow(text, file, each) {
         });
     }
     catch (error) {
-        if (error instanceof input_error/* InputError */.d)
+        if (error instanceof input_error/* InputError */.dz)
             throw error;
         const e = error;
-        throw new input_error/* InputError */.d(`malformed CSV: ${e.message ?? String(error)}`, {
+        throw new input_error/* InputError */.dz(`malformed CSV: ${e.message ?? String(error)}`, {
             where: typeof e.lines === 'number' ? `${file}:${e.lines}` : file,
             fix: 'give every row as many cells as the header and close every quoted cell',
             cause: error,
@@ -4137,7 +4137,7 @@ function detectFormat(text, file) {
     const head = headLines(text);
     const first = head[0];
     if (first === undefined) {
-        throw new input_error/* InputError */.d('the metric file is empty', { where: file, fix: 'check the step that writes this file' });
+        throw new input_error/* InputError */.dz('the metric file is empty', { where: file, fix: 'check the step that writes this file' });
     }
     const candidates = new Set();
     if (first.startsWith('<')) {
@@ -4164,7 +4164,7 @@ function detectFormat(text, file) {
     if (byExtension && (candidates.size === 0 ? false : candidates.has(byExtension)))
         return byExtension;
     const listed = candidates.size > 0 ? [...candidates] : [...formats/* METRIC_FORMATS */.Y];
-    throw new input_error/* InputError */.d(candidates.size > 0
+    throw new input_error/* InputError */.dz(candidates.size > 0
         ? `cannot tell the format of the metric file: it could be ${listed.join(' or ')}`
         : `the metric file is in no format Bellgate recognises (it reads ${listed.join(', ')})`, { where: file, fix: `pass --input-format (${listed.join(' | ')}) to say which` });
 }
@@ -4299,39 +4299,39 @@ function isRecord(value) {
  */
 function readEntry(entry, sink, place, where) {
     if (!isRecord(entry)) {
-        throw new input_error/* InputError */.d(`a metric entry must be an object, found ${describeJson(entry)}`, {
+        throw new input_error/* InputError */.dz(`a metric entry must be an object, found ${describeJson(entry)}`, {
             where: where(),
             fix: 'write each metric as {"name": "...", "value": 1.5, "unit": "ms"}',
         });
     }
     const { name, value, samples, unit } = entry;
     if (typeof name !== 'string') {
-        throw new input_error/* InputError */.d(`metric entry has ${name === undefined ? 'no "name"' : `a "name" that is ${describeJson(name)}`}`, {
+        throw new input_error/* InputError */.dz(`metric entry has ${name === undefined ? 'no "name"' : `a "name" that is ${describeJson(name)}`}`, {
             where: where(),
             fix: 'give every entry a "name" string',
         });
     }
     if (unit !== undefined && typeof unit !== 'string') {
-        throw new input_error/* InputError */.d(`"unit" of ${JSON.stringify(name)} is ${describeJson(unit)}, not a string`, {
+        throw new input_error/* InputError */.dz(`"unit" of ${JSON.stringify(name)} is ${describeJson(unit)}, not a string`, {
             where: where(),
             fix: 'write the unit as a string such as "ms" or "B", or leave it out',
         });
     }
     if (value !== undefined && samples !== undefined) {
-        throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has both "value" and "samples"`, {
+        throw new input_error/* InputError */.dz(`metric ${JSON.stringify(name)} has both "value" and "samples"`, {
             where: where(),
             fix: 'give either one "value" or a "samples" array, not both',
         });
     }
     if (value === undefined && samples === undefined) {
-        throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has neither "value" nor "samples"`, {
+        throw new input_error/* InputError */.dz(`metric ${JSON.stringify(name)} has neither "value" nor "samples"`, {
             where: where(),
             fix: 'add "value": <number> or "samples": [<number>, ...]',
         });
     }
     const values = value !== undefined ? [value] : samples;
     if (!Array.isArray(values) || values.length === 0) {
-        throw new input_error/* InputError */.d(`"samples" of ${JSON.stringify(name)} must be a non-empty array of numbers`, {
+        throw new input_error/* InputError */.dz(`"samples" of ${JSON.stringify(name)} must be a non-empty array of numbers`, {
             where: where(),
             fix: 'write "samples": [<number>, ...] with at least one number',
         });
@@ -4343,14 +4343,14 @@ function readEntry(entry, sink, place, where) {
 function readNumbers(name, values, unit, sink, place, where) {
     for (const v of values) {
         if (typeof v !== 'number') {
-            throw new input_error/* InputError */.d(`value of ${JSON.stringify(name)} is ${describeJson(v)}, not a number`, {
+            throw new input_error/* InputError */.dz(`value of ${JSON.stringify(name)} is ${describeJson(v)}, not a number`, {
                 where: where(),
                 fix: 'write values as JSON numbers (no quotes), such as 412.5',
             });
         }
         if (!Number.isFinite(v)) {
             // JSON.parse turns 1e999 into Infinity.
-            throw new input_error/* InputError */.d(`value of ${JSON.stringify(name)} overflows to ${v}`, {
+            throw new input_error/* InputError */.dz(`value of ${JSON.stringify(name)} overflows to ${v}`, {
                 where: where(),
                 fix: 'write a finite number',
             });
@@ -4395,7 +4395,7 @@ var json_where = __nccwpck_require__(9617);
 function readJsonMetrics(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
     const doc = (0,json_text/* parseJsonText */.lk)(text, file);
     if (!isRecord(doc)) {
-        throw new input_error/* InputError */.d(`the metric file must hold a JSON object, found ${describeJson(doc)}`, {
+        throw new input_error/* InputError */.dz(`the metric file must hold a JSON object, found ${describeJson(doc)}`, {
             where: file,
             fix: 'write {"metrics": [{"name": "...", "value": 1}]} or {"name": 1}',
         });
@@ -4414,7 +4414,7 @@ function readListForm(entries, text, file, sink) {
         const name = readEntry(entry, sink, `${file} (metrics[${i}])`, where);
         const first = seen.get(name);
         if (first !== undefined) {
-            throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} appears twice (metrics[${first}] and metrics[${i}])`, {
+            throw new input_error/* InputError */.dz(`metric ${JSON.stringify(name)} appears twice (metrics[${first}] and metrics[${i}])`, {
                 where: where(),
                 fix: 'give repeated measurements of one metric as "samples": [...] in a single entry',
             });
@@ -4429,7 +4429,7 @@ function readFlatForm(doc, text, file, sink) {
         const where = () => (0,json_where/* whereInJson */.L)(text, file, [name]);
         const values = Array.isArray(value) ? value : [value];
         if (values.length === 0) {
-            throw new input_error/* InputError */.d(`metric ${JSON.stringify(name)} has an empty array of samples`, {
+            throw new input_error/* InputError */.dz(`metric ${JSON.stringify(name)} has an empty array of samples`, {
                 where: where(),
                 fix: 'give at least one number, or leave the metric out',
             });
@@ -4438,7 +4438,7 @@ function readFlatForm(doc, text, file, sink) {
     }
     const duplicate = findDuplicateKey(text, keys.length);
     if (duplicate !== undefined) {
-        throw new input_error/* InputError */.d(`metric ${JSON.stringify(duplicate)} appears twice; JSON keeps only the last value`, {
+        throw new input_error/* InputError */.dz(`metric ${JSON.stringify(duplicate)} appears twice; JSON keeps only the last value`, {
             where: file,
             fix: 'give repeated measurements as an array of samples under one key',
         });
@@ -11822,7 +11822,7 @@ function readJunit(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
     const checked = XMLValidator.validate(text);
     if (checked !== true) {
         const { msg, line, col } = checked.err;
-        throw new input_error/* InputError */.d(`malformed XML: ${msg}`, {
+        throw new input_error/* InputError */.dz(`malformed XML: ${msg}`, {
             where: `${file}:${line}:${col}`,
             fix: 'check that the file is complete, well-formed XML',
         });
@@ -11832,7 +11832,7 @@ function readJunit(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
         doc = parser.parse(text);
     }
     catch (error) {
-        throw new input_error/* InputError */.d(`malformed XML: ${error instanceof Error ? error.message : String(error)}`, {
+        throw new input_error/* InputError */.dz(`malformed XML: ${error instanceof Error ? error.message : String(error)}`, {
             where: file,
             cause: error,
         });
@@ -11852,7 +11852,7 @@ function readJunit(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
         readSuites(doc, `${file}:`, [], sink);
     }
     else {
-        throw new input_error/* InputError */.d('no <testsuites> or <testsuite> element at the root', {
+        throw new input_error/* InputError */.dz('no <testsuites> or <testsuite> element at the root', {
             where: file,
             fix: 'pass a JUnit XML report, or choose the format with --input-format',
         });
@@ -11885,7 +11885,7 @@ function readSuites(parent, path, suitePath, sink) {
 function readCase(testCase, where, suitePath, suiteName, sink) {
     const caseName = attribute(testCase, 'name');
     if (caseName === '') {
-        throw new input_error/* InputError */.d('test case has no name attribute', { where, fix: 'give every <testcase> a name' });
+        throw new input_error/* InputError */.dz('test case has no name attribute', { where, fix: 'give every <testcase> a name' });
     }
     const className = attribute(testCase, 'classname');
     const parts = [...suitePath, className === suiteName ? '' : className, caseName].filter((p) => p !== '');
@@ -11906,7 +11906,7 @@ function readCase(testCase, where, suitePath, suiteName, sink) {
 function seconds(text, where) {
     const value = parseDecimal(text, `${where}@time`, 'time');
     if (value < 0) {
-        throw new input_error/* InputError */.d(`time ${text} is negative`, {
+        throw new input_error/* InputError */.dz(`time ${text} is negative`, {
             where: `${where}@time`,
             fix: 'write the duration in seconds, 0 or more',
         });
@@ -11966,7 +11966,7 @@ const LABEL_NAME = /[a-zA-Z_][a-zA-Z0-9_]*/y;
  */
 function parseSampleLine(line, where) {
     const fail = (what) => {
-        throw new input_error/* InputError */.d(`expected ${what} in sample line ${JSON.stringify(truncate(line))}`, {
+        throw new input_error/* InputError */.dz(`expected ${what} in sample line ${JSON.stringify(truncate(line))}`, {
             where,
             fix: 'write samples as name{label="value"} 1.5 (see the OpenMetrics text format)',
         });
@@ -12080,7 +12080,7 @@ function readOpenMetrics(text, file, limits = defaults/* DEFAULT_LIMITS */.dR) {
         if (line.trim() === '')
             return;
         if (ended) {
-            throw new input_error/* InputError */.d('text after "# EOF"', { where, fix: 'end the exposition with "# EOF" as its last line' });
+            throw new input_error/* InputError */.dz('text after "# EOF"', { where, fix: 'end the exposition with "# EOF" as its last line' });
         }
         if (line.startsWith('#')) {
             ended = readComment(line, where, types, units);
@@ -12117,7 +12117,7 @@ function readComment(line, where, types, units) {
     if (keyword === 'TYPE') {
         const type = rest.trim().toLowerCase();
         if (!/^(counter|gauge|histogram|gaugehistogram|summary|info|stateset|unknown|untyped)$/.test(type)) {
-            throw new input_error/* InputError */.d(`unknown metric type ${JSON.stringify(truncate(rest.trim()))} for ${family}`, {
+            throw new input_error/* InputError */.dz(`unknown metric type ${JSON.stringify(truncate(rest.trim()))} for ${family}`, {
                 where,
                 fix: 'use one of counter, gauge, histogram, gaugehistogram, summary, info, stateset, unknown',
             });
@@ -12178,13 +12178,13 @@ function parseMetricText(text, file, format, limits = defaults/* DEFAULT_LIMITS 
         result = READERS[chosen](body, file, limits);
     }
     catch (error) {
-        if (error instanceof input_error/* InputError */.d)
+        if (error instanceof input_error/* InputError */.dz)
             throw error;
         // A library failing in a way it does not document must still reach the user as bad input.
-        throw new input_error/* InputError */.d(`cannot read the file as ${chosen}: ${error instanceof Error ? error.message : String(error)}`, { where: file, fix: 'check the file, or choose another format with --input-format', cause: error });
+        throw new input_error/* InputError */.dz(`cannot read the file as ${chosen}: ${error instanceof Error ? error.message : String(error)}`, { where: file, fix: 'check the file, or choose another format with --input-format', cause: error });
     }
     if (result.readings.length === 0 && result.notFitted.size === 0) {
-        throw new input_error/* InputError */.d(`no metrics found in the file (read as ${chosen})`, {
+        throw new input_error/* InputError */.dz(`no metrics found in the file (read as ${chosen})`, {
             where: file,
             fix: 'check the step that writes this file, or choose another format with --input-format',
         });
@@ -12207,7 +12207,7 @@ function pattern_splitPattern(text) {
     const arrow = text.indexOf('=>');
     const pattern = (arrow < 0 ? text : text.slice(0, arrow)).trim();
     if (pattern === '') {
-        throw new input_error/* InputError */.d(`empty metric file pattern in ${JSON.stringify(text)}`, {
+        throw new input_error/* InputError */.dz(`empty metric file pattern in ${JSON.stringify(text)}`, {
             fix: 'write a path or glob, optionally followed by "=> prefix"',
         });
     }
@@ -12224,7 +12224,7 @@ function pattern_splitPattern(text) {
 function normalizePrefix(text, where) {
     const prefix = trimSlashes(text.trim());
     if (prefix === '') {
-        throw new input_error/* InputError */.d(`empty prefix in ${JSON.stringify(where)}`, {
+        throw new input_error/* InputError */.dz(`empty prefix in ${JSON.stringify(where)}`, {
             fix: 'write "path => prefix", or leave out the prefix',
         });
     }
@@ -12277,7 +12277,7 @@ async function readMetricFiles(patterns, options) {
     const limits = { ...defaults/* DEFAULT_LIMITS */.dR, ...options.limits };
     const cwd = external_node_path_default().resolve(options.cwd ?? process.cwd());
     if (patterns.length === 0) {
-        throw new input_error/* InputError */.d('no metric files given', { fix: 'name at least one metric file or glob' });
+        throw new input_error/* InputError */.dz('no metric files given', { fix: 'name at least one metric file or glob' });
     }
     const done = new Set();
     const results = [];
@@ -12344,7 +12344,7 @@ async function filePrefixes(pairs, cwd) {
                 r.used = true;
             const distinct = new Set(hits.map((r) => r.prefix));
             if (distinct.size > 1) {
-                throw new input_error/* InputError */.d(`${relative} is matched by --prefix patterns with different prefixes: ${hits.map((r) => `${r.pattern}=${r.prefix}`).join(', ')}`, { where: '--prefix', fix: 'make the patterns match different files' });
+                throw new input_error/* InputError */.dz(`${relative} is matched by --prefix patterns with different prefixes: ${hits.map((r) => `${r.pattern}=${r.prefix}`).join(', ')}`, { where: '--prefix', fix: 'make the patterns match different files' });
             }
             return hits[0]?.prefix;
         },
@@ -12353,7 +12353,7 @@ async function filePrefixes(pairs, cwd) {
             if (unused.length === 0)
                 return;
             const shown = seen.slice(0, 5).join(', ') + (seen.length > 5 ? ', ...' : '');
-            throw new input_error/* InputError */.d(`--prefix ${unused.map((r) => JSON.stringify(r.pattern)).join(', ')} matches none of the metric files found (${shown})`, {
+            throw new input_error/* InputError */.dz(`--prefix ${unused.map((r) => JSON.stringify(r.pattern)).join(', ')} matches none of the metric files found (${shown})`, {
                 where: '--prefix',
                 fix: 'write PATTERN as a path or glob of the files themselves, relative to the working directory (e.g. "pkgs/a/*.json=pkg-a")',
             });
@@ -12366,7 +12366,7 @@ async function expand(given, cwd) {
     const literal = external_node_path_default().resolve(cwd, pattern);
     const info = await (0,promises_.stat)(literal).catch(() => undefined);
     if (info?.isDirectory()) {
-        throw new input_error/* InputError */.d(`${pattern} is a directory`, {
+        throw new input_error/* InputError */.dz(`${pattern} is a directory`, {
             fix: `name files in it, such as ${external_node_path_default().join(pattern, '*.json')}`,
         });
     }
@@ -12375,7 +12375,7 @@ async function expand(given, cwd) {
         return [literal];
     const files = await glob([pattern], { cwd, absolute: true, onlyFiles: true, dot: true, expandDirectories: false });
     if (files.length === 0) {
-        throw new input_error/* InputError */.d(`no metric file matches ${JSON.stringify(pattern)} (looked in ${cwd})`, {
+        throw new input_error/* InputError */.dz(`no metric file matches ${JSON.stringify(pattern)} (looked in ${cwd})`, {
             fix: 'check the path (relative to the working directory) and that the step writing the metrics ran',
         });
     }
@@ -12391,7 +12391,7 @@ async function readOne(file, shown, format, limits, cwd) {
         confined: true,
     });
     if (text === undefined) {
-        throw new input_error/* InputError */.d(`metric file ${shown} disappeared while it was being read`, { where: shown });
+        throw new input_error/* InputError */.dz(`metric file ${shown} disappeared while it was being read`, { where: shown });
     }
     return parseMetricText(text, shown, format, limits);
 }
@@ -12438,7 +12438,7 @@ function parsePrefixes(values) {
         const pattern = at > 0 ? value.slice(0, at) : '';
         const prefix = at > 0 ? value.slice(at + 1) : '';
         if (pattern === '' || prefix === '') {
-            throw new input_error/* InputError */.d(`--prefix "${value}" is not PATTERN=PREFIX`, {
+            throw new input_error/* InputError */.dz(`--prefix "${value}" is not PATTERN=PREFIX`, {
                 where: '--prefix',
                 fix: 'write it as --prefix "bench/*.json=api" (the files the pattern matches get "api/" before each metric name)',
             });
@@ -12541,7 +12541,7 @@ function toFailure(error) {
         const quiet = error.code === 'commander.helpDisplayed' || error.code === 'commander.version';
         return { code: quiet ? EXIT.ok : EXIT.input, text: '' };
     }
-    if (error instanceof input_error/* InputError */.d)
+    if (error instanceof input_error/* InputError */.dz)
         return { code: EXIT.input, text: `bellgate: ${error.describe()}` };
     if (error instanceof store/* StoreError */.A || (error instanceof Error && error.name === 'StoreError')) {
         const text = error instanceof store/* StoreError */.A ? error.describe() : error.message;
@@ -12931,7 +12931,7 @@ function runInfoFrom(ctx, options) {
         if (!ISO_TIME.test(options.time) || !Number.isFinite(ms)) {
             // A time without a zone means another instant on every machine: refused, never guessed.
             const zoneless = ISO_TIME.test(`${options.time}Z`) && Number.isFinite(Date.parse(`${options.time}Z`));
-            throw new input_error/* InputError */.d(zoneless
+            throw new input_error/* InputError */.dz(zoneless
                 ? `--time "${options.time}" has no time zone, so it names a different instant on every machine`
                 : `--time "${options.time}" is not an ISO-8601 date-time`, {
                 where: '--time',
@@ -12948,7 +12948,7 @@ function runInfoFrom(ctx, options) {
     const ciId = env.GITHUB_RUN_ID ? `${env.GITHUB_RUN_ID}-${env.GITHUB_RUN_ATTEMPT || '1'}` : undefined;
     const id = options.id ?? ciId ?? `local-${time}`;
     if (id.trim() === '') {
-        throw new input_error/* InputError */.d('--id is empty', {
+        throw new input_error/* InputError */.dz('--id is empty', {
             where: '--id',
             fix: 'give a run id such as "1234-1", or leave the flag out',
         });
@@ -13075,7 +13075,7 @@ function examples(cmd, lines) {
  */
 async function performCheck(ctx, options) {
     if (options.record && options.history === undefined) {
-        throw new input_error/* InputError */.d('--record needs --history FILE', {
+        throw new input_error/* InputError */.dz('--record needs --history FILE', {
             where: '--record',
             fix: 'name the history file to append this run to',
         });
@@ -13399,7 +13399,7 @@ async function runExplain(ctx, metric, options) {
     if (result === undefined) {
         const known = [...new Set([...history.columns.keys(), ...run.metrics.keys()])];
         const near = closeNames(metric, known);
-        throw new input_error/* InputError */.d(`no metric named "${metric}" in the history or this run`, {
+        throw new input_error/* InputError */.dz(`no metric named "${metric}" in the history or this run`, {
             where: options.history,
             fix: near.length > 0
                 ? `did you mean ${near.map((n) => `"${n}"`).join(' or ')}?`
@@ -13460,7 +13460,7 @@ const MAX_TEXT_BYTES = 256 * 1024 * 1024;
 async function readFlagFile(ctx, flag, path, confined) {
     const text = await readFlagFileIfAny(ctx, flag, path, confined);
     if (text === undefined) {
-        throw new input_error/* InputError */.d(`${flag} ${path} does not exist`, { where: path, fix: `check the path given to ${flag}` });
+        throw new input_error/* InputError */.dz(`${flag} ${path} does not exist`, { where: path, fix: `check the path given to ${flag}` });
     }
     return text;
 }
@@ -13470,7 +13470,7 @@ function readFlagFileIfAny(ctx, flag, path, confined) {
         cwd: ctx.io.cwd,
         what: `${flag} file`,
         maxBytes: MAX_TEXT_BYTES,
-        tooLarge: (bytes) => new input_error/* InputError */.d(`${flag} ${path} is ${bytes} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
+        tooLarge: (bytes) => new input_error/* InputError */.dz(`${flag} ${path} is ${bytes} bytes, over the ${MAX_TEXT_BYTES}-byte limit`, {
             where: path,
             fix: 'split the file, or trim old runs first',
         }),
@@ -13540,7 +13540,7 @@ function nameProblem(name) {
         return undefined;
     }
     catch (error) {
-        if (error instanceof input_error/* InputError */.d)
+        if (error instanceof input_error/* InputError */.dz)
             return error.message;
         throw error;
     }
@@ -13597,7 +13597,7 @@ function parseCsvRuns(text, source) {
     }
     catch (cause) {
         const line = cause.lines;
-        throw new input_error/* InputError */.d(`not valid CSV (${cause instanceof Error ? cause.message : String(cause)})`, {
+        throw new input_error/* InputError */.dz(`not valid CSV (${cause instanceof Error ? cause.message : String(cause)})`, {
             where: line === undefined ? source : `${source}:${line}`,
             fix: 'check the quoting at that line',
             cause,
@@ -13605,17 +13605,17 @@ function parseCsvRuns(text, source) {
     }
     const [head, ...body] = rows;
     if (!head)
-        throw new input_error/* InputError */.d('the file holds no rows', { where: source, fix: 'write a header row and one row per run' });
+        throw new input_error/* InputError */.dz('the file holds no rows', { where: source, fix: 'write a header row and one row per run' });
     const header = head.record.map((h) => (LONG_COLUMNS.has(h.toLowerCase()) ? h.toLowerCase() : h));
     const seen = new Set();
     for (const h of header) {
         if (h === '')
-            throw new input_error/* InputError */.d('a header cell is empty', {
+            throw new input_error/* InputError */.dz('a header cell is empty', {
                 where: `${source}:${head.info.lines}`,
                 fix: 'name every column',
             });
         if (seen.has(h))
-            throw new input_error/* InputError */.d(`column ${JSON.stringify(h)} appears twice in the header`, {
+            throw new input_error/* InputError */.dz(`column ${JSON.stringify(h)} appears twice in the header`, {
                 where: `${source}:${head.info.lines}`,
                 fix: 'name every column once',
             });
@@ -13623,7 +13623,7 @@ function parseCsvRuns(text, source) {
     }
     for (const need of ['id', 'time']) {
         if (!seen.has(need)) {
-            throw new input_error/* InputError */.d(`the header has no "${need}" column`, {
+            throw new input_error/* InputError */.dz(`the header has no "${need}" column`, {
                 where: `${source}:${head.info.lines}`,
                 fix: 'start the file with a header such as id,time,sha,ref,name,value,unit (long) or id,time,sha,ref,<metric>... (wide)',
             });
@@ -13801,14 +13801,14 @@ function parseImportRuns(text, source) {
     const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
     const first = body.trimStart()[0];
     if (first === undefined)
-        throw new input_error/* InputError */.d('the file holds no runs', {
+        throw new input_error/* InputError */.dz('the file holds no runs', {
             where: source,
             fix: 'write one run per line (JSON Lines) or a CSV with a header',
         });
     if (first === '{')
         return parseJsonLines(body, source);
     if (first === '[') {
-        throw new input_error/* InputError */.d('a JSON array is not an import form', {
+        throw new input_error/* InputError */.dz('a JSON array is not an import form', {
             where: `${source}:1:1`,
             fix: 'write one run object per line (JSON Lines)',
         });
@@ -13860,7 +13860,7 @@ function importRuns(h, input) {
                 inStored = (0,units/* inStoredUnit */.H)(name, { value, count: 1, ...(unit === undefined ? {} : { unit }) }, stored);
             }
             catch (error) {
-                if (!(error instanceof input_error/* InputError */.d))
+                if (!(error instanceof input_error/* InputError */.dz))
                     throw error;
                 skipped.push({ where: run.places?.get(name) ?? `run ${run.info.id}`, reason: error.message });
                 continue;
@@ -14006,13 +14006,13 @@ async function openStore(ctx, flags) {
         return (0,open_history/* historyStore */.O)(ctx, flags.history, series || undefined);
     }
     if (flags.store === 'artifact') {
-        throw new input_error/* InputError */.d('the artifact store can only be changed from inside a workflow run', {
+        throw new input_error/* InputError */.dz('the artifact store can only be changed from inside a workflow run', {
             where: '--store',
             fix: 'run the action from a manual workflow run with the `maintenance` input (examples/workflows/maintenance.yml)',
         });
     }
     if (flags.store !== 'branch') {
-        throw new input_error/* InputError */.d(`unknown store ${JSON.stringify(flags.store)}`, {
+        throw new input_error/* InputError */.dz(`unknown store ${JSON.stringify(flags.store)}`, {
             where: '--store',
             fix: `use one of ${STORES.join(', ')}`,
         });
@@ -14020,19 +14020,19 @@ async function openStore(ctx, flags) {
     const env = ctx.io.env;
     const series = flags.series;
     if (series === undefined || series === '')
-        throw new input_error/* InputError */.d('a data branch holds one file per series: say which', {
+        throw new input_error/* InputError */.dz('a data branch holds one file per series: say which', {
             where: '--series',
             fix: 'pass --series with the `series` of the workflow that records it',
         });
     const [owner, repo, ...extra] = (flags.repo ?? env.GITHUB_REPOSITORY ?? '').split('/');
     if (!owner || !repo || extra.length > 0)
-        throw new input_error/* InputError */.d('the repository of the data branch is not known', {
+        throw new input_error/* InputError */.dz('the repository of the data branch is not known', {
             where: '--repo',
             fix: 'pass --repo OWNER/NAME (or set GITHUB_REPOSITORY)',
         });
     const token = env.GITHUB_TOKEN ?? '';
     if (token === '')
-        throw new input_error/* InputError */.d('GITHUB_TOKEN is not set, but the data branch is read and written through the GitHub API', {
+        throw new input_error/* InputError */.dz('GITHUB_TOKEN is not set, but the data branch is read and written through the GitHub API', {
             where: 'GITHUB_TOKEN',
             fix: 'export GITHUB_TOKEN with a token that may write the repository contents (e.g. `gh auth token`)',
         });
@@ -14251,7 +14251,7 @@ function verifyHistory(text) {
 async function runVerify(ctx, options) {
     const text = (0,file_store/* readHistoryText */.i)((0,paths/* resolvePath */.o)(ctx, options.history));
     if (text === undefined) {
-        throw new input_error/* InputError */.d(`cannot read --history ${options.history}: no such file`, {
+        throw new input_error/* InputError */.dz(`cannot read --history ${options.history}: no such file`, {
             where: options.history,
             fix: 'check the path given to --history',
         });
@@ -14344,7 +14344,7 @@ function locateDemo(cwd, script, moduleUrl = import.meta.url) {
     const unique = [...new Set(candidates)];
     const found = unique.find((dir) => Object.values(DEMO_FILES).every((f) => (0,external_node_fs_.existsSync)((0,external_node_path_.join)(dir, f))));
     if (found === undefined) {
-        throw new input_error/* InputError */.d('cannot find the demo data (examples/demo)', {
+        throw new input_error/* InputError */.dz('cannot find the demo data (examples/demo)', {
             where: unique.join(', '),
             fix: 'run the demo from a Bellgate checkout (npm run demo), where examples/demo holds history.jsonl, pr-run.json and bellgate.yml',
         });
@@ -14976,25 +14976,25 @@ function parseLabels(text, source) {
     };
     const error = doc.errors[0];
     if (error !== undefined) {
-        throw new input_error/* InputError */.d(`the labels file is not valid YAML or JSON: ${error.message.split('\n')[0]}`, {
+        throw new input_error/* InputError */.dz(`the labels file is not valid YAML or JSON: ${error.message.split('\n')[0]}`, {
             where: at(null, error.pos[0]),
             fix: FIX,
         });
     }
     const root = doc.contents;
     if (!(0,dist/* isMap */.jh)(root))
-        throw new input_error/* InputError */.d('the labels file must be a mapping with a `regressions:` list', { where: at(root), fix: FIX });
+        throw new input_error/* InputError */.dz('the labels file must be a mapping with a `regressions:` list', { where: at(root), fix: FIX });
     const labels = [];
     for (const pair of root.items) {
         const key = (0,dist/* isScalar */.jn)(pair.key) ? String(pair.key.value) : '';
         if (key !== 'regressions') {
-            throw new input_error/* InputError */.d(`unknown key "${key}" in the labels file`, { where: at(pair.key), fix: FIX });
+            throw new input_error/* InputError */.dz(`unknown key "${key}" in the labels file`, { where: at(pair.key), fix: FIX });
         }
         const list = pair.value;
         if (!(0,dist/* isSeq */.oP)(list))
-            throw new input_error/* InputError */.d('`regressions` must be a list', { where: at(list ?? pair.key), fix: FIX });
+            throw new input_error/* InputError */.dz('`regressions` must be a list', { where: at(list ?? pair.key), fix: FIX });
         if (list.items.length > MAX_LABELS) {
-            throw new input_error/* InputError */.d(`the labels file has ${list.items.length} entries, over the limit of ${MAX_LABELS}`, {
+            throw new input_error/* InputError */.dz(`the labels file has ${list.items.length} entries, over the limit of ${MAX_LABELS}`, {
                 where: at(list),
                 fix: 'label fewer runs',
             });
@@ -15006,12 +15006,12 @@ function parseLabels(text, source) {
 }
 function entry(item, at) {
     if (!(0,dist/* isMap */.jh)(item))
-        throw new input_error/* InputError */.d('each regression must be a mapping with a `run` key', { where: at(item), fix: FIX });
+        throw new input_error/* InputError */.dz('each regression must be a mapping with a `run` key', { where: at(item), fix: FIX });
     const found = {};
     for (const pair of item.items) {
         const key = (0,dist/* isScalar */.jn)(pair.key) ? String(pair.key.value) : '';
         if (key !== 'run' && key !== 'metric') {
-            throw new input_error/* InputError */.d(`unknown key "${key}" in a regression entry`, {
+            throw new input_error/* InputError */.dz(`unknown key "${key}" in a regression entry`, {
                 where: at(pair.key),
                 fix: 'use `run` and, optionally, `metric`',
             });
@@ -15020,7 +15020,7 @@ function entry(item, at) {
         const raw = (0,dist/* isScalar */.jn)(value) ? value.value : undefined;
         const ok = typeof raw === 'string' ? raw !== '' : key === 'run' && typeof raw === 'number' && Number.isSafeInteger(raw);
         if (!ok) {
-            throw new input_error/* InputError */.d(`\`${key}\` must be a non-empty ${key === 'run' ? 'run id' : 'metric name'} string`, {
+            throw new input_error/* InputError */.dz(`\`${key}\` must be a non-empty ${key === 'run' ? 'run id' : 'metric name'} string`, {
                 where: at(value ?? pair.key),
                 fix: FIX,
             });
@@ -15028,7 +15028,7 @@ function entry(item, at) {
         found[key] = String(raw);
     }
     if (found.run === undefined)
-        throw new input_error/* InputError */.d('a regression entry lacks `run`', { where: at(item), fix: FIX });
+        throw new input_error/* InputError */.dz('a regression entry lacks `run`', { where: at(item), fix: FIX });
     return { run: found.run, ...(found.metric === undefined ? {} : { metric: found.metric }), where: at(item) };
 }
 /**
@@ -15041,13 +15041,13 @@ function checkLabels(labels, history) {
     const runs = new Set(history.runs.map((r) => r.id));
     for (const label of labels) {
         if (!runs.has(label.run)) {
-            throw new input_error/* InputError */.d(`no run "${label.run}" in the history`, {
+            throw new input_error/* InputError */.dz(`no run "${label.run}" in the history`, {
                 where: label.where,
                 fix: 'use a run id as the history stores it ("run id-attempt", e.g. "1234-1")',
             });
         }
         if (label.metric !== undefined && !history.columns.has(label.metric)) {
-            throw new input_error/* InputError */.d(`no metric "${label.metric}" in the history`, {
+            throw new input_error/* InputError */.dz(`no metric "${label.metric}" in the history`, {
                 where: label.where,
                 fix: 'use the metric name exactly as the report shows it',
             });
@@ -15549,7 +15549,7 @@ function tuneHistory(input) {
     const { config, history } = input;
     const target = input.target ?? DEFAULT_TARGET;
     if (!(target >= 0 && target <= 100))
-        throw new input_error/* InputError */.d(`--target must be a number of false alarms per 100 runs from 0 to 100, got ${target}`, {
+        throw new input_error/* InputError */.dz(`--target must be a number of false alarms per 100 runs from 0 to 100, got ${target}`, {
             fix: 'e.g. --target 1',
         });
     if (input.labels !== undefined)
@@ -15739,7 +15739,7 @@ function applyConfigEdit(text, source, edit) {
     const out = spliceEdit(text, defaults, top, rules) ?? documentEdit(text, defaults, top, rules);
     const config = (0,load/* parseConfig */.o4)(out, source);
     if (!readsBack(config, edit, rules)) {
-        throw new input_error/* InputError */.d('could not write the settings so that they read back as asked; the config was not changed', {
+        throw new input_error/* InputError */.dz('could not write the settings so that they read back as asked; the config was not changed', {
             where: source,
             fix: 'edit the config by hand with the settings printed above',
         });
@@ -16195,7 +16195,7 @@ async function runTune(ctx, options) {
     // Whatever series the file holds: tune replays the document it is given.
     const { history } = await (0,open_history/* openHistory */.j)(ctx, options.history, undefined);
     if (history.runs.length === 0) {
-        throw new input_error/* InputError */.d('the history holds no runs, so there is nothing to replay', {
+        throw new input_error/* InputError */.dz('the history holds no runs, so there is nothing to replay', {
             where: options.history,
             fix: 'record runs first (bellgate record / import)',
         });
@@ -16220,12 +16220,12 @@ async function runTune(ctx, options) {
     let written;
     if (options.write !== undefined) {
         if (r === undefined)
-            refused = new input_error/* InputError */.d('no run could be replayed, so there is no recommendation to write', {
+            refused = new input_error/* InputError */.dz('no run could be replayed, so there is no recommendation to write', {
                 where: options.history,
                 fix: 'record at least min-runs + 1 runs first',
             });
         else if (r.blind && options.force !== true)
-            refused = new input_error/* InputError */.d(`the recommended setting is blind (it catches ${Math.round(100 * (r.score.caught.at(-1)?.evidence.rate ?? 0))}% of the largest injected regressions), so it was not written`, {
+            refused = new input_error/* InputError */.dz(`the recommended setting is blind (it catches ${Math.round(100 * (r.score.caught.at(-1)?.evidence.rate ?? 0))}% of the largest injected regressions), so it was not written`, {
                 where: options.write,
                 fix: 'see what it misses above; add --force to write it anyway, or raise --target',
             });
@@ -16638,7 +16638,7 @@ function referenceFromText(text, runs) {
         return { sha: ref };
     if (ISO_DATE.test(ref) && Number.isFinite(Date.parse(ref)))
         return { time: ref };
-    throw new input_error/* InputError */.d(`"${text}" is not a run id of the history, a commit sha or an ISO-8601 time`, {
+    throw new input_error/* InputError */.dz(`"${text}" is not a run id of the history, a commit sha or an ISO-8601 time`, {
         where: 'REF',
         fix: 'give a run id (bellgate runs lists them), a commit sha, or a time such as 2026-03-01T12:00:00Z; resolve a git tag with git rev-list -n 1 TAG',
     });
@@ -16658,7 +16658,7 @@ function resolveReference(runs, reference) {
     if (reference.run !== undefined) {
         const index = findLast(runs, (r) => r.id === reference.run);
         if (index < 0) {
-            throw new input_error/* InputError */.d(`the history has no run "${reference.run}"`, {
+            throw new input_error/* InputError */.dz(`the history has no run "${reference.run}"`, {
                 where: 'REF',
                 fix: 'give a run id the history holds (bellgate runs lists them), a commit sha or a time',
             });
@@ -16669,7 +16669,7 @@ function resolveReference(runs, reference) {
         const sha = reference.sha.toLowerCase();
         const matching = new Set(runs.filter((r) => r.sha?.toLowerCase().startsWith(sha)).map((r) => r.sha.toLowerCase()));
         if (matching.size > 1) {
-            throw new input_error/* InputError */.d(`commit "${reference.sha}" is ambiguous: ${matching.size} recorded commits start with it`, {
+            throw new input_error/* InputError */.dz(`commit "${reference.sha}" is ambiguous: ${matching.size} recorded commits start with it`, {
                 where: 'REF',
                 fix: 'give more digits of the sha',
             });
@@ -16679,7 +16679,7 @@ function resolveReference(runs, reference) {
             return resolved(runs, index, requested, true);
         }
         if (reference.time === undefined) {
-            throw new input_error/* InputError */.d(`commit "${reference.sha}" has no recorded run, and without its time no earlier run can stand in`, {
+            throw new input_error/* InputError */.dz(`commit "${reference.sha}" has no recorded run, and without its time no earlier run can stand in`, {
                 where: 'REF',
                 fix: "give the commit's time as well (git show -s --format=%cI SHA), or a run id or time",
             });
@@ -16702,7 +16702,7 @@ function resolveReference(runs, reference) {
                 note: `no run was recorded at ${reference.time}; run ${run.id}${run.time ? ` (${run.time})` : ''}, the nearest earlier recorded run, stands in`,
             };
     }
-    throw new input_error/* InputError */.d('a review needs a reference: a run id, a commit sha or a time', { where: 'REF' });
+    throw new input_error/* InputError */.dz('a review needs a reference: a run id, a commit sha or a time', { where: 'REF' });
 }
 function resolved(runs, index, requested, exact) {
     const run = runs[index];
@@ -16720,7 +16720,7 @@ function runRef(run) {
 function atOrBefore(runs, time) {
     const t = Date.parse(time);
     if (!Number.isFinite(t)) {
-        throw new input_error/* InputError */.d(`"${time}" is not an ISO-8601 time`, {
+        throw new input_error/* InputError */.dz(`"${time}" is not an ISO-8601 time`, {
             where: 'REF',
             fix: 'write it as 2026-03-01T12:00:00Z',
         });
@@ -16737,7 +16737,7 @@ function atOrBefore(runs, time) {
     });
     if (best < 0) {
         const first = runs.find((r) => r.time !== undefined);
-        throw new input_error/* InputError */.d(`no recorded run at or before ${time}`, {
+        throw new input_error/* InputError */.dz(`no recorded run at or before ${time}`, {
             where: 'REF',
             fix: first?.time
                 ? `the history starts at ${first.time}: give a later reference`
@@ -17660,11 +17660,11 @@ function reviewSince(history, reference, options = {}) {
     const settings = checkSettings(options);
     const runs = history.runs;
     if (runs.length === 0)
-        throw new input_error/* InputError */.d('the history has no runs to review', { where: 'REF' });
+        throw new input_error/* InputError */.dz('the history has no runs to review', { where: 'REF' });
     const resolved = resolveReference(runs, reference);
     const range = runs.length - 1 - resolved.index;
     if (range > MAX_RANGE) {
-        throw new input_error/* InputError */.d(`${range} runs were recorded since the reference; a review takes at most ${MAX_RANGE}`, {
+        throw new input_error/* InputError */.dz(`${range} runs were recorded since the reference; a review takes at most ${MAX_RANGE}`, {
             where: 'REF',
             fix: 'give a later reference',
         });
@@ -17694,12 +17694,12 @@ function checkSettings(options) {
     };
     for (const key of ['window', 'minSegment']) {
         if (!Number.isInteger(settings[key]) || settings[key] < 2) {
-            throw new input_error/* InputError */.d(`${key} must be a whole number, 2 or more, got ${settings[key]}`);
+            throw new input_error/* InputError */.dz(`${key} must be a whole number, 2 or more, got ${settings[key]}`);
         }
     }
     for (const key of ['stepLevel', 'creepLevel', 'level', 'confidence']) {
         if (!(settings[key] > 0 && settings[key] < 1)) {
-            throw new input_error/* InputError */.d(`${key} must be between 0 and 1, got ${settings[key]}`);
+            throw new input_error/* InputError */.dz(`${key} must be between 0 and 1, got ${settings[key]}`);
         }
     }
     return settings;
@@ -18106,7 +18106,7 @@ async function reviewSinceRef(ctx, ref, options) {
     const config = await (0,load/* loadConfig */.Z9)(options.config, ctx.io.cwd);
     const history = await (0,open_history/* historyStore */.O)(ctx, options.history, options.series).read();
     if (history.runs.length === 0) {
-        throw new input_error/* InputError */.d('the history has no runs to review', {
+        throw new input_error/* InputError */.dz('the history has no runs to review', {
             where: options.history,
             fix: 'point --history at a history that bellgate record or the action has written',
         });
@@ -19698,9 +19698,12 @@ function wrongValue(error, tree) {
     const message = `${name} must be ${allowed}; got ${describeValue(error.data)}`;
     let fix;
     if (Array.isArray(node.enum) && typeof error.data === 'string') {
-        const guess = (0,did_you_mean/* didYouMean */.a)(error.data, node.enum.map(String));
-        if (guess)
-            fix = `did you mean "${guess}"?`;
+        const values = node.enum.map(String);
+        const typed = error.data.toLowerCase();
+        // A value with a word added or cut ("holmes", "bonf") is as likely a slip as a typo.
+        const guess = (0,did_you_mean/* didYouMean */.a)(error.data, values) ??
+            values.find((v) => v.length >= 3 && (typed.startsWith(v.toLowerCase()) || v.toLowerCase().startsWith(typed)));
+        fix = guess ? `did you mean "${guess}"?` : `write one of ${values.join(', ')}`;
     }
     const data = error.data;
     const wantsNumber = node.type === 'number' || node.type === 'integer' || Array.isArray(node.anyOf);
@@ -19782,7 +19785,7 @@ function problemsError(problems, source) {
         if (more > 0)
             message += `\n  ... ${more} not shown`;
     }
-    return new input_error/* InputError */.d(message, { where: `${source}:${first.line}:${first.col}`, fix: first.fix });
+    return new input_error/* InputError */.dz(message, { where: `${source}:${first.line}:${first.col}`, fix: first.fix });
 }
 
 // EXTERNAL MODULE: ./src/config/glob-matcher.ts
@@ -20327,7 +20330,7 @@ async function loadConfig(path, cwd) {
             cwd,
             what: 'config file',
             maxBytes: MAX_CONFIG_CHARS,
-            tooLarge: (bytes) => new input_error/* InputError */.d(`config file ${candidate} is ${bytes} bytes; the limit is ${MAX_CONFIG_CHARS} (1 MiB)`, {
+            tooLarge: (bytes) => new input_error/* InputError */.dz(`config file ${candidate} is ${bytes} bytes; the limit is ${MAX_CONFIG_CHARS} (1 MiB)`, {
                 where: candidate,
                 fix: 'a Bellgate config is a few kilobytes; check that the right file is named',
             }),
@@ -20337,7 +20340,7 @@ async function loadConfig(path, cwd) {
             return parseConfig(text, candidate);
     }
     if (path !== undefined) {
-        throw new input_error/* InputError */.d(`config file ${path} does not exist`, {
+        throw new input_error/* InputError */.dz(`config file ${path} does not exist`, {
             where: path,
             fix: 'check the path (it is relative to the working folder), or leave the config out to use the defaults',
         });
@@ -20414,7 +20417,9 @@ function groupFor(config, metric) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   d: () => (/* binding */ InputError)
+/* harmony export */   Cr: () => (/* binding */ noCommandLines),
+/* harmony export */   TN: () => (/* binding */ oneLine),
+/* harmony export */   dz: () => (/* binding */ InputError)
 /* harmony export */ });
 /* harmony import */ var _visible_text_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(81);
 
@@ -20439,12 +20444,20 @@ class InputError extends Error {
      * send a terminal escape sequence or reorder the line it is printed on (CVE-2021-42574).
      */
     describe() {
-        // Each part is one line: a line feed quoted from input (a metric name) must not start a line
-        // of its own, which a CI log would read as a command.
-        const line = (text) => (0,_visible_text_js__WEBPACK_IMPORTED_MODULE_0__/* .visibleText */ .Q)(shortenQuotes(text)).replace(/\n/g, '\\u{000A}');
-        const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
-        return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
+        const head = this.where ? `${oneLine(this.where)}: ${this.message}` : this.message;
+        return noCommandLines((0,_visible_text_js__WEBPACK_IMPORTED_MODULE_0__/* .visibleText */ .Q)(shortenQuotes(this.fix ? `${head}\n  fix: ${this.fix}` : head)));
     }
+}
+/** A place is one line: a line feed quoted from input (a metric name) is shown as its code point. */
+function oneLine(text) {
+    return text.replace(/\n/g, '\\u{000A}');
+}
+/**
+ * A CI log reads a line that starts with "::" as a workflow command (GitHub's "Workflow commands
+ * for GitHub Actions"): no line of a message may, whatever it quotes.
+ */
+function noCommandLines(text) {
+    return text.replace(/\n(\s*)::/g, '\n$1\\u{003A}:');
 }
 /** Quoted text past this many characters is cut in messages: a 10 KB metric name is not echoed whole. */
 const MAX_QUOTED = 120;
@@ -20491,7 +20504,7 @@ function parseJsonText(text, source, line) {
     catch (error) {
         const message = error instanceof Error ? error.message : String(error);
         const { line: at, column } = lineColumn(body, jsonErrorOffset(body, message));
-        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`malformed JSON: ${message.replace(/ in JSON at position \d+.*$/s, '')}`, {
+        throw new _input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`malformed JSON: ${message.replace(/ in JSON at position \d+.*$/s, '')}`, {
             where: `${source}:${at + (line ?? 1) - 1}:${column}`,
             fix: body.trim() === ''
                 ? 'the file is empty; write a complete JSON document'
@@ -20646,13 +20659,13 @@ async function readUserFile(given, options) {
                     : info.isCharacterDevice() || info.isBlockDevice()
                         ? 'a device'
                         : 'not a regular file';
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${what} ${shown} is ${kind}, not a regular file`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz(`${what} ${shown} is ${kind}, not a regular file`, {
                 where: shown,
                 fix: `name the ${what} itself (a regular file)`,
             });
         }
         const tooLarge = options.tooLarge ??
-            ((bytes) => new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${what} ${shown} is over ${options.maxBytes} bytes (${bytes} read)`, {
+            ((bytes) => new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz(`${what} ${shown} is over ${options.maxBytes} bytes (${bytes} read)`, {
                 where: shown,
                 fix: 'check that the right file is named',
             }));
@@ -20665,7 +20678,7 @@ async function readUserFile(given, options) {
             return new TextDecoder('utf-8', { fatal: true }).decode(bytes);
         }
         catch (error) {
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${what} ${shown} is not UTF-8 text`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz(`${what} ${shown} is not UTF-8 text`, {
                 where: shown,
                 fix: 'save it as UTF-8',
                 cause: error,
@@ -20673,7 +20686,7 @@ async function readUserFile(given, options) {
         }
     }
     catch (error) {
-        if (error instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d)
+        if (error instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz)
             throw error;
         throw cannotRead(what, shown, error);
     }
@@ -20687,13 +20700,13 @@ async function checkConfined(full, real, cwd, what, shown) {
         return;
     const realRoot = await (0,node_fs_promises__WEBPACK_IMPORTED_MODULE_1__.realpath)(root).catch(() => root);
     if (!within(real, realRoot)) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${what} ${shown} is a symbolic link that leads out of the workspace (${root})`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz(`${what} ${shown} is a symbolic link that leads out of the workspace (${root})`, {
             where: shown,
             fix: `keep the ${what} itself in the workspace; a link there may not point outside it`,
         });
     }
     if (within(real, (0,node_path__WEBPACK_IMPORTED_MODULE_2__.join)(realRoot, '.git'))) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`${what} ${shown} lies in the repository's .git folder, which Bellgate never reads`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz(`${what} ${shown} lies in the repository's .git folder, which Bellgate never reads`, {
             where: shown,
             fix: `name a ${what} of the checkout itself`,
         });
@@ -20723,7 +20736,7 @@ function cannotRead(what, shown, error) {
         : code === 'ELOOP'
             ? 'too many symbolic links'
             : (code ?? (error instanceof Error ? error.message : String(error)));
-    return new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .d(`cannot read ${what} ${shown} (${reason})`, {
+    return new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_3__/* .InputError */ .dz(`cannot read ${what} ${shown} (${reason})`, {
         where: shown,
         fix: 'check that the file exists and is readable',
         cause: error,
@@ -20824,7 +20837,7 @@ function sortMetrics(config, history, run) {
             continue;
         }
         if (!Number.isFinite(measurement.value)) {
-            throw new input_error/* InputError */.d(`value ${measurement.value} of ${name} is not a finite number`, {
+            throw new input_error/* InputError */.dz(`value ${measurement.value} of ${name} is not a finite number`, {
                 where: name,
                 fix: 'check the metric file',
             });
@@ -20863,10 +20876,10 @@ function onLogScale(settings, timing, column, value, name, history) {
     if (settings.transform === 'auto')
         return timing && bad < 0 && value > 0;
     if (bad >= 0) {
-        throw new input_error/* InputError */.d(`history run ${history.runs[bad]?.id ?? bad + 1} has value ${column[bad]} for ${name}, which cannot be log-transformed`, { where: name, fix: 'use `transform: none` for this metric, or remove the bad run from the history' });
+        throw new input_error/* InputError */.dz(`history run ${history.runs[bad]?.id ?? bad + 1} has value ${column[bad]} for ${name}, which cannot be log-transformed`, { where: name, fix: 'use `transform: none` for this metric, or remove the bad run from the history' });
     }
     if (!(value > 0)) {
-        throw new input_error/* InputError */.d(`value ${value} cannot be log-transformed (must be > 0)`, {
+        throw new input_error/* InputError */.dz(`value ${value} cannot be log-transformed (must be > 0)`, {
             where: name,
             fix: 'use `transform: none` for this metric, or check the value',
         });
@@ -22400,7 +22413,7 @@ function renameMetric(h, from, to) {
     if (source === undefined) {
         if (h.columns.has(to))
             return h;
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`the history holds no metric named ${JSON.stringify(from)}`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`the history holds no metric named ${JSON.stringify(from)}`, {
             where: `series ${h.series}`,
             fix: 'list the metric names with `bellgate check` or `bellgate runs`',
         });
@@ -22411,11 +22424,11 @@ function renameMetric(h, from, to) {
     let joined = source;
     if (target !== undefined) {
         if (target.unit !== undefined && source.unit !== undefined && target.unit !== source.unit) {
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`cannot join ${JSON.stringify(from)} (${source.unit}) into ${JSON.stringify(to)} (${target.unit}): their units differ`, { where: `series ${h.series}`, fix: 'rename to a new name instead' });
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`cannot join ${JSON.stringify(from)} (${source.unit}) into ${JSON.stringify(to)} (${target.unit}): their units differ`, { where: `series ${h.series}`, fix: 'rename to a new name instead' });
         }
         const both = source.values.findIndex((v, i) => !Number.isNaN(v) && !Number.isNaN(target.values[i] ?? NaN));
         if (both >= 0) {
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`cannot join ${JSON.stringify(from)} into ${JSON.stringify(to)}: run ${JSON.stringify(h.runs[both]?.id)} holds both`, { where: `series ${h.series}`, fix: 'drop that run first, or rename to a new name' });
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`cannot join ${JSON.stringify(from)} into ${JSON.stringify(to)}: run ${JSON.stringify(h.runs[both]?.id)} holds both`, { where: `series ${h.series}`, fix: 'drop that run first, or rename to a new name' });
         }
         const values = target.values.map((v, i) => (Number.isNaN(v) ? (source.values[i] ?? NaN) : v));
         const unit = target.unit ?? source.unit;
@@ -22447,7 +22460,7 @@ function listRuns(h) {
     return h.runs.map((r, i) => ({ ...r, metricCount: counts[i] ?? 0 }));
 }
 function unknownRun(h, id, what) {
-    return new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`the history of series ${JSON.stringify(h.series)} holds no run ${JSON.stringify(id)} to ${what}`, {
+    return new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`the history of series ${JSON.stringify(h.series)} holds no run ${JSON.stringify(id)} to ${what}`, {
         where: `series ${h.series}`,
         fix: 'list the run ids with `bellgate runs`',
     });
@@ -22518,7 +22531,7 @@ function parseHistory(text, source, options = {}) {
     const decoded = decodeHistory((0,_lines_js__WEBPACK_IMPORTED_MODULE_3__/* .textLines */ .F)(text), (0,_problems_js__WEBPACK_IMPORTED_MODULE_2__/* .throwingSink */ .sC)(source), options);
     // The throwing sink stops at the first problem, so undefined cannot come back; keep TS honest.
     if (!decoded)
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d('unreadable history document', { where: source });
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz('unreadable history document', { where: source });
     return decoded.history;
 }
 /**
@@ -22953,14 +22966,14 @@ function checkRuns(h) {
     const ids = new Set();
     for (const run of h.runs) {
         if (typeof run.id !== 'string' || run.id === '' || run.id.length > MAX_ID)
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`a run needs an id of 1 to ${MAX_ID} characters to be stored`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(`a run needs an id of 1 to ${MAX_ID} characters to be stored`, {
                 where,
                 fix: NOT_STORABLE_FIX,
             });
         if (ids.has(run.id))
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(`run id ${JSON.stringify(run.id)} appears twice`, { where, fix: NOT_STORABLE_FIX });
         if (h.dropped?.has(run.id))
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`run ${JSON.stringify(run.id)} was dropped and cannot be stored again`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(`run ${JSON.stringify(run.id)} was dropped and cannot be stored again`, {
                 where,
                 fix: NOT_STORABLE_FIX,
             });
@@ -22970,14 +22983,14 @@ function checkRuns(h) {
 /** The column half: one value per run, each a finite number or NaN (missing). Throws InputError. */
 function checkStorable(h, name, values) {
     if (values.length !== h.runs.length) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(`metric ${JSON.stringify(name)} has ${values.length} values for ${h.runs.length} runs`, {
             where: storeWhere(h),
             fix: NOT_STORABLE_FIX,
         });
     }
     for (const v of values) {
         if (v === Infinity || v === -Infinity || typeof v !== 'number') {
-            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .d(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, {
+            throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_1__/* .InputError */ .dz(`metric ${JSON.stringify(name)} holds ${String(v)}, which cannot be stored`, {
                 where: storeWhere(h),
                 fix: NOT_STORABLE_FIX,
             });
@@ -23380,7 +23393,7 @@ function createFileStore(path, series, options = {}) {
                     cause,
                 });
             }
-            if (!(cause instanceof input_error/* InputError */.d))
+            if (!(cause instanceof input_error/* InputError */.dz))
                 throw cause;
             throw new store/* StoreError */.A(`the history file is not a readable history document (${cause.where ?? path}: ${cause.message}); it was left as it is`, {
                 where,
@@ -23936,7 +23949,7 @@ function textLines(text) {
  */
 function mergeHistories(a, b) {
     if (a.series !== b.series) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`cannot merge the history of series ${JSON.stringify(b.series)} into ${JSON.stringify(a.series)}`, { where: `series ${a.series}`, fix: 'keep one history per series (the `series` option)' });
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`cannot merge the history of series ${JSON.stringify(b.series)} into ${JSON.stringify(a.series)}`, { where: `series ${a.series}`, fix: 'keep one history per series (the `series` option)' });
     }
     const dropped = new Map([...(a.dropped ?? []), ...(b.dropped ?? [])]);
     const chosen = new Map();
@@ -23987,13 +24000,13 @@ function mergeHistories(a, b) {
  */
 function appendRun(h, info, run) {
     if (typeof info.id !== 'string' || info.id.trim() === '') {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('a run needs an id to be recorded', {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('a run needs an id to be recorded', {
             where: `series ${h.series}`,
             fix: 'pass --id (the CI run id and attempt, e.g. 1234-1)',
         });
     }
     if (h.dropped?.has(info.id)) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`run ${JSON.stringify(info.id)} was dropped from this history, so it is not recorded again`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`run ${JSON.stringify(info.id)} was dropped from this history, so it is not recorded again`, {
             where: `series ${h.series}`,
             fix: 'record it under another id (--id), or leave it out',
         });
@@ -24041,7 +24054,7 @@ function trimHistory(h, keep) {
  */
 function checkKeep(keep) {
     if (!(keep === Infinity || (Number.isInteger(keep) && keep >= 1))) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`keep must be a whole number of runs, at least 1, got ${keep}`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`keep must be a whole number of runs, at least 1, got ${keep}`, {
             fix: 'set `keep` to the number of newest runs to keep, e.g. 4000',
         });
     }
@@ -24071,7 +24084,7 @@ const REPAIR_FIX = 'repair that line (run `bellgate verify --history FILE` to li
  */
 function throwingSink(source) {
     return (where, problem, fix) => {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(problem, { where: where === '' ? source : `${source}:${where}`, fix: fix ?? REPAIR_FIX });
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(problem, { where: where === '' ? source : `${source}:${where}`, fix: fix ?? REPAIR_FIX });
     };
 }
 /**
@@ -24224,7 +24237,9 @@ function clean(text) {
 /* harmony export */   A: () => (/* binding */ StoreError),
 /* harmony export */   n: () => (/* binding */ trimSlack)
 /* harmony export */ });
-/* harmony import */ var _errors_visible_text_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(81);
+/* harmony import */ var _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(3712);
+/* harmony import */ var _errors_visible_text_js__WEBPACK_IMPORTED_MODULE_1__ = __nccwpck_require__(81);
+
 
 /**
  * A store could not be reached, read or written. The CLI maps it to exit 3 and the action fails
@@ -24257,9 +24272,8 @@ class StoreError extends Error {
     }
     /** "store: reason\n  fix: ..." — the line a user sees. */
     describe() {
-        const line = (text) => (0,_errors_visible_text_js__WEBPACK_IMPORTED_MODULE_0__/* .visibleText */ .Q)(text).replace(/\n/g, '\\u{000A}');
-        const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
-        return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
+        const head = this.where ? `${(0,_errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .oneLine */ .TN)(this.where)}: ${this.message}` : this.message;
+        return (0,_errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .noCommandLines */ .Cr)((0,_errors_visible_text_js__WEBPACK_IMPORTED_MODULE_1__/* .visibleText */ .Q)(this.fix ? `${head}\n  fix: ${this.fix}` : head));
     }
 }
 /**
@@ -24297,7 +24311,7 @@ function trimSlack(keep) {
  */
 function storedValue(name, m, stored) {
     if (!Number.isFinite(m.value)) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric value ${m.value} is not a finite number and cannot be recorded`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`metric value ${m.value} is not a finite number and cannot be recorded`, {
             where: m.where ?? name,
             fix: 'check the metric file that produced it',
         });
@@ -24355,9 +24369,9 @@ async function withExactPlace(align, cwd) {
         return await align();
     }
     catch (error) {
-        if (!(error instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .d) || error.where === undefined)
+        if (!(error instanceof _errors_input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz) || error.where === undefined)
             throw error;
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .d(error.message, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_2__/* .InputError */ .dz(error.message, {
             where: await exactPlace(error.where, cwd),
             ...(error.fix === undefined ? {} : { fix: error.fix }),
             cause: error,
@@ -24398,7 +24412,7 @@ function metricFormat(name) {
     const found = METRIC_FORMATS.includes(key) ? key : ALIASES.get(key);
     if (found)
         return found;
-    throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`unknown input format ${JSON.stringify(name)}`, {
+    throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`unknown input format ${JSON.stringify(name)}`, {
         fix: `use one of ${METRIC_FORMATS.join(', ')}`,
     });
 }
@@ -24545,17 +24559,17 @@ const BIDI = /[\u202a-\u202e\u2066-\u2069]/u;
  */
 function checkMetricName(name, where) {
     if (name.trim() === '') {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d('metric name is empty', { where, fix: 'give every metric a non-empty name' });
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz('metric name is empty', { where, fix: 'give every metric a non-empty name' });
     }
     const length = countCodePoints(name);
     if (length > MAX_NAME_LENGTH) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric name is ${length} characters long, more than the ${MAX_NAME_LENGTH} allowed ("${name.slice(0, 40)}...")`, { where, fix: `shorten the name to at most ${MAX_NAME_LENGTH} characters` });
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`metric name is ${length} characters long, more than the ${MAX_NAME_LENGTH} allowed ("${name.slice(0, 40)}...")`, { where, fix: `shorten the name to at most ${MAX_NAME_LENGTH} characters` });
     }
     const bad = CONTROL.exec(name) ?? BIDI.exec(name);
     if (bad) {
         const code = bad[0].codePointAt(0).toString(16).toUpperCase().padStart(4, '0');
         const kind = CONTROL.test(bad[0]) ? 'a control character' : 'a bidirectional override character';
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric name ${JSON.stringify(name)} contains ${kind} (U+${code})`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`metric name ${JSON.stringify(name)} contains ${kind} (U+${code})`, {
             where,
             fix: 'remove control and bidirectional formatting characters from metric names',
         });
@@ -24586,7 +24600,7 @@ const MAX_UNIT_LENGTH = 64;
  */
 function checkUnit(unit, where) {
     if (unit.length > MAX_UNIT_LENGTH || CONTROL.test(unit) || BIDI.test(unit)) {
-        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`unit ${JSON.stringify(unit.slice(0, 80))} is longer than ${MAX_UNIT_LENGTH} characters or contains control or bidirectional formatting characters`, {
+        throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`unit ${JSON.stringify(unit.slice(0, 80))} is longer than ${MAX_UNIT_LENGTH} characters or contains control or bidirectional formatting characters`, {
             where,
             fix: 'write the unit as short plain text such as ms, B or ns/op',
         });
@@ -24742,7 +24756,7 @@ function inStoredUnit(name, m, stored) {
     const value = convertUnit(m.value, m.unit, stored);
     if (value !== undefined && Number.isFinite(value))
         return value;
-    throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .d(`metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`, {
+    throw new _errors_input_error_js__WEBPACK_IMPORTED_MODULE_0__/* .InputError */ .dz(`metric ${JSON.stringify(name)} is in ${JSON.stringify(m.unit)} but its history is in ${JSON.stringify(stored)}: ${unitMismatch(m.unit, stored) ?? 'the value does not fit that unit'}`, {
         where: m.where ?? name,
         fix: `write ${JSON.stringify(name)} in ${JSON.stringify(stored)} or a unit that converts to it, or give the metric another name to start a new history`,
     });

@@ -80,8 +80,13 @@ function wrongValue(error: ErrorObject, tree: YamlTree): ConfigProblem {
   const message = `${name} must be ${allowed}; got ${describeValue(error.data)}`;
   let fix: string | undefined;
   if (Array.isArray(node.enum) && typeof error.data === 'string') {
-    const guess = didYouMean(error.data, node.enum.map(String));
-    if (guess) fix = `did you mean "${guess}"?`;
+    const values = node.enum.map(String);
+    const typed = error.data.toLowerCase();
+    // A value with a word added or cut ("holmes", "bonf") is as likely a slip as a typo.
+    const guess =
+      didYouMean(error.data, values) ??
+      values.find((v) => v.length >= 3 && (typed.startsWith(v.toLowerCase()) || v.toLowerCase().startsWith(typed)));
+    fix = guess ? `did you mean "${guess}"?` : `write one of ${values.join(', ')}`;
   }
   const data = error.data;
   const wantsNumber = node.type === 'number' || node.type === 'integer' || Array.isArray(node.anyOf);

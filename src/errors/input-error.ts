@@ -23,12 +23,22 @@ export class InputError extends Error {
    * send a terminal escape sequence or reorder the line it is printed on (CVE-2021-42574).
    */
   describe(): string {
-    // Each part is one line: a line feed quoted from input (a metric name) must not start a line
-    // of its own, which a CI log would read as a command.
-    const line = (text: string): string => visibleText(shortenQuotes(text)).replace(/\n/g, '\\u{000A}');
-    const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
-    return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
+    const head = this.where ? `${oneLine(this.where)}: ${this.message}` : this.message;
+    return noCommandLines(visibleText(shortenQuotes(this.fix ? `${head}\n  fix: ${this.fix}` : head)));
   }
+}
+
+/** A place is one line: a line feed quoted from input (a metric name) is shown as its code point. */
+export function oneLine(text: string): string {
+  return text.replace(/\n/g, '\\u{000A}');
+}
+
+/**
+ * A CI log reads a line that starts with "::" as a workflow command (GitHub's "Workflow commands
+ * for GitHub Actions"): no line of a message may, whatever it quotes.
+ */
+export function noCommandLines(text: string): string {
+  return text.replace(/\n(\s*)::/g, '\n$1\\u{003A}:');
 }
 
 /** Quoted text past this many characters is cut in messages: a 10 KB metric name is not echoed whole. */

@@ -1,3 +1,4 @@
+import { noCommandLines, oneLine } from '../errors/input-error.js';
 import { visibleText } from '../errors/visible-text.js';
 import type { HistoryChange } from './changes.js';
 import type { History } from './history.js';
@@ -81,9 +82,8 @@ export class StoreError extends Error {
 
   /** "store: reason\n  fix: ..." — the line a user sees. */
   describe(): string {
-    const line = (text: string): string => visibleText(text).replace(/\n/g, '\\u{000A}');
-    const head = this.where ? `${line(this.where)}: ${line(this.message)}` : line(this.message);
-    return this.fix ? `${head}\n  fix: ${line(this.fix)}` : head;
+    const head = this.where ? `${oneLine(this.where)}: ${this.message}` : this.message;
+    return noCommandLines(visibleText(this.fix ? `${head}\n  fix: ${this.fix}` : head));
   }
 }
 

@@ -12,15 +12,14 @@ describe('error messages quote input on one line', () => {
       where: `m.json (${name})`,
       fix: 'rename it',
     }).describe();
-    expect(text.split('\n')).toHaveLength(2);
     expect(text.split('\n').some((line) => line.startsWith('::'))).toBe(false);
     expect(text).toContain('x\\u{000A}::error');
-    expect(text.split('\n')[1]).toBe('  fix: rename it');
+    expect(text.split('\n').at(-1)).toBe('  fix: rename it');
   });
 
   it('StoreError does the same', () => {
     const text = new StoreError(`series ${name}`, { where: 'h.jsonl', fix: 'pass --series' }).describe();
     expect(text.split('\n').some((line) => line.startsWith('::'))).toBe(false);
-    expect(text).toBe('h.jsonl: series x\\u{000A}::error title=pwn::injected\n  fix: pass --series');
+    expect(text).toBe('h.jsonl: series x\n\\u{003A}:error title=pwn::injected\n  fix: pass --series');
   });
 });
