@@ -27,4 +27,3 @@ export { detectableShift } from './detectable.js';
 export { toFitScale, fromFitScale, type Scale } from './transform.js';
 export { adjustTails, holmLevels, type FamilyMethod } from './family.js';
 export { detectChangePoints, differenceSigma, type ChangePointOptions } from './change-points.js';
-export { skewness, andersonDarling, andersonDarlingPValue, type AndersonDarling } from './normality.js';
