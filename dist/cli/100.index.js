@@ -801,8 +801,8 @@ function renderHtmlReport(input) {
 var judge_requested_run = __webpack_require__(8370);
 // EXTERNAL MODULE: ./src/cli/paths.ts
 var paths = __webpack_require__(5450);
-// EXTERNAL MODULE: ./src/cli/run/since.ts + 19 modules
-var run_since = __webpack_require__(3041);
+// EXTERNAL MODULE: ./src/cli/run/since.ts + 18 modules
+var run_since = __webpack_require__(8304);
 ;// CONCATENATED MODULE: ./src/cli/run/report.ts
 
 

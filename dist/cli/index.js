@@ -3711,7 +3711,7 @@ function aggregateSamples(values, kind, unit) {
         case 'max':
             return values.reduce((a, b) => Math.max(a, b));
         default:
-            return (0,median/* median */.J)(values);
+            return (0,median/* median */.JZ)(values);
     }
 }
 /** The aggregate `auto` stands for: the min for a time unit, the median for the rest. */
@@ -15131,7 +15131,7 @@ function holdsLater(history, k, name, value, change) {
     if (later.length < HOLD_RUNS)
         return false;
     const centre = value / (1 + change);
-    const kept = ((0,median/* median */.J)(later) - centre) / centre;
+    const kept = ((0,median/* median */.JZ)(later) - centre) / centre;
     return Math.sign(kept) === Math.sign(change) && Math.abs(kept) >= Math.abs(change) / 2;
 }
 /** The history before run k: what the gate knew when run k came. */
@@ -15480,8 +15480,8 @@ function scoreExact(config, history, plan, tick) {
         caught: [...hits].sort(([a], [b]) => a - b).map(([shift, h]) => ({ shift, evidence: rateEvidence(h.caught, h.n) })),
         labelledFlagged,
         hits: each,
-        detectable: new Map([...detectables].map(([name, list]) => [name, (0,median/* median */.J)(list)])),
-        metricsPerRun: judged.length === 0 ? 0 : (0,median/* median */.J)(judged),
+        detectable: new Map([...detectables].map(([name, list]) => [name, (0,median/* median */.JZ)(list)])),
+        metricsPerRun: judged.length === 0 ? 0 : (0,median/* median */.JZ)(judged),
     };
 }
 const score_JUDGED = new Set(['ok', 'regressed', 'improved']);
@@ -16352,8 +16352,8 @@ function parseLast(text) {
     return n;
 }
 
-// EXTERNAL MODULE: ./src/cli/run/since.ts + 19 modules
-var since = __nccwpck_require__(3041);
+// EXTERNAL MODULE: ./src/cli/run/since.ts + 18 modules
+var since = __nccwpck_require__(8304);
 ;// CONCATENATED MODULE: ./src/cli/commands/since.ts
 
 
@@ -16605,7 +16605,7 @@ function resolvePath(ctx, path) {
 
 /***/ }),
 
-/***/ 3041:
+/***/ 8304:
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 
@@ -16839,38 +16839,8 @@ function rankSumTest(a, b, varianceFactor = 1) {
     return { u, z, p: z === 0 ? 1 : Math.min(1, 2 * (0,normal/* normalUpperTail */.IL)(Math.abs(z))) };
 }
 
-;// CONCATENATED MODULE: ./src/model/normal-quantile.ts
-
-/**
- * The standard normal quantile: the z with P(Z <= z) = p, for 0 < p < 1.
- * Starts from Abramowitz & Stegun 26.2.23 (rational approximation, error below 4.5e-4) on the
- * smaller tail q = min(p, 1 - p), then takes Newton steps on Q(z) = q, with Q the directly
- * computed upper tail (no 1 - cdf cancellation), so the result is good to a few ulps across the
- * whole range. The steps are bounded (A&S's start is within 4.5e-4, Newton doubles the digits).
- * Throws RangeError unless 0 < p < 1.
- * @example normalQuantile(0.975) // ≈ 1.959963984540054
- */
-function normalQuantile(p) {
-    if (!(p > 0 && p < 1))
-        throw new RangeError(`a normal quantile needs a probability between 0 and 1, got ${p}`);
-    if (p === 0.5)
-        return 0;
-    const q = Math.min(p, 1 - p);
-    const t = Math.sqrt(-2 * Math.log(q));
-    let z = t - (2.515517 + 0.802853 * t + 0.010328 * t * t) / (1 + 1.432788 * t + 0.189269 * t * t + 0.001308 * t ** 3);
-    for (let step = 0; step < 6; step++) {
-        const density = (0,normal/* normalDensity */.kC)(z, 0, 1);
-        if (!(density > 0))
-            break;
-        // Newton on Q(z) - q, with Q' = -phi; a relative update keeps the far tail exact too.
-        const next = z + ((0,normal/* normalUpperTail */.IL)(z) - q) / density;
-        if (next === z)
-            break;
-        z = next;
-    }
-    return p < 0.5 ? -z : z;
-}
-
+// EXTERNAL MODULE: ./src/model/normal-quantile.ts
+var normal_quantile = __nccwpck_require__(1094);
 ;// CONCATENATED MODULE: ./src/model/shift-estimate.ts
 
 /**
@@ -16906,7 +16876,7 @@ function shiftEstimate(a, b, confidence = 0.95) {
     const count = m * n;
     const half = count >> 1;
     const shift = count % 2 === 1 ? differences[half] : (differences[half - 1] + differences[half]) / 2;
-    const c = Math.floor(count / 2 - normalQuantile(1 - (1 - confidence) / 2) * Math.sqrt((count * (m + n + 1)) / 12));
+    const c = Math.floor(count / 2 - (0,normal_quantile/* normalQuantile */.Z)(1 - (1 - confidence) / 2) * Math.sqrt((count * (m + n + 1)) / 12));
     return {
         shift,
         lower: c >= 1 ? differences[c - 1] : Number.NaN,
@@ -16969,8 +16939,8 @@ function hampelOutliers(values, half, threshold = 3) {
     }
     for (let i = 0; i < n; i++) {
         const window = Array.prototype.slice.call(values, Math.max(0, i - half), Math.min(n, i + half + 1));
-        const centre = (0,median/* median */.J)(window);
-        const spread = fit/* MAD_TO_SIGMA */.tF * (0,median/* median */.J)(window.map((x) => Math.abs(x - centre)));
+        const centre = (0,median/* median */.JZ)(window);
+        const spread = fit/* MAD_TO_SIGMA */.tF * (0,median/* median */.JZ)(window.map((x) => Math.abs(x - centre)));
         flags.push(Math.abs(values[i] - centre) > threshold * spread && spread > 0);
     }
     return flags;
@@ -17180,7 +17150,7 @@ function theilSen(blocks, options = {}) {
     const sorted = slopes.subarray(0, count).sort();
     const half = count >> 1;
     const slope = count % 2 === 1 ? sorted[half] : (sorted[half - 1] + sorted[half]) / 2;
-    const c = normalQuantile(1 - (1 - confidence) / 2) * Math.sqrt(options.variance ?? varianceSum);
+    const c = (0,normal_quantile/* normalQuantile */.Z)(1 - (1 - confidence) / 2) * Math.sqrt(options.variance ?? varianceSum);
     // 1-based ranks (N - C) / 2 and (N + C) / 2 + 1, each rounded to the nearest rank.
     const low = Math.round((count - c) / 2);
     const high = Math.round((count + c) / 2) + 1;
@@ -17285,7 +17255,7 @@ function residuals(series, starts) {
         // A steady drift within a segment is no serial correlation: its Theil-Sen line is taken out too.
         const at = Array.from(part, (_, i) => i);
         const slope = part.length > 2 ? theilSen([{ at, values: Array.from(part) }]).slope : 0;
-        const level = (0,median/* median */.J)(Array.from(part, (y, i) => y - slope * i));
+        const level = (0,median/* median */.JZ)(Array.from(part, (y, i) => y - slope * i));
         for (let i = 0; i < part.length; i++)
             out[cuts[k] + i] = part[i] - slope * i - level;
     }
@@ -17583,7 +17553,7 @@ function bic(series, after, reference, round) {
         const part = detrended.slice(cuts[k], cuts[k + 1]);
         if (part.length === 0)
             continue;
-        const level = (0,median/* median */.J)(part);
+        const level = (0,median/* median */.JZ)(part);
         for (const r of part)
             absolute += Math.abs(r - level);
     }
@@ -17620,7 +17590,7 @@ function measureCreep(series, after, steps, options) {
     const residuals = [];
     for (const { at, values } of blocks) {
         const flat = Array.from(values, (y, i) => y - first.slope * at[i]);
-        const level = (0,median/* median */.J)(flat);
+        const level = (0,median/* median */.JZ)(flat);
         for (const r of flat)
             residuals.push(r - level);
     }
@@ -17760,7 +17730,7 @@ function reviewMetric(name, unit, column, runs, reference, worse, settings) {
     if (after.length >= 2) {
         const series = { at: positions, values };
         const found = stepsAndCreep(series, reference, settings);
-        const level = base.then?.level ?? (0,median/* median */.J)(raw.slice(before.length));
+        const level = base.then?.level ?? (0,median/* median */.JZ)(raw.slice(before.length));
         base.steps = found.steps.map((s, k) => stepOf(s, k, found, positions, runs, reference, toRatio(scale, level), accepted));
         if (found.slope && found.trend)
             base.creep = creepOf(found, scale, level);
@@ -17779,7 +17749,7 @@ function finiteOrNull(x) {
 function levelWindow(values, positions, runs, fromScale) {
     return {
         n: values.length,
-        level: fromScale((0,median/* median */.J)(values)),
+        level: fromScale((0,median/* median */.JZ)(values)),
         from: runs[positions[0]].id,
         to: runs[positions[positions.length - 1]].id,
     };
@@ -20761,6 +20731,8 @@ __nccwpck_require__.d(__webpack_exports__, {
 
 // EXTERNAL MODULE: ./src/model/family.ts
 var model_family = __nccwpck_require__(7089);
+// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
+var tails = __nccwpck_require__(2170);
 // EXTERNAL MODULE: ./src/config/rules.ts
 var rules = __nccwpck_require__(5413);
 // EXTERNAL MODULE: ./src/errors/input-error.ts
@@ -20896,8 +20868,6 @@ function own(measurement) {
     return fields;
 }
 
-// EXTERNAL MODULE: ./src/model/tails.ts + 1 modules
-var tails = __nccwpck_require__(2170);
 ;// CONCATENATED MODULE: ./src/gate/decide.ts
 
 /**
@@ -20909,9 +20879,9 @@ var tails = __nccwpck_require__(2170);
  * Under family control the result also carries the effective cutoff: the relative density at
  * which the worse side's tail equals the metric's level, so the density idea stays visible.
  * Returns a new result.
- * @example decide(scored, undefined).status // 'regressed'
+ * @example decide(scored, undefined, rememberedQuantile()).status // 'regressed'
  */
-function decide(s, family) {
+function decide(s, family, quantile) {
     const result = { ...s.result };
     const r = result.relativeDensity ?? 1;
     let worse;
@@ -20924,7 +20894,7 @@ function decide(s, family) {
         result.adjusted = family.adjusted;
         result.level = family.level;
         const level = Math.min(0.5, s.both ? family.level / 2 : family.level);
-        result.effectiveCutoff = (0,tails/* studentRelativeDensity */.AL)((0,tails/* studentUpperQuantile */.br)(level, s.worse.nu), s.worse.nu);
+        result.effectiveCutoff = (0,tails/* studentRelativeDensity */.AL)(quantile(level, s.worse.nu), s.worse.nu);
         worse = family.adjusted <= family.budget && (s.move > 0 || (s.both && s.move !== 0));
         better = s.betterTail < family.share && s.move < 0 && !s.both;
     }
@@ -20941,33 +20911,50 @@ function decide(s, family) {
 
 // EXTERNAL MODULE: ./node_modules/simple-statistics/dist/simple-statistics.mjs
 var simple_statistics = __nccwpck_require__(5521);
+// EXTERNAL MODULE: ./src/model/median.ts
+var median = __nccwpck_require__(71);
 ;// CONCATENATED MODULE: ./src/model/median-of-others.ts
 /**
  * For each value, the median of all the other values (leave-one-out medians): the shared move a
  * metric is compared with is taken from the other metrics of its run only, so a metric's own
  * slowdown can never move the shared move it is judged against, however few metrics there are.
  * From one sort: removing the value at sorted position i leaves a sorted list whose k-th element
- * is sorted[k] for k < i and sorted[k + 1] from i on. NaN entries (missing metrics) are skipped and
- * get NaN; a value with no other finite value gets NaN. O(p log p).
+ * is sorted[k] for k < i and sorted[k + 1] from i on, so the answer is one of three neighbours of
+ * the middle, chosen by comparing the value with them (equal values give the same list). NaN
+ * entries (missing metrics) are skipped and get NaN; a value with no other finite value gets NaN.
+ * O(p log p).
  * @example medianOfOthers([1, 2, 3, 10]) // [3, 3, 2, 2]
  */
 function medianOfOthers(values) {
-    const order = values
-        .map((_, i) => i)
-        .filter((i) => Number.isFinite(values[i]))
-        .sort((a, b) => values[a] - values[b]);
-    const sorted = order.map((i) => values[i]);
-    const rank = new Map();
-    order.forEach((index, r) => rank.set(index, r));
-    const rest = sorted.length - 1;
-    const at = (removed, k) => sorted[k < removed ? k : k + 1];
-    return values.map((_, i) => {
-        const removed = rank.get(i);
-        if (removed === undefined || rest < 1)
-            return Number.NaN;
-        const half = rest >> 1;
-        return rest % 2 === 1 ? at(removed, half) : (at(removed, half - 1) + at(removed, half)) / 2;
-    });
+    let finite = 0;
+    for (let i = 0; i < values.length; i++)
+        if (Number.isFinite(values[i]))
+            finite++;
+    const sorted = new Float64Array(finite);
+    let f = 0;
+    for (let i = 0; i < values.length; i++)
+        if (Number.isFinite(values[i]))
+            sorted[f++] = values[i];
+    sorted.sort();
+    const rest = finite - 1;
+    const half = rest >> 1;
+    const out = new Array(values.length);
+    for (let i = 0; i < values.length; i++) {
+        const x = values[i];
+        if (!Number.isFinite(x) || rest < 1)
+            out[i] = Number.NaN;
+        // An odd count of others: their middle is sorted[half] once x is past it, else sorted[half + 1].
+        else if (rest % 2 === 1)
+            out[i] = x > sorted[half] ? sorted[half] : sorted[half + 1];
+        // An even count: the two middle ones, skipping x where it sits among them.
+        else if (x <= sorted[half - 1])
+            out[i] = (sorted[half] + sorted[half + 1]) / 2;
+        else if (x <= sorted[half])
+            out[i] = (sorted[half - 1] + sorted[half + 1]) / 2;
+        else
+            out[i] = (sorted[half - 1] + sorted[half]) / 2;
+    }
+    return out;
 }
 
 // EXTERNAL MODULE: ./src/model/fit.ts
@@ -20982,13 +20969,18 @@ var fit = __nccwpck_require__(5046);
  * quantised data whose MAD is 0.
  */
 function differenceSigma(values) {
-    const diffs = values.slice(1).map((x, i) => x - values[i]);
-    if (diffs.length === 0)
+    if (values.length < 2)
         return 0;
+    const diffs = new Array(values.length - 1);
+    for (let i = 1; i < values.length; i++)
+        diffs[i - 1] = values[i] - values[i - 1];
     const robust = (fit/* MAD_TO_SIGMA */.tF * (0,simple_statistics/* medianAbsoluteDeviation */.hK)(diffs)) / Math.SQRT2;
     if (robust > 0)
         return robust;
-    return Math.sqrt(diffs.reduce((sum, d) => sum + d * d, 0) / (2 * diffs.length));
+    let squares = 0;
+    for (const d of diffs)
+        squares += d * d;
+    return Math.sqrt(squares / (2 * diffs.length));
 }
 /**
  * Where the level of a series changes, by optimal partitioning (Jackson et al. 2005, "An algorithm
@@ -21017,35 +21009,34 @@ function detectChangePoints(values, options = {}) {
     if (options.penalty !== undefined && !(options.penalty >= 0 && Number.isFinite(options.penalty))) {
         throw new RangeError(`penalty must be a finite number, 0 or more, got ${options.penalty}`);
     }
-    values.forEach((x, i) => {
-        if (!Number.isFinite(x))
-            throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
-    });
+    for (let i = 0; i < n; i++) {
+        if (!Number.isFinite(values[i]))
+            throw new RangeError(`value ${values[i]} at position ${i + 1} is not a finite number`);
+    }
     if (n < 2 * minSegment)
         return [];
     const sigma = differenceSigma(values);
     if (!(sigma > 0))
         return [];
-    const centre = (0,simple_statistics/* median */.JZ)([...values]);
-    const z = values.map((x) => Math.max(-clip, Math.min(clip, (x - centre) / sigma)));
+    const centre = (0,simple_statistics/* median */.JZ)(Array.from(values));
+    const z = new Float64Array(n);
+    for (let i = 0; i < n; i++)
+        z[i] = Math.max(-clip, Math.min(clip, (values[i] - centre) / sigma));
     let noise = 0;
     for (let i = 1; i < n; i++)
         noise += Math.min(clip * clip, (z[i] - z[i - 1]) ** 2 / 2);
     noise = Math.max(noise / (n - 1), 1e-12);
     const penalty = (options.penalty ?? 3 * Math.log(n)) * noise;
-    const s1 = [0];
-    const s2 = [0];
+    // Prefix sums: the cost of values a..b-1 is s2 - s1^2 / length over that stretch.
+    const s1 = new Float64Array(n + 1);
+    const s2 = new Float64Array(n + 1);
     for (let i = 0; i < n; i++) {
-        s1.push(s1[i] + z[i]);
-        s2.push(s2[i] + z[i] * z[i]);
+        s1[i + 1] = s1[i] + z[i];
+        s2[i + 1] = s2[i] + z[i] * z[i];
     }
-    const cost = (a, b) => {
-        const s = s1[b] - s1[a];
-        return Math.max(0, s2[b] - s2[a] - (s * s) / (b - a));
-    };
     // best[t]: the least total for the first t values; previous[t]: where its last segment starts.
-    const best = new Array(n + 1).fill(Infinity);
-    const previous = new Array(n + 1).fill(0);
+    const best = new Float64Array(n + 1).fill(Infinity);
+    const previous = new Int32Array(n + 1);
     best[0] = -penalty;
     const candidates = [];
     for (let end = minSegment; end <= n; end++) {
@@ -21054,11 +21045,12 @@ function detectChangePoints(values, options = {}) {
             candidates.push(fresh);
         let value = Infinity;
         let start = 0;
-        for (const s of candidates) {
-            const total = best[s] + cost(s, end) + penalty;
+        for (const a of candidates) {
+            const sum = s1[end] - s1[a];
+            const total = best[a] + Math.max(0, s2[end] - s2[a] - (sum * sum) / (end - a)) + penalty;
             if (total < value) {
                 value = total;
-                start = s;
+                start = a;
             }
         }
         best[end] = value;
@@ -21106,6 +21098,7 @@ function lastingStart(values, minSegment) {
 }
 
 ;// CONCATENATED MODULE: ./src/gate/moves.ts
+
 
 
 
@@ -21178,13 +21171,6 @@ function deviation(c, x, centre) {
     const d = x - centre;
     return c.sign * (c.log || centre === 0 ? d : d / Math.abs(centre));
 }
-/** The level (index into levels) that run i belongs to. */
-function levelOf(levels, i) {
-    let k = 0;
-    while (k + 1 < levels.length && levels[k + 1] <= i)
-        k++;
-    return k;
-}
 /**
  * Takes one group's runs apart into shared and own moves (issue 13 item 3).
  * Rows: the newest `window` runs holding a member; when the caller knows this run's runner and at
@@ -21209,6 +21195,9 @@ function takeApart(group, history, runner) {
         members = changed;
         result = polish(group, members);
     }
+    const states = result.shared !== undefined && group.members.length >= EPISODE_MIN_MEMBERS
+        ? runStates(result.own, result.ownNow, members.map((f) => f.rows))
+        : undefined;
     const out = group.members.map((c, j) => {
         const m = members[j];
         return {
@@ -21221,8 +21210,8 @@ function takeApart(group, history, runner) {
             ownNow: result.ownNow[j],
             sharedNow: result.sharedNow[j],
             centre: result.centres[j].at(-1),
-            calm: m.rows.map((i) => result.calm?.get(i) ?? true),
-            calmNow: result.calmNow ?? true,
+            calm: m.rows.map((i) => states?.calm.get(i) ?? true),
+            calmNow: states?.calmNow ?? true,
             ...(runnerMatch === undefined ? {} : { runner: runnerMatch }),
         };
     });
@@ -21291,27 +21280,57 @@ function withLastingChange(frame, own, history) {
 }
 /** Rounds of the median polish: the centres settle in two (Tukey's usual stopping point is a few). */
 const POLISH_ROUNDS = 2;
+function frameValues(f) {
+    const values = new Float64Array(f.rows.length);
+    const bounds = new Int32Array(f.levels.length + 1);
+    let k = 0;
+    for (let r = 0; r < f.rows.length; r++) {
+        const i = f.rows[r];
+        values[r] = f.candidate.values[i];
+        while (k + 1 < f.levels.length && f.levels[k + 1] <= i)
+            bounds[++k] = r;
+    }
+    while (k < f.levels.length)
+        bounds[++k] = f.rows.length;
+    return { values, bounds };
+}
+/**
+ * The median polish of one group. Dense: runs x members deviations in one array and medians of
+ * reused buffers, because a timings group holds every timing of the project (1,000 in the bench)
+ * and is polished on every check.
+ */
 function polish(group, frames) {
     const n = group.members.length;
+    const framed = frames.map(frameValues);
+    const scratch = new Array(Math.max(frames.length, ...frames.map((f) => f.rows.length))).fill(0);
     // Plain level centres first: the medians of each level's values.
-    const centres = frames.map((f) => f.levels.map((start, k) => {
-        const end = f.levels[k + 1] ?? Infinity;
-        const inLevel = f.rows.filter((i) => i >= start && i < end).map((i) => f.candidate.values[i]);
-        return inLevel.length > 0 ? (0,simple_statistics/* median */.JZ)(inLevel) : Number.NaN;
-    }));
+    const centres = framed.map(({ values, bounds }) => {
+        const c = [];
+        for (let k = 0; k + 1 < bounds.length; k++) {
+            for (let r = bounds[k]; r < bounds[k + 1]; r++)
+                scratch[r - bounds[k]] = values[r];
+            c.push((0,median/* medianInPlace */.Te)(scratch, bounds[k + 1] - bounds[k]));
+        }
+        return c;
+    });
     // Fill a level without runs (a mark on the newest run) from the level before: it is learning anyway.
     for (const c of centres)
         for (let k = 1; k < c.length; k++)
             if (!Number.isFinite(c[k]))
                 c[k] = c[k - 1];
-    const rowIndex = [...new Set(frames.flatMap((f) => f.rows))].sort((a, b) => a - b);
-    const held = frames.map((f) => new Set(f.rows));
-    const dev = (j, i) => {
-        const f = frames[j];
-        const x = f.candidate.values[i];
-        if (!Number.isFinite(x) || !held[j].has(i))
-            return Number.NaN;
-        return deviation(f.candidate, x, centres[j][levelOf(f.levels, i)]);
+    /** Member j's deviations at each position of its rows. */
+    const devsOf = (j) => {
+        const { values, bounds } = framed[j];
+        const candidate = frames[j].candidate;
+        const out = new Float64Array(values.length);
+        for (let k = 0; k + 1 < bounds.length; k++) {
+            const centre = centres[j][k];
+            for (let r = bounds[k]; r < bounds[k + 1]; r++) {
+                const x = values[r];
+                out[r] = Number.isFinite(x) ? deviation(candidate, x, centre) : Number.NaN;
+            }
+        }
+        return out;
     };
     const devNow = (j) => {
         const f = frames[j];
@@ -21320,75 +21339,114 @@ function polish(group, frames) {
     if (group.kind === 'alone') {
         return {
             centres,
-            own: frames.map((f, j) => f.rows.map((i) => dev(j, i))),
+            own: frames.map((_, j) => Array.from(devsOf(j))),
             ownNow: frames.map((_, j) => devNow(j)),
             sharedNow: frames.map(() => 0),
         };
     }
     if (group.kind === 'reference') {
         const r = frames.length - 1;
-        const refDev = (i) => dev(r, i) * frames[r].candidate.sign;
-        const refNow = devNow(r) * frames[r].candidate.sign;
+        const refSign = frames[r].candidate.sign;
+        const refDevs = devsOf(r);
+        const refAt = new Map(frames[r].rows.map((i, k) => [i, refDevs[k] * refSign]));
+        const refNow = devNow(r) * refSign;
         return {
             centres,
             // The reference itself comes last, with its plain deviations (for its lasting-change check).
             own: [
-                ...frames.slice(0, n).map((f, j) => f.rows.map((i) => dev(j, i) - f.candidate.sign * refDev(i))),
-                frames[r].rows.map((i) => dev(r, i)),
+                ...frames.slice(0, n).map((f, j) => {
+                    const d = devsOf(j);
+                    return f.rows.map((i, k) => d[k] - f.candidate.sign * (refAt.get(i) ?? Number.NaN));
+                }),
+                Array.from(refDevs),
             ],
             ownNow: frames.slice(0, n).map((f, j) => devNow(j) - f.candidate.sign * refNow),
             sharedNow: frames.slice(0, n).map((f) => f.candidate.sign * refNow),
         };
     }
-    for (let round = 0; round < POLISH_ROUNDS; round++) {
-        const shared = new Map();
-        for (const i of rowIndex) {
-            const devs = frames.map((_, j) => dev(j, i)).filter((d) => Number.isFinite(d));
-            if (devs.length > 0)
-                shared.set(i, (0,simple_statistics/* median */.JZ)(devs));
+    // The runs any member holds, ascending, and each one's row in devs.
+    const end = Math.max(0, ...frames.map((f) => (f.rows.at(-1) ?? -1) + 1));
+    const rowOf = new Int32Array(end).fill(-1);
+    for (const f of frames)
+        for (const i of f.rows)
+            rowOf[i] = 0;
+    const rowIndex = [];
+    for (let i = 0; i < end; i++)
+        if (rowOf[i] === 0)
+            rowOf[i] = rowIndex.push(i) - 1;
+    const place = frames.map((f) => {
+        const rows = new Int32Array(f.rows.length);
+        for (let r = 0; r < f.rows.length; r++)
+            rows[r] = rowOf[f.rows[r]];
+        return rows;
+    });
+    const m = frames.length;
+    // devs[row * m + j]: member j's deviation in that run, NaN where it has none.
+    const devs = new Float64Array(rowIndex.length * m);
+    const fill = () => {
+        devs.fill(Number.NaN);
+        for (let j = 0; j < m; j++) {
+            const d = devsOf(j);
+            const rows = place[j];
+            for (let r = 0; r < rows.length; r++)
+                devs[rows[r] * m + j] = d[r];
         }
-        frames.forEach((f, j) => {
-            f.levels.forEach((start, k) => {
-                const end = f.levels[k + 1] ?? Infinity;
+    };
+    /** The median of a run's finite deviations, and how many there are. */
+    const runMedian = (row) => {
+        let count = 0;
+        for (let j = row * m; j < (row + 1) * m; j++)
+            if (Number.isFinite(devs[j]))
+                scratch[count++] = devs[j];
+        return { median: (0,median/* medianInPlace */.Te)(scratch, count), count };
+    };
+    for (let round = 0; round < POLISH_ROUNDS; round++) {
+        fill();
+        const shared = new Float64Array(rowIndex.length);
+        for (let row = 0; row < rowIndex.length; row++)
+            shared[row] = runMedian(row).median;
+        for (let j = 0; j < m; j++) {
+            const { log, sign } = frames[j].candidate;
+            const { values, bounds } = framed[j];
+            const rows = place[j];
+            for (let k = 0; k + 1 < bounds.length; k++) {
                 const c = centres[j][k];
-                const adjusted = f.rows
-                    .filter((i) => i >= start && i < end && shared.has(i))
-                    .map((i) => {
-                    const s = f.candidate.sign * shared.get(i);
-                    return f.candidate.values[i] - (f.candidate.log || c === 0 ? s : s * Math.abs(c));
-                });
-                if (adjusted.length > 0)
-                    centres[j][k] = (0,simple_statistics/* median */.JZ)(adjusted);
-            });
-        });
+                let count = 0;
+                for (let r = bounds[k]; r < bounds[k + 1]; r++) {
+                    const s = shared[rows[r]];
+                    if (Number.isFinite(s))
+                        scratch[count++] = values[r] - (log || c === 0 ? sign * s : sign * s * Math.abs(c));
+                }
+                if (count > 0)
+                    centres[j][k] = (0,median/* medianInPlace */.Te)(scratch, count);
+            }
+        }
     }
+    fill();
     const own = frames.map((f) => f.rows.map(() => Number.NaN));
-    const position = frames.map((f) => new Map(f.rows.map((i, k) => [i, k])));
+    const next = new Int32Array(m);
     const history_ = [];
-    for (const i of rowIndex) {
-        const devs = frames.map((_, j) => dev(j, i));
-        const others = medianOfOthers(devs);
-        frames.forEach((f, j) => {
-            const k = position[j].get(i);
-            if (k !== undefined)
-                own[j][k] = devs[j] - others[j];
-        });
-        const present = devs.filter((d) => Number.isFinite(d));
-        if (present.length >= 2)
-            history_.push((0,simple_statistics/* median */.JZ)(present));
+    for (let row = 0; row < rowIndex.length; row++) {
+        const runDevs = devs.subarray(row * m, (row + 1) * m);
+        const others = medianOfOthers(runDevs);
+        for (let j = 0; j < m; j++) {
+            const r = next[j];
+            if (place[j][r] !== row)
+                continue;
+            own[j][r] = runDevs[j] - others[j];
+            next[j] = r + 1;
+        }
+        const present = runMedian(row);
+        if (present.count >= 2)
+            history_.push(present.median);
     }
     const nowDevs = frames.map((_, j) => devNow(j));
     const nowOthers = medianOfOthers(nowDevs);
     const ownNow = nowDevs.map((d, j) => d - nowOthers[j]);
-    const states = n >= EPISODE_MIN_MEMBERS
-        ? runStates(own, ownNow, frames.map((f) => f.rows))
-        : { calm: new Map(), calmNow: true };
     return {
         centres,
         own,
         ownNow,
-        calm: states.calm,
-        calmNow: states.calmNow,
         sharedNow: nowOthers,
         shared: { group, history: history_, now: (0,simple_statistics/* median */.JZ)(nowDevs), members: n },
     };
@@ -21420,23 +21478,32 @@ const EPISODE_MIN_MEMBERS = 8;
  * influence curve and its role in robust estimation", JASA 69: breakdown point 1/2).
  */
 function runStates(own, ownNow, rows) {
+    const scratch = new Array(Math.max(0, ...own.map((o) => o.length))).fill(0);
     const scales = own.map((o) => {
-        const finite = o.filter((x) => Number.isFinite(x));
-        if (finite.length < 3)
+        let count = 0;
+        for (const x of o)
+            if (Number.isFinite(x))
+                scratch[count++] = x;
+        if (count < 3)
             return Number.NaN;
-        const c = (0,simple_statistics/* median */.JZ)(finite);
-        return 1.4826 * (0,simple_statistics/* median */.JZ)(finite.map((x) => Math.abs(x - c)));
+        const c = (0,median/* medianInPlace */.Te)(scratch, count);
+        for (let k = 0; k < count; k++)
+            scratch[k] = Math.abs(scratch[k] - c);
+        return 1.4826 * (0,median/* medianInPlace */.Te)(scratch, count);
     });
     const far = (x, j) => Number.isFinite(x) && scales[j] > 0 && Math.abs(x) > EPISODE_SD * scales[j];
     const need = Math.max(2, Math.ceil(own.length / EPISODE_PER));
-    const counts = new Map();
+    // Far members per run, by history index; -1: a run no member holds.
+    const counts = new Int32Array(Math.max(0, ...rows.map((r) => (r.at(-1) ?? -1) + 1))).fill(-1);
     own.forEach((o, j) => o.forEach((x, k) => {
         const i = rows[j][k];
-        counts.set(i, (counts.get(i) ?? 0) + (far(x, j) ? 1 : 0));
+        counts[i] = Math.max(0, counts[i]) + (far(x, j) ? 1 : 0);
     }));
     const calm = new Map();
-    for (const [i, n] of counts)
-        calm.set(i, n < need);
+    counts.forEach((n, i) => {
+        if (n >= 0)
+            calm.set(i, n < need);
+    });
     const nowCount = ownNow.filter((x, j) => far(x, j)).length;
     return { calm, calmNow: nowCount < need };
 }
@@ -21580,25 +21647,27 @@ function moderatedVariance(s2, d, prior) {
 
 /** The degrees of freedom tried, heaviest first; the tails of 60 runs cannot tell finer steps apart. */
 const DOF_GRID = [1, 1.5, 2, 3, 4, 6, 10, 15, 30, 100, Infinity];
+/** ln f_nu(0) of each nu of DOF_GRID: the likelihood's constant, asked for on every profile. */
+const LOG_DENSITY_AT_0 = DOF_GRID.map((nu) => (0,tails/* studentLogDensity */.WR)(0, nu));
 /**
  * The root u = ln scale^2 of the t likelihood's scale equation mean((nu + 1) d^2 / (nu e^u + d^2)) = 1
  * (the fixed point of the EM weights below), by Newton's method on u: the left side falls
- * monotonically in u, so from a nearby start a few steps reach 1e-9.
+ * monotonically in u, so from a nearby start a few steps reach 1e-9. With w = d^2 / (nu e^u + d^2)
+ * the slope of each term is -(nu + 1) w (1 - w): one division per deviation.
  */
-function scaleEquationRoot(d, nu, start) {
+function scaleEquationRoot(squares, nu, start) {
     let u = start;
     for (let it = 0; it < 40; it++) {
-        const e = Math.exp(u);
+        const e = nu * Math.exp(u);
         let h = 0;
         let slope = 0;
-        for (const x of d) {
-            const x2 = x * x;
-            const q = nu * e + x2;
-            h += ((nu + 1) * x2) / q;
-            slope -= ((nu + 1) * x2 * nu * e) / (q * q);
+        for (let i = 0; i < squares.length; i++) {
+            const w = squares[i] / (e + squares[i]);
+            h += w;
+            slope -= w * (1 - w);
         }
-        h = h / d.length - 1;
-        slope /= d.length;
+        h = ((nu + 1) * h) / squares.length - 1;
+        slope = ((nu + 1) * slope) / squares.length;
         const step = Math.max(-2, Math.min(2, -h / slope));
         u += step;
         if (Math.abs(step) < 1e-9)
@@ -21664,29 +21733,38 @@ function pooledTailShape(own, pooled, weight) {
 }
 /** The profile of halfTailShape: every nu of DOF_GRID with its scale and log-likelihood. */
 function halfTailProfile(deviations) {
-    const d = deviations.filter((x) => x > 0 && Number.isFinite(x));
-    const n = d.length;
+    let n = 0;
+    for (let i = 0; i < deviations.length; i++)
+        if (deviations[i] > 0 && Number.isFinite(deviations[i]))
+            n++;
     if (n < 3)
         return undefined;
-    let squares = 0;
-    for (const x of d)
-        squares += x * x;
-    if (!(squares > 0))
+    const squares = new Float64Array(n);
+    let sum = 0;
+    for (let i = 0, k = 0; i < deviations.length; i++) {
+        const x = deviations[i];
+        if (x > 0 && Number.isFinite(x))
+            sum += squares[k++] = x * x;
+    }
+    if (!(sum > 0))
         return undefined;
     const out = [];
     // Each nu's scale starts from the one before it (a heavier nu), which is close.
-    let start = Math.log(squares / n);
-    for (const nu of DOF_GRID) {
-        const s2 = nu === Infinity ? squares / n : Math.exp((start = scaleEquationRoot(d, nu, start)));
-        const scale = Math.sqrt(s2);
+    let start = Math.log(sum / n);
+    DOF_GRID.forEach((nu, k) => {
+        const s2 = nu === Infinity ? sum / n : Math.exp((start = scaleEquationRoot(squares, nu, start)));
         // ln f(x) = ln f(0) + ln of the relative density; the constant once, the rest per deviation.
-        let lik = n * ((0,tails/* studentLogDensity */.WR)(0, nu) + Math.LN2 - Math.log(scale));
-        for (const x of d) {
-            const t = x / scale;
-            lik += nu === Infinity ? -0.5 * t * t : (-(nu + 1) / 2) * Math.log1p((t * t) / nu);
+        let lik = n * (LOG_DENSITY_AT_0[k] + Math.LN2 - 0.5 * Math.log(s2));
+        if (nu === Infinity)
+            lik -= (0.5 * sum) / s2;
+        else {
+            let logs = 0;
+            for (let i = 0; i < n; i++)
+                logs += Math.log1p(squares[i] / (nu * s2));
+            lik -= ((nu + 1) / 2) * logs;
         }
-        out.push({ nu, scale, logLik: lik, n });
-    }
+        out.push({ nu, scale: Math.sqrt(s2), logLik: lik, n });
+    });
     return out;
 }
 
@@ -21728,7 +21806,11 @@ function noiseModel(members) {
     const classes = new Map();
     for (const m of members) {
         const key = m.group.kind === 'alone' ? `alone ${m.candidate.timing ? 'time' : 'other'}` : m.group.name;
-        classes.set(key, [...(classes.get(key) ?? []), m]);
+        const list = classes.get(key);
+        if (list === undefined)
+            classes.set(key, [m]);
+        else
+            list.push(m);
     }
     const out = new Map();
     for (const list of classes.values()) {
@@ -21762,8 +21844,9 @@ function noiseModel(members) {
         list.forEach((m, j) => {
             const p = parts[j];
             const sd = sds[j].sd;
+            // pooledTailShape keeps the positive deviations only: the side's, once the sign turns it positive.
             const side = (sign, profile, whole) => sd > 0
-                ? (pooledTailShape(p.residuals.filter((e) => sign * e > 0).map((e) => (sign * e) / sd), profile, TAIL_PRIOR_WEIGHT) ?? whole)
+                ? (pooledTailShape(p.residuals.map((e) => (sign * e) / sd), profile, TAIL_PRIOR_WEIGHT) ?? whole)
                 : whole;
             const w = side(1, upperProfile, worse);
             const b = side(-1, lowerProfile, better);
@@ -21909,6 +21992,7 @@ function orderMetrics(metrics) {
 
 
 
+
 /**
  * The decision (DESIGN.md "Statistics" and "Real CI noise", issue 13): every metric of the run and
  * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
@@ -21940,8 +22024,9 @@ function runGate(input) {
     const judged = members.filter((m) => !(0,judge/* isLearning */.lz)(m, noise.get(m))).length;
     const share = family ? config.budget / Math.max(1, judged) : undefined;
     const scored = [];
+    const quantile = (0,tails/* rememberedQuantile */.oU)();
     for (const m of members) {
-        const s = (0,judge/* scoreMember */.zG)(m, noise.get(m), share);
+        const s = (0,judge/* scoreMember */.zG)(m, noise.get(m), share, quantile);
         if ('result' in s)
             scored.push(s);
         else
@@ -21955,11 +22040,11 @@ function runGate(input) {
             : config.family === 'bonferroni'
                 ? tails.map(() => share)
                 : fdrLevels(tails, config.budget);
-        scored.forEach((s, i) => metrics.push(decide(s, { adjusted: adjusted[i], level: levels[i], budget: config.budget, share })));
+        scored.forEach((s, i) => metrics.push(decide(s, { adjusted: adjusted[i], level: levels[i], budget: config.budget, share }, quantile)));
     }
     else {
         for (const s of scored)
-            metrics.push(decide(s, undefined));
+            metrics.push(decide(s, undefined, quantile));
     }
     holdEpisodes(members, metrics, shared);
     const verdict = decideVerdict(metrics, shared, input.accepted === true);
@@ -22098,7 +22183,7 @@ function combinedDof(tail, estimation) {
  * start). `level` is the tail level the detectable is computed at (the Bonferroni share of the
  * budget under family control), or undefined to use the cutoff.
  */
-function scoreMember(m, noise, level) {
+function scoreMember(m, noise, level, quantile) {
     const c = m.candidate;
     const { settings } = c;
     const centreRaw = c.log ? Math.exp(m.centre) : m.centre;
@@ -22183,12 +22268,12 @@ function scoreMember(m, noise, level) {
         result.note = { kind: 'within-tolerance', tolerance: settings.tolerance };
     const threshold = level === undefined
         ? (0,tails/* cutoffT */.cZ)(settings.cutoff, worse.nu)
-        : (0,tails/* studentUpperQuantile */.br)(Math.min(0.5, both ? level / 2 : level), worse.nu);
-    const shift = detectableShift(threshold * worse.scale, better, DETECT_POWER, tails/* studentUpperQuantile */.br);
+        : quantile(Math.min(0.5, both ? level / 2 : level), worse.nu);
+    const shift = detectableShift(threshold * worse.scale, better, DETECT_POWER, quantile);
     result.detectable = Math.max(relativeShift(shift, c.log), tolerance);
-    const limit = limitShift(noise, level, settings.cutoff, both);
+    const limit = limitShift(noise, level, settings.cutoff, both, quantile);
     if (shift > 1.1 * limit) {
-        const runs = runsToReach(noise, level, settings.cutoff, both, 1.1 * limit);
+        const runs = runsToReach(noise, level, settings.cutoff, both, 1.1 * limit, quantile);
         result.noise = {
             betweenRuns: noise.sd,
             moreRuns: { runs, detectable: Math.max(relativeShift(limit, c.log), tolerance) },
@@ -22223,23 +22308,21 @@ function relativeShift(shift, log) {
     return log ? Math.expm1(shift) : shift;
 }
 /** The detectable shift with unlimited runs: no centre or spread uncertainty left. */
-function limitShift(noise, level, cutoff, both) {
-    return shiftFor({ ...noise, dof: Infinity }, 1, level, cutoff, both);
+function limitShift(noise, level, cutoff, both, quantile) {
+    return shiftFor({ ...noise, dof: Infinity }, 1, level, cutoff, both, quantile);
 }
-function shiftFor(noise, centreFactor, level, cutoff, both) {
+function shiftFor(noise, centreFactor, level, cutoff, both, quantile) {
     const worse = side(noise.worse, noise, centreFactor);
     const better = side(noise.better, noise, centreFactor);
-    const threshold = level === undefined
-        ? (0,tails/* cutoffT */.cZ)(cutoff, worse.nu)
-        : (0,tails/* studentUpperQuantile */.br)(Math.min(0.5, both ? level / 2 : level), worse.nu);
-    return detectableShift(threshold * worse.scale, better, DETECT_POWER, tails/* studentUpperQuantile */.br);
+    const threshold = level === undefined ? (0,tails/* cutoffT */.cZ)(cutoff, worse.nu) : quantile(Math.min(0.5, both ? level / 2 : level), worse.nu);
+    return detectableShift(threshold * worse.scale, better, DETECT_POWER, quantile);
 }
 /**
  * How many more baseline runs bring the detectable shift to `goal`: the level's runs and the
  * spread's degrees of freedom grow with them (doubling, then halving back; at most 10,000).
  */
-function runsToReach(noise, level, cutoff, both, goal) {
-    const at = (extra) => shiftFor({ ...noise, dof: noise.dof + extra, levelRuns: noise.levelRuns + extra }, Math.sqrt(1 + 1 / (noise.levelRuns + extra)), level, cutoff, both);
+function runsToReach(noise, level, cutoff, both, goal, quantile) {
+    const at = (extra) => shiftFor({ ...noise, dof: noise.dof + extra, levelRuns: noise.levelRuns + extra }, Math.sqrt(1 + 1 / (noise.levelRuns + extra)), level, cutoff, both, quantile);
     let hi = 1;
     while (at(hi) > goal && hi < 10_000)
         hi *= 2;
@@ -24908,7 +24991,8 @@ function meanAbsoluteDeviation(values, centre) {
 /***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
-/* harmony export */   J: () => (/* binding */ median)
+/* harmony export */   JZ: () => (/* binding */ median),
+/* harmony export */   Te: () => (/* binding */ medianInPlace)
 /* harmony export */ });
 /* unused harmony export medianAbsoluteDeviation */
 /* harmony import */ var simple_statistics__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(5521);
@@ -24941,6 +25025,70 @@ function median(values) {
  */
 function medianAbsoluteDeviation(values) {
     return ssMad(checkFinite(values));
+}
+/**
+ * Median of the first `count` entries of a scratch buffer of finite values, which it reorders
+ * (simple-statistics' quickselect, O(count)). For the move polish, which takes thousands of
+ * medians per check over buffers it reuses: simple-statistics' median copies its input.
+ * @example medianInPlace([3, 1, 2, 10, 99], 4) // 2.5
+ */
+function medianInPlace(scratch, count) {
+    if (count === 0)
+        return Number.NaN;
+    // quickselect reads a right end of 0 as "the whole array", so one value is answered here.
+    if (count === 1)
+        return scratch[0];
+    const half = count >> 1;
+    (0,simple_statistics__WEBPACK_IMPORTED_MODULE_0__/* .quickselect */ .eu)(scratch, half, 0, count - 1);
+    if (count % 2 === 1)
+        return scratch[half];
+    // quickselect leaves the smaller values below `half`: the largest of them is the other middle one.
+    let below = scratch[0];
+    for (let i = 1; i < half; i++)
+        if (scratch[i] > below)
+            below = scratch[i];
+    return (below + scratch[half]) / 2;
+}
+
+
+/***/ }),
+
+/***/ 1094:
+/***/ ((__unused_webpack_module, __webpack_exports__, __nccwpck_require__) => {
+
+/* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
+/* harmony export */   Z: () => (/* binding */ normalQuantile)
+/* harmony export */ });
+/* harmony import */ var _special_normal_js__WEBPACK_IMPORTED_MODULE_0__ = __nccwpck_require__(2986);
+
+/**
+ * The standard normal quantile: the z with P(Z <= z) = p, for 0 < p < 1.
+ * Starts from Abramowitz & Stegun 26.2.23 (rational approximation, error below 4.5e-4) on the
+ * smaller tail q = min(p, 1 - p), then takes Newton steps on Q(z) = q, with Q the directly
+ * computed upper tail (no 1 - cdf cancellation), so the result is good to a few ulps across the
+ * whole range. The steps are bounded (A&S's start is within 4.5e-4, Newton doubles the digits).
+ * Throws RangeError unless 0 < p < 1.
+ * @example normalQuantile(0.975) // ≈ 1.959963984540054
+ */
+function normalQuantile(p) {
+    if (!(p > 0 && p < 1))
+        throw new RangeError(`a normal quantile needs a probability between 0 and 1, got ${p}`);
+    if (p === 0.5)
+        return 0;
+    const q = Math.min(p, 1 - p);
+    const t = Math.sqrt(-2 * Math.log(q));
+    let z = t - (2.515517 + 0.802853 * t + 0.010328 * t * t) / (1 + 1.432788 * t + 0.189269 * t * t + 0.001308 * t ** 3);
+    for (let step = 0; step < 6; step++) {
+        const density = (0,_special_normal_js__WEBPACK_IMPORTED_MODULE_0__/* .normalDensity */ .kC)(z, 0, 1);
+        if (!(density > 0))
+            break;
+        // Newton on Q(z) - q, with Q' = -phi; a relative update keeps the far tail exact too.
+        const next = z + ((0,_special_normal_js__WEBPACK_IMPORTED_MODULE_0__/* .normalUpperTail */ .IL)(z) - q) / density;
+        if (next === z)
+            break;
+        z = next;
+    }
+    return p < 0.5 ? -z : z;
 }
 
 
@@ -25364,16 +25512,18 @@ __nccwpck_require__.d(__webpack_exports__, {
   yp: () => (/* binding */ cutoffLevel),
   DE: () => (/* binding */ cutoffSigma),
   cZ: () => (/* binding */ cutoffT),
+  oU: () => (/* binding */ rememberedQuantile),
   WR: () => (/* binding */ studentLogDensity),
   AL: () => (/* binding */ studentRelativeDensity),
-  gq: () => (/* binding */ studentTail),
-  br: () => (/* binding */ studentUpperQuantile)
+  gq: () => (/* binding */ studentTail)
 });
 
-// UNUSED EXPORTS: normalTail
+// UNUSED EXPORTS: normalTail, studentUpperQuantile
 
 // EXTERNAL MODULE: ./src/model/special/log-gamma.ts
 var log_gamma = __nccwpck_require__(2231);
+// EXTERNAL MODULE: ./src/model/normal-quantile.ts
+var normal_quantile = __nccwpck_require__(1094);
 // EXTERNAL MODULE: ./src/model/special/normal.ts + 1 modules
 var normal = __nccwpck_require__(2986);
 // EXTERNAL MODULE: ./src/model/special/incomplete-beta.ts
@@ -25407,6 +25557,7 @@ function studentUpperTail(t, nu) {
 }
 
 ;// CONCATENATED MODULE: ./src/model/tails.ts
+
 
 
 
@@ -25447,7 +25598,9 @@ function studentTail(t, nu, side) {
  * The t >= 0 whose upper tail P(T > t) is p (0 < p <= 1/2): the Student-t quantile 1 - p, by
  * Newton's method on ln P(T > t) - ln p (slope -f(t) / P(T > t), f the density), kept inside a
  * bracket that halves whenever a step would leave it; to 1e-12 relative, for any nu > 0 and any p
- * down to the smallest double. Throws RangeError otherwise.
+ * down to the smallest double. It starts from the Cornish-Fisher expansion of t in the normal
+ * quantile z (Abramowitz & Stegun 26.7.5, three terms), within a few percent from nu = 3 on, so a
+ * few steps reach the root; the normal's own quantile for nu = Infinity. Throws RangeError otherwise.
  * @example studentUpperQuantile(0.025, 10) // ≈ 2.228 (standard t table)
  */
 function studentUpperQuantile(p, nu) {
@@ -25457,28 +25610,55 @@ function studentUpperQuantile(p, nu) {
         throw new RangeError(`a Student-t needs degrees of freedom above 0, got ${nu}`);
     if (p === 0.5)
         return 0;
+    const z = -(0,normal_quantile/* normalQuantile */.Z)(p);
+    if (nu === Infinity)
+        return z;
     const target = Math.log(p);
-    const gap = (t) => Math.log(studentUpperTail(t, nu)) - target;
+    const z2 = z * z;
+    const expansion = z +
+        (z * (z2 + 1)) / (4 * nu) +
+        (z * (5 * z2 * z2 + 16 * z2 + 3)) / (96 * nu * nu) +
+        (z * (3 * z2 * z2 * z2 + 19 * z2 * z2 + 17 * z2 - 15)) / (384 * nu * nu * nu);
+    // The t tail lies above the normal's, so t >= z; a start the bracket cannot use falls back to 2z.
+    let t = Number.isFinite(expansion) && expansion > z ? expansion : 2 * z;
     let lo = 0;
-    let hi = 1;
-    while (gap(hi) > 0 && hi < 1e300)
-        hi *= 4;
-    let t = hi / 2;
-    for (let i = 0; i < 200; i++) {
-        const g = gap(t);
+    let hi = Infinity;
+    for (let i = 0; i < 400; i++) {
+        const logTail = Math.log(studentUpperTail(t, nu));
+        const g = logTail - target;
+        if (g === 0)
+            return t;
         if (g > 0)
             lo = t;
         else
             hi = t;
-        const slope = -Math.exp(studentLogDensity(t, nu) - Math.log(studentUpperTail(t, nu)));
+        const slope = -Math.exp(studentLogDensity(t, nu) - logTail);
         let next = t - g / slope;
         if (!(next > lo && next < hi))
-            next = (lo + hi) / 2;
+            next = hi === Infinity ? 4 * t : (lo + hi) / 2;
         if (Math.abs(next - t) <= 1e-12 * next)
             return next;
         t = next;
     }
     return t;
+}
+/**
+ * studentUpperQuantile remembering its answers: one check asks for the same few (level, nu)
+ * pairs for every metric (thousands of root searches otherwise). A fresh memory per call, so
+ * the core keeps no state between checks.
+ * @example const q = rememberedQuantile(); q(0.025, 10) === q(0.025, 10) // true, one search
+ */
+function rememberedQuantile() {
+    const known = new Map();
+    return (p, nu) => {
+        let byNu = known.get(p);
+        if (byNu === undefined)
+            known.set(p, (byNu = new Map()));
+        let t = byNu.get(nu);
+        if (t === undefined)
+            byNu.set(nu, (t = studentUpperQuantile(p, nu)));
+        return t;
+    };
 }
 /**
  * Relative density of a Student-t with nu degrees of freedom at t, f(t) / f(0) =
@@ -41441,9 +41621,10 @@ const parse = function (data, opts = {}) {
 
 /* harmony export */ __nccwpck_require__.d(__webpack_exports__, {
 /* harmony export */   JZ: () => (/* binding */ median),
+/* harmony export */   eu: () => (/* binding */ quickselect),
 /* harmony export */   hK: () => (/* binding */ medianAbsoluteDeviation)
 /* harmony export */ });
-/* unused harmony exports BayesianClassifier, PerceptronModel, addToMean, approxEqual, average, averageSimple, bayesian, bernoulliDistribution, binomialDistribution, bisect, chiSquaredDistributionTable, chiSquaredGoodnessOfFit, chunk, ckmeans, coefficientOfVariation, combinations, combinationsReplacement, combineMeans, combineVariances, cumulativeStdLogisticProbability, cumulativeStdNormalProbability, epsilon, equalIntervalBreaks, erf, errorFunction, extent, extentSorted, factorial, gamma, gammaln, geometricMean, harmonicMean, interquartileRange, inverseErrorFunction, iqr, jenks, kMeansCluster, kde, kernelDensityEstimation, linearRegression, linearRegressionLine, logAverage, logit, mad, max, maxSorted, mean, meanSimple, medianSorted, min, minSorted, mode, modeFast, modeSorted, normalDistribution, numericSort, perceptron, permutationTest, permutationsHeap, poissonDistribution, probit, product, quantile, quantileRank, quantileRankSorted, quantileSorted, quickselect, rSquared, relativeError, rms, rootMeanSquare, sample, sampleCorrelation, sampleCovariance, sampleKurtosis, sampleRankCorrelation, sampleSkewness, sampleStandardDeviation, sampleVariance, sampleWithReplacement, scaledRootMeanSquare, shuffle, shuffleInPlace, sign, silhouette, silhouetteMetric, standardDeviation, standardNormalTable, subtractFromMean, sum, sumNthPowerDeviations, sumSimple, tTest, tTestTwoSample, uniqueCountSorted, variance, weightedLinearRegression, weightedMean, weightedQuantile, weightedStandardDeviation, weightedVariance, wilcoxonRankSum, zScore */
+/* unused harmony exports BayesianClassifier, PerceptronModel, addToMean, approxEqual, average, averageSimple, bayesian, bernoulliDistribution, binomialDistribution, bisect, chiSquaredDistributionTable, chiSquaredGoodnessOfFit, chunk, ckmeans, coefficientOfVariation, combinations, combinationsReplacement, combineMeans, combineVariances, cumulativeStdLogisticProbability, cumulativeStdNormalProbability, epsilon, equalIntervalBreaks, erf, errorFunction, extent, extentSorted, factorial, gamma, gammaln, geometricMean, harmonicMean, interquartileRange, inverseErrorFunction, iqr, jenks, kMeansCluster, kde, kernelDensityEstimation, linearRegression, linearRegressionLine, logAverage, logit, mad, max, maxSorted, mean, meanSimple, medianSorted, min, minSorted, mode, modeFast, modeSorted, normalDistribution, numericSort, perceptron, permutationTest, permutationsHeap, poissonDistribution, probit, product, quantile, quantileRank, quantileRankSorted, quantileSorted, rSquared, relativeError, rms, rootMeanSquare, sample, sampleCorrelation, sampleCovariance, sampleKurtosis, sampleRankCorrelation, sampleSkewness, sampleStandardDeviation, sampleVariance, sampleWithReplacement, scaledRootMeanSquare, shuffle, shuffleInPlace, sign, silhouette, silhouetteMetric, standardDeviation, standardNormalTable, subtractFromMean, sum, sumNthPowerDeviations, sumSimple, tTest, tTestTwoSample, uniqueCountSorted, variance, weightedLinearRegression, weightedMean, weightedQuantile, weightedStandardDeviation, weightedVariance, wilcoxonRankSum, zScore */
 /**
  * When adding a new value to a list, one does not have to necessary
  * recompute the mean of the list in linear time. They can instead use

@@ -1,4 +1,4 @@
-import { studentRelativeDensity, studentUpperQuantile } from '../model/tails.js';
+import { studentRelativeDensity, type UpperQuantile } from '../model/tails.js';
 import type { Scored } from './judge.js';
 import type { MetricResult } from './report.js';
 
@@ -19,9 +19,9 @@ export interface FamilyFigures {
  * Under family control the result also carries the effective cutoff: the relative density at
  * which the worse side's tail equals the metric's level, so the density idea stays visible.
  * Returns a new result.
- * @example decide(scored, undefined).status // 'regressed'
+ * @example decide(scored, undefined, rememberedQuantile()).status // 'regressed'
  */
-export function decide(s: Scored, family: FamilyFigures | undefined): MetricResult {
+export function decide(s: Scored, family: FamilyFigures | undefined, quantile: UpperQuantile): MetricResult {
   const result: MetricResult = { ...s.result };
   const r = result.relativeDensity ?? 1;
   let worse: boolean;
@@ -33,7 +33,7 @@ export function decide(s: Scored, family: FamilyFigures | undefined): MetricResu
     result.adjusted = family.adjusted;
     result.level = family.level;
     const level = Math.min(0.5, s.both ? family.level / 2 : family.level);
-    result.effectiveCutoff = studentRelativeDensity(studentUpperQuantile(level, s.worse.nu), s.worse.nu);
+    result.effectiveCutoff = studentRelativeDensity(quantile(level, s.worse.nu), s.worse.nu);
     worse = family.adjusted <= family.budget && (s.move > 0 || (s.both && s.move !== 0));
     better = s.betterTail < family.share && s.move < 0 && !s.both;
   }

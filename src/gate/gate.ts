@@ -2,6 +2,7 @@ import type { Config } from '../config/types.js';
 import type { History } from '../history/history.js';
 import type { Run } from '../inputs/run.js';
 import { adjustTails, holmLevels } from '../model/family.js';
+import { rememberedQuantile } from '../model/tails.js';
 import { sortMetrics } from './candidates.js';
 import { decide } from './decide.js';
 import { formGroups, takeApart, type MemberMoves } from './moves.js';
@@ -53,8 +54,9 @@ export function runGate(input: GateInput): Report {
   const judged = members.filter((m) => !isLearning(m, noise.get(m)!)).length;
   const share = family ? config.budget / Math.max(1, judged) : undefined;
   const scored: Scored[] = [];
+  const quantile = rememberedQuantile();
   for (const m of members) {
-    const s = scoreMember(m, noise.get(m)!, share);
+    const s = scoreMember(m, noise.get(m)!, share, quantile);
     if ('result' in s) scored.push(s);
     else metrics.push(s);
   }
@@ -68,10 +70,10 @@ export function runGate(input: GateInput): Report {
           ? tails.map(() => share)
           : fdrLevels(tails, config.budget);
     scored.forEach((s, i) =>
-      metrics.push(decide(s, { adjusted: adjusted[i]!, level: levels[i]!, budget: config.budget, share })),
+      metrics.push(decide(s, { adjusted: adjusted[i]!, level: levels[i]!, budget: config.budget, share }, quantile)),
     );
   } else {
-    for (const s of scored) metrics.push(decide(s, undefined));
+    for (const s of scored) metrics.push(decide(s, undefined, quantile));
   }
   holdEpisodes(members, metrics, shared);
   const verdict = decideVerdict(metrics, shared, input.accepted === true);

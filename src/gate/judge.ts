@@ -1,11 +1,5 @@
 import { detectableShift } from '../model/detectable.js';
-import {
-  cutoffT,
-  studentLogDensity,
-  studentRelativeDensity,
-  studentTail,
-  studentUpperQuantile,
-} from '../model/tails.js';
+import { cutoffT, studentLogDensity, studentRelativeDensity, studentTail, type UpperQuantile } from '../model/tails.js';
 import type { TailShape } from '../model/tail-shape.js';
 import type { MemberMoves } from './moves.js';
 import type { MemberNoise } from './noise.js';
@@ -64,7 +58,12 @@ export function combinedDof(tail: number, estimation: number): number {
  * start). `level` is the tail level the detectable is computed at (the Bonferroni share of the
  * budget under family control), or undefined to use the cutoff.
  */
-export function scoreMember(m: MemberMoves, noise: MemberNoise, level: number | undefined): Scored | MetricResult {
+export function scoreMember(
+  m: MemberMoves,
+  noise: MemberNoise,
+  level: number | undefined,
+  quantile: UpperQuantile,
+): Scored | MetricResult {
   const c = m.candidate;
   const { settings } = c;
   const centreRaw = c.log ? Math.exp(m.centre) : m.centre;
@@ -139,12 +138,12 @@ export function scoreMember(m: MemberMoves, noise: MemberNoise, level: number | 
   const threshold =
     level === undefined
       ? cutoffT(settings.cutoff, worse.nu)
-      : studentUpperQuantile(Math.min(0.5, both ? level / 2 : level), worse.nu);
-  const shift = detectableShift(threshold * worse.scale, better, DETECT_POWER, studentUpperQuantile);
+      : quantile(Math.min(0.5, both ? level / 2 : level), worse.nu);
+  const shift = detectableShift(threshold * worse.scale, better, DETECT_POWER, quantile);
   result.detectable = Math.max(relativeShift(shift, c.log), tolerance);
-  const limit = limitShift(noise, level, settings.cutoff, both);
+  const limit = limitShift(noise, level, settings.cutoff, both, quantile);
   if (shift > 1.1 * limit) {
-    const runs = runsToReach(noise, level, settings.cutoff, both, 1.1 * limit);
+    const runs = runsToReach(noise, level, settings.cutoff, both, 1.1 * limit, quantile);
     result.noise = {
       betweenRuns: noise.sd,
       moreRuns: { runs, detectable: Math.max(relativeShift(limit, c.log), tolerance) },
@@ -181,8 +180,14 @@ function relativeShift(shift: number, log: boolean): number {
 }
 
 /** The detectable shift with unlimited runs: no centre or spread uncertainty left. */
-function limitShift(noise: MemberNoise, level: number | undefined, cutoff: number, both: boolean): number {
-  return shiftFor({ ...noise, dof: Infinity }, 1, level, cutoff, both);
+function limitShift(
+  noise: MemberNoise,
+  level: number | undefined,
+  cutoff: number,
+  both: boolean,
+  quantile: UpperQuantile,
+): number {
+  return shiftFor({ ...noise, dof: Infinity }, 1, level, cutoff, both, quantile);
 }
 
 function shiftFor(
@@ -191,14 +196,13 @@ function shiftFor(
   level: number | undefined,
   cutoff: number,
   both: boolean,
+  quantile: UpperQuantile,
 ): number {
   const worse = side(noise.worse, noise, centreFactor);
   const better = side(noise.better, noise, centreFactor);
   const threshold =
-    level === undefined
-      ? cutoffT(cutoff, worse.nu)
-      : studentUpperQuantile(Math.min(0.5, both ? level / 2 : level), worse.nu);
-  return detectableShift(threshold * worse.scale, better, DETECT_POWER, studentUpperQuantile);
+    level === undefined ? cutoffT(cutoff, worse.nu) : quantile(Math.min(0.5, both ? level / 2 : level), worse.nu);
+  return detectableShift(threshold * worse.scale, better, DETECT_POWER, quantile);
 }
 
 /**
@@ -211,6 +215,7 @@ function runsToReach(
   cutoff: number,
   both: boolean,
   goal: number,
+  quantile: UpperQuantile,
 ): number {
   const at = (extra: number): number =>
     shiftFor(
@@ -219,6 +224,7 @@ function runsToReach(
       level,
       cutoff,
       both,
+      quantile,
     );
   let hi = 1;
   while (at(hi) > goal && hi < 10_000) hi *= 2;

@@ -2,6 +2,7 @@ import { median } from 'simple-statistics';
 import { groupFor } from '../config/rules.js';
 import type { Config } from '../config/types.js';
 import type { History } from '../history/history.js';
+import { medianInPlace } from '../model/median.js';
 import { medianOfOthers } from '../model/median-of-others.js';
 import type { Candidate } from './candidates.js';
 import { LASTING_RUNS, lastingStart } from './lasting-change.js';
@@ -113,13 +114,6 @@ function deviation(c: Candidate, x: number, centre: number): number {
   return c.sign * (c.log || centre === 0 ? d : d / Math.abs(centre));
 }
 
-/** The level (index into levels) that run i belongs to. */
-function levelOf(levels: readonly number[], i: number): number {
-  let k = 0;
-  while (k + 1 < levels.length && levels[k + 1]! <= i) k++;
-  return k;
-}
-
 /**
  * Takes one group's runs apart into shared and own moves (issue 13 item 3).
  * Rows: the newest `window` runs holding a member; when the caller knows this run's runner and at
@@ -148,6 +142,14 @@ export function takeApart(
     members = changed;
     result = polish(group, members);
   }
+  const states =
+    result.shared !== undefined && group.members.length >= EPISODE_MIN_MEMBERS
+      ? runStates(
+          result.own,
+          result.ownNow,
+          members.map((f) => f.rows),
+        )
+      : undefined;
   const out: MemberMoves[] = group.members.map((c, j) => {
     const m = members[j]!;
     return {
@@ -160,8 +162,8 @@ export function takeApart(
       ownNow: result.ownNow[j]!,
       sharedNow: result.sharedNow[j]!,
       centre: result.centres[j]!.at(-1)!,
-      calm: m.rows.map((i) => result.calm?.get(i) ?? true),
-      calmNow: result.calmNow ?? true,
+      calm: m.rows.map((i) => states?.calm.get(i) ?? true),
+      calmNow: states?.calmNow ?? true,
       ...(runnerMatch === undefined ? {} : { runner: runnerMatch }),
     };
   });
@@ -244,33 +246,64 @@ interface Polished {
   ownNow: number[];
   sharedNow: number[];
   shared?: GroupMoves;
-  /** Calm runs by history index, and whether this run is calm (groups with a shared move only). */
-  calm?: Map<number, boolean>;
-  calmNow?: boolean;
 }
 
 /** Rounds of the median polish: the centres settle in two (Tukey's usual stopping point is a few). */
 const POLISH_ROUNDS = 2;
 
+/** A frame's values on its rows and where each of its levels starts among them. */
+interface FrameValues {
+  values: Float64Array;
+  /** Per level k, the first position in rows of that level; one more entry: rows.length. */
+  bounds: Int32Array;
+}
+
+function frameValues(f: Frame): FrameValues {
+  const values = new Float64Array(f.rows.length);
+  const bounds = new Int32Array(f.levels.length + 1);
+  let k = 0;
+  for (let r = 0; r < f.rows.length; r++) {
+    const i = f.rows[r]!;
+    values[r] = f.candidate.values[i]!;
+    while (k + 1 < f.levels.length && f.levels[k + 1]! <= i) bounds[++k] = r;
+  }
+  while (k < f.levels.length) bounds[++k] = f.rows.length;
+  return { values, bounds };
+}
+
+/**
+ * The median polish of one group. Dense: runs x members deviations in one array and medians of
+ * reused buffers, because a timings group holds every timing of the project (1,000 in the bench)
+ * and is polished on every check.
+ */
 function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
   const n = group.members.length;
+  const framed = frames.map(frameValues);
+  const scratch = new Array<number>(Math.max(frames.length, ...frames.map((f) => f.rows.length))).fill(0);
   // Plain level centres first: the medians of each level's values.
-  const centres = frames.map((f) =>
-    f.levels.map((start, k) => {
-      const end = f.levels[k + 1] ?? Infinity;
-      const inLevel = f.rows.filter((i) => i >= start && i < end).map((i) => f.candidate.values[i]!);
-      return inLevel.length > 0 ? median(inLevel) : Number.NaN;
-    }),
-  );
+  const centres = framed.map(({ values, bounds }) => {
+    const c: number[] = [];
+    for (let k = 0; k + 1 < bounds.length; k++) {
+      for (let r = bounds[k]!; r < bounds[k + 1]!; r++) scratch[r - bounds[k]!] = values[r]!;
+      c.push(medianInPlace(scratch, bounds[k + 1]! - bounds[k]!));
+    }
+    return c;
+  });
   // Fill a level without runs (a mark on the newest run) from the level before: it is learning anyway.
   for (const c of centres) for (let k = 1; k < c.length; k++) if (!Number.isFinite(c[k]!)) c[k] = c[k - 1]!;
-  const rowIndex = [...new Set(frames.flatMap((f) => f.rows))].sort((a, b) => a - b);
-  const held = frames.map((f) => new Set(f.rows));
-  const dev = (j: number, i: number): number => {
-    const f = frames[j]!;
-    const x = f.candidate.values[i]!;
-    if (!Number.isFinite(x) || !held[j]!.has(i)) return Number.NaN;
-    return deviation(f.candidate, x, centres[j]![levelOf(f.levels, i)]!);
+  /** Member j's deviations at each position of its rows. */
+  const devsOf = (j: number): Float64Array => {
+    const { values, bounds } = framed[j]!;
+    const candidate = frames[j]!.candidate;
+    const out = new Float64Array(values.length);
+    for (let k = 0; k + 1 < bounds.length; k++) {
+      const centre = centres[j]![k]!;
+      for (let r = bounds[k]!; r < bounds[k + 1]!; r++) {
+        const x = values[r]!;
+        out[r] = Number.isFinite(x) ? deviation(candidate, x, centre) : Number.NaN;
+      }
+    }
+    return out;
   };
   const devNow = (j: number): number => {
     const f = frames[j]!;
@@ -279,76 +312,101 @@ function polish(group: MoveGroup, frames: readonly Frame[]): Polished {
   if (group.kind === 'alone') {
     return {
       centres,
-      own: frames.map((f, j) => f.rows.map((i) => dev(j, i))),
+      own: frames.map((_, j) => Array.from(devsOf(j))),
       ownNow: frames.map((_, j) => devNow(j)),
       sharedNow: frames.map(() => 0),
     };
   }
   if (group.kind === 'reference') {
     const r = frames.length - 1;
-    const refDev = (i: number): number => dev(r, i) * frames[r]!.candidate.sign;
-    const refNow = devNow(r) * frames[r]!.candidate.sign;
+    const refSign = frames[r]!.candidate.sign;
+    const refDevs = devsOf(r);
+    const refAt = new Map(frames[r]!.rows.map((i, k) => [i, refDevs[k]! * refSign] as const));
+    const refNow = devNow(r) * refSign;
     return {
       centres,
       // The reference itself comes last, with its plain deviations (for its lasting-change check).
       own: [
-        ...frames.slice(0, n).map((f, j) => f.rows.map((i) => dev(j, i) - f.candidate.sign * refDev(i))),
-        frames[r]!.rows.map((i) => dev(r, i)),
+        ...frames.slice(0, n).map((f, j) => {
+          const d = devsOf(j);
+          return f.rows.map((i, k) => d[k]! - f.candidate.sign * (refAt.get(i) ?? Number.NaN));
+        }),
+        Array.from(refDevs),
       ],
       ownNow: frames.slice(0, n).map((f, j) => devNow(j) - f.candidate.sign * refNow),
       sharedNow: frames.slice(0, n).map((f) => f.candidate.sign * refNow),
     };
   }
-  for (let round = 0; round < POLISH_ROUNDS; round++) {
-    const shared = new Map<number, number>();
-    for (const i of rowIndex) {
-      const devs = frames.map((_, j) => dev(j, i)).filter((d) => Number.isFinite(d));
-      if (devs.length > 0) shared.set(i, median(devs));
+  // The runs any member holds, ascending, and each one's row in devs.
+  const end = Math.max(0, ...frames.map((f) => (f.rows.at(-1) ?? -1) + 1));
+  const rowOf = new Int32Array(end).fill(-1);
+  for (const f of frames) for (const i of f.rows) rowOf[i] = 0;
+  const rowIndex: number[] = [];
+  for (let i = 0; i < end; i++) if (rowOf[i] === 0) rowOf[i] = rowIndex.push(i) - 1;
+  const place = frames.map((f) => {
+    const rows = new Int32Array(f.rows.length);
+    for (let r = 0; r < f.rows.length; r++) rows[r] = rowOf[f.rows[r]!]!;
+    return rows;
+  });
+  const m = frames.length;
+  // devs[row * m + j]: member j's deviation in that run, NaN where it has none.
+  const devs = new Float64Array(rowIndex.length * m);
+  const fill = (): void => {
+    devs.fill(Number.NaN);
+    for (let j = 0; j < m; j++) {
+      const d = devsOf(j);
+      const rows = place[j]!;
+      for (let r = 0; r < rows.length; r++) devs[rows[r]! * m + j] = d[r]!;
     }
-    frames.forEach((f, j) => {
-      f.levels.forEach((start, k) => {
-        const end = f.levels[k + 1] ?? Infinity;
+  };
+  /** The median of a run's finite deviations, and how many there are. */
+  const runMedian = (row: number): { median: number; count: number } => {
+    let count = 0;
+    for (let j = row * m; j < (row + 1) * m; j++) if (Number.isFinite(devs[j]!)) scratch[count++] = devs[j]!;
+    return { median: medianInPlace(scratch, count), count };
+  };
+  for (let round = 0; round < POLISH_ROUNDS; round++) {
+    fill();
+    const shared = new Float64Array(rowIndex.length);
+    for (let row = 0; row < rowIndex.length; row++) shared[row] = runMedian(row).median;
+    for (let j = 0; j < m; j++) {
+      const { log, sign } = frames[j]!.candidate;
+      const { values, bounds } = framed[j]!;
+      const rows = place[j]!;
+      for (let k = 0; k + 1 < bounds.length; k++) {
         const c = centres[j]![k]!;
-        const adjusted = f.rows
-          .filter((i) => i >= start && i < end && shared.has(i))
-          .map((i) => {
-            const s = f.candidate.sign * shared.get(i)!;
-            return f.candidate.values[i]! - (f.candidate.log || c === 0 ? s : s * Math.abs(c));
-          });
-        if (adjusted.length > 0) centres[j]![k] = median(adjusted);
-      });
-    });
+        let count = 0;
+        for (let r = bounds[k]!; r < bounds[k + 1]!; r++) {
+          const s = shared[rows[r]!]!;
+          if (Number.isFinite(s)) scratch[count++] = values[r]! - (log || c === 0 ? sign * s : sign * s * Math.abs(c));
+        }
+        if (count > 0) centres[j]![k] = medianInPlace(scratch, count);
+      }
+    }
   }
+  fill();
   const own: number[][] = frames.map((f) => f.rows.map(() => Number.NaN));
-  const position = frames.map((f) => new Map(f.rows.map((i, k) => [i, k] as const)));
+  const next = new Int32Array(m);
   const history_: number[] = [];
-  for (const i of rowIndex) {
-    const devs = frames.map((_, j) => dev(j, i));
-    const others = medianOfOthers(devs);
-    frames.forEach((f, j) => {
-      const k = position[j]!.get(i);
-      if (k !== undefined) own[j]![k] = devs[j]! - others[j]!;
-    });
-    const present = devs.filter((d) => Number.isFinite(d));
-    if (present.length >= 2) history_.push(median(present));
+  for (let row = 0; row < rowIndex.length; row++) {
+    const runDevs = devs.subarray(row * m, (row + 1) * m);
+    const others = medianOfOthers(runDevs);
+    for (let j = 0; j < m; j++) {
+      const r = next[j]!;
+      if (place[j]![r] !== row) continue;
+      own[j]![r] = runDevs[j]! - others[j]!;
+      next[j] = r + 1;
+    }
+    const present = runMedian(row);
+    if (present.count >= 2) history_.push(present.median);
   }
   const nowDevs = frames.map((_, j) => devNow(j));
   const nowOthers = medianOfOthers(nowDevs);
   const ownNow = nowDevs.map((d, j) => d - nowOthers[j]!);
-  const states =
-    n >= EPISODE_MIN_MEMBERS
-      ? runStates(
-          own,
-          ownNow,
-          frames.map((f) => f.rows),
-        )
-      : { calm: new Map<number, boolean>(), calmNow: true };
   return {
     centres,
     own,
     ownNow,
-    calm: states.calm,
-    calmNow: states.calmNow,
     sharedNow: nowOthers,
     shared: { group, history: history_, now: median(nowDevs), members: n },
   };
@@ -388,24 +446,30 @@ function runStates(
   ownNow: readonly number[],
   rows: readonly (readonly number[])[],
 ): { calm: Map<number, boolean>; calmNow: boolean } {
+  const scratch = new Array<number>(Math.max(0, ...own.map((o) => o.length))).fill(0);
   const scales = own.map((o) => {
-    const finite = o.filter((x) => Number.isFinite(x));
-    if (finite.length < 3) return Number.NaN;
-    const c = median(finite);
-    return 1.4826 * median(finite.map((x) => Math.abs(x - c)));
+    let count = 0;
+    for (const x of o) if (Number.isFinite(x)) scratch[count++] = x;
+    if (count < 3) return Number.NaN;
+    const c = medianInPlace(scratch, count);
+    for (let k = 0; k < count; k++) scratch[k] = Math.abs(scratch[k]! - c);
+    return 1.4826 * medianInPlace(scratch, count);
   });
   const far = (x: number, j: number): boolean =>
     Number.isFinite(x) && scales[j]! > 0 && Math.abs(x) > EPISODE_SD * scales[j]!;
   const need = Math.max(2, Math.ceil(own.length / EPISODE_PER));
-  const counts = new Map<number, number>();
+  // Far members per run, by history index; -1: a run no member holds.
+  const counts = new Int32Array(Math.max(0, ...rows.map((r) => (r.at(-1) ?? -1) + 1))).fill(-1);
   own.forEach((o, j) =>
     o.forEach((x, k) => {
       const i = rows[j]![k]!;
-      counts.set(i, (counts.get(i) ?? 0) + (far(x, j) ? 1 : 0));
+      counts[i] = Math.max(0, counts[i]!) + (far(x, j) ? 1 : 0);
     }),
   );
   const calm = new Map<number, boolean>();
-  for (const [i, n] of counts) calm.set(i, n < need);
+  counts.forEach((n, i) => {
+    if (n >= 0) calm.set(i, n < need);
+  });
   const nowCount = ownNow.filter((x, j) => far(x, j)).length;
   return { calm, calmNow: nowCount < need };
 }

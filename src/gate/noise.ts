@@ -55,7 +55,9 @@ export function noiseModel(members: readonly MemberMoves[]): Map<MemberMoves, Me
   const classes = new Map<string, MemberMoves[]>();
   for (const m of members) {
     const key = m.group.kind === 'alone' ? `alone ${m.candidate.timing ? 'time' : 'other'}` : m.group.name;
-    classes.set(key, [...(classes.get(key) ?? []), m]);
+    const list = classes.get(key);
+    if (list === undefined) classes.set(key, [m]);
+    else list.push(m);
   }
   const out = new Map<MemberMoves, MemberNoise>();
   for (const list of classes.values()) {
@@ -88,10 +90,11 @@ export function noiseModel(members: readonly MemberMoves[]): Map<MemberMoves, Me
     list.forEach((m, j) => {
       const p = parts[j]!;
       const sd = sds[j]!.sd;
+      // pooledTailShape keeps the positive deviations only: the side's, once the sign turns it positive.
       const side = (sign: 1 | -1, profile: TailFit[] | undefined, whole: TailShape): TailShape =>
         sd > 0
           ? (pooledTailShape(
-              p.residuals.filter((e) => sign * e > 0).map((e) => (sign * e) / sd),
+              p.residuals.map((e) => (sign * e) / sd),
               profile,
               TAIL_PRIOR_WEIGHT,
             ) ?? whole)

@@ -17,12 +17,15 @@ export interface ChangePointOptions {
  * Robust (1.4826 MAD / sqrt 2), falling back to the root mean square of the differences for
  * quantised data whose MAD is 0.
  */
-export function differenceSigma(values: readonly number[]): number {
-  const diffs = values.slice(1).map((x, i) => x - values[i]!);
-  if (diffs.length === 0) return 0;
+export function differenceSigma(values: ArrayLike<number>): number {
+  if (values.length < 2) return 0;
+  const diffs = new Array<number>(values.length - 1);
+  for (let i = 1; i < values.length; i++) diffs[i - 1] = values[i]! - values[i - 1]!;
   const robust = (MAD_TO_SIGMA * medianAbsoluteDeviation(diffs)) / Math.SQRT2;
   if (robust > 0) return robust;
-  return Math.sqrt(diffs.reduce((sum, d) => sum + d * d, 0) / (2 * diffs.length));
+  let squares = 0;
+  for (const d of diffs) squares += d * d;
+  return Math.sqrt(squares / (2 * diffs.length));
 }
 
 /**
@@ -42,7 +45,7 @@ export function differenceSigma(values: readonly number[]): number {
  * Throws RangeError on non-finite values or bad options.
  * @example detectChangePoints([...Array(40).fill(100), ...Array(30).fill(110)].map((x, i) => x + (i % 2) * 0.5)) // [40]
  */
-export function detectChangePoints(values: readonly number[], options: ChangePointOptions = {}): number[] {
+export function detectChangePoints(values: ArrayLike<number>, options: ChangePointOptions = {}): number[] {
   const n = values.length;
   const minSegment = options.minSegment ?? 5;
   if (!Number.isInteger(minSegment) || minSegment < 1) {
@@ -52,31 +55,30 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
   if (options.penalty !== undefined && !(options.penalty >= 0 && Number.isFinite(options.penalty))) {
     throw new RangeError(`penalty must be a finite number, 0 or more, got ${options.penalty}`);
   }
-  values.forEach((x, i) => {
-    if (!Number.isFinite(x)) throw new RangeError(`value ${x} at position ${i + 1} is not a finite number`);
-  });
+  for (let i = 0; i < n; i++) {
+    if (!Number.isFinite(values[i]!))
+      throw new RangeError(`value ${values[i]} at position ${i + 1} is not a finite number`);
+  }
   if (n < 2 * minSegment) return [];
   const sigma = differenceSigma(values);
   if (!(sigma > 0)) return [];
-  const centre = median([...values]);
-  const z = values.map((x) => Math.max(-clip, Math.min(clip, (x - centre) / sigma)));
+  const centre = median(Array.from(values));
+  const z = new Float64Array(n);
+  for (let i = 0; i < n; i++) z[i] = Math.max(-clip, Math.min(clip, (values[i]! - centre) / sigma));
   let noise = 0;
   for (let i = 1; i < n; i++) noise += Math.min(clip * clip, (z[i]! - z[i - 1]!) ** 2 / 2);
   noise = Math.max(noise / (n - 1), 1e-12);
   const penalty = (options.penalty ?? 3 * Math.log(n)) * noise;
-  const s1 = [0];
-  const s2 = [0];
+  // Prefix sums: the cost of values a..b-1 is s2 - s1^2 / length over that stretch.
+  const s1 = new Float64Array(n + 1);
+  const s2 = new Float64Array(n + 1);
   for (let i = 0; i < n; i++) {
-    s1.push(s1[i]! + z[i]!);
-    s2.push(s2[i]! + z[i]! * z[i]!);
+    s1[i + 1] = s1[i]! + z[i]!;
+    s2[i + 1] = s2[i]! + z[i]! * z[i]!;
   }
-  const cost = (a: number, b: number): number => {
-    const s = s1[b]! - s1[a]!;
-    return Math.max(0, s2[b]! - s2[a]! - (s * s) / (b - a));
-  };
   // best[t]: the least total for the first t values; previous[t]: where its last segment starts.
-  const best = new Array<number>(n + 1).fill(Infinity);
-  const previous = new Array<number>(n + 1).fill(0);
+  const best = new Float64Array(n + 1).fill(Infinity);
+  const previous = new Int32Array(n + 1);
   best[0] = -penalty;
   const candidates: number[] = [];
   for (let end = minSegment; end <= n; end++) {
@@ -84,11 +86,12 @@ export function detectChangePoints(values: readonly number[], options: ChangePoi
     if (fresh === 0 || fresh >= minSegment) candidates.push(fresh);
     let value = Infinity;
     let start = 0;
-    for (const s of candidates) {
-      const total = best[s]! + cost(s, end) + penalty;
+    for (const a of candidates) {
+      const sum = s1[end]! - s1[a]!;
+      const total = best[a]! + Math.max(0, s2[end]! - s2[a]! - (sum * sum) / (end - a)) + penalty;
       if (total < value) {
         value = total;
-        start = s;
+        start = a;
       }
     }
     best[end] = value;

@@ -13,25 +13,28 @@ export interface TailShape {
 /** The degrees of freedom tried, heaviest first; the tails of 60 runs cannot tell finer steps apart. */
 export const DOF_GRID: readonly number[] = [1, 1.5, 2, 3, 4, 6, 10, 15, 30, 100, Infinity];
 
+/** ln f_nu(0) of each nu of DOF_GRID: the likelihood's constant, asked for on every profile. */
+const LOG_DENSITY_AT_0: readonly number[] = DOF_GRID.map((nu) => studentLogDensity(0, nu));
+
 /**
  * The root u = ln scale^2 of the t likelihood's scale equation mean((nu + 1) d^2 / (nu e^u + d^2)) = 1
  * (the fixed point of the EM weights below), by Newton's method on u: the left side falls
- * monotonically in u, so from a nearby start a few steps reach 1e-9.
+ * monotonically in u, so from a nearby start a few steps reach 1e-9. With w = d^2 / (nu e^u + d^2)
+ * the slope of each term is -(nu + 1) w (1 - w): one division per deviation.
  */
-function scaleEquationRoot(d: readonly number[], nu: number, start: number): number {
+function scaleEquationRoot(squares: Float64Array, nu: number, start: number): number {
   let u = start;
   for (let it = 0; it < 40; it++) {
-    const e = Math.exp(u);
+    const e = nu * Math.exp(u);
     let h = 0;
     let slope = 0;
-    for (const x of d) {
-      const x2 = x * x;
-      const q = nu * e + x2;
-      h += ((nu + 1) * x2) / q;
-      slope -= ((nu + 1) * x2 * nu * e) / (q * q);
+    for (let i = 0; i < squares.length; i++) {
+      const w = squares[i]! / (e + squares[i]!);
+      h += w;
+      slope -= w * (1 - w);
     }
-    h = h / d.length - 1;
-    slope /= d.length;
+    h = ((nu + 1) * h) / squares.length - 1;
+    slope = ((nu + 1) * slope) / squares.length;
     const step = Math.max(-2, Math.min(2, -h / slope));
     u += step;
     if (Math.abs(step) < 1e-9) break;
@@ -53,7 +56,7 @@ function scaleEquationRoot(d: readonly number[], nu: number, start: number): num
  * left out. Undefined with fewer than 3 such deviations or none above 0. O(n x grid x EM steps).
  * @example halfTailShape(Array.from({ length: 400 }, (_, i) => ...gaussian draws)).nu // large
  */
-export function halfTailShape(deviations: readonly number[]): TailShape | undefined {
+export function halfTailShape(deviations: ArrayLike<number>): TailShape | undefined {
   const profile = halfTailProfile(deviations);
   if (profile === undefined) return undefined;
   return bestOf(profile, () => 0);
@@ -94,7 +97,7 @@ export function bestOf(profile: readonly TailFit[], prior: (k: number) => number
  * @example pooledTailShape(ownSide, halfTailProfile(classSide), 3)?.nu // 4
  */
 export function pooledTailShape(
-  own: readonly number[],
+  own: ArrayLike<number>,
   pooled: readonly TailFit[] | undefined,
   weight: number,
 ): TailShape | undefined {
@@ -108,26 +111,31 @@ export function pooledTailShape(
 }
 
 /** The profile of halfTailShape: every nu of DOF_GRID with its scale and log-likelihood. */
-export function halfTailProfile(deviations: readonly number[]): TailFit[] | undefined {
-  const d = deviations.filter((x) => x > 0 && Number.isFinite(x));
-  const n = d.length;
+export function halfTailProfile(deviations: ArrayLike<number>): TailFit[] | undefined {
+  let n = 0;
+  for (let i = 0; i < deviations.length; i++) if (deviations[i]! > 0 && Number.isFinite(deviations[i]!)) n++;
   if (n < 3) return undefined;
-  let squares = 0;
-  for (const x of d) squares += x * x;
-  if (!(squares > 0)) return undefined;
+  const squares = new Float64Array(n);
+  let sum = 0;
+  for (let i = 0, k = 0; i < deviations.length; i++) {
+    const x = deviations[i]!;
+    if (x > 0 && Number.isFinite(x)) sum += squares[k++] = x * x;
+  }
+  if (!(sum > 0)) return undefined;
   const out: TailFit[] = [];
   // Each nu's scale starts from the one before it (a heavier nu), which is close.
-  let start = Math.log(squares / n);
-  for (const nu of DOF_GRID) {
-    const s2 = nu === Infinity ? squares / n : Math.exp((start = scaleEquationRoot(d, nu, start)));
-    const scale = Math.sqrt(s2);
+  let start = Math.log(sum / n);
+  DOF_GRID.forEach((nu, k) => {
+    const s2 = nu === Infinity ? sum / n : Math.exp((start = scaleEquationRoot(squares, nu, start)));
     // ln f(x) = ln f(0) + ln of the relative density; the constant once, the rest per deviation.
-    let lik = n * (studentLogDensity(0, nu) + Math.LN2 - Math.log(scale));
-    for (const x of d) {
-      const t = x / scale;
-      lik += nu === Infinity ? -0.5 * t * t : (-(nu + 1) / 2) * Math.log1p((t * t) / nu);
+    let lik = n * (LOG_DENSITY_AT_0[k]! + Math.LN2 - 0.5 * Math.log(s2));
+    if (nu === Infinity) lik -= (0.5 * sum) / s2;
+    else {
+      let logs = 0;
+      for (let i = 0; i < n; i++) logs += Math.log1p(squares[i]! / (nu * s2));
+      lik -= ((nu + 1) / 2) * logs;
     }
-    out.push({ nu, scale, logLik: lik, n });
-  }
+    out.push({ nu, scale: Math.sqrt(s2), logLik: lik, n });
+  });
   return out;
 }

@@ -1,4 +1,5 @@
 import { logGamma } from './special/log-gamma.js';
+import { normalQuantile } from './normal-quantile.js';
 import { normalUpperTail } from './special/normal.js';
 import { studentTwoSidedTail, studentUpperTail } from './special/student-t.js';
 
@@ -37,30 +38,61 @@ export function studentTail(t: number, nu: number, side: Side): number {
  * The t >= 0 whose upper tail P(T > t) is p (0 < p <= 1/2): the Student-t quantile 1 - p, by
  * Newton's method on ln P(T > t) - ln p (slope -f(t) / P(T > t), f the density), kept inside a
  * bracket that halves whenever a step would leave it; to 1e-12 relative, for any nu > 0 and any p
- * down to the smallest double. Throws RangeError otherwise.
+ * down to the smallest double. It starts from the Cornish-Fisher expansion of t in the normal
+ * quantile z (Abramowitz & Stegun 26.7.5, three terms), within a few percent from nu = 3 on, so a
+ * few steps reach the root; the normal's own quantile for nu = Infinity. Throws RangeError otherwise.
  * @example studentUpperQuantile(0.025, 10) // ≈ 2.228 (standard t table)
  */
 export function studentUpperQuantile(p: number, nu: number): number {
   if (!(p > 0 && p <= 0.5)) throw new RangeError(`an upper tail must lie in (0, 0.5], got ${p}`);
   if (!(nu > 0)) throw new RangeError(`a Student-t needs degrees of freedom above 0, got ${nu}`);
   if (p === 0.5) return 0;
+  const z = -normalQuantile(p);
+  if (nu === Infinity) return z;
   const target = Math.log(p);
-  const gap = (t: number): number => Math.log(studentUpperTail(t, nu)) - target;
+  const z2 = z * z;
+  const expansion =
+    z +
+    (z * (z2 + 1)) / (4 * nu) +
+    (z * (5 * z2 * z2 + 16 * z2 + 3)) / (96 * nu * nu) +
+    (z * (3 * z2 * z2 * z2 + 19 * z2 * z2 + 17 * z2 - 15)) / (384 * nu * nu * nu);
+  // The t tail lies above the normal's, so t >= z; a start the bracket cannot use falls back to 2z.
+  let t = Number.isFinite(expansion) && expansion > z ? expansion : 2 * z;
   let lo = 0;
-  let hi = 1;
-  while (gap(hi) > 0 && hi < 1e300) hi *= 4;
-  let t = hi / 2;
-  for (let i = 0; i < 200; i++) {
-    const g = gap(t);
+  let hi = Infinity;
+  for (let i = 0; i < 400; i++) {
+    const logTail = Math.log(studentUpperTail(t, nu));
+    const g = logTail - target;
+    if (g === 0) return t;
     if (g > 0) lo = t;
     else hi = t;
-    const slope = -Math.exp(studentLogDensity(t, nu) - Math.log(studentUpperTail(t, nu)));
+    const slope = -Math.exp(studentLogDensity(t, nu) - logTail);
     let next = t - g / slope;
-    if (!(next > lo && next < hi)) next = (lo + hi) / 2;
+    if (!(next > lo && next < hi)) next = hi === Infinity ? 4 * t : (lo + hi) / 2;
     if (Math.abs(next - t) <= 1e-12 * next) return next;
     t = next;
   }
   return t;
+}
+
+/** A Student-t upper quantile (p, nu) -> t, as studentUpperQuantile. */
+export type UpperQuantile = (p: number, nu: number) => number;
+
+/**
+ * studentUpperQuantile remembering its answers: one check asks for the same few (level, nu)
+ * pairs for every metric (thousands of root searches otherwise). A fresh memory per call, so
+ * the core keeps no state between checks.
+ * @example const q = rememberedQuantile(); q(0.025, 10) === q(0.025, 10) // true, one search
+ */
+export function rememberedQuantile(): UpperQuantile {
+  const known = new Map<number, Map<number, number>>();
+  return (p, nu) => {
+    let byNu = known.get(p);
+    if (byNu === undefined) known.set(p, (byNu = new Map()));
+    let t = byNu.get(nu);
+    if (t === undefined) byNu.set(nu, (t = studentUpperQuantile(p, nu)));
+    return t;
+  };
 }
 
 /**

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { median as referenceMedian, medianAbsoluteDeviation as referenceMad } from 'simple-statistics';
 import { describe, expect, it } from 'vitest';
-import { median, medianAbsoluteDeviation } from '../../src/model/median.js';
+import { median, medianAbsoluteDeviation, medianInPlace } from '../../src/model/median.js';
 
 // Values that stress a selection algorithm: heavy ties (few distinct values), runs already sorted
 // or reversed, and ordinary doubles of mixed sign and size.
@@ -59,5 +59,22 @@ describe('median (simple-statistics, checked input)', () => {
     expect(xs).toEqual([5, 1, 4, 2, 3]);
     expect(() => median([])).toThrow(RangeError);
     expect(() => medianAbsoluteDeviation([1, Number.POSITIVE_INFINITY])).toThrow(/position 2/);
+  });
+});
+
+describe('medianInPlace (quickselect on a reused buffer)', () => {
+  it('equals simple-statistics median over the first count entries, whatever follows them', () => {
+    fc.assert(
+      fc.property(values, fc.array(anyFinite, { maxLength: 5 }), (xs, tail) => {
+        const buffer = [...xs, ...tail];
+        // + 0 turns -0 into 0: between equal middle values of either sign, which one lands is arbitrary.
+        expectSameMedian(medianInPlace(buffer, xs.length) + 0, referenceMedian(xs) + 0, xs.length);
+      }),
+      { numRuns: 400, seed: 29 },
+    );
+  });
+
+  it('an empty count has no median', () => {
+    expect(medianInPlace([1, 2], 0)).toBeNaN();
   });
 });

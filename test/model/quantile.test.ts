@@ -1,7 +1,7 @@
 import tQuantile from '@stdlib/stats-base-dists-t-quantile';
 import { describe, expect, it } from 'vitest';
 import { detectableShift } from '../../src/model/detectable.js';
-import { cutoffT, studentRelativeDensity, studentUpperQuantile } from '../../src/model/tails.js';
+import { cutoffT, rememberedQuantile, studentRelativeDensity, studentUpperQuantile } from '../../src/model/tails.js';
 import { expectClose } from '../helpers/close.js';
 
 describe('studentUpperQuantile', () => {
@@ -17,6 +17,18 @@ describe('studentUpperQuantile', () => {
         // stdlib takes 1 - p, which keeps only about 1e-16 / p of p's digits
         expectClose(studentUpperQuantile(p, nu), tQuantile(1 - p, nu), Math.max(1e-9, 1e-15 / p));
       }
+  });
+
+  it('agrees with stdlib for nu below 1 and far above the start expansion (nu 0.3, 0.7, 1e4)', () => {
+    for (const nu of [0.3, 0.7, 1e4])
+      for (const p of [0.3, 1e-2, 1e-5, 1e-9])
+        expectClose(studentUpperQuantile(p, nu), tQuantile(1 - p, nu), Math.max(1e-9, 1e-15 / p));
+  });
+
+  it('rememberedQuantile answers as studentUpperQuantile for every (p, nu) asked, in any order', () => {
+    const remembered = rememberedQuantile();
+    const asks = [0.2, 1e-5, 0.2, 3e-4].flatMap((p) => [Infinity, 4, 60.5, 4].map((nu) => [p, nu] as const));
+    for (const [p, nu] of asks) expect(remembered(p, nu)).toBe(studentUpperQuantile(p, nu));
   });
 
   it('nu = 1 is the Cauchy: t = 1 / tan(pi p), exact far out where 1 - p has lost its digits', () => {
