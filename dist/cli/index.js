@@ -15525,7 +15525,7 @@ function isLabelled(truth, run, metric) {
 
 
 
-/** The false alarms per 100 clean runs aimed at when no --target is given (DESIGN.md "What good looks like"). */
+/** The false alarms per 100 clean runs aimed at when no --target is given (README.md "Command line", tune). */
 const DEFAULT_TARGET = 1;
 /** The shift size the search maximises the share caught of (issue 13: +10%). */
 const AIM_SHIFT = 0.1;
@@ -20871,7 +20871,7 @@ function own(measurement) {
 ;// CONCATENATED MODULE: ./src/gate/decide.ts
 
 /**
- * A scored metric's status (DESIGN.md "Statistics"): regressed when its test fires on the worse
+ * A scored metric's status (README.md "How the decision works"): regressed when its test fires on the worse
  * side and its own move is beyond the tolerance; improved likewise on the better side (reported,
  * never blocking); ok otherwise. The test: with family control, the adjusted worse-side tail at
  * or below the budget (for Holm the same as its tail at or below the level of its rank), and the
@@ -21948,7 +21948,7 @@ function judgeSharedMove(moves, config) {
 var missing_metrics = __nccwpck_require__(4719);
 ;// CONCATENATED MODULE: ./src/gate/verdict.ts
 /**
- * The run's verdict (DESIGN.md, issue 13 item 3): `regressed` when any metric regressed
+ * The run's verdict (README.md "How the decision works"): `regressed` when any metric regressed
  * (`accepted` instead when the pull request carries the accept label); else `unsettled` when a
  * shared move is beyond what the history has shown; `learning` when no metric had enough history
  * to be judged; otherwise `pass`.
@@ -21994,7 +21994,7 @@ function orderMetrics(metrics) {
 
 
 /**
- * The decision (DESIGN.md "Statistics" and "Real CI noise", issue 13): every metric of the run and
+ * The decision (README.md "How the decision works"): every metric of the run and
  * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
  * the run's shared move and its own move (takeApart); the own moves get a noise model that borrows
  * strength across metrics of one noise shape (noiseModel) and are scored against their predictive

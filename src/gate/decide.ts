@@ -11,7 +11,7 @@ export interface FamilyFigures {
 }
 
 /**
- * A scored metric's status (DESIGN.md "Statistics"): regressed when its test fires on the worse
+ * A scored metric's status (README.md "How the decision works"): regressed when its test fires on the worse
  * side and its own move is beyond the tolerance; improved likewise on the better side (reported,
  * never blocking); ok otherwise. The test: with family control, the adjusted worse-side tail at
  * or below the budget (for Holm the same as its tail at or below the level of its rank), and the

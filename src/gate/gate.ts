@@ -20,12 +20,12 @@ export interface GateInput {
   series: string;
   /** The pull request carries the accept label: a regression gives `accepted`. */
   accepted?: boolean;
-  /** This run's runner fingerprint (PLAN.md "The runner fingerprint"), when the adapter knows it. */
+  /** This run's runner fingerprint (README.md "How the decision works"), when the adapter knows it. */
   runner?: string;
 }
 
 /**
- * The decision (DESIGN.md "Statistics" and "Real CI noise", issue 13): every metric of the run and
+ * The decision (README.md "How the decision works"): every metric of the run and
  * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
  * the run's shared move and its own move (takeApart); the own moves get a noise model that borrows
  * strength across metrics of one noise shape (noiseModel) and are scored against their predictive

@@ -1,7 +1,7 @@
 import { compileGlobs } from '../config/glob-matcher.js';
 import type { History } from '../history/history.js';
 
-/** Where a metric's current level starts by a level mark (PLAN.md "Shared contracts"). */
+/** Where a metric's current level starts by a level mark (README.md "How the decision works"). */
 export interface LevelStart {
   /** Index into history.runs of the run the mark starts at. */
   index: number;

@@ -1,7 +1,7 @@
 import type { MetricResult, SharedMoveResult, Status, Verdict } from './report.js';
 
 /**
- * The run's verdict (DESIGN.md, issue 13 item 3): `regressed` when any metric regressed
+ * The run's verdict (README.md "How the decision works"): `regressed` when any metric regressed
  * (`accepted` instead when the pull request carries the accept label); else `unsettled` when a
  * shared move is beyond what the history has shown; `learning` when no metric had enough history
  * to be judged; otherwise `pass`.

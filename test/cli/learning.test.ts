@@ -1,5 +1,5 @@
 // A `learning` report says how many baseline runs there are and how many are needed (min-runs is
-// 8 by default, DESIGN.md "Config file"), and how to get them sooner. Invented data.
+// 8 by default, README.md "Configuration"), and how to get them sooner. Invented data.
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
 import { bellgate, scratch } from './helpers/cli-harness.js';

@@ -8,7 +8,7 @@ import { scoreExact, scoreStructure, type ExactScore, type SettingScore } from '
 import { promisedPer100, sameSetting, settingOf, structures, withSetting, type TuneSetting } from './setting.js';
 import { buildTruth } from './truth.js';
 
-/** The false alarms per 100 clean runs aimed at when no --target is given (DESIGN.md "What good looks like"). */
+/** The false alarms per 100 clean runs aimed at when no --target is given (README.md "Command line", tune). */
 export const DEFAULT_TARGET = 1;
 
 /** The shift size the search maximises the share caught of (issue 13: +10%). */

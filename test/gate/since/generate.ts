@@ -74,7 +74,7 @@ function noiseSource(kind: NoiseKind, sd: number, normal: () => number, uniform:
     };
   }
   if (kind === 'outliers') {
-    // One run in ten lands on a busy moment and runs 30-100% slower (DESIGN.md, real CI noise).
+    // One run in ten lands on a busy moment and runs 30-100% slower (as in the recorded corpus, test/noise).
     return () => sd * normal() + (uniform() < 0.1 ? Math.log(1.3 + 0.7 * uniform()) : 0);
   }
   // Load regimes that come and go: a busy regime (+25%) entered with chance 0.1 per run and left
