@@ -1,6 +1,5 @@
 import { InputError } from '../errors/input-error.js';
 import type { History, MetricColumn, RunInfo } from './history.js';
-import { parseCsvRuns } from './import-csv.js';
 import { parseJsonLines } from './import-jsonl.js';
 import type { ImportedRun, ImportParse, SkippedEntry } from './import-run.js';
 import { inStoredUnit } from '../inputs/units.js';
@@ -26,9 +25,11 @@ export interface ImportOutcome {
  * (see parseCsvRuns). Pure. Throws InputError for an empty file, a JSON array, or CSV without
  * the id and time columns; smaller problems are listed in `skipped`.
  *
- * @example parseImportRuns('id,time,name,value\n81,2026-03-01,build,12.5\n', 'runs.csv').runs.length // 1
+ * CSV loads its parser library (csv-parse) here only: an import is rare.
+ *
+ * @example (await parseImportRuns('id,time,name,value\n81,2026-03-01,build,12.5\n', 'runs.csv')).runs.length // 1
  */
-export function parseImportRuns(text: string, source: string): ImportParse {
+export async function parseImportRuns(text: string, source: string): Promise<ImportParse> {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const first = body.trimStart()[0];
   if (first === undefined)
@@ -43,7 +44,7 @@ export function parseImportRuns(text: string, source: string): ImportParse {
       fix: 'write one run object per line (JSON Lines)',
     });
   }
-  return parseCsvRuns(body, source);
+  return (await import('./import-csv.js')).parseCsvRuns(body, source);
 }
 
 /**
@@ -53,7 +54,7 @@ export function parseImportRuns(text: string, source: string): ImportParse {
  * passed on). Runs that cannot be stored (no id, non-finite value) are skipped with a reason.
  * Pure; O((stored + imported) x metrics).
  *
- * @example importRuns(emptyHistory('s'), parseImportRuns(text, 'runs.jsonl')) // { history, added: 3, updated: 0, ... }
+ * @example importRuns(emptyHistory('s'), await parseImportRuns(text, 'runs.jsonl')) // { history, added: 3, updated: 0, ... }
  */
 export function importRuns(h: History, input: ImportedRun[] | ImportParse): ImportOutcome {
   const list = Array.isArray(input) ? input : input.runs;

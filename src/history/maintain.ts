@@ -67,7 +67,7 @@ async function perform(store: HistoryStore, m: Maintenance, now: Date, skipped: 
       return runLines(listRuns(h), h.dropped?.size ?? 0, where);
     }
     case 'import': {
-      const parsed = parseImportRuns(m.text, m.source);
+      const parsed = await parseImportRuns(m.text, m.source);
       const result = importRuns(await store.read(), parsed);
       for (const s of result.skipped.slice(0, SHOWN_SKIPS)) skipped.push(`skipped ${s.where}: ${s.reason}`);
       if (result.skipped.length > SHOWN_SKIPS)

@@ -1,12 +1,10 @@
 import type { InputLimits } from '../config/types.js';
 import { InputError } from '../errors/input-error.js';
-import { readCsvMetrics } from './csv.js';
 import { detectFormat } from './detect.js';
 import { metricFormat, type MetricFormat } from './formats.js';
 import { readGoBench } from './gobench.js';
 import { readJsonMetrics } from './json.js';
 import { readJsonLines } from './jsonl.js';
-import { readJunit } from './junit.js';
 import { DEFAULT_LIMITS } from './limits.js';
 import { readOpenMetrics } from './openmetrics.js';
 import type { ReadResult } from './run.js';
@@ -14,13 +12,17 @@ import type { ReadResult } from './run.js';
 /** One format's reader. */
 type Reader = (text: string, file: string, limits: InputLimits) => ReadResult;
 
-const READERS: Record<MetricFormat, Reader> = {
-  json: readJsonMetrics,
-  jsonl: readJsonLines,
-  csv: readCsvMetrics,
-  openmetrics: readOpenMetrics,
-  gobench: readGoBench,
-  junit: readJunit,
+/**
+ * The readers by format. CSV and JUnit XML load their parser libraries (csv-parse, fast-xml-parser:
+ * about a tenth of the action's bundle) only when a run has such a file, which most runs do not.
+ */
+const READERS: Record<MetricFormat, () => Promise<Reader>> = {
+  json: async () => readJsonMetrics,
+  jsonl: async () => readJsonLines,
+  csv: async () => (await import('./csv.js')).readCsvMetrics,
+  openmetrics: async () => readOpenMetrics,
+  gobench: async () => readGoBench,
+  junit: async () => (await import('./junit.js')).readJunit,
 };
 
 /**
@@ -29,19 +31,20 @@ const READERS: Record<MetricFormat, Reader> = {
  * it is almost always a step that failed to write it.
  * @throws InputError for an unknown format name, an undetectable format, a limit passed, or any
  *   problem the reader finds; never anything else.
- * @example parseMetricText('{"a": 1}', 'm.json').readings.length // 1
+ * @example (await parseMetricText('{"a": 1}', 'm.json')).readings.length // 1
  */
-export function parseMetricText(
+export async function parseMetricText(
   text: string,
   file: string,
   format?: string,
   limits: InputLimits = DEFAULT_LIMITS,
-): ReadResult {
+): Promise<ReadResult> {
   const body = text.charCodeAt(0) === 0xfeff ? text.slice(1) : text;
   const chosen = format === undefined || format === '' ? detectFormat(body, file) : metricFormat(format);
+  const read = await READERS[chosen]();
   let result: ReadResult;
   try {
-    result = READERS[chosen](body, file, limits);
+    result = read(body, file, limits);
   } catch (error) {
     if (error instanceof InputError) throw error;
     // A library failing in a way it does not document must still reach the user as bad input.

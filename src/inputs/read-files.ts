@@ -183,7 +183,7 @@ async function readOne(
   if (text === undefined) {
     throw new InputError(`metric file ${shown} disappeared while it was being read`, { where: shown });
   }
-  return parseMetricText(text, shown, format, limits);
+  return await parseMetricText(text, shown, format, limits);
 }
 
 function withPrefix(result: ReadResult, prefix: string): ReadResult {

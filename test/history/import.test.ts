@@ -21,8 +21,8 @@ describe('parseImportRuns: JSON Lines', () => {
     '{"id":8107,"time":"2026-03-07T10:00:00Z","metrics":{"a":2},"units":{"a":"ms"}}',
   ].join('\n');
 
-  it('reads each run and says why each line or value was left out', () => {
-    const { runs, skipped } = parseImportRuns(text, 'runs.jsonl');
+  it('reads each run and says why each line or value was left out', async () => {
+    const { runs, skipped } = await parseImportRuns(text, 'runs.jsonl');
     expect(runs.map((r) => r.info.id)).toEqual(['8101-1', '8102-1', '8105-1', '8107']);
     // RFC 3339 offsets are normalised to UTC: 10:00+01:00 is 09:00Z
     expect(runs[1]?.info).toEqual({
@@ -43,29 +43,29 @@ describe('parseImportRuns: JSON Lines', () => {
     ]);
   });
 
-  it('counts added, updated, unchanged and passes the skipped on', () => {
-    const outcome = importRuns(stored(), parseImportRuns(text, 'runs.jsonl'));
+  it('counts added, updated, unchanged and passes the skipped on', async () => {
+    const outcome = importRuns(stored(), await parseImportRuns(text, 'runs.jsonl'));
     expect(outcome).toMatchObject({ added: 3, updated: 0, unchanged: 1 });
     expect(outcome.skipped).toHaveLength(5);
     expect(outcome.history.runs.map((r) => r.id)).toEqual(['8101-1', '8102-1', '8105-1', '8107']);
     expect(outcome.history.columns.get('build/compile')?.values).toEqual([41.25, 40.5, NaN, NaN]);
     // importing the same file again changes nothing
-    const again = importRuns(outcome.history, parseImportRuns(text, 'runs.jsonl'));
+    const again = importRuns(outcome.history, await parseImportRuns(text, 'runs.jsonl'));
     expect(again).toMatchObject({ added: 0, updated: 0, unchanged: 4 });
     expect(again.history).toEqual(outcome.history);
   });
 
-  it('a run id given twice: the later line is kept and the earlier one is noted', () => {
+  it('a run id given twice: the later line is kept and the earlier one is noted', async () => {
     const twice =
       '{"id":"1","time":"2026-03-01","metrics":{"a":1}}\n{"id":"1","time":"2026-03-01","metrics":{"a":2}}\n';
-    const parsed = parseImportRuns(twice, 'r.jsonl');
+    const parsed = await parseImportRuns(twice, 'r.jsonl');
     expect(parsed.runs.map((r) => r.metrics.get('a'))).toEqual([2]);
     expect(parsed.skipped).toEqual([{ where: 'r.jsonl:1', reason: expect.stringMatching(/appears again on line 2/) }]);
   });
 });
 
 describe('parseImportRuns: CSV', () => {
-  it('reads the long form (one row per run and metric) and joins rows of one run', () => {
+  it('reads the long form (one row per run and metric) and joins rows of one run', async () => {
     const csv = [
       'id,time,sha,ref,name,value,unit',
       '8101-1,2026-03-01T10:00:00Z,aaa,,build/compile,41.25,s',
@@ -77,7 +77,7 @@ describe('parseImportRuns: CSV', () => {
       '8104-1,2026-03-04T10:00:00Z,eee,,build/compile,0x10,s',
       '8105-1,2026-03-05T10:00:00Z,fff,,build/compile,39.9',
     ].join('\r\n');
-    const parsed = parseImportRuns(csv, 'runs.csv');
+    const parsed = await parseImportRuns(csv, 'runs.csv');
     expect(parsed.runs.map((r) => r.info.id)).toEqual(['8101-1', '8102-1']);
     expect([...(parsed.runs[1]?.metrics ?? [])]).toEqual([
       ['build/compile', 40.5],
@@ -107,22 +107,22 @@ describe('parseImportRuns: CSV', () => {
     expect(outcome).toMatchObject({ added: 1, updated: 0, unchanged: 1 });
   });
 
-  it('notes a metric given twice for one run (long form); the later row counts', () => {
-    const parsed = parseImportRuns('id,time,name,value\n1,2026-03-01,a,1\n1,2026-03-01,a,2\n', 'd.csv');
+  it('notes a metric given twice for one run (long form); the later row counts', async () => {
+    const parsed = await parseImportRuns('id,time,name,value\n1,2026-03-01,a,1\n1,2026-03-01,a,2\n', 'd.csv');
     expect(parsed.runs[0]?.metrics.get('a')).toBe(2);
     expect(parsed.skipped).toEqual([
       { where: 'd.csv:3', reason: expect.stringMatching(/"a" of run "1" was given before/) },
     ]);
   });
 
-  it('reads the wide form (one row per run), units from "name [unit]" headers, empty cells as missing', () => {
+  it('reads the wide form (one row per run), units from "name [unit]" headers, empty cells as missing', async () => {
     const csv = [
       'ID,Time,SHA,Ref,build/compile [s],route/match-static [ns],tiles',
       '8101-1,2026-03-01T10:00:00Z,aaa,,41.25,,3',
       '8102-1,2026-03-02 10:00Z,bbb,main,40.5,412.5,',
       '8103-1,2026-03-03,ccc,main,abc,1,2',
     ].join('\n');
-    const parsed = parseImportRuns(csv, 'wide.csv');
+    const parsed = await parseImportRuns(csv, 'wide.csv');
     expect(parsed.runs.map((r) => [r.info.id, [...r.metrics]])).toEqual([
       [
         '8101-1',
@@ -156,7 +156,7 @@ describe('parseImportRuns: CSV', () => {
     expect(outcome.history.columns.get('route/match-static')).toEqual({ unit: 'ns', values: [NaN, 412.5, 1] });
   });
 
-  it('throws InputError for files that are no import form at all', () => {
+  it('throws InputError for files that are no import form at all', async () => {
     for (const [text, message] of [
       ['', /no runs/],
       ['[{"id":"1"}]', /JSON array/],
@@ -164,14 +164,14 @@ describe('parseImportRuns: CSV', () => {
       ['id,time,id\n', /appears twice/],
       ['id,time\n"1,2026-03-01\n', /not valid CSV/],
     ] as const) {
-      expect(() => parseImportRuns(text, 'x.csv')).toThrow(InputError);
-      expect(() => parseImportRuns(text, 'x.csv')).toThrow(message);
+      await expect(parseImportRuns(text, 'x.csv')).rejects.toThrow(InputError);
+      await expect(parseImportRuns(text, 'x.csv')).rejects.toThrow(message);
     }
   });
 });
 
 describe('importRuns', () => {
-  it('accepts a bare list of runs, refuses non-finite values, the later of two copies counts', () => {
+  it('accepts a bare list of runs, refuses non-finite values, the later of two copies counts', async () => {
     const outcome = importRuns(stored(), [
       {
         info: { id: '8101-1', time: '2026-03-01T10:00:00.000Z', sha: 'aaa' },

@@ -50,21 +50,42 @@ export function resultOrInputError<T>(
   try {
     value = parse();
   } catch (error) {
-    if (!(error instanceof InputError)) {
-      throw new Error(
-        `expected an InputError, got ${error instanceof Error ? `${error.name}: ${error.message}` : String(error)}`,
-      );
-    }
-    expect(error.message.length).toBeGreaterThan(0);
-    expect(error.message).not.toMatch(/\[object Object\]|^undefined/);
-    if (needWhere) expect(error.where ?? '').not.toBe('');
-    expect(error.describe()).not.toMatch(STACK_LINE);
-    assertNoPollution();
-    return 'refused';
+    return refused(error, needWhere);
   }
   onResult(value);
   assertNoPollution();
   return 'ok';
+}
+
+/** resultOrInputError for a parse that returns a promise (the metric-file parser loads some readers lazily). */
+export async function settledOrInputError<T>(
+  parse: () => Promise<T>,
+  onResult: (value: T) => void = () => {},
+  needWhere = true,
+): Promise<'ok' | 'refused'> {
+  let value: T;
+  try {
+    value = await parse();
+  } catch (error) {
+    return refused(error, needWhere);
+  }
+  onResult(value);
+  assertNoPollution();
+  return 'ok';
+}
+
+function refused(error: unknown, needWhere: boolean): 'refused' {
+  if (!(error instanceof InputError)) {
+    throw new Error(
+      `expected an InputError, got ${error instanceof Error ? `${error.name}: ${error.message}` : String(error)}`,
+    );
+  }
+  expect(error.message.length).toBeGreaterThan(0);
+  expect(error.message).not.toMatch(/\[object Object\]|^undefined/);
+  if (needWhere) expect(error.where ?? '').not.toBe('');
+  expect(error.describe()).not.toMatch(STACK_LINE);
+  assertNoPollution();
+  return 'refused';
 }
 
 /** Counts cases per parser and how each ended; `line()` is the summary printed after a suite. */

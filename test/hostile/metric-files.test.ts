@@ -11,7 +11,7 @@ import { checkMetricName, checkUnit } from '../../src/inputs/names.js';
 import { parseMetricText } from '../../src/inputs/parse.js';
 import type { ReadResult } from '../../src/inputs/run.js';
 import { bellgate, scratch } from '../cli/helpers/cli-harness.js';
-import { assertNoPollution, CaseCounter, FC, resultOrInputError, STACK_LINE } from './guards.js';
+import { assertNoPollution, CaseCounter, FC, settledOrInputError, STACK_LINE } from './guards.js';
 import { assertInertHtml, assertInertMarkdown, assertInertText } from './outputs.js';
 
 const counter = new CaseCounter('metric files');
@@ -85,8 +85,8 @@ const unitArb = fc.oneof(
 );
 
 /** The contract of one parse, counted under `format`. */
-function contract(text: string, format: string | undefined, label: string): void {
-  const outcome = resultOrInputError(
+async function contract(text: string, format: string | undefined, label: string): Promise<void> {
+  const outcome = await settledOrInputError(
     () => parseMetricText(text, FILE, format),
     (result: ReadResult) => {
       for (const r of result.readings) {
@@ -100,9 +100,9 @@ function contract(text: string, format: string | undefined, label: string): void
   counter.add(label, outcome);
 }
 
-function refusalNamesFile(text: string, format: string): void {
+async function refusalNamesFile(text: string, format: string): Promise<void> {
   try {
-    parseMetricText(text, FILE, format);
+    await parseMetricText(text, FILE, format);
   } catch (error) {
     expect((error as { where?: string }).where ?? '').toContain(FILE);
   }
@@ -144,23 +144,23 @@ describe.each(Object.keys(BUILDERS))('%s documents with hostile names, values an
   const build = BUILDERS[label]!;
   const format = FORMAT_OF[label]!;
   const rows = fc.array(fc.tuple(nameArb, numberText, unitArb), { minLength: 1, maxLength: 4 });
-  it('read soundly or refused with an InputError naming the file, forced and detected', () => {
-    fc.assert(
-      fc.property(rows, (r) => {
+  it('read soundly or refused with an InputError naming the file, forced and detected', async () => {
+    await fc.assert(
+      fc.asyncProperty(rows, async (r) => {
         const text = build(r);
-        contract(text, format, label);
-        refusalNamesFile(text, format);
-        contract(text, undefined, 'detected');
+        await contract(text, format, label);
+        await refusalNamesFile(text, format);
+        await contract(text, undefined, 'detected');
       }),
       FC(100),
     );
   });
-  it('refuses a document whose only name carries a control or bidi character', () => {
+  it('refuses a document whose only name carries a control or bidi character', async () => {
     for (const c of REFUSED_CHARS) {
       const text = build([[`bad${c}name`, '1', 'ns']]);
       // Go benchmark and OpenMetrics put the name where the grammar already stops at odd characters:
       // they may read no metric (refused as empty) or a prefix; a reading never carries the character.
-      const outcome = resultOrInputError(
+      const outcome = await settledOrInputError(
         () => parseMetricText(text, FILE, format),
         (res) => {
           for (const rd of res.readings) expect(rd.name).not.toContain(c);
@@ -243,8 +243,8 @@ describe('hand-picked attacks on the readers', () => {
     ['lone surrogates', '{"\uD800": 1, "\uDFFF": 2}', 'json'],
     ['unknown format name', '{"a":1}', '__proto__'],
   ];
-  it.each(cases)('%s', (_label, text, format) => {
-    const outcome = resultOrInputError(
+  it.each(cases)('%s', async (_label, text, format) => {
+    const outcome = await settledOrInputError(
       () => parseMetricText(text, FILE, format),
       (res) => {
         // One expect per file, not per reading: a million readings would make the check the slow part.
@@ -257,9 +257,9 @@ describe('hand-picked attacks on the readers', () => {
     counter.add('hand-picked', outcome);
   });
 
-  it('a JUnit entity expansion never grows a name past the limit nor reads a file', () => {
+  it('a JUnit entity expansion never grows a name past the limit nor reads a file', async () => {
     const laugh = cases.find(([l]) => l === 'junit external entity')![1];
-    const out = resultOrInputError(
+    const out = await settledOrInputError(
       () => parseMetricText(laugh, FILE, 'junit'),
       (res) => {
         for (const r of res.readings) expect(r.name).not.toMatch(/root:|\/bin\//);

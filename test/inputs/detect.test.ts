@@ -3,7 +3,7 @@ import { detectFormat } from '../../src/inputs/detect.js';
 import { metricFormat } from '../../src/inputs/formats.js';
 import { DEFAULT_LIMITS } from '../../src/inputs/limits.js';
 import { parseMetricText } from '../../src/inputs/parse.js';
-import { inputErrorOf } from './helpers.js';
+import { inputErrorOf, rejectionOf } from './helpers.js';
 
 describe('detectFormat', () => {
   it('tells formats apart by content', () => {
@@ -39,29 +39,29 @@ describe('detectFormat', () => {
 });
 
 describe('parseMetricText', () => {
-  it('accepts format names case-insensitively, with aliases, and refuses unknown ones', () => {
+  it('accepts format names case-insensitively, with aliases, and refuses unknown ones', async () => {
     expect(metricFormat('Prometheus')).toBe('openmetrics');
     expect(metricFormat('NDJSON')).toBe('jsonl');
-    expect(inputErrorOf(() => parseMetricText('a 1', 'x', 'yaml')).fix).toMatch(
+    expect((await rejectionOf(parseMetricText('a 1', 'x', 'yaml'))).fix).toMatch(
       /json, jsonl, csv, openmetrics, gobench, junit/,
     );
   });
 
-  it('refuses a file that yields no metric at all', () => {
-    expect(inputErrorOf(() => parseMetricText('PASS\nok  \tpkg\t1.2s\n', 'b.txt', 'gobench')).message).toMatch(
+  it('refuses a file that yields no metric at all', async () => {
+    expect((await rejectionOf(parseMetricText('PASS\nok  \tpkg\t1.2s\n', 'b.txt', 'gobench'))).message).toMatch(
       /no metrics found in the file \(read as gobench\)/,
     );
   });
 
-  it('refuses a line over limits.max-line-length, naming the limit and the key', () => {
+  it('refuses a line over limits.max-line-length, naming the limit and the key', async () => {
     const limits = { ...DEFAULT_LIMITS, maxLineLength: 20 };
-    const error = inputErrorOf(() => parseMetricText(`a 1\nb${' '.repeat(30)}2\n`, 'm.prom', 'openmetrics', limits));
+    const error = await rejectionOf(parseMetricText(`a 1\nb${' '.repeat(30)}2\n`, 'm.prom', 'openmetrics', limits));
     expect(error.message).toBe('line 2 is 32 characters long (limit limits.max-line-length = 20)');
     expect(error.where).toBe('m.prom:2');
     expect(error.fix).toMatch(/raise limits\.max-line-length/);
   });
 
-  it('applies the line limit to line-oriented formats only (one-line JSON is bounded by file size)', () => {
+  it('applies the line limit to line-oriented formats only (one-line JSON is bounded by file size)', async () => {
     const limits = { ...DEFAULT_LIMITS, maxLineLength: 20 };
     const oneLine = JSON.stringify({
       metrics: [
@@ -69,19 +69,19 @@ describe('parseMetricText', () => {
         { name: 'b', value: 2 },
       ],
     });
-    expect(parseMetricText(oneLine, 'm.json', undefined, limits).readings).toHaveLength(2);
+    expect((await parseMetricText(oneLine, 'm.json', undefined, limits)).readings).toHaveLength(2);
     expect(
-      inputErrorOf(() => parseMetricText('{"name": "a", "value": 1}', 'm.jsonl', 'jsonl', limits)).message,
+      (await rejectionOf(parseMetricText('{"name": "a", "value": 1}', 'm.jsonl', 'jsonl', limits))).message,
     ).toMatch(/limits\.max-line-length/);
     expect(
-      inputErrorOf(() => parseMetricText('name,value\nabcdefghijklmnopqrstuvwxyz,1', 'm.csv', 'csv', limits)).where,
+      (await rejectionOf(parseMetricText('name,value\nabcdefghijklmnopqrstuvwxyz,1', 'm.csv', 'csv', limits))).where,
     ).toBe('m.csv:2');
   });
 
-  it('refuses more than limits.max-metrics distinct metrics while parsing', () => {
+  it('refuses more than limits.max-metrics distinct metrics while parsing', async () => {
     const limits = { ...DEFAULT_LIMITS, maxMetrics: 2 };
-    expect(parseMetricText('a 1\nb 2\na 3\n', 'm.prom', undefined, limits).readings).toHaveLength(3);
-    const error = inputErrorOf(() => parseMetricText('a 1\nb 2\nc 3\n', 'm.prom', undefined, limits));
+    expect((await parseMetricText('a 1\nb 2\na 3\n', 'm.prom', undefined, limits)).readings).toHaveLength(3);
+    const error = await rejectionOf(parseMetricText('a 1\nb 2\nc 3\n', 'm.prom', undefined, limits));
     expect(error.message).toMatch(/more than 2 metrics \(limit limits\.max-metrics = 2\)/);
     expect(error.where).toBe('m.prom:3');
   });

@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_LIMITS } from '../../src/inputs/limits.js';
 import { parseMetricText } from '../../src/inputs/parse.js';
-import { inputErrorOf } from './helpers.js';
+import { rejectionOf } from './helpers.js';
 
 const limits = { ...DEFAULT_LIMITS, maxSamples: 3 };
 
@@ -22,20 +22,20 @@ const FOUR: Array<[string, string, string]> = [
 ];
 
 describe('limits.max-samples', () => {
-  it.each(FOUR)('refuses the fourth sample of %s when the cap is three', (format, text, where) => {
-    const error = inputErrorOf(() => parseMetricText(text, 'f', format, limits));
+  it.each(FOUR)('refuses the fourth sample of %s when the cap is three', async (format, text, where) => {
+    const error = await rejectionOf(parseMetricText(text, 'f', format, limits));
     expect(error.message).toBe('f has more than 3 samples (limit limits.max-samples = 3)');
     expect(error.where).toBe(where);
     expect(error.fix).toBe('raise limits.max-samples in the config file if this input is expected');
     // At the cap itself the file is read.
-    expect(() => parseMetricText(text, 'f', format, { ...limits, maxSamples: 4 })).not.toThrow();
+    expect((await parseMetricText(text, 'f', format, { ...limits, maxSamples: 4 })).readings).toHaveLength(4);
   });
 
-  it('counts the test cases and suites of JUnit XML before parsing it (not <testsuites>)', () => {
+  it('counts the test cases and suites of JUnit XML before parsing it (not <testsuites>)', async () => {
     const xml = (cases: number) =>
       `<testsuites><testsuite name="s">${'<testcase name="t" time="1"/>'.repeat(cases)}</testsuite></testsuites>`;
-    const error = inputErrorOf(() => parseMetricText(xml(3), 'f', 'junit', limits));
+    const error = await rejectionOf(parseMetricText(xml(3), 'f', 'junit', limits));
     expect(error.message).toBe('f has more than 3 test cases and suites (limit limits.max-samples = 3)');
-    expect(parseMetricText(xml(2), 'f', 'junit', limits).readings).toHaveLength(2);
+    expect((await parseMetricText(xml(2), 'f', 'junit', limits)).readings).toHaveLength(2);
   });
 });

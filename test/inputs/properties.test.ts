@@ -13,7 +13,7 @@ import { InputError } from '../../src/errors/input-error.js';
 
 const RUNS = 200;
 
-const readers: [string, (text: string) => ReadResult][] = [
+const readers: [string, (text: string) => ReadResult | Promise<ReadResult>][] = [
   ['json', (t) => readJsonMetrics(t, 'f')],
   ['jsonl', (t) => readJsonLines(t, 'f')],
   ['csv', (t) => readCsvMetrics(t, 'f')],
@@ -82,10 +82,10 @@ const bytes = fc.uint8Array({ maxLength: 300 }).map((b) => new TextDecoder('utf-
 const anyText = fc.oneof(soup, fc.string({ unit: 'binary', maxLength: 200 }), bytes);
 
 /** Runs a reader: it returns a result whose readings are sound, or throws an InputError. */
-function readOrInputError(read: (text: string) => ReadResult, text: string): void {
+async function readOrInputError(read: (text: string) => ReadResult | Promise<ReadResult>, text: string): Promise<void> {
   let result: ReadResult;
   try {
-    result = read(text);
+    result = await read(text);
   } catch (error) {
     if (!(error instanceof InputError)) throw error;
     expect(error.message.length).toBeGreaterThan(0);
@@ -98,9 +98,9 @@ function readOrInputError(read: (text: string) => ReadResult, text: string): voi
 }
 
 describe.each(readers)('reader %s on arbitrary text', (_format, read) => {
-  it('returns sound readings or throws InputError, never anything else', () => {
-    fc.assert(
-      fc.property(anyText, (text) => readOrInputError(read, text)),
+  it('returns sound readings or throws InputError, never anything else', async () => {
+    await fc.assert(
+      fc.asyncProperty(anyText, (text) => readOrInputError(read, text)),
       { numRuns: RUNS },
     );
   });
@@ -131,15 +131,15 @@ function csvCell(text: string): string {
 }
 
 describe('round trips: write a run in the format, read it back, same names, values and units', () => {
-  it('own JSON, list form', () => {
-    fc.assert(
-      fc.property(runArb, (metrics) => {
+  it('own JSON, list form', async () => {
+    await fc.assert(
+      fc.asyncProperty(runArb, async (metrics) => {
         const text = JSON.stringify(
           { metrics: metrics.map(({ name, value, unit }) => ({ name, value, unit })) },
           null,
           2,
         );
-        expect(asRun(parseMetricText(text, 'm.json'))).toEqual(expected(metrics));
+        expect(asRun(await parseMetricText(text, 'm.json'))).toEqual(expected(metrics));
       }),
       { numRuns: RUNS },
     );
@@ -171,14 +171,14 @@ describe('round trips: write a run in the format, read it back, same names, valu
     );
   });
 
-  it('CSV, long form with RFC 4180 quoting', () => {
-    fc.assert(
-      fc.property(runArb, (metrics) => {
+  it('CSV, long form with RFC 4180 quoting', async () => {
+    await fc.assert(
+      fc.asyncProperty(runArb, async (metrics) => {
         const rows = metrics.map(({ name, value, unit }) =>
           [csvCell(name), String(value), csvCell(unit ?? '')].join(','),
         );
         const text = ['name,value,unit', ...rows].join('\r\n');
-        expect(asRun(parseMetricText(text, 'm.csv', 'csv'))).toEqual(expected(metrics));
+        expect(asRun(await parseMetricText(text, 'm.csv', 'csv'))).toEqual(expected(metrics));
       }),
       { numRuns: RUNS },
     );
