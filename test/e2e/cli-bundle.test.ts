@@ -79,4 +79,16 @@ describe.skipIf(!built)('the built CLI (dist/cli/index.js)', () => {
     expect(corrupt.stderr).toContain('corrupt.json');
     expect(corrupt.stderr).not.toMatch(STACK);
   });
+
+  it('the CSV and XML parsers stay out of the first bundle files and load with such a file (DEVELOPERS.md "Speed")', () => {
+    for (const first of [join(root, 'dist', 'index.js'), cli]) {
+      expect(readFileSync(first, 'utf8')).not.toMatch(/node_modules\/(csv-parse|fast-xml-parser)\//);
+    }
+    writeFileSync(join(work, 'times.csv'), 'name,value,unit\nparse,12.5,ms\n');
+    writeFileSync(join(work, 'suite.xml'), '<testsuite name="s"><testcase name="t" time="0.25"/></testsuite>');
+    const r = run(['check', '--metrics', 'times.csv', '--metrics', 'suite.xml', '--format', 'json']);
+    expect(r.code).toBe(0);
+    const names = (JSON.parse(r.stdout) as { metrics: { name: string }[] }).metrics.map((m) => m.name).sort();
+    expect(names).toEqual(['parse', 's/t']);
+  });
 });

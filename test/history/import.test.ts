@@ -171,7 +171,7 @@ describe('parseImportRuns: CSV', () => {
 });
 
 describe('importRuns', () => {
-  it('accepts a bare list of runs, refuses non-finite values, the later of two copies counts', async () => {
+  it('accepts a bare list of runs, refuses non-finite values, the later of two copies counts', () => {
     const outcome = importRuns(stored(), [
       {
         info: { id: '8101-1', time: '2026-03-01T10:00:00.000Z', sha: 'aaa' },
