@@ -287,17 +287,10 @@ __webpack_unused_export__ = debug; // for test
 
 var https__WEBPACK_IMPORTED_MODULE_1___namespace_cache;
 var http__WEBPACK_IMPORTED_MODULE_0___namespace_cache;
-__webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
-/* harmony export */   Headers: () => (/* binding */ Headers),
-/* harmony export */   HttpClient: () => (/* binding */ HttpClient),
-/* harmony export */   HttpClientError: () => (/* binding */ HttpClientError),
-/* harmony export */   HttpClientResponse: () => (/* binding */ HttpClientResponse),
-/* harmony export */   HttpCodes: () => (/* binding */ HttpCodes),
-/* harmony export */   MediaTypes: () => (/* binding */ MediaTypes),
-/* harmony export */   getProxyUrl: () => (/* binding */ getProxyUrl),
-/* harmony export */   isHttps: () => (/* binding */ isHttps)
+/* harmony export */   HttpClient: () => (/* binding */ HttpClient)
 /* harmony export */ });
+/* unused harmony exports HttpCodes, Headers, MediaTypes, getProxyUrl, HttpClientError, HttpClientResponse, isHttps */
 /* harmony import */ var http__WEBPACK_IMPORTED_MODULE_0__ = __webpack_require__(8611);
 /* harmony import */ var https__WEBPACK_IMPORTED_MODULE_1__ = __webpack_require__(5692);
 /* harmony import */ var _proxy_js__WEBPACK_IMPORTED_MODULE_2__ = __webpack_require__(9783);
@@ -362,7 +355,7 @@ var MediaTypes;
  * @param serverUrl  The server URL where the request will be sent. For example, https://api.github.com
  */
 function getProxyUrl(serverUrl) {
-    const proxyUrl = _proxy_js__WEBPACK_IMPORTED_MODULE_2__.getProxyUrl(new URL(serverUrl));
+    const proxyUrl = pm.getProxyUrl(new URL(serverUrl));
     return proxyUrl ? proxyUrl.href : '';
 }
 const HttpRedirectCodes = [
@@ -1005,10 +998,11 @@ const lowercaseKeys = (obj) => Object.keys(obj).reduce((c, k) => ((c[k.toLowerCa
 /***/ 9783:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
+__webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   checkBypass: () => (/* binding */ checkBypass),
 /* harmony export */   getProxyUrl: () => (/* binding */ getProxyUrl)
 /* harmony export */ });
-/* unused harmony export checkBypass */
 function getProxyUrl(reqUrl) {
     const usingSsl = reqUrl.protocol === 'https:';
     if (checkBypass(reqUrl)) {

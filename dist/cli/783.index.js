@@ -5,10 +5,11 @@ export const modules = {
 /***/ 9783:
 /***/ ((__unused_webpack___webpack_module__, __webpack_exports__, __webpack_require__) => {
 
+__webpack_require__.r(__webpack_exports__);
 /* harmony export */ __webpack_require__.d(__webpack_exports__, {
+/* harmony export */   checkBypass: () => (/* binding */ checkBypass),
 /* harmony export */   getProxyUrl: () => (/* binding */ getProxyUrl)
 /* harmony export */ });
-/* unused harmony export checkBypass */
 function getProxyUrl(reqUrl) {
     const usingSsl = reqUrl.protocol === 'https:';
     if (checkBypass(reqUrl)) {

@@ -6096,7 +6096,7 @@ async function openStore(ctx, flags) {
             fix: 'export GITHUB_TOKEN with a token that may write the repository contents (e.g. `gh auth token`)',
         });
     const [{ createOctokitApi }, { createBranchStore }, { dataBranchName }] = await Promise.all([
-        __nccwpck_require__.e(/* import() */ 679).then(__nccwpck_require__.bind(__nccwpck_require__, 7679)),
+        __nccwpck_require__.e(/* import() */ 7).then(__nccwpck_require__.bind(__nccwpck_require__, 8007)),
         __nccwpck_require__.e(/* import() */ 166).then(__nccwpck_require__.bind(__nccwpck_require__, 2166)),
         __nccwpck_require__.e(/* import() */ 716).then(__nccwpck_require__.bind(__nccwpck_require__, 1716)),
     ]);

@@ -6,14 +6,13 @@
  * Data calls (git-data.ts), the artifact calls and the PR comment go through it. Behind the
  * runner's proxy (HTTPS_PROXY, HTTP_PROXY, NO_PROXY, read as @actions/http-client reads them)
  * every request, the download's redirect to storage included, goes through that proxy
- * (proxy-fetch.ts); without one, through Node's own fetch, which starts far faster than the
- * proxy-capable client. Intervals are tunable so tests can run the same code with millisecond waits.
+ * (client-fetch.ts), with or without one through the same fetch. Intervals are tunable so tests can run the same code with millisecond waits.
  */
 import { ArtifactGoneError, type ArtifactEntry } from '../history/artifact-store.js';
 import { DEFAULT_RETRY, statusOf, type ApiTarget, type CommitPull, type GitHubApi, type IssueComment } from './api.js';
 import { readCapped } from './fetch-capped.js';
 import { createGitData } from './git-data.js';
-import { proxyFetch } from './proxy-fetch.js';
+import { clientFetch } from './client-fetch.js';
 import { createReleaseApi } from './release-api.js';
 import { honourRetryAfter } from './retry-after.js';
 
@@ -107,14 +106,14 @@ export function createOctokitApi(target: ApiTarget): GitHubApi {
       import('@octokit/core'),
       import('@octokit/plugin-retry'),
       import('@octokit/plugin-throttling'),
-      proxyFetch(target.baseUrl),
+      clientFetch(target.baseUrl),
     ]).then(([{ Octokit }, { retry }, { throttling }, fetch]) => {
       const Client = Octokit.plugin(honourRetryAfter(tuning, log) as never, retry, throttling);
       return new Client({
         auth: target.token,
         baseUrl: target.baseUrl.replace(/\/+$/, ''),
         userAgent: 'bellgate',
-        ...(fetch === undefined ? {} : { request: { fetch } }),
+        request: { fetch },
         // 403 and 429 rate limits are waited out by honourRetryAfter, not by plugin-retry.
         retry: {
           retries: tuning.retries,

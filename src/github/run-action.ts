@@ -51,7 +51,7 @@ import { maintenanceRun } from './maintenance-run.js';
 import { uploadHtml } from './html-report.js';
 import { OUTPUT, readActionInputs, type ActionInputs, type InputReader } from './inputs.js';
 import { logText } from './log-text.js';
-import { postComment } from './pr-comment.js';
+import { startComment } from './pr-comment.js';
 import { runReleaseReview } from './release-review.js';
 import { reportPath } from './report-path.js';
 import type { ActionSink } from './sink.js';
@@ -159,6 +159,11 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
     });
     return { failed: review.failed, recorded: false };
   }
+  // The comment's lookup goes out now: its answer comes while the history loads and the gate runs.
+  const postComment =
+    PULL_REQUEST_EVENTS.includes(context.eventName) && context.pullRequest
+      ? startComment(apiOnce, context, inputs, sink)
+      : undefined;
   const decision = decideRecord(inputs.record, context, baselineBranch);
   if (decision.notice) sink.notice(`bellgate: not recording this run: ${decision.reason}`);
   else
@@ -259,19 +264,9 @@ async function perform(deps: ActionDeps): Promise<ActionResult> {
   annotate(report, sink, series, used);
   if (inputs.htmlReport) await uploadHtml(deps, context, series, report, history, inputs.retentionDays);
 
-  let comment: string | undefined;
-  if (PULL_REQUEST_EVENTS.includes(context.eventName) && context.pullRequest) {
-    const markdown = renderMarkdown(report, { marker, runUrl });
-    comment = await postComment(
-      apiOnce,
-      context,
-      inputs,
-      markerLine(marker),
-      markdown,
-      flagged || notes.length > 0,
-      sink,
-    );
-  }
+  const comment = postComment
+    ? await postComment(markerLine(marker), renderMarkdown(report, { marker, runUrl }), flagged || notes.length > 0)
+    : undefined;
   return { failed: failures.length > 0, report, recorded, ...(comment ? { comment } : {}) };
 }
 

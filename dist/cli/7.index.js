@@ -1,8 +1,8 @@
-export const id = 679;
-export const ids = [679];
+export const id = 7;
+export const ids = [7];
 export const modules = {
 
-/***/ 7679:
+/***/ 8007:
 /***/ ((__unused_webpack_module, __webpack_exports__, __webpack_require__) => {
 
 // ESM COMPAT FLAG
@@ -670,26 +670,23 @@ function createGitData(client, repo) {
     };
 }
 
-;// CONCATENATED MODULE: ./src/github/proxy-fetch.ts
+;// CONCATENATED MODULE: ./src/github/client-fetch.ts
 /**
- * The runner's proxy for the action's HTTP client. The proxy is looked up the way @actions/http-
- * client does it (https_proxy/HTTPS_PROXY for an https API, http_proxy/HTTP_PROXY for http,
- * no_proxy/NO_PROXY and loopback addresses bypass it). Only when one applies are @actions/http-
- * client's proxy agent and undici's fetch loaded (together far slower to start than Node's own
- * fetch); the agent then carries every request of the client, redirects included.
+ * The fetch of the action's HTTP client: undici's, the copy @actions/http-client brings (the
+ * action loads it at start through @actions/core, so Node's own fetch would be a second one to
+ * start). When the runner has a proxy for `baseUrl` (https_proxy/HTTPS_PROXY for an https API,
+ * http_proxy/HTTP_PROXY for http; no_proxy/NO_PROXY and loopback addresses bypass it, all looked
+ * up as @actions/http-client does), its proxy agent carries every request, redirects included.
+ * @example (await clientFetch('https://api.github.com'))('https://api.github.com/meta')
  */
-/**
- * A fetch that goes through the proxy configured for `baseUrl`, or undefined when none applies
- * (octokit then uses Node's fetch).
- * @example await proxyFetch('https://api.github.com') // undefined on a runner without a proxy
- */
-async function proxyFetch(baseUrl) {
-    const { getProxyUrl } = await __webpack_require__.e(/* import() */ 783).then(__webpack_require__.bind(__webpack_require__, 9783));
+async function clientFetch(baseUrl) {
+    const [{ getProxyUrl }, undici] = await Promise.all([__webpack_require__.e(/* import() */ 783).then(__webpack_require__.bind(__webpack_require__, 9783)), __webpack_require__.e(/* import() */ 752).then(__webpack_require__.t.bind(__webpack_require__, 4371, 19))]);
+    const send = undici.fetch;
     if (getProxyUrl(new URL(baseUrl)) === undefined)
-        return undefined;
-    const [{ HttpClient }, undici] = await Promise.all([Promise.all(/* import() */[__webpack_require__.e(752), __webpack_require__.e(779)]).then(__webpack_require__.bind(__webpack_require__, 2779)), __webpack_require__.e(/* import() */ 752).then(__webpack_require__.t.bind(__webpack_require__, 4371, 19))]);
+        return send;
+    const { HttpClient } = await Promise.all(/* import() */[__webpack_require__.e(752), __webpack_require__.e(779)]).then(__webpack_require__.bind(__webpack_require__, 2779));
     const dispatcher = new HttpClient('bellgate').getAgentDispatcher(baseUrl);
-    return ((url, init) => undici.fetch(url, { ...init, dispatcher }));
+    return ((url, init) => send(url, { ...init, dispatcher }));
 }
 
 ;// CONCATENATED MODULE: ./src/github/release-api.ts
@@ -732,8 +729,7 @@ function createReleaseApi(client, repo) {
  * Data calls (git-data.ts), the artifact calls and the PR comment go through it. Behind the
  * runner's proxy (HTTPS_PROXY, HTTP_PROXY, NO_PROXY, read as @actions/http-client reads them)
  * every request, the download's redirect to storage included, goes through that proxy
- * (proxy-fetch.ts); without one, through Node's own fetch, which starts far faster than the
- * proxy-capable client. Intervals are tunable so tests can run the same code with millisecond waits.
+ * (client-fetch.ts), with or without one through the same fetch. Intervals are tunable so tests can run the same code with millisecond waits.
  */
 
 
@@ -822,14 +818,14 @@ function createOctokitApi(target) {
         __webpack_require__.e(/* import() */ 561).then(__webpack_require__.bind(__webpack_require__, 5561)),
         Promise.all(/* import() */[__webpack_require__.e(251), __webpack_require__.e(735)]).then(__webpack_require__.bind(__webpack_require__, 9735)),
         Promise.all(/* import() */[__webpack_require__.e(251), __webpack_require__.e(856)]).then(__webpack_require__.bind(__webpack_require__, 6856)),
-        proxyFetch(target.baseUrl),
+        clientFetch(target.baseUrl),
     ]).then(([{ Octokit }, { retry }, { throttling }, fetch]) => {
         const Client = Octokit.plugin(honourRetryAfter(tuning, log), retry, throttling);
         return new Client({
             auth: target.token,
             baseUrl: target.baseUrl.replace(/\/+$/, ''),
             userAgent: 'bellgate',
-            ...(fetch === undefined ? {} : { request: { fetch } }),
+            request: { fetch },
             // 403 and 429 rate limits are waited out by honourRetryAfter, not by plugin-retry.
             retry: {
                 retries: tuning.retries,
