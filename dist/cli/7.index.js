@@ -729,7 +729,8 @@ function createReleaseApi(client, repo) {
  * Data calls (git-data.ts), the artifact calls and the PR comment go through it. Behind the
  * runner's proxy (HTTPS_PROXY, HTTP_PROXY, NO_PROXY, read as @actions/http-client reads them)
  * every request, the download's redirect to storage included, goes through that proxy
- * (client-fetch.ts), with or without one through the same fetch. Intervals are tunable so tests can run the same code with millisecond waits.
+ * (client-fetch.ts); without one, through the same fetch. Intervals are tunable so tests can run
+ * the same code with millisecond waits.
  */
 
 
