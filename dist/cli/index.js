@@ -14055,9 +14055,9 @@ function orderMetrics(metrics) {
 
 
 /**
- * The decision (README.md "How the decision works"): every metric of the run and
- * of the history is sorted (sortMetrics), put in its move group (formGroups) and taken apart into
- * the run's shared move and its own move (takeApart); the own moves get a noise model that borrows
+ * The decision (README.md "How the decision works"): every metric of the run and of the history
+ * is sorted (sortMetrics), put in its move group (formGroups) and taken apart into the run's
+ * shared move and its own move (takeApart); the own moves get a noise model that borrows
  * strength across metrics of one noise shape (noiseModel) and are scored against their predictive
  * Student-t (scoreMember); family control holds the chance of any false alarm in the run at the
  * budget (Holm by default) and each metric is decided (decide); each group's shared move is judged

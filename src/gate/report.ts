@@ -1,7 +1,8 @@
 /**
  * The report object: the gate's whole answer, which every renderer (text, markdown, json, html)
- * and the action read. Field names of the JSON report are part of the product (README.md documents them). The
- * gate gives numbers and reasons as data; the words are src/report's (reason.ts).
+ * and the action read. Field names of the JSON report (schema REPORT_SCHEMA) are part of the
+ * product: scripts read them. The gate gives numbers and reasons as data; the words are
+ * src/report's (reason.ts).
  */
 import type { Family, Tolerance, UnsettledPolicy, Worse } from '../config/types.js';
 
